@@ -1,0 +1,21 @@
+package org.bracewalk.boot;
+
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+
+/**
+ * The program's entry point. With arguments it runs the command line; the JavaFX app is started
+ * from here too, through a launcher that does not extend {@code Application}.
+ */
+public final class Main {
+  private Main() {}
+
+  public static void main(String[] args) {
+    PrintWriter out = new PrintWriter(System.out, true, StandardCharsets.UTF_8);
+    PrintWriter err = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
+    int code = Launcher.run(args, out, err, System.getenv());
+    out.flush();
+    err.flush();
+    System.exit(code);
+  }
+}

@@ -1,0 +1,24 @@
+package org.bracewalk.core.analysis;
+
+import java.util.List;
+
+/**
+ * The as-built state compared with the design.
+ *
+ * @param state the conservative verdict: panels not inspected count as missing
+ * @param unknownPanels how many panels nobody has looked at
+ * @param rigidIfUnknownSound the verdict with the uninspected panels counted as built to design
+ * @param extraBraces as-built members the design does not have (they count: they are there)
+ */
+public record AsBuiltAnalysis(
+    StateAnalysis state, int unknownPanels, boolean rigidIfUnknownSound, List<PlacedBrace> extraBraces) {
+
+  public AsBuiltAnalysis {
+    extraBraces = List.copyOf(extraBraces);
+  }
+
+  /** True when the verdict shown would change if the uninspected panels turned out sound. */
+  public boolean verdictDependsOnUninspected() {
+    return unknownPanels > 0 && state.rigid() != rigidIfUnknownSound;
+  }
+}
