@@ -1,0 +1,12 @@
+package org.bracewalk.ui.design;
+
+import org.bracewalk.core.model.PlaneDesign;
+
+/** Saves a plane's design as a new revision. */
+public interface DesignSaver {
+  /**
+   * Saves {@code design}; {@code note} says what changed (and, for a design that is not rigid, that
+   * the warning was seen). Returns the saved revision's label for the status line.
+   */
+  String save(PlaneDesign design, String note);
+}
