@@ -33,8 +33,9 @@ public final class PlaneGeometry {
     double availW = Math.max(1, width - leftMargin - margin);
     double availH = Math.max(1, height - 2 * margin);
     this.scale = Math.min(availW / totalW, availH / totalH);
-    this.originX = leftMargin;
-    this.baseY = margin + totalH * scale;
+    // centred in the box: the spare room goes equally to both sides
+    this.originX = leftMargin + (availW - totalW * scale) / 2;
+    this.baseY = margin + (availH - totalH * scale) / 2 + totalH * scale;
     this.lineX = new double[grid.bays() + 1];
     this.levelY = new double[grid.lifts() + 1];
     lineX[0] = originX;

@@ -85,7 +85,7 @@ public final class WalkViewModel {
   private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper(this, "canUndo");
   private final BooleanProperty readOnly = new SimpleBooleanProperty(this, "readOnly");
 
-  private final StringProperty defectType = new SimpleStringProperty(this, "defectType", "");
+  private final ObjectProperty<DefectKind> defect = new SimpleObjectProperty<>(this, "defect");
   private final StringProperty bowMm = new SimpleStringProperty(this, "bowMm", "");
   private final StringProperty note = new SimpleStringProperty(this, "note", "");
   private final ObservableList<Path> photos = FXCollections.observableArrayList();
@@ -276,7 +276,7 @@ public final class WalkViewModel {
   // ---- state ----------------------------------------------------------------------------------
 
   private Mark buildMark(PanelState state, PanelRef p) {
-    Integer bow = parseBow(bowMm.get());
+    Double bow = parseBow(bowMm.get());
     Brace seen = memberSeen.get() == null ? null : new Brace(memberSeen.get(), memberKind.get());
     if (state == PanelState.EXTRA && seen == null) {
       Brace d = design.braceAt(p);
@@ -291,32 +291,33 @@ public final class WalkViewModel {
       // an opening carries no design member; a member there is extra whatever the state says
       state = PanelState.EXTRA;
     }
-    return new Mark(state, seen, defectType.get(), bow, note.get(), List.copyOf(photos));
+    return new Mark(state, seen, defect.get(), bow, bow == null ? null : Mark.STANDARD_GAUGE_MM, note.get(), List.copyOf(photos));
   }
 
-  /** Parses the bow field; empty is no measurement. */
-  static Integer parseBow(String text) {
-    String t = text == null ? "" : text.strip();
+  /** Parses the bow field (millimetres over a 1 m straight edge, to 0.1 mm); empty is none. */
+  static Double parseBow(String text) {
+    String t = text == null ? "" : text.strip().replace(',', '.');
     if (t.isEmpty()) {
       return null;
     }
+    double v;
     try {
-      int v = Integer.parseInt(t);
-      if (v < 0 || v > 2000) {
-        throw new IllegalArgumentException(
-            "Bow: " + v + " mm is out of range. Type the bow in whole millimetres (0 to 2000), or"
-                + " leave the field empty.");
-      }
-      return v;
+      v = Double.parseDouble(t);
     } catch (NumberFormatException e) {
       throw new IllegalArgumentException(
-          "Bow: '" + t + "' is not a whole number of millimetres. Type a number such as 12, or"
+          "Bow: '" + t + "' is not a number of millimetres. Type a number such as 12 or 10.5, or"
               + " leave the field empty. Nothing was recorded.");
     }
+    if (!(v >= 0) || v > 2000) {
+      throw new IllegalArgumentException(
+          "Bow: " + t + " mm is out of range. Type the bow in millimetres (0 to 2000), or"
+              + " leave the field empty. Nothing was recorded.");
+    }
+    return Math.round(v * 10) / 10.0;
   }
 
   private void updateBowHint() {
-    Integer bow;
+    Double bow;
     try {
       bow = parseBow(bowMm.get());
     } catch (IllegalArgumentException e) {
@@ -329,9 +330,9 @@ public final class WalkViewModel {
     }
     // Bracing member over a 1 m gauge: 10 mm limit; over twice the limit, offload and isolate
     // (EN 15635 as reproduced in DGUV Information 208-043, see trade-facts.md).
-    if (bow <= 10) {
+    if (bow <= 10.0) {
       bowHint.set("Within 10 mm over 1 m: record and monitor (D).");
-    } else if (bow <= 20) {
+    } else if (bow <= 20.0) {
       bowHint.set("Over 10 mm: offload, repair within 4 weeks; counts as beyond use (U).");
     } else {
       bowHint.set("Over 20 mm: offload at once and isolate until repaired (U).");
@@ -339,7 +340,7 @@ public final class WalkViewModel {
   }
 
   private void clearDetails() {
-    defectType.set("");
+    defect.set(null);
     bowMm.set("");
     note.set("");
     photos.clear();
@@ -472,8 +473,8 @@ public final class WalkViewModel {
     if (m.bowMm() != null) {
       sb.append(", bow ").append(m.bowMm()).append(" mm");
     }
-    if (!m.defectType().isEmpty()) {
-      sb.append(", ").append(m.defectType());
+    if (m.defect() != null) {
+      sb.append(", ").append(m.defect().label());
     }
     if (!m.photos().isEmpty()) {
       sb.append(", ").append(m.photos().size()).append(m.photos().size() == 1 ? " photo" : " photos");
@@ -572,8 +573,8 @@ public final class WalkViewModel {
     return readOnly;
   }
 
-  public StringProperty defectTypeProperty() {
-    return defectType;
+  public ObjectProperty<DefectKind> defectProperty() {
+    return defect;
   }
 
   public StringProperty bowMmProperty() {

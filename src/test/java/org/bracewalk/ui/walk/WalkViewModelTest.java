@@ -112,15 +112,16 @@ class WalkViewModelTest {
     vm.bowMmProperty().set("12a");
     assertThat(vm.mark(PanelState.DAMAGED_EFFECTIVE)).isFalse();
     assertThat(recorder.rows).isEmpty();
-    assertThat(vm.errorProperty().get()).startsWith("Bow: '12a'");
+    assertThat(vm.errorProperty().get()).startsWith("Bow: '12a' is not a number");
     assertThat(vm.cursor()).isEqualTo(PanelRef.of(1, 1));
     vm.bowMmProperty().set("8");
-    vm.defectTypeProperty().set("bent");
+    vm.defectProperty().set(DefectKind.BENT);
     vm.noteProperty().set("near the base plate");
     assertThat(vm.mark(PanelState.DAMAGED_EFFECTIVE)).isTrue();
     Mark m = recorder.rows.get(0).mark();
-    assertThat(m.bowMm()).isEqualTo(8);
-    assertThat(m.defectType()).isEqualTo("bent");
+    assertThat(m.bowMm()).isEqualTo(8.0);
+    assertThat(m.gaugeLengthMm()).isEqualTo(1000);
+    assertThat(m.defect()).isEqualTo(DefectKind.BENT);
     assertThat(m.note()).isEqualTo("near the base plate");
     assertThat(vm.bowMmProperty().get()).isEmpty();
   }
