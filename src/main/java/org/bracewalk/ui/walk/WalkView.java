@@ -76,6 +76,7 @@ public final class WalkView extends BorderPane {
     alarm.setId("walk-alarm");
     HBox banner = new HBox(10, Widgets.key("!"), alarm);
     banner.getStyleClass().add("alarm-banner");
+    banner.setId("walk-alarm-banner");
     banner.setAlignment(Pos.CENTER_LEFT);
     banner.visibleProperty().bind(vm.alarmProperty().isNotEmpty());
     banner.managedProperty().bind(banner.visibleProperty());

@@ -25,7 +25,6 @@ import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
-import org.bracewalk.core.analysis.AsBuiltAnalysis;
 import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.core.analysis.StateAnalysis;
@@ -67,6 +66,13 @@ public final class WalkViewModel {
   private final boolean racking;
 
   private final Map<PanelRef, RecordedMark> latest = new LinkedHashMap<>();
+  /** The finding of each marked panel, kept in step with {@code latest}. */
+  private final Map<PanelRef, PanelFinding> findingMap = new HashMap<>();
+  /** Effective members, panels not inspected counted as missing (the conservative state). */
+  private final Map<PanelRef, Brace> conservativeMembers = new HashMap<>();
+  /** Effective members, panels not inspected taken as designed (what the marks so far prove). */
+  private final Map<PanelRef, Brace> seenMembers = new HashMap<>();
+  private boolean quietCursor;
   private final Deque<Step> undo = new ArrayDeque<>();
   private List<PanelRef> sequence;
 
@@ -74,7 +80,6 @@ public final class WalkViewModel {
   private final ReadOnlyObjectWrapper<PanelRef> cursor = new ReadOnlyObjectWrapper<>(this, "cursor");
   private final ReadOnlyObjectWrapper<PlanePicture> picture = new ReadOnlyObjectWrapper<>(this, "picture");
   private final ReadOnlyObjectWrapper<VerdictWords> verdict = new ReadOnlyObjectWrapper<>(this, "verdict");
-  private final ReadOnlyObjectWrapper<PlaneAnalysis> analysis = new ReadOnlyObjectWrapper<>(this, "analysis");
   private final ReadOnlyStringWrapper alarm = new ReadOnlyStringWrapper(this, "alarm", "");
   private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper(this, "status", "");
   private final ReadOnlyStringWrapper error = new ReadOnlyStringWrapper(this, "error", "");
@@ -94,7 +99,6 @@ public final class WalkViewModel {
   private final ObjectProperty<MemberKind> memberKind =
       new SimpleObjectProperty<>(this, "memberKind", MemberKind.RIGID);
   private Path photoFolder;
-  private boolean wasLost;
 
   /** One mark made in this session, so undo can correct it. */
   private record Step(PanelRef panel, RecordedMark before, RecordedMark made) {}
@@ -129,17 +133,25 @@ public final class WalkViewModel {
       design.grid().requireContains(r.panel());
       latest.put(r.panel(), r);
     }
+    PlaneGrid g = design.grid();
+    for (int i = 1; i <= g.lifts(); i++) {
+      for (int j = 1; j <= g.bays(); j++) {
+        PanelRef p = new PanelRef(i, j);
+        RecordedMark r = latest.get(p);
+        updatePanel(p, r == null ? null : r.mark().finding());
+      }
+    }
     order.set(WalkOrder.BAYS_UP_AND_DOWN);
     sequence = order.get().sequence(design.grid());
     order.addListener((obs, a, b) -> sequence = b.sequence(design.grid()));
     cursor.set(firstUnmarked());
     bowMm.addListener((obs, a, b) -> updateBowHint());
-    cursor.addListener((obs, a, b) -> refreshPicture());
+    cursor.addListener((obs, a, b) -> {
+      if (!quietCursor) {
+        refreshPicture();
+      }
+    });
     reanalyse();
-    wasLost = verdict.get().kind().lost();
-    if (wasLost) {
-      alarm.set(alarmText(verdict.get()));
-    }
   }
 
   // ---- commands -------------------------------------------------------------------------------
@@ -173,12 +185,18 @@ public final class WalkViewModel {
     }
     error.set("");
     latest.put(p, made);
+    updatePanel(p, m.finding());
     undo.push(new Step(p, before, made));
     canUndo.set(true);
     clearDetails();
     status.set("Saved " + p + ": " + describe(m) + " (record " + made.id() + ")");
+    quietCursor = true;
+    try {
+      advance();
+    } finally {
+      quietCursor = false;
+    }
     reanalyse();
-    advance();
     return true;
   }
 
@@ -206,9 +224,15 @@ public final class WalkViewModel {
     undo.pop();
     canUndo.set(!undo.isEmpty());
     latest.put(step.panel(), made);
+    updatePanel(step.panel(), back.finding());
     error.set("");
     status.set("Undone " + step.panel() + ": now " + describe(back) + " (correction record " + made.id() + ")");
-    cursor.set(step.panel());
+    quietCursor = true;
+    try {
+      cursor.set(step.panel());
+    } finally {
+      quietCursor = false;
+    }
     reanalyse();
     return true;
   }
@@ -372,63 +396,79 @@ public final class WalkViewModel {
 
   /** The finding of each panel with a mark (withdrawn marks excluded). */
   public Map<PanelRef, PanelFinding> findings() {
-    Map<PanelRef, PanelFinding> out = new HashMap<>();
-    for (RecordedMark r : latest.values()) {
-      if (r.mark().state() != PanelState.NOT_INSPECTED) {
-        out.put(r.panel(), r.mark().finding());
-      }
+    return Map.copyOf(findingMap);
+  }
+
+  /**
+   * Brings the finding and both member maps of one panel up to date. Follows the rule of {@link
+   * AsBuiltPlane#fromFindings} (a test holds the two together): sound or damaged-effective carries
+   * the member found or else the design's; any other inspected state only the member found; a panel
+   * not inspected nothing (conservative) or its design brace (as seen so far).
+   */
+  private void updatePanel(PanelRef p, PanelFinding f) {
+    if (f == null || f.state() == PanelState.NOT_INSPECTED) {
+      findingMap.remove(p);
+    } else {
+      findingMap.put(p, f);
     }
-    return out;
+    Brace designed = design.braceAt(p);
+    Brace member;
+    boolean inspected = f != null && f.state().inspected();
+    if (!inspected) {
+      member = null;
+    } else if (f.state() == PanelState.SOUND || f.state() == PanelState.DAMAGED_EFFECTIVE) {
+      member = f.memberFound() != null ? f.memberFound() : designed;
+    } else {
+      member = f.memberFound();
+    }
+    put(conservativeMembers, p, member);
+    put(seenMembers, p, inspected ? member : designed);
+  }
+
+  private static void put(Map<PanelRef, Brace> map, PanelRef p, Brace b) {
+    if (b == null) {
+      map.remove(p);
+    } else {
+      map.put(p, b);
+    }
+  }
+
+  /** The effective members as the conservative verdict counts them (for tests). */
+  Map<PanelRef, Brace> conservativeMembers() {
+    return Map.copyOf(conservativeMembers);
   }
 
   private void reanalyse() {
-    Map<PanelRef, PanelFinding> findings = findings();
-    PlaneAnalysis full = analyzer.analyse(design, AsBuiltPlane.fromFindings(design, findings));
-    AsBuiltAnalysis ab = full.asBuilt().orElseThrow();
-    StateAnalysis seen = ab.state();
-    if (ab.unknownPanels() > 0) {
-      seen = analyzer.analyseState(design.grid(), AsBuiltPlane.fromFindings(design, assumeUnseenAsDesigned(findings)).members());
-    }
-    analysis.set(full);
-    int count = 0;
-    for (PanelFinding f : findings.values()) {
-      if (f.state() != PanelState.NOT_INSPECTED) {
-        count++;
+    // Per keystroke only the two verdicts are needed (a fraction of a millisecond each on the
+    // member maps kept up to date panel by panel); the repair plan is worked out when asked for
+    // (fullAnalysis), as it costs far more.
+    StateAnalysis conservative = analyzer.analyseState(design.grid(), conservativeMembers);
+    int total = design.grid().panelCount();
+    int inspected = 0;
+    for (PanelFinding f : findingMap.values()) {
+      if (f.state().inspected()) {
+        inspected++;
       }
     }
+    int unknown = total - inspected;
+    StateAnalysis seen = unknown > 0 ? analyzer.analyseState(design.grid(), seenMembers) : conservative;
+    int count = findingMap.size();
     done.set(count);
-    int total = design.grid().panelCount();
     progressText.set(count + " of " + total + " panels");
     int repairCount = seen.rigid() ? 0 : Math.max(1, seen.degreesOfFreedom());
-    VerdictWords words = VerdictWords.of(design.grid(), seen, ab.unknownPanels(), ab.state().rigid(), repairCount);
+    VerdictWords words = VerdictWords.of(design.grid(), seen, unknown, conservative.rigid(), repairCount);
     verdict.set(words);
-    boolean lost = words.kind().lost();
-    if (lost) {
-      alarm.set(alarmText(words));
-    } else {
-      alarm.set("");
-    }
-    wasLost = lost;
+    alarm.set(words.kind().lost() ? alarmText(words) : "");
     lastSeen = seen;
     refreshPicture();
   }
 
-  private StateAnalysis lastSeen;
-
-  private Map<PanelRef, PanelFinding> assumeUnseenAsDesigned(Map<PanelRef, PanelFinding> findings) {
-    Map<PanelRef, PanelFinding> out = new HashMap<>(findings);
-    PlaneGrid g = design.grid();
-    for (int i = 1; i <= g.lifts(); i++) {
-      for (int j = 1; j <= g.bays(); j++) {
-        PanelRef p = new PanelRef(i, j);
-        PanelFinding f = out.get(p);
-        if (f == null || !f.state().inspected()) {
-          out.put(p, PanelFinding.of(PanelState.SOUND));
-        }
-      }
-    }
-    return out;
+  /** The engine's whole answer for the marks so far: verdicts, repair plan, restore list. */
+  public PlaneAnalysis fullAnalysis() {
+    return analyzer.analyse(design, AsBuiltPlane.fromFindings(design, findings()));
   }
+
+  private StateAnalysis lastSeen;
 
   private String alarmText(VerdictWords w) {
     return w.headline().toUpperCase(java.util.Locale.ROOT) + " — " + (title == null ? "" : title + ". ")
@@ -442,7 +482,7 @@ public final class WalkViewModel {
     picture.set(
         new PlanePicture(
             design,
-            findings(),
+            findingMap,
             true,
             s == null ? List.of() : s.blocks(),
             s == null ? Set.of() : Set.copyOf(s.criticalBraces()),
@@ -527,10 +567,6 @@ public final class WalkViewModel {
 
   public VerdictWords verdict() {
     return verdict.get();
-  }
-
-  public ReadOnlyObjectProperty<PlaneAnalysis> analysisProperty() {
-    return analysis.getReadOnlyProperty();
   }
 
   public ReadOnlyStringProperty alarmProperty() {

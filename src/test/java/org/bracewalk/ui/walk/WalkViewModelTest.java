@@ -194,6 +194,33 @@ class WalkViewModelTest {
   }
 
   @Test
+  void theMembersKeptPanelByPanelAreThoseTheModelDerivesFromTheFindings() {
+    // seeded random walks: the view model's incremental members must equal AsBuiltPlane's
+    java.util.Random rnd = new java.util.Random(20261201L);
+    PanelState[] states = {
+      PanelState.SOUND, PanelState.DAMAGED_EFFECTIVE, PanelState.DAMAGED_INEFFECTIVE,
+      PanelState.MISSING, PanelState.EXTRA, PanelState.NOT_REACHABLE
+    };
+    for (int round = 0; round < 20; round++) {
+      WalkViewModel vm = walk(List.of(), false);
+      for (int k = 0; k < 15; k++) {
+        vm.select(PanelRef.of(1 + rnd.nextInt(3), 1 + rnd.nextInt(3)));
+        PanelState st = states[rnd.nextInt(states.length)];
+        if (rnd.nextInt(4) == 0 || st == PanelState.EXTRA) {
+          vm.memberSeenProperty().set(Diagonal.values()[rnd.nextInt(3)]);
+        }
+        vm.mark(st);
+        if (rnd.nextInt(5) == 0) {
+          vm.undo();
+        }
+        vm.memberSeenProperty().set(null);
+        assertThat(vm.conservativeMembers())
+            .isEqualTo(org.bracewalk.core.model.AsBuiltPlane.fromFindings(design, vm.findings()).members());
+      }
+    }
+  }
+
+  @Test
   void theCursorStopsAtTheEdges() {
     WalkViewModel vm = walk(List.of(), false);
     vm.move(-1, -1);
