@@ -53,6 +53,9 @@ public record Inspection(
     if (status == InspectionStatus.FINALISED && finishedAt == null) {
       throw new IllegalArgumentException("a finalised inspection needs its finish time");
     }
+    if (status == InspectionStatus.OPEN && finishedAt != null) {
+      throw new IllegalArgumentException("an open inspection has no finish time yet");
+    }
     if (finishedAt != null && finishedAt.isBefore(startedAt)) {
       throw new IllegalArgumentException(
           "inspection finished at " + finishedAt + ", before it started at " + startedAt);
