@@ -143,6 +143,11 @@ public final class WalkBench {
         }
 
         @Override
+        public java.util.Optional<String> askText(String title, String message, String initial) {
+          return java.util.Optional.empty();
+        }
+
+        @Override
         public java.util.Optional<java.nio.file.Path> chooseSaveFile(String title, String suggestedName) {
           return java.util.Optional.empty();
         }

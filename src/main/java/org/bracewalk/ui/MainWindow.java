@@ -129,14 +129,27 @@ public final class MainWindow implements Navigator {
     crumbs.setText(s.crumbs());
     ToggleButton b = rail.get(id);
     b.setSelected(true);
-    for (ScreenId other : ScreenId.values()) {
-      rail.get(other).setDisable(other != ScreenId.OVERVIEW && !newSelection.hasPlane());
-    }
     if (help != null) {
       closeHelp();
     }
+    if (s.selection() != null) {
+      s.selection().addListener((o, before, now) -> {
+        selection = now == null ? Selection.NONE : now;
+        updateRail();
+      });
+      if (s.selection().getValue() != null) {
+        selection = s.selection().getValue();
+      }
+    }
+    updateRail();
     s.focus();
     onShown.accept(id);
+  }
+
+  private void updateRail() {
+    for (ScreenId other : ScreenId.values()) {
+      rail.get(other).setDisable(other != ScreenId.OVERVIEW && !selection.hasPlane());
+    }
   }
 
   private void onKey(KeyEvent e) {

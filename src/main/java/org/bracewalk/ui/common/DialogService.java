@@ -22,6 +22,9 @@ public interface DialogService {
   /** Lets the person pick photo files, starting in {@code folder} if given; empty when cancelled. */
   List<Path> choosePhotos(String title, Path folder);
 
+  /** Asks for a line of text (a name), offering {@code initial}; empty when cancelled. */
+  Optional<String> askText(String title, String message, String initial);
+
   /** Asks where to save a file; empty when cancelled. */
   Optional<Path> chooseSaveFile(String title, String suggestedName);
 }

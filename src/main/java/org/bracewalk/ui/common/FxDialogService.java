@@ -65,6 +65,16 @@ public final class FxDialogService implements DialogService {
   }
 
   @Override
+  public Optional<String> askText(String title, String message, String initial) {
+    javafx.scene.control.TextInputDialog d = new javafx.scene.control.TextInputDialog(initial);
+    d.initOwner(owner);
+    d.setTitle(title);
+    d.setHeaderText(title);
+    d.setContentText(message);
+    return d.showAndWait().map(String::strip).filter(t -> !t.isEmpty());
+  }
+
+  @Override
   public Optional<Path> chooseSaveFile(String title, String suggestedName) {
     FileChooser fc = new FileChooser();
     fc.setTitle(title);

@@ -5,8 +5,9 @@ import org.bracewalk.core.model.PlaneDesign;
 /** Saves a plane's design as a new revision. */
 public interface DesignSaver {
   /**
-   * Saves {@code design}; {@code note} says what changed (and, for a design that is not rigid, that
-   * the warning was seen). Returns the saved revision's label for the status line.
+   * Saves {@code design} by {@code author}; {@code note} says what changed and who approved it (and,
+   * for a design that is not rigid, that the warning was seen). Returns the saved revision's label
+   * for the status line.
    */
-  String save(PlaneDesign design, String note);
+  String save(PlaneDesign design, String author, String note);
 }

@@ -167,13 +167,16 @@ public final class DesignView extends BorderPane {
 
     CheckBox suggest = new CheckBox("show the braces that would make it rigid");
     suggest.selectedProperty().bindBidirectional(vm.showSuggestionProperty());
+    TextField author = new TextField();
+    author.setPromptText("author of this revision");
+    author.textProperty().bindBidirectional(vm.authorProperty());
     TextField note = new TextField();
     note.setPromptText("what changed, who approved it");
     note.textProperty().bindBidirectional(vm.noteProperty());
     Button save = new Button("Save design (Ctrl+S)");
     save.setId("design-save");
     save.setOnAction(e -> vm.save());
-    VBox saveBox = Widgets.box("Save", suggest, note, save);
+    VBox saveBox = Widgets.box("Save as a new revision", suggest, author, note, save);
 
     VBox side = new VBox(10, verdictBox, braceBox, fillBox, gridBox, saveBox);
     side.getStyleClass().add("side");

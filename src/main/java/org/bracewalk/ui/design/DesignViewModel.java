@@ -67,6 +67,7 @@ public final class DesignViewModel {
   private final ObjectProperty<MemberKind> kind = new SimpleObjectProperty<>(this, "kind", MemberKind.RIGID);
   private final BooleanProperty showSuggestion = new SimpleBooleanProperty(this, "showSuggestion", true);
   private final StringProperty note = new SimpleStringProperty(this, "note", "");
+  private final StringProperty author = new SimpleStringProperty(this, "author", "");
 
   private final IntegerProperty fillStep = new SimpleIntegerProperty(this, "fillStep", 3);
   private final IntegerProperty fillFirstBay = new SimpleIntegerProperty(this, "fillFirstBay", 1);
@@ -396,7 +397,7 @@ public final class DesignViewModel {
       n = (n.isEmpty() ? "" : n + " ") + "[saved although not rigid as designed; warning acknowledged]";
     }
     try {
-      String rev = saver.save(d, n);
+      String rev = saver.save(d, author.get() == null ? "" : author.get().strip(), n);
       dirty.set(false);
       status.set("Saved as " + rev + ".");
       return true;
@@ -495,6 +496,10 @@ public final class DesignViewModel {
 
   public StringProperty noteProperty() {
     return note;
+  }
+
+  public StringProperty authorProperty() {
+    return author;
   }
 
   public IntegerProperty fillStepProperty() {

@@ -1,5 +1,6 @@
 package org.bracewalk.ui.walk;
 
+import org.bracewalk.core.model.DefectType;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Objects;
@@ -22,7 +23,7 @@ import org.bracewalk.core.model.PanelState;
 public record Mark(
     PanelState state,
     Brace memberFound,
-    DefectKind defect,
+    DefectType defect,
     Double bowMm,
     Integer gaugeLengthMm,
     String note,

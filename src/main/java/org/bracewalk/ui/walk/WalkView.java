@@ -1,5 +1,6 @@
 package org.bracewalk.ui.walk;
 
+import org.bracewalk.core.model.DefectType;
 import java.util.List;
 import javafx.beans.binding.Bindings;
 import javafx.geometry.Insets;
@@ -171,9 +172,9 @@ public final class WalkView extends BorderPane {
     VBox member = Widgets.box("Member seen (keys / \\ X, . follows state)", seenRow, tension,
         Widgets.hint("Only when it differs: the extra member, or the half of a cross still there."));
 
-    ComboBox<DefectKind> defect = new ComboBox<>();
+    ComboBox<DefectType> defect = new ComboBox<>();
     defect.getItems().add(null);
-    defect.getItems().addAll(DefectKind.values());
+    defect.getItems().addAll(DefectType.values());
     defect.valueProperty().bindBidirectional(vm.defectProperty());
     defect.setId("walk-defect");
     defect.setMaxWidth(Double.MAX_VALUE);

@@ -1,5 +1,6 @@
 package org.bracewalk.ui.walk;
 
+import org.bracewalk.core.model.DefectType;
 import java.nio.file.Path;
 import java.util.ArrayDeque;
 import java.util.Deque;
@@ -90,7 +91,7 @@ public final class WalkViewModel {
   private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper(this, "canUndo");
   private final BooleanProperty readOnly = new SimpleBooleanProperty(this, "readOnly");
 
-  private final ObjectProperty<DefectKind> defect = new SimpleObjectProperty<>(this, "defect");
+  private final ObjectProperty<DefectType> defect = new SimpleObjectProperty<>(this, "defect");
   private final StringProperty bowMm = new SimpleStringProperty(this, "bowMm", "");
   private final StringProperty note = new SimpleStringProperty(this, "note", "");
   private final ObservableList<Path> photos = FXCollections.observableArrayList();
@@ -609,7 +610,7 @@ public final class WalkViewModel {
     return readOnly;
   }
 
-  public ObjectProperty<DefectKind> defectProperty() {
+  public ObjectProperty<DefectType> defectProperty() {
     return defect;
   }
 

@@ -15,6 +15,7 @@ public final class FakeDialogs implements DialogService {
   public final Deque<Boolean> confirmAnswers = new ArrayDeque<>();
   public final Deque<List<Path>> photoAnswers = new ArrayDeque<>();
   public final Deque<Optional<Path>> saveAnswers = new ArrayDeque<>();
+  public final Deque<Optional<String>> textAnswers = new ArrayDeque<>();
 
   @Override
   public boolean confirm(String title, String message, String confirmLabel) {
@@ -36,6 +37,12 @@ public final class FakeDialogs implements DialogService {
   public List<Path> choosePhotos(String title, Path folder) {
     asked.add(title);
     return photoAnswers.isEmpty() ? List.of() : photoAnswers.pop();
+  }
+
+  @Override
+  public Optional<String> askText(String title, String message, String initial) {
+    asked.add(title + ": " + message);
+    return textAnswers.isEmpty() ? Optional.empty() : textAnswers.pop();
   }
 
   @Override

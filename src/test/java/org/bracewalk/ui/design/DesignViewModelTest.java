@@ -22,7 +22,7 @@ class DesignViewModelTest {
   private final List<PlaneDesign> saved = new ArrayList<>();
   private final List<String> notes = new ArrayList<>();
   private final DesignSaver saver =
-      (d, note) -> {
+      (d, author, note) -> {
         saved.add(d);
         notes.add(note);
         return "revision " + saved.size();

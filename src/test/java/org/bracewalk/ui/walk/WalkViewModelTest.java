@@ -1,5 +1,6 @@
 package org.bracewalk.ui.walk;
 
+import org.bracewalk.core.model.DefectType;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Path;
@@ -115,13 +116,13 @@ class WalkViewModelTest {
     assertThat(vm.errorProperty().get()).startsWith("Bow: '12a' is not a number");
     assertThat(vm.cursor()).isEqualTo(PanelRef.of(1, 1));
     vm.bowMmProperty().set("8");
-    vm.defectProperty().set(DefectKind.BENT);
+    vm.defectProperty().set(DefectType.BENT);
     vm.noteProperty().set("near the base plate");
     assertThat(vm.mark(PanelState.DAMAGED_EFFECTIVE)).isTrue();
     Mark m = recorder.rows.get(0).mark();
     assertThat(m.bowMm()).isEqualTo(8.0);
     assertThat(m.gaugeLengthMm()).isEqualTo(1000);
-    assertThat(m.defect()).isEqualTo(DefectKind.BENT);
+    assertThat(m.defect()).isEqualTo(DefectType.BENT);
     assertThat(m.note()).isEqualTo("near the base plate");
     assertThat(vm.bowMmProperty().get()).isEmpty();
   }
