@@ -1,17 +1,11 @@
 package org.bracewalk.app.verdict;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.util.DefaultIndenter;
-import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
-import com.fasterxml.jackson.core.util.Separators;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.ObjectWriter;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.io.UncheckedIOException;
 import java.util.List;
+import org.bracewalk.app.json.PrettyJson;
 import org.bracewalk.core.analysis.AsBuiltAnalysis;
 import org.bracewalk.core.analysis.Block;
 import org.bracewalk.core.analysis.PlacedBrace;
@@ -41,19 +35,8 @@ public final class VerdictJson {
 
   private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
-  private final ObjectWriter writer;
 
-  public VerdictJson() {
-    DefaultIndenter indenter = new DefaultIndenter("  ", "\n");
-    Separators separators =
-        Separators.createDefaultInstance()
-            .withObjectFieldValueSpacing(Separators.Spacing.AFTER)
-            .withObjectEmptySeparator("")
-            .withArrayEmptySeparator("");
-    DefaultPrettyPrinter printer =
-        new DefaultPrettyPrinter(separators).withObjectIndenter(indenter).withArrayIndenter(indenter);
-    this.writer = new ObjectMapper().writer(printer);
-  }
+  public VerdictJson() {}
 
   /** The whole verdict on one plane: support, lifts, bays, design, asBuilt (if any), repair. */
   public ObjectNode verdict(PlaneAnalysis analysis) {
@@ -133,13 +116,9 @@ public final class VerdictJson {
     return o;
   }
 
-  /** Pretty-printed JSON (two-space indent, {@code "key": value}) ending in a newline. */
+  /** Pretty-printed JSON ending in a newline (see {@link PrettyJson}). */
   public String write(JsonNode node) {
-    try {
-      return writer.writeValueAsString(node) + "\n";
-    } catch (JsonProcessingException e) {
-      throw new UncheckedIOException(e);
-    }
+    return PrettyJson.write(node);
   }
 
   private static ObjectNode panel(PanelRef p) {

@@ -27,6 +27,18 @@ public record PanelRef(int lift, int bay) implements Comparable<PanelRef> {
     return ORDER.compare(this, other);
   }
 
+  /**
+   * Spreads panels over the whole int range. The record's default hash ({@code 31 * lift + bay})
+   * gives a 1000 x 1000 plane only about 32,000 distinct values, and {@code Map.copyOf} (used by
+   * the design and as-built records), which probes linearly, then takes minutes instead of
+   * milliseconds.
+   */
+  @Override
+  public int hashCode() {
+    int h = lift * 0x9E3779B1 + bay;
+    return h ^ (h >>> 16);
+  }
+
   @Override
   public String toString() {
     return "lift " + lift + ", bay " + bay;
