@@ -129,13 +129,16 @@ public final class VerdictText {
     }
     String atLeast = s.lossToleranceExact() ? "" : "at least ";
     if (s.lossTolerance() == 0) {
-      return atLeast + "0: losing one critical brace would break it";
+      return atLeast + "0: losing a single brace can break it";
+    }
+    if (s.lossTolerance() == 1) {
+      return atLeast + "1: any single brace may be lost and it still holds its shape";
     }
     return atLeast
         + s.lossTolerance()
         + ": any "
-        + Wording.plural(s.lossTolerance(), "brace", "braces")
-        + " may be lost and it still holds its shape";
+        + s.lossTolerance()
+        + " braces may be lost and it still holds its shape";
   }
 
   private static void blocks(StringBuilder out, StateAnalysis s, PlaneGrid grid) {
@@ -148,7 +151,8 @@ public final class VerdictText {
           .append(only.fixed() ? "held by the base" : "free-standing: it can move only as a whole")
           .append(" (")
           .append(extent(only))
-          .append(")\n");
+          .append(")")
+          .append(s.oneWayOnly() ? ", yet it can lean one way: its tension-only members go slack\n" : "\n");
       return;
     }
     out.append(
