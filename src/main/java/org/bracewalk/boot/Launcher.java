@@ -13,6 +13,7 @@ import org.bracewalk.app.verdict.VerdictText;
 import org.bracewalk.cli.BenchCommand;
 import org.bracewalk.cli.BracewalkCommand;
 import org.bracewalk.cli.CheckCommand;
+import org.bracewalk.cli.StoreCommands;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import picocli.CommandLine;
 import picocli.CommandLine.ParameterException;
@@ -36,8 +37,13 @@ public final class Launcher {
   }
 
   static CommandLine commandLine(Map<String, String> env) {
-    PlaneAnalyzer analyzer = PlaneAnalyzer.standard();
+    return commandLine(env, AppContext.standard());
+  }
+
+  /** The command line over a given context (tests pass their own clock). */
+  static CommandLine commandLine(Map<String, String> env, AppContext context) {
     CommandLine cli = new CommandLine(new BracewalkCommand());
+    PlaneAnalyzer analyzer = context.analyzer();
     cli.addSubcommand(
         "check",
         new CheckCommand(new CheckService(analyzer, new PanelMapParser()), new VerdictJson(), new VerdictText()));
@@ -54,6 +60,7 @@ public final class Launcher {
             new BenchFormat(),
             BenchPlan.quick(),
             BenchPlan.standard()));
+    StoreCommands.addTo(cli, context.cliContext(env));
     // Set after the sub-commands are added: picocli copies these settings down the hierarchy.
     cli.setExitCodeExceptionMapper(e -> e instanceof ParameterException ? BAD_INPUT : INTERNAL_ERROR);
     cli.setExecutionExceptionHandler(
@@ -65,5 +72,14 @@ public final class Launcher {
           return INTERNAL_ERROR;
         });
     return cli;
+  }
+
+  /** Runs one command over a given context; returns the exit code. */
+  static int run(
+      String[] args, PrintWriter out, PrintWriter err, Map<String, String> env, AppContext context) {
+    CommandLine cli = commandLine(env, context);
+    cli.setOut(out);
+    cli.setErr(err);
+    return cli.execute(args);
   }
 }
