@@ -160,7 +160,7 @@ class CheckCommandTest {
     assertThat(r.code()).isEqualTo(1);
     assertThat(r.out())
         .contains("Not inspected: 1 panel (lift 3 bay 3), counted as missing.")
-        .contains("this verdict depends on panels nobody has")
+        .contains("this verdict depends on a panel nobody has looked at")
         // the picture marks the uninspected panel's design brace as the repair
         .containsPattern("lift 3 +A \\.  A \\.  A\\+/");
     JsonNode v = JSON.readTree(run("check", design.toString(), a.toString(), "--format", "json").out());

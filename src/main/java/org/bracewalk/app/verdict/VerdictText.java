@@ -222,15 +222,25 @@ public final class VerdictText {
       sb.append(" (").append(list(unknown, Wording::panel)).append(")");
     }
     sb.append(", counted as missing. ");
+    boolean one = a.unknownPanels() == 1;
+    String they = one ? "it is" : "they are";
+    String them = one ? "it" : "them";
     if (a.verdictDependsOnUninspected()) {
-      sb.append(
-          "If they are sound the plane holds its shape: this verdict depends on panels nobody has"
-              + " looked at. Inspect them before relying on either verdict.");
+      sb.append("If ")
+          .append(they)
+          .append(" sound the plane holds its shape: this verdict depends on ")
+          .append(one ? "a panel" : "panels")
+          .append(" nobody has looked at. Inspect ")
+          .append(them)
+          .append(" before relying on either verdict.");
     } else if (a.state().rigid()) {
-      sb.append("The verdict does not depend on them.");
+      sb.append("The verdict does not depend on ").append(them).append(".");
     } else {
-      sb.append("Even if they are sound the plane does not hold its shape: the verdict does not"
-          + " depend on them.");
+      sb.append("Even if ")
+          .append(they)
+          .append(" sound the plane does not hold its shape: the verdict does not depend on ")
+          .append(them)
+          .append(".");
     }
     wrap(out, sb.toString(), "  ");
   }

@@ -109,7 +109,7 @@ class VerdictTextTest {
 
     assertThat(out)
         .contains("As built: holds its shape.")
-        .contains("Not inspected: 1 panel (lift 2 bay 3), counted as missing. The verdict does not depend on them.")
+        .contains("Not inspected: 1 panel (lift 2 bay 3), counted as missing. The verdict does not depend on it.")
         .contains("Extra braces (not in the design; they count because they are there): lift 1 bay 3 \\ rigid")
         .contains("  lift 2   .    /   -?\n")
         .contains("  lift 1  -/    .   *\\\n")
