@@ -61,6 +61,7 @@ public final class Launcher {
             BenchPlan.quick(),
             BenchPlan.standard()));
     StoreCommands.addTo(cli, context.cliContext(env));
+    cli.addSubcommand("snapshot", new SnapshotCommand(context, env));
     // Set after the sub-commands are added: picocli copies these settings down the hierarchy.
     cli.setExitCodeExceptionMapper(e -> e instanceof ParameterException ? BAD_INPUT : INTERNAL_ERROR);
     cli.setExecutionExceptionHandler(

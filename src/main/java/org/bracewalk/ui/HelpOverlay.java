@@ -43,9 +43,16 @@ final class HelpOverlay extends StackPane {
       GridPane lines = new GridPane();
       lines.setHgap(10);
       lines.setVgap(3);
+      ColumnConstraints keyCol = new ColumnConstraints(170, 170, 170);
+      ColumnConstraints whatCol = new ColumnConstraints();
+      whatCol.setHgrow(javafx.scene.layout.Priority.ALWAYS);
+      lines.getColumnConstraints().addAll(keyCol, whatCol);
       int r = 0;
       for (KeyHelp k : s.lines()) {
         Label key = Widgets.key(k.keys());
+        key.setWrapText(true);
+        key.setMinWidth(0);
+        key.setMaxWidth(170);
         Label what = Widgets.text(k.action());
         lines.addRow(r++, key, what);
       }
@@ -55,6 +62,7 @@ final class HelpOverlay extends StackPane {
     columns.add(right, 1, 0);
     ScrollPane scroll = new ScrollPane(columns);
     scroll.setFitToWidth(true);
+    VBox.setVgrow(scroll, javafx.scene.layout.Priority.ALWAYS);
     VBox card = new VBox(10, head, scroll);
     card.getStyleClass().add("help-card");
     setAlignment(Pos.CENTER);

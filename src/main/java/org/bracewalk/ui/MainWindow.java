@@ -75,6 +75,7 @@ public final class MainWindow implements Navigator {
     for (ScreenId id : ScreenId.values()) {
       ToggleButton b = new ToggleButton(id.title());
       b.setGraphic(Widgets.key("Ctrl+" + id.digit()));
+      b.setContentDisplay(javafx.scene.control.ContentDisplay.BOTTOM);
       b.getStyleClass().add("rail-button");
       b.setToggleGroup(railGroup);
       b.setId("rail-" + id.slug());

@@ -17,6 +17,8 @@ public final class Widgets {
   public static VBox box(String title, Node... content) {
     Label t = new Label(title);
     t.getStyleClass().add("box-title");
+    t.setWrapText(true);
+    t.setMinHeight(Region.USE_PREF_SIZE);
     VBox b = new VBox(t);
     b.getChildren().addAll(content);
     b.getStyleClass().add("box");
@@ -36,6 +38,7 @@ public final class Widgets {
     Label l = new Label(s);
     l.setWrapText(true);
     l.setMaxWidth(Double.MAX_VALUE);
+    l.setMinHeight(Region.USE_PREF_SIZE);
     return l;
   }
 
@@ -45,6 +48,7 @@ public final class Widgets {
     l.textProperty().bind(value);
     l.setWrapText(true);
     l.setMaxWidth(Double.MAX_VALUE);
+    l.setMinHeight(Region.USE_PREF_SIZE);
     l.getStyleClass().addAll(styles);
     return l;
   }

@@ -265,7 +265,7 @@ public final class DesignView extends BorderPane {
             KeyHelp.of("T", "rigid / tension-only"),
             KeyHelp.of("Space or Enter", "cycle the current panel (as a click does)"),
             KeyHelp.of("K, Z, A", "fill: brace every k bays, zig-zag every k bays, every panel"),
-            KeyHelp.of("Alt+L, Alt+A, Alt+W, Alt+H, Alt+P", "lifts, bays, widths, heights, support; Enter applies"),
+            KeyHelp.of("Alt+ L A W H P", "lifts, bays, widths, heights, support fields; Enter applies"),
             KeyHelp.of("Ctrl+S", "save the design (asks first if it is not rigid)")));
   }
 }

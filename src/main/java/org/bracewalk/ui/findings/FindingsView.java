@@ -124,7 +124,7 @@ public final class FindingsView extends BorderPane {
     VBox fin = Widgets.box("Finish", done, finalise,
         Widgets.hint("After finalising nothing in the inspection can change; the database refuses it too."));
 
-    VBox side = new VBox(10, verdict, repair, restore, found, docs, fin);
+    VBox side = new VBox(10, verdict, repair, docs, fin, restore, found);
     side.getStyleClass().add("side");
     return side;
   }

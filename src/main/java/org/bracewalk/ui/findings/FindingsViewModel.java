@@ -151,8 +151,11 @@ public final class FindingsViewModel {
     }
     restoreLines.clear();
     for (RestoreItem r : analysis.repair().restoreToDesign()) {
+      boolean unseen = ab.unknownPanels() > 0 && !findings.containsKey(r.panel())
+          || findings.containsKey(r.panel()) && !findings.get(r.panel()).state().inspected();
       restoreLines.add(r.panel() + ": " + r.missing().token() + " (" + r.missing().kind().label() + ") \u2014 "
-          + (r.neededForRigidity() ? "needed for rigidity" : "restores redundancy only"));
+          + (r.neededForRigidity() ? "needed for rigidity" : "restores redundancy only")
+          + (unseen ? " (not inspected yet: inspect first)" : ""));
     }
     if (restoreLines.isEmpty()) {
       restoreLines.add("Nothing: every design brace is there and effective.");

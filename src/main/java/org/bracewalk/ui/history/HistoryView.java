@@ -59,6 +59,7 @@ public final class HistoryView extends BorderPane {
         Widgets.box("Inspections, oldest first (Up / Down)", list),
         Widgets.box("What changed since the previous inspection (dashed frame, \u25B2 corner)", changes));
     side.getStyleClass().add("side");
+    side.setPrefWidth(400);
     setRight(side);
     addEventHandler(KeyEvent.KEY_PRESSED, e -> {
       if (list.isFocused()) {

@@ -46,11 +46,11 @@ public final class HistoryViewModel {
     StringBuilder line = new StringBuilder();
     for (PlaneHistory.Entry e : history.entries()) {
       VerdictKind k = kind(e);
-      entries.add("Inspection " + e.inspection().id() + "  " + WHEN.format(e.inspection().startedAt().atZone(zone))
+      entries.add("#" + e.inspection().id() + "  " + WHEN.format(e.inspection().startedAt().atZone(zone))
           + "  " + e.inspection().reason().label().replace('-', ' ')
           + (e.inspection().isFinalised() ? "" : " (open)")
           + "\n" + k.symbol() + " " + k.words() + " \u00b7 " + e.changes().size()
-          + (e.changes().size() == 1 ? " change" : " changes") + " since the previous");
+          + (e.changes().size() == 1 ? " change" : " changes"));
       if (line.length() > 0) {
         line.append("  \u2192  ");
       }

@@ -44,10 +44,10 @@ public final class SitesView extends BorderPane {
 
     table.setId("sites-table");
     table.setItems(vm.rows());
-    table.getColumns().add(column("Name", 300, this::name));
-    table.getColumns().add(column("What", 200, OverviewRow::kind));
-    table.getColumns().add(column("Latest verdict", 330, OverviewRow::verdictText));
-    table.getColumns().add(column("Last inspected", 150, r -> r.level() == OverviewRow.Level.STRUCTURE ? r.lastInspected() : ""));
+    table.getColumns().add(column("Name", 210, this::name));
+    table.getColumns().add(column("What", 130, r -> r.level() == OverviewRow.Level.SITE ? "" : r.kind()));
+    table.getColumns().add(column("Latest verdict", 300, OverviewRow::verdictText));
+    table.getColumns().add(column("Last inspected", 165, r -> r.level() == OverviewRow.Level.STRUCTURE ? r.lastInspected() : ""));
     TableColumn<OverviewRow, OverviewRow> due = new TableColumn<>("Next inspection due");
     due.setPrefWidth(250);
     due.setCellValueFactory(c -> new javafx.beans.property.SimpleObjectProperty<>(c.getValue()));
@@ -67,7 +67,8 @@ public final class SitesView extends BorderPane {
       }
     });
     table.getColumns().add(due);
-    table.getColumns().add(column("Interval", 130, OverviewRow::interval));
+    table.getColumns().add(column("Interval", 110, OverviewRow::interval));
+    table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY);
     table.setRowFactory(t -> new TableRow<>() {
       @Override
       protected void updateItem(OverviewRow r, boolean emptyRow) {
@@ -83,15 +84,13 @@ public final class SitesView extends BorderPane {
       }
     });
 
-    StackPane centre = new StackPane(table, emptyOffer());
+    javafx.scene.layout.HBox actions = side();
+    actions.visibleProperty().bind(vm.emptyProperty().not());
+    actions.managedProperty().bind(actions.visibleProperty());
+    VBox.setVgrow(table, Priority.ALWAYS);
+    VBox withActions = new VBox(10, table, actions);
+    StackPane centre = new StackPane(withActions, emptyOffer());
     setCenter(centre);
-    ScrollPane side = new ScrollPane(side());
-    side.setFitToWidth(true);
-    side.setPrefViewportWidth(400);
-    side.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
-    side.visibleProperty().bind(vm.emptyProperty().not());
-    side.managedProperty().bind(side.visibleProperty());
-    setRight(side);
     Label error = Widgets.text(vm.errorProperty(), "error-text");
     error.setId("sites-error");
     Label status = Widgets.text(vm.statusProperty());
@@ -144,7 +143,7 @@ public final class SitesView extends BorderPane {
     return box;
   }
 
-  private VBox side() {
+  private javafx.scene.layout.HBox side() {
     Label sel = Widgets.text(vm.selectionTextProperty());
     sel.setId("sites-selection");
     Button walk = wide("Walk-round (Enter, Ctrl+3)", () -> vm.open(ScreenId.WALK));
@@ -152,7 +151,15 @@ public final class SitesView extends BorderPane {
     Button design = wide("Design (Ctrl+2)", () -> vm.open(ScreenId.DESIGN));
     Button findings = wide("Findings and repair (Ctrl+4)", () -> vm.open(ScreenId.FINDINGS));
     Button history = wide("History (Ctrl+5)", () -> vm.open(ScreenId.HISTORY));
-    VBox open = Widgets.box("Open", sel, walk, design, findings, history);
+    GridPane buttons = new GridPane();
+    buttons.setHgap(8);
+    buttons.setVgap(8);
+    buttons.addRow(0, walk, design);
+    buttons.addRow(1, findings, history);
+    javafx.scene.layout.ColumnConstraints half = new javafx.scene.layout.ColumnConstraints();
+    half.setPercentWidth(50);
+    buttons.getColumnConstraints().addAll(half, half);
+    VBox open = Widgets.box("Open", sel, buttons);
 
     inspector.setId("start-inspector");
     inspector.textProperty().bindBidirectional(vm.inspectorNameProperty());
@@ -177,25 +184,28 @@ public final class SitesView extends BorderPane {
     });
     TextField competent = new TextField();
     competent.textProperty().bindBidirectional(vm.competentPersonProperty());
-    competent.setPromptText("US sites");
+    competent.setPromptText("if the site needs one");
     TextField shift = new TextField();
     shift.textProperty().bindBidirectional(vm.shiftProperty());
-    shift.setPromptText("US sites");
+    shift.setPromptText("shift");
     GridPane form = new GridPane();
     form.setHgap(8);
     form.setVgap(6);
-    form.addRow(0, mnemonic("_Inspector", inspector), inspector);
+    form.addRow(0, mnemonic("_Inspector", inspector), inspector, mnemonic("_Reason", reason), reason);
     form.addRow(1, mnemonic("_Position", position), position);
-    form.addRow(2, mnemonic("_Reason", reason), reason);
-    form.addRow(3, mnemonic("_Competent person", competent), competent);
-    form.addRow(4, mnemonic("S_hift", shift), shift);
+    form.addRow(2, mnemonic("_Competent person (US)", competent), competent, mnemonic("S_hift (US)", shift), shift);
     GridPane.setHgrow(inspector, Priority.ALWAYS);
     Button start = wide("Start inspection now (Ctrl+Enter)", vm::startInspection);
     start.setId("start-inspection");
     VBox startBox = Widgets.box("New inspection of the selected structure", form, start,
         Widgets.hint("Every mark you then make is saved the moment you make it."));
-    VBox side = new VBox(10, open, startBox);
-    side.getStyleClass().add("side");
+    form.getColumnConstraints().addAll(new javafx.scene.layout.ColumnConstraints(),
+        new javafx.scene.layout.ColumnConstraints(200, 300, Double.MAX_VALUE));
+    javafx.scene.layout.HBox.setHgrow(open, Priority.ALWAYS);
+    javafx.scene.layout.HBox.setHgrow(startBox, Priority.ALWAYS);
+    open.setPrefWidth(420);
+    startBox.setPrefWidth(560);
+    javafx.scene.layout.HBox side = new javafx.scene.layout.HBox(10, open, startBox);
     return side;
   }
 
@@ -208,6 +218,7 @@ public final class SitesView extends BorderPane {
 
   private static Label mnemonic(String text, Node target) {
     Label l = new Label(text);
+    l.setMinWidth(Label.USE_PREF_SIZE);
     l.setMnemonicParsing(true);
     l.setLabelFor(target);
     return l;

@@ -93,7 +93,7 @@ public final class SitesViewModel {
           dueText = "now";
         } else if (due.get().isBefore(today)) {
           dueState = OverviewRow.Due.OVERDUE;
-          dueText = due.get() + " (" + (today.toEpochDay() - due.get().toEpochDay()) + " days ago)";
+          dueText = "since " + due.get();
         } else if (due.get().isEqual(today)) {
           dueState = OverviewRow.Due.DUE_TODAY;
           dueText = due.get().toString();

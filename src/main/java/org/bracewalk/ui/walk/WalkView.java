@@ -56,26 +56,25 @@ public final class WalkView extends BorderPane {
     getStyleClass().add("screen");
     setId("walk-screen");
 
-    Label title = new Label("Walk-round: " + vm.title());
+    Label title = new Label("Walk-round");
     title.getStyleClass().add("screen-title");
+    title.setMinWidth(Label.USE_PREF_SIZE);
     Label progress = Widgets.text(vm.progressTextProperty(), "progress-text");
     progress.setId("walk-progress");
-    progress.setMaxWidth(Label.USE_PREF_SIZE);
+    progress.setMinWidth(Label.USE_PREF_SIZE);
+    progress.setWrapText(false);
     ProgressBar bar = new ProgressBar();
     bar.setPrefWidth(220);
     bar.progressProperty().bind(Bindings.createDoubleBinding(
         () -> vm.doneProperty().get() / (double) vm.total(), vm.doneProperty()));
-    ChoiceBox<WalkOrder> order = new ChoiceBox<>();
-    order.getItems().addAll(WalkOrder.values());
-    order.valueProperty().bindBidirectional(vm.orderProperty());
-    order.setFocusTraversable(true);
-    HBox top = Widgets.row(14, title, Widgets.grow(), progress, bar, new Label("Order:"), order);
+    HBox top = Widgets.row(14, title, progress, bar);
     top.setPadding(new Insets(0, 0, 8, 0));
     setTop(top);
 
     Label alarm = Widgets.text(vm.alarmProperty());
     alarm.setId("walk-alarm");
     HBox banner = new HBox(10, Widgets.key("!"), alarm);
+    HBox.setHgrow(alarm, Priority.ALWAYS);
     banner.getStyleClass().add("alarm-banner");
     banner.setId("walk-alarm-banner");
     banner.setAlignment(Pos.CENTER_LEFT);
@@ -177,6 +176,17 @@ public final class WalkView extends BorderPane {
     defect.getItems().addAll(DefectType.values());
     defect.valueProperty().bindBidirectional(vm.defectProperty());
     defect.setId("walk-defect");
+    defect.setConverter(new javafx.util.StringConverter<>() {
+      @Override
+      public String toString(DefectType d) {
+        return d == null ? "(none)" : d.label().replace('-', ' ');
+      }
+
+      @Override
+      public DefectType fromString(String t) {
+        return null;
+      }
+    });
     defect.setMaxWidth(Double.MAX_VALUE);
     TextField bow = new TextField();
     bow.setId("walk-bow");
@@ -216,7 +226,13 @@ public final class WalkView extends BorderPane {
     readOnly.visibleProperty().bind(vm.readOnlyProperty());
     readOnly.managedProperty().bind(readOnly.visibleProperty());
 
-    VBox side = new VBox(10, readOnly, verdict, marks, member, detailBox, undo);
+    ChoiceBox<WalkOrder> order = new ChoiceBox<>();
+    order.getItems().addAll(WalkOrder.values());
+    order.valueProperty().bindBidirectional(vm.orderProperty());
+    order.setFocusTraversable(false);
+    order.setMaxWidth(Double.MAX_VALUE);
+    VBox orderBox = Widgets.box("Walk order (O changes it)", order);
+    VBox side = new VBox(10, readOnly, verdict, marks, member, detailBox, orderBox, undo);
     side.getStyleClass().add("side");
     return side;
   }
@@ -312,7 +328,7 @@ public final class WalkView extends BorderPane {
             KeyHelp.of("O", "change the walk order"),
             KeyHelp.of("/  \\  X  .", "member seen: rising, falling, cross, follows the state"),
             KeyHelp.of("T", "member seen is tension-only / rigid"),
-            KeyHelp.of("Alt+D, Alt+B, Alt+O", "defect, bow, note fields; Enter or Esc back to the plane"),
+            KeyHelp.of("Alt+ D B O", "defect, bow, note fields; Enter or Esc back to the plane"),
             KeyHelp.of("F", "attach photos from a file or camera folder")));
   }
 }
