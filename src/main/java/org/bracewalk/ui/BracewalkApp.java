@@ -36,16 +36,22 @@ public final class BracewalkApp {
 
   /** Fills {@code stage} with the app and shows it, on the Sites screen. Call on the FX thread. */
   public MainWindow show(Stage stage) {
-    FxDialogService dialogs = new FxDialogService(stage);
+    return show(stage, new FxDialogService(stage));
+  }
+
+  /** As {@link #show(Stage)}, with the dialogs given (tests answer them). */
+  public MainWindow show(Stage stage, org.bracewalk.ui.common.DialogService dialogs) {
     AppScreens screens = new AppScreens(services, analyzer, clock, dialogs, new FxExecutor(), background, issuer);
     window = new MainWindow(screens, AppScreens.screenKeys(),
         "Database: " + services.store().location() + "   \u00b7   every mark is saved the moment it is made   \u00b7   F1: keys");
-    Scene scene = new Scene(window.root(), 1360, 860);
+    // fit the screen: a 1280 x 800 tablet is a target too
+    var bounds = javafx.stage.Screen.getPrimary().getVisualBounds();
+    Scene scene = new Scene(window.root(), Math.min(1360, bounds.getWidth()), Math.min(860, bounds.getHeight()));
     Stylesheet.apply(scene);
     stage.setTitle("Bracewalk \u2014 " + services.store().location());
     stage.setScene(scene);
-    stage.setMinWidth(1024);
-    stage.setMinHeight(700);
+    stage.setMinWidth(Math.min(1024, bounds.getWidth()));
+    stage.setMinHeight(Math.min(700, bounds.getHeight()));
     window.open(ScreenId.OVERVIEW, Selection.NONE);
     stage.show();
     return window;
