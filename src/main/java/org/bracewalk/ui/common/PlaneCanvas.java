@@ -17,7 +17,9 @@ public final class PlaneCanvas extends Region {
   private final ObjectProperty<PlanePicture> picture = new SimpleObjectProperty<>(this, "picture");
   private Consumer<PanelRef> onPanelPicked = p -> {};
   private PlaneGeometry geometry;
+  private PlanePicture painted;
   private long lastPaintNanos;
+  private boolean lastPaintPartial;
 
   public PlaneCanvas() {
     getChildren().add(canvas);
@@ -63,6 +65,7 @@ public final class PlaneCanvas extends Region {
     if (canvas.getWidth() != w || canvas.getHeight() != h) {
       canvas.setWidth(w);
       canvas.setHeight(h);
+      painted = null;
       redraw();
     }
   }
@@ -77,9 +80,61 @@ public final class PlaneCanvas extends Region {
     if (pic == null || w < 10 || h < 10) {
       g.clearRect(0, 0, w, h);
       geometry = null;
+      painted = null;
       return;
     }
-    geometry = PlanePainter.paint(g, pic, w, h);
+    java.util.Set<PanelRef> dirty = painted == null ? null : dirtyPanels(painted, pic);
+    if (dirty != null && geometry != null) {
+      PlanePainter.repaint(g, pic, geometry, dirty);
+      lastPaintPartial = true;
+    } else {
+      geometry = PlanePainter.paint(g, pic, w, h);
+      lastPaintPartial = false;
+    }
+    painted = pic;
     lastPaintNanos = System.nanoTime() - t0;
+  }
+
+  /** Whether the last redraw repainted only the panels that changed. */
+  public boolean lastPaintPartial() {
+    return lastPaintPartial;
+  }
+
+  /**
+   * The panels to repaint when only findings or the cursor changed since {@code before}; {@code
+   * null} when anything else changed (blocks, critical braces, repair, design), which needs a full
+   * redraw.
+   */
+  static java.util.Set<PanelRef> dirtyPanels(PlanePicture before, PlanePicture after) {
+    if (before.design() != after.design() && !before.design().equals(after.design())
+        || before.showFindings() != after.showFindings()
+        || !before.blocks().equals(after.blocks())
+        || !before.critical().equals(after.critical())
+        || !before.repair().equals(after.repair())
+        || !before.changed().equals(after.changed())) {
+      return null;
+    }
+    java.util.Set<PanelRef> dirty = new java.util.HashSet<>();
+    if (!java.util.Objects.equals(before.cursor(), after.cursor())) {
+      if (before.cursor() != null) {
+        dirty.add(before.cursor());
+      }
+      if (after.cursor() != null) {
+        dirty.add(after.cursor());
+      }
+    }
+    if (before.findings() != after.findings()) {
+      for (var e : after.findings().entrySet()) {
+        if (!e.getValue().equals(before.findings().get(e.getKey()))) {
+          dirty.add(e.getKey());
+        }
+      }
+      for (PanelRef p : before.findings().keySet()) {
+        if (!after.findings().containsKey(p)) {
+          dirty.add(p);
+        }
+      }
+    }
+    return dirty.size() > 24 ? null : dirty;
   }
 }

@@ -38,13 +38,19 @@ public final class PlaneGeometry {
     this.baseY = margin + (availH - totalH * scale) / 2 + totalH * scale;
     this.lineX = new double[grid.bays() + 1];
     this.levelY = new double[grid.lifts() + 1];
-    lineX[0] = originX;
+    // grid lines on whole pixels: crisp lines that a partial repaint redraws exactly (the
+    // rounding moves no line by more than half a pixel from its place to scale)
+    double x = originX;
+    lineX[0] = Math.round(x);
     for (int j = 1; j <= grid.bays(); j++) {
-      lineX[j] = lineX[j - 1] + grid.bayWidths().get(j - 1) * scale;
+      x += grid.bayWidths().get(j - 1) * scale;
+      lineX[j] = Math.round(x);
     }
-    levelY[0] = baseY;
+    double y = baseY;
+    levelY[0] = Math.round(y);
     for (int i = 1; i <= grid.lifts(); i++) {
-      levelY[i] = levelY[i - 1] - grid.liftHeights().get(i - 1) * scale;
+      y -= grid.liftHeights().get(i - 1) * scale;
+      levelY[i] = Math.round(y);
     }
   }
 

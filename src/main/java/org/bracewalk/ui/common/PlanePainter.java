@@ -56,57 +56,14 @@ public final class PlanePainter {
     SwayRegion sway = SwayRegion.of(grid, pic.blocks());
     double smallest = smallestPanel(geo);
     boolean badges = smallest >= 18;
-    for (PanelRef p : sway.shearing()) {
-      hatch(g, geo, p);
-    }
+    hatchAll(g, geo, sway);
     paintFrame(g, geo);
-    Map<PanelRef, PanelFinding> findings = pic.findings();
     for (int i = 1; i <= grid.lifts(); i++) {
       for (int j = 1; j <= grid.bays(); j++) {
-        PanelRef p = new PanelRef(i, j);
-        if (pic.design().isOpening(p)) {
-          opening(g, geo, p);
-          continue;
-        }
-        if (!pic.showFindings()) {
-          Brace b = pic.design().braceAt(p);
-          if (b != null) {
-            member(g, geo, p, b, PanelLook.SOUND);
-          }
-          continue;
-        }
-        PanelFinding f = findings.get(p);
-        PanelLook look = PanelLook.of(f == null ? null : f.state());
-        Brace designBrace = pic.design().braceAt(p);
-        Brace shown = pic.memberShown(p);
-        if (f != null && (f.state() == PanelState.MISSING || f.state() == PanelState.DAMAGED_INEFFECTIVE)
-            && designBrace != null) {
-          // the design member drawn in the state's style; a remaining member found drawn solid
-          member(g, geo, p, designBrace, look);
-          if (f.memberFound() != null) {
-            member(g, geo, p, f.memberFound(), PanelLook.SOUND);
-          }
-        } else if (shown != null) {
-          member(g, geo, p, shown, look);
-        }
-        if (badges && (f != null || designBrace != null)) {
-          badge(g, geo, p, look);
-        }
+        panel(g, geo, pic, new PanelRef(i, j), badges);
       }
     }
-    for (PanelRef p : pic.critical()) {
-      Brace b = pic.memberShown(p);
-      if (b != null) {
-        diamond(g, geo, p);
-      }
-    }
-    int n = 1;
-    for (RepairBrace r : pic.repair()) {
-      repair(g, geo, r, n++, badges || smallest >= 12);
-    }
-    for (PanelRef p : pic.changed()) {
-      changed(g, geo, p);
-    }
+    overlays(g, geo, pic, null, badges || smallest >= 12);
     if (labelled) {
       labels(g, geo, sway);
     }
@@ -114,6 +71,142 @@ public final class PlanePainter {
       cursor(g, geo, pic.cursor());
     }
     return geo;
+  }
+
+  /** The contents of one panel: opening, member(s) in the style of their state, badge. */
+  private static void panel(GraphicsContext g, PlaneGeometry geo, PlanePicture pic, PanelRef p, boolean badges) {
+    if (pic.design().isOpening(p)) {
+      opening(g, geo, p);
+      return;
+    }
+    if (!pic.showFindings()) {
+      Brace b = pic.design().braceAt(p);
+      if (b != null) {
+        member(g, geo, p, b, PanelLook.SOUND);
+      }
+      return;
+    }
+    PanelFinding f = pic.findings().get(p);
+    PanelLook look = PanelLook.of(f == null ? null : f.state());
+    Brace designBrace = pic.design().braceAt(p);
+    Brace shown = pic.memberShown(p);
+    if (f != null && (f.state() == PanelState.MISSING || f.state() == PanelState.DAMAGED_INEFFECTIVE)
+        && designBrace != null) {
+      // the design member drawn in the state's style; a remaining member found drawn solid
+      member(g, geo, p, designBrace, look);
+      if (f.memberFound() != null) {
+        member(g, geo, p, f.memberFound(), PanelLook.SOUND);
+      }
+    } else if (shown != null) {
+      member(g, geo, p, shown, look);
+    }
+    if (badges && (f != null || designBrace != null)) {
+      badge(g, geo, p, look);
+    }
+  }
+
+  /**
+   * Critical diamonds, numbered repairs, changed frames and the cursor, for the panels in {@code
+   * only} (every panel when {@code null}).
+   */
+  private static void overlays(
+      GraphicsContext g, PlaneGeometry geo, PlanePicture pic, java.util.Set<PanelRef> only, boolean repairLabels) {
+    for (PanelRef p : pic.critical()) {
+      if ((only == null || only.contains(p)) && pic.memberShown(p) != null) {
+        diamond(g, geo, p);
+      }
+    }
+    int n = 1;
+    for (RepairBrace r : pic.repair()) {
+      if (only == null || only.contains(r.panel())) {
+        repair(g, geo, r, n, repairLabels);
+      }
+      n++;
+    }
+    for (PanelRef p : pic.changed()) {
+      if (only == null || only.contains(p)) {
+        changed(g, geo, p);
+      }
+    }
+  }
+
+  /**
+   * Repaints only the panels in {@code dirty} (and what of their neighbours lies within a few
+   * pixels, where the cursor's brackets reach), on a canvas that already shows an earlier picture
+   * of the same plane, size, blocks, critical braces, repair and changes. Per mark only two or
+   * three panels change, so this is what keeps a large plane fast in the software renderer.
+   */
+  public static void repaint(
+      GraphicsContext g, PlanePicture pic, PlaneGeometry geo, java.util.Set<PanelRef> dirty) {
+    PlaneGrid grid = pic.grid();
+    double smallest = smallestPanel(geo);
+    boolean badges = smallest >= 18;
+    SwayRegion sway = SwayRegion.of(grid, pic.blocks());
+    double edge = 6; // the cursor's brackets reach this far past the plane's edge
+    for (PanelRef d : dirty) {
+      if (!grid.contains(d)) {
+        continue;
+      }
+      // the panel and its neighbours are wiped and drawn again whole: no clip (slow in software)
+      int i0 = Math.max(1, d.lift() - 1);
+      int i1 = Math.min(grid.lifts(), d.lift() + 1);
+      int j0 = Math.max(1, d.bay() - 1);
+      int j1 = Math.min(grid.bays(), d.bay() + 1);
+      double x0 = geo.lineX(j0 - 1) - (j0 == 1 ? edge : 0);
+      double x1 = geo.lineX(j1) + (j1 == grid.bays() ? edge : 0);
+      double y0 = geo.levelY(i1) - (i1 == grid.lifts() ? edge : 0);
+      double y1 = geo.levelY(i0 - 1) + (i0 == 1 ? edge + 2 : 0);
+      g.setFill(PAPER);
+      g.fillRect(x0, y0, x1 - x0, y1 - y0);
+      java.util.Set<PanelRef> near = new java.util.HashSet<>();
+      for (int i = i0; i <= i1; i++) {
+        for (int j = j0; j <= j1; j++) {
+          PanelRef p = new PanelRef(i, j);
+          near.add(p);
+          if (sway.isShearing(p)) {
+            hatchRect(g, geo.left(p), geo.top(p), geo.panelWidth(p), geo.panelHeight(p), geo.lineX(0));
+          }
+        }
+      }
+      paintFrameNear(g, geo, d);
+      for (PanelRef p : near) {
+        panel(g, geo, pic, p, badges);
+      }
+      overlays(g, geo, pic, near, badges || smallest >= 12);
+      if (pic.cursor() != null && near.contains(pic.cursor())) {
+        cursor(g, geo, pic.cursor());
+      }
+    }
+  }
+
+  /** The frame members (and ground) around one panel and its neighbours. */
+  private static void paintFrameNear(GraphicsContext g, PlaneGeometry geo, PanelRef d) {
+    PlaneGrid grid = geo.grid();
+    int j0 = Math.max(0, d.bay() - 2);
+    int j1 = Math.min(grid.bays(), d.bay() + 1);
+    int i0 = Math.max(0, d.lift() - 2);
+    int i1 = Math.min(grid.lifts(), d.lift() + 1);
+    g.setLineDashes();
+    g.setStroke(FRAME);
+    g.setLineWidth(2);
+    for (int j = j0; j <= j1; j++) {
+      g.strokeLine(geo.lineX(j), geo.levelY(i1), geo.lineX(j), geo.levelY(i0));
+    }
+    for (int i = i0; i <= i1; i++) {
+      g.strokeLine(geo.lineX(j0), geo.levelY(i), geo.lineX(j1), geo.levelY(i));
+    }
+    if (i0 == 0 && grid.support() == org.bracewalk.core.model.Support.PINNED_BASE) {
+      double bottom = geo.levelY(0);
+      g.setLineWidth(3);
+      g.strokeLine(geo.lineX(j0) - (j0 == 0 ? 6 : 0), bottom, geo.lineX(j1) + (j1 == grid.bays() ? 6 : 0), bottom);
+      g.setLineWidth(1);
+      double start = geo.lineX(0) - 4;
+      double from = geo.lineX(j0) - 8;
+      double x = start + Math.max(0, Math.ceil((from - start) / 8)) * 8;
+      for (; x < geo.lineX(j1) + 8 && x < geo.lineX(grid.bays()) + 6; x += 8) {
+        g.strokeLine(x, bottom + 1, x - 5, bottom + 7);
+      }
+    }
   }
 
   private static double smallestPanel(PlaneGeometry geo) {
@@ -132,7 +225,7 @@ public final class PlanePainter {
     PlaneGrid grid = geo.grid();
     g.setLineDashes();
     g.setStroke(FRAME);
-    g.setLineWidth(1.6);
+    g.setLineWidth(2);
     double top = geo.levelY(grid.lifts());
     double bottom = geo.levelY(0);
     for (int j = 0; j <= grid.bays(); j++) {
@@ -152,25 +245,61 @@ public final class PlanePainter {
     }
   }
 
-  private static void hatch(GraphicsContext g, PlaneGeometry geo, PanelRef p) {
-    double x0 = geo.left(p);
-    double y0 = geo.top(p);
-    double w = geo.panelWidth(p);
-    double h = geo.panelHeight(p);
+  /**
+   * Shades the shearing panels: a tint and thin, steep hatch lines (read as shading, never as a
+   * brace). Drawn per run of neighbouring panels in a lift, each line clipped by arithmetic: a clip
+   * per panel is very slow in the software renderer.
+   */
+  private static void hatchAll(GraphicsContext g, PlaneGeometry geo, SwayRegion sway) {
+    if (sway.isEmpty()) {
+      return;
+    }
+    PlaneGrid grid = geo.grid();
+    boolean[][] on = new boolean[grid.lifts() + 1][grid.bays() + 2];
+    for (PanelRef p : sway.shearing()) {
+      on[p.lift()][p.bay()] = true;
+    }
+    g.setLineDashes();
+    for (int i = 1; i <= grid.lifts(); i++) {
+      int j = 1;
+      while (j <= grid.bays()) {
+        if (!on[i][j]) {
+          j++;
+          continue;
+        }
+        int start = j;
+        while (j <= grid.bays() && on[i][j]) {
+          j++;
+        }
+        double x0 = geo.lineX(start - 1);
+        double x1 = geo.lineX(j - 1);
+        double yTop = geo.levelY(i);
+        double yBottom = geo.levelY(i - 1);
+        hatchRect(g, x0, yTop, x1 - x0, yBottom - yTop, geo.lineX(0));
+      }
+    }
+  }
+
+  private static void hatchRect(GraphicsContext g, double x0, double y0, double w, double h, double phaseX) {
     g.setFill(Color.web("#fde9c8"));
     g.fillRect(x0, y0, w, h);
-    g.save();
-    g.beginPath();
-    g.rect(x0, y0, w, h);
-    g.clip();
     g.setStroke(SWAY);
     g.setLineWidth(1);
-    g.setLineDashes();
-    for (double t = -h; t < w; t += 7) {
-      // thin, dense, steep lines: read as shading, never as a brace
-      g.strokeLine(x0 + t, y0 + h, x0 + t + h * 0.5, y0);
+    double run = h * 0.5; // each line rises h while moving right by h/2
+    g.beginPath();
+    // lines start on a 7 px pitch counted from phaseX, so neighbouring runs line up
+    double first = phaseX + Math.floor((x0 - run - phaseX) / 7) * 7 - x0;
+    for (double t = first; t < w; t += 7) {
+      // segment from (x0 + t, y0 + h) to (x0 + t + run, y0), cut to x0 .. x0 + w
+      double sa = Math.max(0, (0 - t) / run);
+      double sb = Math.min(1, (w - t) / run);
+      if (sa >= sb) {
+        continue;
+      }
+      g.moveTo(x0 + t + run * sa, y0 + h - h * sa);
+      g.lineTo(x0 + t + run * sb, y0 + h - h * sb);
     }
-    g.restore();
+    g.stroke();
   }
 
   /** Draws the member(s) of {@code b} in {@code p} in the style of {@code look}. */
@@ -386,10 +515,10 @@ public final class PlanePainter {
     g.strokeRect(x - 1, y - 1, w + 2, h + 2);
     double c = Math.min(12, Math.min(w, h) * 0.4);
     g.setLineWidth(4);
-    double x0 = x - 5;
-    double y0 = y - 5;
-    double x1 = x + w + 5;
-    double y1 = y + h + 5;
+    double x0 = x - 3;
+    double y0 = y - 3;
+    double x1 = x + w + 3;
+    double y1 = y + h + 3;
     g.strokeLine(x0, y0, x0 + c, y0);
     g.strokeLine(x0, y0, x0, y0 + c);
     g.strokeLine(x1, y0, x1 - c, y0);

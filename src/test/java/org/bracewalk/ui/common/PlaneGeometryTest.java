@@ -49,12 +49,15 @@ class PlaneGeometryTest {
   @Test
   void panelsAreDrawnToScale() {
     // bay 1 is 2.4 m, bay 2 is 1.2 m; lift 1 is 2.0 m, lift 2 is 1.0 m
+    // grid lines sit on whole pixels, so sizes are true to within a pixel
     assertThat(geo.panelWidth(new PanelRef(1, 1)))
-        .isCloseTo(2 * geo.panelWidth(new PanelRef(1, 2)), within(1e-9));
+        .isCloseTo(2 * geo.panelWidth(new PanelRef(1, 2)), within(2.0));
     assertThat(geo.panelHeight(new PanelRef(1, 1)))
-        .isCloseTo(2 * geo.panelHeight(new PanelRef(2, 1)), within(1e-9));
-    assertThat(geo.panelWidth(new PanelRef(1, 1)) / geo.panelHeight(new PanelRef(1, 1)))
-        .isCloseTo(2.4 / 2.0, within(1e-9));
+        .isCloseTo(2 * geo.panelHeight(new PanelRef(2, 1)), within(2.0));
+    assertThat(geo.panelWidth(new PanelRef(1, 1)))
+        .isCloseTo(2.4 * geo.scale(), within(1.0));
+    assertThat(geo.panelHeight(new PanelRef(1, 1)))
+        .isCloseTo(2.0 * geo.scale(), within(1.0));
   }
 
   @Test
