@@ -1,0 +1,25 @@
+package org.bracewalk.core.port.report;
+
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * The crew's repair order: the numbered actions in working order, each with the plane it is on
+ * (for the locator sketch). {@code planes} holds every plane an action names.
+ */
+public record RepairOrder(
+    ReportHeader header,
+    List<PlaneSection> planes,
+    List<RepairAction> actions,
+    RecordFingerprint fingerprint) {
+  public RepairOrder {
+    Objects.requireNonNull(header, "header");
+    Objects.requireNonNull(fingerprint, "fingerprint");
+    planes = List.copyOf(planes);
+    actions = List.copyOf(actions);
+  }
+
+  public DocumentStamp stamp() {
+    return new DocumentStamp(DocumentStamp.REPAIR_ORDER, header.inspectionId(), fingerprint);
+  }
+}
