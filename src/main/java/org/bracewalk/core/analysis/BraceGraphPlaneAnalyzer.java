@@ -1,25 +1,131 @@
 package org.bracewalk.core.analysis;
 
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 
+/**
+ * The brace-graph analysis of analysis.md on flat arrays (see {@link BraceGraph}). Verdict, blocks,
+ * critical braces and repair are linear or near-linear in lifts + bays + members; the exact loss
+ * tolerance of a free plane is a global minimum cut, O((m + n)³), computed up to {@value
+ * #EXACT_CUT_LIMIT} lifts + bays and bounded from below beyond.
+ */
 final class BraceGraphPlaneAnalyzer implements PlaneAnalyzer {
+  static final int EXACT_CUT_LIMIT = 600;
+
   @Override
   public StateAnalysis analyseState(PlaneGrid grid, Map<PanelRef, Brace> members) {
-    throw new UnsupportedOperationException("engine being written");
+    return analyse(BraceGraph.of(grid, members));
   }
 
   @Override
   public PlaneAnalysis analyse(PlaneDesign design) {
-    throw new UnsupportedOperationException("engine being written");
+    PlaneGrid grid = design.grid();
+    BraceGraph graph = BraceGraph.of(grid, design.braces());
+    StateAnalysis state = analyse(graph);
+    RepairPlan repair = RepairPlanner.plan(design, design.braces(), graph, false);
+    return new PlaneAnalysis(grid, state, Optional.empty(), repair);
   }
 
   @Override
   public PlaneAnalysis analyse(PlaneDesign design, AsBuiltPlane asBuilt) {
-    throw new UnsupportedOperationException("engine being written");
+    PlaneGrid grid = design.grid();
+    PlaneGrid found = asBuilt.grid();
+    if (found.lifts() != grid.lifts() || found.bays() != grid.bays()) {
+      throw new IllegalArgumentException(
+          "the as-built state has "
+              + found.lifts()
+              + " lifts x "
+              + found.bays()
+              + " bays but the design has "
+              + grid.lifts()
+              + " x "
+              + grid.bays());
+    }
+    StateAnalysis designState = analyse(BraceGraph.of(grid, design.braces()));
+    BraceGraph builtGraph = BraceGraph.of(grid, asBuilt.members());
+    StateAnalysis builtState = analyse(builtGraph);
+
+    boolean rigidIfSound = builtState.rigid();
+    if (!asBuilt.uninspected().isEmpty()) {
+      Map<PanelRef, Brace> optimistic = new HashMap<>(asBuilt.members());
+      for (PanelRef p : asBuilt.uninspected()) {
+        Brace b = design.braceAt(p);
+        if (b != null) {
+          optimistic.put(p, b);
+        }
+      }
+      rigidIfSound = isRigid(BraceGraph.of(grid, optimistic));
+    }
+    List<PlacedBrace> extras = new ArrayList<>();
+    for (Map.Entry<PanelRef, Brace> e : new TreeMap<>(asBuilt.members()).entrySet()) {
+      Brace extra = PanelMatch.extra(design.braceAt(e.getKey()), e.getValue());
+      if (extra != null) {
+        extras.add(new PlacedBrace(e.getKey(), extra));
+      }
+    }
+    AsBuiltAnalysis built =
+        new AsBuiltAnalysis(builtState, asBuilt.uninspected().size(), rigidIfSound, extras);
+    RepairPlan repair = RepairPlanner.plan(design, asBuilt.members(), builtGraph, true);
+    return new PlaneAnalysis(grid, designState, Optional.of(built), repair);
+  }
+
+  private static boolean isRigid(BraceGraph g) {
+    return g.hasTension() ? g.strongComponentCount() == 1 : g.components(false).count() == 1;
+  }
+
+  private static StateAnalysis analyse(BraceGraph g) {
+    BraceGraph.UnionFind uf = g.components(false);
+    int dof = uf.count() - 1;
+    boolean rigid = dof == 0 && (!g.hasTension() || g.strongComponentCount() == 1);
+    boolean oneWay = dof == 0 && !rigid;
+    List<PanelRef> critical = new ArrayList<>(g.panelsOf(g.bridges(false)));
+    critical.sort(Comparator.naturalOrder());
+    int tolerance = -1;
+    boolean exact = true;
+    if (rigid) {
+      BraceGraph.Connectivity c = g.rigidEdgeConnectivity(EXACT_CUT_LIMIT);
+      tolerance = Math.max(0, c.value() - 1);
+      exact = c.exact();
+    }
+    return new StateAnalysis(rigid, dof, oneWay, tolerance, exact, critical, blocks(g, uf));
+  }
+
+  private static List<Block> blocks(BraceGraph g, BraceGraph.UnionFind uf) {
+    Map<Integer, List<Integer>> lifts = new HashMap<>();
+    Map<Integer, List<Integer>> bays = new HashMap<>();
+    List<Integer> roots = new ArrayList<>();
+    for (int v = 0; v < g.lifts + g.bays; v++) {
+      int r = uf.find(v);
+      if (!lifts.containsKey(r)) {
+        lifts.put(r, new ArrayList<>());
+        bays.put(r, new ArrayList<>());
+        roots.add(r);
+      }
+      if (v < g.lifts) {
+        lifts.get(r).add(v + 1);
+      } else {
+        bays.get(r).add(v - g.lifts + 1);
+      }
+    }
+    int groundRoot = g.pinned ? uf.find(g.ground) : -1;
+    List<Block> out = new ArrayList<>();
+    for (int r : roots) {
+      out.add(new Block(lifts.get(r), bays.get(r), r == groundRoot));
+    }
+    out.sort(
+        Comparator.comparing((Block b) -> !b.fixed())
+            .thenComparing(b -> b.lifts().isEmpty())
+            .thenComparingInt(b -> b.lifts().isEmpty() ? b.bays().get(0) : b.lifts().get(0)));
+    return out;
   }
 }
