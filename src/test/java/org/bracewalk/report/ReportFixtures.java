@@ -251,7 +251,7 @@ final class ReportFixtures {
   }
 
   static RepairOrder order() {
-    return new RepairOrder(header(true, LengthUnits.METRIC, "scaffold"), List.of(facade(), plan()),
+    return new RepairOrder(header(true, LengthUnits.METRIC, "scaffold"), INSPECTED, List.of(facade(), plan()),
         actions(), fingerprint());
   }
 

@@ -1,19 +1,23 @@
 package org.bracewalk.core.port.report;
 
+import java.time.Instant;
 import java.util.List;
 import java.util.Objects;
 
 /**
  * The crew's repair order: the numbered actions in working order, each with the plane it is on
- * (for the locator sketch). {@code planes} holds every plane an action names.
+ * (for the locator sketch). {@code planes} holds every plane an action names; {@code inspectedAt}
+ * is when the inspection the order follows from was made.
  */
 public record RepairOrder(
     ReportHeader header,
+    Instant inspectedAt,
     List<PlaneSection> planes,
     List<RepairAction> actions,
     RecordFingerprint fingerprint) {
   public RepairOrder {
     Objects.requireNonNull(header, "header");
+    Objects.requireNonNull(inspectedAt, "inspectedAt");
     Objects.requireNonNull(fingerprint, "fingerprint");
     planes = List.copyOf(planes);
     actions = List.copyOf(actions);
