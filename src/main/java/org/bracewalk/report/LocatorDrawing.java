@@ -4,8 +4,8 @@ import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfTemplate;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
-import org.bracewalk.core.port.report.RepairAction;
-import org.bracewalk.core.port.report.RepairActionType;
+import org.bracewalk.core.port.report.RepairStep;
+import org.bracewalk.core.port.report.RepairStepKind;
 
 /**
  * A small elevation of a plane, to scale, with the panel of one action filled and ringed (or, to
@@ -15,7 +15,7 @@ final class LocatorDrawing {
   private LocatorDrawing() {}
 
   /** A vector form of {@code width} by {@code height} points showing where {@code a} is. */
-  static PdfTemplate draw(PdfContentByte parent, PlaneGrid g, RepairAction a, float width,
+  static PdfTemplate draw(PdfContentByte parent, PlaneGrid g, RepairStep a, float width,
       float height) {
     PdfTemplate t = parent.createTemplate(width, height);
     int m = g.lifts();
@@ -36,7 +36,7 @@ final class LocatorDrawing {
     for (int i = 1; i <= m; i++) {
       ys[i] = ys[i - 1] + (float) (g.liftHeights().get(i - 1) * s);
     }
-    if (a.type() == RepairActionType.TAKE_OUT_OF_SERVICE) {
+    if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE) {
       for (int lift : a.lifts()) {
         if (lift >= 1 && lift <= m) {
           Glyphs.hatch(t, xs[0], ys[lift - 1], xs[n] - xs[0], ys[lift] - ys[lift - 1],
@@ -60,7 +60,7 @@ final class LocatorDrawing {
       t.setLineWidth(0.9f);
       Glyphs.line(t, xs[0] - 2, ys[0], xs[n] + 2, ys[0]);
     }
-    if (a.type() != RepairActionType.TAKE_OUT_OF_SERVICE) {
+    if (a.type() != RepairStepKind.TAKE_OUT_OF_SERVICE) {
       int i = a.panel().lift();
       int j = a.panel().bay();
       if (i <= m && j <= n) {

@@ -20,9 +20,9 @@ import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.core.port.RepairOrderRenderer;
 import org.bracewalk.core.port.report.PlaneSection;
-import org.bracewalk.core.port.report.RepairAction;
-import org.bracewalk.core.port.report.RepairOrder;
-import org.bracewalk.core.port.report.RepairPriority;
+import org.bracewalk.core.port.report.RepairStep;
+import org.bracewalk.core.port.report.RepairOrderContent;
+import org.bracewalk.core.port.report.RepairUrgency;
 import org.bracewalk.core.port.report.ReportHeader;
 
 /**
@@ -40,7 +40,7 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
   }
 
   @Override
-  public void renderRepairOrder(RepairOrder order, OutputStream out) throws IOException {
+  public void renderRepairOrder(RepairOrderContent order, OutputStream out) throws IOException {
     Templates t = Templates.load(source, language);
     ReportHeader h = order.header();
     Wording w = new Wording(t, h);
@@ -48,7 +48,7 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
     for (PlaneSection p : order.planes()) {
       grids.put(p.name(), p.design().grid());
     }
-    for (RepairAction a : order.actions()) {
+    for (RepairStep a : order.actions()) {
       if (!grids.containsKey(a.plane())) {
         throw new RenderingException(
             "repair order action " + a.number() + " names plane '" + a.plane()
@@ -79,9 +79,9 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
         doc.add(pdf.para(w.text("order.none"), 10f));
       } else {
         long rigidity = order.actions().stream()
-            .filter(a -> a.priority() == RepairPriority.ISOLATE
-                || a.priority() == RepairPriority.NEEDED_FOR_RIGIDITY)
-            .mapToInt(RepairAction::number).max().orElse(0);
+            .filter(a -> a.priority() == RepairUrgency.ISOLATE
+                || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY)
+            .mapToInt(RepairStep::number).max().orElse(0);
         doc.add(pdf.para(rigidity == 0
             ? w.format("order.intro.plain", "count", order.actions().size())
             : w.format("order.intro", "count", order.actions().size(), "rigidity", rigidity), 9f));
@@ -90,7 +90,7 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
         for (String k : new String[] {"number", "where", "what", "locator", "done"}) {
           table.addCell(pdf.headCell(w.text("order.col." + k)));
         }
-        for (RepairAction a : order.actions()) {
+        for (RepairStep a : order.actions()) {
           row(table, writer, pdf, w, a, grids.get(a.plane()));
         }
         doc.add(table);
@@ -111,10 +111,10 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
     out.write(done);
   }
 
-  private static void row(PdfPTable table, PdfWriter writer, Pdf pdf, Wording w, RepairAction a,
+  private static void row(PdfPTable table, PdfWriter writer, Pdf pdf, Wording w, RepairStep a,
       PlaneGrid grid) throws DocumentException {
-    boolean urgent = a.priority() == RepairPriority.ISOLATE
-        || a.priority() == RepairPriority.NEEDED_FOR_RIGIDITY;
+    boolean urgent = a.priority() == RepairUrgency.ISOLATE
+        || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY;
     Font f = urgent ? pdf.boldFont(8.5f, Palette.LOST) : pdf.font(8.5f);
     PdfPCell number = pdf.cell(String.valueOf(a.number()), pdf.boldFont(13f));
     number.setHorizontalAlignment(Element.ALIGN_CENTER);

@@ -28,14 +28,14 @@ import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.core.port.ReportRenderer;
 import org.bracewalk.core.port.report.Finding;
-import org.bracewalk.core.port.report.InspectionReport;
+import org.bracewalk.core.port.report.ReportContent;
 import org.bracewalk.core.port.report.Particular;
-import org.bracewalk.core.port.report.Photo;
+import org.bracewalk.core.port.report.FindingPhoto;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.PlaneVerdict;
-import org.bracewalk.core.port.report.RepairAction;
-import org.bracewalk.core.port.report.RepairActionType;
-import org.bracewalk.core.port.report.RepairPriority;
+import org.bracewalk.core.port.report.RepairStep;
+import org.bracewalk.core.port.report.RepairStepKind;
+import org.bracewalk.core.port.report.RepairUrgency;
 import org.bracewalk.core.port.report.ReportHeader;
 import org.bracewalk.core.port.report.SectionDigest;
 
@@ -60,7 +60,7 @@ public final class PdfReportRenderer implements ReportRenderer {
   }
 
   @Override
-  public void renderReport(InspectionReport report, OutputStream out) throws IOException {
+  public void renderReport(ReportContent report, OutputStream out) throws IOException {
     Templates t = Templates.load(source, language);
     ReportHeader header = report.header();
     Wording w = new Wording(t, header);
@@ -85,13 +85,13 @@ public final class PdfReportRenderer implements ReportRenderer {
 
   /** One report being laid out. */
   private static final class Body {
-    private final InspectionReport r;
+    private final ReportContent r;
     private final Wording w;
     private final Pdf pdf;
     private final Document doc = new Document(PageSize.A4, 40, 40, 42, 50);
     private PdfWriter writer;
 
-    Body(InspectionReport r, Wording w, Pdf pdf) {
+    Body(ReportContent r, Wording w, Pdf pdf) {
       this.r = r;
       this.w = w;
       this.pdf = pdf;
@@ -298,8 +298,8 @@ public final class PdfReportRenderer implements ReportRenderer {
         if (plane.analysis().repair().possible()) {
           List<Integer> numbers = r.actions().stream()
               .filter(a -> a.plane().equals(plane.name())
-                  && a.priority() == RepairPriority.NEEDED_FOR_RIGIDITY)
-              .map(RepairAction::number).toList();
+                  && a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY)
+              .map(RepairStep::number).toList();
           doc.add(pdf.para(w.format("plane.repair", "count", plane.analysis().repair().minimum(),
               "actions", Wording.ranges(numbers)), 8.5f));
         } else {
@@ -397,12 +397,12 @@ public final class PdfReportRenderer implements ReportRenderer {
       }
     }
 
-    private PdfPCell photos(List<Photo> photos) {
+    private PdfPCell photos(List<FindingPhoto> photos) {
       if (photos.isEmpty()) {
         return pdf.cell(w.text("findings.no-photo"), pdf.font(7.5f));
       }
       PdfPCell c = pdf.cell(new Phrase(""));
-      for (Photo ph : photos) {
+      for (FindingPhoto ph : photos) {
         try {
           Image img = Image.getInstance(ph.data());
           img.scaleToFit(60f, 45f);
@@ -430,9 +430,9 @@ public final class PdfReportRenderer implements ReportRenderer {
       for (String k : new String[] {"number", "location", "action", "member", "when"}) {
         t.addCell(pdf.headCell(w.text("repairs.col." + k)));
       }
-      for (RepairAction a : r.actions()) {
-        boolean urgent = a.priority() == RepairPriority.ISOLATE
-            || a.priority() == RepairPriority.NEEDED_FOR_RIGIDITY;
+      for (RepairStep a : r.actions()) {
+        boolean urgent = a.priority() == RepairUrgency.ISOLATE
+            || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY;
         Font f = urgent ? pdf.boldFont(8f, Palette.LOST) : pdf.font(8f);
         t.addCell(pdf.cell(String.valueOf(a.number()), pdf.boldFont(8f)));
         t.addCell(pdf.cell(location(w, a), f));
@@ -503,27 +503,27 @@ public final class PdfReportRenderer implements ReportRenderer {
     }
   }
 
-  static String location(Wording w, RepairAction a) {
-    if (a.type() == RepairActionType.TAKE_OUT_OF_SERVICE && a.lifts().size() == 1) {
+  static String location(Wording w, RepairStep a) {
+    if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE && a.lifts().size() == 1) {
       return w.format("repairs.location.lift", "plane", a.plane(), "lift", a.lifts().get(0));
     }
-    if (a.type() == RepairActionType.TAKE_OUT_OF_SERVICE) {
+    if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE) {
       return w.format("repairs.location.lifts", "plane", a.plane(), "lifts", Wording.ranges(a.lifts()));
     }
     return w.format("repairs.location", "plane", a.plane(), "lift", a.panel().lift(), "bay",
         a.panel().bay());
   }
 
-  static String priority(Wording w, RepairAction a) {
+  static String priority(Wording w, RepairStep a) {
     String due = a.dueDate() == null ? w.text("list.none") : w.date(a.dueDate());
     return w.format("priority." + a.priority().code(), "due", due);
   }
 
   /** The action numbers that concern each panel, per plane (taking out of service excluded). */
-  static Map<String, Map<PanelRef, List<Integer>>> actionsAt(List<RepairAction> actions) {
+  static Map<String, Map<PanelRef, List<Integer>>> actionsAt(List<RepairStep> actions) {
     Map<String, Map<PanelRef, List<Integer>>> out = new HashMap<>();
-    for (RepairAction a : actions) {
-      if (a.type() == RepairActionType.TAKE_OUT_OF_SERVICE) {
+    for (RepairStep a : actions) {
+      if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE) {
         continue;
       }
       out.computeIfAbsent(a.plane(), k -> new HashMap<>())

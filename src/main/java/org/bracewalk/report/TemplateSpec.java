@@ -7,8 +7,8 @@ import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.port.report.Particular;
 import org.bracewalk.core.port.report.PlaneVerdict;
 import org.bracewalk.core.port.report.RackDamageLevel;
-import org.bracewalk.core.port.report.RepairActionType;
-import org.bracewalk.core.port.report.RepairPriority;
+import org.bracewalk.core.port.report.RepairStepKind;
+import org.bracewalk.core.port.report.RepairUrgency;
 
 /**
  * Every key the documents use and the placeholders each may contain. A template file must have
@@ -170,10 +170,10 @@ final class TemplateSpec {
     k.put("repairs.location.lifts", Set.of("plane", "lifts"));
     k.put("repairs.location.lift", Set.of("plane", "lift"));
     k.put("repairs.deviation", Set.of());
-    for (RepairActionType a : RepairActionType.values()) {
+    for (RepairStepKind a : RepairStepKind.values()) {
       k.put("action." + a.code(), Set.of());
     }
-    for (RepairPriority p : RepairPriority.values()) {
+    for (RepairUrgency p : RepairUrgency.values()) {
       k.put("priority." + p.code(), Set.of("due"));
     }
     for (String d : new String[] {"rising", "falling", "both"}) {

@@ -16,8 +16,8 @@ import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
 import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.core.port.report.DocumentStamp;
-import org.bracewalk.core.port.report.RepairAction;
-import org.bracewalk.core.port.report.RepairOrder;
+import org.bracewalk.core.port.report.RepairStep;
+import org.bracewalk.core.port.report.RepairOrderContent;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -32,7 +32,7 @@ class PdfRepairOrderRendererTest {
     Files.write(dir.resolve("fixture-repair-order.pdf"), pdf);
   }
 
-  static byte[] render(RepairOrder o) throws IOException {
+  static byte[] render(RepairOrderContent o) throws IOException {
     ByteArrayOutputStream out = new ByteArrayOutputStream();
     new PdfRepairOrderRenderer(TemplateSource.packed(), "en").renderRepairOrder(o, out);
     return out.toByteArray();
@@ -42,7 +42,7 @@ class PdfRepairOrderRendererTest {
   void everyActionIsListedInOrderWithWhereAndWhatToFit() throws IOException {
     String text = PdfReportRendererTest.flat(String.join("\n", PdfReportRendererTest.pageTexts(pdf)));
     int last = -1;
-    for (RepairAction a : ReportFixtures.actions()) {
+    for (RepairStep a : ReportFixtures.actions()) {
       String where = a.lifts().size() == 1 && a.type().code().equals("out-of-service")
           ? a.plane() + ", lift " + a.lifts().get(0) + ", every bay"
           : a.plane() + ", lift " + a.panel().lift() + ", bay " + a.panel().bay();
@@ -89,8 +89,8 @@ class PdfRepairOrderRendererTest {
 
   @Test
   void anActionOnAPlaneTheOrderDoesNotCarryIsRefused() {
-    RepairOrder o = ReportFixtures.order();
-    RepairOrder bad = new RepairOrder(o.header(), o.inspectedAt(), List.of(), o.actions(), o.fingerprint());
+    RepairOrderContent o = ReportFixtures.order();
+    RepairOrderContent bad = new RepairOrderContent(o.header(), o.inspectedAt(), List.of(), o.actions(), o.fingerprint());
     assertThatThrownBy(() -> render(bad)).isInstanceOf(RenderingException.class)
         .hasMessageContaining("action 1 names plane 'North elevation'");
   }

@@ -19,7 +19,7 @@ import org.apache.pdfbox.pdmodel.graphics.image.PDImageXObject;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.core.port.report.Finding;
-import org.bracewalk.core.port.report.InspectionReport;
+import org.bracewalk.core.port.report.ReportContent;
 import org.bracewalk.core.port.report.LengthUnits;
 import org.bracewalk.core.port.report.Particular;
 import org.bracewalk.core.port.report.ReportParticulars;
@@ -40,7 +40,7 @@ class PdfReportRendererTest {
     Files.write(dir.resolve("fixture-report-draft.pdf"), draft);
   }
 
-  static byte[] render(InspectionReport r) throws IOException {
+  static byte[] render(ReportContent r) throws IOException {
     ByteArrayOutputStream out = new ByteArrayOutputStream();
     new PdfReportRenderer(TemplateSource.packed(), "en").renderReport(r, out);
     return out.toByteArray();
@@ -174,7 +174,7 @@ class PdfReportRendererTest {
     ReportParticulars gaps = new ReportParticulars(p.clientName(), " ", p.equipmentLocation(),
         p.equipmentDescription(), null, p.riskMatters(), "", p.furtherAction(), p.reporterName(),
         p.reporterPosition(), p.competentPerson(), null, null);
-    InspectionReport r = new InspectionReport(ReportFixtures.header(true, LengthUnits.METRIC, "scaffold"),
+    ReportContent r = new ReportContent(ReportFixtures.header(true, LengthUnits.METRIC, "scaffold"),
         gaps, List.of(ReportFixtures.frame()), List.of(), List.of(), ReportFixtures.fingerprint());
     ByteArrayOutputStream out = new ByteArrayOutputStream();
     assertThatThrownBy(() -> new PdfReportRenderer(TemplateSource.packed(), "en").renderReport(r, out))

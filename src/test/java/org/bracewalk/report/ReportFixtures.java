@@ -34,16 +34,16 @@ import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.core.port.report.BowAssessment;
 import org.bracewalk.core.port.report.Finding;
-import org.bracewalk.core.port.report.InspectionReport;
+import org.bracewalk.core.port.report.ReportContent;
 import org.bracewalk.core.port.report.LengthUnits;
-import org.bracewalk.core.port.report.Photo;
+import org.bracewalk.core.port.report.FindingPhoto;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.RackDamageLevel;
 import org.bracewalk.core.port.report.RecordFingerprint;
-import org.bracewalk.core.port.report.RepairAction;
-import org.bracewalk.core.port.report.RepairActionType;
-import org.bracewalk.core.port.report.RepairOrder;
-import org.bracewalk.core.port.report.RepairPriority;
+import org.bracewalk.core.port.report.RepairStep;
+import org.bracewalk.core.port.report.RepairStepKind;
+import org.bracewalk.core.port.report.RepairOrderContent;
+import org.bracewalk.core.port.report.RepairUrgency;
 import org.bracewalk.core.port.report.ReportHeader;
 import org.bracewalk.core.port.report.ReportParticulars;
 import org.bracewalk.core.port.report.SectionDigest;
@@ -226,32 +226,32 @@ final class ReportFixtures {
             "Ada Brennock", List.of()));
   }
 
-  static List<RepairAction> actions() {
+  static List<RepairStep> actions() {
     LocalDate day = LocalDate.of(2025, 3, 14);
     return List.of(
-        new RepairAction(1, FACADE, PanelRef.of(3, 1), List.of(3), RepairActionType.TAKE_OUT_OF_SERVICE,
-            null, RepairPriority.ISOLATE, false, day),
-        new RepairAction(2, FACADE, PanelRef.of(3, 1), List.of(3), RepairActionType.REPLACE,
-            Brace.rigid(Diagonal.RISING), RepairPriority.NEEDED_FOR_RIGIDITY, false, day),
-        new RepairAction(3, PLAN, PanelRef.of(1, 3), List.of(1), RepairActionType.REPLACE,
-            Brace.rigid(Diagonal.RISING), RepairPriority.NEEDED_FOR_RIGIDITY, false, day),
-        new RepairAction(4, FACADE, PanelRef.of(3, 6), List.of(3), RepairActionType.REPLACE,
-            Brace.rigid(Diagonal.FALLING), RepairPriority.RESTORES_REDUNDANCY, false, null),
-        new RepairAction(5, FACADE, PanelRef.of(5, 10), List.of(5), RepairActionType.INSPECT,
-            null, RepairPriority.RESTORES_REDUNDANCY, false, null));
+        new RepairStep(1, FACADE, PanelRef.of(3, 1), List.of(3), RepairStepKind.TAKE_OUT_OF_SERVICE,
+            null, RepairUrgency.ISOLATE, false, day),
+        new RepairStep(2, FACADE, PanelRef.of(3, 1), List.of(3), RepairStepKind.REPLACE,
+            Brace.rigid(Diagonal.RISING), RepairUrgency.NEEDED_FOR_RIGIDITY, false, day),
+        new RepairStep(3, PLAN, PanelRef.of(1, 3), List.of(1), RepairStepKind.REPLACE,
+            Brace.rigid(Diagonal.RISING), RepairUrgency.NEEDED_FOR_RIGIDITY, false, day),
+        new RepairStep(4, FACADE, PanelRef.of(3, 6), List.of(3), RepairStepKind.REPLACE,
+            Brace.rigid(Diagonal.FALLING), RepairUrgency.RESTORES_REDUNDANCY, false, null),
+        new RepairStep(5, FACADE, PanelRef.of(5, 10), List.of(5), RepairStepKind.INSPECT,
+            null, RepairUrgency.RESTORES_REDUNDANCY, false, null));
   }
 
-  static InspectionReport report(boolean finalised) {
+  static ReportContent report(boolean finalised) {
     return report(finalised, LengthUnits.METRIC);
   }
 
-  static InspectionReport report(boolean finalised, LengthUnits units) {
-    return new InspectionReport(header(finalised, units, "scaffold"), particulars(),
+  static ReportContent report(boolean finalised, LengthUnits units) {
+    return new ReportContent(header(finalised, units, "scaffold"), particulars(),
         List.of(facade(), frame(), plan()), findings(), actions(), fingerprint());
   }
 
-  static RepairOrder order() {
-    return new RepairOrder(header(true, LengthUnits.METRIC, "scaffold"), INSPECTED, List.of(facade(), plan()),
+  static RepairOrderContent order() {
+    return new RepairOrderContent(header(true, LengthUnits.METRIC, "scaffold"), INSPECTED, List.of(facade(), plan()),
         actions(), fingerprint());
   }
 
@@ -272,7 +272,7 @@ final class ReportFixtures {
     return out.toByteArray();
   }
 
-  static Photo photoOf(Color c) {
-    return new Photo(photo(c), "");
+  static FindingPhoto photoOf(Color c) {
+    return new FindingPhoto(photo(c), "");
   }
 }

@@ -2,7 +2,7 @@ package org.bracewalk.core.port;
 
 import java.io.IOException;
 import java.io.OutputStream;
-import org.bracewalk.core.port.report.RepairOrder;
+import org.bracewalk.core.port.report.RepairOrderContent;
 
 /** Turns a repair order into a document the crew can work down on site. */
 public interface RepairOrderRenderer {
@@ -13,5 +13,5 @@ public interface RepairOrderRenderer {
    * @throws RenderingException when the wording templates are missing or malformed
    * @throws IOException when {@code out} fails
    */
-  void renderRepairOrder(RepairOrder order, OutputStream out) throws IOException;
+  void renderRepairOrder(RepairOrderContent order, OutputStream out) throws IOException;
 }

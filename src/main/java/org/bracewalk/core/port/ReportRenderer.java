@@ -2,7 +2,7 @@ package org.bracewalk.core.port;
 
 import java.io.IOException;
 import java.io.OutputStream;
-import org.bracewalk.core.port.report.InspectionReport;
+import org.bracewalk.core.port.report.ReportContent;
 
 /** Turns an inspection report's content into a document (a PDF in Bracewalk). */
 public interface ReportRenderer {
@@ -14,5 +14,5 @@ public interface ReportRenderer {
    *     cannot be shown; the message names the file and key or the field
    * @throws IOException when {@code out} fails
    */
-  void renderReport(InspectionReport report, OutputStream out) throws IOException;
+  void renderReport(ReportContent report, OutputStream out) throws IOException;
 }

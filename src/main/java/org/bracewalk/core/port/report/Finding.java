@@ -28,7 +28,7 @@ public record Finding(
     String note,
     Instant recordedAt,
     String recordedBy,
-    List<Photo> photos) {
+    List<FindingPhoto> photos) {
   public Finding {
     Objects.requireNonNull(plane, "plane");
     Objects.requireNonNull(panel, "panel");

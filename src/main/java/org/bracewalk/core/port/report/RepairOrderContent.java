@@ -9,13 +9,13 @@ import java.util.Objects;
  * (for the locator sketch). {@code planes} holds every plane an action names; {@code inspectedAt}
  * is when the inspection the order follows from was made.
  */
-public record RepairOrder(
+public record RepairOrderContent(
     ReportHeader header,
     Instant inspectedAt,
     List<PlaneSection> planes,
-    List<RepairAction> actions,
+    List<RepairStep> actions,
     RecordFingerprint fingerprint) {
-  public RepairOrder {
+  public RepairOrderContent {
     Objects.requireNonNull(header, "header");
     Objects.requireNonNull(inspectedAt, "inspectedAt");
     Objects.requireNonNull(fingerprint, "fingerprint");

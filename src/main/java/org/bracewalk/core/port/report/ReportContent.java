@@ -7,14 +7,14 @@ import java.util.Objects;
  * Everything an inspection report shows. Findings and actions come in the order they are listed;
  * planes in the order they are drawn.
  */
-public record InspectionReport(
+public record ReportContent(
     ReportHeader header,
     ReportParticulars particulars,
     List<PlaneSection> planes,
     List<Finding> findings,
-    List<RepairAction> actions,
+    List<RepairStep> actions,
     RecordFingerprint fingerprint) {
-  public InspectionReport {
+  public ReportContent {
     Objects.requireNonNull(header, "header");
     Objects.requireNonNull(particulars, "particulars");
     Objects.requireNonNull(fingerprint, "fingerprint");

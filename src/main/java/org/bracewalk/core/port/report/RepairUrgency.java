@@ -1,7 +1,7 @@
 package org.bracewalk.core.port.report;
 
 /** Why an action is on the list, in the order the list is worked. */
-public enum RepairPriority {
+public enum RepairUrgency {
   /** Isolate first: keep people and loads off the affected part. */
   ISOLATE("isolate"),
   /** In the minimal set that restores rigidity: do at once. */
@@ -13,7 +13,7 @@ public enum RepairPriority {
 
   private final String code;
 
-  RepairPriority(String code) {
+  RepairUrgency(String code) {
     this.code = code;
   }
 

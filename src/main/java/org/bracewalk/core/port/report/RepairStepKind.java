@@ -5,7 +5,7 @@ package org.bracewalk.core.port.report;
  * brace, or take out of service); {@link #INSPECT} is a panel nobody has looked at, which must be
  * looked at (and fitted if its member is missing) before the plane can be counted on.
  */
-public enum RepairActionType {
+public enum RepairStepKind {
   /** Put a damaged member back into a sound state. */
   REPAIR("repair"),
   /** Fit a design member that is missing or damaged beyond use. */
@@ -19,7 +19,7 @@ public enum RepairActionType {
 
   private final String code;
 
-  RepairActionType(String code) {
+  RepairStepKind(String code) {
     this.code = code;
   }
 

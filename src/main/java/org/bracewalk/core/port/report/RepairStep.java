@@ -11,7 +11,7 @@ import org.bracewalk.core.model.PanelRef;
  *
  * @param number 1, 2, ... in working order
  * @param plane the plane's name
- * @param panel the panel (for {@link RepairActionType#TAKE_OUT_OF_SERVICE} the lowest panel of the
+ * @param panel the panel (for {@link RepairStepKind#TAKE_OUT_OF_SERVICE} the lowest panel of the
  *     affected part)
  * @param lifts for taking out of service: every lift of the affected part; else the panel's lift
  * @param type what to do
@@ -20,17 +20,17 @@ import org.bracewalk.core.model.PanelRef;
  * @param deviation true when the member is not in the design (needs engineering approval first)
  * @param dueDate when it falls due, or {@code null} for "at once"
  */
-public record RepairAction(
+public record RepairStep(
     int number,
     String plane,
     PanelRef panel,
     List<Integer> lifts,
-    RepairActionType type,
+    RepairStepKind type,
     Brace member,
-    RepairPriority priority,
+    RepairUrgency priority,
     boolean deviation,
     LocalDate dueDate) {
-  public RepairAction {
+  public RepairStep {
     if (number < 1) {
       throw new IllegalArgumentException("actions are numbered from 1, got " + number);
     }
