@@ -234,17 +234,47 @@ public final class PdfReportRenderer implements ReportRenderer {
         t.addCell(pdf.cell(e.getValue(), pdf.font(8f)));
       }
       for (Particular p : Particular.values()) {
-        if (!p.alwaysRequired() && !h.racking()) {
+        if (p.source() == Particular.Source.RECORDED_FOR_RACKING && !h.racking()) {
           continue;
         }
-        String value = p == Particular.INSPECTED_AT
-            ? w.dateTime(r.particulars().inspectedAt())
-            : r.particulars().text(p);
+        String value = switch (p) {
+          case INSPECTED_AT -> w.dateTime(r.particulars().inspectedAt());
+          case RISK_MATTERS -> riskMatters();
+          case ACTION_TAKEN -> r.particulars().actionsTaken().isEmpty()
+              ? w.text("particulars.action.none")
+              : String.join("\n", r.particulars().actionsTaken());
+          case FURTHER_ACTION -> furtherAction();
+          default -> r.particulars().text(p);
+        };
         t.addCell(pdf.cell(w.text("particular." + p.code()), pdf.boldFont(8f, Palette.GRID)));
         t.addCell(pdf.cell(value, pdf.font(8f)));
       }
       doc.add(t);
       doc.add(pdf.para(w.text("particulars.source"), 7f));
+    }
+
+    private String riskMatters() {
+      List<String> lines = new ArrayList<>();
+      for (PlaneSection p : r.planes()) {
+        if (p.verdict() != PlaneVerdict.HOLDS_SHAPE) {
+          lines.add(w.format("particulars.risk.plane", "plane", p.name(), "verdict", verdictWords(p)));
+        }
+      }
+      if (!r.findings().isEmpty()) {
+        lines.add(w.format("particulars.risk.findings", "count", r.findings().size()));
+      }
+      return lines.isEmpty() ? w.text("particulars.risk.none") : String.join("\n", lines);
+    }
+
+    private String furtherAction() {
+      if (r.actions().isEmpty()) {
+        return w.text("particulars.further.none");
+      }
+      long urgent = r.actions().stream()
+          .filter(a -> a.priority() == RepairUrgency.ISOLATE
+              || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY)
+          .count();
+      return w.format("particulars.further.plan", "count", r.actions().size(), "urgent", urgent);
     }
 
     // ---- plane pages ------------------------------------------------------------------------

@@ -58,6 +58,12 @@ final class TemplateSpec {
     // particulars
     k.put("heading.particulars", Set.of());
     k.put("particulars.source", Set.of());
+    k.put("particulars.risk.plane", Set.of("plane", "verdict"));
+    k.put("particulars.risk.findings", Set.of("count"));
+    k.put("particulars.risk.none", Set.of());
+    k.put("particulars.action.none", Set.of());
+    k.put("particulars.further.plan", Set.of("count", "urgent"));
+    k.put("particulars.further.none", Set.of());
     for (Particular p : Particular.values()) {
       k.put("particular." + p.code(), Set.of());
     }

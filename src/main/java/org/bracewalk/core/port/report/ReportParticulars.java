@@ -5,9 +5,12 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * The particulars of one inspection as recorded. Blank text or a missing time means the
- * particular is missing; {@link #missing(boolean)} lists every one, so a report is refused naming
- * them all at once rather than one per attempt.
+ * The recorded particulars of one inspection. Blank text or a missing time means the particular
+ * is missing; {@link #missing(boolean)} lists every one, so a report is refused naming them all at
+ * once rather than one per attempt.
+ *
+ * @param actionsTaken Sch. 7 item 6: one line per repair order or action recorded against the
+ *     inspection, in the words recorded (empty when none is recorded; the report then says so)
  */
 public record ReportParticulars(
     String clientName,
@@ -15,16 +18,21 @@ public record ReportParticulars(
     String equipmentLocation,
     String equipmentDescription,
     Instant inspectedAt,
-    String riskMatters,
-    String actionTaken,
-    String furtherAction,
+    List<String> actionsTaken,
     String reporterName,
     String reporterPosition,
     String competentPerson,
     String shift,
     String storageSafetyPerson) {
 
-  /** The value of one particular as text ({@code null} or blank when missing); times as ISO. */
+  public ReportParticulars {
+    actionsTaken = List.copyOf(actionsTaken);
+  }
+
+  /**
+   * The value of a recorded particular as text ({@code null} or blank when missing; the time as
+   * ISO); {@code null} for the particulars the report draws up itself.
+   */
   public String text(Particular p) {
     return switch (p) {
       case CLIENT_NAME -> clientName;
@@ -32,19 +40,17 @@ public record ReportParticulars(
       case EQUIPMENT_LOCATION -> equipmentLocation;
       case EQUIPMENT_DESCRIPTION -> equipmentDescription;
       case INSPECTED_AT -> inspectedAt == null ? null : inspectedAt.toString();
-      case RISK_MATTERS -> riskMatters;
-      case ACTION_TAKEN -> actionTaken;
-      case FURTHER_ACTION -> furtherAction;
       case REPORTER_NAME -> reporterName;
       case REPORTER_POSITION -> reporterPosition;
       case COMPETENT_PERSON -> competentPerson;
       case SHIFT -> shift;
       case STORAGE_SAFETY_PERSON -> storageSafetyPerson;
+      case RISK_MATTERS, ACTION_TAKEN, FURTHER_ACTION -> null;
     };
   }
 
   /**
-   * Every particular that is empty, in the order of {@link Particular}.
+   * Every recorded particular that is empty, in the order of {@link Particular}.
    *
    * @param racking whether the structure is storage racking (then the storage safety person is
    *     required too)
@@ -52,7 +58,7 @@ public record ReportParticulars(
   public List<Particular> missing(boolean racking) {
     List<Particular> out = new ArrayList<>();
     for (Particular p : Particular.values()) {
-      if (!p.alwaysRequired() && !racking) {
+      if (!p.recordedFor(racking)) {
         continue;
       }
       String v = text(p);
