@@ -1,0 +1,58 @@
+package org.bracewalk.app;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.TreeSet;
+import org.bracewalk.core.model.Inspection;
+import org.bracewalk.core.model.PanelFinding;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PlaneRecord;
+
+/** A plane across inspections, and what changed since the previous one. */
+public final class HistoryService {
+  private final SiteService sites;
+  private final InspectionService inspections;
+  private final AnalysisService analysis;
+
+  public HistoryService(SiteService sites, InspectionService inspections, AnalysisService analysis) {
+    this.sites = Objects.requireNonNull(sites);
+    this.inspections = Objects.requireNonNull(inspections);
+    this.analysis = Objects.requireNonNull(analysis);
+  }
+
+  /** The plane in every inspection of its structure, oldest first. */
+  public PlaneHistory history(long planeId) {
+    PlaneRecord plane = sites.plane(planeId);
+    List<PlaneHistory.Entry> entries = new ArrayList<>();
+    Map<PanelRef, PanelFinding> previous = null;
+    for (Inspection inspection : inspections.inspections(plane.structureId())) {
+      PlaneResult result = analysis.analysePlane(inspection.id(), planeId);
+      Map<PanelRef, PanelFinding> findings = inspections.latestFindings(inspection.id(), planeId);
+      List<PanelChange> changes = previous == null ? List.of() : changes(previous, findings);
+      entries.add(
+          new PlaneHistory.Entry(
+              inspection, result.design(), findings, result.asBuilt(),
+              result.analysis().analysedState(), changes));
+      previous = findings;
+    }
+    return new PlaneHistory(plane, entries);
+  }
+
+  /** Panels whose finding differs between two inspections, by panel. */
+  static List<PanelChange> changes(
+      Map<PanelRef, PanelFinding> before, Map<PanelRef, PanelFinding> after) {
+    TreeSet<PanelRef> panels = new TreeSet<>(before.keySet());
+    panels.addAll(after.keySet());
+    List<PanelChange> out = new ArrayList<>();
+    for (PanelRef p : panels) {
+      PanelFinding b = before.get(p);
+      PanelFinding a = after.get(p);
+      if (!Objects.equals(a, b)) {
+        out.add(new PanelChange(p, b, a));
+      }
+    }
+    return out;
+  }
+}

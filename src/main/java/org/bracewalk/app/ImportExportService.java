@@ -1,0 +1,305 @@
+package org.bracewalk.app;
+
+import java.time.Clock;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.function.Consumer;
+import org.bracewalk.app.sitefile.ObservationCsv;
+import org.bracewalk.app.sitefile.SiteFile;
+import org.bracewalk.app.sitefile.SiteFile.DesignData;
+import org.bracewalk.app.sitefile.SiteFile.InspectionData;
+import org.bracewalk.app.sitefile.SiteFile.IssuedReportData;
+import org.bracewalk.app.sitefile.SiteFile.ObservationData;
+import org.bracewalk.app.sitefile.SiteFile.PhotoData;
+import org.bracewalk.app.sitefile.SiteFile.PlaneData;
+import org.bracewalk.app.sitefile.SiteFile.RepairActionData;
+import org.bracewalk.app.sitefile.SiteFile.RepairOrderData;
+import org.bracewalk.app.sitefile.SiteFile.StructureData;
+import org.bracewalk.app.sitefile.SiteFileReader;
+import org.bracewalk.app.sitefile.SiteFileWriter;
+import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.Inspection;
+import org.bracewalk.core.model.InspectionStatus;
+import org.bracewalk.core.model.IssuedReport;
+import org.bracewalk.core.model.Observation;
+import org.bracewalk.core.model.Photo;
+import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.RepairAction;
+import org.bracewalk.core.model.RepairOrder;
+import org.bracewalk.core.model.Site;
+import org.bracewalk.core.model.Structure;
+import org.bracewalk.core.port.InspectionFinalisedException;
+import org.bracewalk.core.port.RecordStore;
+
+/**
+ * Files in and out: the JSON site file and the CSV of one inspection's observations. Imports read
+ * and check the whole file before writing anything, then write in one transaction: on any error
+ * nothing is stored.
+ */
+public final class ImportExportService {
+  private final RecordStore store;
+  private final Clock clock;
+  private final SiteFileWriter writer = new SiteFileWriter();
+
+  public ImportExportService(RecordStore store, Clock clock) {
+    this.store = Objects.requireNonNull(store);
+    this.clock = Objects.requireNonNull(clock);
+  }
+
+  /**
+   * Imports a site file as a new site, all or nothing.
+   *
+   * @param fileName the name to show in errors
+   * @param text the file's text
+   * @throws org.bracewalk.app.sitefile.FileFormatException naming file, line, path and field
+   */
+  public ImportedSite importSite(String fileName, String text) {
+    SiteFile file = SiteFileReader.read(fileName, text);
+    return store.inTransaction(() -> load(file));
+  }
+
+  private ImportedSite load(SiteFile file) {
+    Site site = store.sites().add(file.site());
+    List<Structure> structures = new ArrayList<>();
+    List<PlaneRecord> allPlanes = new ArrayList<>();
+    List<Inspection> inspections = new ArrayList<>();
+    Map<Integer, Long> inspectionIds = new HashMap<>();
+    Map<Long, Integer> verifications = new LinkedHashMap<>();
+    int observations = 0;
+    for (StructureData s : file.structures()) {
+      Structure structure = store.structures().add(new Structure(0, site.id(), s.name(), s.kind(),
+          s.description(), s.designReference(), s.inspectionIntervalDays()));
+      structures.add(structure);
+      Map<String, PlaneRecord> planes = new HashMap<>();
+      for (PlaneData p : s.planes()) {
+        PlaneRecord plane = store.planes().add(new PlaneRecord(0, structure.id(), p.name(), p.grid()));
+        planes.put(plane.name(), plane);
+        allPlanes.add(plane);
+        for (DesignData d : p.designs()) {
+          store.designs().add(new DesignRevision(0, plane.id(), d.number(), d.author(), d.date(),
+              d.approvalNote(), d.recordedAt(), d.design()));
+        }
+      }
+      for (InspectionData i : s.inspections()) {
+        Inspection inspection = store.inspections().add(new Inspection(0, structure.id(),
+            i.startedAt(), null, i.inspectorName(), i.inspectorPosition(), i.competentPerson(),
+            i.shift(), i.storageSafetyPerson(), i.reason(), InspectionStatus.OPEN,
+            i.carriedOutForName(), i.carriedOutForAddress()));
+        inspectionIds.put(i.number(), inspection.id());
+        List<Long> ids = new ArrayList<>();
+        for (ObservationData o : i.observations()) {
+          Long supersedes = o.supersedes() == null ? null : ids.get(o.supersedes() - 1);
+          Observation stored = store.observations().add(new Observation(0, inspection.id(),
+              planes.get(o.plane()).id(), o.panel(), o.state(), o.member(), o.bowMm(),
+              o.gaugeLengthMm(), o.defect(), o.note(), o.recordedAt(), o.recordedBy(), supersedes,
+              o.correctionReason()));
+          ids.add(stored.id());
+          for (PhotoData ph : o.photos()) {
+            store.observations().addPhoto(new Photo(0, stored.id(), ph.fileName(), ph.mediaType(),
+                ph.data(), ph.attachedAt()));
+          }
+        }
+        observations += ids.size();
+        if (i.status() == InspectionStatus.FINALISED) {
+          inspection = store.inspections().finalise(inspection.id(), i.finishedAt());
+        }
+        inspections.add(inspection);
+        for (RepairOrderData r : i.repairOrders()) {
+          RepairOrder order = store.repairs().addOrder(
+              new RepairOrder(0, inspection.id(), r.createdAt(), r.createdBy(), r.note()));
+          for (RepairActionData a : r.actions()) {
+            RepairAction action = store.repairs().addAction(new RepairAction(0, order.id(),
+                planes.get(a.plane()).id(), a.panel(), a.action(), a.brace(), a.description(),
+                a.dueDate(), a.assignee(), a.doneAt(), a.doneBy(), null));
+            if (a.verifiedByInspection() != null) {
+              verifications.put(action.id(), a.verifiedByInspection());
+            }
+          }
+        }
+        for (IssuedReportData r : i.issuedReports()) {
+          store.issuedReports().add(
+              new IssuedReport(0, inspection.id(), r.fileName(), r.fingerprint(), r.issuedAt()));
+        }
+      }
+    }
+    verifications.forEach((action, number) ->
+        store.repairs().markVerified(action, inspectionIds.get(number)));
+    return new ImportedSite(site, structures, allPlanes, inspections, observations);
+  }
+
+  /** The site file of one site: everything about it, as text. */
+  public String exportSite(long siteId) {
+    return writer.write(siteFile(siteId));
+  }
+
+  /** The content of the site file of one site. */
+  public SiteFile siteFile(long siteId) {
+    Site site = store.sites().find(siteId).orElseThrow(() -> new NotFoundException("site " + siteId));
+    List<Structure> structures = store.structures().ofSite(siteId);
+    Map<Long, Integer> numbers = new HashMap<>();
+    for (Structure s : structures) {
+      for (Inspection i : store.inspections().ofStructure(s.id())) {
+        numbers.put(i.id(), numbers.size() + 1);
+      }
+    }
+    List<StructureData> out = new ArrayList<>();
+    for (Structure s : structures) {
+      Map<Long, String> planeNames = new HashMap<>();
+      List<PlaneData> planes = new ArrayList<>();
+      for (PlaneRecord p : store.planes().ofStructure(s.id())) {
+        planeNames.put(p.id(), p.name());
+        List<DesignData> designs = new ArrayList<>();
+        for (DesignRevision d : store.designs().ofPlane(p.id())) {
+          designs.add(new DesignData(d.number(), d.author(), d.date(), d.approvalNote(),
+              d.recordedAt(), d.design()));
+        }
+        planes.add(new PlaneData(p.name(), p.grid(), designs));
+      }
+      List<InspectionData> inspections = new ArrayList<>();
+      for (Inspection i : store.inspections().ofStructure(s.id())) {
+        inspections.add(inspectionData(i, numbers, planeNames));
+      }
+      out.add(new StructureData(s.name(), s.kind(), s.description(), s.designReference(),
+          s.inspectionIntervalDays(), planes, inspections));
+    }
+    return new SiteFile(site.withId(0), out);
+  }
+
+  private InspectionData inspectionData(Inspection i, Map<Long, Integer> numbers,
+      Map<Long, String> planeNames) {
+    List<Observation> rows = store.observations().ofInspection(i.id());
+    Map<Long, Integer> position = new HashMap<>();
+    List<Long> withPhotos = store.observations().withPhotos(i.id());
+    List<ObservationData> observations = new ArrayList<>();
+    for (Observation o : rows) {
+      position.put(o.id(), position.size() + 1);
+      List<PhotoData> photos = new ArrayList<>();
+      if (withPhotos.contains(o.id())) {
+        for (Photo ph : store.observations().photosOf(o.id())) {
+          photos.add(new PhotoData(ph.fileName(), ph.mediaType(), ph.attachedAt(), ph.data()));
+        }
+      }
+      observations.add(new ObservationData(planeNames.get(o.planeId()), o.panel(), o.state(),
+          o.memberFound(), o.bowMm(), o.gaugeLengthMm(), o.defect(), o.note(), o.recordedAt(),
+          o.recordedBy(), o.supersedes() == null ? null : position.get(o.supersedes()),
+          o.correctionReason(), photos));
+    }
+    List<RepairOrderData> orders = new ArrayList<>();
+    for (RepairOrder r : store.repairs().ordersOf(i.id())) {
+      List<RepairActionData> actions = new ArrayList<>();
+      for (RepairAction a : store.repairs().actionsOf(r.id())) {
+        Integer verified = null;
+        if (a.verifiedByInspectionId() != null) {
+          verified = numbers.get(a.verifiedByInspectionId());
+          if (verified == null) {
+            throw new UserInputException("repair action " + a.id() + " is verified by inspection "
+                + a.verifiedByInspectionId() + ", which is not of this site; the site file cannot"
+                + " refer to it");
+          }
+        }
+        actions.add(new RepairActionData(planeNames.get(a.planeId()), a.panel(), a.action(),
+            a.brace(), a.description(), a.dueDate(), a.assignee(), a.doneAt(), a.doneBy(),
+            verified));
+      }
+      orders.add(new RepairOrderData(r.createdAt(), r.createdBy(), r.note(), actions));
+    }
+    List<IssuedReportData> reports = new ArrayList<>();
+    for (IssuedReport r : store.issuedReports().ofInspection(i.id())) {
+      reports.add(new IssuedReportData(r.fileName(), r.fingerprint(), r.issuedAt()));
+    }
+    return new InspectionData(numbers.get(i.id()), i.startedAt(), i.finishedAt(), i.status(),
+        i.reason(), i.inspectorName(), i.inspectorPosition(), i.competentPerson(), i.shift(),
+        i.storageSafetyPerson(), i.carriedOutForName(), i.carriedOutForAddress(), observations,
+        orders, reports);
+  }
+
+  /** The CSV of every observation of an inspection, superseded ones included, in order. */
+  public String exportObservationsCsv(long inspectionId) {
+    Inspection inspection = inspection(inspectionId);
+    Map<Long, String> planeNames = new HashMap<>();
+    for (PlaneRecord p : store.planes().ofStructure(inspection.structureId())) {
+      planeNames.put(p.id(), p.name());
+    }
+    Map<Long, Integer> row = new HashMap<>();
+    List<ObservationCsv.Row> rows = new ArrayList<>();
+    for (Observation o : store.observations().ofInspection(inspectionId)) {
+      row.put(o.id(), row.size() + 1);
+      rows.add(new ObservationCsv.Row(0, planeNames.get(o.planeId()), o.panel(), o.state(),
+          o.memberFound(), o.bowMm(), o.gaugeLengthMm(), o.defect(), o.note(), o.recordedAt(),
+          o.recordedBy(), o.supersedes() == null ? null : row.get(o.supersedes()),
+          o.correctionReason()));
+    }
+    return ObservationCsv.write(rows);
+  }
+
+  /**
+   * Reads and checks an observation CSV for an open inspection without storing anything.
+   *
+   * @throws org.bracewalk.app.sitefile.FileFormatException naming file, line and column
+   */
+  public List<ObservationCsv.Row> readObservationsCsv(long inspectionId, String fileName, String text) {
+    Inspection inspection = inspection(inspectionId);
+    if (inspection.isFinalised()) {
+      throw new InspectionFinalisedException(inspectionId, "record observations from " + fileName);
+    }
+    Map<String, PlaneGrid> grids = new HashMap<>();
+    for (PlaneRecord p : store.planes().ofStructure(inspection.structureId())) {
+      grids.put(p.name(), p.grid());
+    }
+    return ObservationCsv.read(fileName, text, grids);
+  }
+
+  /**
+   * Imports an observation CSV into an open inspection, all or nothing (one transaction). Rows
+   * with an empty {@code recorded_at} take the time of import.
+   */
+  public List<Observation> importObservationsCsv(long inspectionId, String fileName, String text) {
+    List<ObservationCsv.Row> rows = readObservationsCsv(inspectionId, fileName, text);
+    return store.inTransaction(() -> record(inspectionId, rows, "", o -> { }));
+  }
+
+  /**
+   * Records the rows of an observation CSV one by one, each committed before the next: {@code
+   * acknowledged} hears of each stored observation as soon as it is on disk. The whole file is
+   * checked first, so a bad file records nothing; a failure part-way (say, the inspection is
+   * finalised meanwhile) keeps the rows acknowledged so far.
+   *
+   * @param recordedBy used where the row's {@code recorded_by} is empty
+   */
+  public List<Observation> recordFromCsv(long inspectionId, String fileName, String text,
+      String recordedBy, Consumer<Observation> acknowledged) {
+    List<ObservationCsv.Row> rows = readObservationsCsv(inspectionId, fileName, text);
+    return record(inspectionId, rows, recordedBy, acknowledged);
+  }
+
+  private List<Observation> record(long inspectionId, List<ObservationCsv.Row> rows,
+      String recordedBy, Consumer<Observation> acknowledged) {
+    Inspection inspection = inspection(inspectionId);
+    Map<String, Long> planeIds = new HashMap<>();
+    for (PlaneRecord p : store.planes().ofStructure(inspection.structureId())) {
+      planeIds.put(p.name(), p.id());
+    }
+    List<Observation> stored = new ArrayList<>();
+    for (ObservationCsv.Row r : rows) {
+      Instant at = r.recordedAt() != null ? r.recordedAt() : clock.instant();
+      String by = r.recordedBy().isEmpty() && recordedBy != null ? recordedBy : r.recordedBy();
+      Long supersedes = r.supersedesRow() == null ? null : stored.get(r.supersedesRow() - 1).id();
+      Observation o = store.observations().add(new Observation(0, inspectionId,
+          planeIds.get(r.plane()), r.panel(), r.state(), r.member(), r.bowMm(), r.gaugeLengthMm(),
+          r.defect(), r.note(), at, by, supersedes, r.correctionReason()));
+      stored.add(o);
+      acknowledged.accept(o);
+    }
+    return stored;
+  }
+
+  private Inspection inspection(long id) {
+    return store.inspections().find(id).orElseThrow(() -> new NotFoundException("inspection " + id));
+  }
+}

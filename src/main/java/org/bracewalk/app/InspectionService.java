@@ -1,0 +1,275 @@
+package org.bracewalk.app;
+
+import java.time.Clock;
+import java.time.Instant;
+import java.time.LocalDate;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.Set;
+import java.util.TreeMap;
+import org.bracewalk.core.model.AsBuiltPlane;
+import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.Inspection;
+import org.bracewalk.core.model.InspectionStatus;
+import org.bracewalk.core.model.Observation;
+import org.bracewalk.core.model.PanelFinding;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.Photo;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.Site;
+import org.bracewalk.core.model.Structure;
+import org.bracewalk.core.port.InspectionFinalisedException;
+import org.bracewalk.core.port.RecordStore;
+
+/**
+ * Inspections: start one, record observations panel by panel (each committed when recorded),
+ * correct them (a new row naming the one it supersedes), attach photos, finalise. Also the latest
+ * findings per panel and the as-built plane they give.
+ */
+public final class InspectionService {
+  private final RecordStore store;
+  private final Clock clock;
+
+  public InspectionService(RecordStore store, Clock clock) {
+    this.store = Objects.requireNonNull(store);
+    this.clock = Objects.requireNonNull(clock);
+  }
+
+  /**
+   * Starts an open inspection of a structure now. Empty "carried out for" fields take the site's
+   * client name and address.
+   */
+  public Inspection start(long structureId, NewInspection details) {
+    Structure structure =
+        store.structures()
+            .find(structureId)
+            .orElseThrow(() -> new NotFoundException("structure " + structureId));
+    Site site = store.sites().find(structure.siteId()).orElseThrow();
+    String forName =
+        blank(details.carriedOutForName()) ? site.clientName() : details.carriedOutForName();
+    String forAddress =
+        blank(details.carriedOutForAddress())
+            ? site.clientAddress()
+            : details.carriedOutForAddress();
+    return store.inspections()
+        .add(
+            new Inspection(
+                0, structureId, clock.instant(), null, details.inspectorName(),
+                details.inspectorPosition(), details.competentPerson(), details.shift(),
+                details.storageSafetyPerson(), details.reason(), InspectionStatus.OPEN, forName,
+                forAddress));
+  }
+
+  /** The inspection with this id; {@link NotFoundException} otherwise. */
+  public Inspection inspection(long id) {
+    return store.inspections()
+        .find(id)
+        .orElseThrow(() -> new NotFoundException("inspection " + id));
+  }
+
+  /** The inspections of a structure, oldest first. */
+  public List<Inspection> inspections(long structureId) {
+    return store.inspections().ofStructure(structureId);
+  }
+
+  /** Every inspection in the store, by id. */
+  public List<Inspection> allInspections() {
+    return store.inspections().all();
+  }
+
+  /** The structure an inspection is of. */
+  public Structure structureOf(Inspection inspection) {
+    return store.structures().find(inspection.structureId()).orElseThrow();
+  }
+
+  /** The planes an inspection covers: every plane of its structure, by id. */
+  public List<PlaneRecord> planesOf(long inspectionId) {
+    return store.planes().ofStructure(inspection(inspectionId).structureId());
+  }
+
+  /**
+   * Records one observation now and returns it with its id. It is committed (synced to disk)
+   * before this returns, unless called inside a {@link RecordStore#inTransaction}.
+   *
+   * @throws InspectionFinalisedException when the inspection is finalised
+   * @throws UserInputException naming the plane or panel when they do not belong to it
+   */
+  public Observation recordObservation(long inspectionId, NewObservation observation) {
+    Inspection inspection = inspection(inspectionId);
+    return store.observations().add(toObservation(inspection, observation, null, null));
+  }
+
+  /**
+   * Corrects an earlier observation of an open inspection: stores a new observation that names the
+   * one it supersedes and why. The earlier row stays as it was.
+   */
+  public Observation correct(long supersededId, NewObservation replacement, String reason) {
+    Observation old =
+        store.observations()
+            .find(supersededId)
+            .orElseThrow(() -> new NotFoundException("observation " + supersededId));
+    if (blank(reason)) {
+      throw new UserInputException(
+          "say why observation " + supersededId + " is corrected (the reason is kept with it)");
+    }
+    Inspection inspection = inspection(old.inspectionId());
+    return store.observations().add(toObservation(inspection, replacement, supersededId, reason));
+  }
+
+  /** Attaches a photo to an observation of an open inspection. */
+  public Photo attachPhoto(long observationId, String fileName, String mediaType, byte[] data) {
+    Observation o =
+        store.observations()
+            .find(observationId)
+            .orElseThrow(() -> new NotFoundException("observation " + observationId));
+    requireOpen(inspection(o.inspectionId()), "attach a photo");
+    return store.observations()
+        .addPhoto(new Photo(0, observationId, fileName, mediaType, data, clock.instant()));
+  }
+
+  public List<Photo> photos(long observationId) {
+    return store.observations().photosOf(observationId);
+  }
+
+  /**
+   * Finalises an open inspection now. From then on nothing about it changes: no observation, no
+   * correction, no photo (the database refuses too).
+   */
+  public Inspection finalise(long inspectionId) {
+    Inspection inspection = inspection(inspectionId);
+    requireOpen(inspection, "finalise it again");
+    Instant now = clock.instant();
+    Instant at = now.isBefore(inspection.startedAt()) ? inspection.startedAt() : now;
+    return store.inspections().finalise(inspectionId, at);
+  }
+
+  /** Every observation of the inspection, superseded ones included, in the order recorded. */
+  public List<Observation> observations(long inspectionId) {
+    inspection(inspectionId);
+    return store.observations().ofInspection(inspectionId);
+  }
+
+  /**
+   * The observation that counts for each panel of a plane: the latest one recorded for the panel
+   * that no correction supersedes. Panels with none are absent (not inspected).
+   */
+  public Map<PanelRef, Observation> latestObservations(long inspectionId, long planeId) {
+    return latest(observations(inspectionId), planeId);
+  }
+
+  /** The latest finding per panel (see {@link #latestObservations}). */
+  public Map<PanelRef, PanelFinding> latestFindings(long inspectionId, long planeId) {
+    Map<PanelRef, PanelFinding> out = new TreeMap<>();
+    latestObservations(inspectionId, planeId).forEach((p, o) -> out.put(p, o.finding()));
+    return out;
+  }
+
+  /** The design revision in force for this inspection and plane (see {@code DesignRepository}). */
+  public DesignRevision designInForce(long inspectionId, long planeId) {
+    Inspection inspection = inspection(inspectionId);
+    PlaneRecord plane = plane(planeId);
+    Instant at = inspection.finishedAt() != null ? inspection.finishedAt() : clock.instant();
+    return store.designs()
+        .inForceAt(planeId, at)
+        .orElseThrow(() -> new NotFoundException("design of plane '" + plane.name() + "'"));
+  }
+
+  /** The plane as found in this inspection, against the design in force. */
+  public AsBuiltPlane asBuilt(long inspectionId, long planeId) {
+    DesignRevision design = designInForce(inspectionId, planeId);
+    return AsBuiltPlane.fromFindings(design.design(), latestFindings(inspectionId, planeId));
+  }
+
+  /**
+   * When the next routine inspection of a structure is due: the day its last finalised inspection
+   * finished plus the structure's interval, in the site's time zone; empty when never inspected.
+   * Event-triggered inspections (impact, alteration, weather) are due at once, whatever this says.
+   */
+  public Optional<LocalDate> nextInspectionDue(long structureId) {
+    Structure structure =
+        store.structures()
+            .find(structureId)
+            .orElseThrow(() -> new NotFoundException("structure " + structureId));
+    Site site = store.sites().find(structure.siteId()).orElseThrow();
+    return store.inspections().ofStructure(structureId).stream()
+        .filter(Inspection::isFinalised)
+        .map(Inspection::finishedAt)
+        .max(Instant::compareTo)
+        .map(
+            at ->
+                at.atZone(site.timeZone())
+                    .toLocalDate()
+                    .plusDays(structure.inspectionIntervalDays()));
+  }
+
+  /** The latest non-superseded observation per panel of one plane, from rows in id order. */
+  static Map<PanelRef, Observation> latest(List<Observation> rows, long planeId) {
+    Set<Long> superseded = new HashSet<>();
+    for (Observation o : rows) {
+      if (o.supersedes() != null) {
+        superseded.add(o.supersedes());
+      }
+    }
+    Map<PanelRef, Observation> out = new TreeMap<>();
+    for (Observation o : rows) {
+      if (o.planeId() == planeId && !superseded.contains(o.id())) {
+        out.put(o.panel(), o);
+      }
+    }
+    return out;
+  }
+
+  Observation toObservation(
+      Inspection inspection, NewObservation n, Long supersedes, String reason) {
+    requireOpen(inspection, supersedes == null ? "record an observation" : "correct an observation");
+    PlaneRecord plane = plane(n.planeId());
+    if (plane.structureId() != inspection.structureId()) {
+      throw new UserInputException(
+          "plane '"
+              + plane.name()
+              + "' (id "
+              + plane.id()
+              + ") is not part of the structure "
+              + inspection.label()
+              + " covers; pick one of its planes");
+    }
+    if (!plane.grid().contains(n.panel())) {
+      throw new UserInputException(
+          "panel "
+              + n.panel()
+              + " lies outside plane '"
+              + plane.name()
+              + "' ("
+              + plane.grid().lifts()
+              + " lifts x "
+              + plane.grid().bays()
+              + " bays)");
+    }
+    try {
+      return new Observation(
+          0, inspection.id(), plane.id(), n.panel(), n.state(), n.memberFound(), n.bowMm(),
+          n.gaugeLengthMm(), n.defect(), n.note(), clock.instant(), n.recordedBy(), supersedes,
+          reason);
+    } catch (IllegalArgumentException e) {
+      throw new UserInputException(
+          "observation of plane '" + plane.name() + "', " + n.panel() + ": " + e.getMessage(), e);
+    }
+  }
+
+  private PlaneRecord plane(long planeId) {
+    return store.planes().find(planeId).orElseThrow(() -> new NotFoundException("plane " + planeId));
+  }
+
+  private static void requireOpen(Inspection inspection, String attempted) {
+    if (inspection.isFinalised()) {
+      throw new InspectionFinalisedException(inspection.id(), attempted);
+    }
+  }
+
+  private static boolean blank(String s) {
+    return s == null || s.isBlank();
+  }
+}

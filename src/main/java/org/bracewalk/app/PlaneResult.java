@@ -1,0 +1,41 @@
+package org.bracewalk.app;
+
+import java.util.Map;
+import java.util.Objects;
+import org.bracewalk.core.analysis.PlaneAnalysis;
+import org.bracewalk.core.model.AsBuiltPlane;
+import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.Observation;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PlaneRecord;
+
+/**
+ * One plane of an inspection, analysed: the design in force, the as-built state from the latest
+ * observations, and the engine's verdict and repair.
+ *
+ * @param plane the plane
+ * @param design the design revision compared with
+ * @param latest the observation that counts for each panel (absent: not inspected)
+ * @param asBuilt the as-built state those observations give
+ * @param analysis the engine's result for design and as-built
+ */
+public record PlaneResult(
+    PlaneRecord plane,
+    DesignRevision design,
+    Map<PanelRef, Observation> latest,
+    AsBuiltPlane asBuilt,
+    PlaneAnalysis analysis) {
+
+  public PlaneResult {
+    Objects.requireNonNull(plane, "plane");
+    Objects.requireNonNull(design, "design");
+    latest = Map.copyOf(latest);
+    Objects.requireNonNull(asBuilt, "asBuilt");
+    Objects.requireNonNull(analysis, "analysis");
+  }
+
+  /** The conservative as-built verdict: uninspected panels count as missing. */
+  public boolean rigid() {
+    return analysis.analysedState().rigid();
+  }
+}

@@ -1,0 +1,159 @@
+package org.bracewalk.app;
+
+import java.time.Clock;
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Objects;
+import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.Millimetres;
+import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.Site;
+import org.bracewalk.core.model.Structure;
+import org.bracewalk.core.port.RecordStore;
+
+/** Sites, their structures, planes and plane designs: create, list, look up. */
+public final class SiteService {
+  private final RecordStore store;
+  private final Clock clock;
+
+  public SiteService(RecordStore store, Clock clock) {
+    this.store = Objects.requireNonNull(store);
+    this.clock = Objects.requireNonNull(clock);
+  }
+
+  /** Stores a new site (id 0) and returns it with its id. */
+  public Site createSite(Site site) {
+    requireNew(site.id(), "site");
+    return store.sites().add(site);
+  }
+
+  public List<Site> sites() {
+    return store.sites().all();
+  }
+
+  /** The site with this id; {@link NotFoundException} naming it otherwise. */
+  public Site site(long id) {
+    return store.sites().find(id).orElseThrow(() -> new NotFoundException("site " + id));
+  }
+
+  /** Stores a new structure of an existing site. */
+  public Structure createStructure(Structure structure) {
+    requireNew(structure.id(), "structure");
+    site(structure.siteId());
+    return store.structures().add(structure);
+  }
+
+  public List<Structure> structures(long siteId) {
+    site(siteId);
+    return store.structures().ofSite(siteId);
+  }
+
+  public Structure structure(long id) {
+    return store.structures()
+        .find(id)
+        .orElseThrow(() -> new NotFoundException("structure " + id));
+  }
+
+  /** The site a structure stands on. */
+  public Site siteOf(Structure structure) {
+    return site(structure.siteId());
+  }
+
+  /**
+   * Stores a new plane of an existing structure with its first design revision, in one
+   * transaction. Widths and heights are rounded to whole millimetres; the design's grid must then
+   * be the plane's.
+   */
+  public PlaneRecord createPlane(
+      PlaneRecord plane, String author, LocalDate date, String approvalNote, PlaneDesign design) {
+    requireNew(plane.id(), "plane");
+    structure(plane.structureId());
+    PlaneRecord rounded = new PlaneRecord(0, plane.structureId(), plane.name(), Millimetres.round(plane.grid()));
+    PlaneDesign roundedDesign = Millimetres.round(design);
+    requireSameGrid(rounded, roundedDesign);
+    return store.inTransaction(
+        () -> {
+          PlaneRecord stored = store.planes().add(rounded);
+          store.designs()
+              .add(
+                  new DesignRevision(
+                      0, stored.id(), 1, author, date, approvalNote, clock.instant(),
+                      roundedDesign));
+          return stored;
+        });
+  }
+
+  /** Adds the next design revision of a plane (number = highest + 1) and returns it. */
+  public DesignRevision addDesignRevision(
+      long planeId, String author, LocalDate date, String approvalNote, PlaneDesign design) {
+    PlaneRecord plane = plane(planeId);
+    PlaneDesign rounded = Millimetres.round(design);
+    requireSameGrid(plane, rounded);
+    return store.inTransaction(
+        () -> {
+          int next = store.designs().latest(planeId).map(r -> r.number() + 1).orElse(1);
+          return store.designs()
+              .add(new DesignRevision(
+                      0, planeId, next, author, date, approvalNote, clock.instant(), rounded));
+        });
+  }
+
+  public List<PlaneRecord> planes(long structureId) {
+    structure(structureId);
+    return store.planes().ofStructure(structureId);
+  }
+
+  public PlaneRecord plane(long id) {
+    return store.planes().find(id).orElseThrow(() -> new NotFoundException("plane " + id));
+  }
+
+  /** The plane of that name in the structure; {@link NotFoundException} naming both otherwise. */
+  public PlaneRecord planeByName(long structureId, String name) {
+    return store.planes()
+        .findByName(structureId, name)
+        .orElseThrow(
+            () -> new NotFoundException("plane '" + name + "' of structure " + structureId));
+  }
+
+  /** Every design revision of a plane, by number. */
+  public List<DesignRevision> designRevisions(long planeId) {
+    plane(planeId);
+    return store.designs().ofPlane(planeId);
+  }
+
+  /** The latest design revision of a plane. */
+  public DesignRevision currentDesign(long planeId) {
+    PlaneRecord plane = plane(planeId);
+    return store.designs()
+        .latest(planeId)
+        .orElseThrow(() -> new NotFoundException("design of plane '" + plane.name() + "'"));
+  }
+
+  static void requireSameGrid(PlaneRecord plane, PlaneDesign design) {
+    if (!plane.grid().equals(design.grid())) {
+      throw new UserInputException(
+          "the design's grid ("
+              + design.grid().lifts()
+              + " lifts x "
+              + design.grid().bays()
+              + " bays, "
+              + design.grid().support().label()
+              + ") differs from plane '"
+              + plane.name()
+              + "' ("
+              + plane.grid().lifts()
+              + " x "
+              + plane.grid().bays()
+              + ", "
+              + plane.grid().support().label()
+              + ", with its widths and heights); give a design of the same grid");
+    }
+  }
+
+  private static void requireNew(long id, String what) {
+    if (id != 0) {
+      throw new IllegalArgumentException("a new " + what + " has id 0, got " + id);
+    }
+  }
+}

@@ -1,0 +1,68 @@
+package org.bracewalk.app.sitefile;
+
+import org.bracewalk.app.UserInputException;
+
+/**
+ * A file that cannot be read as what it claims to be. The message reads {@code FILE, line N
+ * (at PATH), field "F": problem}; the parts are also available one by one.
+ */
+public class FileFormatException extends UserInputException {
+  private static final long serialVersionUID = 1L;
+
+  private final String file;
+  private final int line;
+  private final String path;
+  private final String field;
+  private final String problem;
+
+  /**
+   * @param file the file name as the user gave it
+   * @param line the 1-based line, or 0 when unknown
+   * @param path where in the file (a JSON path such as {@code structures[0].planes[1]}, or a CSV
+   *     column name); may be empty
+   * @param field the field concerned; may be empty
+   * @param problem what is wrong and what to do
+   */
+  public FileFormatException(String file, int line, String path, String field, String problem) {
+    super(format(file, line, path, field, problem));
+    this.file = file;
+    this.line = line;
+    this.path = path == null ? "" : path;
+    this.field = field == null ? "" : field;
+    this.problem = problem;
+  }
+
+  private static String format(String file, int line, String path, String field, String problem) {
+    StringBuilder b = new StringBuilder(file);
+    if (line > 0) {
+      b.append(", line ").append(line);
+    }
+    if (path != null && !path.isEmpty()) {
+      b.append(" (at ").append(path).append(')');
+    }
+    if (field != null && !field.isEmpty()) {
+      b.append(", field \"").append(field).append('"');
+    }
+    return b.append(": ").append(problem).toString();
+  }
+
+  public String file() {
+    return file;
+  }
+
+  public int line() {
+    return line;
+  }
+
+  public String path() {
+    return path;
+  }
+
+  public String field() {
+    return field;
+  }
+
+  public String problem() {
+    return problem;
+  }
+}

@@ -1,0 +1,70 @@
+package org.bracewalk.cli;
+
+import java.nio.file.Path;
+import java.time.Clock;
+import java.util.Map;
+import java.util.Objects;
+import org.bracewalk.app.AppServicesFactory;
+
+/**
+ * What the store commands need from the composition root: a way to open the services over a
+ * database file, and the environment and platform that choose the default file.
+ *
+ * @param services opens the services over a file
+ * @param env the process environment (passed in: commands never read it themselves)
+ * @param osName the {@code os.name} system property
+ * @param userHome the user's home folder
+ * @param clock the clock (for dates the user does not give)
+ */
+public record CliContext(
+    AppServicesFactory services,
+    Map<String, String> env,
+    String osName,
+    Path userHome,
+    Clock clock) {
+
+  /** The variable that names the database file when {@code --db} is not given. */
+  public static final String DB_VARIABLE = "BRACEWALK_DB";
+
+  public CliContext {
+    Objects.requireNonNull(services, "services");
+    env = Map.copyOf(env);
+    Objects.requireNonNull(osName, "osName");
+    Objects.requireNonNull(userHome, "userHome");
+    Objects.requireNonNull(clock, "clock");
+  }
+
+  /**
+   * The database file: {@code --db} when given, else {@code $BRACEWALK_DB}, else the platform's
+   * per-user data folder: {@code $XDG_DATA_HOME/bracewalk} or {@code ~/.local/share/bracewalk}
+   * on Linux, {@code ~/Library/Application Support/Bracewalk} on macOS, {@code
+   * %APPDATA%\Bracewalk} on Windows; the file is {@code bracewalk.db} there.
+   */
+  public Path database(Path option) {
+    if (option != null) {
+      return option.toAbsolutePath();
+    }
+    String fromEnv = env.get(DB_VARIABLE);
+    if (fromEnv != null && !fromEnv.isBlank()) {
+      return Path.of(fromEnv).toAbsolutePath();
+    }
+    return defaultFolder().resolve("bracewalk.db").toAbsolutePath();
+  }
+
+  private Path defaultFolder() {
+    String os = osName.toLowerCase(java.util.Locale.ROOT);
+    if (os.startsWith("windows")) {
+      String appData = env.get("APPDATA");
+      Path base = appData != null && !appData.isBlank()
+          ? Path.of(appData) : userHome.resolve("AppData").resolve("Roaming");
+      return base.resolve("Bracewalk");
+    }
+    if (os.startsWith("mac")) {
+      return userHome.resolve("Library").resolve("Application Support").resolve("Bracewalk");
+    }
+    String xdg = env.get("XDG_DATA_HOME");
+    Path base = xdg != null && !xdg.isBlank() && Path.of(xdg).isAbsolute()
+        ? Path.of(xdg) : userHome.resolve(".local").resolve("share");
+    return base.resolve("bracewalk");
+  }
+}

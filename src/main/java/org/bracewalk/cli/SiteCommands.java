@@ -1,0 +1,218 @@
+package org.bracewalk.cli;
+
+import java.io.PrintWriter;
+import java.time.LocalDate;
+import java.time.ZoneId;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.core.model.DisplayUnits;
+import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.Site;
+import org.bracewalk.core.model.Structure;
+import org.bracewalk.core.model.StructureKind;
+import org.bracewalk.core.model.Support;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** {@code site}, {@code structure} and {@code plane}: create and list. */
+final class SiteCommands {
+  private SiteCommands() {}
+
+  @Command(name = "create", mixinStandardHelpOptions = true, description = "Create a site.")
+  static final class SiteCreate extends StoreCommand {
+    @Option(names = "--name", required = true, description = "Short name of the site.")
+    String name;
+
+    @Option(names = "--client", description = "For whom inspections are carried out.")
+    String client;
+
+    @Option(names = "--client-address", description = "Their address.")
+    String clientAddress;
+
+    @Option(names = "--location", description = "Where the structures stand.")
+    String location;
+
+    @Option(names = "--time-zone", defaultValue = "UTC",
+        description = "Time zone times are shown in, e.g. Europe/London (default ${DEFAULT-VALUE}).")
+    String zone;
+
+    @Option(names = "--units", defaultValue = "metric",
+        description = "metric or imperial (default ${DEFAULT-VALUE}).")
+    String units;
+
+    SiteCreate(CliContext context) {
+      super(context);
+    }
+
+    @Override
+    int run(AppServices s, PrintWriter out, PrintWriter err) {
+      ZoneId z;
+      try {
+        z = ZoneId.of(zone);
+      } catch (java.time.DateTimeException e) {
+        throw new IllegalArgumentException("--time-zone: unknown zone '" + zone
+            + "'; use a region such as Europe/London");
+      }
+      Site site = s.sites().createSite(new Site(0, name, client, clientAddress, location, z,
+          DisplayUnits.fromLabel(units)));
+      out.println("site " + site.id() + " created: " + site.name());
+      return 0;
+    }
+  }
+
+  @Command(name = "list", mixinStandardHelpOptions = true, description = "List the sites.")
+  static final class SiteList extends StoreCommand {
+    SiteList(CliContext context) {
+      super(context);
+    }
+
+    @Override
+    int run(AppServices s, PrintWriter out, PrintWriter err) {
+      List<Site> sites = s.sites().sites();
+      if (sites.isEmpty()) {
+        out.println("no sites yet; create one with 'bracewalk site create' or load the demo");
+      }
+      for (Site site : sites) {
+        out.println("site " + site.id() + ": " + site.name()
+            + (site.clientName().isEmpty() ? "" : ", for " + site.clientName())
+            + (site.location().isEmpty() ? "" : ", at " + site.location())
+            + " (" + site.timeZone().getId() + ", " + site.units().label() + ")");
+      }
+      return 0;
+    }
+  }
+
+  @Command(name = "create", mixinStandardHelpOptions = true,
+      description = "Create a structure on a site.")
+  static final class StructureCreate extends StoreCommand {
+    @Option(names = "--site", required = true, description = "The site's id.")
+    long site;
+
+    @Option(names = "--name", required = true, description = "Short name of the structure.")
+    String name;
+
+    @Option(names = "--kind", required = true,
+        description = "scaffold, racking-run or other-braced-frame.")
+    String kind;
+
+    @Option(names = "--description", description = "What it is.")
+    String description;
+
+    @Option(names = "--design-ref", description = "The drawing or scheme of its design.")
+    String designRef;
+
+    @Option(names = "--interval-days", defaultValue = "7",
+        description = "Days between routine inspections (default ${DEFAULT-VALUE}).")
+    int interval;
+
+    StructureCreate(CliContext context) {
+      super(context);
+    }
+
+    @Override
+    int run(AppServices s, PrintWriter out, PrintWriter err) {
+      Structure st = s.sites().createStructure(new Structure(0, site, name,
+          StructureKind.fromLabel(kind), description, designRef, interval));
+      out.println("structure " + st.id() + " created: " + st.name() + " (" + st.kind().label() + ")");
+      return 0;
+    }
+  }
+
+  @Command(name = "list", mixinStandardHelpOptions = true,
+      description = "List the structures of a site, with when the next routine inspection is due.")
+  static final class StructureList extends StoreCommand {
+    @Option(names = "--site", required = true, description = "The site's id.")
+    long site;
+
+    StructureList(CliContext context) {
+      super(context);
+    }
+
+    @Override
+    int run(AppServices s, PrintWriter out, PrintWriter err) {
+      for (Structure st : s.sites().structures(site)) {
+        String due = s.inspections().nextInspectionDue(st.id())
+            .map(LocalDate::toString).orElse("not inspected yet");
+        out.println("structure " + st.id() + ": " + st.name() + " (" + st.kind().label() + "), "
+            + s.sites().planes(st.id()).size() + " planes, next routine inspection due " + due);
+      }
+      return 0;
+    }
+  }
+
+  @Command(name = "create", mixinStandardHelpOptions = true,
+      description = {"Create a brace plane of a structure, unbraced (design revision 1).",
+          "Add its bracing with 'bracewalk import --plane ID --design MAP.txt'."})
+  static final class PlaneCreate extends StoreCommand {
+    @Option(names = "--structure", required = true, description = "The structure's id.")
+    long structure;
+
+    @Option(names = "--name", required = true, description = "Name, unique in the structure.")
+    String name;
+
+    @Option(names = "--lifts", required = true, description = "Lifts (rows), bottom = 1.")
+    int lifts;
+
+    @Option(names = "--bays", required = true, description = "Bays (columns), left = 1.")
+    int bays;
+
+    @Option(names = "--widths", split = ",",
+        description = "Bay widths in metres, comma-separated, bay 1 first (default 1 each).")
+    List<Double> widths;
+
+    @Option(names = "--heights", split = ",",
+        description = "Lift heights in metres, comma-separated, lift 1 first (default 1 each).")
+    List<Double> heights;
+
+    @Option(names = "--support", defaultValue = "pinned-base",
+        description = "pinned-base or free (default ${DEFAULT-VALUE}).")
+    String support;
+
+    @Option(names = "--author", description = "Who drew the design.")
+    String author;
+
+    PlaneCreate(CliContext context) {
+      super(context);
+    }
+
+    @Override
+    int run(AppServices s, PrintWriter out, PrintWriter err) {
+      Support sup = Support.fromLabel(support);
+      if (sup == null) {
+        throw new IllegalArgumentException("--support: use pinned-base or free, not '" + support + "'");
+      }
+      PlaneGrid grid = new PlaneGrid(lifts, bays, widths, heights, sup);
+      PlaneRecord p = s.sites().createPlane(new PlaneRecord(0, structure, name, grid), author,
+          LocalDate.now(context.clock()), "", PlaneDesign.of(grid, Map.of()));
+      out.println(Show.plane(p) + " created, unbraced");
+      return 0;
+    }
+  }
+
+  @Command(name = "list", mixinStandardHelpOptions = true,
+      description = "List the planes of a structure with their latest design revision.")
+  static final class PlaneList extends StoreCommand {
+    @Option(names = "--structure", required = true, description = "The structure's id.")
+    long structure;
+
+    PlaneList(CliContext context) {
+      super(context);
+    }
+
+    @Override
+    int run(AppServices s, PrintWriter out, PrintWriter err) {
+      List<String> lines = new ArrayList<>();
+      for (PlaneRecord p : s.sites().planes(structure)) {
+        var d = s.sites().currentDesign(p.id());
+        lines.add(Show.plane(p) + ", design revision " + d.number() + " of " + d.date()
+            + ", " + d.design().braces().size() + " braced panels");
+      }
+      lines.forEach(out::println);
+      return 0;
+    }
+  }
+}

@@ -1,0 +1,91 @@
+package org.bracewalk.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.app.UserInputException;
+import org.bracewalk.core.port.StoreException;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/**
+ * A command that works on the database: resolves the file ({@code --db}, {@code BRACEWALK_DB},
+ * or the per-user default), prints it to standard error as the first line ({@code database:
+ * PATH}), opens the services, runs, closes. A user error prints {@code error: ...} to standard
+ * error and exits with status 2; nothing has been changed then.
+ */
+abstract class StoreCommand implements Callable<Integer> {
+  /** Exit status for bad input, as the {@code check} command uses. */
+  static final int BAD_INPUT = 2;
+
+  @Spec CommandSpec spec;
+
+  @Option(
+      names = "--db",
+      paramLabel = "FILE",
+      description =
+          "The database file (created when new). Default: $BRACEWALK_DB, else bracewalk.db in"
+              + " the per-user data folder.")
+  Path db;
+
+  final CliContext context;
+
+  StoreCommand(CliContext context) {
+    this.context = context;
+  }
+
+  @Override
+  public final Integer call() {
+    PrintWriter out = spec.commandLine().getOut();
+    PrintWriter err = spec.commandLine().getErr();
+    Path file = context.database(db);
+    err.println("database: " + file);
+    err.flush();
+    try (AppServices services = context.services().open(file)) {
+      return run(services, out, err);
+    } catch (UserInputException | StoreException | IllegalArgumentException e) {
+      out.flush();
+      err.println("error: " + e.getMessage());
+      return BAD_INPUT;
+    } finally {
+      out.flush();
+      err.flush();
+    }
+  }
+
+  /** The command's work; returns the exit status. */
+  abstract int run(AppServices services, PrintWriter out, PrintWriter err);
+
+  /** A text file's content (UTF-8), or a user error naming the file. */
+  static String readText(Path file) {
+    try {
+      byte[] bytes = Files.readAllBytes(file);
+      String text = StandardCharsets.UTF_8.newDecoder().decode(ByteBuffer.wrap(bytes)).toString();
+      return text.startsWith("\uFEFF") ? text.substring(1) : text;
+    } catch (CharacterCodingException e) {
+      throw new UserInputException(file + " is not UTF-8 text; save it as UTF-8 and try again");
+    } catch (IOException e) {
+      throw new UserInputException("cannot read " + file + ": " + e.getMessage());
+    }
+  }
+
+  /** Writes text to a file (UTF-8), or a user error naming the file. */
+  static void writeText(Path file, String text) {
+    try {
+      Path parent = file.toAbsolutePath().getParent();
+      if (parent != null) {
+        Files.createDirectories(parent);
+      }
+      Files.writeString(file, text, StandardCharsets.UTF_8);
+    } catch (IOException e) {
+      throw new UserInputException("cannot write " + file + ": " + e.getMessage());
+    }
+  }
+}

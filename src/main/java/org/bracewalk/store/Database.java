@@ -1,0 +1,328 @@
+package org.bracewalk.store;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.concurrent.locks.ReentrantLock;
+import org.bracewalk.core.port.DesignRepository;
+import org.bracewalk.core.port.InspectionRepository;
+import org.bracewalk.core.port.IssuedReportRepository;
+import org.bracewalk.core.port.ObservationRepository;
+import org.bracewalk.core.port.PlaneRepository;
+import org.bracewalk.core.port.RecordStore;
+import org.bracewalk.core.port.RepairRepository;
+import org.bracewalk.core.port.SiteRepository;
+import org.bracewalk.core.port.StoreException;
+import org.bracewalk.core.port.StructureRepository;
+import org.flywaydb.core.Flyway;
+import org.flywaydb.core.api.FlywayException;
+import org.sqlite.SQLiteConfig;
+import org.sqlite.SQLiteDataSource;
+
+/**
+ * One Bracewalk database file: opens it (creating it when new), brings its schema up to date with
+ * the Flyway migrations packed as {@code classpath:db/migration}, and serves the repositories over
+ * one connection.
+ *
+ * <p>Every connection (Flyway's too) runs with foreign keys on, the WAL journal, {@code
+ * synchronous=FULL} (a commit is on disk before it returns: an acknowledged observation survives a
+ * crash or power cut) and a busy timeout, so a second program on the same file waits for the
+ * other's write instead of failing. Transactions begin {@code IMMEDIATE}: they take the write
+ * lock at the start, so two writers queue instead of deadlocking.
+ *
+ * <p>Thread-safe: calls are serialised on one lock; a transaction holds it throughout.
+ */
+public final class Database implements RecordStore {
+  /** How long a write waits for another program's write to finish. */
+  static final int BUSY_TIMEOUT_MS = 10_000;
+
+  private final Path file;
+  private final Connection connection;
+  private final ReentrantLock lock = new ReentrantLock();
+  private int depth;
+  private boolean closed;
+
+  private final JdbcSiteRepository sites = new JdbcSiteRepository(this);
+  private final JdbcStructureRepository structures = new JdbcStructureRepository(this);
+  private final JdbcPlaneRepository planes = new JdbcPlaneRepository(this);
+  private final JdbcDesignRepository designs = new JdbcDesignRepository(this);
+  private final JdbcInspectionRepository inspections = new JdbcInspectionRepository(this);
+  private final JdbcObservationRepository observations = new JdbcObservationRepository(this);
+  private final JdbcRepairRepository repairs = new JdbcRepairRepository(this);
+  private final JdbcIssuedReportRepository issuedReports = new JdbcIssuedReportRepository(this);
+
+  private Database(Path file, Connection connection) {
+    this.file = file;
+    this.connection = connection;
+  }
+
+  /**
+   * Opens (or creates) the database file and migrates it.
+   *
+   * @throws StoreException naming the file when it cannot be opened, is not a Bracewalk database,
+   *     or cannot be migrated
+   */
+  public static Database open(Path file) {
+    Path absolute = file.toAbsolutePath();
+    try {
+      Path parent = absolute.getParent();
+      if (parent != null) {
+        Files.createDirectories(parent);
+      }
+    } catch (IOException e) {
+      throw new StoreException(
+          "cannot create the folder for the database " + absolute + ": " + e.getMessage(), e);
+    }
+    if (Files.isDirectory(absolute)) {
+      throw new StoreException(absolute + " is a folder; give a file name for the database");
+    }
+    SQLiteDataSource dataSource = dataSource(absolute);
+    migrate(dataSource, absolute);
+    try {
+      Connection c = dataSource.getConnection();
+      requirePragmas(c, absolute);
+      return new Database(absolute, c);
+    } catch (SQLException e) {
+      throw SqlErrors.translate(e, absolute.toString());
+    }
+  }
+
+  static SQLiteDataSource dataSource(Path file) {
+    SQLiteConfig config = new SQLiteConfig();
+    config.setBusyTimeout(BUSY_TIMEOUT_MS);
+    config.enforceForeignKeys(true);
+    config.setJournalMode(SQLiteConfig.JournalMode.WAL);
+    config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
+    config.setTransactionMode(SQLiteConfig.TransactionMode.IMMEDIATE);
+    SQLiteDataSource ds = new SQLiteDataSource(config);
+    ds.setUrl("jdbc:sqlite:" + file);
+    return ds;
+  }
+
+  private static void migrate(SQLiteDataSource dataSource, Path file) {
+    Flyway flyway =
+        Flyway.configure(Database.class.getClassLoader())
+            .dataSource(dataSource)
+            .locations("classpath:db/migration")
+            .loggers("slf4j")
+            .load();
+    try {
+      flyway.migrate();
+    } catch (FlywayException first) {
+      // Two programs opening a new file at once: the loser sees the winner's half-made schema
+      // history. Once the winner is done, migrating again finds nothing to do.
+      try {
+        Thread.sleep(200);
+        flyway.migrate();
+      } catch (FlywayException again) {
+        throw new StoreException(
+            "cannot open "
+                + file
+                + " as a Bracewalk database: "
+                + rootMessage(again)
+                + " (is it a Bracewalk database file?)",
+            again);
+      } catch (InterruptedException e) {
+        Thread.currentThread().interrupt();
+        throw new StoreException("interrupted while opening " + file, e);
+      }
+    }
+  }
+
+  private static String rootMessage(Throwable t) {
+    Throwable r = t;
+    while (r.getCause() != null && r.getCause() != r) {
+      r = r.getCause();
+    }
+    String m = r.getMessage() == null ? r.getClass().getSimpleName() : r.getMessage();
+    return m.lines().findFirst().orElse(m);
+  }
+
+  /** Refuses to work on a connection that lacks the durability settings (a driver surprise). */
+  private static void requirePragmas(Connection c, Path file) throws SQLException {
+    try (Statement s = c.createStatement()) {
+      String mode = single(s, "PRAGMA journal_mode");
+      String fk = single(s, "PRAGMA foreign_keys");
+      String sync = single(s, "PRAGMA synchronous");
+      if (!"wal".equalsIgnoreCase(mode) || !"1".equals(fk) || !"2".equals(sync)) {
+        c.close();
+        throw new StoreException(
+            "the database "
+                + file
+                + " did not take its safety settings (journal "
+                + mode
+                + ", foreign keys "
+                + fk
+                + ", synchronous "
+                + sync
+                + "); is the file on a network share?");
+      }
+    }
+  }
+
+  private static String single(Statement s, String sql) throws SQLException {
+    try (ResultSet r = s.executeQuery(sql)) {
+      return r.next() ? r.getString(1) : null;
+    }
+  }
+
+  /** Work on the connection. */
+  @FunctionalInterface
+  interface SqlWork<T> {
+    T run(Connection c) throws SQLException;
+  }
+
+  /** Runs {@code work} on the connection under the lock, translating SQL errors. */
+  <T> T call(SqlWork<T> work) {
+    lock.lock();
+    try {
+      requireOpen();
+      return work.run(connection);
+    } catch (SQLException e) {
+      throw SqlErrors.translate(e, file.toString());
+    } finally {
+      lock.unlock();
+    }
+  }
+
+  @Override
+  public <T> T inTransaction(Work<T> work) {
+    lock.lock();
+    try {
+      requireOpen();
+      if (depth > 0) {
+        depth++;
+        try {
+          return work.run();
+        } finally {
+          depth--;
+        }
+      }
+      begin();
+      depth = 1;
+      boolean committed = false;
+      try {
+        T result = work.run();
+        connection.commit();
+        committed = true;
+        return result;
+      } catch (SQLException e) {
+        throw SqlErrors.translate(e, file.toString());
+      } finally {
+        depth = 0;
+        end(committed);
+      }
+    } finally {
+      lock.unlock();
+    }
+  }
+
+  private void begin() {
+    try {
+      connection.setAutoCommit(false);
+    } catch (SQLException e) {
+      throw SqlErrors.translate(e, file.toString());
+    }
+  }
+
+  private void end(boolean committed) {
+    try {
+      if (!committed) {
+        connection.rollback();
+      }
+      connection.setAutoCommit(true);
+    } catch (SQLException e) {
+      throw SqlErrors.translate(e, file.toString());
+    }
+  }
+
+  /** True inside {@link #inTransaction}. */
+  boolean inTransaction() {
+    return depth > 0;
+  }
+
+  private void requireOpen() {
+    if (closed) {
+      throw new StoreException("the database " + file + " is closed");
+    }
+  }
+
+  /** The database file. */
+  public Path file() {
+    return file;
+  }
+
+  @Override
+  public String location() {
+    return file.toString();
+  }
+
+  /** Runs {@code PRAGMA integrity_check} and returns its first line ({@code ok} when sound). */
+  public String integrityCheck() {
+    return call(
+        c -> {
+          try (Statement s = c.createStatement()) {
+            return single(s, "PRAGMA integrity_check");
+          }
+        });
+  }
+
+  @Override
+  public void close() {
+    lock.lock();
+    try {
+      if (!closed) {
+        closed = true;
+        connection.close();
+      }
+    } catch (SQLException e) {
+      throw SqlErrors.translate(e, file.toString());
+    } finally {
+      lock.unlock();
+    }
+  }
+
+  @Override
+  public SiteRepository sites() {
+    return sites;
+  }
+
+  @Override
+  public StructureRepository structures() {
+    return structures;
+  }
+
+  @Override
+  public PlaneRepository planes() {
+    return planes;
+  }
+
+  @Override
+  public DesignRepository designs() {
+    return designs;
+  }
+
+  @Override
+  public InspectionRepository inspections() {
+    return inspections;
+  }
+
+  @Override
+  public ObservationRepository observations() {
+    return observations;
+  }
+
+  @Override
+  public RepairRepository repairs() {
+    return repairs;
+  }
+
+  @Override
+  public IssuedReportRepository issuedReports() {
+    return issuedReports;
+  }
+}

@@ -1,0 +1,197 @@
+package org.bracewalk.store;
+
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.bracewalk.core.model.DefectType;
+import org.bracewalk.core.model.Observation;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.Photo;
+import org.bracewalk.core.port.ObservationRepository;
+
+/**
+ * Observations in {@code observations}, photos (BLOBs) in {@code photos}. Both append-only: the
+ * triggers refuse updates, deletes, and inserts into finalised inspections. Bows are kept in
+ * tenths of a millimetre.
+ */
+final class JdbcObservationRepository implements ObservationRepository {
+  private static final String INSERT =
+      """
+      INSERT INTO observations
+        (inspection_id, plane_id, lift, bay, state, member_diagonal, member_kind, bow_tenth_mm,
+         gauge_length_mm, defect, note, recorded_at, recorded_by, supersedes_id,
+         correction_reason)
+      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
+      """;
+  private static final String SELECT =
+      """
+      SELECT id, inspection_id, plane_id, lift, bay, state, member_diagonal, member_kind,
+             bow_tenth_mm, gauge_length_mm, defect, note, recorded_at, recorded_by,
+             supersedes_id, correction_reason
+      FROM observations
+      """;
+  private static final String INSERT_PHOTO =
+      """
+      INSERT INTO photos (observation_id, file_name, media_type, data, attached_at)
+      VALUES (?, ?, ?, ?, ?)
+      """;
+  private static final String SELECT_PHOTOS =
+      """
+      SELECT id, observation_id, file_name, media_type, data, attached_at
+      FROM photos WHERE observation_id = ? ORDER BY id
+      """;
+  private static final String WITH_PHOTOS =
+      """
+      SELECT DISTINCT o.id FROM observations o JOIN photos p ON p.observation_id = o.id
+      WHERE o.inspection_id = ? ORDER BY o.id
+      """;
+
+  private final Database db;
+
+  JdbcObservationRepository(Database db) {
+    this.db = db;
+  }
+
+  @Override
+  public Observation add(Observation o) {
+    return db.call(
+        c -> {
+          try (PreparedStatement s = c.prepareStatement(INSERT, Statement.RETURN_GENERATED_KEYS)) {
+            s.setLong(1, o.inspectionId());
+            s.setLong(2, o.planeId());
+            s.setInt(3, o.panel().lift());
+            s.setInt(4, o.panel().bay());
+            s.setString(5, o.state().label());
+            Columns.setBrace(s, 6, 7, o.memberFound());
+            Columns.setInt(s, 8, o.bowMm() == null ? null : tenths(o.bowMm()));
+            Columns.setInt(s, 9, o.gaugeLengthMm());
+            s.setString(10, o.defect() == null ? null : o.defect().label());
+            s.setString(11, o.note());
+            s.setString(12, Columns.text(o.recordedAt()));
+            s.setString(13, o.recordedBy());
+            Columns.setLong(s, 14, o.supersedes());
+            s.setString(15, o.correctionReason());
+            s.executeUpdate();
+            return find(Columns.lastId(s)).orElseThrow();
+          }
+        });
+  }
+
+  /** A bow in millimetres as whole tenths, rounded half up. */
+  static int tenths(double mm) {
+    return (int) Math.round(mm * 10.0);
+  }
+
+  @Override
+  public Optional<Observation> find(long id) {
+    return query(SELECT + " WHERE id = ?", id).stream().findFirst();
+  }
+
+  @Override
+  public List<Observation> ofInspection(long inspectionId) {
+    return query(SELECT + " WHERE inspection_id = ? ORDER BY id", inspectionId);
+  }
+
+  private List<Observation> query(String sql, long key) {
+    return db.call(
+        c -> {
+          try (PreparedStatement s = c.prepareStatement(sql)) {
+            s.setLong(1, key);
+            try (ResultSet r = s.executeQuery()) {
+              List<Observation> out = new ArrayList<>();
+              while (r.next()) {
+                out.add(read(r));
+              }
+              return out;
+            }
+          }
+        });
+  }
+
+  private static Observation read(ResultSet r) throws SQLException {
+    Integer bow = Columns.intOrNull(r, "bow_tenth_mm");
+    String defect = r.getString("defect");
+    return new Observation(
+        r.getLong("id"),
+        r.getLong("inspection_id"),
+        r.getLong("plane_id"),
+        PanelRef.of(r.getInt("lift"), r.getInt("bay")),
+        PanelState.fromLabel(r.getString("state")),
+        Columns.brace(r, "member_diagonal", "member_kind"),
+        bow == null ? null : bow / 10.0,
+        Columns.intOrNull(r, "gauge_length_mm"),
+        defect == null ? null : DefectType.fromLabel(defect),
+        r.getString("note"),
+        Columns.instant(r, "recorded_at"),
+        r.getString("recorded_by"),
+        Columns.longOrNull(r, "supersedes_id"),
+        r.getString("correction_reason"));
+  }
+
+  @Override
+  public Photo addPhoto(Photo photo) {
+    return db.call(
+        c -> {
+          try (PreparedStatement s =
+              c.prepareStatement(INSERT_PHOTO, Statement.RETURN_GENERATED_KEYS)) {
+            s.setLong(1, photo.observationId());
+            s.setString(2, photo.fileName());
+            s.setString(3, photo.mediaType());
+            s.setBytes(4, photo.data());
+            s.setString(5, Columns.text(photo.attachedAt()));
+            s.executeUpdate();
+            long id = Columns.lastId(s);
+            return photosOf(photo.observationId()).stream()
+                .filter(p -> p.id() == id)
+                .findFirst()
+                .orElseThrow();
+          }
+        });
+  }
+
+  @Override
+  public List<Photo> photosOf(long observationId) {
+    return db.call(
+        c -> {
+          try (PreparedStatement s = c.prepareStatement(SELECT_PHOTOS)) {
+            s.setLong(1, observationId);
+            try (ResultSet r = s.executeQuery()) {
+              List<Photo> out = new ArrayList<>();
+              while (r.next()) {
+                out.add(
+                    new Photo(
+                        r.getLong("id"),
+                        r.getLong("observation_id"),
+                        r.getString("file_name"),
+                        r.getString("media_type"),
+                        r.getBytes("data"),
+                        Columns.instant(r, "attached_at")));
+              }
+              return out;
+            }
+          }
+        });
+  }
+
+  @Override
+  public List<Long> withPhotos(long inspectionId) {
+    return db.call(
+        c -> {
+          try (PreparedStatement s = c.prepareStatement(WITH_PHOTOS)) {
+            s.setLong(1, inspectionId);
+            try (ResultSet r = s.executeQuery()) {
+              List<Long> out = new ArrayList<>();
+              while (r.next()) {
+                out.add(r.getLong(1));
+              }
+              return out;
+            }
+          }
+        });
+  }
+}

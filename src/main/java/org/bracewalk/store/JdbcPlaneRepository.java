@@ -1,0 +1,190 @@
+package org.bracewalk.store;
+
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.bracewalk.core.model.Millimetres;
+import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.Support;
+import org.bracewalk.core.port.PlaneRepository;
+import org.bracewalk.core.port.StoreException;
+
+/**
+ * Planes in {@code planes}, their bay widths and lift heights (whole millimetres) in {@code
+ * plane_bay_widths} and {@code plane_lift_heights}.
+ */
+final class JdbcPlaneRepository implements PlaneRepository {
+  private static final String INSERT =
+      """
+      INSERT INTO planes (structure_id, name, lifts, bays, support) VALUES (?, ?, ?, ?, ?)
+      """;
+  private static final String INSERT_WIDTH =
+      """
+      INSERT INTO plane_bay_widths (plane_id, bay, width_mm) VALUES (?, ?, ?)
+      """;
+  private static final String INSERT_HEIGHT =
+      """
+      INSERT INTO plane_lift_heights (plane_id, lift, height_mm) VALUES (?, ?, ?)
+      """;
+  private static final String SELECT =
+      """
+      SELECT id, structure_id, name, lifts, bays, support FROM planes
+      """;
+  private static final String WIDTHS =
+      """
+      SELECT width_mm FROM plane_bay_widths WHERE plane_id = ? ORDER BY bay
+      """;
+  private static final String HEIGHTS =
+      """
+      SELECT height_mm FROM plane_lift_heights WHERE plane_id = ? ORDER BY lift
+      """;
+  private static final String SAME_NAME =
+      """
+      SELECT 1 FROM planes WHERE structure_id = ? AND name = ?
+      """;
+
+  private final Database db;
+
+  JdbcPlaneRepository(Database db) {
+    this.db = db;
+  }
+
+  @Override
+  public PlaneRecord add(PlaneRecord plane) {
+    PlaneGrid grid = Millimetres.round(plane.grid());
+    List<Integer> widths = Millimetres.toMillimetres(grid.bayWidths());
+    List<Integer> heights = Millimetres.toMillimetres(grid.liftHeights());
+    return db.inTransaction(
+        () ->
+            db.call(
+                c -> {
+                  if (exists(c, plane.structureId(), plane.name())) {
+                    throw new StoreException(
+                        "structure "
+                            + plane.structureId()
+                            + " already has a plane named '"
+                            + plane.name()
+                            + "'; give this one another name");
+                  }
+                  long id;
+                  try (PreparedStatement s =
+                      c.prepareStatement(INSERT, Statement.RETURN_GENERATED_KEYS)) {
+                    s.setLong(1, plane.structureId());
+                    s.setString(2, plane.name());
+                    s.setInt(3, grid.lifts());
+                    s.setInt(4, grid.bays());
+                    s.setString(5, grid.support().label());
+                    s.executeUpdate();
+                    id = Columns.lastId(s);
+                  }
+                  insertLengths(c, INSERT_WIDTH, id, widths);
+                  insertLengths(c, INSERT_HEIGHT, id, heights);
+                  return new PlaneRecord(id, plane.structureId(), plane.name(), grid);
+                }));
+  }
+
+  private static boolean exists(Connection c, long structureId, String name) throws SQLException {
+    try (PreparedStatement s = c.prepareStatement(SAME_NAME)) {
+      s.setLong(1, structureId);
+      s.setString(2, name);
+      try (ResultSet r = s.executeQuery()) {
+        return r.next();
+      }
+    }
+  }
+
+  private static void insertLengths(Connection c, String sql, long planeId, List<Integer> mm)
+      throws SQLException {
+    try (PreparedStatement s = c.prepareStatement(sql)) {
+      for (int i = 0; i < mm.size(); i++) {
+        s.setLong(1, planeId);
+        s.setInt(2, i + 1);
+        s.setInt(3, mm.get(i));
+        s.addBatch();
+      }
+      s.executeBatch();
+    }
+  }
+
+  @Override
+  public Optional<PlaneRecord> find(long id) {
+    return query(SELECT + " WHERE id = ?", id, null).stream().findFirst();
+  }
+
+  @Override
+  public List<PlaneRecord> ofStructure(long structureId) {
+    return query(SELECT + " WHERE structure_id = ? ORDER BY id", structureId, null);
+  }
+
+  @Override
+  public Optional<PlaneRecord> findByName(long structureId, String name) {
+    return query(SELECT + " WHERE structure_id = ? AND name = ?", structureId, name.strip())
+        .stream()
+        .findFirst();
+  }
+
+  private List<PlaneRecord> query(String sql, long key, String name) {
+    return db.call(
+        c -> {
+          List<PlaneRecord> out = new ArrayList<>();
+          try (PreparedStatement s = c.prepareStatement(sql)) {
+            s.setLong(1, key);
+            if (name != null) {
+              s.setString(2, name);
+            }
+            try (ResultSet r = s.executeQuery()) {
+              while (r.next()) {
+                long id = r.getLong("id");
+                out.add(
+                    new PlaneRecord(
+                        id,
+                        r.getLong("structure_id"),
+                        r.getString("name"),
+                        new PlaneGrid(
+                            r.getInt("lifts"),
+                            r.getInt("bays"),
+                            null,
+                            null,
+                            Support.fromLabel(r.getString("support")))));
+              }
+            }
+          }
+          List<PlaneRecord> full = new ArrayList<>(out.size());
+          for (PlaneRecord p : out) {
+            PlaneGrid g = p.grid();
+            full.add(
+                new PlaneRecord(
+                    p.id(),
+                    p.structureId(),
+                    p.name(),
+                    new PlaneGrid(
+                        g.lifts(),
+                        g.bays(),
+                        Millimetres.toMetres(lengths(c, WIDTHS, p.id())),
+                        Millimetres.toMetres(lengths(c, HEIGHTS, p.id())),
+                        g.support())));
+          }
+          return full;
+        });
+  }
+
+  private static List<Integer> lengths(Connection c, String sql, long planeId)
+      throws SQLException {
+    try (PreparedStatement s = c.prepareStatement(sql)) {
+      s.setLong(1, planeId);
+      try (ResultSet r = s.executeQuery()) {
+        List<Integer> out = new ArrayList<>();
+        while (r.next()) {
+          out.add(r.getInt(1));
+        }
+        return out;
+      }
+    }
+  }
+}

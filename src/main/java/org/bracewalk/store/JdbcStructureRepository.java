@@ -1,0 +1,87 @@
+package org.bracewalk.store;
+
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.bracewalk.core.model.Structure;
+import org.bracewalk.core.model.StructureKind;
+import org.bracewalk.core.port.StructureRepository;
+
+/** Structures in table {@code structures}. */
+final class JdbcStructureRepository implements StructureRepository {
+  private static final String INSERT =
+      """
+      INSERT INTO structures
+        (site_id, name, kind, description, design_reference, inspection_interval_days)
+      VALUES (?, ?, ?, ?, ?, ?)
+      """;
+  private static final String SELECT =
+      """
+      SELECT id, site_id, name, kind, description, design_reference, inspection_interval_days
+      FROM structures
+      """;
+
+  private final Database db;
+
+  JdbcStructureRepository(Database db) {
+    this.db = db;
+  }
+
+  @Override
+  public Structure add(Structure structure) {
+    return db.call(
+        c -> {
+          try (PreparedStatement s = c.prepareStatement(INSERT, Statement.RETURN_GENERATED_KEYS)) {
+            s.setLong(1, structure.siteId());
+            s.setString(2, structure.name());
+            s.setString(3, structure.kind().label());
+            s.setString(4, structure.description());
+            s.setString(5, structure.designReference());
+            s.setInt(6, structure.inspectionIntervalDays());
+            s.executeUpdate();
+            return structure.withId(Columns.lastId(s));
+          }
+        });
+  }
+
+  @Override
+  public Optional<Structure> find(long id) {
+    return query(SELECT + " WHERE id = ?", id).stream().findFirst();
+  }
+
+  @Override
+  public List<Structure> ofSite(long siteId) {
+    return query(SELECT + " WHERE site_id = ? ORDER BY id", siteId);
+  }
+
+  private List<Structure> query(String sql, long key) {
+    return db.call(
+        c -> {
+          try (PreparedStatement s = c.prepareStatement(sql)) {
+            s.setLong(1, key);
+            try (ResultSet r = s.executeQuery()) {
+              List<Structure> out = new ArrayList<>();
+              while (r.next()) {
+                out.add(read(r));
+              }
+              return out;
+            }
+          }
+        });
+  }
+
+  private static Structure read(ResultSet r) throws SQLException {
+    return new Structure(
+        r.getLong("id"),
+        r.getLong("site_id"),
+        r.getString("name"),
+        StructureKind.fromLabel(r.getString("kind")),
+        r.getString("description"),
+        r.getString("design_reference"),
+        r.getInt("inspection_interval_days"));
+  }
+}

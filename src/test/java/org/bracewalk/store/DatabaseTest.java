@@ -1,0 +1,211 @@
+package org.bracewalk.store;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.List;
+import org.bracewalk.app.Fixtures;
+import org.bracewalk.app.NewInspection;
+import org.bracewalk.app.NewObservation;
+import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.DefectType;
+import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.Inspection;
+import org.bracewalk.core.model.InspectionReason;
+import org.bracewalk.core.model.Observation;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.Photo;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.port.InspectionFinalisedException;
+import org.bracewalk.core.port.StoreException;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class DatabaseTest {
+  @TempDir Path dir;
+
+  private static String pragma(Connection c, String name) throws SQLException {
+    try (Statement s = c.createStatement(); ResultSet r = s.executeQuery("PRAGMA " + name)) {
+      r.next();
+      return r.getString(1);
+    }
+  }
+
+  @Test
+  void everyConnectionHasForeignKeysWalFullSyncAndABusyTimeout() throws Exception {
+    Path file = dir.resolve("sub/folder/b.db");
+    try (Database db = Database.open(file)) {
+      assertThat(Files.exists(file)).isTrue();
+      for (int i = 0; i < 2; i++) {
+        try (Connection c = Database.dataSource(file).getConnection()) {
+          assertThat(pragma(c, "foreign_keys")).isEqualTo("1");
+          assertThat(pragma(c, "journal_mode")).isEqualTo("wal");
+          assertThat(pragma(c, "synchronous")).isEqualTo("2");
+          assertThat(pragma(c, "busy_timeout")).isEqualTo(String.valueOf(Database.BUSY_TIMEOUT_MS));
+        }
+      }
+      assertThat(db.integrityCheck()).isEqualTo("ok");
+    }
+  }
+
+  @Test
+  void reopeningAppliesNoMigrationTwiceAndKeepsTheRecords() {
+    Path file = dir.resolve("b.db");
+    long planeId;
+    try (Database db = Database.open(file)) {
+      planeId = Fixtures.plane(Fixtures.Services.over(db)).id();
+    }
+    try (Database db = Database.open(file)) {
+      PlaneRecord plane = db.planes().find(planeId).orElseThrow();
+      assertThat(plane.grid()).isEqualTo(Fixtures.threeByTwo().grid());
+      assertThat(db.designs().latest(planeId).orElseThrow().design())
+          .isEqualTo(Fixtures.threeByTwo());
+    }
+  }
+
+  @Test
+  void aFileThatIsNotADatabaseIsRefusedByName() throws Exception {
+    Path file = dir.resolve("notes.db");
+    Files.writeString(file, "shopping list: bolts, couplers, tape\n".repeat(200));
+    assertThatThrownBy(() -> Database.open(file))
+        .isInstanceOf(StoreException.class)
+        .hasMessageContaining(file.toString());
+  }
+
+  @Test
+  void recordsComeBackAsStored() {
+    try (Database db = Database.open(dir.resolve("b.db"))) {
+      Fixtures.Services s = Fixtures.Services.over(db);
+      PlaneRecord plane = Fixtures.plane(s);
+      Inspection inspection =
+          s.inspections().start(plane.structureId(),
+              NewInspection.of("M. Okafor", "competent person", InspectionReason.ROUTINE));
+      assertThat(inspection.carriedOutForName()).isEqualTo("Orrin Vale Storage Ltd");
+      Observation o =
+          s.inspections().recordObservation(inspection.id(),
+              new NewObservation(plane.id(), PanelRef.of(2, 1), PanelState.DAMAGED_EFFECTIVE,
+                  Brace.rigid(Diagonal.RISING), 10.1, 1000, DefectType.BENT, "dent near node",
+                  "M. Okafor"));
+      assertThat(db.observations().find(o.id())).contains(o);
+      assertThat(o.bowMm()).isEqualTo(10.1);
+      Photo photo = s.inspections().attachPhoto(o.id(), "b2.jpg", "image/jpeg", new byte[] {1, 2});
+      assertThat(s.inspections().photos(o.id())).containsExactly(photo);
+      assertThat(db.observations().withPhotos(inspection.id())).containsExactly(o.id());
+      assertThat(db.inspections().ofStructure(plane.structureId())).containsExactly(inspection);
+    }
+  }
+
+  @Test
+  void observationsCannotBeChangedOrDeletedEvenBySql() throws Exception {
+    Path file = dir.resolve("b.db");
+    long id;
+    try (Database db = Database.open(file)) {
+      Fixtures.Services s = Fixtures.Services.over(db);
+      PlaneRecord plane = Fixtures.plane(s);
+      long inspection = s.inspections().start(plane.structureId(),
+          NewInspection.of("M. Okafor", "", InspectionReason.ROUTINE)).id();
+      id = s.inspections().recordObservation(inspection,
+          NewObservation.of(plane.id(), PanelRef.of(1, 1), PanelState.SOUND, "M. Okafor")).id();
+    }
+    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
+        Statement st = c.createStatement()) {
+      assertThatThrownBy(() -> st.executeUpdate("UPDATE observations SET state = 'missing'"))
+          .hasMessageContaining("observation " + id).hasMessageContaining("append-only");
+      assertThatThrownBy(() -> st.executeUpdate("DELETE FROM observations"))
+          .hasMessageContaining("append-only");
+    }
+  }
+
+  @Test
+  void aFinalisedInspectionRefusesChangesInCodeAndInTheDatabase() throws Exception {
+    Path file = dir.resolve("b.db");
+    long inspection;
+    long observation;
+    long planeId;
+    try (Database db = Database.open(file)) {
+      Fixtures.Services s = Fixtures.Services.over(db);
+      PlaneRecord plane = Fixtures.plane(s);
+      planeId = plane.id();
+      inspection = s.inspections().start(plane.structureId(),
+          NewInspection.of("M. Okafor", "", InspectionReason.ROUTINE)).id();
+      observation = s.inspections().recordObservation(inspection,
+          NewObservation.of(plane.id(), PanelRef.of(1, 1), PanelState.SOUND, "M. Okafor")).id();
+      s.inspections().finalise(inspection);
+      long id = inspection;
+      assertThatThrownBy(() -> s.inspections().recordObservation(id,
+              NewObservation.of(planeId, PanelRef.of(1, 2), PanelState.SOUND, "M. Okafor")))
+          .isInstanceOf(InspectionFinalisedException.class)
+          .hasMessageContaining("inspection " + id + " is finalised");
+      assertThatThrownBy(() -> s.inspections().correct(observation,
+              NewObservation.of(planeId, PanelRef.of(1, 1), PanelState.MISSING, "M. Okafor"),
+              "wrong panel"))
+          .isInstanceOf(InspectionFinalisedException.class);
+      assertThatThrownBy(() -> s.inspections().finalise(id))
+          .isInstanceOf(InspectionFinalisedException.class);
+      // past the service: the repository meets the trigger and still names the inspection
+      Observation sneaky = new Observation(0, id, planeId, PanelRef.of(1, 2), PanelState.SOUND,
+          null, null, null, null, null, java.time.Instant.now(), "", null, null);
+      assertThatThrownBy(() -> db.observations().add(sneaky))
+          .isInstanceOf(InspectionFinalisedException.class)
+          .satisfies(e -> assertThat(((InspectionFinalisedException) e).inspectionId()).isEqualTo(id));
+      assertThatThrownBy(() -> db.observations().addPhoto(new Photo(0, observation, "x.jpg",
+              "image/jpeg", new byte[] {1}, java.time.Instant.now())))
+          .isInstanceOf(InspectionFinalisedException.class)
+          .hasMessageContaining("inspection " + id);
+    }
+    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
+        Statement st = c.createStatement()) {
+      assertThatThrownBy(() -> st.executeUpdate("UPDATE inspections SET inspector_name = 'X'"))
+          .hasMessageContaining("inspection " + inspection + " is finalised");
+      assertThatThrownBy(() -> st.executeUpdate("DELETE FROM inspections"))
+          .hasMessageContaining("inspection " + inspection + " is finalised");
+    }
+  }
+
+  @Test
+  void foreignKeysRefuseAnObservationOfAnUnknownInspection() {
+    try (Database db = Database.open(dir.resolve("b.db"))) {
+      Fixtures.Services s = Fixtures.Services.over(db);
+      PlaneRecord plane = Fixtures.plane(s);
+      Observation orphan = new Observation(0, 99, plane.id(), PanelRef.of(1, 1), PanelState.SOUND,
+          null, null, null, null, null, java.time.Instant.now(), "", null, null);
+      assertThatThrownBy(() -> db.observations().add(orphan)).isInstanceOf(StoreException.class);
+      assertThat(db.observations().ofInspection(99)).isEmpty();
+    }
+  }
+
+  @Test
+  void aFailedTransactionLeavesNothingBehind() {
+    try (Database db = Database.open(dir.resolve("b.db"))) {
+      Fixtures.Services s = Fixtures.Services.over(db);
+      assertThatThrownBy(() -> db.inTransaction(() -> {
+        s.sites().createSite(Fixtures.site());
+        throw new IllegalStateException("boom");
+      })).hasMessage("boom");
+      assertThat(db.sites().all()).isEmpty();
+      db.inTransaction(() -> s.sites().createSite(Fixtures.site()));
+      assertThat(db.sites().all()).hasSize(1);
+    }
+  }
+
+  @Test
+  void aSecondPlaneOfTheSameNameIsRefusedByName() {
+    try (Database db = Database.open(dir.resolve("b.db"))) {
+      Fixtures.Services s = Fixtures.Services.over(db);
+      PlaneRecord plane = Fixtures.plane(s);
+      assertThatThrownBy(() -> db.planes().add(new PlaneRecord(0, plane.structureId(), "spine",
+              plane.grid())))
+          .isInstanceOf(StoreException.class).hasMessageContaining("'spine'");
+      assertThat(db.planes().ofStructure(plane.structureId())).hasSize(1);
+      assertThat(List.of(plane)).isEqualTo(db.planes().ofStructure(plane.structureId()));
+    }
+  }
+}
