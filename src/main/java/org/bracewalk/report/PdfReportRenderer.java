@@ -33,6 +33,7 @@ import org.bracewalk.core.port.report.Particular;
 import org.bracewalk.core.port.report.FindingPhoto;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.PlaneVerdict;
+import org.bracewalk.core.port.report.RecordedOrder;
 import org.bracewalk.core.port.report.RepairStep;
 import org.bracewalk.core.port.report.RepairStepKind;
 import org.bracewalk.core.port.report.RepairUrgency;
@@ -240,9 +241,7 @@ public final class PdfReportRenderer implements ReportRenderer {
         String value = switch (p) {
           case INSPECTED_AT -> w.dateTime(r.particulars().inspectedAt());
           case RISK_MATTERS -> riskMatters();
-          case ACTION_TAKEN -> r.particulars().actionsTaken().isEmpty()
-              ? w.text("particulars.action.none")
-              : String.join("\n", r.particulars().actionsTaken());
+          case ACTION_TAKEN -> actionsTaken();
           case FURTHER_ACTION -> furtherAction();
           default -> r.particulars().text(p);
         };
@@ -264,6 +263,30 @@ public final class PdfReportRenderer implements ReportRenderer {
         lines.add(w.format("particulars.risk.findings", "count", r.findings().size()));
       }
       return lines.isEmpty() ? w.text("particulars.risk.none") : String.join("\n", lines);
+    }
+
+    private String actionsTaken() {
+      List<RecordedOrder> orders = r.particulars().actionsTaken();
+      if (orders.isEmpty()) {
+        return w.text("particulars.action.none");
+      }
+      List<String> lines = new ArrayList<>();
+      for (RecordedOrder o : orders) {
+        lines.add(w.format("particulars.action.order", "id", o.id(), "at", w.dateTime(o.createdAt()),
+            "by", o.createdBy(), "note", o.note()).strip());
+        for (RecordedOrder.Action a : o.actions()) {
+          String where = a.panel() == null
+              ? w.format("particulars.action.plane", "plane", a.plane())
+              : w.format("repairs.location", "plane", a.plane(), "lift", a.panel().lift(), "bay",
+                  a.panel().bay());
+          String status = a.doneAt() == null ? w.text("particulars.action.outstanding")
+              : w.format("particulars.action.done", "at", w.dateTime(a.doneAt()), "by", a.doneBy());
+          lines.add(w.format("particulars.action.item", "action", w.code("action", a.kind().code()),
+              "where", where, "description", a.description(), "due",
+              a.dueDate() == null ? w.text("list.none") : w.date(a.dueDate()), "status", status));
+        }
+      }
+      return String.join("\n", lines);
     }
 
     private String furtherAction() {
@@ -299,6 +322,11 @@ public final class PdfReportRenderer implements ReportRenderer {
       doc.add(pdf.para(w.format("plane.grid", "lifts", g.lifts(), "bays", g.bays(),
           "width", w.length(wm), "height", w.length(hm),
           "support", w.code("support", g.support().label())), 8.5f));
+      PlaneSection.DesignRef rev = plane.revision();
+      doc.add(pdf.para(rev.author().isBlank()
+          ? w.format("plane.design.no-author", "number", rev.number(), "date", w.date(rev.date()))
+          : w.format("plane.design", "number", rev.number(), "date", w.date(rev.date()), "author",
+              rev.author()), 8.5f));
       List<Parts.Part> parts = Parts.of(state);
       List<Parts.Part> swaying = parts.stream().filter(Parts.Part::sways).toList();
       if (!state.rigid()) {
@@ -401,8 +429,12 @@ public final class PdfReportRenderer implements ReportRenderer {
         t.addCell(pdf.cell(w.format("findings.location", "plane", fd.plane(), "lift",
             fd.panel().lift(), "bay", fd.panel().bay()), pdf.boldFont(7.5f, Palette.GRID)));
         t.addCell(pdf.cell(w.code("state", fd.state().label()), f));
-        t.addCell(pdf.cell(fd.defect(), f));
-        if (fd.bow() != null) {
+        t.addCell(pdf.cell(fd.defect().isEmpty() ? "" : w.code("defect", fd.defect()), f));
+        if (fd.bowMm() != null && fd.bow() == null) {
+          t.addCell(pdf.cell(w.format("findings.measurement.plain", "bow", w.small(fd.bowMm()),
+              "gauge", w.small(fd.gaugeMm())), f));
+          t.addCell(pdf.cell("", f));
+        } else if (fd.bow() != null) {
           t.addCell(pdf.cell(w.format("findings.measurement", "bow", w.small(fd.bow().bowMm()),
               "gauge", w.small(fd.bow().gaugeMm()), "limit", w.small(fd.bow().limitMm())), f));
           String due = fd.bow().dueDate() == null ? w.text("list.none") : w.date(fd.bow().dueDate());

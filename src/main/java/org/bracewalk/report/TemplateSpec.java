@@ -3,6 +3,7 @@ package org.bracewalk.report;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Set;
+import org.bracewalk.core.model.DefectType;
 import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.port.report.Particular;
 import org.bracewalk.core.port.report.PlaneVerdict;
@@ -62,6 +63,11 @@ final class TemplateSpec {
     k.put("particulars.risk.findings", Set.of("count"));
     k.put("particulars.risk.none", Set.of());
     k.put("particulars.action.none", Set.of());
+    k.put("particulars.action.order", Set.of("id", "at", "by", "note"));
+    k.put("particulars.action.item", Set.of("action", "where", "description", "due", "status"));
+    k.put("particulars.action.plane", Set.of("plane"));
+    k.put("particulars.action.done", Set.of("at", "by"));
+    k.put("particulars.action.outstanding", Set.of());
     k.put("particulars.further.plan", Set.of("count", "urgent"));
     k.put("particulars.further.none", Set.of());
     for (Particular p : Particular.values()) {
@@ -117,6 +123,8 @@ final class TemplateSpec {
     k.put("plane.part", Set.of("letter", "state", "lifts", "bays"));
     k.put("plane.part.fixed", Set.of());
     k.put("plane.part.sways", Set.of());
+    k.put("plane.design", Set.of("number", "date", "author"));
+    k.put("plane.design.no-author", Set.of("number", "date"));
     k.put("plane.critical", Set.of("panels"));
     k.put("plane.critical.none", Set.of());
     k.put("plane.uninspected", Set.of("count", "verdict"));
@@ -153,6 +161,10 @@ final class TemplateSpec {
     k.put("findings.col.photos", Set.of());
     k.put("findings.location", Set.of("plane", "lift", "bay"));
     k.put("findings.measurement", Set.of("bow", "gauge", "limit"));
+    k.put("findings.measurement.plain", Set.of("bow", "gauge"));
+    for (DefectType d : DefectType.values()) {
+      k.put("defect." + d.label(), Set.of());
+    }
     k.put("findings.recorded", Set.of("at", "by"));
     k.put("findings.none", Set.of());
     k.put("findings.source", Set.of());

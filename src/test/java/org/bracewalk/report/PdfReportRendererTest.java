@@ -74,7 +74,11 @@ class PdfReportRendererTest {
     }
     assertThat(text).contains("Matters found that could give rise to a risk to health or safety")
         .contains("North elevation: lost rigidity. Plan bracing L3: lost rigidity. Panels not found sound: 5")
-        .contains("Action taken as a result").contains(p.actionsTaken().get(0))
+        .contains("Action taken as a result")
+        .contains("Repair order 4, raised 14 Mar 2025, 08:10 (GMT) by Ada Brennock. Lift 3 closed")
+        .contains("- take out of service, North elevation, whole plane: barrier lift 3 and tag the"
+            + " ladder access (due 14 Mar 2025; done 14 Mar 2025, 08:30 (GMT) by Col Marsh)")
+        .contains("Checked against design revision 3 of 20 Feb 2025, by R. Okafor.")
         .contains("Further action considered necessary The repair plan below: 5 actions, 3 of them at once.");
     assertThat(text).contains("14 Mar 2025, 07:40").contains("Date and time of the inspection");
     assertThat(text).contains("Inspected for (name)").contains("Report made by (position)")
@@ -130,6 +134,7 @@ class PdfReportRendererTest {
       assertThat(text).contains(flat(f.note()));
     }
     assertThat(text).contains("damaged beyond use").contains("bow 24.0 mm over 1000.0 mm, limit 10.0 mm")
+        .contains("bow 6.5 mm over 1000.0 mm").contains("bent or bowed")
         .contains("over twice the limit: offload at once and isolate until repaired (14 Mar 2025)");
   }
 

@@ -40,6 +40,7 @@ import org.bracewalk.core.port.report.FindingPhoto;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.RackDamageLevel;
 import org.bracewalk.core.port.report.RecordFingerprint;
+import org.bracewalk.core.port.report.RecordedOrder;
 import org.bracewalk.core.port.report.RepairStep;
 import org.bracewalk.core.port.report.RepairStepKind;
 import org.bracewalk.core.port.report.RepairOrderContent;
@@ -59,6 +60,8 @@ final class ReportFixtures {
   static final String FRAME = "Transverse frame T1";
   static final String PLAN = "Plan bracing L3";
   static final Instant INSPECTED = Instant.parse("2025-03-14T07:40:00Z");
+  static final PlaneSection.DesignRef REV =
+      new PlaneSection.DesignRef(3, LocalDate.of(2025, 2, 20), "R. Okafor");
 
   private ReportFixtures() {}
 
@@ -69,7 +72,11 @@ final class ReportFixtures {
         "Marten Court, north facade",
         "Tube-and-fitting facade scaffold, 10 bays by 5 lifts, with transverse frames",
         INSPECTED,
-        List.of("Repair order 4 raised 14 Mar 2025: lift 3 closed and signed off; site manager told at 08:10."),
+        List.of(new RecordedOrder(4, Instant.parse("2025-03-14T08:10:00Z"), "Ada Brennock",
+            "Lift 3 closed and signed off; site manager told at 08:10.",
+            List.of(new RecordedOrder.Action(RepairStepKind.TAKE_OUT_OF_SERVICE, FACADE, null, null,
+                "barrier lift 3 and tag the ladder access", LocalDate.of(2025, 3, 14),
+                Instant.parse("2025-03-14T08:30:00Z"), "Col Marsh")))),
         "Ada Brennock",
         "Scaffold inspector (competent person)",
         "Ada Brennock",
@@ -151,7 +158,7 @@ final class ReportFixtures {
                 new RestoreItem(PanelRef.of(3, 1), Brace.rigid(Diagonal.RISING), true),
                 new RestoreItem(PanelRef.of(3, 6), Brace.rigid(Diagonal.FALLING), false)));
     return new PlaneSection(FACADE, design, asBuilt, findings,
-        new PlaneAnalysis(design.grid(), designState, Optional.of(ab), repair));
+        new PlaneAnalysis(design.grid(), designState, Optional.of(ab), repair), REV);
   }
 
   // ---- a transverse frame: 5 lifts x 1 bay, holds ---------------------------------------------
@@ -172,7 +179,7 @@ final class ReportFixtures {
         List.of(new Block(List.of(1, 2, 3, 4, 5), List.of(1), true)));
     return new PlaneSection(FRAME, design, asBuilt, f,
         new PlaneAnalysis(grid, s, Optional.of(new AsBuiltAnalysis(s, 0, true, List.of())),
-            new RepairPlan(true, List.of(), List.of())));
+            new RepairPlan(true, List.of(), List.of())), REV);
   }
 
   // ---- a free plan-bracing level: 2 x 3, bay 3 loose -----------------------------------------
@@ -204,23 +211,23 @@ final class ReportFixtures {
         List.of(new RestoreItem(PanelRef.of(1, 3), Brace.rigid(Diagonal.RISING), true)));
     return new PlaneSection(PLAN, design, asBuilt, f,
         new PlaneAnalysis(grid, designState, Optional.of(new AsBuiltAnalysis(asFound, 0, false, List.of())),
-            repair));
+            repair), REV);
   }
 
   static List<Finding> findings() {
     Instant at = Instant.parse("2025-03-14T07:52:00Z");
     return List.of(
-        new Finding(FACADE, PanelRef.of(2, 6), PanelState.DAMAGED_EFFECTIVE, "bent", null,
+        new Finding(FACADE, PanelRef.of(2, 6), PanelState.DAMAGED_EFFECTIVE, "bent", 6.5, 1000.0, null,
             "Slight bow near the lower coupler.", at, "Ada Brennock", List.of(photoOf(Color.ORANGE))),
-        new Finding(FACADE, PanelRef.of(3, 1), PanelState.MISSING, "removed", null,
+        new Finding(FACADE, PanelRef.of(3, 1), PanelState.MISSING, "other", null, null, null,
             "Brace and both couplers gone; marks of impact on the standard.", at, "Ada Brennock",
             List.of(photoOf(Color.RED), photoOf(Color.BLUE))),
-        new Finding(FACADE, PanelRef.of(3, 6), PanelState.DAMAGED_INEFFECTIVE, "bent",
+        new Finding(FACADE, PanelRef.of(3, 6), PanelState.DAMAGED_INEFFECTIVE, "bent", 24.0, 1000.0,
             new BowAssessment(24.0, 1000, 10.0, RackDamageLevel.OFFLOAD_AND_ISOLATE, LocalDate.of(2025, 3, 14)),
             "Kinked at mid-length.", at, "Ada Brennock", List.of()),
-        new Finding(FACADE, PanelRef.of(4, 9), PanelState.EXTRA, "", null,
+        new Finding(FACADE, PanelRef.of(4, 9), PanelState.EXTRA, "", null, null, null,
             "Brace added by the crew, not on the drawing.", at, "Ada Brennock", List.of()),
-        new Finding(PLAN, PanelRef.of(1, 3), PanelState.MISSING, "removed", null, "", at,
+        new Finding(PLAN, PanelRef.of(1, 3), PanelState.MISSING, "", null, null, null, "", at,
             "Ada Brennock", List.of()));
   }
 

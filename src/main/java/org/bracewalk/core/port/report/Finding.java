@@ -12,8 +12,10 @@ import org.bracewalk.core.model.PanelState;
  * @param plane the plane's name
  * @param panel lift and bay
  * @param state what was found
- * @param defect the defect type as recorded (free text or a code), may be empty
- * @param bow the measured bow and its level when a racking member's bow was measured, else null
+ * @param defect the defect type's code ({@code bent}, {@code torn}, ...), or empty when none
+ * @param bowMm the measured bow in millimetres, or {@code null} when none was measured
+ * @param gaugeMm the straight edge it was measured over, millimetres ({@code null} without a bow)
+ * @param bow the bow judged against the racking limits (racking only), else {@code null}
  * @param note the inspector's note, may be empty
  * @param recordedAt when the observation was recorded
  * @param recordedBy who recorded it
@@ -24,6 +26,8 @@ public record Finding(
     PanelRef panel,
     PanelState state,
     String defect,
+    Double bowMm,
+    Double gaugeMm,
     BowAssessment bow,
     String note,
     Instant recordedAt,
@@ -34,6 +38,12 @@ public record Finding(
     Objects.requireNonNull(panel, "panel");
     Objects.requireNonNull(state, "state");
     defect = defect == null ? "" : defect;
+    if (bow != null && bowMm == null) {
+      throw new IllegalArgumentException("a damage level needs the bow it was judged from");
+    }
+    if (bowMm != null && gaugeMm == null) {
+      throw new IllegalArgumentException("a bow needs the gauge length it was measured over");
+    }
     note = note == null ? "" : note;
     recordedBy = recordedBy == null ? "" : recordedBy;
     photos = List.copyOf(photos);

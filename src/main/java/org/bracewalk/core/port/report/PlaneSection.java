@@ -16,19 +16,30 @@ import org.bracewalk.core.model.PlaneDesign;
  * @param asBuilt the as-built state that follows from the findings
  * @param findings the latest finding per panel (a panel without one was not inspected)
  * @param analysis the engine's analysis of {@code asBuilt} against {@code design}
+ * @param revision the design revision in force: its number, date and author
  */
 public record PlaneSection(
     String name,
     PlaneDesign design,
     AsBuiltPlane asBuilt,
     Map<PanelRef, PanelFinding> findings,
-    PlaneAnalysis analysis) {
+    PlaneAnalysis analysis,
+    DesignRef revision) {
   public PlaneSection {
     Objects.requireNonNull(name, "name");
     Objects.requireNonNull(design, "design");
     Objects.requireNonNull(asBuilt, "asBuilt");
     Objects.requireNonNull(analysis, "analysis");
+    Objects.requireNonNull(revision, "revision");
     findings = Map.copyOf(findings);
+  }
+
+  /** Which design revision a plane was checked against. */
+  public record DesignRef(int number, java.time.LocalDate date, String author) {
+    public DesignRef {
+      Objects.requireNonNull(date, "date");
+      author = author == null ? "" : author;
+    }
   }
 
   public PlaneVerdict verdict() {

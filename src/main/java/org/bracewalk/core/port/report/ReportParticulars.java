@@ -9,8 +9,8 @@ import java.util.List;
  * is missing; {@link #missing(boolean)} lists every one, so a report is refused naming them all at
  * once rather than one per attempt.
  *
- * @param actionsTaken Sch. 7 item 6: one line per repair order or action recorded against the
- *     inspection, in the words recorded (empty when none is recorded; the report then says so)
+ * @param actionsTaken Sch. 7 item 6: the repair orders recorded against the inspection (empty
+ *     when none is recorded; the report then says so)
  */
 public record ReportParticulars(
     String clientName,
@@ -18,7 +18,7 @@ public record ReportParticulars(
     String equipmentLocation,
     String equipmentDescription,
     Instant inspectedAt,
-    List<String> actionsTaken,
+    List<RecordedOrder> actionsTaken,
     String reporterName,
     String reporterPosition,
     String competentPerson,
