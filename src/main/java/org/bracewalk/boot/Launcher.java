@@ -3,6 +3,7 @@ package org.bracewalk.boot;
 import java.io.PrintWriter;
 import java.util.Map;
 import org.bracewalk.cli.BracewalkCommand;
+import org.bracewalk.cli.ReportCommands;
 import org.bracewalk.cli.StoreCommands;
 import picocli.CommandLine;
 
@@ -26,6 +27,7 @@ public final class Launcher {
   static CommandLine commandLine(Map<String, String> env, AppContext context) {
     CommandLine cli = new CommandLine(new BracewalkCommand());
     StoreCommands.addTo(cli, context.cliContext(env));
+    ReportCommands.addTo(cli, context.cliContext(env), context.reportFactory(env));
     return cli;
   }
 

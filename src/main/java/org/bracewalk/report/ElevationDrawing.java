@@ -72,7 +72,8 @@ final class ElevationDrawing {
     double wm = g.bayWidths().stream().mapToDouble(Double::doubleValue).sum();
     double hm = g.liftHeights().stream().mapToDouble(Double::doubleValue).sum();
     float s = (float) Math.min((width - LEFT - RIGHT) / wm, (height - TOP - BOTTOM) / hm);
-    float ox = x + LEFT;
+    // centred across the box; lift labels and heights stay beside the grid
+    float ox = x + LEFT + (float) Math.max(0, (width - LEFT - RIGHT - wm * s) / 2);
     float oy = y + BOTTOM;
     float[] xs = new float[n + 1];
     float[] ys = new float[m + 1];
