@@ -137,7 +137,7 @@ final class Templates {
       } catch (IllegalArgumentException bad) {
         faults.add("key '" + key + "' " + bad.getMessage());
       }
-      for (int i = 0; i < value.length(); ) {
+      for (int i = encoder.canEncode(value) ? value.length() : 0; i < value.length(); ) {
         int cp = value.codePointAt(i);
         if (cp >= ' ' && !encoder.canEncode(new String(Character.toChars(cp)))) {
           faults.add(
