@@ -47,6 +47,11 @@ public final class AppContext {
     return clock;
   }
 
+  /** The engine every command uses. */
+  public PlaneAnalyzer analyzer() {
+    return analyzer;
+  }
+
   /** The variable naming a folder of edited wording templates (default: the packed ones). */
   public static final String TEMPLATES_VARIABLE = "BRACEWALK_TEMPLATES";
 
