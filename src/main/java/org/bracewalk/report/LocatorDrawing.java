@@ -60,6 +60,16 @@ final class LocatorDrawing {
       t.setLineWidth(0.9f);
       Glyphs.line(t, xs[0] - 2, ys[0], xs[n] + 2, ys[0]);
     }
+    if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE && !a.lifts().isEmpty()) {
+      int lo = Math.max(1, a.lifts().stream().mapToInt(Integer::intValue).min().getAsInt());
+      int hi = Math.min(m, a.lifts().stream().mapToInt(Integer::intValue).max().getAsInt());
+      if (lo <= hi) {
+        t.setColorStroke(Palette.LOST);
+        t.setLineWidth(1.2f);
+        t.rectangle(xs[0], ys[lo - 1], xs[n] - xs[0], ys[hi] - ys[lo - 1]);
+        t.stroke();
+      }
+    }
     if (a.type() != RepairStepKind.TAKE_OUT_OF_SERVICE) {
       int i = a.panel().lift();
       int j = a.panel().bay();

@@ -58,8 +58,12 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
     Pdf pdf = new Pdf();
     Document doc = new Document(PageSize.A4, 40, 40, 42, 50);
     ByteArrayOutputStream bytes = new ByteArrayOutputStream(32 * 1024);
+    PageFurniture furniture = new PageFurniture(pdf, w, order.stamp(), h.draft(),
+        w.text("doc.order.title"), w.dateTime(h.issuedAt()));
     try {
       PdfWriter writer = PdfWriter.getInstance(doc, bytes);
+      writer.setPageEvent(furniture);
+      furniture.describe(doc);
       doc.open();
       Paragraph title = new Paragraph(w.text("doc.order.title"), pdf.boldFont(17f));
       title.setSpacingAfter(2f);
@@ -106,9 +110,7 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
     } catch (DocumentException e) {
       throw new RenderingException("the repair order could not be laid out: " + e.getMessage(), e);
     }
-    byte[] done = PageFurniture.apply(bytes.toByteArray(), pdf, w, order.stamp(), h.draft(),
-        w.text("doc.order.title"), w.dateTime(h.issuedAt()));
-    out.write(done);
+    out.write(bytes.toByteArray());
   }
 
   private static void row(PdfPTable table, PdfWriter writer, Pdf pdf, Wording w, RepairStep a,

@@ -72,15 +72,14 @@ public final class PdfReportRenderer implements ReportRenderer {
               + String.join(", ", missing.stream().map(Particular::code).toList()));
     }
     Pdf pdf = new Pdf();
-    byte[] body;
+    PageFurniture furniture = new PageFurniture(pdf, w, report.stamp(), header.draft(),
+        w.text("doc.report.title"), w.dateTime(header.issuedAt()));
+    byte[] done;
     try {
-      body = new Body(report, w, pdf).build();
+      done = new Body(report, w, pdf, furniture).build();
     } catch (DocumentException e) {
       throw new RenderingException("the report could not be laid out: " + e.getMessage(), e);
     }
-    byte[] done =
-        PageFurniture.apply(body, pdf, w, report.stamp(), header.draft(),
-            w.text("doc.report.title"), w.dateTime(header.issuedAt()));
     out.write(done);
   }
 
@@ -89,18 +88,22 @@ public final class PdfReportRenderer implements ReportRenderer {
     private final ReportContent r;
     private final Wording w;
     private final Pdf pdf;
+    private final PageFurniture furniture;
     private final Document doc = new Document(PageSize.A4, 40, 40, 42, 50);
     private PdfWriter writer;
 
-    Body(ReportContent r, Wording w, Pdf pdf) {
+    Body(ReportContent r, Wording w, Pdf pdf, PageFurniture furniture) {
       this.r = r;
       this.w = w;
       this.pdf = pdf;
+      this.furniture = furniture;
     }
 
     byte[] build() throws DocumentException {
       ByteArrayOutputStream bytes = new ByteArrayOutputStream(64 * 1024);
       writer = PdfWriter.getInstance(doc, bytes);
+      writer.setPageEvent(furniture);
+      furniture.describe(doc);
       doc.open();
       firstPage();
       Map<String, Map<PanelRef, List<Integer>>> actionsAt = actionsAt(r.actions());

@@ -69,8 +69,11 @@ class PdfRepairOrderRendererTest {
       for (PDPage page : d.getPages()) {
         for (COSName name : page.getResources().getXObjectNames()) {
           if (page.getResources().getXObject(name) instanceof PDFormXObject form) {
-            forms++;
             String content = new String(form.getContentStream().toByteArray());
+            if (content.contains("Tj")) {
+              continue; // the page total of "page n of N"
+            }
+            forms++;
             assertThat(content).contains(" l").contains(" re");
           }
         }
