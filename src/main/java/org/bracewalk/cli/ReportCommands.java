@@ -242,11 +242,16 @@ public final class ReportCommands {
       Path dir = Files.createTempDirectory("bracewalk-bench");
       try {
         try (AppServices s = context.services().open(dir.resolve("bench.db"))) {
-          ReportBenchmark bench = new ReportBenchmark(s, reports.over(s), System::nanoTime);
+          var threads = java.lang.management.ManagementFactory.getThreadMXBean();
+          ReportBenchmark bench = new ReportBenchmark(s, reports.over(s), System::nanoTime,
+              threads::getCurrentThreadCpuTime);
+          out.println("wall-clock ms (CPU ms of the thread); first run cold, then the median of"
+              + " the next " + Math.max(1, runs - 1));
+          out.flush();
           for (ReportBenchmark.Figure f : List.of(bench.demo(runs), bench.large(planes, size, runs))) {
-            out.printf("%s: %d planes, %d panels: first %d ms, median of the next %d runs %d ms,"
-                + " %d kB%n", f.what(), f.planes(), f.panels(), f.firstMillis(),
-                Math.max(1, runs - 1), f.medianMillis(), f.bytes() / 1024);
+            out.printf("%s: %d planes, %d panels, %d kB: first %d ms (%d), then %d ms (%d)%n",
+                f.what(), f.planes(), f.panels(), f.bytes() / 1024, f.firstMillis(),
+                f.firstCpuMillis(), f.medianMillis(), f.medianCpuMillis());
             out.flush();
           }
         }

@@ -209,7 +209,7 @@ final class ElevationDrawing {
           w.format("elevation.lift", "n", i), ox - 3f, cy - fs * 0.35f);
       Parts.Part part = swayingPartOfLift(parts, i);
       if (part != null) {
-        Glyphs.label(cb, bold, String.valueOf(part.letter()), ox - 3f - fs * 2.6f - 4f, cy, fs,
+        Glyphs.label(cb, bold, part.letter(), ox - 3f - fs * 2.6f - 4f, cy, fs,
             Palette.LOST);
       }
       String hText = w.length(g.liftHeights().get(i - 1));

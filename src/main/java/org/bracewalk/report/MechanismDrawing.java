@@ -44,7 +44,8 @@ final class MechanismDrawing {
     MechanismShape moved = MechanismShape.of(g, part.block(), angle);
 
     Glyphs.text(cb, bold, 8f, Palette.LOST, PdfContentByte.ALIGN_LEFT,
-        w.format("mechanism.title", "part", String.valueOf(part.letter())), x, y + height - 9f);
+        w.format(g.support() == Support.FREE ? "mechanism.title.free" : "mechanism.title", "part",
+            part.letter()), x, y + height - 9f);
     float noteHeight = 22f;
     ColumnText ct = new ColumnText(cb);
     ct.setSimpleColumn(

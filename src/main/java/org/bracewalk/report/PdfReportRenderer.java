@@ -25,6 +25,7 @@ import org.bracewalk.core.analysis.PlacedBrace;
 import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.Support;
 import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.core.port.ReportRenderer;
 import org.bracewalk.core.port.report.Finding;
@@ -330,14 +331,18 @@ public final class PdfReportRenderer implements ReportRenderer {
           ? w.format("plane.design.no-author", "number", rev.number(), "date", w.date(rev.date()))
           : w.format("plane.design", "number", rev.number(), "date", w.date(rev.date()), "author",
               rev.author()), 8.5f));
+      boolean free = g.support() == Support.FREE;
       List<Parts.Part> parts = Parts.of(state);
-      List<Parts.Part> swaying = parts.stream().filter(Parts.Part::sways).toList();
-      if (!state.rigid()) {
+      Parts.Part moving = Parts.moving(state, free);
+      if (!state.rigid() && parts.size() > 1) {
         for (Parts.Part part : parts) {
-          Font f = part.sways() ? pdf.boldFont(8.5f, Palette.LOST) : pdf.font(8.5f);
-          Paragraph p = new Paragraph(w.format("plane.part", "letter", String.valueOf(part.letter()),
-              "state", w.text(part.sways() ? "plane.part.sways" : "plane.part.fixed"),
-              "lifts", listOrNone(part.block().lifts()), "bays", listOrNone(part.block().bays())), f);
+          String lifts = listOrNone(part.block().lifts());
+          String bays = listOrNone(part.block().bays());
+          Paragraph p = part.held()
+              ? new Paragraph(w.format("plane.part.held", "lifts", lifts, "bays", bays), pdf.font(8.5f))
+              : new Paragraph(w.format("plane.part", "letter", part.letter(), "state",
+                  w.text(free ? "plane.part.free" : "plane.part.sways"), "lifts", lifts, "bays", bays),
+                  pdf.boldFont(8.5f, Palette.LOST));
           p.setIndentationLeft(8f);
           doc.add(p);
         }
@@ -366,14 +371,14 @@ public final class PdfReportRenderer implements ReportRenderer {
         } else {
           doc.add(new Paragraph(w.text("plane.repair.impossible"), pdf.boldFont(8.5f, Palette.LOST)));
         }
-        if (swaying.size() > 1) {
-          doc.add(pdf.para(w.format("mechanism.more", "n", swaying.size()), 8.5f));
+        if (moving != null && state.degreesOfFreedom() > 1) {
+          doc.add(pdf.para(w.format("mechanism.more", "n", state.degreesOfFreedom()), 8.5f));
         }
-        if (swaying.isEmpty() && state.oneWayOnly()) {
+        if (moving == null && state.oneWayOnly()) {
           doc.add(pdf.para(w.text("mechanism.one-way"), 8.5f));
         }
       }
-      drawings(plane, actionsAt, swaying.isEmpty() ? null : swaying.get(0));
+      drawings(plane, actionsAt, moving);
     }
 
     private void add(Element e) {

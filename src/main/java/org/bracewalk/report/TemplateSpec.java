@@ -121,8 +121,9 @@ final class TemplateSpec {
     k.put("support.pinned-base", Set.of());
     k.put("support.free", Set.of());
     k.put("plane.part", Set.of("letter", "state", "lifts", "bays"));
-    k.put("plane.part.fixed", Set.of());
+    k.put("plane.part.held", Set.of("lifts", "bays"));
     k.put("plane.part.sways", Set.of());
+    k.put("plane.part.free", Set.of());
     k.put("plane.design", Set.of("number", "date", "author"));
     k.put("plane.design.no-author", Set.of("number", "date"));
     k.put("plane.critical", Set.of("panels"));
@@ -139,6 +140,7 @@ final class TemplateSpec {
     k.put("elevation.bay", Set.of("n"));
     k.put("elevation.overall", Set.of("width", "height"));
     k.put("mechanism.title", Set.of("part"));
+    k.put("mechanism.title.free", Set.of("part"));
     k.put("mechanism.note", Set.of("angle"));
     k.put("mechanism.one-way", Set.of());
     k.put("mechanism.more", Set.of("n"));

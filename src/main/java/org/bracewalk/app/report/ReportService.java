@@ -307,7 +307,7 @@ public final class ReportService {
       }
     }
     LocalDate day = inspection.startedAt().atZone(zone).toLocalDate();
-    List<RepairStep> steps = RepairPlanner.plan(sections, bows, day);
+    List<RepairStep> steps = RepairSteps.plan(sections, bows, day);
 
     Map<Long, String> planeNames = new HashMap<>();
     r.planes().forEach(p -> planeNames.put(p.plane().id(), p.plane().name()));

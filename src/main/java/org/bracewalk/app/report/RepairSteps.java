@@ -40,10 +40,10 @@ import org.bracewalk.core.port.report.RepairUrgency;
  * design lacks is a brace added (a deviation: engineering approval first), a panel nobody has
  * looked at is inspected first.
  */
-public final class RepairPlanner {
+public final class RepairSteps {
   private static final int REPAIR_WITHIN_DAYS = 28;
 
-  private RepairPlanner() {}
+  private RepairSteps() {}
 
   /**
    * @param planes the planes with their analyses, in report order
