@@ -11,6 +11,7 @@ import org.bracewalk.core.analysis.RepairBrace;
 import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
@@ -181,7 +182,7 @@ final class ElevationDrawing {
         if (repair != null) {
           cb.saveState();
           Glyphs.stroke(cb, Glyphs.Stroke.REPAIR, weight);
-          members(cb, repair.diagonal(), x0, y0, x1, y1, 0.1f);
+          members(cb, repair.diagonal(), repair.kind(), x0, y0, x1, y1, 0.1f);
           cb.restoreState();
         }
         float cx = (x0 + x1) / 2;
@@ -299,22 +300,23 @@ final class ElevationDrawing {
       return Glyphs.Mark.QUESTION;
     }
     PanelState st = f.state();
-    Diagonal found = f.memberFound() != null ? f.memberFound().diagonal() : null;
+    Brace foundBrace = f.memberFound();
+    Diagonal found = foundBrace != null ? foundBrace.diagonal() : null;
     switch (st) {
       case SOUND, DAMAGED_EFFECTIVE -> {
-        Diagonal d = found != null ? found : design != null ? design.diagonal() : null;
-        if (d != null) {
+        Brace b = foundBrace != null ? foundBrace : design;
+        if (b != null) {
           cb.saveState();
           Glyphs.stroke(cb, st == PanelState.SOUND ? Glyphs.Stroke.SOUND : Glyphs.Stroke.DAMAGED, weight);
-          members(cb, d, x0, y0, x1, y1, 0.04f);
+          members(cb, b.diagonal(), b.kind(), x0, y0, x1, y1, 0.04f);
           cb.restoreState();
         }
-        return st == PanelState.SOUND || d == null ? Glyphs.Mark.NONE : Glyphs.Mark.OPEN_TRIANGLE;
+        return st == PanelState.SOUND || b == null ? Glyphs.Mark.NONE : Glyphs.Mark.OPEN_TRIANGLE;
       }
       case EXTRA -> {
         cb.saveState();
         Glyphs.stroke(cb, Glyphs.Stroke.EXTRA, weight);
-        members(cb, found, x0, y0, x1, y1, 0.04f);
+        members(cb, found, foundBrace.kind(), x0, y0, x1, y1, 0.04f);
         cb.restoreState();
         return Glyphs.Mark.PLUS;
       }
@@ -322,7 +324,7 @@ final class ElevationDrawing {
         if (found != null) {
           cb.saveState();
           Glyphs.stroke(cb, Glyphs.Stroke.SOUND, weight);
-          members(cb, found, x0, y0, x1, y1, 0.04f);
+          members(cb, found, foundBrace.kind(), x0, y0, x1, y1, 0.04f);
           cb.restoreState();
         }
         Diagonal lost = design == null ? null : minus(design.diagonal(), found);
@@ -330,7 +332,7 @@ final class ElevationDrawing {
           cb.saveState();
           Glyphs.stroke(cb,
               st == PanelState.MISSING ? Glyphs.Stroke.MISSING : Glyphs.Stroke.INEFFECTIVE, weight);
-          members(cb, lost, x0, y0, x1, y1, 0.04f);
+          members(cb, lost, design.kind(), x0, y0, x1, y1, 0.04f);
           cb.restoreState();
         }
         return st == PanelState.MISSING ? Glyphs.Mark.SLASHED_RING : Glyphs.Mark.FILLED_TRIANGLE;
@@ -339,6 +341,33 @@ final class ElevationDrawing {
         return Glyphs.Mark.QUESTION;
       }
     }
+  }
+
+  /**
+   * Strokes members of a kind: tension-only ones (rods, cables, straps) thinner, with a small eye
+   * at each end, in whatever style the state set.
+   */
+  static void members(PdfContentByte cb, Diagonal d, MemberKind kind, float x0, float y0,
+      float x1, float y1, float inset) {
+    if (kind != MemberKind.TENSION_ONLY) {
+      members(cb, d, x0, y0, x1, y1, inset);
+      return;
+    }
+    cb.setLineWidth(0.6f);
+    members(cb, d, x0, y0, x1, y1, inset);
+    float dx = (x1 - x0) * Math.max(inset, 0.06f);
+    float dy = (y1 - y0) * Math.max(inset, 0.06f);
+    float r = Math.max(1.1f, Math.min(2f, Math.min(x1 - x0, y1 - y0) * 0.05f));
+    cb.setLineDash(0f);
+    if (d.hasRising()) {
+      cb.circle(x0 + dx, y0 + dy, r);
+      cb.circle(x1 - dx, y1 - dy, r);
+    }
+    if (d.hasFalling()) {
+      cb.circle(x0 + dx, y1 - dy, r);
+      cb.circle(x1 - dx, y0 + dy, r);
+    }
+    cb.stroke();
   }
 
   /** The members of {@code whole} that {@code part} does not have. */

@@ -7,7 +7,7 @@ import com.lowagie.text.pdf.PdfContentByte;
 final class Legend {
   private static final String[] ENTRIES = {
     "design", "sound", "damaged-effective", "damaged-ineffective", "missing", "extra",
-    "not-inspected", "opening", "critical", "repair", "part"
+    "not-inspected", "opening", "critical", "repair", "part", "tension"
   };
   private static final float ROW = 11f;
   private static final int COLUMNS = 2;
@@ -98,6 +98,11 @@ final class Legend {
       case "part" -> {
         Glyphs.hatch(cb, x0 + 4, y0, 18, 8, Palette.tint(0), 0);
         Glyphs.label(cb, bold, "B", x0 + 13, cy, 5.5f, Palette.LOST);
+      }
+      case "tension" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.SOUND, 1f);
+        ElevationDrawing.members(cb, org.bracewalk.core.model.Diagonal.RISING,
+            org.bracewalk.core.model.MemberKind.TENSION_ONLY, x0, y0, x1, y1, 0f);
       }
       default -> throw new IllegalArgumentException(entry);
     }

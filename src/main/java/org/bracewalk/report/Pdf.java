@@ -1,11 +1,9 @@
 package org.bracewalk.report;
 
-import com.lowagie.text.Chunk;
 import com.lowagie.text.Element;
 import com.lowagie.text.Font;
 import com.lowagie.text.Paragraph;
 import com.lowagie.text.Phrase;
-import com.lowagie.text.Rectangle;
 import com.lowagie.text.pdf.BaseFont;
 import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
@@ -105,11 +103,5 @@ final class Pdf {
     }
     t.addCell(c);
     return t;
-  }
-
-  static PdfPCell blank(Rectangle border) {
-    PdfPCell c = new PdfPCell(new Phrase(new Chunk(" ")));
-    c.setBorder(border == null ? Rectangle.NO_BORDER : border.getBorder());
-    return c;
   }
 }

@@ -148,7 +148,7 @@ final class TemplateSpec {
     for (String s :
         new String[] {
           "design", "sound", "damaged-effective", "damaged-ineffective", "missing", "extra",
-          "not-inspected", "opening", "critical", "repair", "part"
+          "not-inspected", "opening", "critical", "repair", "part", "tension"
         }) {
       k.put("legend." + s, Set.of());
     }

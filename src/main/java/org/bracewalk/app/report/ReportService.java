@@ -265,7 +265,10 @@ public final class ReportService {
         return section;
       }
     }
-    return "the " + section + " record" + (section.endsWith("s") ? "s" : "");
+    return switch (section) {
+      case "repair orders" -> "the repair orders and their actions";
+      default -> "the " + section + " record";
+    };
   }
 
   // ---- content --------------------------------------------------------------------------------

@@ -160,7 +160,7 @@ class ReportServiceTest {
     RepairAction first = services.store().repairs().actionsOf(order.id()).get(0);
     services.store().repairs().markDone(first.id(), java.time.Instant.parse("2025-03-06T10:00:00Z"), "crew");
     assertThat(reports.verify(pdf).differences())
-        .containsExactly("changed since the document was made: the repair orders records");
+        .containsExactly("changed since the document was made: the repair orders and their actions");
 
     // someone edits the file behind the program's back
     services.close();
