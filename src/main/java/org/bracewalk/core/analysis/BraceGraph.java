@@ -44,9 +44,17 @@ final class BraceGraph {
   }
 
   static BraceGraph of(PlaneGrid grid, Map<PanelRef, Brace> members) {
+    return of(grid, PanelCodes.encode(grid, members));
+  }
+
+  /** The graph of the members coded per panel (see {@link PanelCodes}), in lift-then-bay order. */
+  static BraceGraph of(PlaneGrid grid, byte[] codes) {
     BraceGraph g = new BraceGraph(grid);
-    for (Map.Entry<PanelRef, Brace> e : members.entrySet()) {
-      g.add(e.getKey(), e.getValue());
+    int n = grid.bays();
+    for (int idx = 0; idx < codes.length; idx++) {
+      if (codes[idx] != PanelCodes.NONE) {
+        g.add(idx / n, idx % n, PanelCodes.decode(codes[idx]));
+      }
     }
     return g;
   }
@@ -72,8 +80,10 @@ final class BraceGraph {
 
   /** Adds the member(s) of {@code brace} in panel {@code p}; returns how many edges were added. */
   int add(PanelRef p, Brace brace) {
-    int l = p.lift() - 1;
-    int b = p.bay() - 1;
+    return add(p.lift() - 1, p.bay() - 1, brace);
+  }
+
+  private int add(int l, int b, Brace brace) {
     boolean isRigid = brace.isRigid();
     int added = 0;
     if (brace.diagonal().hasRising()) {
@@ -410,8 +420,10 @@ final class BraceGraph {
   }
 
   private int stoerWagner() {
-    int v = vertexCount;
-    int[][] w = new int[v][v];
+    int size = vertexCount;
+    // Active vertices always occupy positions 0..size-1 so that the inner loops run over
+    // contiguous rows; a merged-away vertex is replaced by the one in the last position.
+    int[][] w = new int[size][size];
     for (int e = 0; e < memberCount; e++) {
       if (rigid[e]) {
         int a = lift[e];
@@ -420,54 +432,51 @@ final class BraceGraph {
         w[b][a]++;
       }
     }
-    int[] active = new int[v];
-    for (int i = 0; i < v; i++) {
-      active[i] = i;
-    }
-    int size = v;
     int best = Integer.MAX_VALUE;
-    int[] key = new int[v];
-    boolean[] added = new boolean[v];
+    int[] key = new int[size];
+    boolean[] added = new boolean[size];
     while (size > 1) {
-      Arrays.fill(key, 0);
-      Arrays.fill(added, false);
+      Arrays.fill(key, 0, size, 0);
+      Arrays.fill(added, 0, size, false);
+      int pick = 0;
       int prev = -1;
-      int last = -1;
       for (int step = 0; step < size; step++) {
-        int pick = -1;
-        for (int k = 0; k < size; k++) {
-          int x = active[k];
-          if (!added[x] && (pick < 0 || key[x] > key[pick])) {
-            pick = x;
-          }
-        }
         added[pick] = true;
-        prev = last;
-        last = pick;
         if (step == size - 1) {
           best = Math.min(best, key[pick]);
-        } else {
-          int[] row = w[pick];
-          for (int k = 0; k < size; k++) {
-            int x = active[k];
-            if (!added[x]) {
-              key[x] += row[x];
+          break;
+        }
+        int[] row = w[pick];
+        int next = -1;
+        for (int k = 0; k < size; k++) {
+          if (!added[k]) {
+            key[k] += row[k];
+            if (next < 0 || key[k] > key[next]) {
+              next = k;
             }
           }
         }
+        prev = pick;
+        pick = next;
       }
-      // Merge last into prev.
+      int last = pick;
+      int[] pr = w[prev];
+      int[] lr = w[last];
       for (int k = 0; k < size; k++) {
-        int x = active[k];
-        w[prev][x] += w[last][x];
-        w[x][prev] = w[prev][x];
+        pr[k] += lr[k];
+        w[k][prev] = pr[k];
       }
-      w[prev][prev] = 0;
-      for (int k = 0; k < size; k++) {
-        if (active[k] == last) {
-          active[k] = active[size - 1];
-          break;
+      pr[prev] = 0;
+      int s = size - 1;
+      if (last != s) {
+        int[] sr = w[s];
+        for (int k = 0; k < size; k++) {
+          if (k != last) {
+            lr[k] = sr[k];
+            w[k][last] = w[k][s];
+          }
         }
+        lr[last] = 0;
       }
       size--;
     }

@@ -1,12 +1,12 @@
 package org.bracewalk.core.analysis;
 
 import java.util.ArrayList;
+import java.util.BitSet;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.TreeMap;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.PanelRef;
@@ -30,9 +30,11 @@ final class BraceGraphPlaneAnalyzer implements PlaneAnalyzer {
   @Override
   public PlaneAnalysis analyse(PlaneDesign design) {
     PlaneGrid grid = design.grid();
-    BraceGraph graph = BraceGraph.of(grid, design.braces());
+    byte[] codes = PanelCodes.encode(grid, design.braces());
+    BraceGraph graph = BraceGraph.of(grid, codes);
     StateAnalysis state = analyse(graph);
-    RepairPlan repair = RepairPlanner.plan(design, design.braces(), graph, false);
+    BitSet openings = PanelCodes.mark(grid, design.openings());
+    RepairPlan repair = RepairPlanner.plan(grid, codes, openings, codes, graph, false);
     return new PlaneAnalysis(grid, state, Optional.empty(), repair);
   }
 
@@ -51,31 +53,37 @@ final class BraceGraphPlaneAnalyzer implements PlaneAnalyzer {
               + " x "
               + grid.bays());
     }
-    StateAnalysis designState = analyse(BraceGraph.of(grid, design.braces()));
-    BraceGraph builtGraph = BraceGraph.of(grid, asBuilt.members());
+    int n = grid.bays();
+    byte[] designCodes = PanelCodes.encode(grid, design.braces());
+    byte[] builtCodes = PanelCodes.encode(grid, asBuilt.members());
+    StateAnalysis designState = analyse(BraceGraph.of(grid, designCodes));
+    BraceGraph builtGraph = BraceGraph.of(grid, builtCodes);
     StateAnalysis builtState = analyse(builtGraph);
 
     boolean rigidIfSound = builtState.rigid();
     if (!asBuilt.uninspected().isEmpty()) {
-      Map<PanelRef, Brace> optimistic = new HashMap<>(asBuilt.members());
-      for (PanelRef p : asBuilt.uninspected()) {
-        Brace b = design.braceAt(p);
-        if (b != null) {
-          optimistic.put(p, b);
-        }
+      byte[] optimistic = builtCodes.clone();
+      BitSet unknown = PanelCodes.mark(grid, asBuilt.uninspected());
+      for (int idx = unknown.nextSetBit(0); idx >= 0; idx = unknown.nextSetBit(idx + 1)) {
+        optimistic[idx] = designCodes[idx];
       }
       rigidIfSound = isRigid(BraceGraph.of(grid, optimistic));
     }
     List<PlacedBrace> extras = new ArrayList<>();
-    for (Map.Entry<PanelRef, Brace> e : new TreeMap<>(asBuilt.members()).entrySet()) {
-      Brace extra = PanelMatch.extra(design.braceAt(e.getKey()), e.getValue());
-      if (extra != null) {
-        extras.add(new PlacedBrace(e.getKey(), extra));
+    for (int idx = 0; idx < builtCodes.length; idx++) {
+      if (builtCodes[idx] != PanelCodes.NONE && builtCodes[idx] != designCodes[idx]) {
+        Brace extra =
+            PanelMatch.extra(PanelCodes.decode(designCodes[idx]), PanelCodes.decode(builtCodes[idx]));
+        if (extra != null) {
+          extras.add(new PlacedBrace(PanelCodes.panel(idx, n), extra));
+        }
       }
     }
     AsBuiltAnalysis built =
         new AsBuiltAnalysis(builtState, asBuilt.uninspected().size(), rigidIfSound, extras);
-    RepairPlan repair = RepairPlanner.plan(design, asBuilt.members(), builtGraph, true);
+    BitSet openings = PanelCodes.mark(grid, design.openings());
+    RepairPlan repair =
+        RepairPlanner.plan(grid, designCodes, openings, builtCodes, builtGraph, true);
     return new PlaneAnalysis(grid, designState, Optional.of(built), repair);
   }
 

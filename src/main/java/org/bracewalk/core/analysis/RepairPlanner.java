@@ -1,16 +1,15 @@
 package org.bracewalk.core.analysis;
 
 import java.util.ArrayList;
+import java.util.BitSet;
 import java.util.HashSet;
 import java.util.Iterator;
 import java.util.List;
-import java.util.Map;
 import java.util.NoSuchElementException;
 import java.util.Set;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.PanelRef;
-import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 
 /**
@@ -23,8 +22,9 @@ import org.bracewalk.core.model.PlaneGrid;
  * panels; openings are never used. Ties go to the lower lift, then the lower bay. O(E α(V)) plus a
  * scan of the empty panels only while blocks remain apart.
  *
- * <p>With tension-only members the greedy pass adds a candidate only when it lowers the number of
- * strongly connected components, then drops every brace that is not needed: the result is
+ * <p>With tension-only members every missing design member is restored, rigid members are added
+ * elsewhere while strong components remain apart, then every brace that is not needed is dropped
+ * (deviations from the design first): the result is
  * irreducible, not provably least (the least cable augmentation is a harder problem: H. Gabow, T.
  * Jordán, SIAM J. Comput. 30 (2000)).
  */
@@ -40,20 +40,30 @@ final class RepairPlanner {
    * design}. With {@code restoreList} the restore-to-design list is filled in too.
    */
   static RepairPlan plan(
-      PlaneDesign design, Map<PanelRef, Brace> analysed, BraceGraph state, boolean restoreList) {
+      PlaneGrid grid,
+      byte[] design,
+      BitSet openings,
+      byte[] analysed,
+      BraceGraph state,
+      boolean restoreList) {
     List<RepairBrace> designCandidates = new ArrayList<>();
     boolean tension = state.hasTension();
-    for (Map.Entry<PanelRef, Brace> e : design.sortedBraces().entrySet()) {
-      Brace missing = PanelMatch.missing(e.getValue(), analysed.get(e.getKey()));
-      if (missing != null) {
-        designCandidates.add(new RepairBrace(e.getKey(), missing, true));
-        tension |= !missing.isRigid();
+    int n = grid.bays();
+    for (int idx = 0; idx < design.length; idx++) {
+      if (design[idx] != PanelCodes.NONE && design[idx] != analysed[idx]) {
+        Brace missing =
+            PanelMatch.missing(PanelCodes.decode(design[idx]), PanelCodes.decode(analysed[idx]));
+        if (missing != null) {
+          designCandidates.add(new RepairBrace(PanelCodes.panel(idx, n), missing, true));
+          tension |= !missing.isRigid();
+        }
       }
     }
+    Candidates space = new Candidates(grid, design, openings, analysed);
     Attempt attempt =
         tension
-            ? tensionRepair(design, analysed, state, designCandidates)
-            : rigidRepair(design, analysed, state, designCandidates);
+            ? tensionRepair(space, state, designCandidates)
+            : rigidRepair(space, state, designCandidates);
     List<RepairBrace> braces = new ArrayList<>(attempt.braces());
     braces.sort((a, b) -> a.panel().compareTo(b.panel()));
     List<RestoreItem> restore = new ArrayList<>();
@@ -70,17 +80,14 @@ final class RepairPlanner {
   }
 
   private static Attempt rigidRepair(
-      PlaneDesign design,
-      Map<PanelRef, Brace> analysed,
-      BraceGraph state,
-      List<RepairBrace> designCandidates) {
+      Candidates space, BraceGraph state, List<RepairBrace> designCandidates) {
     BraceGraph.UnionFind uf = state.components(false);
     int lifts = state.lifts;
     List<RepairBrace> chosen = new ArrayList<>();
     if (uf.count() == 1) {
       return new Attempt(true, chosen);
     }
-    Iterator<RepairBrace> candidates = candidates(design, analysed, designCandidates);
+    Iterator<RepairBrace> candidates = space.iterator(designCandidates);
     while (uf.count() > 1 && candidates.hasNext()) {
       RepairBrace c = candidates.next();
       if (uf.union(c.panel().lift() - 1, lifts + c.panel().bay() - 1)) {
@@ -91,103 +98,102 @@ final class RepairPlanner {
   }
 
   private static Attempt tensionRepair(
-      PlaneDesign design,
-      Map<PanelRef, Brace> analysed,
-      BraceGraph state,
-      List<RepairBrace> designCandidates) {
+      Candidates space, BraceGraph state, List<RepairBrace> designCandidates) {
+    if (state.strongComponentCount() == 1) {
+      return new Attempt(true, List.of());
+    }
+    // Restore every missing design member: tension members often work only in pairs (each stops
+    // one way of sway), so none may be judged alone.
     BraceGraph g = state.copy();
-    int sccs = g.strongComponentCount();
     List<RepairBrace> chosen = new ArrayList<>();
-    if (sccs == 1) {
-      return new Attempt(true, chosen);
+    for (RepairBrace c : designCandidates) {
+      g.add(c.panel(), c.brace());
+      chosen.add(c);
     }
-    int lifts = state.lifts;
     int[] comp = g.strongComponents();
-    Iterator<RepairBrace> candidates = candidates(design, analysed, designCandidates);
-    while (sccs > 1 && candidates.hasNext()) {
-      RepairBrace c = candidates.next();
-      int l = c.panel().lift() - 1;
-      int b = lifts + c.panel().bay() - 1;
-      boolean bothWays = c.brace().isRigid() || c.brace().diagonal() == Diagonal.BOTH;
-      if (bothWays && comp[l] == comp[b]) {
-        continue; // both arcs within one strong component change nothing
-      }
-      int added = g.add(c.panel(), c.brace());
-      int[] next = g.strongComponents();
-      if (next[g.vertexCount] < sccs) {
+    int sccs = comp[g.vertexCount];
+    // Then rigid members elsewhere: one between two strong components always merges them.
+    int lifts = state.lifts;
+    Iterator<RepairBrace> others = space.iterator(List.of());
+    while (sccs > 1 && others.hasNext()) {
+      RepairBrace c = others.next();
+      if (comp[c.panel().lift() - 1] != comp[lifts + c.panel().bay() - 1]) {
+        g.add(c.panel(), c.brace());
         chosen.add(c);
-        comp = next;
-        sccs = next[g.vertexCount];
-      } else {
-        g.removeLast(added);
+        comp = g.strongComponents();
+        sccs = comp[g.vertexCount];
       }
     }
-    if (sccs > 1) {
-      return new Attempt(false, chosen);
-    }
-    // Drop every brace that is not needed, last added first.
-    for (int k = chosen.size() - 1; k >= 0; k--) {
-      List<RepairBrace> without = new ArrayList<>(chosen);
-      without.remove(k);
+    // Drop every brace that is not needed: deviations from the design first, then design members
+    // from the top of the plane down; a drop stands when the verdict (or, where no repair is
+    // possible, the number of strong components) is no worse.
+    List<RepairBrace> order = new ArrayList<>(chosen);
+    order.sort(
+        (a, b) ->
+            a.inDesign() != b.inDesign()
+                ? (a.inDesign() ? 1 : -1)
+                : b.panel().compareTo(a.panel()));
+    List<RepairBrace> kept = new ArrayList<>(chosen);
+    for (RepairBrace drop : order) {
+      List<RepairBrace> without = new ArrayList<>(kept);
+      without.remove(drop);
       BraceGraph trial = state.copy();
       for (RepairBrace r : without) {
         trial.add(r.panel(), r.brace());
       }
-      if (trial.strongComponentCount() == 1) {
-        chosen = without;
+      if (trial.strongComponentCount() <= sccs) {
+        kept = without;
       }
     }
-    return new Attempt(true, chosen);
+    return new Attempt(sccs == 1, kept);
   }
 
-  /**
-   * Design panels with missing members first, then every other panel that is not an opening, in
-   * lift-then-bay order, produced lazily so a huge empty plane is scanned only as far as needed.
-   */
-  private static Iterator<RepairBrace> candidates(
-      PlaneDesign design, Map<PanelRef, Brace> analysed, List<RepairBrace> designCandidates) {
-    PlaneGrid grid = design.grid();
-    Iterator<RepairBrace> first = designCandidates.iterator();
-    return new Iterator<>() {
-      private int lift = 1;
-      private int bay = 1;
-      private RepairBrace pending;
+  /** The panels a repair may use, in the order they are tried. */
+  private record Candidates(PlaneGrid grid, byte[] design, BitSet openings, byte[] analysed) {
 
-      @Override
-      public boolean hasNext() {
-        if (pending != null) {
-          return true;
-        }
-        if (first.hasNext()) {
-          pending = first.next();
-          return true;
-        }
-        while (lift <= grid.lifts()) {
-          PanelRef p = new PanelRef(lift, bay);
-          if (++bay > grid.bays()) {
-            bay = 1;
-            lift++;
+    /**
+     * The given design candidates first, then every other panel that is neither in the design
+     * nor an opening and has no rigid member yet, in lift-then-bay order, produced lazily so a huge
+     * plane is scanned only as far as needed.
+     */
+    Iterator<RepairBrace> iterator(List<RepairBrace> designCandidates) {
+      Iterator<RepairBrace> first = designCandidates.iterator();
+      int n = grid.bays();
+      return new Iterator<>() {
+        private int idx;
+        private RepairBrace pending;
+
+        @Override
+        public boolean hasNext() {
+          if (pending != null) {
+            return true;
           }
-          if (design.braceAt(p) == null && !design.isOpening(p)) {
-            Brace there = analysed.get(p);
-            if (there == null || !there.isRigid()) {
-              pending = new RepairBrace(p, DEFAULT_BRACE, false);
+          if (first.hasNext()) {
+            pending = first.next();
+            return true;
+          }
+          while (idx < design.length) {
+            int i = idx++;
+            if (design[i] == PanelCodes.NONE
+                && !openings.get(i)
+                && !PanelCodes.isRigid(analysed[i])) {
+              pending = new RepairBrace(PanelCodes.panel(i, n), DEFAULT_BRACE, false);
               return true;
             }
           }
+          return false;
         }
-        return false;
-      }
 
-      @Override
-      public RepairBrace next() {
-        if (!hasNext()) {
-          throw new NoSuchElementException();
+        @Override
+        public RepairBrace next() {
+          if (!hasNext()) {
+            throw new NoSuchElementException();
+          }
+          RepairBrace r = pending;
+          pending = null;
+          return r;
         }
-        RepairBrace r = pending;
-        pending = null;
-        return r;
-      }
-    };
+      };
+    }
   }
 }

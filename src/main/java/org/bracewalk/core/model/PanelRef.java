@@ -27,6 +27,16 @@ public record PanelRef(int lift, int bay) implements Comparable<PanelRef> {
     return ORDER.compare(this, other);
   }
 
+  /**
+   * A well-mixed hash: the default record hash (31 * lift + bay) collides heavily on large grids
+   * and makes hash maps of a million panels crawl.
+   */
+  @Override
+  public int hashCode() {
+    int h = lift * 0x9E3779B9 + bay * 0x85EBCA6B;
+    return h ^ (h >>> 15);
+  }
+
   @Override
   public String toString() {
     return "lift " + lift + ", bay " + bay;
