@@ -32,7 +32,7 @@ public final class StoreCommands {
     return group;
   }
 
-  /** Registers demo, site, structure, plane, inspection, record, finalise, import, export, history. */
+  /** Registers demo, site, structure, plane, inspection, record, finalise, import, export, history, bench-store. */
   public static void addTo(CommandLine root, CliContext context) {
     root.addSubcommand("demo", new FileCommands.Demo(context));
     root.addSubcommand("site", group("site", "Create and list sites.",
@@ -49,5 +49,6 @@ public final class StoreCommands {
     root.addSubcommand("import", new FileCommands.Import(context));
     root.addSubcommand("export", new FileCommands.Export(context));
     root.addSubcommand("history", new HistoryCommand(context));
+    root.addSubcommand("bench-store", new BenchStoreCommand(context));
   }
 }

@@ -81,7 +81,7 @@ final class JdbcPlaneRepository implements PlaneRepository {
                     s.setInt(4, grid.bays());
                     s.setString(5, grid.support().label());
                     s.executeUpdate();
-                    id = Columns.lastId(s);
+                    id = db.lastInsertId();
                   }
                   insertLengths(c, INSERT_WIDTH, id, widths);
                   insertLengths(c, INSERT_HEIGHT, id, heights);
@@ -133,11 +133,12 @@ final class JdbcPlaneRepository implements PlaneRepository {
     return db.call(
         c -> {
           List<PlaneRecord> out = new ArrayList<>();
-          try (PreparedStatement s = c.prepareStatement(sql)) {
-            s.setLong(1, key);
-            if (name != null) {
-              s.setString(2, name);
-            }
+          PreparedStatement s = db.prepared(sql);
+          s.setLong(1, key);
+          if (name != null) {
+            s.setString(2, name);
+          }
+          {
             try (ResultSet r = s.executeQuery()) {
               while (r.next()) {
                 long id = r.getLong("id");
@@ -166,25 +167,23 @@ final class JdbcPlaneRepository implements PlaneRepository {
                     new PlaneGrid(
                         g.lifts(),
                         g.bays(),
-                        Millimetres.toMetres(lengths(c, WIDTHS, p.id())),
-                        Millimetres.toMetres(lengths(c, HEIGHTS, p.id())),
+                        Millimetres.toMetres(lengths(WIDTHS, p.id())),
+                        Millimetres.toMetres(lengths(HEIGHTS, p.id())),
                         g.support())));
           }
           return full;
         });
   }
 
-  private static List<Integer> lengths(Connection c, String sql, long planeId)
-      throws SQLException {
-    try (PreparedStatement s = c.prepareStatement(sql)) {
-      s.setLong(1, planeId);
-      try (ResultSet r = s.executeQuery()) {
-        List<Integer> out = new ArrayList<>();
-        while (r.next()) {
-          out.add(r.getInt(1));
-        }
-        return out;
+  private List<Integer> lengths(String sql, long planeId) throws SQLException {
+    PreparedStatement s = db.prepared(sql);
+    s.setLong(1, planeId);
+    try (ResultSet r = s.executeQuery()) {
+      List<Integer> out = new ArrayList<>();
+      while (r.next()) {
+        out.add(r.getInt(1));
       }
+      return out;
     }
   }
 }
