@@ -41,6 +41,11 @@ public final class AppContext {
     return clock;
   }
 
+  /** The engine every command uses. */
+  public PlaneAnalyzer analyzer() {
+    return analyzer;
+  }
+
   /** What the store commands need, with the environment given to the program. */
   public CliContext cliContext(Map<String, String> env) {
     return new CliContext(factory(), env, System.getProperty("os.name", ""),

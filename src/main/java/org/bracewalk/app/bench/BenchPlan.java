@@ -1,0 +1,62 @@
+package org.bracewalk.app.bench;
+
+import java.util.List;
+
+/**
+ * What one bench run measures.
+ *
+ * @param seed seed of the random planes (the same seed gives the same planes)
+ * @param bracedShare share of the panels braced in each design, about 0.3
+ * @param fullSizes square planes (lifts = bays) timed with the full analysis of design and as-built
+ * @param verdictRepairSize the plane timed for the verdict and repair of one state alone, with its
+ *     heap use
+ * @param baselineSizes square planes timed with the rigidity-matrix rank; each is also in {@code
+ *     fullSizes} so the two can be compared
+ * @param warmupNanos before the timed samples of a measurement, the work is repeated untimed for
+ *     at least this long (at least once) so that the JIT has compiled it
+ * @param repetitions timed samples per measurement (the median is reported)
+ * @param largeRepetitions timed samples for planes of a million panels or more, and for baselines
+ *     of 30 x 30 or more (each call takes seconds)
+ * @param largeWarmup whether those large measurements get one untimed call first (the code is
+ *     compiled by then; the call mainly settles the heap)
+ * @param minSampleNanos a sample repeats the work until this much time has passed, so that quick
+ *     operations are timed over many calls
+ */
+public record BenchPlan(
+    long seed,
+    double bracedShare,
+    List<Integer> fullSizes,
+    int verdictRepairSize,
+    List<Integer> baselineSizes,
+    long warmupNanos,
+    int repetitions,
+    int largeRepetitions,
+    boolean largeWarmup,
+    long minSampleNanos) {
+
+  public BenchPlan {
+    fullSizes = List.copyOf(fullSizes);
+    baselineSizes = List.copyOf(baselineSizes);
+    if (repetitions < 1 || largeRepetitions < 1 || warmupNanos < 0) {
+      throw new IllegalArgumentException("at least one timed sample per measurement");
+    }
+    for (int size : baselineSizes) {
+      if (!fullSizes.contains(size)) {
+        throw new IllegalArgumentException("baseline size " + size + " must also be timed on the engine");
+      }
+    }
+  }
+
+  /** Seed of the published figures. */
+  public static final long SEED = 20_261_201L;
+
+  /** The full bench: engine 10 to 1000, baseline 10, 20, 30. */
+  public static BenchPlan standard() {
+    return new BenchPlan(SEED, 0.3, List.of(10, 20, 30, 100, 1000), 1000, List.of(10, 20, 30), 2_000_000_000L, 9, 3, true, 20_000_000L);
+  }
+
+  /** {@code --quick}: the same without the 30 x 30 baseline and with fewer samples; under a minute. */
+  public static BenchPlan quick() {
+    return new BenchPlan(SEED, 0.3, List.of(10, 20, 100, 1000), 1000, List.of(10, 20), 500_000_000L, 5, 3, false, 10_000_000L);
+  }
+}

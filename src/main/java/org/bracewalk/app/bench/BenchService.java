@@ -1,0 +1,204 @@
+package org.bracewalk.app.bench;
+
+import java.lang.management.MemoryMXBean;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.OptionalDouble;
+import java.util.Set;
+import java.util.function.Consumer;
+import java.util.function.LongSupplier;
+import java.util.function.Supplier;
+import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.core.model.AsBuiltPlane;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PlaneDesign;
+
+/**
+ * Runs the bench of a {@link BenchPlan}: warm-up samples first, then timed samples, medians
+ * reported. Measures the engine's full analysis (design and as-built: verdicts, blocks, critical
+ * braces, loss tolerance, repair, restore list), the verdict and repair of one state alone ({@link
+ * PlaneAnalyzer#analyse(PlaneDesign)} on the damaged bracing) with its heap use, and the
+ * rigidity-matrix rank baseline, whose freedoms are checked against the engine's.
+ */
+public final class BenchService {
+  private static final double MB = 1024.0 * 1024.0;
+
+  /** From this size on, a rigidity-matrix rank takes seconds: it is sampled like a large plane. */
+  static final int LARGE_BASELINE = 30;
+
+  private final PlaneAnalyzer analyzer;
+  private final LongSupplier nanoClock;
+  private final MemoryMXBean memory;
+  private final List<MemoryPoolMXBean> pools;
+  private final int processors;
+  private final String javaVersion;
+
+  /** Keeps results reachable so that the timed work cannot be optimised away. */
+  private volatile Object sink;
+
+  /**
+   * @param nanoClock a monotonic clock in nanoseconds ({@code System::nanoTime})
+   * @param memory the heap to measure
+   * @param pools the memory pools whose peaks bound the peak heap use
+   */
+  public BenchService(
+      PlaneAnalyzer analyzer,
+      LongSupplier nanoClock,
+      MemoryMXBean memory,
+      List<MemoryPoolMXBean> pools,
+      int processors,
+      String javaVersion) {
+    this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
+    this.nanoClock = Objects.requireNonNull(nanoClock, "nanoClock");
+    this.memory = Objects.requireNonNull(memory, "memory");
+    this.pools = List.copyOf(pools);
+    this.processors = processors;
+    this.javaVersion = javaVersion;
+  }
+
+  /** Runs {@code plan}, telling {@code progress} what it is about to measure. */
+  public BenchReport run(BenchPlan plan, Consumer<String> progress) {
+    List<BenchResult> results = new ArrayList<>();
+    Map<Integer, Double> engineFull = new LinkedHashMap<>();
+    Map<Integer, RandomPlanes.Pair> planes = new LinkedHashMap<>();
+    for (int size : plan.fullSizes()) {
+      RandomPlanes.Pair pair = RandomPlanes.pair(size, size, plan.bracedShare(), plan.seed() + size);
+      planes.put(size, pair);
+      String name = "engine-full-" + size + "x" + size;
+      progress.accept(name);
+      BenchResult r =
+          time(
+              name,
+              "full analysis of design and as built, " + size + " x " + size + " panels",
+              plan,
+              (long) size * size,
+              () -> analyzer.analyse(pair.design(), pair.asBuilt()));
+      results.add(r);
+      engineFull.put(size, r.medianMs());
+      if (size * (long) size >= 1_000_000) {
+        planes.remove(size); // let a million panels go before the next measurement
+      }
+    }
+
+    int vr = plan.verdictRepairSize();
+    String vrName = "engine-verdict-repair-" + vr + "x" + vr;
+    progress.accept(vrName);
+    results.add(verdictAndRepair(vrName, vr, plan));
+
+    boolean agrees = true;
+    Map<String, Double> ratios = new LinkedHashMap<>();
+    for (int size : plan.baselineSizes()) {
+      RandomPlanes.Pair pair =
+          planes.computeIfAbsent(size, s -> RandomPlanes.pair(s, s, plan.bracedShare(), plan.seed() + s));
+      AsBuiltPlane built = pair.asBuilt();
+      String name = "rigidity-matrix-rank-" + size + "x" + size;
+      progress.accept(name);
+      int engineDof = analyzer.analyseState(built.grid(), built.members()).degreesOfFreedom();
+      int matrixDof = RigidityMatrixBaseline.freedoms(built.grid(), built.members());
+      agrees &= engineDof == matrixDof;
+      BenchResult r =
+          time(
+              name,
+              "rank of the rigidity matrix by dense SVD (EJML), as built, " + size + " x " + size + " panels",
+              plan,
+              size >= LARGE_BASELINE ? Long.MAX_VALUE : (long) size * size,
+              () -> RigidityMatrixBaseline.freedoms(built.grid(), built.members()));
+      results.add(r);
+      ratios.put("rigidityMatrixOverEngine" + size + "x" + size, r.medianMs() / engineFull.get(size));
+    }
+    if (engineFull.containsKey(100) && engineFull.containsKey(1000)) {
+      ratios.put("engineFull1000x1000OverFull100x100", engineFull.get(1000) / engineFull.get(100));
+    }
+    return new BenchReport(plan, results, ratios, agrees, processors, javaVersion);
+  }
+
+  /** {@link PlaneAnalyzer#analyse(PlaneDesign)} on the damaged bracing: one verdict and its repair. */
+  private BenchResult verdictAndRepair(String name, int size, BenchPlan plan) {
+    Supplier<PlaneDesign> build =
+        () -> {
+          RandomPlanes.Pair pair = RandomPlanes.pair(size, size, plan.bracedShare(), plan.seed() + size);
+          Set<PanelRef> openings = new HashSet<>(pair.design().openings());
+          openings.removeAll(pair.asBuilt().members().keySet());
+          return new PlaneDesign(pair.asBuilt().grid(), pair.asBuilt().members(), openings);
+        };
+    // Heap: from a collected heap, build the plane and analyse it once; then collect again with
+    // both still held. The pools' peaks during the run bound its peak use from above.
+    memory.gc();
+    long before = memory.getHeapMemoryUsage().getUsed();
+    List<MemoryPoolMXBean> heapPools = pools.stream().filter(p -> p.getType() == MemoryType.HEAP).toList();
+    heapPools.forEach(MemoryPoolMXBean::resetPeakUsage);
+    PlaneDesign damaged = build.get();
+    Object result = analyzer.analyse(damaged);
+    long peak = heapPools.stream().mapToLong(p -> p.getPeakUsage().getUsed()).sum();
+    memory.gc();
+    long after = memory.getHeapMemoryUsage().getUsed();
+    sink = result;
+    sink = null;
+    BenchResult timed =
+        time(
+            name,
+            "verdict and repair of one state (the as-built bracing as a design), " + size + " x " + size
+                + " panels",
+            plan,
+            (long) size * size,
+            () -> analyzer.analyse(damaged));
+    return new BenchResult(
+        timed.name(),
+        timed.description(),
+        timed.medianMs(),
+        timed.samples(),
+        OptionalDouble.of(Math.max(0, after - before) / MB),
+        heapPools.isEmpty() ? OptionalDouble.empty() : OptionalDouble.of(peak / MB));
+  }
+
+  /**
+   * Times {@code work}: an untimed warm-up, then timed samples; each sample repeats the work until
+   * {@link BenchPlan#minSampleNanos()} has passed and counts the time per call.
+   *
+   * @param weight panels in the plane; a million or more (or {@code Long.MAX_VALUE} for a large
+   *     baseline) takes the plan's large repetitions and at most one warm-up call
+   */
+  private BenchResult time(String name, String description, BenchPlan plan, long weight, Supplier<?> work) {
+    boolean large = weight >= 1_000_000;
+    if (large) {
+      if (plan.largeWarmup()) {
+        sink = work.get();
+      }
+    } else if (plan.warmupNanos() > 0) {
+      sample(plan.warmupNanos(), work);
+    }
+    int samples = large ? plan.largeRepetitions() : plan.repetitions();
+    double[] ms = new double[samples];
+    for (int i = 0; i < samples; i++) {
+      ms[i] = sample(plan.minSampleNanos(), work) / 1e6;
+    }
+    sink = null;
+    return new BenchResult(name, description, median(ms), samples, OptionalDouble.empty(), OptionalDouble.empty());
+  }
+
+  private double sample(long minNanos, Supplier<?> work) {
+    long start = nanoClock.getAsLong();
+    long calls = 0;
+    long elapsed;
+    do {
+      sink = work.get();
+      calls++;
+      elapsed = nanoClock.getAsLong() - start;
+    } while (elapsed < minNanos);
+    return (double) elapsed / calls;
+  }
+
+  static double median(double[] values) {
+    double[] v = values.clone();
+    Arrays.sort(v);
+    int n = v.length;
+    return n % 2 == 1 ? v[n / 2] : (v[n / 2 - 1] + v[n / 2]) / 2;
+  }
+}

@@ -1,0 +1,326 @@
+package org.bracewalk.app.panelmap;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.regex.Pattern;
+import org.bracewalk.app.panelmap.PanelMap.GridRow;
+import org.bracewalk.app.panelmap.PanelMap.HeaderEntry;
+import org.bracewalk.core.model.Support;
+
+/**
+ * Reads the panel-map format of {@code shared/design/check-contract.md}: optional {@code key:
+ * value} header lines, then one line per lift, <b>top lift first</b>, one whitespace-separated
+ * token per bay, bay 1 on the left; {@code #} starts a comment line, blank lines are skipped.
+ *
+ * <p>Every problem is a {@link PanelMapException} naming the file, the 1-based line and column, and
+ * what to do. Stateless; safe to share.
+ */
+public final class PanelMapParser {
+
+  /** The header keys a panel map may use. */
+  public static final List<String> HEADER_KEYS = List.of("support", "widths", "heights");
+
+  private static final Pattern NUMBER = Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?");
+  private static final Pattern WORD = Pattern.compile("[A-Za-z][A-Za-z_-]+");
+  private static final Map<String, String> LOOK_ALIKES =
+      Map.of("x", "X", "~x", "~X", "O", "o", "0", "o", "|", "/ or \\", "-", ".");
+
+  /** Parses {@code text}, read from the file {@code source}, as a map of the given kind. */
+  public PanelMap parse(String source, String text, MapKind kind) {
+    return new Run(source, kind).parse(text);
+  }
+
+  private record Word(String text, int column) {}
+
+  /** The state of one parse: kept off the parser so the parser stays shareable. */
+  private static final class Run {
+    private final String source;
+    private final MapKind kind;
+    private final Map<String, HeaderEntry> header = new HashMap<>();
+    private final List<GridRow> rowsTopFirst = new ArrayList<>();
+    private Support support;
+    private List<Double> widths;
+    private List<Double> heights;
+    private List<Word> widthWords;
+    private List<Word> heightWords;
+
+    Run(String source, MapKind kind) {
+      this.source = source;
+      this.kind = kind;
+    }
+
+    PanelMap parse(String text) {
+      String[] lines = text.split("\n", -1);
+      int lastLine = lines.length;
+      int lastLength = 0;
+      for (int i = 0; i < lines.length; i++) {
+        String line = lines[i];
+        if (line.endsWith("\r")) {
+          line = line.substring(0, line.length() - 1);
+        }
+        if (i == 0 && line.startsWith("\uFEFF")) {
+          line = " " + line.substring(1); // keep the columns of the rest of the line
+        }
+        int number = i + 1;
+        String trimmed = line.strip();
+        if (!trimmed.isEmpty()) {
+          lastLine = number;
+          lastLength = line.length();
+        }
+        if (trimmed.isEmpty() || trimmed.startsWith("#")) {
+          continue;
+        }
+        if (looksLikeHeader(line)) {
+          headerLine(number, line);
+        } else {
+          gridLine(number, line);
+        }
+      }
+      if (rowsTopFirst.isEmpty()) {
+        throw error(
+            Math.max(1, lastLine),
+            lastLength + 1,
+            "the map has no grid: after the header, give one line of panel tokens per lift, top"
+                + " lift first, one token per bay (. / \\ X ~/ ~\\ ~X"
+                + (kind == MapKind.DESIGN ? " o" : " ?")
+                + ")");
+      }
+      int lifts = rowsTopFirst.size();
+      int bays = rowsTopFirst.get(0).tokens().size();
+      checkCount("widths", widths, widthWords, bays, "bays", "one width in metres per bay, bay 1 first");
+      checkCount(
+          "heights", heights, heightWords, lifts, "lifts", "one height in metres per lift, bottom lift first");
+      List<GridRow> bottomFirst = new ArrayList<>(rowsTopFirst);
+      Collections.reverse(bottomFirst);
+      return new PanelMap(source, kind, support, widths, heights, bottomFirst, header);
+    }
+
+    private void headerLine(int number, String line) {
+      int keyColumn = firstNonBlank(line) + 1;
+      if (!rowsTopFirst.isEmpty()) {
+        throw error(
+            number,
+            keyColumn,
+            "header line after the grid has started (grid from line "
+                + rowsTopFirst.get(0).line()
+                + "): move '"
+                + line.strip()
+                + "' above the first grid line");
+      }
+      int colon = line.indexOf(':');
+      String rawKey = line.substring(0, colon).strip();
+      String key = rawKey.toLowerCase(Locale.ROOT);
+      if (!HEADER_KEYS.contains(key)) {
+        throw error(
+            number,
+            keyColumn,
+            "unknown header key '"
+                + rawKey
+                + "': the known keys are "
+                + String.join(", ", HEADER_KEYS)
+                + " (write 'key: value'); remove the line or correct the key");
+      }
+      HeaderEntry earlier = header.get(key);
+      if (earlier != null) {
+        throw error(
+            number,
+            keyColumn,
+            "'" + key + "' is given twice (first on line " + earlier.line() + "): keep one of them");
+      }
+      List<Word> words = words(line, colon + 1);
+      int valueColumn = words.isEmpty() ? colon + 2 : words.get(0).column();
+      header.put(key, new HeaderEntry(key, number, valueColumn));
+      switch (key) {
+        case "support" -> support = supportValue(number, valueColumn, words);
+        case "widths" -> {
+          widths = lengths(number, valueColumn, words, "widths", "one width in metres per bay, e.g. 2.4");
+          widthWords = words;
+        }
+        default -> {
+          heights =
+              lengths(number, valueColumn, words, "heights", "one height in metres per lift, e.g. 2.0");
+          heightWords = words;
+        }
+      }
+    }
+
+    private Support supportValue(int number, int valueColumn, List<Word> words) {
+      String value = words.isEmpty() ? "" : words.get(0).text();
+      Support s = Support.fromLabel(value);
+      if (s == null || words.size() > 1) {
+        String got =
+            words.isEmpty()
+                ? "nothing"
+                : "'" + String.join(" ", words.stream().map(Word::text).toList()) + "'";
+        throw error(
+            number,
+            valueColumn,
+            "support must be pinned-base (every base joint held) or free (nothing holds the plane),"
+                + " got "
+                + got);
+      }
+      return s;
+    }
+
+    private List<Double> lengths(int number, int valueColumn, List<Word> words, String key, String hint) {
+      if (words.isEmpty()) {
+        throw error(number, valueColumn, key + ": no values: give " + hint + ", or remove the line");
+      }
+      List<Double> values = new ArrayList<>();
+      for (Word w : words) {
+        String t = w.text();
+        if (!NUMBER.matcher(t).matches()) {
+          String comma = t.matches("[+-]?\\d+,\\d+") ? " (use a point for decimals)" : "";
+          throw error(number, w.column(), key + ": '" + t + "' is not a number" + comma + ": give " + hint);
+        }
+        double v = Double.parseDouble(t);
+        if (!(v > 0) || Double.isInfinite(v)) {
+          throw error(
+              number,
+              w.column(),
+              key + ": every value must be a positive length in metres, got " + t + ": give " + hint);
+        }
+        values.add(v);
+      }
+      return values;
+    }
+
+    private void checkCount(
+        String key, List<Double> values, List<Word> words, int wanted, String what, String hint) {
+      if (values == null || values.size() == wanted) {
+        return;
+      }
+      HeaderEntry entry = header.get(key);
+      int column =
+          values.size() > wanted
+              ? words.get(wanted).column()
+              : words.get(words.size() - 1).column() + words.get(words.size() - 1).text().length();
+      throw error(
+          entry.line(),
+          column,
+          key
+              + ": "
+              + values.size()
+              + (values.size() == 1 ? " value" : " values")
+              + " for "
+              + wanted
+              + " "
+              + what
+              + " in the grid: give "
+              + hint);
+    }
+
+    private void gridLine(int number, String line) {
+      List<Word> words = words(line, 0);
+      List<PanelToken> tokens = new ArrayList<>(words.size());
+      List<Integer> columns = new ArrayList<>(words.size());
+      for (int k = 0; k < words.size(); k++) {
+        Word w = words.get(k);
+        PanelToken t = PanelToken.fromText(w.text());
+        if (t == null) {
+          throw error(number, w.column(), unknownToken(w.text(), k == 0 && rowsTopFirst.isEmpty()));
+        }
+        if (!kind.allows(t)) {
+          throw error(number, w.column(), forbidden(t));
+        }
+        tokens.add(t);
+        columns.add(w.column());
+      }
+      if (!rowsTopFirst.isEmpty()) {
+        GridRow first = rowsTopFirst.get(0);
+        int bays = first.tokens().size();
+        if (tokens.size() != bays) {
+          int column =
+              tokens.size() > bays
+                  ? words.get(bays).column()
+                  : words.get(words.size() - 1).column() + words.get(words.size() - 1).text().length();
+          throw error(
+              number,
+              column,
+              "this grid line has "
+                  + tokens.size()
+                  + (tokens.size() == 1 ? " panel" : " panels")
+                  + " but the first grid line (line "
+                  + first.line()
+                  + ") has "
+                  + bays
+                  + ": give every lift one token per bay (use . for a panel with no diagonal)");
+        }
+      }
+      rowsTopFirst.add(new GridRow(number, tokens, columns));
+    }
+
+    private String unknownToken(String text, boolean couldBeHeader) {
+      StringBuilder sb = new StringBuilder("unknown panel token '").append(text).append("'");
+      String alike = LOOK_ALIKES.get(text);
+      if (alike != null) {
+        sb.append(" (did you mean ").append(alike).append("?)");
+      } else if (couldBeHeader && WORD.matcher(text).matches()) {
+        sb.append(" (a header line is written 'key: value')");
+      }
+      sb.append(": use . / \\ X for none or rigid diagonals, ~/ ~\\ ~X for tension-only members");
+      sb.append(kind == MapKind.DESIGN ? ", o for an opening" : ", ? for a panel not inspected");
+      return sb.toString();
+    }
+
+    private String forbidden(PanelToken t) {
+      if (t == PanelToken.UNKNOWN) {
+        return "'?' (not inspected) belongs in as-built maps only: a design says what should be"
+            + " there; use . for a panel with no diagonal";
+      }
+      return "'o' (opening) belongs in design maps only: an as-built map records what is there;"
+          + " use . for a panel with no diagonal or ? for one not inspected";
+    }
+
+    private PanelMapException error(int line, int column, String problem) {
+      return new PanelMapException(source, line, column, problem);
+    }
+  }
+
+  /** A header line's first word holds the colon: {@code support: free}, {@code widths:2.4 2.4}. */
+  private static boolean looksLikeHeader(String line) {
+    int start = firstNonBlank(line);
+    int colon = line.indexOf(':', start);
+    if (colon < 0) {
+      return false;
+    }
+    for (int i = start; i < colon; i++) {
+      if (Character.isWhitespace(line.charAt(i))) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  private static int firstNonBlank(String line) {
+    for (int i = 0; i < line.length(); i++) {
+      if (!Character.isWhitespace(line.charAt(i))) {
+        return i;
+      }
+    }
+    return line.length();
+  }
+
+  /** The whitespace-separated words of {@code line} from index {@code from}, with 1-based columns. */
+  private static List<Word> words(String line, int from) {
+    List<Word> out = new ArrayList<>();
+    int i = from;
+    while (i < line.length()) {
+      while (i < line.length() && Character.isWhitespace(line.charAt(i))) {
+        i++;
+      }
+      int start = i;
+      while (i < line.length() && !Character.isWhitespace(line.charAt(i))) {
+        i++;
+      }
+      if (i > start) {
+        out.add(new Word(line.substring(start, i), start + 1));
+      }
+    }
+    return out;
+  }
+}

@@ -1,0 +1,142 @@
+package org.bracewalk.app.verdict;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.List;
+import org.bracewalk.app.json.PrettyJson;
+import org.bracewalk.core.analysis.AsBuiltAnalysis;
+import org.bracewalk.core.analysis.Block;
+import org.bracewalk.core.analysis.PlacedBrace;
+import org.bracewalk.core.analysis.PlaneAnalysis;
+import org.bracewalk.core.analysis.RepairBrace;
+import org.bracewalk.core.analysis.RepairPlan;
+import org.bracewalk.core.analysis.RestoreItem;
+import org.bracewalk.core.analysis.StateAnalysis;
+import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PlaneGrid;
+
+/**
+ * The JSON verdict of {@code shared/design/check-contract.md}. The contract's fields keep their
+ * names and meaning; this class only ever adds:
+ *
+ * <ul>
+ *   <li>{@code lossToleranceExact: false} in a state whose loss tolerance is only a lower bound
+ *       (absent when exact);
+ *   <li>{@code caution} at the top: the standing caution of {@link Cautions#STANDING};
+ *   <li>{@code keepOff} at the top when the analysed state is not rigid: {@link Cautions#keepOff}.
+ * </ul>
+ *
+ * Lists keep the engine's order (lift, then bay). Stateless; safe to share.
+ */
+public final class VerdictJson {
+
+  private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
+
+
+  public VerdictJson() {}
+
+  /** The whole verdict on one plane: support, lifts, bays, design, asBuilt (if any), repair. */
+  public ObjectNode verdict(PlaneAnalysis analysis) {
+    PlaneGrid grid = analysis.grid();
+    ObjectNode root = NODES.objectNode();
+    root.put("support", grid.support().label());
+    root.put("lifts", grid.lifts());
+    root.put("bays", grid.bays());
+    parts(analysis).putInto(root);
+    root.put("caution", Cautions.STANDING);
+    StateAnalysis analysed = analysis.analysedState();
+    if (!analysed.rigid()) {
+      root.put("keepOff", Cautions.keepOff(analysed, grid));
+    }
+    return root;
+  }
+
+  /** The design, asBuilt and repair parts on their own, for outputs that nest them. */
+  public VerdictParts parts(PlaneAnalysis analysis) {
+    return new VerdictParts(
+        state(analysis.design()), analysis.asBuilt().map(this::asBuilt), repair(analysis.repair()));
+  }
+
+  /** One state: rigid, degreesOfFreedom, oneWayOnly, lossTolerance, criticalBraces, blocks. */
+  public ObjectNode state(StateAnalysis s) {
+    ObjectNode o = NODES.objectNode();
+    o.put("rigid", s.rigid());
+    o.put("degreesOfFreedom", s.degreesOfFreedom());
+    o.put("oneWayOnly", s.oneWayOnly());
+    o.put("lossTolerance", s.lossTolerance());
+    if (!s.lossToleranceExact()) {
+      o.put("lossToleranceExact", false);
+    }
+    ArrayNode critical = o.putArray("criticalBraces");
+    for (PanelRef p : s.criticalBraces()) {
+      critical.add(panel(p));
+    }
+    ArrayNode blocks = o.putArray("blocks");
+    for (Block b : s.blocks()) {
+      ObjectNode block = blocks.addObject();
+      numbers(block.putArray("lifts"), b.lifts());
+      numbers(block.putArray("bays"), b.bays());
+      block.put("fixed", b.fixed());
+    }
+    return o;
+  }
+
+  /** The as-built state: a state plus unknownPanels, rigidIfUnknownSound and extraBraces. */
+  public ObjectNode asBuilt(AsBuiltAnalysis a) {
+    ObjectNode o = state(a.state());
+    o.put("unknownPanels", a.unknownPanels());
+    o.put("rigidIfUnknownSound", a.rigidIfUnknownSound());
+    ArrayNode extra = o.putArray("extraBraces");
+    for (PlacedBrace b : a.extraBraces()) {
+      extra.add(member(panel(b.panel()), b.brace()));
+    }
+    return o;
+  }
+
+  /** possible, minimum, braces and restoreToDesign. */
+  public ObjectNode repair(RepairPlan r) {
+    ObjectNode o = NODES.objectNode();
+    o.put("possible", r.possible());
+    o.put("minimum", r.minimum());
+    ArrayNode braces = o.putArray("braces");
+    for (RepairBrace b : r.braces()) {
+      ObjectNode item = member(panel(b.panel()), b.brace());
+      item.put("inDesign", b.inDesign());
+      braces.add(item);
+    }
+    ArrayNode restore = o.putArray("restoreToDesign");
+    for (RestoreItem item : r.restoreToDesign()) {
+      ObjectNode node = member(panel(item.panel()), item.missing());
+      node.put("neededForRigidity", item.neededForRigidity());
+      restore.add(node);
+    }
+    return o;
+  }
+
+  /** Pretty-printed JSON ending in a newline (see {@link PrettyJson}). */
+  public String write(JsonNode node) {
+    return PrettyJson.write(node);
+  }
+
+  private static ObjectNode panel(PanelRef p) {
+    ObjectNode o = NODES.objectNode();
+    o.put("lift", p.lift());
+    o.put("bay", p.bay());
+    return o;
+  }
+
+  private static ObjectNode member(ObjectNode target, Brace b) {
+    target.put("diagonal", b.diagonal().symbol());
+    target.put("kind", b.kind().label());
+    return target;
+  }
+
+  private static void numbers(ArrayNode array, List<Integer> values) {
+    for (int v : values) {
+      array.add(v);
+    }
+  }
+}
