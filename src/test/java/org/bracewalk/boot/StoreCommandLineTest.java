@@ -12,6 +12,8 @@ import java.util.Map;
 import org.bracewalk.app.DemoService;
 import org.bracewalk.app.Fixtures;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import picocli.CommandLine;
@@ -173,5 +175,102 @@ class StoreCommandLineTest {
     Run badZone = run("site", "create", "--db", db(), "--name", "X", "--time-zone", "Mars/Olympus");
     assertThat(badZone.code()).isEqualTo(2);
     assertThat(badZone.err()).contains("--time-zone").contains("Mars/Olympus");
+  }
+
+  @Test
+  void analyseBothDemoInspectionsOneHoldsTheOtherLosesFrame2() throws Exception {
+    run("demo", "--db", db());
+    Run routine = run("analyse", "--db", db(), "--inspection", "1");
+    assertThat(routine.code()).as(routine.err()).isZero();
+    assertThat(routine.out()).contains("5 of 5 planes hold their shape as built.")
+        .contains("frame 3, lift 2, bay 1: damaged-effective, bent, bow 7.5 mm over 1000 mm");
+    Run impact = run("analyse", "--db", db(), "--inspection", "2");
+    assertThat(impact.code()).isEqualTo(1);
+    assertThat(impact.out()).contains("lost rigidity: frame 2")
+        .contains("Keep people and loads off lifts 1, 2 (all bays)");
+    Run json = run("analyse", "--db", db(), "--inspection", "2", "--format", "json");
+    assertThat(json.code()).isEqualTo(1);
+    JsonNode root = new ObjectMapper().readTree(json.out());
+    assertThat(root.get("inspection").asLong()).isEqualTo(2);
+    assertThat(root.get("planes")).hasSize(5);
+    JsonNode frame2 = root.get("planes").get(1);
+    assertThat(frame2.get("plane").asText()).isEqualTo("frame 2");
+    assertThat(frame2.at("/asBuilt/rigid").asBoolean()).isFalse();
+    assertThat(frame2.at("/asBuilt/degreesOfFreedom").asInt()).isEqualTo(2);
+    assertThat(frame2.at("/repair/minimum").asInt()).isEqualTo(2);
+    assertThat(frame2.at("/repair/braces/0/lift").asInt()).isEqualTo(1);
+    assertThat(frame2.at("/repair/braces/1/lift").asInt()).isEqualTo(2);
+    assertThat(root.get("planes").get(0).at("/asBuilt/rigid").asBoolean()).isTrue();
+  }
+
+  @Test
+  void theStoredAnalysisAgreesWithCheckOnTheExportedPanelMaps() throws Exception {
+    run("demo", "--db", db());
+    Path design = dir.resolve("frame2.design.txt");
+    Path asBuilt = dir.resolve("frame2.as-built.txt");
+    assertThat(run("export", "--db", db(), "--plane", "2", "--to", design.toString()).code())
+        .isZero();
+    assertThat(run("export", "--db", db(), "--inspection", "2", "--plane", "frame 2", "--to",
+        asBuilt.toString()).code()).isZero();
+    Run check = run("check", design.toString(), asBuilt.toString(), "--format", "json");
+    assertThat(check.code()).as(check.err()).isEqualTo(1);
+    JsonNode fromCheck = new ObjectMapper().readTree(check.out());
+    JsonNode fromStore = new ObjectMapper().readTree(
+        run("analyse", "--db", db(), "--inspection", "2", "--format", "json").out())
+        .get("planes").get(1);
+    for (String part : List.of("design", "asBuilt", "repair")) {
+      assertThat(fromStore.get(part)).as(part).isEqualTo(fromCheck.get(part));
+    }
+  }
+
+  @Test
+  void anExportedSiteImportedIntoAnEmptyDatabaseAnalysesTheSame() {
+    run("demo", "--db", db());
+    Path file = dir.resolve("larkspur.json");
+    run("export", "--db", db(), "--site", "1", "--to", file.toString());
+    String other = dir.resolve("empty.db").toString();
+    assertThat(run("import", "--db", other, "--site", file.toString()).code()).isZero();
+    for (String id : List.of("1", "2")) {
+      for (String format : List.of("text", "json")) {
+        Run a = run("analyse", "--db", db(), "--inspection", id, "--format", format);
+        Run b = run("analyse", "--db", other, "--inspection", id, "--format", format);
+        assertThat(b.code()).isEqualTo(a.code());
+        assertThat(b.out()).isEqualTo(a.out());
+      }
+    }
+  }
+
+  @Test
+  void panelMapsBecomeAPlaneAndAnInspectionsFindings() throws Exception {
+    run("demo", "--db", db());
+    Path design = Path.of("demo-site/maps/north-elevation.design.txt");
+    Path found = Path.of("demo-site/maps/north-elevation.after-impact.txt");
+    Run plane = run("plane", "create", "--db", db(), "--structure", "2", "--name", "facade copy",
+        "--design", design.toString());
+    assertThat(plane.code()).as(plane.err()).isZero();
+    assertThat(plane.out()).contains("plane 8 'facade copy' (5 lifts x 10 bays, pinned-base)");
+    run("inspection", "start", "--db", db(), "--structure", "2", "--inspector", "Priya Danvers",
+        "--reason", "after-impact");
+    Run map = run("import", "--db", db(), "--inspection", "3", "--plane", "facade copy", "--map",
+        found.toString());
+    assertThat(map.code()).as(map.err()).isZero();
+    assertThat(map.out()).contains("imported 49 observations of plane 'facade copy'")
+        .contains("1 panel marked ? stays not inspected")
+        .contains("lift 3, bay 4, extra (member /)");
+    Run exported = run("export", "--db", db(), "--inspection", "3", "--plane", "8");
+    String grid = Files.readString(found).lines().filter(l -> !l.startsWith("#")
+        && !l.contains(":")).map(l -> l.trim().replaceAll("\\s+", " ")).reduce("", (x, y) -> x + y + "\n");
+    String back = exported.out().lines().filter(l -> !l.startsWith("#") && !l.contains(":"))
+        .map(l -> l.trim().replaceAll("\\s+", " ")).reduce("", (x, y) -> x + y + "\n");
+    assertThat(back).isEqualTo(grid);
+    // the other plane of the structure was not walked: not inspected, so not rigid as built
+    Run analysed = run("analyse", "--db", db(), "--inspection", "3", "--format", "json");
+    assertThat(analysed.code()).isEqualTo(1);
+    JsonNode copy = new ObjectMapper().readTree(analysed.out()).get("planes").get(2);
+    assertThat(copy.at("/asBuilt/unknownPanels").asInt()).isEqualTo(1);
+    assertThat(copy.at("/asBuilt/extraBraces/0/bay").asInt()).isEqualTo(4);
+    Run wrongGrid = run("import", "--db", db(), "--plane", "2", "--design", design.toString());
+    assertThat(wrongGrid.code()).isEqualTo(2);
+    assertThat(wrongGrid.err()).contains(design.toString()).contains("10 bays");
   }
 }
