@@ -48,6 +48,12 @@ abstract class StoreCommand implements Callable<Integer> {
     Path file = context.database(db);
     err.println("database: " + file);
     err.flush();
+    try {
+      beforeOpen(file, err);
+    } catch (UserInputException e) {
+      err.println("error: " + e.getMessage());
+      return BAD_INPUT;
+    }
     try (AppServices services = context.services().open(file)) {
       return run(services, out, err);
     } catch (UserInputException | StoreException | IllegalArgumentException e) {
@@ -59,6 +65,9 @@ abstract class StoreCommand implements Callable<Integer> {
       err.flush();
     }
   }
+
+  /** Runs before the database is opened; nothing by default. */
+  void beforeOpen(Path file, PrintWriter err) {}
 
   /** The command's work; returns the exit status. */
   abstract int run(AppServices services, PrintWriter out, PrintWriter err);

@@ -77,6 +77,19 @@ class StoreCommandLineTest {
     Run again = run("demo", "--db", db());
     assertThat(again.code()).isEqualTo(2);
     assertThat(again.err()).contains("already holds 1 site");
+    Run replaced = run("demo", "--db", db(), "--replace");
+    assertThat(replaced.code()).as(replaced.err()).isZero();
+    assertThat(replaced.out()).contains("inspection 2: after-impact");
+  }
+
+  @Test
+  void replaceDeletesOnlyDatabaseFiles() throws Exception {
+    Path notes = dir.resolve("notes.txt");
+    Files.writeString(notes, "not a database");
+    Run r = run("demo", "--db", notes.toString(), "--replace");
+    assertThat(r.code()).isEqualTo(2);
+    assertThat(r.err()).contains("is not a SQLite database");
+    assertThat(Files.readString(notes)).isEqualTo("not a database");
   }
 
   @Test
