@@ -6,7 +6,9 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.bracewalk.core.model.Millimetres;
 import org.bracewalk.core.model.PlaneGrid;
@@ -112,9 +114,28 @@ final class JdbcPlaneRepository implements PlaneRepository {
     }
   }
 
+  /**
+   * Planes never change once stored (migration V2 makes the database refuse), so a plane read
+   * outside a transaction is kept: recording an observation looks its plane up every time.
+   * Reads inside a transaction are not kept, as the transaction may yet roll back.
+   */
+  private final Map<Long, PlaneRecord> committed = new HashMap<>();
+
   @Override
   public Optional<PlaneRecord> find(long id) {
-    return query(SELECT + " WHERE id = ?", id, null).stream().findFirst();
+    return db.call(
+        c -> {
+          boolean keep = !db.inTransaction();
+          PlaneRecord known = keep ? committed.get(id) : null;
+          if (known != null) {
+            return Optional.of(known);
+          }
+          Optional<PlaneRecord> found = query(SELECT + " WHERE id = ?", id, null).stream().findFirst();
+          if (keep) {
+            found.ifPresent(p -> committed.put(id, p));
+          }
+          return found;
+        });
   }
 
   @Override
