@@ -56,6 +56,10 @@ import org.bracewalk.core.port.RecordStore;
  * (the {@code check} format) as a plane's design or as one inspection's findings. Imports read
  * and check the whole file before writing anything, then write in one transaction: on any error
  * nothing is stored.
+ *
+ * <p>Errors in a file are {@link org.bracewalk.app.sitefile.FileFormatException}s (site file,
+ * CSV) or {@link UserInputException}s (panel maps, whose located message is kept), naming the file
+ * and the line.
  */
 public final class ImportExportService {
   private final RecordStore store;

@@ -36,6 +36,10 @@ class ImportExportServiceTest {
     String second;
     try (AppServices b = context.open(dir.resolve("b.db"))) {
       second = b.files().exportSite(b.files().importSite("first.json", first).site().id());
+      // the demo's one photo came through as a PNG kept in the database
+      long withPhoto = b.store().observations().withPhotos(2).get(0);
+      byte[] png = b.inspections().photos(withPhoto).get(0).data();
+      assertThat(java.util.Arrays.copyOf(png, 4)).isEqualTo(new byte[] {(byte) 0x89, 'P', 'N', 'G'});
     }
     assertThat(second).isEqualTo(first);
     // the shipped demo file is itself in the exporter's layout
