@@ -113,9 +113,17 @@ class StoreCommandLineTest {
         "--defect", "bent");
     assertThat(rec.code()).as(rec.err()).isZero();
     assertThat(rec.out()).contains("observation 66 recorded: frame 2, lift 1, bay 1, damaged-effective, bow 10.0 mm over 1000 mm");
+    Path photo = dir.resolve("gauge.jpg");
+    try {
+      Files.write(photo, new byte[] {(byte) 0xFF, (byte) 0xD8, (byte) 0xFF, 1, 2, 3});
+    } catch (java.io.IOException e) {
+      throw new java.io.UncheckedIOException(e);
+    }
     Run fix = run("record", "--db", db(), "--inspection", "3", "--plane", "frame 2", "--lift",
-        "1", "--bay", "1", "--state", "sound", "--supersedes", "66", "--reason", "misread gauge");
-    assertThat(fix.out()).contains("observation 67 recorded").contains("corrects observation 66");
+        "1", "--bay", "1", "--state", "sound", "--supersedes", "66", "--reason", "misread gauge",
+        "--photo", photo.toString());
+    assertThat(fix.out()).contains("observation 67 recorded").contains("corrects observation 66")
+        .contains("photo 2 attached to observation 67: gauge.jpg (6 bytes)");
     assertThat(run("finalise", "--db", db(), "--inspection", "3").code()).isZero();
     Run refused = run("record", "--db", db(), "--inspection", "3", "--plane", "spine", "--lift",
         "1", "--bay", "1", "--state", "sound");
