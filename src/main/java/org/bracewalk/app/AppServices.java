@@ -16,7 +16,6 @@ import org.bracewalk.core.port.RecordStore;
  * @param files site files and observation CSVs in and out
  * @param demo the demo site
  * @param repairs repair orders and their actions
- * @param reports the report files issued (name, SHA-256)
  */
 public record AppServices(
     RecordStore store,
@@ -26,8 +25,7 @@ public record AppServices(
     HistoryService history,
     ImportExportService files,
     DemoService demo,
-    RepairService repairs,
-    IssuedReportService reports)
+    RepairService repairs)
     implements AutoCloseable {
 
   public AppServices {
@@ -42,8 +40,7 @@ public record AppServices(
     HistoryService history = new HistoryService(sites, inspections, analysis);
     ImportExportService files = new ImportExportService(store, clock);
     return new AppServices(store, sites, inspections, analysis, history, files,
-        new DemoService(store, files), new RepairService(store, clock),
-        new IssuedReportService(store, clock));
+        new DemoService(store, files), new RepairService(store, clock));
   }
 
   @Override

@@ -38,7 +38,7 @@ final class FileCommands {
   }
 
   @Command(name = "import", mixinStandardHelpOptions = true,
-      description = {"Import one file:",
+      description = {"Import a site file, an observation CSV or a panel map:",
           "  --site FILE.json                      a site file, stored as a new site",
           "  --inspection ID --csv FILE.csv        observations into an open inspection",
           "  --plane ID --design MAP.txt           a panel map as the plane's next design revision",
@@ -143,7 +143,8 @@ final class FileCommands {
   }
 
   @Command(name = "export", mixinStandardHelpOptions = true,
-      description = {"Export one thing, to --to FILE or to standard output:",
+      description = {"Export a site file, an observation CSV or a panel map, to --to FILE or to"
+          + " standard output:",
           "  --site ID                     the site as a site file (JSON)",
           "  --inspection ID               the inspection's observations as CSV",
           "  --plane ID                    the plane's latest design as a panel map",

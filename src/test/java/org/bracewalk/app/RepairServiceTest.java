@@ -3,7 +3,6 @@ package org.bracewalk.app;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import org.bracewalk.core.model.Brace;
@@ -49,25 +48,6 @@ class RepairServiceTest {
           .isEqualTo(check.id());
       assertThat(repairs.actions(order.id())).hasSize(1);
       assertThat(repairs.orders(found.id())).containsExactly(order);
-    }
-  }
-
-  @Test
-  void anIssuedReportIsKnownAgainByItsBytes() {
-    try (Database db = Database.open(dir.resolve("r.db"))) {
-      Fixtures.Services s = Fixtures.Services.over(db);
-      IssuedReportService reports = new IssuedReportService(db, s.clock());
-      PlaneRecord plane = Fixtures.plane(s);
-      long id = s.inspections().start(plane.structureId(),
-          NewInspection.of("M. Okafor", "", InspectionReason.ROUTINE)).id();
-      byte[] pdf = "%PDF-1.4 invented".getBytes(StandardCharsets.US_ASCII);
-      reports.recordIssued(id, "report-1.pdf", pdf);
-      // SHA-256 of "abc", FIPS 180-2 appendix B.1
-      assertThat(IssuedReportService.fingerprint("abc".getBytes(StandardCharsets.US_ASCII)))
-          .isEqualTo("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad");
-      assertThat(reports.matching(id, pdf)).map(r -> r.fileName()).contains("report-1.pdf");
-      assertThat(reports.matching(id, "%PDF-1.4 changed".getBytes(StandardCharsets.US_ASCII)))
-          .isEmpty();
     }
   }
 }
