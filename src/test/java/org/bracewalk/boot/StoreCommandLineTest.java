@@ -294,4 +294,13 @@ class StoreCommandLineTest {
     assertThat(wrongGrid.code()).isEqualTo(2);
     assertThat(wrongGrid.err()).contains(design.toString()).contains("10 bays");
   }
+
+  @Test
+  void theDemoPanelMapsOfFrame2AreTheSiteFilesOwnExports() throws Exception {
+    run("demo", "--db", db());
+    assertThat(run("export", "--db", db(), "--plane", "2").out())
+        .isEqualTo(Files.readString(Path.of("demo-site/maps/racking-frame-2.design.txt")));
+    assertThat(run("export", "--db", db(), "--inspection", "2", "--plane", "frame 2").out())
+        .isEqualTo(Files.readString(Path.of("demo-site/maps/racking-frame-2.after-impact.txt")));
+  }
 }
