@@ -3,6 +3,7 @@ package org.bracewalk.boot;
 import java.io.PrintWriter;
 import java.lang.management.ManagementFactory;
 import java.util.Map;
+import org.bracewalk.app.AnalysisOutput;
 import org.bracewalk.app.bench.BenchFormat;
 import org.bracewalk.app.bench.BenchPlan;
 import org.bracewalk.app.bench.BenchService;
@@ -61,7 +62,8 @@ public final class Launcher {
             new BenchFormat(),
             BenchPlan.quick(),
             BenchPlan.standard()));
-    StoreCommands.addTo(cli, context.cliContext(env));
+    StoreCommands.addTo(cli, context.cliContext(env),
+        new AnalysisOutput(new VerdictJson(), new VerdictText()));
     ReportCommands.addTo(cli, context.cliContext(env), context.reportFactory(env));
     // Set after the sub-commands are added: picocli copies these settings down the hierarchy.
     cli.setExitCodeExceptionMapper(e -> e instanceof ParameterException ? BAD_INPUT : INTERNAL_ERROR);
