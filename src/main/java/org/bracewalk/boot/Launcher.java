@@ -14,6 +14,7 @@ import org.bracewalk.app.verdict.VerdictText;
 import org.bracewalk.cli.BenchCommand;
 import org.bracewalk.cli.BracewalkCommand;
 import org.bracewalk.cli.CheckCommand;
+import org.bracewalk.cli.ReportCommands;
 import org.bracewalk.cli.StoreCommands;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import picocli.CommandLine;
@@ -63,6 +64,7 @@ public final class Launcher {
             BenchPlan.standard()));
     StoreCommands.addTo(cli, context.cliContext(env),
         new AnalysisOutput(new VerdictJson(), new VerdictText()));
+    ReportCommands.addTo(cli, context.cliContext(env), context.reportFactory(env));
     // Set after the sub-commands are added: picocli copies these settings down the hierarchy.
     cli.setExitCodeExceptionMapper(e -> e instanceof ParameterException ? BAD_INPUT : INTERNAL_ERROR);
     cli.setExecutionExceptionHandler(
