@@ -15,6 +15,7 @@ import org.bracewalk.core.port.RecordStore;
  * @param history a plane across inspections
  * @param files site files and observation CSVs in and out
  * @param demo the demo site
+ * @param repairs repair orders and their actions
  */
 public record AppServices(
     RecordStore store,
@@ -23,7 +24,8 @@ public record AppServices(
     AnalysisService analysis,
     HistoryService history,
     ImportExportService files,
-    DemoService demo)
+    DemoService demo,
+    RepairService repairs)
     implements AutoCloseable {
 
   public AppServices {
@@ -38,7 +40,7 @@ public record AppServices(
     HistoryService history = new HistoryService(sites, inspections, analysis);
     ImportExportService files = new ImportExportService(store, clock);
     return new AppServices(store, sites, inspections, analysis, history, files,
-        new DemoService(store, files));
+        new DemoService(store, files), new RepairService(store, clock));
   }
 
   @Override

@@ -2,6 +2,7 @@ package org.bracewalk.app;
 
 import java.time.Clock;
 import java.time.Instant;
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -22,7 +23,20 @@ import org.bracewalk.app.sitefile.SiteFile.RepairOrderData;
 import org.bracewalk.app.sitefile.SiteFile.StructureData;
 import org.bracewalk.app.sitefile.SiteFileReader;
 import org.bracewalk.app.sitefile.SiteFileWriter;
+import org.bracewalk.app.panelmap.MapKind;
+import org.bracewalk.app.panelmap.PanelMap;
+import org.bracewalk.app.panelmap.PanelMapException;
+import org.bracewalk.app.panelmap.PanelMapParser;
+import org.bracewalk.app.panelmap.PanelMapWriter;
+import org.bracewalk.core.model.AsBuiltPlane;
+import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.Millimetres;
+import org.bracewalk.core.model.PanelFinding;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.Support;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionStatus;
 import org.bracewalk.core.model.IssuedReport;
@@ -38,14 +52,21 @@ import org.bracewalk.core.port.InspectionFinalisedException;
 import org.bracewalk.core.port.RecordStore;
 
 /**
- * Files in and out: the JSON site file and the CSV of one inspection's observations. Imports read
+ * Files in and out: the JSON site file, the CSV of one inspection's observations, and panel maps
+ * (the {@code check} format) as a plane's design or as one inspection's findings. Imports read
  * and check the whole file before writing anything, then write in one transaction: on any error
  * nothing is stored.
+ *
+ * <p>Errors in a file are {@link org.bracewalk.app.sitefile.FileFormatException}s (site file,
+ * CSV) or {@link UserInputException}s (panel maps, whose located message is kept), naming the file
+ * and the line.
  */
 public final class ImportExportService {
   private final RecordStore store;
   private final Clock clock;
   private final SiteFileWriter writer = new SiteFileWriter();
+  private final PanelMapParser maps = new PanelMapParser();
+  private final PanelMapWriter mapWriter = new PanelMapWriter();
 
   public ImportExportService(RecordStore store, Clock clock) {
     this.store = Objects.requireNonNull(store);
@@ -297,6 +318,147 @@ public final class ImportExportService {
       acknowledged.accept(o);
     }
     return stored;
+  }
+
+  // ------------------------------------------------------------------ panel maps
+
+  private PanelMap parseMap(String fileName, String text, MapKind kind) {
+    try {
+      return maps.parse(fileName, text, kind);
+    } catch (PanelMapException e) {
+      throw new UserInputException(e.getMessage(), e);
+    }
+  }
+
+  /**
+   * Checks that a map fits a plane: same lifts and bays, and any support, widths or heights its
+   * header states equal to the plane's; errors name the file and line.
+   */
+  private static void requireFits(PanelMap map, String fileName, PlaneRecord plane) {
+    PlaneGrid g = plane.grid();
+    if (map.lifts() != g.lifts() || map.bays() != g.bays()) {
+      throw new UserInputException(fileName + ": the map has " + map.lifts() + " lifts x "
+          + map.bays() + " bays; plane '" + plane.name() + "' has " + g.lifts() + " x "
+          + g.bays());
+    }
+    map.statedSupport().ifPresent(sup -> {
+      if (sup != g.support()) {
+        throw new UserInputException(fileName + ":" + map.headerEntry("support").orElseThrow().line()
+            + ": support is " + sup.label() + ", plane '" + plane.name() + "' is "
+            + g.support().label() + "; remove the line or make them agree");
+      }
+    });
+    PlaneGrid stated = Millimetres.round(map.grid(g.support()));
+    checkHeader(map, fileName, plane, "widths", stated.bayWidths(), g.bayWidths());
+    checkHeader(map, fileName, plane, "heights", stated.liftHeights(), g.liftHeights());
+  }
+
+  private static void checkHeader(PanelMap map, String fileName, PlaneRecord plane, String key,
+      List<Double> stated, List<Double> actual) {
+    map.headerEntry(key).ifPresent(h -> {
+      if (!stated.equals(actual)) {
+        throw new UserInputException(fileName + ":" + h.line() + ": " + key + " " + stated
+            + " m differ from plane '" + plane.name() + "' (" + actual
+            + " m); remove the line or make them agree");
+      }
+    });
+  }
+
+  /**
+   * Creates a plane of a structure from a design panel map (its grid from the map's header;
+   * support pinned-base unless stated), with the map as design revision 1.
+   */
+  public PlaneRecord createPlaneFromMap(long structureId, String name, String fileName,
+      String text, String author, LocalDate date, String approvalNote) {
+    PanelMap map = parseMap(fileName, text, MapKind.DESIGN);
+    PlaneGrid grid = map.grid(map.statedSupport().orElse(Support.PINNED_BASE));
+    return new SiteService(store, clock).createPlane(new PlaneRecord(0, structureId, name, grid),
+        author, date, approvalNote, map.toDesign(grid));
+  }
+
+  /** Adds a design panel map as the next design revision of a plane. */
+  public DesignRevision importDesignMap(long planeId, String fileName, String text, String author,
+      LocalDate date, String approvalNote) {
+    SiteService sites = new SiteService(store, clock);
+    PlaneRecord plane = sites.plane(planeId);
+    PanelMap map = parseMap(fileName, text, MapKind.DESIGN);
+    requireFits(map, fileName, plane);
+    return sites.addDesignRevision(planeId, author, date, approvalNote, map.toDesign(plane.grid()));
+  }
+
+  /**
+   * Records an as-built panel map as observations of one plane of an open inspection, all or
+   * nothing: one observation per panel that is not {@code ?}, its state found by comparing the
+   * map with the design in force (as designed: sound; design member gone: missing, naming what is
+   * left; a member where the design has none: extra). Panels marked {@code ?} get no observation
+   * and so count as not inspected.
+   */
+  public List<Observation> importAsBuiltMap(long inspectionId, long planeId, String fileName,
+      String text, String recordedBy) {
+    InspectionService inspections = new InspectionService(store, clock);
+    Inspection inspection = inspections.inspection(inspectionId);
+    if (inspection.isFinalised()) {
+      throw new InspectionFinalisedException(inspectionId, "record observations from " + fileName);
+    }
+    PlaneRecord plane = new SiteService(store, clock).plane(planeId);
+    PanelMap map = parseMap(fileName, text, MapKind.AS_BUILT);
+    requireFits(map, fileName, plane);
+    PlaneDesign design = inspections.designInForce(inspectionId, planeId).design();
+    AsBuiltPlane found = map.toAsBuilt(plane.grid());
+    String by = recordedBy == null || recordedBy.isBlank() ? inspection.inspectorName() : recordedBy;
+    return store.inTransaction(() -> {
+      List<Observation> stored = new ArrayList<>();
+      for (int lift = 1; lift <= plane.grid().lifts(); lift++) {
+        for (int bay = 1; bay <= plane.grid().bays(); bay++) {
+          PanelRef p = PanelRef.of(lift, bay);
+          if (found.isUninspected(p)) {
+            continue;
+          }
+          PanelFinding f = findingFor(design.braceAt(p), found.memberAt(p));
+          stored.add(inspections.recordObservation(inspectionId, new NewObservation(planeId, p,
+              f.state(), f.memberFound(), null, null, null, "from panel map " + fileName, by)));
+        }
+      }
+      return stored;
+    });
+  }
+
+  /**
+   * The finding that makes the as-built plane carry exactly {@code found} where the design has
+   * {@code designed}.
+   */
+  static PanelFinding findingFor(Brace designed, Brace found) {
+    if (Objects.equals(designed, found)) {
+      return PanelFinding.of(PanelState.SOUND);
+    }
+    if (designed == null) {
+      return new PanelFinding(PanelState.EXTRA, found);
+    }
+    if (found == null) {
+      return PanelFinding.of(PanelState.MISSING);
+    }
+    boolean covers = found.kind() == designed.kind()
+        && found.diagonal().memberCount() >= designed.diagonal().memberCount();
+    return new PanelFinding(covers ? PanelState.SOUND : PanelState.MISSING, found);
+  }
+
+  /** The latest design revision of a plane as a panel map. */
+  public String exportDesignMap(long planeId) {
+    SiteService sites = new SiteService(store, clock);
+    PlaneRecord plane = sites.plane(planeId);
+    DesignRevision d = sites.currentDesign(planeId);
+    return mapWriter.write(d.design(), "plane '" + plane.name() + "', design revision "
+        + d.number() + " of " + d.date() + (d.author().isEmpty() ? "" : ", " + d.author()));
+  }
+
+  /** A plane as found in an inspection (latest observations; {@code ?} where none) as a panel map. */
+  public String exportAsBuiltMap(long inspectionId, long planeId) {
+    InspectionService inspections = new InspectionService(store, clock);
+    PlaneRecord plane = new SiteService(store, clock).plane(planeId);
+    Inspection inspection = inspections.inspection(inspectionId);
+    return mapWriter.write(inspections.asBuilt(inspectionId, planeId), "plane '" + plane.name()
+        + "' as found in inspection " + inspectionId + " (" + inspection.reason().label() + ", "
+        + inspection.status().label() + ")");
   }
 
   private Inspection inspection(long id) {

@@ -116,6 +116,12 @@ public final class InspectionService {
           "say why observation " + supersededId + " is corrected (the reason is kept with it)");
     }
     Inspection inspection = inspection(old.inspectionId());
+    for (Observation o : store.observations().ofInspection(old.inspectionId())) {
+      if (Long.valueOf(supersededId).equals(o.supersedes())) {
+        throw new UserInputException("observation " + supersededId + " is already corrected by"
+            + " observation " + o.id() + "; correct that one instead");
+      }
+    }
     return store.observations().add(toObservation(inspection, replacement, supersededId, reason));
   }
 

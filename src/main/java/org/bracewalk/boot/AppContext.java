@@ -6,8 +6,14 @@ import java.time.Duration;
 import java.util.Map;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.AppServicesFactory;
+import org.bracewalk.app.report.ReportService;
+import org.bracewalk.app.report.ReportServiceFactory;
 import org.bracewalk.cli.CliContext;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.report.PdfDocumentStampReader;
+import org.bracewalk.report.PdfRepairOrderRenderer;
+import org.bracewalk.report.PdfReportRenderer;
+import org.bracewalk.report.TemplateSource;
 import org.bracewalk.store.Database;
 
 /**
@@ -44,6 +50,29 @@ public final class AppContext {
   /** The engine every command uses. */
   public PlaneAnalyzer analyzer() {
     return analyzer;
+  }
+
+  /** The variable naming a folder of edited wording templates (default: the packed ones). */
+  public static final String TEMPLATES_VARIABLE = "BRACEWALK_TEMPLATES";
+
+  /** The variable naming the templates' language: {@code report.<lang>.properties} (default en). */
+  public static final String LANGUAGE_VARIABLE = "BRACEWALK_LANG";
+
+  /**
+   * The report service over open services, with the PDF renderers reading their wording from
+   * {@code $BRACEWALK_TEMPLATES} (a folder) or the packed {@code templates/}, in the language
+   * {@code $BRACEWALK_LANG} (default {@code en}).
+   */
+  public ReportServiceFactory reportFactory(Map<String, String> env) {
+    String folder = env.get(TEMPLATES_VARIABLE);
+    TemplateSource source = folder == null || folder.isBlank()
+        ? TemplateSource.packed() : TemplateSource.folder(Path.of(folder));
+    String lang = env.get(LANGUAGE_VARIABLE);
+    String language = lang == null || lang.isBlank() ? "en" : lang.strip();
+    PdfReportRenderer reports = new PdfReportRenderer(source, language);
+    PdfRepairOrderRenderer orders = new PdfRepairOrderRenderer(source, language);
+    PdfDocumentStampReader stamps = new PdfDocumentStampReader();
+    return services -> new ReportService(services, analyzer, reports, orders, stamps, clock);
   }
 
   /** What the store commands need, with the environment given to the program. */

@@ -3,6 +3,7 @@ package org.bracewalk.boot;
 import java.io.PrintWriter;
 import java.lang.management.ManagementFactory;
 import java.util.Map;
+import org.bracewalk.app.AnalysisOutput;
 import org.bracewalk.app.bench.BenchFormat;
 import org.bracewalk.app.bench.BenchPlan;
 import org.bracewalk.app.bench.BenchService;
@@ -13,6 +14,7 @@ import org.bracewalk.app.verdict.VerdictText;
 import org.bracewalk.cli.BenchCommand;
 import org.bracewalk.cli.BracewalkCommand;
 import org.bracewalk.cli.CheckCommand;
+import org.bracewalk.cli.ReportCommands;
 import org.bracewalk.cli.StoreCommands;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import picocli.CommandLine;
@@ -60,7 +62,9 @@ public final class Launcher {
             new BenchFormat(),
             BenchPlan.quick(),
             BenchPlan.standard()));
-    StoreCommands.addTo(cli, context.cliContext(env));
+    StoreCommands.addTo(cli, context.cliContext(env),
+        new AnalysisOutput(new VerdictJson(), new VerdictText()));
+    ReportCommands.addTo(cli, context.cliContext(env), context.reportFactory(env));
     cli.addSubcommand("snapshot", new SnapshotCommand(context, env));
     // Set after the sub-commands are added: picocli copies these settings down the hierarchy.
     cli.setExitCodeExceptionMapper(e -> e instanceof ParameterException ? BAD_INPUT : INTERNAL_ERROR);

@@ -1,17 +1,25 @@
 package org.bracewalk.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.LocalDate;
 import java.util.List;
+import java.util.Objects;
+import java.util.stream.Stream;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.ImportedSite;
+import org.bracewalk.app.UserInputException;
+import org.bracewalk.core.model.DesignRevision;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.Observation;
-import picocli.CommandLine.ArgGroup;
+import org.bracewalk.core.model.PlaneRecord;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 
-/** {@code import} and {@code export}: site files and observation CSVs. */
+/** {@code import}, {@code export} (site files, observation CSVs, panel maps) and {@code demo}. */
 final class FileCommands {
   private FileCommands() {}
 
@@ -29,32 +37,45 @@ final class FileCommands {
     }
   }
 
-  static final class ImportWhat {
-    @Option(names = "--site", paramLabel = "FILE.json", required = true,
-        description = "A site file: stored as a new site, all or nothing.")
-    Path site;
-
-    @ArgGroup(exclusive = false)
-    CsvImport csv;
-  }
-
-  static final class CsvImport {
-    @Option(names = "--inspection", required = true, description = "An open inspection's id.")
-    long inspection;
-
-    @Option(names = "--csv", paramLabel = "FILE.csv", required = true,
-        description = "Observations (columns in README.md), stored all or nothing.")
-    Path csv;
-  }
-
   @Command(name = "import", mixinStandardHelpOptions = true,
-      description = {"Import a site file (--site FILE.json) as a new site, or an observation CSV"
-          + " into an open inspection (--inspection ID --csv FILE.csv).",
+      description = {"Import a site file, an observation CSV or a panel map:",
+          "  --site FILE.json                      a site file, stored as a new site",
+          "  --inspection ID --csv FILE.csv        observations into an open inspection",
+          "  --plane ID --design MAP.txt           a panel map as the plane's next design revision",
+          "  --inspection ID --plane P --map MAP.txt  a panel map as one plane's findings",
           "The whole file is checked first and stored in one transaction: on any error nothing"
               + " is stored, and the error names the file, line and field."})
   static final class Import extends StoreCommand {
-    @ArgGroup(exclusive = true, multiplicity = "1")
-    ImportWhat what;
+    @Option(names = "--site", paramLabel = "FILE.json", description = "A site file.")
+    Path site;
+
+    @Option(names = "--csv", paramLabel = "FILE.csv",
+        description = "An observation CSV (columns in README.md); needs --inspection.")
+    Path csv;
+
+    @Option(names = "--design", paramLabel = "MAP.txt",
+        description = "A design panel map; needs --plane (its id).")
+    Path design;
+
+    @Option(names = "--map", paramLabel = "MAP.txt",
+        description = "An as-built panel map; needs --inspection and --plane. '?' panels get no"
+            + " observation (they stay not inspected).")
+    Path map;
+
+    @Option(names = "--inspection", description = "The open inspection the file belongs to.")
+    Long inspection;
+
+    @Option(names = "--plane", description = "The plane (id; with --inspection also its name).")
+    String plane;
+
+    @Option(names = "--author", description = "With --design: who drew it.")
+    String author;
+
+    @Option(names = "--date", description = "With --design: its date, YYYY-MM-DD (default today).")
+    LocalDate date;
+
+    @Option(names = "--note", description = "With --design: the approval note.")
+    String note;
 
     Import(CliContext context) {
       super(context);
@@ -62,34 +83,81 @@ final class FileCommands {
 
     @Override
     int run(AppServices s, PrintWriter out, PrintWriter err) {
-      if (what.site != null) {
-        ImportedSite imported = s.files().importSite(what.site.toString(), readText(what.site));
-        out.println("imported " + what.site);
+      long given = Stream.of(site, csv, design, map).filter(Objects::nonNull).count();
+      if (given != 1) {
+        throw new IllegalArgumentException(
+            "give exactly one of --site, --csv, --design or --map (see 'bracewalk import --help')");
+      }
+      if (site != null) {
+        ImportedSite imported = s.files().importSite(site.toString(), readText(site));
+        out.println("imported " + site);
         summary(imported, out);
         return 0;
       }
-      List<Observation> stored = s.files().importObservationsCsv(what.csv.inspection,
-          what.csv.csv.toString(), readText(what.csv.csv));
-      out.println("imported " + stored.size() + " observations into inspection "
-          + what.csv.inspection);
+      if (csv != null) {
+        long id = need(inspection, "--inspection", "--csv");
+        List<Observation> stored =
+            s.files().importObservationsCsv(id, csv.toString(), readText(csv));
+        out.println("imported " + stored.size() + " observations into inspection " + id);
+        return 0;
+      }
+      if (design != null) {
+        long planeId = planeId(need(plane, "--plane", "--design"));
+        DesignRevision d = s.files().importDesignMap(planeId, design.toString(), readText(design),
+            author, date == null ? LocalDate.now(context.clock()) : date, note);
+        out.println("design revision " + d.number() + " of plane " + planeId + " stored ("
+            + d.design().braces().size() + " braced panels, " + d.design().openings().size()
+            + " openings)");
+        return 0;
+      }
+      long id = need(inspection, "--inspection", "--map");
+      Inspection i = s.inspections().inspection(id);
+      PlaneRecord p = InspectionCommands.plane(s, i, need(plane, "--plane", "--map"));
+      List<Observation> stored = s.files().importAsBuiltMap(id, p.id(), map.toString(),
+          readText(map), null);
+      for (Observation o : stored) {
+        out.println(Show.observation(o, p.name()));
+      }
+      int unknown = p.grid().panelCount() - stored.size();
+      out.println("imported " + stored.size() + " observations of plane '" + p.name()
+          + "' into inspection " + id + " (" + unknown
+          + (unknown == 1 ? " panel marked ? stays" : " panels marked ? stay") + " not inspected)");
       return 0;
     }
   }
 
-  static final class ExportWhat {
-    @Option(names = "--site", description = "Export this site as a site file.")
-    Long site;
+  static <T> T need(T value, String option, String with) {
+    if (value == null) {
+      throw new IllegalArgumentException(with + " needs " + option);
+    }
+    return value;
+  }
 
-    @Option(names = "--inspection", description = "Export this inspection's observations as CSV.")
-    Long inspection;
+  static long planeId(String text) {
+    try {
+      return Long.parseLong(text.strip());
+    } catch (NumberFormatException e) {
+      throw new IllegalArgumentException("--plane: give the plane's id (see 'bracewalk plane"
+          + " list'), not '" + text + "'");
+    }
   }
 
   @Command(name = "export", mixinStandardHelpOptions = true,
-      description = {"Export a site (--site ID) as a site file, or an inspection's observations"
-          + " (--inspection ID) as CSV, to --to FILE or to standard output."})
+      description = {"Export a site file, an observation CSV or a panel map, to --to FILE or to"
+          + " standard output:",
+          "  --site ID                     the site as a site file (JSON)",
+          "  --inspection ID               the inspection's observations as CSV",
+          "  --plane ID                    the plane's latest design as a panel map",
+          "  --inspection ID --plane P     the plane as found in the inspection, as a panel map"})
   static final class Export extends StoreCommand {
-    @ArgGroup(exclusive = true, multiplicity = "1")
-    ExportWhat what;
+    @Option(names = "--site", description = "A site's id.")
+    Long site;
+
+    @Option(names = "--inspection", description = "An inspection's id.")
+    Long inspection;
+
+    @Option(names = "--plane", description = "A plane (id; with --inspection also its name).")
+    String plane;
 
     @Option(names = "--to", paramLabel = "FILE", description = "Write here (default: standard output).")
     Path to;
@@ -100,9 +168,23 @@ final class FileCommands {
 
     @Override
     int run(AppServices s, PrintWriter out, PrintWriter err) {
-      String text = what.site != null
-          ? s.files().exportSite(what.site)
-          : s.files().exportObservationsCsv(what.inspection);
+      String text;
+      if (site != null) {
+        if (inspection != null || plane != null) {
+          throw new IllegalArgumentException("--site goes alone");
+        }
+        text = s.files().exportSite(site);
+      } else if (inspection != null && plane != null) {
+        Inspection i = s.inspections().inspection(inspection);
+        text = s.files().exportAsBuiltMap(inspection, InspectionCommands.plane(s, i, plane).id());
+      } else if (inspection != null) {
+        text = s.files().exportObservationsCsv(inspection);
+      } else if (plane != null) {
+        text = s.files().exportDesignMap(planeId(plane));
+      } else {
+        throw new IllegalArgumentException(
+            "say what to export: --site, --inspection or --plane (see 'bracewalk export --help')");
+      }
       if (to == null) {
         out.print(text);
       } else {
@@ -118,8 +200,35 @@ final class FileCommands {
           + " run with two finalised inspections) into a new database, and print what it loaded.",
           "Then try: bracewalk analyse --db FILE --inspection 2"})
   static final class Demo extends StoreCommand {
+    @Option(names = "--replace",
+        description = "If the database file exists and is a SQLite database, delete it first"
+            + " (with its -wal and -shm files) so the demo gets its documented ids.")
+    boolean replace;
+
     Demo(CliContext context) {
       super(context);
+    }
+
+    @Override
+    void beforeOpen(Path file, PrintWriter err) {
+      if (!replace || !Files.exists(file)) {
+        return;
+      }
+      byte[] head = new byte[16];
+      try (var in = Files.newInputStream(file)) {
+        int n = in.readNBytes(head, 0, 16);
+        if (n < 16 || !new String(head, 0, 15, StandardCharsets.US_ASCII).equals("SQLite format 3")) {
+          throw new UserInputException(file + " is not a SQLite database; --replace deletes only"
+              + " database files, give another --db");
+        }
+        in.close();
+        for (String suffix : List.of("", "-wal", "-shm")) {
+          Files.deleteIfExists(Path.of(file + suffix));
+        }
+        err.println("replaced: the old " + file + " was deleted");
+      } catch (IOException e) {
+        throw new UserInputException("cannot replace " + file + ": " + e.getMessage());
+      }
     }
 
     @Override

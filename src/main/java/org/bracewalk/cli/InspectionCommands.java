@@ -209,6 +209,10 @@ final class InspectionCommands {
 
     @Option(names = "--reason", description = "Why the corrected observation was wrong.")
     String reason;
+
+    @Option(names = "--photo", paramLabel = "FILE",
+        description = "A photo to attach (JPEG, PNG, ...); may be repeated. Kept in the database.")
+    List<Path> photos;
   }
 
   /** Either a CSV file or one observation. */
@@ -268,7 +272,41 @@ final class InspectionCommands {
           ? s.inspections().recordObservation(inspection, n)
           : s.inspections().correct(o.supersedes, n, o.reason);
       out.println(Show.observation(saved, plane.name()));
+      if (o.photos != null) {
+        for (Path photo : o.photos) {
+          byte[] bytes = readBytes(photo);
+          var p = s.inspections().attachPhoto(saved.id(), photo.getFileName().toString(),
+              mediaType(photo), bytes);
+          out.println("photo " + p.id() + " attached to observation " + saved.id() + ": "
+              + p.fileName() + " (" + p.size() + " bytes)");
+        }
+      }
       return 0;
+    }
+
+    static String mediaType(Path photo) {
+      String name = photo.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
+      if (name.endsWith(".jpg") || name.endsWith(".jpeg")) {
+        return "image/jpeg";
+      }
+      if (name.endsWith(".png")) {
+        return "image/png";
+      }
+      if (name.endsWith(".heic")) {
+        return "image/heic";
+      }
+      if (name.endsWith(".webp")) {
+        return "image/webp";
+      }
+      return "application/octet-stream";
+    }
+
+    static byte[] readBytes(Path file) {
+      try {
+        return java.nio.file.Files.readAllBytes(file);
+      } catch (java.io.IOException e) {
+        throw new UserInputException("cannot read " + file + ": " + e.getMessage());
+      }
     }
 
     private static Brace braceOf(String token) {

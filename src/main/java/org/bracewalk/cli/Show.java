@@ -19,7 +19,8 @@ final class Show {
   }
 
   static String grid(PlaneGrid g) {
-    return g.lifts() + " lifts x " + g.bays() + " bays, " + g.support().label();
+    return g.lifts() + (g.lifts() == 1 ? " lift x " : " lifts x ") + g.bays()
+        + (g.bays() == 1 ? " bay, " : " bays, ") + g.support().label();
   }
 
   static String plane(PlaneRecord p) {

@@ -1,6 +1,7 @@
 package org.bracewalk.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
 import java.time.LocalDate;
 import java.time.ZoneId;
 import java.util.ArrayList;
@@ -145,8 +146,10 @@ final class SiteCommands {
   }
 
   @Command(name = "create", mixinStandardHelpOptions = true,
-      description = {"Create a brace plane of a structure, unbraced (design revision 1).",
-          "Add its bracing with 'bracewalk import --plane ID --design MAP.txt'."})
+      description = {"Create a brace plane of a structure: from a design panel map (--design"
+          + " MAP.txt: grid, dimensions and bracing from the map, as design revision 1), or"
+          + " unbraced from --lifts and --bays (add its bracing later with 'bracewalk import"
+          + " --plane ID --design MAP.txt')."})
   static final class PlaneCreate extends StoreCommand {
     @Option(names = "--structure", required = true, description = "The structure's id.")
     long structure;
@@ -154,11 +157,14 @@ final class SiteCommands {
     @Option(names = "--name", required = true, description = "Name, unique in the structure.")
     String name;
 
-    @Option(names = "--lifts", required = true, description = "Lifts (rows), bottom = 1.")
-    int lifts;
+    @Option(names = "--design", paramLabel = "MAP.txt", description = "A design panel map.")
+    Path design;
 
-    @Option(names = "--bays", required = true, description = "Bays (columns), left = 1.")
-    int bays;
+    @Option(names = "--lifts", description = "Without --design: lifts (rows), bottom = 1.")
+    Integer lifts;
+
+    @Option(names = "--bays", description = "Without --design: bays (columns), left = 1.")
+    Integer bays;
 
     @Option(names = "--widths", split = ",",
         description = "Bay widths in metres, comma-separated, bay 1 first (default 1 each).")
@@ -168,8 +174,8 @@ final class SiteCommands {
         description = "Lift heights in metres, comma-separated, lift 1 first (default 1 each).")
     List<Double> heights;
 
-    @Option(names = "--support", defaultValue = "pinned-base",
-        description = "pinned-base or free (default ${DEFAULT-VALUE}).")
+    @Option(names = "--support",
+        description = "Without --design: pinned-base or free (default pinned-base).")
     String support;
 
     @Option(names = "--author", description = "Who drew the design.")
@@ -181,7 +187,20 @@ final class SiteCommands {
 
     @Override
     int run(AppServices s, PrintWriter out, PrintWriter err) {
-      Support sup = Support.fromLabel(support);
+      if (design != null) {
+        if (lifts != null || bays != null || widths != null || heights != null || support != null) {
+          throw new IllegalArgumentException("with --design the map gives the grid: leave out"
+              + " --lifts, --bays, --widths, --heights and --support");
+        }
+        PlaneRecord p = s.files().createPlaneFromMap(structure, name, design.toString(),
+            readText(design), author, LocalDate.now(context.clock()), "");
+        out.println(Show.plane(p) + " created from " + design);
+        return 0;
+      }
+      if (lifts == null || bays == null) {
+        throw new IllegalArgumentException("give --design MAP.txt, or --lifts and --bays");
+      }
+      Support sup = Support.fromLabel(support == null ? "pinned-base" : support);
       if (sup == null) {
         throw new IllegalArgumentException("--support: use pinned-base or free, not '" + support + "'");
       }

@@ -10,6 +10,7 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.UserInputException;
+import org.bracewalk.app.sitefile.FileFormatException;
 import org.bracewalk.core.port.StoreException;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -18,8 +19,10 @@ import picocli.CommandLine.Spec;
 /**
  * A command that works on the database: resolves the file ({@code --db}, {@code BRACEWALK_DB},
  * or the per-user default), prints it to standard error as the first line ({@code database:
- * PATH}), opens the services, runs, closes. A user error prints {@code error: ...} to standard
- * error and exits with status 2; nothing has been changed then.
+ * PATH}), opens the services, runs, closes. A user error (a {@code UserInputException}, a
+ * located {@code FileFormatException}, a {@code StoreException} or a value the model refuses)
+ * prints {@code error: ...} to standard error and exits with status 2; nothing has been changed
+ * then.
  */
 abstract class StoreCommand implements Callable<Integer> {
   /** Exit status for bad input, as the {@code check} command uses. */
@@ -48,9 +51,15 @@ abstract class StoreCommand implements Callable<Integer> {
     Path file = context.database(db);
     err.println("database: " + file);
     err.flush();
+    try {
+      beforeOpen(file, err);
+    } catch (UserInputException e) {
+      err.println("error: " + e.getMessage());
+      return BAD_INPUT;
+    }
     try (AppServices services = context.services().open(file)) {
       return run(services, out, err);
-    } catch (UserInputException | StoreException | IllegalArgumentException e) {
+    } catch (UserInputException | FileFormatException | StoreException | IllegalArgumentException e) {
       out.flush();
       err.println("error: " + e.getMessage());
       return BAD_INPUT;
@@ -59,6 +68,9 @@ abstract class StoreCommand implements Callable<Integer> {
       err.flush();
     }
   }
+
+  /** Runs before the database is opened; nothing by default. */
+  void beforeOpen(Path file, PrintWriter err) {}
 
   /** The command's work; returns the exit status. */
   abstract int run(AppServices services, PrintWriter out, PrintWriter err);

@@ -1,5 +1,6 @@
 package org.bracewalk.cli;
 
+import org.bracewalk.app.AnalysisOutput;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -32,8 +33,11 @@ public final class StoreCommands {
     return group;
   }
 
-  /** Registers demo, site, structure, plane, inspection, record, finalise, import, export, history. */
-  public static void addTo(CommandLine root, CliContext context) {
+  /**
+   * Registers demo, site, structure, plane, inspection, record, finalise, import, export,
+   * analyse, history and bench-store.
+   */
+  public static void addTo(CommandLine root, CliContext context, AnalysisOutput analysisOutput) {
     root.addSubcommand("demo", new FileCommands.Demo(context));
     root.addSubcommand("site", group("site", "Create and list sites.",
         new SiteCommands.SiteCreate(context), new SiteCommands.SiteList(context)));
@@ -48,6 +52,8 @@ public final class StoreCommands {
     root.addSubcommand("finalise", new InspectionCommands.Finalise(context));
     root.addSubcommand("import", new FileCommands.Import(context));
     root.addSubcommand("export", new FileCommands.Export(context));
+    root.addSubcommand("analyse", new AnalyseCommand(context, analysisOutput));
     root.addSubcommand("history", new HistoryCommand(context));
+    root.addSubcommand("bench-store", new BenchStoreCommand(context));
   }
 }

@@ -26,6 +26,11 @@ final class Columns {
     return at == null ? null : INSTANT.format(at);
   }
 
+  /** The instant as the store keeps it: to the millisecond. */
+  static Instant millis(Instant at) {
+    return at == null ? null : at.truncatedTo(java.time.temporal.ChronoUnit.MILLIS);
+  }
+
   static Instant instant(ResultSet r, String column) throws SQLException {
     String s = r.getString(column);
     return s == null ? null : Instant.parse(s);
@@ -77,16 +82,6 @@ final class Columns {
       s.setNull(index, Types.INTEGER);
     } else {
       s.setInt(index, v);
-    }
-  }
-
-  /** The id SQLite gave the row just inserted on this connection. */
-  static long lastId(PreparedStatement s) throws SQLException {
-    try (ResultSet keys = s.getGeneratedKeys()) {
-      if (!keys.next()) {
-        throw new SQLException("no id came back for the new row");
-      }
-      return keys.getLong(1);
     }
   }
 }

@@ -4,10 +4,15 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Connection;
+import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
+import java.util.HashMap;
+import java.util.Map;
 import java.util.concurrent.locks.ReentrantLock;
+import java.util.logging.Level;
+import java.util.logging.Logger;
 import org.bracewalk.core.port.DesignRepository;
 import org.bracewalk.core.port.InspectionRepository;
 import org.bracewalk.core.port.IssuedReportRepository;
@@ -37,6 +42,18 @@ import org.sqlite.SQLiteDataSource;
  * <p>Thread-safe: calls are serialised on one lock; a transaction holds it throughout.
  */
 public final class Database implements RecordStore {
+  /**
+   * Flyway reports every migration at INFO through java.util.logging when nothing else is there;
+   * the command line must not print that, so only its warnings pass. Held here so the setting
+   * stays (java.util.logging keeps loggers weakly).
+   */
+  private static final Logger FLYWAY_LOG = quiet(Logger.getLogger("org.flywaydb"));
+
+  private static Logger quiet(Logger logger) {
+    logger.setLevel(Level.WARNING);
+    return logger;
+  }
+
   /** How long a write waits for another program's write to finish. */
   static final int BUSY_TIMEOUT_MS = 10_000;
 
@@ -45,6 +62,7 @@ public final class Database implements RecordStore {
   private final ReentrantLock lock = new ReentrantLock();
   private int depth;
   private boolean closed;
+  private final Map<String, PreparedStatement> statements = new HashMap<>();
 
   private final JdbcSiteRepository sites = new JdbcSiteRepository(this);
   private final JdbcStructureRepository structures = new JdbcStructureRepository(this);
@@ -104,11 +122,11 @@ public final class Database implements RecordStore {
   }
 
   private static void migrate(SQLiteDataSource dataSource, Path file) {
+    FLYWAY_LOG.fine(() -> "migrating " + file);
     Flyway flyway =
         Flyway.configure(Database.class.getClassLoader())
             .dataSource(dataSource)
             .locations("classpath:db/migration")
-            .loggers("slf4j")
             .load();
     try {
       flyway.migrate();
@@ -240,6 +258,34 @@ public final class Database implements RecordStore {
     }
   }
 
+  /**
+   * A prepared statement kept for the life of the connection (compiling SQL costs more than
+   * running these small statements). Call only inside {@link #call}; never close it; set every
+   * parameter each time.
+   */
+  PreparedStatement prepared(String sql) throws SQLException {
+    PreparedStatement s = statements.get(sql);
+    if (s == null) {
+      s = connection.prepareStatement(sql, Statement.RETURN_GENERATED_KEYS);
+      statements.put(sql, s);
+    }
+    return s;
+  }
+
+  /**
+   * The id SQLite gave the last row inserted on this connection. Asked through a kept statement:
+   * the driver's generated-keys path prepares a new query each time, which costs more than the
+   * insert itself. Call only inside {@link #call}, right after the insert.
+   */
+  long lastInsertId() throws SQLException {
+    try (ResultSet r = prepared("SELECT last_insert_rowid()").executeQuery()) {
+      if (!r.next()) {
+        throw new SQLException("no id came back for the new row");
+      }
+      return r.getLong(1);
+    }
+  }
+
   /** True inside {@link #inTransaction}. */
   boolean inTransaction() {
     return depth > 0;
@@ -277,6 +323,10 @@ public final class Database implements RecordStore {
     try {
       if (!closed) {
         closed = true;
+        for (PreparedStatement s : statements.values()) {
+          s.close();
+        }
+        statements.clear();
         connection.close();
       }
     } catch (SQLException e) {

@@ -92,7 +92,7 @@ final class JdbcDesignRepository implements DesignRepository {
                     s.setString(5, revision.approvalNote());
                     s.setString(6, Columns.text(revision.recordedAt()));
                     s.executeUpdate();
-                    id = Columns.lastId(s);
+                    id = db.lastInsertId();
                   }
                   try (PreparedStatement s = c.prepareStatement(INSERT_PANEL)) {
                     for (Map.Entry<PanelRef, Brace> e :

@@ -62,7 +62,7 @@ final class JdbcInspectionRepository implements InspectionRepository {
             s.setString(11, inspection.carriedOutForName());
             s.setString(12, inspection.carriedOutForAddress());
             s.executeUpdate();
-            return find(Columns.lastId(s)).orElseThrow();
+            return find(db.lastInsertId()).orElseThrow();
           }
         });
   }
@@ -105,17 +105,16 @@ final class JdbcInspectionRepository implements InspectionRepository {
   private List<Inspection> query(String sql, Long key) {
     return db.call(
         c -> {
-          try (PreparedStatement s = c.prepareStatement(sql)) {
-            if (key != null) {
-              s.setLong(1, key);
+          PreparedStatement s = db.prepared(sql);
+          if (key != null) {
+            s.setLong(1, key);
+          }
+          try (ResultSet r = s.executeQuery()) {
+            List<Inspection> out = new ArrayList<>();
+            while (r.next()) {
+              out.add(read(r));
             }
-            try (ResultSet r = s.executeQuery()) {
-              List<Inspection> out = new ArrayList<>();
-              while (r.next()) {
-                out.add(read(r));
-              }
-              return out;
-            }
+            return out;
           }
         });
   }

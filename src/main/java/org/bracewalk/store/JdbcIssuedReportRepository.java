@@ -37,7 +37,7 @@ final class JdbcIssuedReportRepository implements IssuedReportRepository {
             s.setString(3, report.fingerprint());
             s.setString(4, Columns.text(report.issuedAt()));
             s.executeUpdate();
-            long id = Columns.lastId(s);
+            long id = db.lastInsertId();
             return ofInspection(report.inspectionId()).stream()
                 .filter(r -> r.id() == id)
                 .findFirst()

@@ -61,7 +61,8 @@ final class JdbcObservationRepository implements ObservationRepository {
   public Observation add(Observation o) {
     return db.call(
         c -> {
-          try (PreparedStatement s = c.prepareStatement(INSERT, Statement.RETURN_GENERATED_KEYS)) {
+          PreparedStatement s = db.prepared(INSERT);
+          {
             s.setLong(1, o.inspectionId());
             s.setLong(2, o.planeId());
             s.setInt(3, o.panel().lift());
@@ -77,7 +78,12 @@ final class JdbcObservationRepository implements ObservationRepository {
             Columns.setLong(s, 14, o.supersedes());
             s.setString(15, o.correctionReason());
             s.executeUpdate();
-            return find(Columns.lastId(s)).orElseThrow();
+            long id = db.lastInsertId();
+            // as read back: instants to the millisecond, bows to the tenth
+            return new Observation(id, o.inspectionId(), o.planeId(), o.panel(), o.state(),
+                o.memberFound(), o.bowMm() == null ? null : tenths(o.bowMm()) / 10.0,
+                o.gaugeLengthMm(), o.defect(), o.note(), Columns.millis(o.recordedAt()),
+                o.recordedBy(), o.supersedes(), o.correctionReason());
           }
         });
   }
@@ -100,15 +106,14 @@ final class JdbcObservationRepository implements ObservationRepository {
   private List<Observation> query(String sql, long key) {
     return db.call(
         c -> {
-          try (PreparedStatement s = c.prepareStatement(sql)) {
-            s.setLong(1, key);
-            try (ResultSet r = s.executeQuery()) {
-              List<Observation> out = new ArrayList<>();
-              while (r.next()) {
-                out.add(read(r));
-              }
-              return out;
+          PreparedStatement s = db.prepared(sql);
+          s.setLong(1, key);
+          try (ResultSet r = s.executeQuery()) {
+            List<Observation> out = new ArrayList<>();
+            while (r.next()) {
+              out.add(read(r));
             }
+            return out;
           }
         });
   }
@@ -145,7 +150,7 @@ final class JdbcObservationRepository implements ObservationRepository {
             s.setBytes(4, photo.data());
             s.setString(5, Columns.text(photo.attachedAt()));
             s.executeUpdate();
-            long id = Columns.lastId(s);
+            long id = db.lastInsertId();
             return photosOf(photo.observationId()).stream()
                 .filter(p -> p.id() == id)
                 .findFirst()

@@ -6,7 +6,9 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.bracewalk.core.model.Millimetres;
 import org.bracewalk.core.model.PlaneGrid;
@@ -81,7 +83,7 @@ final class JdbcPlaneRepository implements PlaneRepository {
                     s.setInt(4, grid.bays());
                     s.setString(5, grid.support().label());
                     s.executeUpdate();
-                    id = Columns.lastId(s);
+                    id = db.lastInsertId();
                   }
                   insertLengths(c, INSERT_WIDTH, id, widths);
                   insertLengths(c, INSERT_HEIGHT, id, heights);
@@ -112,9 +114,28 @@ final class JdbcPlaneRepository implements PlaneRepository {
     }
   }
 
+  /**
+   * Planes never change once stored (migration V2 makes the database refuse), so a plane read
+   * outside a transaction is kept: recording an observation looks its plane up every time.
+   * Reads inside a transaction are not kept, as the transaction may yet roll back.
+   */
+  private final Map<Long, PlaneRecord> committed = new HashMap<>();
+
   @Override
   public Optional<PlaneRecord> find(long id) {
-    return query(SELECT + " WHERE id = ?", id, null).stream().findFirst();
+    return db.call(
+        c -> {
+          boolean keep = !db.inTransaction();
+          PlaneRecord known = keep ? committed.get(id) : null;
+          if (known != null) {
+            return Optional.of(known);
+          }
+          Optional<PlaneRecord> found = query(SELECT + " WHERE id = ?", id, null).stream().findFirst();
+          if (keep) {
+            found.ifPresent(p -> committed.put(id, p));
+          }
+          return found;
+        });
   }
 
   @Override
@@ -133,11 +154,12 @@ final class JdbcPlaneRepository implements PlaneRepository {
     return db.call(
         c -> {
           List<PlaneRecord> out = new ArrayList<>();
-          try (PreparedStatement s = c.prepareStatement(sql)) {
-            s.setLong(1, key);
-            if (name != null) {
-              s.setString(2, name);
-            }
+          PreparedStatement s = db.prepared(sql);
+          s.setLong(1, key);
+          if (name != null) {
+            s.setString(2, name);
+          }
+          {
             try (ResultSet r = s.executeQuery()) {
               while (r.next()) {
                 long id = r.getLong("id");
@@ -166,25 +188,23 @@ final class JdbcPlaneRepository implements PlaneRepository {
                     new PlaneGrid(
                         g.lifts(),
                         g.bays(),
-                        Millimetres.toMetres(lengths(c, WIDTHS, p.id())),
-                        Millimetres.toMetres(lengths(c, HEIGHTS, p.id())),
+                        Millimetres.toMetres(lengths(WIDTHS, p.id())),
+                        Millimetres.toMetres(lengths(HEIGHTS, p.id())),
                         g.support())));
           }
           return full;
         });
   }
 
-  private static List<Integer> lengths(Connection c, String sql, long planeId)
-      throws SQLException {
-    try (PreparedStatement s = c.prepareStatement(sql)) {
-      s.setLong(1, planeId);
-      try (ResultSet r = s.executeQuery()) {
-        List<Integer> out = new ArrayList<>();
-        while (r.next()) {
-          out.add(r.getInt(1));
-        }
-        return out;
+  private List<Integer> lengths(String sql, long planeId) throws SQLException {
+    PreparedStatement s = db.prepared(sql);
+    s.setLong(1, planeId);
+    try (ResultSet r = s.executeQuery()) {
+      List<Integer> out = new ArrayList<>();
+      while (r.next()) {
+        out.add(r.getInt(1));
       }
+      return out;
     }
   }
 }

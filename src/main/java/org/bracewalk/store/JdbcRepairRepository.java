@@ -65,7 +65,7 @@ final class JdbcRepairRepository implements RepairRepository {
             s.setString(3, order.createdBy());
             s.setString(4, order.note());
             s.executeUpdate();
-            return findOrder(Columns.lastId(s)).orElseThrow();
+            return findOrder(db.lastInsertId()).orElseThrow();
           }
         });
   }
@@ -89,7 +89,7 @@ final class JdbcRepairRepository implements RepairRepository {
             s.setString(12, a.doneBy());
             Columns.setLong(s, 13, a.verifiedByInspectionId());
             s.executeUpdate();
-            return findAction(Columns.lastId(s)).orElseThrow();
+            return findAction(db.lastInsertId()).orElseThrow();
           }
         });
   }

@@ -43,7 +43,7 @@ final class JdbcSiteRepository implements SiteRepository {
             s.setString(5, site.timeZone().getId());
             s.setString(6, site.units().label());
             s.executeUpdate();
-            return site.withId(Columns.lastId(s));
+            return site.withId(db.lastInsertId());
           }
         });
   }

@@ -43,7 +43,7 @@ final class JdbcStructureRepository implements StructureRepository {
             s.setString(5, structure.designReference());
             s.setInt(6, structure.inspectionIntervalDays());
             s.executeUpdate();
-            return structure.withId(Columns.lastId(s));
+            return structure.withId(db.lastInsertId());
           }
         });
   }

@@ -18,8 +18,8 @@ import picocli.CommandLine;
 
 /** {@code bracewalk bench} on tiny plans: the output's shape, not its timings. */
 class BenchCommandTest {
-  private static final BenchPlan TINY_QUICK = new BenchPlan(3, 0.3, List.of(3, 5), 5, List.of(5), 0, 1, 1, false, 0);
-  private static final BenchPlan TINY_FULL = new BenchPlan(3, 0.3, List.of(3, 5), 5, List.of(3, 5), 0, 1, 1, false, 0);
+  private static final BenchPlan TINY_QUICK = new BenchPlan(3, 0.3, List.of(3, 5), 5, List.of(5), 0, 1, 1, 30, false, 0);
+  private static final BenchPlan TINY_FULL = new BenchPlan(3, 0.3, List.of(3, 5), 5, List.of(3, 5), 0, 1, 1, 30, false, 0);
 
   record Run(int code, String out, String err) {}
 

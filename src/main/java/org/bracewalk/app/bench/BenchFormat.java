@@ -62,11 +62,13 @@ public final class BenchFormat {
             "Random planes on a pinned base, about %d %% of panels braced with rigid diagonals; as built:"
                 + " a tenth of the braces lost,%n"
                 + "every brace gone in one lift in fifty, one panel in a hundred not inspected."
-                + " Medians of %d samples (%d for a million%npanels and for baselines of 30 x 30 and"
-                + " more), each after an untimed warm-up.%n%n",
+                + " Medians of %d samples (%d for a million%npanels and for baselines of %d x %d and"
+                + " more), after an untimed warm-up.%n%n",
             Math.round(plan.bracedShare() * 100),
             plan.repetitions(),
-            plan.largeRepetitions()));
+            plan.largeRepetitions(),
+            plan.largeBaselineFrom(),
+            plan.largeBaselineFrom()));
     int nameWidth = "measurement".length();
     for (BenchResult r : report.results()) {
       nameWidth = Math.max(nameWidth, r.name().length());
@@ -75,10 +77,10 @@ public final class BenchFormat {
     for (BenchResult r : report.results()) {
       sb.append(String.format(Locale.ROOT, "%-" + nameWidth + "s  %12s  %7d", r.name(), figure(r.medianMs()), r.samples()));
       if (r.retainedHeapMb().isPresent()) {
-        sb.append(String.format(Locale.ROOT, "  heap: %s MB held after the run", figure(r.retainedHeapMb().getAsDouble())));
+        sb.append(String.format(Locale.ROOT, "  heap: %s MB held by the result", figure(r.retainedHeapMb().getAsDouble())));
       }
       if (r.peakHeapMb().isPresent()) {
-        sb.append(String.format(Locale.ROOT, ", at most %s MB at the peak", figure(r.peakHeapMb().getAsDouble())));
+        sb.append(String.format(Locale.ROOT, ", at most %s MB in use at the peak, input included", figure(r.peakHeapMb().getAsDouble())));
       }
       sb.append('\n');
     }

@@ -16,7 +16,8 @@ import java.util.List;
  *     at least this long (at least once) so that the JIT has compiled it
  * @param repetitions timed samples per measurement (the median is reported)
  * @param largeRepetitions timed samples for planes of a million panels or more, and for baselines
- *     of 30 x 30 or more (each call takes seconds)
+ *     of {@code largeBaselineFrom} or more (each call takes seconds)
+ * @param largeBaselineFrom the baseline size from which a rank is sampled like a large plane
  * @param largeWarmup whether those large measurements get one untimed call first (the code is
  *     compiled by then; the call mainly settles the heap)
  * @param minSampleNanos a sample repeats the work until this much time has passed, so that quick
@@ -31,6 +32,7 @@ public record BenchPlan(
     long warmupNanos,
     int repetitions,
     int largeRepetitions,
+    int largeBaselineFrom,
     boolean largeWarmup,
     long minSampleNanos) {
 
@@ -52,11 +54,14 @@ public record BenchPlan(
 
   /** The full bench: engine 10 to 1000, baseline 10, 20, 30. */
   public static BenchPlan standard() {
-    return new BenchPlan(SEED, 0.3, List.of(10, 20, 30, 100, 1000), 1000, List.of(10, 20, 30), 2_000_000_000L, 9, 3, true, 20_000_000L);
+    return new BenchPlan(SEED, 0.3, List.of(10, 20, 30, 100, 1000), 1000, List.of(10, 20, 30), 2_000_000_000L, 9, 3, 30, true, 20_000_000L);
   }
 
-  /** {@code --quick}: the same without the 30 x 30 baseline and with fewer samples; under a minute. */
+  /**
+   * {@code --quick}: the same without the 30 x 30 baseline, with fewer samples and no warm-up call
+   * for the large measurements; under a minute.
+   */
   public static BenchPlan quick() {
-    return new BenchPlan(SEED, 0.3, List.of(10, 20, 100, 1000), 1000, List.of(10, 20), 500_000_000L, 5, 3, false, 10_000_000L);
+    return new BenchPlan(SEED, 0.3, List.of(10, 20, 100, 1000), 1000, List.of(10, 20), 500_000_000L, 5, 3, 20, false, 10_000_000L);
   }
 }

@@ -9,9 +9,9 @@ import java.util.OptionalDouble;
  * @param description what was timed, in words
  * @param medianMs median time of one operation, in milliseconds
  * @param samples timed samples taken
- * @param retainedHeapMb heap held by the inputs and the result after the run, when measured
- * @param peakHeapMb the sum of the heap pools' peaks during the run (an upper bound on the peak),
- *     when measured
+ * @param retainedHeapMb heap held by the result of one run, when measured
+ * @param peakHeapMb the sum of the heap pools' peaks during one run, its input included (an upper
+ *     bound on the peak), when measured
  */
 public record BenchResult(
     String name,

@@ -30,8 +30,6 @@ import org.bracewalk.core.model.PlaneDesign;
 public final class BenchService {
   private static final double MB = 1024.0 * 1024.0;
 
-  /** From this size on, a rigidity-matrix rank takes seconds: it is sampled like a large plane. */
-  static final int LARGE_BASELINE = 30;
 
   private final PlaneAnalyzer analyzer;
   private final LongSupplier nanoClock;
@@ -82,7 +80,7 @@ public final class BenchService {
               () -> analyzer.analyse(pair.design(), pair.asBuilt()));
       results.add(r);
       engineFull.put(size, r.medianMs());
-      if (size * (long) size >= 1_000_000) {
+      if (size * (long) size >= 1_000_000 && size != plan.verdictRepairSize()) {
         planes.remove(size); // let a million panels go before the next measurement
       }
     }
@@ -90,7 +88,14 @@ public final class BenchService {
     int vr = plan.verdictRepairSize();
     String vrName = "engine-verdict-repair-" + vr + "x" + vr;
     progress.accept(vrName);
-    results.add(verdictAndRepair(vrName, vr, plan));
+    RandomPlanes.Pair vrPair = planes.get(vr);
+    if (vrPair == null) {
+      vrPair = RandomPlanes.pair(vr, vr, plan.bracedShare(), plan.seed() + vr);
+    }
+    results.add(verdictAndRepair(vrName, vrPair, plan));
+    if ((long) vr * vr >= 1_000_000) {
+      planes.remove(vr);
+    }
 
     boolean agrees = true;
     Map<String, Double> ratios = new LinkedHashMap<>();
@@ -108,7 +113,7 @@ public final class BenchService {
               name,
               "rank of the rigidity matrix by dense SVD (EJML), as built, " + size + " x " + size + " panels",
               plan,
-              size >= LARGE_BASELINE ? Long.MAX_VALUE : (long) size * size,
+              size >= plan.largeBaselineFrom() ? Long.MAX_VALUE : (long) size * size,
               () -> RigidityMatrixBaseline.freedoms(built.grid(), built.members()));
       results.add(r);
       ratios.put("rigidityMatrixOverEngine" + size + "x" + size, r.medianMs() / engineFull.get(size));
@@ -119,22 +124,21 @@ public final class BenchService {
     return new BenchReport(plan, results, ratios, agrees, processors, javaVersion);
   }
 
-  /** {@link PlaneAnalyzer#analyse(PlaneDesign)} on the damaged bracing: one verdict and its repair. */
-  private BenchResult verdictAndRepair(String name, int size, BenchPlan plan) {
-    Supplier<PlaneDesign> build =
-        () -> {
-          RandomPlanes.Pair pair = RandomPlanes.pair(size, size, plan.bracedShare(), plan.seed() + size);
-          Set<PanelRef> openings = new HashSet<>(pair.design().openings());
-          openings.removeAll(pair.asBuilt().members().keySet());
-          return new PlaneDesign(pair.asBuilt().grid(), pair.asBuilt().members(), openings);
-        };
-    // Heap: from a collected heap, build the plane and analyse it once; then collect again with
-    // both still held. The pools' peaks during the run bound its peak use from above.
+  /**
+   * {@link PlaneAnalyzer#analyse(PlaneDesign)} on the damaged bracing of {@code pair} taken as a
+   * design: one verdict and its repair, which must then search panels outside the design.
+   */
+  private BenchResult verdictAndRepair(String name, RandomPlanes.Pair pair, BenchPlan plan) {
+    int size = pair.design().grid().lifts();
+    Set<PanelRef> openings = new HashSet<>(pair.design().openings());
+    openings.removeAll(pair.asBuilt().members().keySet());
+    PlaneDesign damaged = new PlaneDesign(pair.asBuilt().grid(), pair.asBuilt().members(), openings);
+    // Heap: from a collected heap (the input built), analyse once and collect again with the
+    // result held: what the result keeps. The pools' peaks bound the peak use, input included.
     memory.gc();
     long before = memory.getHeapMemoryUsage().getUsed();
     List<MemoryPoolMXBean> heapPools = pools.stream().filter(p -> p.getType() == MemoryType.HEAP).toList();
     heapPools.forEach(MemoryPoolMXBean::resetPeakUsage);
-    PlaneDesign damaged = build.get();
     Object result = analyzer.analyse(damaged);
     long peak = heapPools.stream().mapToLong(p -> p.getPeakUsage().getUsed()).sum();
     memory.gc();

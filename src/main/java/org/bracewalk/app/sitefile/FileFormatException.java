@@ -1,12 +1,13 @@
 package org.bracewalk.app.sitefile;
 
-import org.bracewalk.app.UserInputException;
-
 /**
  * A file that cannot be read as what it claims to be. The message reads {@code FILE, line N
- * (at PATH), field "F": problem}; the parts are also available one by one.
+ * (at PATH), field "F": problem}; the parts are also available one by one. Like the panel maps'
+ * {@code PanelMapException}, it is its own unchecked exception (not an {@code
+ * app.UserInputException}), so this package depends on nothing else of the application: front
+ * ends catch both.
  */
-public class FileFormatException extends UserInputException {
+public class FileFormatException extends RuntimeException {
   private static final long serialVersionUID = 1L;
 
   private final String file;

@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 
 /** The bench's shape on tiny planes, timed by a clock that ticks one millisecond per reading. */
 class BenchServiceTest {
-  static final BenchPlan TINY = new BenchPlan(7, 0.3, List.of(3, 4), 4, List.of(3, 4), 0, 2, 1, false, 0);
+  static final BenchPlan TINY = new BenchPlan(7, 0.3, List.of(3, 4), 4, List.of(3, 4), 0, 2, 1, 4, false, 0);
 
   static BenchService service() {
     AtomicLong now = new AtomicLong();
@@ -37,6 +37,8 @@ class BenchServiceTest {
             "rigidity-matrix-rank-3x3",
             "rigidity-matrix-rank-4x4");
     assertThat(steps).hasSize(5);
+    // the 4 x 4 rank is "large" in this plan: its own sample count
+    assertThat(report.results().stream().map(BenchResult::samples)).containsExactly(2, 2, 2, 2, 1);
     // one tick of the fake clock per sample: every median is 1 ms, every ratio 1
     assertThat(report.results()).allSatisfy(r -> assertThat(r.medianMs()).isEqualTo(1.0));
     assertThat(report.ratios()).containsOnlyKeys("rigidityMatrixOverEngine3x3", "rigidityMatrixOverEngine4x4");

@@ -141,4 +141,16 @@ class EngineBasicsTest {
     assertThat(s.lossTolerance()).isEqualTo(3);
     assertThat(s.criticalBraces()).isEmpty();
   }
+
+  @Test
+  void aRepairNeverChangesTheMemberOfADesignPanel() {
+    // check-contract.md: a repair brace in a design panel repeats the design. A lone tension rod
+    // that already is its design member leaves nothing allowed to add, so the plane is reported
+    // as not repairable within the design rules (an engineer must decide).
+    PlaneAnalysis a = engine.analyse(Planes.design(PINNED_BASE, "~/"));
+    assertThat(a.design().rigid()).isFalse();
+    assertThat(a.design().oneWayOnly()).isTrue();
+    assertThat(a.repair().possible()).isFalse();
+    assertThat(a.repair().braces()).isEmpty();
+  }
 }

@@ -1,0 +1,48 @@
+package org.bracewalk.core.port.report;
+
+import java.util.Map;
+import java.util.Objects;
+import org.bracewalk.core.analysis.PlaneAnalysis;
+import org.bracewalk.core.model.AsBuiltPlane;
+import org.bracewalk.core.model.PanelFinding;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PlaneDesign;
+
+/**
+ * One plane as the report shows it.
+ *
+ * @param name the plane's name
+ * @param design the design in force
+ * @param asBuilt the as-built state that follows from the findings
+ * @param findings the latest finding per panel (a panel without one was not inspected)
+ * @param analysis the engine's analysis of {@code asBuilt} against {@code design}
+ * @param revision the design revision in force: its number, date and author
+ */
+public record PlaneSection(
+    String name,
+    PlaneDesign design,
+    AsBuiltPlane asBuilt,
+    Map<PanelRef, PanelFinding> findings,
+    PlaneAnalysis analysis,
+    DesignRef revision) {
+  public PlaneSection {
+    Objects.requireNonNull(name, "name");
+    Objects.requireNonNull(design, "design");
+    Objects.requireNonNull(asBuilt, "asBuilt");
+    Objects.requireNonNull(analysis, "analysis");
+    Objects.requireNonNull(revision, "revision");
+    findings = Map.copyOf(findings);
+  }
+
+  /** Which design revision a plane was checked against. */
+  public record DesignRef(int number, java.time.LocalDate date, String author) {
+    public DesignRef {
+      Objects.requireNonNull(date, "date");
+      author = author == null ? "" : author;
+    }
+  }
+
+  public PlaneVerdict verdict() {
+    return PlaneVerdict.of(analysis);
+  }
+}

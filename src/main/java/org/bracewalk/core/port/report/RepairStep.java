@@ -1,0 +1,43 @@
+package org.bracewalk.core.port.report;
+
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Objects;
+import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.PanelRef;
+
+/**
+ * One numbered action of the repair plan, in the order to do it.
+ *
+ * @param number 1, 2, ... in working order
+ * @param plane the plane's name
+ * @param panel the panel (for {@link RepairStepKind#TAKE_OUT_OF_SERVICE} the lowest panel of the
+ *     affected part)
+ * @param lifts for taking out of service: every lift of the affected part; else the panel's lift
+ * @param type what to do
+ * @param member the member to fit or repair ({@code null} for taking out of service)
+ * @param priority why and how soon
+ * @param deviation true when the member is not in the design (needs engineering approval first)
+ * @param dueDate when it falls due, or {@code null} for "at once"
+ */
+public record RepairStep(
+    int number,
+    String plane,
+    PanelRef panel,
+    List<Integer> lifts,
+    RepairStepKind type,
+    Brace member,
+    RepairUrgency priority,
+    boolean deviation,
+    LocalDate dueDate) {
+  public RepairStep {
+    if (number < 1) {
+      throw new IllegalArgumentException("actions are numbered from 1, got " + number);
+    }
+    Objects.requireNonNull(plane, "plane");
+    Objects.requireNonNull(panel, "panel");
+    Objects.requireNonNull(type, "type");
+    Objects.requireNonNull(priority, "priority");
+    lifts = List.copyOf(lifts);
+  }
+}

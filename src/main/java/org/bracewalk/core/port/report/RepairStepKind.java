@@ -1,0 +1,29 @@
+package org.bracewalk.core.port.report;
+
+/**
+ * What the crew does. The first four are the actions of 29 CFR 1926.451(f)(4) (repair, replace,
+ * brace, or take out of service); {@link #INSPECT} is a panel nobody has looked at, which must be
+ * looked at (and fitted if its member is missing) before the plane can be counted on.
+ */
+public enum RepairStepKind {
+  /** Put a damaged member back into a sound state. */
+  REPAIR("repair"),
+  /** Fit a design member that is missing or damaged beyond use. */
+  REPLACE("replace"),
+  /** Fit a brace the design does not have (a deviation: engineering approval first). */
+  BRACE("brace"),
+  /** Keep people and loads off the affected part until the actions that follow are done. */
+  TAKE_OUT_OF_SERVICE("out-of-service"),
+  /** Look at a panel not inspected; fit its design member if it is missing. */
+  INSPECT("inspect");
+
+  private final String code;
+
+  RepairStepKind(String code) {
+    this.code = code;
+  }
+
+  public String code() {
+    return code;
+  }
+}

@@ -1,0 +1,111 @@
+package org.bracewalk.report;
+
+import com.lowagie.text.pdf.BaseFont;
+import com.lowagie.text.pdf.PdfContentByte;
+
+/** The key to the elevation: a sample of each line style and symbol, with its wording. */
+final class Legend {
+  private static final String[] ENTRIES = {
+    "design", "sound", "damaged-effective", "damaged-ineffective", "missing", "extra",
+    "not-inspected", "opening", "critical", "repair", "part", "tension"
+  };
+  private static final float ROW = 11f;
+  private static final int COLUMNS = 2;
+
+  private Legend() {}
+
+  static float height() {
+    return 12f + ROW * ((ENTRIES.length + COLUMNS - 1) / COLUMNS) + 2f;
+  }
+
+  /** Draws the key with its top-left corner at (x, top). */
+  static void draw(PdfContentByte cb, Wording w, BaseFont font, BaseFont bold, float x, float top,
+      float width) {
+    Glyphs.text(cb, bold, 7.5f, Palette.GRID, PdfContentByte.ALIGN_LEFT, w.text("legend.title"),
+        x, top - 8f);
+    float colW = width / COLUMNS;
+    for (int k = 0; k < ENTRIES.length; k++) {
+      int row = k / COLUMNS;
+      int col = k % COLUMNS;
+      float sx = x + col * colW;
+      float sy = top - 12f - row * ROW - ROW / 2;
+      sample(cb, font, bold, ENTRIES[k], sx, sy);
+      Glyphs.text(cb, font, 6.3f, Palette.GRID, PdfContentByte.ALIGN_LEFT,
+          w.text("legend." + ENTRIES[k]), sx + 30f, sy - 2.2f);
+    }
+  }
+
+  private static void sample(PdfContentByte cb, BaseFont font, BaseFont bold, String entry,
+      float x, float cy) {
+    float x0 = x;
+    float x1 = x + 26f;
+    float y0 = cy - 4f;
+    float y1 = cy + 4f;
+    cb.saveState();
+    switch (entry) {
+      case "design" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.DESIGN, 1f);
+        Glyphs.line(cb, x0, y0, x1, y1);
+      }
+      case "sound" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.SOUND, 1f);
+        Glyphs.line(cb, x0, y0, x1, y1);
+      }
+      case "damaged-effective" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.DAMAGED, 1f);
+        Glyphs.line(cb, x0, y0, x1, y1);
+        Glyphs.mark(cb, font, Glyphs.Mark.OPEN_TRIANGLE, (x0 + x1) / 2, cy, 3.2f);
+      }
+      case "damaged-ineffective" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.INEFFECTIVE, 1f);
+        Glyphs.line(cb, x0, y0, x1, y1);
+        Glyphs.mark(cb, font, Glyphs.Mark.FILLED_TRIANGLE, (x0 + x1) / 2, cy, 3.2f);
+      }
+      case "missing" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.MISSING, 1f);
+        Glyphs.line(cb, x0, y0, x1, y1);
+        Glyphs.mark(cb, font, Glyphs.Mark.SLASHED_RING, (x0 + x1) / 2, cy, 3.2f);
+      }
+      case "extra" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.EXTRA, 1f);
+        Glyphs.line(cb, x0, y0, x1, y1);
+        Glyphs.mark(cb, font, Glyphs.Mark.PLUS, (x0 + x1) / 2, cy, 3.2f);
+      }
+      case "not-inspected" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.DESIGN, 1f);
+        Glyphs.line(cb, x0, y0, x1, y1);
+        Glyphs.mark(cb, font, Glyphs.Mark.QUESTION, (x0 + x1) / 2, cy, 3.2f);
+      }
+      case "opening" -> {
+        cb.setColorFill(Palette.OPENING);
+        cb.rectangle(x0 + 5, y0, 16, 8);
+        cb.fill();
+        cb.setColorStroke(Palette.GHOST);
+        cb.setLineWidth(0.6f);
+        cb.rectangle(x0 + 8, y0, 10, 6.5f);
+        cb.stroke();
+      }
+      case "critical" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.SOUND, 1f);
+        Glyphs.line(cb, x0, y0, x1, y1);
+        Glyphs.critical(cb, x0 + 4f, y1 - 1f, 3.5f);
+      }
+      case "repair" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.REPAIR, 1f);
+        Glyphs.line(cb, x0, y0, x1, y1);
+        Glyphs.label(cb, bold, "3", x1 - 3f, y0 + 1.5f, 5.5f, Palette.REPAIR);
+      }
+      case "part" -> {
+        Glyphs.hatch(cb, x0 + 4, y0, 18, 8, Palette.tint(0), 0);
+        Glyphs.label(cb, bold, "B", x0 + 13, cy, 5.5f, Palette.LOST);
+      }
+      case "tension" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.SOUND, 1f);
+        ElevationDrawing.members(cb, org.bracewalk.core.model.Diagonal.RISING,
+            org.bracewalk.core.model.MemberKind.TENSION_ONLY, x0, y0, x1, y1, 0f);
+      }
+      default -> throw new IllegalArgumentException(entry);
+    }
+    cb.restoreState();
+  }
+}

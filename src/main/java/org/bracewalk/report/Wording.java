@@ -1,0 +1,142 @@
+package org.bracewalk.report;
+
+import java.time.Instant;
+import java.time.LocalDate;
+import java.util.List;
+import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.port.report.LengthUnits;
+import org.bracewalk.core.port.report.ReportHeader;
+
+/** The templates bound to one document's units and time zone: words, lengths, dates. */
+final class Wording {
+  private static final double METRES_PER_INCH = 0.0254;
+  private static final int LIST_LIMIT = 40;
+
+  private final Templates t;
+  private final ReportHeader header;
+
+  Wording(Templates t, ReportHeader header) {
+    this.t = t;
+    this.header = header;
+  }
+
+  String text(String key) {
+    return t.text(key);
+  }
+
+  String format(String key, Object... namesAndValues) {
+    return t.format(key, namesAndValues);
+  }
+
+  /** A length in metres shown in the site's units (feet and inches to the nearest tenth). */
+  String length(double metres) {
+    if (header.units() == LengthUnits.METRIC) {
+      return t.format("unit.length.metric", "metres", t.number("format.metres", metres));
+    }
+    double inchesTotal = Math.round(metres / METRES_PER_INCH * 10.0) / 10.0;
+    long feet = (long) Math.floor(inchesTotal / 12.0);
+    double inches = inchesTotal - feet * 12.0;
+    if (inches >= 11.95) {
+      feet++;
+      inches = 0;
+    }
+    return t.format(
+        "unit.length.imperial", "feet", feet, "inches", t.number("format.inches", inches));
+  }
+
+  /** A small measured length (a bow, a gauge) given in millimetres. */
+  String small(double mm) {
+    String metric = t.number("format.millimetres", mm);
+    if (header.units() == LengthUnits.METRIC) {
+      return t.format("unit.bow.metric", "mm", metric);
+    }
+    return t.format(
+        "unit.bow.imperial",
+        "inches",
+        t.number("format.metres", mm / 1000.0 / METRES_PER_INCH),
+        "mm",
+        metric);
+  }
+
+  /** The scale bar's label for {@code n} display units (metres or feet). */
+  String scaleBar(double n) {
+    String key = header.units() == LengthUnits.METRIC ? "unit.scalebar.metric" : "unit.scalebar.imperial";
+    return t.format(key, "n", n == Math.rint(n) ? String.valueOf((long) n) : String.valueOf(n));
+  }
+
+  /** Metres in one display unit (1 for metric, a foot for imperial). */
+  double metresPerDisplayUnit() {
+    return header.units() == LengthUnits.METRIC ? 1.0 : 12 * METRES_PER_INCH;
+  }
+
+  String date(LocalDate d) {
+    return t.date(d);
+  }
+
+  String dateTime(Instant at) {
+    return t.dateTime(at, header.zone());
+  }
+
+  String panel(PanelRef p) {
+    return t.format("panel.short", "lift", p.lift(), "bay", p.bay());
+  }
+
+  /** Panels in short form, cut after a reasonable number with "and N more". */
+  String panels(List<PanelRef> panels) {
+    if (panels.isEmpty()) {
+      return t.text("list.none");
+    }
+    StringBuilder sb = new StringBuilder();
+    int shown = Math.min(panels.size(), LIST_LIMIT);
+    for (int i = 0; i < shown; i++) {
+      if (i > 0) {
+        sb.append(", ");
+      }
+      sb.append(panel(panels.get(i)));
+    }
+    if (panels.size() > shown) {
+      sb.append(", ").append(t.format("list.and-more", "n", panels.size() - shown));
+    }
+    return sb.toString();
+  }
+
+  /** Numbers as a compact list: 1-3, 5. */
+  static String ranges(List<Integer> numbers) {
+    if (numbers.isEmpty()) {
+      return "-";
+    }
+    List<Integer> sorted = numbers.stream().sorted().distinct().toList();
+    StringBuilder sb = new StringBuilder();
+    int start = sorted.get(0);
+    int prev = start;
+    for (int i = 1; i <= sorted.size(); i++) {
+      Integer cur = i < sorted.size() ? sorted.get(i) : null;
+      if (cur != null && cur == prev + 1) {
+        prev = cur;
+        continue;
+      }
+      if (sb.length() > 0) {
+        sb.append(", ");
+      }
+      sb.append(start == prev ? String.valueOf(start) : start + "-" + prev);
+      if (cur != null) {
+        start = cur;
+        prev = cur;
+      }
+    }
+    return sb.toString();
+  }
+
+  String member(Brace b) {
+    if (b == null) {
+      return t.text("member.none");
+    }
+    return t.text("member." + b.diagonal().name().toLowerCase(java.util.Locale.ROOT) + "." + b.kind().label());
+  }
+
+  /** A code's wording ({@code prefix.code}); a code the file lacks is an error naming the key. */
+  String code(String prefix, String code) {
+    return t.text(prefix + "." + code);
+  }
+}
