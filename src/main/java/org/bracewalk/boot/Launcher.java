@@ -65,6 +65,7 @@ public final class Launcher {
     StoreCommands.addTo(cli, context.cliContext(env),
         new AnalysisOutput(new VerdictJson(), new VerdictText()));
     ReportCommands.addTo(cli, context.cliContext(env), context.reportFactory(env));
+    cli.addSubcommand("snapshot", new SnapshotCommand(context, env));
     // Set after the sub-commands are added: picocli copies these settings down the hierarchy.
     cli.setExitCodeExceptionMapper(e -> e instanceof ParameterException ? BAD_INPUT : INTERNAL_ERROR);
     cli.setExecutionExceptionHandler(

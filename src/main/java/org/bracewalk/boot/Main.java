@@ -13,7 +13,11 @@ public final class Main {
   public static void main(String[] args) {
     PrintWriter out = new PrintWriter(System.out, true, StandardCharsets.UTF_8);
     PrintWriter err = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
-    int code = Launcher.run(args, out, err, System.getenv());
+    var app = GuiLauncher.appRequest(args);
+    int code =
+        app.isPresent()
+            ? GuiLauncher.run(app.get(), System.getenv(), err)
+            : Launcher.run(args, out, err, System.getenv());
     out.flush();
     err.flush();
     System.exit(code);

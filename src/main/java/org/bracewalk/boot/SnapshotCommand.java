@@ -1,0 +1,105 @@
+package org.bracewalk.boot;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.stream.Stream;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.ui.HeadlessFx;
+import org.bracewalk.ui.ScreenShots;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code bracewalk snapshot --screen NAME --out FILE.png}: renders one screen of the app headless,
+ * over a fresh temporary database holding the demo site. Lives in boot because it needs both the
+ * command line and the toolkit.
+ */
+@Command(
+    name = "snapshot",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Render a screen of the desktop app to a PNG, with no display, over the demo site (loaded into a"
+          + " temporary database that is deleted afterwards).",
+      "Use --list for the screen names."
+    })
+final class SnapshotCommand implements Callable<Integer> {
+  @Spec CommandSpec spec;
+
+  @Option(names = "--screen", paramLabel = "NAME", description = "the screen to render (see --list)")
+  String screen;
+
+  @Option(names = "--out", paramLabel = "FILE.png", description = "where to write the picture")
+  Path out;
+
+  @Option(names = "--list", description = "list the screens that can be rendered")
+  boolean list;
+
+  private final AppContext context;
+  private final Map<String, String> env;
+
+  SnapshotCommand(AppContext context, Map<String, String> env) {
+    this.context = context;
+    this.env = env;
+  }
+
+  @Override
+  public Integer call() {
+    PrintWriter o = spec.commandLine().getOut();
+    PrintWriter err = spec.commandLine().getErr();
+    if (list) {
+      ScreenShots.describe().forEach(o::println);
+      o.flush();
+      return 0;
+    }
+    if (screen == null || out == null) {
+      err.println("bracewalk snapshot: give --screen NAME and --out FILE.png (or --list)");
+      err.flush();
+      return Launcher.BAD_INPUT;
+    }
+    if (!ScreenShots.NAMES.contains(screen)) {
+      err.println("bracewalk snapshot: no screen named '" + screen + "'; use one of "
+          + String.join(", ", ScreenShots.NAMES));
+      err.flush();
+      return Launcher.BAD_INPUT;
+    }
+    Path dir;
+    try {
+      dir = Files.createTempDirectory("bracewalk-snapshot");
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+    try {
+      HeadlessFx.start();
+      try (AppServices services = context.open(dir.resolve("demo.db"))) {
+        ScreenShots shots = new ScreenShots(services, context.analyzer(), context.clock(),
+            ReportIssuers.over(context, services, env));
+        HeadlessFx.onFx(() -> {
+          shots.render(screen, out);
+          return null;
+        });
+      }
+      o.println("wrote " + out.toAbsolutePath() + " (" + screen + ", "
+          + (int) ScreenShots.WIDTH + " x " + (int) ScreenShots.HEIGHT + ")");
+      o.flush();
+      return 0;
+    } finally {
+      deleteTree(dir);
+    }
+  }
+
+  private static void deleteTree(Path dir) {
+    try (Stream<Path> s = Files.walk(dir)) {
+      s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+    } catch (IOException ignored) {
+      // a temporary folder left behind is harmless
+    }
+  }
+}

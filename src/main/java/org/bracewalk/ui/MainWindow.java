@@ -1,0 +1,241 @@
+package org.bracewalk.ui;
+
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Consumer;
+import javafx.geometry.Insets;
+import javafx.scene.Node;
+import javafx.scene.Parent;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyEvent;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+import org.bracewalk.ui.common.KeyHelp;
+import org.bracewalk.ui.common.Navigator;
+import org.bracewalk.ui.common.ScreenId;
+import org.bracewalk.ui.common.Selection;
+import org.bracewalk.ui.common.Widgets;
+
+/**
+ * The main window's content: a header with where you are, a rail of screens on the left (each
+ * Ctrl+digit), the current screen, a status line, and the key help overlay (F1 or ?).
+ */
+public final class MainWindow implements Navigator {
+  static final int MIN_FONT = 12;
+  static final int MAX_FONT = 26;
+
+  private final ScreenFactory factory;
+  private final List<KeyHelp.Section> keys;
+  private final StackPane root = new StackPane();
+  private final BorderPane frame = new BorderPane();
+  private final Label crumbs = new Label();
+  private final Map<ScreenId, ToggleButton> rail = new EnumMap<>(ScreenId.class);
+  private final ToggleGroup railGroup = new ToggleGroup();
+  private Screen current;
+  private ScreenId currentId;
+  private Selection selection = Selection.NONE;
+  private HelpOverlay help;
+  private int fontSize = 15;
+  private Consumer<ScreenId> onShown = id -> {};
+
+  public MainWindow(ScreenFactory factory, List<KeyHelp.Section> screenKeys, String statusText) {
+    this.factory = factory;
+    List<KeyHelp.Section> all = new ArrayList<>();
+    all.add(windowKeys());
+    all.addAll(screenKeys);
+    this.keys = List.copyOf(all);
+
+    Label mark = new Label("Bracewalk");
+    mark.getStyleClass().add("wordmark");
+    crumbs.getStyleClass().add("crumbs");
+    crumbs.setId("crumbs");
+    Button helpButton = new Button("Keys (F1)");
+    helpButton.setOnAction(e -> toggleHelp());
+    helpButton.setFocusTraversable(false);
+    Button smaller = new Button("A\u2212");
+    smaller.setOnAction(e -> scaleText(-1));
+    smaller.setFocusTraversable(false);
+    Button larger = new Button("A+");
+    larger.setOnAction(e -> scaleText(1));
+    larger.setFocusTraversable(false);
+    HBox header = Widgets.row(16, mark, crumbs, Widgets.grow(), smaller, larger, helpButton);
+    header.getStyleClass().add("header");
+    frame.setTop(header);
+
+    VBox railBox = new VBox();
+    railBox.getStyleClass().add("rail");
+    for (ScreenId id : ScreenId.values()) {
+      ToggleButton b = new ToggleButton(id.title());
+      b.setGraphic(Widgets.key("Ctrl+" + id.digit()));
+      b.setContentDisplay(javafx.scene.control.ContentDisplay.BOTTOM);
+      b.getStyleClass().add("rail-button");
+      b.setToggleGroup(railGroup);
+      b.setId("rail-" + id.slug());
+      b.setFocusTraversable(false);
+      b.setOnAction(e -> open(id, selection));
+      rail.put(id, b);
+      railBox.getChildren().add(b);
+    }
+    frame.setLeft(railBox);
+
+    Label status = new Label(statusText);
+    status.setId("status-line");
+    HBox statusBar = new HBox(status);
+    statusBar.getStyleClass().add("status-bar");
+    frame.setBottom(statusBar);
+    root.getChildren().add(frame);
+    root.addEventFilter(KeyEvent.KEY_PRESSED, this::onKey);
+    applyFont();
+  }
+
+  /** The node to put in a scene. */
+  public Parent root() {
+    return root;
+  }
+
+  /** Called after each screen is shown (used by tests and timing). */
+  public void setOnShown(Consumer<ScreenId> listener) {
+    onShown = listener == null ? id -> {} : listener;
+  }
+
+  public ScreenId currentScreen() {
+    return currentId;
+  }
+
+  public Screen current() {
+    return current;
+  }
+
+  public Selection selection() {
+    return selection;
+  }
+
+  @Override
+  public void open(ScreenId id, Selection newSelection) {
+    selection = newSelection;
+    Screen s = factory.build(id, newSelection, this);
+    current = s;
+    currentId = id;
+    Node node = s.node();
+    BorderPane.setMargin(node, new Insets(0));
+    frame.setCenter(node);
+    crumbs.setText(s.crumbs());
+    ToggleButton b = rail.get(id);
+    b.setSelected(true);
+    if (help != null) {
+      closeHelp();
+    }
+    if (s.selection() != null) {
+      s.selection().addListener((o, before, now) -> {
+        selection = now == null ? Selection.NONE : now;
+        updateRail();
+      });
+      if (s.selection().getValue() != null) {
+        selection = s.selection().getValue();
+      }
+    }
+    updateRail();
+    s.focus();
+    onShown.accept(id);
+  }
+
+  private void updateRail() {
+    for (ScreenId other : ScreenId.values()) {
+      rail.get(other).setDisable(other != ScreenId.OVERVIEW && !selection.hasPlane());
+    }
+  }
+
+  private void onKey(KeyEvent e) {
+    if (help != null) {
+      if (e.getCode() == KeyCode.ESCAPE || e.getCode() == KeyCode.F1) {
+        closeHelp();
+      }
+      e.consume();
+      return;
+    }
+    if (e.getCode() == KeyCode.F1 || (e.getCode() == KeyCode.SLASH && e.isShiftDown() && !typing())) {
+      toggleHelp();
+      e.consume();
+      return;
+    }
+    if (e.isShortcutDown()) {
+      for (ScreenId id : ScreenId.values()) {
+        if (e.getText() != null && e.getText().equals(id.digit())
+            || e.getCode() == KeyCode.valueOf("DIGIT" + id.digit())) {
+          if (id == ScreenId.OVERVIEW || selection.hasPlane()) {
+            open(id, selection);
+          }
+          e.consume();
+          return;
+        }
+      }
+      if (e.getCode() == KeyCode.EQUALS || e.getCode() == KeyCode.PLUS || e.getCode() == KeyCode.ADD) {
+        scaleText(1);
+        e.consume();
+      } else if (e.getCode() == KeyCode.MINUS || e.getCode() == KeyCode.SUBTRACT) {
+        scaleText(-1);
+        e.consume();
+      }
+    }
+  }
+
+  private boolean typing() {
+    return root.getScene() != null
+        && root.getScene().getFocusOwner() instanceof javafx.scene.control.TextInputControl;
+  }
+
+  /** Shows or hides the key help. */
+  public void toggleHelp() {
+    if (help != null) {
+      closeHelp();
+    } else {
+      help = new HelpOverlay(keys, this::closeHelp);
+      root.getChildren().add(help);
+    }
+  }
+
+  public boolean helpShown() {
+    return help != null;
+  }
+
+  private void closeHelp() {
+    root.getChildren().remove(help);
+    help = null;
+    if (current != null) {
+      current.focus();
+    }
+  }
+
+  private void scaleText(int step) {
+    fontSize = Math.max(MIN_FONT, Math.min(MAX_FONT, fontSize + step));
+    applyFont();
+  }
+
+  private void applyFont() {
+    root.setStyle("-fx-font-size: " + fontSize + "px;");
+  }
+
+  /** Every key section, window keys first (for the README). */
+  public List<KeyHelp.Section> keys() {
+    return keys;
+  }
+
+  static KeyHelp.Section windowKeys() {
+    return new KeyHelp.Section(
+        "Anywhere",
+        List.of(
+            KeyHelp.of("F1 or ?", "this key help; Esc closes it"),
+            KeyHelp.of("Ctrl+1 \u2026 Ctrl+5", "Sites, Design, Walk-round, Findings, History"),
+            KeyHelp.of("Ctrl+= / Ctrl+\u2212", "larger / smaller text"),
+            KeyHelp.of("Tab / Shift+Tab", "next / previous field or button"),
+            KeyHelp.of("Space or Enter", "press the focused button")));
+  }
+}

@@ -1,0 +1,43 @@
+package org.bracewalk.ui;
+
+import javafx.scene.Node;
+import org.bracewalk.ui.common.Selection;
+
+/** One built screen: its node, where it is (for the header), and where keyboard focus starts. */
+public interface Screen {
+  Node node();
+
+  /** "Site › Structure › Plane" for the header. */
+  String crumbs();
+
+  /** Puts keyboard focus where the screen's work starts. */
+  void focus();
+
+  /**
+   * What the screen has selected, when the person can change it on the screen (the overview);
+   * {@code null} when the screen shows the selection it was opened with.
+   */
+  default javafx.beans.value.ObservableValue<Selection> selection() {
+    return null;
+  }
+
+  /** A screen with nothing to focus but itself. */
+  static Screen of(Node node, String crumbs) {
+    return new Screen() {
+      @Override
+      public Node node() {
+        return node;
+      }
+
+      @Override
+      public String crumbs() {
+        return crumbs;
+      }
+
+      @Override
+      public void focus() {
+        node.requestFocus();
+      }
+    };
+  }
+}

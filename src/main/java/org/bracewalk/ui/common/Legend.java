@@ -1,0 +1,140 @@
+package org.bracewalk.ui.common;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import javafx.scene.canvas.Canvas;
+import javafx.scene.control.Label;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.HBox;
+import org.bracewalk.core.analysis.Block;
+import org.bracewalk.core.analysis.RepairBrace;
+import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.PanelFinding;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.Support;
+
+/**
+ * The key to a plane drawing. Each swatch is a one-panel plane drawn by the same painter as the
+ * plane itself, so the key cannot drift from the drawing.
+ */
+public final class Legend extends FlowPane {
+
+  /** Which entries to show. */
+  public enum Set_ {
+    DESIGN,
+    WALK,
+    FINDINGS,
+    HISTORY
+  }
+
+  public Legend(Set_ which) {
+    super(14, 6);
+    getStyleClass().add("legend");
+    Brace rising = Brace.rigid(Diagonal.RISING);
+    switch (which) {
+      case DESIGN -> {
+        add(design(rising), "rigid brace");
+        add(design(Brace.tension(Diagonal.FALLING)), "tension-only (rod, cable)");
+        add(designCross(), "cross (X)");
+        add(opening(), "opening: never braced");
+        add(repairSwatch(true), "suggested brace");
+      }
+      case WALK, FINDINGS, HISTORY -> {
+        for (PanelLook look : PanelLook.values()) {
+          add(look(look), look.badge() + " = " + look.words());
+        }
+        add(shear(), "\u2194 shearing: can sway");
+        add(critical(), "critical brace");
+        if (which == Set_.FINDINGS) {
+          add(repairSwatch(true), "repair: restore design brace");
+          add(repairSwatch(false), "repair: new position (engineer)");
+        }
+        if (which == Set_.HISTORY) {
+          add(changed(), "changed since previous");
+        }
+        add(opening(), "opening");
+      }
+    }
+  }
+
+  private void add(Canvas swatch, String words) {
+    Label l = new Label(words);
+    l.getStyleClass().add("legend-text");
+    HBox box = new HBox(6, swatch, l);
+    box.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+    getChildren().add(box);
+  }
+
+  private static final PlaneGrid ONE = new PlaneGrid(1, 1, List.of(1.3), List.of(1.0), Support.FREE);
+  private static final PanelRef P = new PanelRef(1, 1);
+
+  private static Canvas draw(PlanePicture pic) {
+    Canvas c = new Canvas(54, 42);
+    PlanePainter.paint(c.getGraphicsContext2D(), pic, 54, 42, false);
+    return c;
+  }
+
+  private static PlanePicture pic(
+      PlaneDesign d, Map<PanelRef, PanelFinding> f, boolean show, List<Block> blocks,
+      java.util.Set<PanelRef> crit, List<RepairBrace> rep, java.util.Set<PanelRef> changed) {
+    return new PlanePicture(d, f, show, blocks, crit, rep, changed, null);
+  }
+
+  private static Canvas design(Brace b) {
+    return draw(PlanePicture.ofDesign(PlaneDesign.of(ONE, Map.of(P, b))));
+  }
+
+  private static Canvas designCross() {
+    return design(Brace.rigid(Diagonal.BOTH));
+  }
+
+  private static Canvas opening() {
+    return draw(PlanePicture.ofDesign(new PlaneDesign(ONE, Map.of(), Set.of(P))));
+  }
+
+  private static Canvas look(PanelLook look) {
+    PlaneDesign d = PlaneDesign.of(ONE, Map.of(P, Brace.rigid(Diagonal.RISING)));
+    Map<PanelRef, PanelFinding> f =
+        switch (look) {
+          case NOT_RECORDED -> Map.of();
+          case SOUND -> Map.of(P, PanelFinding.of(PanelState.SOUND));
+          case DAMAGED_EFFECTIVE -> Map.of(P, PanelFinding.of(PanelState.DAMAGED_EFFECTIVE));
+          case DAMAGED_INEFFECTIVE -> Map.of(P, PanelFinding.of(PanelState.DAMAGED_INEFFECTIVE));
+          case MISSING -> Map.of(P, PanelFinding.of(PanelState.MISSING));
+          case EXTRA -> Map.of(P, new PanelFinding(PanelState.EXTRA, Brace.rigid(Diagonal.RISING)));
+          case NOT_REACHABLE -> Map.of(P, PanelFinding.of(PanelState.NOT_REACHABLE));
+        };
+    if (look == PanelLook.EXTRA) {
+      d = PlaneDesign.of(ONE, Map.of());
+    }
+    return draw(pic(d, f, true, List.of(), Set.of(), List.of(), Set.of()));
+  }
+
+  private static Canvas shear() {
+    PlaneGrid g = new PlaneGrid(1, 1, List.of(1.3), List.of(1.0), Support.PINNED_BASE);
+    PlaneDesign d = PlaneDesign.of(g, Map.of());
+    List<Block> blocks = List.of(new Block(List.of(), List.of(1), true), new Block(List.of(1), List.of(), false));
+    return draw(pic(d, Map.of(), true, blocks, Set.of(), List.of(), Set.of()));
+  }
+
+  private static Canvas critical() {
+    PlaneDesign d = PlaneDesign.of(ONE, Map.of(P, Brace.rigid(Diagonal.RISING)));
+    return draw(pic(d, Map.of(P, PanelFinding.of(PanelState.SOUND)), true, List.of(), Set.of(P), List.of(), Set.of()));
+  }
+
+  private static Canvas repairSwatch(boolean inDesign) {
+    PlaneDesign d = PlaneDesign.of(ONE, Map.of());
+    RepairBrace r = new RepairBrace(P, Brace.rigid(Diagonal.RISING), inDesign);
+    return draw(pic(d, Map.of(), true, List.of(), Set.of(), List.of(r), Set.of()));
+  }
+
+  private static Canvas changed() {
+    PlaneDesign d = PlaneDesign.of(ONE, Map.of(P, Brace.rigid(Diagonal.RISING)));
+    return draw(pic(d, Map.of(P, PanelFinding.of(PanelState.MISSING)), true, List.of(), Set.of(), List.of(), Set.of(P)));
+  }
+}

@@ -1,0 +1,156 @@
+package org.bracewalk.ui.common;
+
+import java.util.List;
+import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PlaneGrid;
+
+/**
+ * Where a plane's panels sit on screen, drawn to scale in a box of a given size. Model coordinates
+ * have y up (lift 1 at the bottom); screen coordinates have y down. Every conversion between the
+ * two happens here, so a rising ({@code /}) brace is drawn from the bottom-left corner of its panel
+ * to the top-right one, as seen on screen.
+ *
+ * <p>Pure arithmetic with no toolkit type, so it is tested as plain JUnit.
+ */
+public final class PlaneGeometry {
+  private final PlaneGrid grid;
+  private final double scale;
+  private final double originX;
+  private final double baseY;
+  private final double[] lineX;
+  private final double[] levelY;
+
+  /**
+   * Fits {@code grid} into a box {@code width} × {@code height} pixels with {@code margin} pixels
+   * on every side (the left margin is {@code leftMargin}, room for the lift labels), keeping the
+   * real proportions of bays and lifts.
+   */
+  public PlaneGeometry(PlaneGrid grid, double width, double height, double leftMargin, double margin) {
+    this.grid = grid;
+    double totalW = sum(grid.bayWidths());
+    double totalH = sum(grid.liftHeights());
+    double availW = Math.max(1, width - leftMargin - margin);
+    double availH = Math.max(1, height - 2 * margin);
+    this.scale = Math.min(availW / totalW, availH / totalH);
+    // centred in the box: the spare room goes equally to both sides
+    this.originX = leftMargin + (availW - totalW * scale) / 2;
+    this.baseY = margin + (availH - totalH * scale) / 2 + totalH * scale;
+    this.lineX = new double[grid.bays() + 1];
+    this.levelY = new double[grid.lifts() + 1];
+    // grid lines on whole pixels: crisp lines that a partial repaint redraws exactly (the
+    // rounding moves no line by more than half a pixel from its place to scale)
+    double x = originX;
+    lineX[0] = Math.round(x);
+    for (int j = 1; j <= grid.bays(); j++) {
+      x += grid.bayWidths().get(j - 1) * scale;
+      lineX[j] = Math.round(x);
+    }
+    double y = baseY;
+    levelY[0] = Math.round(y);
+    for (int i = 1; i <= grid.lifts(); i++) {
+      y -= grid.liftHeights().get(i - 1) * scale;
+      levelY[i] = Math.round(y);
+    }
+  }
+
+  private static double sum(List<Double> xs) {
+    double s = 0;
+    for (double x : xs) {
+      s += x;
+    }
+    return s;
+  }
+
+  public PlaneGrid grid() {
+    return grid;
+  }
+
+  /** Pixels per metre. */
+  public double scale() {
+    return scale;
+  }
+
+  /** Screen x of vertical grid line {@code line} (0 = left edge). */
+  public double lineX(int line) {
+    return lineX[line];
+  }
+
+  /** Screen y of level {@code level} (0 = base); larger levels are higher, so smaller y. */
+  public double levelY(int level) {
+    return levelY[level];
+  }
+
+  public double left(PanelRef p) {
+    return lineX[p.bay() - 1];
+  }
+
+  public double right(PanelRef p) {
+    return lineX[p.bay()];
+  }
+
+  /** Screen y of the panel's top edge (the smaller y). */
+  public double top(PanelRef p) {
+    return levelY[p.lift()];
+  }
+
+  /** Screen y of the panel's bottom edge (the larger y). */
+  public double bottom(PanelRef p) {
+    return levelY[p.lift() - 1];
+  }
+
+  public double panelWidth(PanelRef p) {
+    return right(p) - left(p);
+  }
+
+  public double panelHeight(PanelRef p) {
+    return bottom(p) - top(p);
+  }
+
+  /** Width of the whole plane on screen. */
+  public double planeWidth() {
+    return lineX[grid.bays()] - lineX[0];
+  }
+
+  /** Height of the whole plane on screen. */
+  public double planeHeight() {
+    return levelY[0] - levelY[grid.lifts()];
+  }
+
+  /**
+   * The screen segment {@code {x1, y1, x2, y2}} of one member of {@code p}, inset by {@code inset}
+   * pixels from the corners. {@code rising} true gives the {@code /} member: it starts at the
+   * bottom-left (larger y) and ends at the top-right (smaller y).
+   */
+  public double[] member(PanelRef p, boolean rising, double inset) {
+    double x1 = left(p) + inset;
+    double x2 = right(p) - inset;
+    double yBottom = bottom(p) - inset;
+    double yTop = top(p) + inset;
+    return rising ? new double[] {x1, yBottom, x2, yTop} : new double[] {x1, yTop, x2, yBottom};
+  }
+
+  /** The segments of every member of a diagonal in {@code p}: one, or two for a cross. */
+  public double[][] members(PanelRef p, Diagonal d, double inset) {
+    if (d == Diagonal.BOTH) {
+      return new double[][] {member(p, true, inset), member(p, false, inset)};
+    }
+    return new double[][] {member(p, d == Diagonal.RISING, inset)};
+  }
+
+  /** The panel under screen point ({@code x}, {@code y}), or {@code null} outside the plane. */
+  public PanelRef panelAt(double x, double y) {
+    if (x < lineX[0] || x >= lineX[grid.bays()] || y > levelY[0] || y <= levelY[grid.lifts()]) {
+      return null;
+    }
+    int bay = 1;
+    while (bay < grid.bays() && x >= lineX[bay]) {
+      bay++;
+    }
+    int lift = 1;
+    while (lift < grid.lifts() && y <= levelY[lift]) {
+      lift++;
+    }
+    return new PanelRef(lift, bay);
+  }
+}

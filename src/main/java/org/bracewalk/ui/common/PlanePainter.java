@@ -1,0 +1,536 @@
+package org.bracewalk.ui.common;
+
+import java.util.List;
+import java.util.Map;
+import org.bracewalk.core.analysis.Block;
+import org.bracewalk.core.analysis.RepairBrace;
+import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.MemberKind;
+import org.bracewalk.core.model.PanelFinding;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.PlaneGrid;
+import javafx.geometry.VPos;
+import javafx.scene.canvas.GraphicsContext;
+import javafx.scene.paint.Color;
+import javafx.scene.shape.StrokeLineCap;
+import javafx.scene.text.Font;
+import javafx.scene.text.FontWeight;
+import javafx.scene.text.TextAlignment;
+
+/**
+ * Draws a {@link PlanePicture} on a canvas. Each element has its own line style or symbol besides
+ * its colour: members by state (see {@link PanelLook}), shearing panels hatched, critical braces a
+ * diamond, proposed braces a dash-dot line with a numbered ring (a square where the panel is not
+ * in the design), openings an arch, changed panels a dashed frame, the cursor a double frame with
+ * corner brackets.
+ */
+public final class PlanePainter {
+  static final Color FRAME = Color.web("#4a4a4a");
+  static final Color SWAY = Color.web("#c26a00");
+  static final Color REPAIR = Color.web("#0b57b0");
+  static final Color CHANGED = Color.web("#6a1b9a");
+  static final Color CURSOR = Color.web("#111111");
+  static final Color PAPER = Color.web("#fbfaf7");
+
+  private PlanePainter() {}
+
+  /** Paints the whole picture into a box of {@code w} × {@code h}; returns the geometry used. */
+  public static PlaneGeometry paint(GraphicsContext g, PlanePicture pic, double w, double h) {
+    return paint(g, pic, w, h, true);
+  }
+
+  /**
+   * Paints the picture; {@code labelled} false leaves out the lift and bay numbers and the margin
+   * they need (legend swatches).
+   */
+  public static PlaneGeometry paint(
+      GraphicsContext g, PlanePicture pic, double w, double h, boolean labelled) {
+    PlaneGrid grid = pic.grid();
+    PlaneGeometry geo =
+        labelled ? new PlaneGeometry(grid, w, h, 52, 30) : new PlaneGeometry(grid, w, h, 8, 8);
+    g.clearRect(0, 0, w, h); // a full clear also drops the canvas's queued commands
+    g.setFill(PAPER);
+    g.fillRect(0, 0, w, h);
+    g.setLineCap(StrokeLineCap.BUTT);
+    SwayRegion sway = SwayRegion.of(grid, pic.blocks());
+    double smallest = smallestPanel(geo);
+    boolean badges = smallest >= 18;
+    hatchAll(g, geo, sway);
+    paintFrame(g, geo);
+    for (int i = 1; i <= grid.lifts(); i++) {
+      for (int j = 1; j <= grid.bays(); j++) {
+        panel(g, geo, pic, new PanelRef(i, j), badges);
+      }
+    }
+    overlays(g, geo, pic, null, badges || smallest >= 12);
+    if (labelled) {
+      labels(g, geo, sway);
+    }
+    if (pic.cursor() != null && grid.contains(pic.cursor())) {
+      cursor(g, geo, pic.cursor());
+    }
+    return geo;
+  }
+
+  /** The contents of one panel: opening, member(s) in the style of their state, badge. */
+  private static void panel(GraphicsContext g, PlaneGeometry geo, PlanePicture pic, PanelRef p, boolean badges) {
+    if (pic.design().isOpening(p)) {
+      opening(g, geo, p);
+      return;
+    }
+    if (!pic.showFindings()) {
+      Brace b = pic.design().braceAt(p);
+      if (b != null) {
+        member(g, geo, p, b, PanelLook.SOUND);
+      }
+      return;
+    }
+    PanelFinding f = pic.findings().get(p);
+    PanelLook look = PanelLook.of(f == null ? null : f.state());
+    Brace designBrace = pic.design().braceAt(p);
+    Brace shown = pic.memberShown(p);
+    if (f != null && (f.state() == PanelState.MISSING || f.state() == PanelState.DAMAGED_INEFFECTIVE)
+        && designBrace != null) {
+      // the design member drawn in the state's style; a remaining member found drawn solid
+      member(g, geo, p, designBrace, look);
+      if (f.memberFound() != null) {
+        member(g, geo, p, f.memberFound(), PanelLook.SOUND);
+      }
+    } else if (shown != null) {
+      member(g, geo, p, shown, look);
+    }
+    if (badges && (f != null || designBrace != null)) {
+      badge(g, geo, p, look);
+    }
+  }
+
+  /**
+   * Critical diamonds, numbered repairs, changed frames and the cursor, for the panels in {@code
+   * only} (every panel when {@code null}).
+   */
+  private static void overlays(
+      GraphicsContext g, PlaneGeometry geo, PlanePicture pic, java.util.Set<PanelRef> only, boolean repairLabels) {
+    for (PanelRef p : pic.critical()) {
+      if ((only == null || only.contains(p)) && pic.memberShown(p) != null) {
+        diamond(g, geo, p);
+      }
+    }
+    int n = 1;
+    for (RepairBrace r : pic.repair()) {
+      if (only == null || only.contains(r.panel())) {
+        repair(g, geo, r, n, repairLabels);
+      }
+      n++;
+    }
+    for (PanelRef p : pic.changed()) {
+      if (only == null || only.contains(p)) {
+        changed(g, geo, p);
+      }
+    }
+  }
+
+  /**
+   * Repaints only the panels in {@code dirty} (and what of their neighbours lies within a few
+   * pixels, where the cursor's brackets reach), on a canvas that already shows an earlier picture
+   * of the same plane, size, blocks, critical braces, repair and changes. Per mark only two or
+   * three panels change, so this is what keeps a large plane fast in the software renderer.
+   */
+  public static void repaint(
+      GraphicsContext g, PlanePicture pic, PlaneGeometry geo, java.util.Set<PanelRef> dirty) {
+    PlaneGrid grid = pic.grid();
+    double smallest = smallestPanel(geo);
+    boolean badges = smallest >= 18;
+    SwayRegion sway = SwayRegion.of(grid, pic.blocks());
+    double edge = 6; // the cursor's brackets reach this far past the plane's edge
+    for (PanelRef d : dirty) {
+      if (!grid.contains(d)) {
+        continue;
+      }
+      // the panel and its neighbours are wiped and drawn again whole: no clip (slow in software)
+      int i0 = Math.max(1, d.lift() - 1);
+      int i1 = Math.min(grid.lifts(), d.lift() + 1);
+      int j0 = Math.max(1, d.bay() - 1);
+      int j1 = Math.min(grid.bays(), d.bay() + 1);
+      double x0 = geo.lineX(j0 - 1) - (j0 == 1 ? edge : 0);
+      double x1 = geo.lineX(j1) + (j1 == grid.bays() ? edge : 0);
+      double y0 = geo.levelY(i1) - (i1 == grid.lifts() ? edge : 0);
+      double y1 = geo.levelY(i0 - 1) + (i0 == 1 ? edge + 2 : 0);
+      g.setFill(PAPER);
+      g.fillRect(x0, y0, x1 - x0, y1 - y0);
+      java.util.Set<PanelRef> near = new java.util.HashSet<>();
+      for (int i = i0; i <= i1; i++) {
+        for (int j = j0; j <= j1; j++) {
+          PanelRef p = new PanelRef(i, j);
+          near.add(p);
+          if (sway.isShearing(p)) {
+            hatchRect(g, geo.left(p), geo.top(p), geo.panelWidth(p), geo.panelHeight(p), geo.lineX(0));
+          }
+        }
+      }
+      paintFrameNear(g, geo, d);
+      for (PanelRef p : near) {
+        panel(g, geo, pic, p, badges);
+      }
+      overlays(g, geo, pic, near, badges || smallest >= 12);
+      if (pic.cursor() != null && near.contains(pic.cursor())) {
+        cursor(g, geo, pic.cursor());
+      }
+    }
+  }
+
+  /** The frame members (and ground) around one panel and its neighbours. */
+  private static void paintFrameNear(GraphicsContext g, PlaneGeometry geo, PanelRef d) {
+    PlaneGrid grid = geo.grid();
+    int j0 = Math.max(0, d.bay() - 2);
+    int j1 = Math.min(grid.bays(), d.bay() + 1);
+    int i0 = Math.max(0, d.lift() - 2);
+    int i1 = Math.min(grid.lifts(), d.lift() + 1);
+    g.setLineDashes();
+    g.setStroke(FRAME);
+    g.setLineWidth(2);
+    for (int j = j0; j <= j1; j++) {
+      g.strokeLine(geo.lineX(j), geo.levelY(i1), geo.lineX(j), geo.levelY(i0));
+    }
+    for (int i = i0; i <= i1; i++) {
+      g.strokeLine(geo.lineX(j0), geo.levelY(i), geo.lineX(j1), geo.levelY(i));
+    }
+    if (i0 == 0 && grid.support() == org.bracewalk.core.model.Support.PINNED_BASE) {
+      double bottom = geo.levelY(0);
+      g.setLineWidth(3);
+      g.strokeLine(geo.lineX(j0) - (j0 == 0 ? 6 : 0), bottom, geo.lineX(j1) + (j1 == grid.bays() ? 6 : 0), bottom);
+      g.setLineWidth(1);
+      double start = geo.lineX(0) - 4;
+      double from = geo.lineX(j0) - 8;
+      double x = start + Math.max(0, Math.ceil((from - start) / 8)) * 8;
+      for (; x < geo.lineX(j1) + 8 && x < geo.lineX(grid.bays()) + 6; x += 8) {
+        g.strokeLine(x, bottom + 1, x - 5, bottom + 7);
+      }
+    }
+  }
+
+  private static double smallestPanel(PlaneGeometry geo) {
+    double s = Double.MAX_VALUE;
+    PlaneGrid grid = geo.grid();
+    for (int j = 1; j <= grid.bays(); j++) {
+      s = Math.min(s, geo.lineX(j) - geo.lineX(j - 1));
+    }
+    for (int i = 1; i <= grid.lifts(); i++) {
+      s = Math.min(s, geo.levelY(i - 1) - geo.levelY(i));
+    }
+    return s;
+  }
+
+  private static void paintFrame(GraphicsContext g, PlaneGeometry geo) {
+    PlaneGrid grid = geo.grid();
+    g.setLineDashes();
+    g.setStroke(FRAME);
+    g.setLineWidth(2);
+    double top = geo.levelY(grid.lifts());
+    double bottom = geo.levelY(0);
+    for (int j = 0; j <= grid.bays(); j++) {
+      g.strokeLine(geo.lineX(j), top, geo.lineX(j), bottom);
+    }
+    for (int i = 0; i <= grid.lifts(); i++) {
+      g.strokeLine(geo.lineX(0), geo.levelY(i), geo.lineX(grid.bays()), geo.levelY(i));
+    }
+    if (grid.support() == org.bracewalk.core.model.Support.PINNED_BASE) {
+      // ground: a heavy base line with short ticks below it
+      g.setLineWidth(3);
+      g.strokeLine(geo.lineX(0) - 6, bottom, geo.lineX(grid.bays()) + 6, bottom);
+      g.setLineWidth(1);
+      for (double x = geo.lineX(0) - 4; x < geo.lineX(grid.bays()) + 6; x += 8) {
+        g.strokeLine(x, bottom + 1, x - 5, bottom + 7);
+      }
+    }
+  }
+
+  /**
+   * Shades the shearing panels: a tint and thin, steep hatch lines (read as shading, never as a
+   * brace). Drawn per run of neighbouring panels in a lift, each line clipped by arithmetic: a clip
+   * per panel is very slow in the software renderer.
+   */
+  private static void hatchAll(GraphicsContext g, PlaneGeometry geo, SwayRegion sway) {
+    if (sway.isEmpty()) {
+      return;
+    }
+    PlaneGrid grid = geo.grid();
+    boolean[][] on = new boolean[grid.lifts() + 1][grid.bays() + 2];
+    for (PanelRef p : sway.shearing()) {
+      on[p.lift()][p.bay()] = true;
+    }
+    g.setLineDashes();
+    for (int i = 1; i <= grid.lifts(); i++) {
+      int j = 1;
+      while (j <= grid.bays()) {
+        if (!on[i][j]) {
+          j++;
+          continue;
+        }
+        int start = j;
+        while (j <= grid.bays() && on[i][j]) {
+          j++;
+        }
+        double x0 = geo.lineX(start - 1);
+        double x1 = geo.lineX(j - 1);
+        double yTop = geo.levelY(i);
+        double yBottom = geo.levelY(i - 1);
+        hatchRect(g, x0, yTop, x1 - x0, yBottom - yTop, geo.lineX(0));
+      }
+    }
+  }
+
+  private static void hatchRect(GraphicsContext g, double x0, double y0, double w, double h, double phaseX) {
+    g.setFill(Color.web("#fde9c8"));
+    g.fillRect(x0, y0, w, h);
+    g.setStroke(SWAY);
+    g.setLineWidth(1);
+    double run = h * 0.5; // each line rises h while moving right by h/2
+    g.beginPath();
+    // lines start on a 7 px pitch counted from phaseX, so neighbouring runs line up
+    double first = phaseX + Math.floor((x0 - run - phaseX) / 7) * 7 - x0;
+    for (double t = first; t < w; t += 7) {
+      // segment from (x0 + t, y0 + h) to (x0 + t + run, y0), cut to x0 .. x0 + w
+      double sa = Math.max(0, (0 - t) / run);
+      double sb = Math.min(1, (w - t) / run);
+      if (sa >= sb) {
+        continue;
+      }
+      g.moveTo(x0 + t + run * sa, y0 + h - h * sa);
+      g.lineTo(x0 + t + run * sb, y0 + h - h * sb);
+    }
+    g.stroke();
+  }
+
+  /** Draws the member(s) of {@code b} in {@code p} in the style of {@code look}. */
+  static void member(GraphicsContext g, PlaneGeometry geo, PanelRef p, Brace b, PanelLook look) {
+    double inset = Math.min(4, Math.min(geo.panelWidth(p), geo.panelHeight(p)) * 0.08);
+    double[][] segs = geo.members(p, b.diagonal(), inset);
+    Color c = Color.web(look.colour());
+    boolean tension = b.kind() == MemberKind.TENSION_ONLY;
+    double width = tension ? Math.max(1.2, look.width() * 0.5) : look.width();
+    for (double[] s : segs) {
+      g.setStroke(c);
+      g.setLineWidth(width);
+      double[] dashes = look.dashes();
+      if (dashes == null) {
+        g.setLineDashes();
+      } else {
+        g.setLineDashes(dashes);
+      }
+      g.strokeLine(s[0], s[1], s[2], s[3]);
+      g.setLineDashes();
+      if (tension) {
+        // a rod: small rings at both ends
+        g.setFill(PAPER);
+        double r = 2.6;
+        g.fillOval(s[0] - r, s[1] - r, 2 * r, 2 * r);
+        g.fillOval(s[2] - r, s[3] - r, 2 * r, 2 * r);
+        g.setLineWidth(1.3);
+        g.strokeOval(s[0] - r, s[1] - r, 2 * r, 2 * r);
+        g.strokeOval(s[2] - r, s[3] - r, 2 * r, 2 * r);
+      }
+      if (look == PanelLook.DAMAGED_EFFECTIVE || look == PanelLook.DAMAGED_INEFFECTIVE) {
+        ticks(g, s, c);
+      }
+    }
+  }
+
+  /** Two short strokes across the member: the mark of a dent or bend. */
+  private static void ticks(GraphicsContext g, double[] s, Color c) {
+    double dx = s[2] - s[0];
+    double dy = s[3] - s[1];
+    double len = Math.hypot(dx, dy);
+    if (len < 1) {
+      return;
+    }
+    double nx = -dy / len * 5;
+    double ny = dx / len * 5;
+    g.setStroke(c);
+    g.setLineWidth(2);
+    g.setLineDashes();
+    for (double t : new double[] {0.42, 0.58}) {
+      double mx = s[0] + dx * t;
+      double my = s[1] + dy * t;
+      g.strokeLine(mx - nx, my - ny, mx + nx, my + ny);
+    }
+  }
+
+  private static void badge(GraphicsContext g, PlaneGeometry geo, PanelRef p, PanelLook look) {
+    double size = Math.min(16, Math.min(geo.panelWidth(p), geo.panelHeight(p)) * 0.34);
+    double x = geo.left(p) + 3;
+    double y = geo.top(p) + 3;
+    boolean alarm = look == PanelLook.MISSING || look == PanelLook.DAMAGED_INEFFECTIVE;
+    g.setLineDashes();
+    g.setFill(alarm ? Color.web(look.colour()) : Color.WHITE);
+    g.fillRoundRect(x, y, size, size, 4, 4);
+    g.setStroke(Color.web(look.colour()));
+    g.setLineWidth(1);
+    g.strokeRoundRect(x, y, size, size, 4, 4);
+    g.setFill(alarm ? Color.WHITE : Color.web(look.colour()));
+    g.setFont(Font.font("DejaVu Sans", FontWeight.BOLD, size * 0.72));
+    g.setTextAlign(TextAlignment.CENTER);
+    g.setTextBaseline(VPos.CENTER);
+    g.fillText(look.badge(), x + size / 2, y + size / 2 + 0.5);
+  }
+
+  private static void opening(GraphicsContext g, PlaneGeometry geo, PanelRef p) {
+    double w = geo.panelWidth(p);
+    double h = geo.panelHeight(p);
+    double x0 = geo.left(p) + w * 0.22;
+    double x1 = geo.right(p) - w * 0.22;
+    double yb = geo.bottom(p);
+    double yt = geo.top(p) + h * 0.18;
+    double r = (x1 - x0) / 2;
+    g.setStroke(FRAME);
+    g.setLineWidth(1.4);
+    g.setLineDashes(4, 3);
+    g.beginPath();
+    g.moveTo(x0, yb);
+    g.lineTo(x0, yt + r);
+    g.arcTo(x0, yt, x0 + r, yt, r);
+    g.arcTo(x1, yt, x1, yt + r, r);
+    g.lineTo(x1, yb);
+    g.stroke();
+    g.setLineDashes();
+  }
+
+  private static void diamond(GraphicsContext g, PlaneGeometry geo, PanelRef p) {
+    double cx = (geo.left(p) + geo.right(p)) / 2;
+    double cy = (geo.top(p) + geo.bottom(p)) / 2;
+    double r = Math.max(4, Math.min(8, Math.min(geo.panelWidth(p), geo.panelHeight(p)) * 0.14));
+    double[] xs = {cx, cx + r, cx, cx - r};
+    double[] ys = {cy - r, cy, cy + r, cy};
+    g.setLineDashes();
+    g.setFill(Color.BLACK);
+    g.fillPolygon(xs, ys, 4);
+    g.setStroke(Color.WHITE);
+    g.setLineWidth(1.2);
+    g.strokePolygon(xs, ys, 4);
+  }
+
+  private static void repair(GraphicsContext g, PlaneGeometry geo, RepairBrace r, int number, boolean label) {
+    PanelRef p = r.panel();
+    double[][] segs = geo.members(p, r.brace().diagonal(), Math.min(4, geo.panelWidth(p) * 0.08));
+    g.setStroke(REPAIR);
+    g.setLineWidth(3.5);
+    g.setLineDashes(12, 4, 2, 4);
+    for (double[] s : segs) {
+      g.strokeLine(s[0], s[1], s[2], s[3]);
+    }
+    g.setLineDashes();
+    if (!label) {
+      return;
+    }
+    double cx = (geo.left(p) + geo.right(p)) / 2;
+    double cy = (geo.top(p) + geo.bottom(p)) / 2;
+    double rad = Math.max(6, Math.min(10, Math.min(geo.panelWidth(p), geo.panelHeight(p)) * 0.2));
+    g.setFill(Color.WHITE);
+    g.setStroke(REPAIR);
+    g.setLineWidth(2);
+    if (r.inDesign()) {
+      g.fillOval(cx - rad, cy - rad, 2 * rad, 2 * rad);
+      g.strokeOval(cx - rad, cy - rad, 2 * rad, 2 * rad);
+    } else {
+      g.fillRect(cx - rad, cy - rad, 2 * rad, 2 * rad);
+      g.strokeRect(cx - rad, cy - rad, 2 * rad, 2 * rad);
+    }
+    g.setFill(REPAIR);
+    g.setFont(Font.font("DejaVu Sans", FontWeight.BOLD, rad * 1.1));
+    g.setTextAlign(TextAlignment.CENTER);
+    g.setTextBaseline(VPos.CENTER);
+    g.fillText(Integer.toString(number), cx, cy + 0.5);
+  }
+
+  private static void changed(GraphicsContext g, PlaneGeometry geo, PanelRef p) {
+    g.setStroke(CHANGED);
+    g.setLineWidth(3);
+    g.setLineDashes(5, 3);
+    g.strokeRect(geo.left(p) + 2.5, geo.top(p) + 2.5, geo.panelWidth(p) - 5, geo.panelHeight(p) - 5);
+    g.setLineDashes();
+    double s = Math.min(10, geo.panelWidth(p) * 0.25);
+    double x = geo.right(p) - 4 - s;
+    double y = geo.top(p) + 4;
+    g.setFill(CHANGED);
+    g.fillPolygon(new double[] {x, x + s, x + s / 2}, new double[] {y + s, y + s, y}, 3);
+  }
+
+  private static void labels(GraphicsContext g, PlaneGeometry geo, SwayRegion sway) {
+    PlaneGrid grid = geo.grid();
+    g.setFill(Color.web("#333333"));
+    g.setFont(Font.font("DejaVu Sans", 12));
+    g.setTextBaseline(VPos.CENTER);
+    g.setTextAlign(TextAlignment.RIGHT);
+    int liftStep = step(grid.lifts(), geo.planeHeight(), 16);
+    for (int i = 1; i <= grid.lifts(); i++) {
+      boolean shearing = false;
+      for (PanelRef p : sway.shearing()) {
+        if (p.lift() == i) {
+          shearing = true;
+          break;
+        }
+      }
+      if (i % liftStep != 0 && i != 1 && !shearing) {
+        continue;
+      }
+      double y = (geo.levelY(i) + geo.levelY(i - 1)) / 2;
+      g.setFont(Font.font("DejaVu Sans", shearing ? FontWeight.BOLD : FontWeight.NORMAL, 12));
+      g.setFill(shearing ? SWAY.darker() : Color.web("#333333"));
+      g.fillText((shearing ? "\u2194 " : "") + "L" + i, geo.lineX(0) - 6, y);
+    }
+    g.setFill(Color.web("#333333"));
+    g.setFont(Font.font("DejaVu Sans", 12));
+    g.setTextAlign(TextAlignment.CENTER);
+    g.setTextBaseline(VPos.TOP);
+    int bayStep = step(grid.bays(), geo.planeWidth(), 26);
+    for (int j = 1; j <= grid.bays(); j++) {
+      if (j % bayStep != 0 && j != 1) {
+        continue;
+      }
+      double x = (geo.lineX(j) + geo.lineX(j - 1)) / 2;
+      g.fillText(Integer.toString(j), x, geo.levelY(0) + 9);
+    }
+  }
+
+  private static int step(int count, double span, double minPx) {
+    double per = span / count;
+    int s = 1;
+    while (per * s < minPx) {
+      s = s == 1 ? 2 : s == 2 ? 5 : s * 2;
+    }
+    return s;
+  }
+
+  private static void cursor(GraphicsContext g, PlaneGeometry geo, PanelRef p) {
+    double x = geo.left(p);
+    double y = geo.top(p);
+    double w = geo.panelWidth(p);
+    double h = geo.panelHeight(p);
+    g.setLineDashes();
+    g.setStroke(Color.WHITE);
+    g.setLineWidth(6);
+    g.strokeRect(x - 1, y - 1, w + 2, h + 2);
+    g.setStroke(CURSOR);
+    g.setLineWidth(3);
+    g.strokeRect(x - 1, y - 1, w + 2, h + 2);
+    double c = Math.min(12, Math.min(w, h) * 0.4);
+    g.setLineWidth(4);
+    double x0 = x - 3;
+    double y0 = y - 3;
+    double x1 = x + w + 3;
+    double y1 = y + h + 3;
+    g.strokeLine(x0, y0, x0 + c, y0);
+    g.strokeLine(x0, y0, x0, y0 + c);
+    g.strokeLine(x1, y0, x1 - c, y0);
+    g.strokeLine(x1, y0, x1, y0 + c);
+    g.strokeLine(x0, y1, x0 + c, y1);
+    g.strokeLine(x0, y1, x0, y1 - c);
+    g.strokeLine(x1, y1, x1 - c, y1);
+    g.strokeLine(x1, y1, x1, y1 - c);
+  }
+
+  /** The blocks as letters for a legend: A (fixed), B, C... */
+  public static String blockName(List<Block> blocks, Block b) {
+    return Character.toString((char) ('A' + blocks.indexOf(b)));
+  }
+}

@@ -1,0 +1,108 @@
+package org.bracewalk.ui.common;
+
+import javafx.beans.value.ObservableValue;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Label;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+
+/** Small builders shared by the screens, so every screen looks and behaves alike. */
+public final class Widgets {
+  private Widgets() {}
+
+  /** A white box with a bold title. */
+  public static VBox box(String title, Node... content) {
+    Label t = new Label(title);
+    t.getStyleClass().add("box-title");
+    t.setWrapText(true);
+    t.setMinHeight(Region.USE_PREF_SIZE);
+    VBox b = new VBox(t);
+    b.getChildren().addAll(content);
+    b.getStyleClass().add("box");
+    return b;
+  }
+
+  /** A key cap: the key written in white on black. */
+  public static Label key(String k) {
+    Label l = new Label(k);
+    l.getStyleClass().add("key");
+    l.setMinWidth(Region.USE_PREF_SIZE);
+    return l;
+  }
+
+  /** Wrapped text. */
+  public static Label text(String s) {
+    Label l = new Label(s);
+    l.setWrapText(true);
+    l.setMaxWidth(Double.MAX_VALUE);
+    l.setMinHeight(Region.USE_PREF_SIZE);
+    return l;
+  }
+
+  /** Wrapped text bound to a value. */
+  public static Label text(ObservableValue<String> value, String... styles) {
+    Label l = new Label();
+    l.textProperty().bind(value);
+    l.setWrapText(true);
+    l.setMaxWidth(Double.MAX_VALUE);
+    l.setMinHeight(Region.USE_PREF_SIZE);
+    l.getStyleClass().addAll(styles);
+    return l;
+  }
+
+  /** A hint line in smaller grey text. */
+  public static Label hint(String s) {
+    Label l = text(s);
+    l.getStyleClass().add("hint");
+    return l;
+  }
+
+  /** A row of nodes, centred vertically. */
+  public static HBox row(double gap, Node... nodes) {
+    HBox h = new HBox(gap, nodes);
+    h.setAlignment(Pos.CENTER_LEFT);
+    return h;
+  }
+
+  /** A gap that takes the free width of a row. */
+  public static Region grow() {
+    Region r = new Region();
+    HBox.setHgrow(r, Priority.ALWAYS);
+    return r;
+  }
+
+  /** A box showing a verdict: its symbol and words in the headline, detail and advice below. */
+  public static VBox verdictBox(ObservableValue<VerdictWords> verdict) {
+    Label head = new Label();
+    head.getStyleClass().add("verdict-headline");
+    head.setWrapText(true);
+    Label detail = text("");
+    Label advice = text("");
+    advice.setStyle("-fx-font-weight: bold;");
+    Label caution = hint(VerdictWords.CAUTION);
+    VBox box = new VBox(head, detail, advice, caution);
+    box.getStyleClass().add("verdict");
+    Runnable update =
+        () -> {
+          VerdictWords w = verdict.getValue();
+          box.getStyleClass().removeAll("holds", "depends", "lost");
+          if (w == null) {
+            head.setText("");
+            detail.setText("");
+            advice.setText("");
+            return;
+          }
+          head.setText(w.headline());
+          detail.setText(w.detail());
+          advice.setText(w.advice());
+          box.getStyleClass()
+              .add(w.kind().lost() ? "lost" : w.kind() == VerdictKind.HOLDS ? "holds" : "depends");
+        };
+    verdict.addListener((o, a, b) -> update.run());
+    update.run();
+    return box;
+  }
+}

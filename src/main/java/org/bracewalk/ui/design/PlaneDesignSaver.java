@@ -1,0 +1,53 @@
+package org.bracewalk.ui.design;
+
+import java.time.Clock;
+import java.time.LocalDate;
+import java.util.Objects;
+import java.util.Optional;
+import org.bracewalk.app.SiteService;
+import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.Millimetres;
+import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.ui.common.DialogService;
+
+/**
+ * Saves the editor's design through the site service. A stored plane's grid is fixed (its
+ * inspections refer to its panels), so a design on the same grid becomes the plane's next revision
+ * and a design on a changed grid becomes a new plane of the same structure, named by the person.
+ */
+public final class PlaneDesignSaver implements DesignSaver {
+  private final SiteService sites;
+  private final PlaneRecord plane;
+  private final Clock clock;
+  private final DialogService dialogs;
+
+  public PlaneDesignSaver(SiteService sites, PlaneRecord plane, Clock clock, DialogService dialogs) {
+    this.sites = Objects.requireNonNull(sites, "sites");
+    this.plane = Objects.requireNonNull(plane, "plane");
+    this.clock = Objects.requireNonNull(clock, "clock");
+    this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
+  }
+
+  @Override
+  public String save(PlaneDesign design, String author, String note) {
+    LocalDate today = LocalDate.now(clock);
+    if (Millimetres.round(design.grid()).equals(plane.grid())) {
+      DesignRevision r = sites.addDesignRevision(plane.id(), author, today, note, design);
+      return "revision " + r.number() + " of plane '" + plane.name() + "'";
+    }
+    Optional<String> name =
+        dialogs.askText(
+            "Save as a new plane",
+            "The lifts, bays, sizes or support differ from plane '" + plane.name() + "', whose grid is"
+                + " fixed because its inspections refer to its panels. Name the new plane of the same"
+                + " structure:",
+            plane.name() + " (new grid)");
+    if (name.isEmpty()) {
+      throw new IllegalStateException("not saved: no name given for the new plane");
+    }
+    PlaneRecord p =
+        sites.createPlane(new PlaneRecord(0, plane.structureId(), name.get(), design.grid()), author, today, note, design);
+    return "new plane '" + p.name() + "', revision 1";
+  }
+}

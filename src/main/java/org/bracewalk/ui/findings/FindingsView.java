@@ -1,0 +1,170 @@
+package org.bracewalk.ui.findings;
+
+import java.util.List;
+import java.util.function.LongConsumer;
+import javafx.collections.ObservableList;
+import javafx.geometry.Insets;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.ChoiceBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ProgressBar;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyEvent;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import org.bracewalk.ui.common.KeyHelp;
+import org.bracewalk.ui.common.Legend;
+import org.bracewalk.ui.common.PlaneCanvas;
+import org.bracewalk.ui.common.Widgets;
+
+/** The findings and repair screen. Only binds to its view model. */
+public final class FindingsView extends BorderPane {
+  private final FindingsViewModel vm;
+  private final PlaneCanvas canvas = new PlaneCanvas();
+
+  public FindingsView(FindingsViewModel vm, LongConsumer openPlane) {
+    this.vm = vm;
+    getStyleClass().add("screen");
+    setId("findings-screen");
+    Label title = Widgets.text(vm.titleProperty(), "screen-title");
+    title.setMaxWidth(Label.USE_PREF_SIZE);
+    ChoiceBox<FindingsViewModel.PlaneChoice> planes = new ChoiceBox<>(vm.planes());
+    for (FindingsViewModel.PlaneChoice c : vm.planes()) {
+      if (c.planeId() == vm.planeId()) {
+        planes.setValue(c);
+      }
+    }
+    planes.setOnAction(e -> {
+      if (planes.getValue() != null && planes.getValue().planeId() != vm.planeId()) {
+        openPlane.accept(planes.getValue().planeId());
+      }
+    });
+    planes.setId("findings-planes");
+    setTop(Widgets.row(12, title, Widgets.grow(), new Label("Plane (P):"), planes));
+    BorderPane.setMargin(getTop(), new Insets(0, 0, 8, 0));
+
+    canvas.setId("findings-canvas");
+    canvas.pictureProperty().bind(vm.pictureProperty());
+    VBox.setVgrow(canvas, Priority.ALWAYS);
+    Label summary = Widgets.text(vm.summaryProperty());
+    setCenter(new VBox(8, canvas, summary, new Legend(Legend.Set_.FINDINGS)));
+
+    ScrollPane side = new ScrollPane(side());
+    side.setFitToWidth(true);
+    side.setPrefViewportWidth(420);
+    side.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+    setRight(side);
+
+    Label error = Widgets.text(vm.errorProperty(), "error-text");
+    error.setId("findings-error");
+    Label status = Widgets.text(vm.statusProperty());
+    status.setId("findings-status");
+    setBottom(new VBox(4, error, status));
+    addEventHandler(KeyEvent.KEY_PRESSED, e -> {
+      if (e.isAltDown() || e.isMetaDown()) {
+        return;
+      }
+      if (e.isControlDown()) {
+        if (e.getCode() == KeyCode.F) {
+          vm.finaliseInspection();
+          e.consume();
+        }
+        return;
+      }
+      if (e.getCode() == KeyCode.R) {
+        vm.issueReport();
+        e.consume();
+      } else if (e.getCode() == KeyCode.O) {
+        vm.issueRepairOrder();
+        e.consume();
+      } else if (e.getCode() == KeyCode.P) {
+        planes.requestFocus();
+        planes.show();
+        e.consume();
+      }
+    });
+  }
+
+  private VBox side() {
+    VBox verdict = Widgets.verdictBox(vm.verdictProperty());
+    verdict.setId("findings-verdict");
+    VBox repair = Widgets.box("Least set of braces that makes it rigid (drawn dash-dot, numbered)", lines(vm.repairLines(), "findings-repair"),
+        Widgets.hint("Circle: the design's own position. Square: a new position, a deviation from the design."));
+    VBox restore = Widgets.box("Restore to design", lines(vm.restoreLines(), "findings-restore"));
+    VBox found = Widgets.box("Found", lines(vm.findingLines(), "findings-found"));
+
+    Button report = wide("Issue inspection report\u2026 (R)");
+    report.setId("issue-report");
+    report.setOnAction(e -> vm.issueReport());
+    Button order = wide("Issue repair order\u2026 (O)");
+    order.setId("issue-order");
+    order.setOnAction(e -> vm.issueRepairOrder());
+    report.disableProperty().bind(vm.busyProperty());
+    order.disableProperty().bind(vm.busyProperty());
+    ProgressBar bar = new ProgressBar();
+    bar.setMaxWidth(Double.MAX_VALUE);
+    bar.progressProperty().bind(vm.progressProperty());
+    bar.visibleProperty().bind(vm.busyProperty().or(vm.progressProperty().greaterThan(0)));
+    Label words = Widgets.text(vm.progressWordsProperty(), "hint");
+    VBox docs = Widgets.box("Documents", report, order, bar, words,
+        Widgets.hint("An open inspection gives a report marked DRAFT on every page; finalise it for the record."));
+
+    Button finalise = wide("Finalise inspection (Ctrl+F)");
+    finalise.setId("finalise");
+    finalise.disableProperty().bind(vm.finalisedProperty());
+    finalise.setOnAction(e -> vm.finaliseInspection());
+    Label done = Widgets.text("Finalised: this inspection is read-only.");
+    done.getStyleClass().add("error-text");
+    done.visibleProperty().bind(vm.finalisedProperty());
+    done.managedProperty().bind(done.visibleProperty());
+    done.setId("findings-finalised");
+    VBox fin = Widgets.box("Finish", done, finalise,
+        Widgets.hint("After finalising nothing in the inspection can change; the database refuses it too."));
+
+    VBox side = new VBox(10, verdict, repair, docs, fin, restore, found);
+    side.getStyleClass().add("side");
+    return side;
+  }
+
+  private static VBox lines(ObservableList<String> items, String id) {
+    VBox box = new VBox(4);
+    box.setId(id);
+    Runnable fill = () -> {
+      box.getChildren().clear();
+      for (String s : items) {
+        box.getChildren().add(Widgets.text(s));
+      }
+    };
+    items.addListener((javafx.collections.ListChangeListener<String>) c -> fill.run());
+    fill.run();
+    return box;
+  }
+
+  private static Button wide(String text) {
+    Button b = new Button(text);
+    b.setMaxWidth(Double.MAX_VALUE);
+    return b;
+  }
+
+  public void focusPlane() {
+    canvas.requestFocus();
+  }
+
+  public static KeyHelp.Section keys() {
+    return new KeyHelp.Section(
+        "Findings and repair",
+        List.of(
+            KeyHelp.of("R", "issue the inspection report (PDF)"),
+            KeyHelp.of("O", "issue the repair order (PDF and CSV)"),
+            KeyHelp.of("P", "choose another plane of the inspection"),
+            KeyHelp.of("Ctrl+F", "finalise the inspection (asks first; then read-only)")));
+  }
+
+  /** For tests: the node that lists the proposed repair. */
+  Node repairList() {
+    return lookup("#findings-repair");
+  }
+}

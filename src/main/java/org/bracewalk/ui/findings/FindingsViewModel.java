@@ -1,0 +1,360 @@
+package org.bracewalk.ui.findings;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.Set;
+import java.util.concurrent.Executor;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyBooleanWrapper;
+import javafx.beans.property.ReadOnlyDoubleProperty;
+import javafx.beans.property.ReadOnlyDoubleWrapper;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.app.PlaneResult;
+import org.bracewalk.core.analysis.AsBuiltAnalysis;
+import org.bracewalk.core.analysis.PlacedBrace;
+import org.bracewalk.core.analysis.PlaneAnalysis;
+import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.core.analysis.RepairBrace;
+import org.bracewalk.core.analysis.RestoreItem;
+import org.bracewalk.core.analysis.StateAnalysis;
+import org.bracewalk.core.model.AsBuiltPlane;
+import org.bracewalk.core.model.Inspection;
+import org.bracewalk.core.model.PanelFinding;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.ui.common.DialogService;
+import org.bracewalk.ui.common.PlanePicture;
+import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.ui.common.VerdictWords;
+
+/**
+ * One plane of an inspection after the walk-round: what was found, the least set of braces that
+ * makes it rigid again, the restore-to-design list, and the inspection's documents and
+ * finalising. Documents are made on the background executor; results come back on the UI one.
+ */
+public final class FindingsViewModel {
+  private final AppServices services;
+  private final PlaneAnalyzer analyzer;
+  private final ReportIssuer issuer;
+  private final DialogService dialogs;
+  private final Executor ui;
+  private final Executor background;
+  private final long inspectionId;
+  private final long planeId;
+
+  private final ReadOnlyObjectWrapper<PlanePicture> picture = new ReadOnlyObjectWrapper<>(this, "picture");
+  private final ReadOnlyObjectWrapper<VerdictWords> verdict = new ReadOnlyObjectWrapper<>(this, "verdict");
+  private final ObservableList<String> repairLines = FXCollections.observableArrayList();
+  private final ObservableList<String> restoreLines = FXCollections.observableArrayList();
+  private final ObservableList<String> findingLines = FXCollections.observableArrayList();
+  private final ObservableList<PlaneChoice> planes = FXCollections.observableArrayList();
+  private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper(this, "summary", "");
+  private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper(this, "status", "");
+  private final ReadOnlyStringWrapper error = new ReadOnlyStringWrapper(this, "error", "");
+  private final ReadOnlyStringWrapper progressWords = new ReadOnlyStringWrapper(this, "progressWords", "");
+  private final ReadOnlyDoubleWrapper progress = new ReadOnlyDoubleWrapper(this, "progress", 0);
+  private final ReadOnlyBooleanWrapper busy = new ReadOnlyBooleanWrapper(this, "busy");
+  private final ReadOnlyBooleanWrapper finalised = new ReadOnlyBooleanWrapper(this, "finalised");
+  private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "");
+
+  /** A plane of the inspection, with its verdict, for switching between them. */
+  public record PlaneChoice(long planeId, String name, VerdictKind verdict) {
+    @Override
+    public String toString() {
+      return verdict.symbol() + " " + name + " \u2014 " + verdict.words();
+    }
+  }
+
+  public FindingsViewModel(
+      AppServices services,
+      PlaneAnalyzer analyzer,
+      ReportIssuer issuer,
+      DialogService dialogs,
+      Executor ui,
+      Executor background,
+      long inspectionId,
+      long planeId) {
+    this.services = Objects.requireNonNull(services, "services");
+    this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
+    this.issuer = Objects.requireNonNull(issuer, "issuer");
+    this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
+    this.ui = Objects.requireNonNull(ui, "ui");
+    this.background = Objects.requireNonNull(background, "background");
+    this.inspectionId = inspectionId;
+    this.planeId = planeId;
+    load();
+  }
+
+  private void load() {
+    Inspection inspection = services.inspections().inspection(inspectionId);
+    finalised.set(inspection.isFinalised());
+    PlaneRecord plane = services.sites().plane(planeId);
+    title.set(plane.name() + " in inspection " + inspectionId + " (" + inspection.reason().label().replace('-', ' ')
+        + ", " + (inspection.isFinalised() ? "finalised" : "open") + ")");
+    planes.clear();
+    for (PlaneRecord p : services.inspections().planesOf(inspectionId)) {
+      PlaneResult r = services.analysis().analysePlane(inspectionId, p.id());
+      planes.add(new PlaneChoice(p.id(), p.name(), kind(r)));
+    }
+    PlaneResult result = services.analysis().analysePlane(inspectionId, planeId);
+    PlaneDesign design = result.design().design();
+    PlaneAnalysis analysis = result.analysis();
+    AsBuiltAnalysis ab = analysis.asBuilt().orElseThrow();
+    Map<PanelRef, PanelFinding> findings = new java.util.HashMap<>();
+    result.latest().forEach((p, o) -> {
+      if (o.state() != PanelState.NOT_INSPECTED) {
+        findings.put(p, o.finding());
+      }
+    });
+    StateAnalysis seen = ab.state();
+    if (ab.unknownPanels() > 0) {
+      Map<PanelRef, PanelFinding> optimistic = new java.util.HashMap<>(findings);
+      for (int i = 1; i <= design.grid().lifts(); i++) {
+        for (int j = 1; j <= design.grid().bays(); j++) {
+          PanelRef p = new PanelRef(i, j);
+          PanelFinding f = optimistic.get(p);
+          if (f == null || !f.state().inspected()) {
+            optimistic.put(p, PanelFinding.of(PanelState.SOUND));
+          }
+        }
+      }
+      seen = analyzer.analyseState(design.grid(), AsBuiltPlane.fromFindings(design, optimistic).members());
+    }
+    List<RepairBrace> repair = analysis.repair().braces();
+    verdict.set(VerdictWords.of(design.grid(), seen, ab.unknownPanels(), ab.state().rigid(), repair.size()));
+    picture.set(new PlanePicture(design, findings, true, seen.blocks(), Set.copyOf(seen.criticalBraces()),
+        repair, Set.of(), null));
+
+    repairLines.clear();
+    int n = 1;
+    for (RepairBrace b : repair) {
+      repairLines.add(n++ + ".  " + b.panel() + ": fit " + b.brace().token() + " (" + b.brace().kind().label() + ")"
+          + (b.inDesign() ? " \u2014 restores the design" : " \u2014 NEW POSITION: needs a licensed engineer's approval"));
+    }
+    if (repair.isEmpty()) {
+      repairLines.add(ab.state().rigid() ? "None needed: the plane holds its shape as found." : "");
+    }
+    if (!analysis.repair().possible()) {
+      repairLines.add("No set of allowed panels makes this plane rigid: a licensed engineer must redesign it.");
+    }
+    restoreLines.clear();
+    for (RestoreItem r : analysis.repair().restoreToDesign()) {
+      boolean unseen = ab.unknownPanels() > 0 && !findings.containsKey(r.panel())
+          || findings.containsKey(r.panel()) && !findings.get(r.panel()).state().inspected();
+      restoreLines.add(r.panel() + ": " + r.missing().token() + " (" + r.missing().kind().label() + ") \u2014 "
+          + (r.neededForRigidity() ? "needed for rigidity" : "restores redundancy only")
+          + (unseen ? " (not inspected yet: inspect first)" : ""));
+    }
+    if (restoreLines.isEmpty()) {
+      restoreLines.add("Nothing: every design brace is there and effective.");
+    }
+    findingLines.clear();
+    result.latest().forEach((p, o) -> {
+      if (o.state() != PanelState.SOUND && o.state() != PanelState.NOT_INSPECTED) {
+        StringBuilder sb = new StringBuilder(p + ": " + o.state().label());
+        if (o.memberFound() != null) {
+          sb.append(" (member ").append(o.memberFound().token()).append(')');
+        }
+        if (o.defect() != null) {
+          sb.append(", ").append(o.defect().label());
+        }
+        if (o.bowMm() != null) {
+          sb.append(", bow ").append(o.bowMm()).append(" mm over ").append(o.gaugeLengthMm()).append(" mm");
+        }
+        if (!o.note().isEmpty()) {
+          sb.append(" \u2014 ").append(o.note());
+        }
+        findingLines.add(sb.toString());
+      }
+    });
+    for (PlacedBrace e : ab.extraBraces()) {
+      findingLines.add(e.panel() + ": extra " + e.brace().token() + " (not in the design; counts)");
+    }
+    if (findingLines.isEmpty()) {
+      findingLines.add("Every panel inspected was found sound.");
+    }
+    int marked = (int) result.latest().values().stream().filter(o -> o.state() != PanelState.NOT_INSPECTED).count();
+    summary.set(marked + " of " + design.grid().panelCount() + " panels marked; "
+        + ab.unknownPanels() + " not inspected (counted as missing in the repair set); design revision "
+        + result.design().number() + ".");
+  }
+
+  private static VerdictKind kind(PlaneResult r) {
+    AsBuiltAnalysis ab = r.analysis().asBuilt().orElseThrow();
+    if (ab.state().rigid()) {
+      return VerdictKind.HOLDS;
+    }
+    if (ab.unknownPanels() > 0 && ab.rigidIfUnknownSound()) {
+      return VerdictKind.DEPENDS_ON_UNSEEN;
+    }
+    return ab.state().oneWayOnly() ? VerdictKind.SWAYS_ONE_WAY : VerdictKind.LOST;
+  }
+
+  // ---- documents ------------------------------------------------------------------------------
+
+  /** Asks where to save the report, then issues it off the UI thread. */
+  public boolean issueReport() {
+    return issue("Save the inspection report", "inspection-" + inspectionId + "-report.pdf", true);
+  }
+
+  /** Asks where to save the repair order, then issues it off the UI thread. */
+  public boolean issueRepairOrder() {
+    return issue("Save the repair order", "inspection-" + inspectionId + "-repair-order.pdf", false);
+  }
+
+  private boolean issue(String question, String name, boolean report) {
+    if (busy.get()) {
+      error.set("A document is still being made; wait for it to finish.");
+      return false;
+    }
+    Optional<Path> out = dialogs.chooseSaveFile(question, name);
+    if (out.isEmpty()) {
+      return false;
+    }
+    busy.set(true);
+    error.set("");
+    progress.set(0);
+    progressWords.set("starting");
+    Path file = out.get();
+    background.execute(() -> {
+      try {
+        java.util.function.Consumer<ReportIssuer.Progress> tell =
+            p -> ui.execute(() -> {
+              progress.set(p.fraction());
+              progressWords.set(p.words());
+            });
+        String done = report ? issuer.issueReport(inspectionId, file, tell) : issuer.issueRepairOrder(inspectionId, file, tell);
+        ui.execute(() -> {
+          busy.set(false);
+          progress.set(1);
+          progressWords.set("done");
+          status.set(done);
+        });
+      } catch (RuntimeException e) {
+        ui.execute(() -> {
+          busy.set(false);
+          progress.set(0);
+          progressWords.set("");
+          error.set((report ? "Report" : "Repair order") + " not issued: " + e.getMessage());
+          dialogs.showError(report ? "Report not issued" : "Repair order not issued", error.get());
+        });
+      }
+    });
+    return true;
+  }
+
+  // ---- finalise -------------------------------------------------------------------------------
+
+  /** Finalises the inspection after asking; from then on it is read-only. */
+  public boolean finaliseInspection() {
+    if (finalised.get()) {
+      error.set("Inspection " + inspectionId + " is already finalised.");
+      return false;
+    }
+    List<String> gaps = new ArrayList<>();
+    for (PlaneRecord p : services.inspections().planesOf(inspectionId)) {
+      long marked = services.inspections().latestObservations(inspectionId, p.id()).values().stream()
+          .filter(o -> o.state().inspected()).count();
+      int total = p.grid().panelCount();
+      if (marked < total) {
+        gaps.add(p.name() + ": " + (total - marked) + " of " + total + " panels not inspected");
+      }
+    }
+    String warning = gaps.isEmpty() ? "" : "\n\nNot every panel was inspected:\n  " + String.join("\n  ", gaps)
+        + "\nThe report will count those panels as missing.";
+    boolean go = dialogs.confirm("Finalise inspection " + inspectionId + "?",
+        "After finalising, nothing in this inspection can be changed: no mark, correction or photo."
+            + " Later changes need a new inspection." + warning, "Finalise");
+    if (!go) {
+      return false;
+    }
+    try {
+      services.inspections().finalise(inspectionId);
+    } catch (RuntimeException e) {
+      error.set("Not finalised: " + e.getMessage());
+      dialogs.showError("Not finalised", error.get());
+      return false;
+    }
+    load();
+    status.set("Inspection " + inspectionId + " finalised: it is read-only now. Issue the report (R) for the record.");
+    return true;
+  }
+
+  // ---- properties -----------------------------------------------------------------------------
+
+  public long inspectionId() {
+    return inspectionId;
+  }
+
+  public long planeId() {
+    return planeId;
+  }
+
+  public ReadOnlyObjectProperty<PlanePicture> pictureProperty() {
+    return picture.getReadOnlyProperty();
+  }
+
+  public ReadOnlyObjectProperty<VerdictWords> verdictProperty() {
+    return verdict.getReadOnlyProperty();
+  }
+
+  public ObservableList<String> repairLines() {
+    return repairLines;
+  }
+
+  public ObservableList<String> restoreLines() {
+    return restoreLines;
+  }
+
+  public ObservableList<String> findingLines() {
+    return findingLines;
+  }
+
+  public ObservableList<PlaneChoice> planes() {
+    return planes;
+  }
+
+  public ReadOnlyStringProperty summaryProperty() {
+    return summary.getReadOnlyProperty();
+  }
+
+  public ReadOnlyStringProperty statusProperty() {
+    return status.getReadOnlyProperty();
+  }
+
+  public ReadOnlyStringProperty errorProperty() {
+    return error.getReadOnlyProperty();
+  }
+
+  public ReadOnlyStringProperty progressWordsProperty() {
+    return progressWords.getReadOnlyProperty();
+  }
+
+  public ReadOnlyDoubleProperty progressProperty() {
+    return progress.getReadOnlyProperty();
+  }
+
+  public ReadOnlyBooleanProperty busyProperty() {
+    return busy.getReadOnlyProperty();
+  }
+
+  public ReadOnlyBooleanProperty finalisedProperty() {
+    return finalised.getReadOnlyProperty();
+  }
+
+  public ReadOnlyStringProperty titleProperty() {
+    return title.getReadOnlyProperty();
+  }
+}

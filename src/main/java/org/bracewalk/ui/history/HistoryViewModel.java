@@ -1,0 +1,153 @@
+package org.bracewalk.ui.history;
+
+import java.time.ZoneId;
+import java.time.format.DateTimeFormatter;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Objects;
+import java.util.Set;
+import javafx.beans.property.IntegerProperty;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.property.SimpleIntegerProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.app.PanelChange;
+import org.bracewalk.app.PlaneHistory;
+import org.bracewalk.core.analysis.StateAnalysis;
+import org.bracewalk.core.model.PanelFinding;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.ui.common.PlanePicture;
+import org.bracewalk.ui.common.VerdictKind;
+
+/** A plane across the inspections of its structure; the chosen one drawn with its changes marked. */
+public final class HistoryViewModel {
+  private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm");
+
+  private final PlaneHistory history;
+  private final ZoneId zone;
+  private final ObservableList<String> entries = FXCollections.observableArrayList();
+  private final ObservableList<String> changes = FXCollections.observableArrayList();
+  private final IntegerProperty chosen = new SimpleIntegerProperty(this, "chosen", -1);
+  private final ReadOnlyObjectWrapper<PlanePicture> picture = new ReadOnlyObjectWrapper<>(this, "picture");
+  private final ReadOnlyStringWrapper heading = new ReadOnlyStringWrapper(this, "heading", "");
+  private final ReadOnlyStringWrapper timeline = new ReadOnlyStringWrapper(this, "timeline", "");
+
+  public HistoryViewModel(AppServices services, long planeId) {
+    Objects.requireNonNull(services, "services");
+    this.history = services.history().history(planeId);
+    var plane = history.plane();
+    var structure = services.sites().structure(plane.structureId());
+    this.zone = services.sites().site(structure.siteId()).timeZone();
+    StringBuilder line = new StringBuilder();
+    for (PlaneHistory.Entry e : history.entries()) {
+      VerdictKind k = kind(e);
+      entries.add("#" + e.inspection().id() + "  " + WHEN.format(e.inspection().startedAt().atZone(zone))
+          + "  " + e.inspection().reason().label().replace('-', ' ')
+          + (e.inspection().isFinalised() ? "" : " (open)")
+          + "\n" + k.symbol() + " " + k.words() + " \u00b7 " + e.changes().size()
+          + (e.changes().size() == 1 ? " change" : " changes"));
+      if (line.length() > 0) {
+        line.append("  \u2192  ");
+      }
+      line.append(k.symbol()).append(" #").append(e.inspection().id());
+    }
+    timeline.set(line.length() == 0 ? "No inspections yet." : line.toString());
+    chosen.addListener((o, a, b) -> show(b.intValue()));
+    chosen.set(history.entries().size() - 1);
+    if (history.entries().isEmpty()) {
+      heading.set(plane.name() + ": not inspected yet.");
+    }
+  }
+
+  static VerdictKind kind(PlaneHistory.Entry e) {
+    StateAnalysis s = e.verdict();
+    if (s.rigid()) {
+      return VerdictKind.HOLDS;
+    }
+    boolean unknown = e.asBuilt().uninspected().size() > 0;
+    if (unknown && e.findings().isEmpty()) {
+      return VerdictKind.NOT_INSPECTED;
+    }
+    return s.oneWayOnly() ? VerdictKind.SWAYS_ONE_WAY : VerdictKind.LOST;
+  }
+
+  private void show(int i) {
+    if (i < 0 || i >= history.entries().size()) {
+      return;
+    }
+    PlaneHistory.Entry e = history.entries().get(i);
+    Set<PanelRef> changed = new HashSet<>();
+    changes.clear();
+    for (PanelChange c : e.changes()) {
+      changed.add(c.panel());
+      changes.add(c.panel() + ": " + words(c.before()) + " \u2192 " + words(c.after()));
+    }
+    if (changes.isEmpty()) {
+      changes.add(i == 0 ? "The first inspection of this plane: nothing to compare with." : "No panel changed.");
+    }
+    java.util.Map<PanelRef, PanelFinding> shown = new java.util.HashMap<>();
+    e.findings().forEach((p, f) -> {
+      if (f.state() != PanelState.NOT_INSPECTED) {
+        shown.put(p, f);
+      }
+    });
+    picture.set(new PlanePicture(e.design().design(), shown, true, e.verdict().blocks(),
+        Set.copyOf(e.verdict().criticalBraces()), List.of(), changed, null));
+    VerdictKind k = kind(e);
+    heading.set(history.plane().name() + " in inspection " + e.inspection().id() + " ("
+        + WHEN.format(e.inspection().startedAt().atZone(zone)) + ", " + e.inspection().inspectorName() + "): "
+        + k.symbol() + " " + k.words());
+  }
+
+  private static String words(PanelFinding f) {
+    if (f == null || f.state() == PanelState.NOT_INSPECTED) {
+      return "not inspected";
+    }
+    return f.state().label() + (f.memberFound() != null ? " (" + f.memberFound().token() + ")" : "");
+  }
+
+  public void older() {
+    if (chosen.get() > 0) {
+      chosen.set(chosen.get() - 1);
+    }
+  }
+
+  public void newer() {
+    if (chosen.get() < history.entries().size() - 1) {
+      chosen.set(chosen.get() + 1);
+    }
+  }
+
+  public String planeName() {
+    return history.plane().name();
+  }
+
+  public ObservableList<String> entries() {
+    return entries;
+  }
+
+  public ObservableList<String> changes() {
+    return changes;
+  }
+
+  public IntegerProperty chosenProperty() {
+    return chosen;
+  }
+
+  public ReadOnlyObjectProperty<PlanePicture> pictureProperty() {
+    return picture.getReadOnlyProperty();
+  }
+
+  public ReadOnlyStringProperty headingProperty() {
+    return heading.getReadOnlyProperty();
+  }
+
+  public ReadOnlyStringProperty timelineProperty() {
+    return timeline.getReadOnlyProperty();
+  }
+}

@@ -1,0 +1,289 @@
+package org.bracewalk.ui.sites;
+
+import java.util.List;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.geometry.Insets;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.ChoiceBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.TableCell;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableRow;
+import javafx.scene.control.TableView;
+import javafx.scene.control.TextField;
+import javafx.scene.control.TextInputControl;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyEvent;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+import javafx.util.StringConverter;
+import org.bracewalk.core.model.InspectionReason;
+import org.bracewalk.ui.common.KeyHelp;
+import org.bracewalk.ui.common.ScreenId;
+import org.bracewalk.ui.common.Widgets;
+
+/** The sites overview screen. Only binds to its view model. */
+public final class SitesView extends BorderPane {
+  private final SitesViewModel vm;
+  private final TableView<OverviewRow> table = new TableView<>();
+  private final TextField inspector = new TextField();
+
+  public SitesView(SitesViewModel vm) {
+    this.vm = vm;
+    getStyleClass().add("screen");
+    setId("sites-screen");
+    Label title = new Label("Sites, structures and planes");
+    title.getStyleClass().add("screen-title");
+    setTop(Widgets.row(12, title, Widgets.grow(), Widgets.hint("Database: " + vm.databaseLocation())));
+
+    table.setId("sites-table");
+    table.setItems(vm.rows());
+    table.getColumns().add(column("Name", 210, this::name));
+    table.getColumns().add(column("What", 130, r -> r.level() == OverviewRow.Level.SITE ? "" : r.kind()));
+    table.getColumns().add(column("Latest verdict", 300, OverviewRow::verdictText));
+    table.getColumns().add(column("Last inspected", 165, r -> r.level() == OverviewRow.Level.STRUCTURE ? r.lastInspected() : ""));
+    TableColumn<OverviewRow, OverviewRow> due = new TableColumn<>("Next inspection due");
+    due.setPrefWidth(250);
+    due.setCellValueFactory(c -> new javafx.beans.property.SimpleObjectProperty<>(c.getValue()));
+    due.setCellFactory(c -> new TableCell<>() {
+      @Override
+      protected void updateItem(OverviewRow r, boolean emptyCell) {
+        super.updateItem(r, emptyCell);
+        getStyleClass().remove("overdue");
+        if (emptyCell || r == null || r.level() != OverviewRow.Level.STRUCTURE) {
+          setText(null);
+          return;
+        }
+        setText(r.due().words() + " \u00b7 " + r.nextDue());
+        if (r.due() == OverviewRow.Due.OVERDUE || r.due() == OverviewRow.Due.NEVER_INSPECTED) {
+          getStyleClass().add("overdue");
+        }
+      }
+    });
+    table.getColumns().add(due);
+    table.getColumns().add(column("Interval", 110, OverviewRow::interval));
+    table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY);
+    table.setRowFactory(t -> new TableRow<>() {
+      @Override
+      protected void updateItem(OverviewRow r, boolean emptyRow) {
+        super.updateItem(r, emptyRow);
+        setStyle(r != null && r.level() != OverviewRow.Level.PLANE ? "-fx-font-weight: bold;" : "");
+      }
+    });
+    table.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> vm.selectedProperty().set(b));
+    table.setPlaceholder(new Label(""));
+    table.setOnMouseClicked(e -> {
+      if (e.getClickCount() == 2) {
+        vm.open(ScreenId.WALK);
+      }
+    });
+
+    javafx.scene.layout.HBox actions = side();
+    actions.visibleProperty().bind(vm.emptyProperty().not());
+    actions.managedProperty().bind(actions.visibleProperty());
+    VBox.setVgrow(table, Priority.ALWAYS);
+    VBox withActions = new VBox(10, table, actions);
+    StackPane centre = new StackPane(withActions, emptyOffer());
+    setCenter(centre);
+    Label error = Widgets.text(vm.errorProperty(), "error-text");
+    error.setId("sites-error");
+    Label status = Widgets.text(vm.statusProperty());
+    status.setId("sites-status");
+    VBox bottom = new VBox(4, error, status);
+    bottom.setPadding(new Insets(6, 0, 0, 0));
+    setBottom(bottom);
+    addEventHandler(KeyEvent.KEY_PRESSED, this::onKey);
+  }
+
+  private String name(OverviewRow r) {
+    return switch (r.level()) {
+      case SITE -> "\u25A3 " + r.name();
+      case STRUCTURE -> "    " + r.name();
+      case PLANE -> "        \u2022 " + r.name();
+    };
+  }
+
+  private static TableColumn<OverviewRow, String> column(
+      String title, double width, java.util.function.Function<OverviewRow, String> value) {
+    TableColumn<OverviewRow, String> c = new TableColumn<>(title);
+    c.setPrefWidth(width);
+    c.setSortable(false);
+    c.setCellValueFactory(d -> new ReadOnlyStringWrapper(value.apply(d.getValue())));
+    return c;
+  }
+
+  private Node emptyOffer() {
+    Label head = new Label("This database holds no sites yet.");
+    head.getStyleClass().add("screen-title");
+    Label where = Widgets.text("Database: " + vm.databaseLocation());
+    Label offer = Widgets.text("Load the demo site to try Bracewalk: an invented depot with a facade scaffold and a"
+        + " racking run, each with two finished inspections. It goes into this database file.");
+    offer.setMaxWidth(640);
+    Button load = new Button("Load the demo site (L)");
+    load.setId("load-demo");
+    load.setDefaultButton(true);
+    load.setOnAction(e -> {
+      if (vm.loadDemo()) {
+        table.requestFocus();
+        table.getSelectionModel().select(0);
+      }
+    });
+    load.setStyle("-fx-font-size: 1.2em; -fx-min-height: 56;");
+    VBox box = new VBox(14, head, where, offer, load);
+    box.getStyleClass().add("empty-offer");
+    box.setAlignment(Pos.CENTER);
+    box.visibleProperty().bind(vm.emptyProperty());
+    box.setStyle("-fx-background-color: #f4f2ed;");
+    return box;
+  }
+
+  private javafx.scene.layout.HBox side() {
+    Label sel = Widgets.text(vm.selectionTextProperty());
+    sel.setId("sites-selection");
+    Button walk = wide("Walk-round (Enter, Ctrl+3)", () -> vm.open(ScreenId.WALK));
+    walk.setId("open-walk");
+    Button design = wide("Design (Ctrl+2)", () -> vm.open(ScreenId.DESIGN));
+    Button findings = wide("Findings and repair (Ctrl+4)", () -> vm.open(ScreenId.FINDINGS));
+    Button history = wide("History (Ctrl+5)", () -> vm.open(ScreenId.HISTORY));
+    GridPane buttons = new GridPane();
+    buttons.setHgap(8);
+    buttons.setVgap(8);
+    buttons.addRow(0, walk, design);
+    buttons.addRow(1, findings, history);
+    javafx.scene.layout.ColumnConstraints half = new javafx.scene.layout.ColumnConstraints();
+    half.setPercentWidth(50);
+    buttons.getColumnConstraints().addAll(half, half);
+    VBox open = Widgets.box("Open", sel, buttons);
+
+    inspector.setId("start-inspector");
+    inspector.textProperty().bindBidirectional(vm.inspectorNameProperty());
+    inspector.setPromptText("name of the person inspecting");
+    TextField position = new TextField();
+    position.setId("start-position");
+    position.textProperty().bindBidirectional(vm.inspectorPositionProperty());
+    position.setPromptText("position, firm");
+    ChoiceBox<InspectionReason> reason = new ChoiceBox<>();
+    reason.getItems().addAll(InspectionReason.values());
+    reason.valueProperty().bindBidirectional(vm.reasonProperty());
+    reason.setConverter(new StringConverter<>() {
+      @Override
+      public String toString(InspectionReason r) {
+        return r == null ? "" : r.label().replace('-', ' ');
+      }
+
+      @Override
+      public InspectionReason fromString(String s) {
+        return null;
+      }
+    });
+    TextField competent = new TextField();
+    competent.textProperty().bindBidirectional(vm.competentPersonProperty());
+    competent.setPromptText("if the site needs one");
+    TextField shift = new TextField();
+    shift.textProperty().bindBidirectional(vm.shiftProperty());
+    shift.setPromptText("shift");
+    GridPane form = new GridPane();
+    form.setHgap(8);
+    form.setVgap(6);
+    form.addRow(0, mnemonic("_Inspector", inspector), inspector, mnemonic("_Reason", reason), reason);
+    form.addRow(1, mnemonic("_Position", position), position);
+    form.addRow(2, mnemonic("_Competent person (US)", competent), competent, mnemonic("S_hift (US)", shift), shift);
+    GridPane.setHgrow(inspector, Priority.ALWAYS);
+    Button start = wide("Start inspection now (Ctrl+Enter)", vm::startInspection);
+    start.setId("start-inspection");
+    VBox startBox = Widgets.box("New inspection of the selected structure", form, start,
+        Widgets.hint("Every mark you then make is saved the moment you make it."));
+    form.getColumnConstraints().addAll(new javafx.scene.layout.ColumnConstraints(),
+        new javafx.scene.layout.ColumnConstraints(200, 300, Double.MAX_VALUE));
+    javafx.scene.layout.HBox.setHgrow(open, Priority.ALWAYS);
+    javafx.scene.layout.HBox.setHgrow(startBox, Priority.ALWAYS);
+    open.setPrefWidth(420);
+    startBox.setPrefWidth(560);
+    javafx.scene.layout.HBox side = new javafx.scene.layout.HBox(10, open, startBox);
+    return side;
+  }
+
+  private static Button wide(String text, Runnable action) {
+    Button b = new Button(text);
+    b.setMaxWidth(Double.MAX_VALUE);
+    b.setOnAction(e -> action.run());
+    return b;
+  }
+
+  private static Label mnemonic(String text, Node target) {
+    Label l = new Label(text);
+    l.setMinWidth(Label.USE_PREF_SIZE);
+    l.setMnemonicParsing(true);
+    l.setLabelFor(target);
+    return l;
+  }
+
+  private void onKey(KeyEvent e) {
+    Node focus = getScene() == null ? null : getScene().getFocusOwner();
+    if (e.getCode() == KeyCode.ENTER && e.isShortcutDown()) {
+      vm.startInspection();
+      e.consume();
+      return;
+    }
+    if (focus instanceof TextInputControl || focus instanceof ChoiceBox) {
+      if (e.getCode() == KeyCode.ESCAPE) {
+        table.requestFocus();
+        e.consume();
+      }
+      return;
+    }
+    if (e.getCode() == KeyCode.L && vm.emptyProperty().get()) {
+      vm.loadDemo();
+      table.requestFocus();
+      table.getSelectionModel().select(0);
+      e.consume();
+    } else if (e.getCode() == KeyCode.ENTER && focus == table) {
+      OverviewRow r = vm.selectedProperty().get();
+      if (r != null && r.openInspectionId() == 0 && r.structureId() > 0) {
+        inspector.requestFocus();
+      } else {
+        vm.open(ScreenId.WALK);
+      }
+      e.consume();
+    } else if (e.getCode() == KeyCode.F5) {
+      vm.refresh();
+      e.consume();
+    }
+  }
+
+  /** Focus on the table, first structure selected. */
+  public void focusTable() {
+    table.requestFocus();
+    if (table.getSelectionModel().isEmpty() && !vm.rows().isEmpty()) {
+      int index = vm.rows().size() > 1 ? 1 : 0;
+      table.getSelectionModel().select(index);
+    }
+  }
+
+  public void selectPlane(long planeId) {
+    for (int i = 0; i < vm.rows().size(); i++) {
+      if (vm.rows().get(i).planeId() == planeId) {
+        table.getSelectionModel().select(i);
+        table.scrollTo(Math.max(0, i - 3));
+      }
+    }
+  }
+
+  public static KeyHelp.Section keys() {
+    return new KeyHelp.Section(
+        "Sites",
+        List.of(
+            KeyHelp.of("Up / Down", "choose a structure or plane"),
+            KeyHelp.of("Enter", "open its walk-round (or, with no open inspection, go to the inspector field)"),
+            KeyHelp.of("Alt+I, Alt+P, Alt+R", "inspector, position, reason of a new inspection"),
+            KeyHelp.of("Ctrl+Enter", "start the inspection now"),
+            KeyHelp.of("L", "load the demo site (empty database only)"),
+            KeyHelp.of("F5", "read the database again")));
+  }
+}

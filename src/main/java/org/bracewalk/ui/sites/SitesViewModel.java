@@ -1,0 +1,330 @@
+package org.bracewalk.ui.sites;
+
+import java.time.Clock;
+import java.time.LocalDate;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyBooleanWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.app.ImportedSite;
+import org.bracewalk.app.NewInspection;
+import org.bracewalk.app.PlaneResult;
+import org.bracewalk.core.analysis.AsBuiltAnalysis;
+import org.bracewalk.core.analysis.StateAnalysis;
+import org.bracewalk.core.model.Inspection;
+import org.bracewalk.core.model.InspectionReason;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.Site;
+import org.bracewalk.core.model.Structure;
+import org.bracewalk.core.model.StructureKind;
+import org.bracewalk.ui.common.DialogService;
+import org.bracewalk.ui.common.Navigator;
+import org.bracewalk.ui.common.ScreenId;
+import org.bracewalk.ui.common.Selection;
+import org.bracewalk.ui.common.VerdictKind;
+
+/**
+ * The overview of every site, structure and plane in the database, the demo-site offer when it is
+ * empty, and starting (or continuing) an inspection of the selected structure.
+ */
+public final class SitesViewModel {
+  private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm");
+
+  private final AppServices services;
+  private final Clock clock;
+  private final DialogService dialogs;
+  private final Navigator navigator;
+
+  private final ObservableList<OverviewRow> rows = FXCollections.observableArrayList();
+  private final ObjectProperty<OverviewRow> selected = new SimpleObjectProperty<>(this, "selected");
+  private final ReadOnlyBooleanWrapper empty = new ReadOnlyBooleanWrapper(this, "empty");
+  private final ReadOnlyStringWrapper error = new ReadOnlyStringWrapper(this, "error", "");
+  private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper(this, "status", "");
+  private final ReadOnlyStringWrapper selectionText = new ReadOnlyStringWrapper(this, "selectionText", "");
+
+  private final StringProperty inspectorName = new SimpleStringProperty(this, "inspectorName", "");
+  private final StringProperty inspectorPosition = new SimpleStringProperty(this, "inspectorPosition", "");
+  private final StringProperty competentPerson = new SimpleStringProperty(this, "competentPerson", "");
+  private final StringProperty shift = new SimpleStringProperty(this, "shift", "");
+  private final ObjectProperty<InspectionReason> reason =
+      new SimpleObjectProperty<>(this, "reason", InspectionReason.ROUTINE);
+
+  public SitesViewModel(AppServices services, Clock clock, DialogService dialogs, Navigator navigator) {
+    this.services = Objects.requireNonNull(services, "services");
+    this.clock = Objects.requireNonNull(clock, "clock");
+    this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
+    this.navigator = Objects.requireNonNull(navigator, "navigator");
+    selected.addListener((o, a, b) -> describeSelection());
+    refresh();
+  }
+
+  /** Reads every site again. */
+  public void refresh() {
+    List<OverviewRow> out = new ArrayList<>();
+    for (Site site : services.sites().sites()) {
+      out.add(new OverviewRow(OverviewRow.Level.SITE, site.name(), site.location(), null, "", "", "",
+          OverviewRow.Due.NOT_APPLICABLE, "", 0, 0, 0, 0));
+      LocalDate today = LocalDate.now(clock.withZone(site.timeZone()));
+      for (Structure st : services.sites().structures(site.id())) {
+        List<Inspection> insp = services.inspections().inspections(st.id());
+        Optional<Inspection> latest = insp.stream().max(Comparator.comparing(Inspection::startedAt));
+        Optional<Inspection> open = insp.stream().filter(i -> !i.isFinalised()).max(Comparator.comparing(Inspection::startedAt));
+        Optional<Inspection> lastDone =
+            insp.stream().filter(Inspection::isFinalised).max(Comparator.comparing(Inspection::finishedAt));
+        String last = lastDone.map(i -> WHEN.format(i.finishedAt().atZone(site.timeZone()))).orElse("never");
+        Optional<LocalDate> due = services.inspections().nextInspectionDue(st.id());
+        OverviewRow.Due dueState;
+        String dueText;
+        if (due.isEmpty()) {
+          dueState = OverviewRow.Due.NEVER_INSPECTED;
+          dueText = "now";
+        } else if (due.get().isBefore(today)) {
+          dueState = OverviewRow.Due.OVERDUE;
+          dueText = "since " + due.get();
+        } else if (due.get().isEqual(today)) {
+          dueState = OverviewRow.Due.DUE_TODAY;
+          dueText = due.get().toString();
+        } else {
+          dueState = OverviewRow.Due.IN_TIME;
+          dueText = due.get().toString();
+        }
+        int structureIndex = out.size();
+        out.add(null); // filled in once the planes are known
+        VerdictKind worst = null;
+        for (PlaneRecord plane : services.sites().planes(st.id())) {
+          VerdictKind v = VerdictKind.NOT_INSPECTED;
+          String words = v.symbol() + " " + v.words();
+          if (latest.isPresent()) {
+            PlaneResult r = services.analysis().analysePlane(latest.get().id(), plane.id());
+            v = verdictOf(r);
+            words = v.symbol() + " " + v.words();
+            if (!latest.get().isFinalised()) {
+              int marked = r.latest().size();
+              words += " (open: " + marked + " of " + plane.grid().panelCount() + " marked)";
+            }
+          }
+          worst = worse(worst, v);
+          out.add(new OverviewRow(OverviewRow.Level.PLANE, plane.name(),
+              plane.grid().lifts() + " lifts \u00d7 " + plane.grid().bays() + (plane.grid().bays() == 1 ? " bay" : " bays"),
+              v, words, last, "", OverviewRow.Due.NOT_APPLICABLE, "", st.id(), plane.id(),
+              open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
+        }
+        VerdictKind sv = worst == null ? VerdictKind.NOT_INSPECTED : worst;
+        out.set(structureIndex, new OverviewRow(OverviewRow.Level.STRUCTURE, st.name(), kindWords(st.kind()), sv,
+            sv.symbol() + " " + sv.words() + (open.isPresent() ? " \u2014 inspection " + open.get().id() + " open" : ""),
+            last, dueText, dueState, "every " + st.inspectionIntervalDays() + " days", st.id(), 0,
+            open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
+      }
+    }
+    OverviewRow keep = selected.get();
+    rows.setAll(out);
+    empty.set(out.isEmpty());
+    if (keep != null) {
+      for (OverviewRow r : out) {
+        if (r.level() == keep.level() && r.structureId() == keep.structureId() && r.planeId() == keep.planeId()
+            && r.name().equals(keep.name())) {
+          selected.set(r);
+        }
+      }
+    }
+    describeSelection();
+  }
+
+  static String kindWords(StructureKind k) {
+    return switch (k) {
+      case SCAFFOLD -> "scaffold";
+      case RACKING_RUN -> "racking run";
+      case OTHER_FRAME -> "braced frame";
+    };
+  }
+
+  /** The verdict of one plane in its latest inspection, in the screen's four kinds. */
+  static VerdictKind verdictOf(PlaneResult r) {
+    AsBuiltAnalysis ab = r.analysis().asBuilt().orElseThrow();
+    StateAnalysis s = ab.state();
+    if (s.rigid()) {
+      return VerdictKind.HOLDS;
+    }
+    if (ab.unknownPanels() > 0 && ab.rigidIfUnknownSound()) {
+      return VerdictKind.DEPENDS_ON_UNSEEN;
+    }
+    return s.oneWayOnly() ? VerdictKind.SWAYS_ONE_WAY : VerdictKind.LOST;
+  }
+
+  private static VerdictKind worse(VerdictKind a, VerdictKind b) {
+    if (a == null) {
+      return b;
+    }
+    return rank(b) > rank(a) ? b : a;
+  }
+
+  private static int rank(VerdictKind k) {
+    return switch (k) {
+      case HOLDS -> 0;
+      case NOT_INSPECTED -> 1;
+      case DEPENDS_ON_UNSEEN -> 2;
+      case SWAYS_ONE_WAY -> 3;
+      case LOST -> 4;
+    };
+  }
+
+  private void describeSelection() {
+    OverviewRow r = selected.get();
+    if (r == null || r.level() == OverviewRow.Level.SITE) {
+      selectionText.set("Select a structure or a plane (arrow keys, then Enter opens its walk-round).");
+      return;
+    }
+    String open = r.openInspectionId() > 0
+        ? "Inspection " + r.openInspectionId() + " is open: Enter continues the walk-round."
+        : "No open inspection: fill in the inspector below and start one.";
+    selectionText.set((r.level() == OverviewRow.Level.PLANE ? "Plane " : "Structure ") + "'" + r.name() + "'. " + open);
+  }
+
+  /** Loads the demo site (only offered on an empty database). */
+  public boolean loadDemo() {
+    try {
+      ImportedSite s = services.demo().load();
+      status.set("Loaded the demo site '" + s.site().name() + "': " + s.structures().size() + " structures, "
+          + s.planes().size() + " planes, " + s.inspections().size()
+          + " finalised inspections. Select a structure and start a new inspection to walk a plane.");
+      error.set("");
+      refresh();
+      return true;
+    } catch (RuntimeException e) {
+      error.set("The demo site was not loaded: " + e.getMessage());
+      dialogs.showError("Demo site not loaded", error.get());
+      return false;
+    }
+  }
+
+  /**
+   * Starts an inspection of the selected structure now with the inspector's details, and opens its
+   * walk-round on the selected plane (the first plane when a structure line is selected).
+   */
+  public boolean startInspection() {
+    OverviewRow r = selected.get();
+    if (r == null || r.structureId() == 0) {
+      error.set("Select the structure (or one of its planes) to inspect first.");
+      return false;
+    }
+    String name = inspectorName.get() == null ? "" : inspectorName.get().strip();
+    if (name.isEmpty()) {
+      error.set("Inspector: empty. Type the name of the person making the inspection (it goes on the report).");
+      return false;
+    }
+    if (r.openInspectionId() > 0
+        && !dialogs.confirm("An inspection is already open",
+            "Inspection " + r.openInspectionId() + " of this structure is still open. Start another one anyway?"
+                + " (The open one stays open until it is finalised.)", "Start another")) {
+      return false;
+    }
+    Inspection started;
+    try {
+      started = services.inspections().start(r.structureId(),
+          new NewInspection(name, inspectorPosition.get(), competentPerson.get(), shift.get(), null, reason.get(), null, null));
+    } catch (RuntimeException e) {
+      error.set("Not started: " + e.getMessage());
+      return false;
+    }
+    error.set("");
+    long plane = r.planeId() > 0 ? r.planeId() : firstPlane(r.structureId());
+    navigator.open(ScreenId.WALK, new Selection(r.structureId(), plane, started.id()));
+    return true;
+  }
+
+  private long firstPlane(long structureId) {
+    return services.sites().planes(structureId).stream().findFirst().map(PlaneRecord::id).orElse(0L);
+  }
+
+  /** The selection the other screens should show for the selected line. */
+  public Selection selectionForOthers() {
+    OverviewRow r = selected.get();
+    if (r == null || r.structureId() == 0) {
+      return Selection.NONE;
+    }
+    long plane = r.planeId() > 0 ? r.planeId() : firstPlane(r.structureId());
+    long insp = r.openInspectionId() > 0 ? r.openInspectionId() : r.latestInspectionId();
+    return new Selection(r.structureId(), plane, insp);
+  }
+
+  /** Opens {@code screen} for the selected line. */
+  public boolean open(ScreenId screen) {
+    Selection s = selectionForOthers();
+    if (!s.hasPlane()) {
+      error.set("Select a structure or a plane first.");
+      return false;
+    }
+    navigator.open(screen, s);
+    return true;
+  }
+
+  /** Selects the line of a plane, if there is one. */
+  public void selectPlane(long planeId) {
+    for (OverviewRow r : rows) {
+      if (r.level() == OverviewRow.Level.PLANE && r.planeId() == planeId) {
+        selected.set(r);
+      }
+    }
+  }
+
+  public ObservableList<OverviewRow> rows() {
+    return rows;
+  }
+
+  public ObjectProperty<OverviewRow> selectedProperty() {
+    return selected;
+  }
+
+  public ReadOnlyBooleanProperty emptyProperty() {
+    return empty.getReadOnlyProperty();
+  }
+
+  public ReadOnlyStringProperty errorProperty() {
+    return error.getReadOnlyProperty();
+  }
+
+  public ReadOnlyStringProperty statusProperty() {
+    return status.getReadOnlyProperty();
+  }
+
+  public ReadOnlyStringProperty selectionTextProperty() {
+    return selectionText.getReadOnlyProperty();
+  }
+
+  public StringProperty inspectorNameProperty() {
+    return inspectorName;
+  }
+
+  public StringProperty inspectorPositionProperty() {
+    return inspectorPosition;
+  }
+
+  public StringProperty competentPersonProperty() {
+    return competentPerson;
+  }
+
+  public StringProperty shiftProperty() {
+    return shift;
+  }
+
+  public ObjectProperty<InspectionReason> reasonProperty() {
+    return reason;
+  }
+
+  public String databaseLocation() {
+    return services.store().location();
+  }
+}

@@ -1,0 +1,334 @@
+package org.bracewalk.ui.walk;
+
+import org.bracewalk.core.model.DefectType;
+import java.util.List;
+import javafx.beans.binding.Bindings;
+import javafx.geometry.Insets;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.ChoiceBox;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ProgressBar;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.TextField;
+import javafx.scene.control.TextInputControl;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyEvent;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.MemberKind;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.ui.common.KeyHelp;
+import org.bracewalk.ui.common.Legend;
+import org.bracewalk.ui.common.PanelLook;
+import org.bracewalk.ui.common.PlaneCanvas;
+import org.bracewalk.ui.common.Widgets;
+
+/**
+ * The walk-round screen: the plane with its cursor in the middle, the state buttons (each with its
+ * key) and the details of the next mark at the side, the verdict redrawn after every mark, and a
+ * banner that says what to do when the plane has lost rigidity. Only binds to its view model.
+ */
+public final class WalkView extends BorderPane {
+  private final WalkViewModel vm;
+  private final PlaneCanvas canvas = new PlaneCanvas();
+
+  /** The state keys, in button order; digits 1 to 6 do the same. */
+  static final List<PanelState> STATES =
+      List.of(
+          PanelState.SOUND,
+          PanelState.DAMAGED_EFFECTIVE,
+          PanelState.DAMAGED_INEFFECTIVE,
+          PanelState.MISSING,
+          PanelState.EXTRA,
+          PanelState.NOT_REACHABLE);
+
+  public WalkView(WalkViewModel vm) {
+    this.vm = vm;
+    getStyleClass().add("screen");
+    setId("walk-screen");
+
+    Label title = new Label("Walk-round");
+    title.getStyleClass().add("screen-title");
+    title.setMinWidth(Label.USE_PREF_SIZE);
+    Label progress = Widgets.text(vm.progressTextProperty(), "progress-text");
+    progress.setId("walk-progress");
+    progress.setMinWidth(Label.USE_PREF_SIZE);
+    progress.setWrapText(false);
+    ProgressBar bar = new ProgressBar();
+    bar.setPrefWidth(220);
+    bar.progressProperty().bind(Bindings.createDoubleBinding(
+        () -> vm.doneProperty().get() / (double) vm.total(), vm.doneProperty()));
+    HBox top = Widgets.row(14, title, progress, bar);
+    top.setPadding(new Insets(0, 0, 8, 0));
+    setTop(top);
+
+    Label alarm = Widgets.text(vm.alarmProperty());
+    alarm.setId("walk-alarm");
+    HBox banner = new HBox(10, Widgets.key("!"), alarm);
+    HBox.setHgrow(alarm, Priority.ALWAYS);
+    banner.getStyleClass().add("alarm-banner");
+    banner.setId("walk-alarm-banner");
+    banner.setAlignment(Pos.CENTER_LEFT);
+    banner.visibleProperty().bind(vm.alarmProperty().isNotEmpty());
+    banner.managedProperty().bind(banner.visibleProperty());
+    alarm.setAccessibleText("alarm");
+
+    canvas.setId("walk-canvas");
+    canvas.pictureProperty().bind(vm.pictureProperty());
+    canvas.setOnPanelPicked(vm::select);
+    VBox.setVgrow(canvas, Priority.ALWAYS);
+    Label cursorText = Widgets.text(vm.cursorTextProperty());
+    cursorText.setId("walk-cursor");
+    cursorText.setStyle("-fx-font-weight: bold;");
+    Legend legend = new Legend(Legend.Set_.WALK);
+    VBox centre = new VBox(8, banner, canvas, cursorText, legend);
+    setCenter(centre);
+
+    ScrollPane side = new ScrollPane(sidePanel());
+    side.setFitToWidth(true);
+    side.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+    side.setPrefViewportWidth(400);
+    setRight(side);
+
+    Label status = Widgets.text(vm.statusProperty());
+    status.setId("walk-status");
+    Label error = Widgets.text(vm.errorProperty(), "error-text");
+    error.setId("walk-error");
+    VBox bottom = new VBox(4, error, status);
+    bottom.setPadding(new Insets(6, 0, 0, 0));
+    setBottom(bottom);
+
+    addEventHandler(KeyEvent.KEY_PRESSED, this::onKey);
+  }
+
+  private VBox sidePanel() {
+    GridPane states = new GridPane();
+    states.setHgap(8);
+    states.setVgap(8);
+    for (int i = 0; i < STATES.size(); i++) {
+      PanelState s = STATES.get(i);
+      PanelLook look = PanelLook.of(s);
+      Button b = new Button(look.words());
+      b.setGraphic(Widgets.key(look.badge() + "  " + (i + 1)));
+      b.getStyleClass().add("state-button");
+      if (s == PanelState.MISSING || s == PanelState.DAMAGED_INEFFECTIVE) {
+        b.getStyleClass().add("alarm");
+      }
+      b.setWrapText(true);
+      b.setId("mark-" + s.label());
+      b.setOnAction(e -> {
+        vm.mark(s);
+        canvas.requestFocus();
+      });
+      b.disableProperty().bind(vm.readOnlyProperty());
+      b.setFocusTraversable(false);
+      states.add(b, i % 2, i / 2);
+    }
+    VBox marks = Widgets.box("Mark the current panel (then it moves on)", states,
+        Widgets.hint("S or Space = sound. The mark is saved at once; Backspace or Ctrl+Z undoes the last one (kept as a correction)."));
+
+    ToggleGroup seen = new ToggleGroup();
+    HBox seenRow = Widgets.row(6);
+    for (Diagonal d : new Diagonal[] {null, Diagonal.RISING, Diagonal.FALLING, Diagonal.BOTH}) {
+      ToggleButton t = new ToggleButton(d == null ? "follows state" : d.symbol());
+      t.setUserData(d);
+      t.setToggleGroup(seen);
+      t.setFocusTraversable(false);
+      seenRow.getChildren().add(t);
+    }
+    seen.selectedToggleProperty().addListener((o, a, b) -> {
+      if (b == null) {
+        // keep one selected
+        if (a != null) {
+          seen.selectToggle(a);
+        }
+        return;
+      }
+      vm.memberSeenProperty().set((Diagonal) b.getUserData());
+    });
+    Runnable syncSeen = () -> {
+      for (var t : seen.getToggles()) {
+        if (t.getUserData() == vm.memberSeenProperty().get()) {
+          seen.selectToggle(t);
+        }
+      }
+    };
+    vm.memberSeenProperty().addListener((o, a, b) -> syncSeen.run());
+    syncSeen.run();
+    ToggleButton tension = new ToggleButton("tension-only (T)");
+    tension.setFocusTraversable(false);
+    tension.setOnAction(e -> vm.toggleMemberKind());
+    vm.memberKindProperty().addListener((o, a, b) -> tension.setSelected(b == MemberKind.TENSION_ONLY));
+    VBox member = Widgets.box("Member seen (keys / \\ X, . follows state)", seenRow, tension,
+        Widgets.hint("Only when it differs: the extra member, or the half of a cross still there."));
+
+    ComboBox<DefectType> defect = new ComboBox<>();
+    defect.getItems().add(null);
+    defect.getItems().addAll(DefectType.values());
+    defect.valueProperty().bindBidirectional(vm.defectProperty());
+    defect.setId("walk-defect");
+    defect.setConverter(new javafx.util.StringConverter<>() {
+      @Override
+      public String toString(DefectType d) {
+        return d == null ? "(none)" : d.label().replace('-', ' ');
+      }
+
+      @Override
+      public DefectType fromString(String t) {
+        return null;
+      }
+    });
+    defect.setMaxWidth(Double.MAX_VALUE);
+    TextField bow = new TextField();
+    bow.setId("walk-bow");
+    bow.setPromptText("mm over 1 m");
+    bow.textProperty().bindBidirectional(vm.bowMmProperty());
+    TextField note = new TextField();
+    note.setId("walk-note");
+    note.setPromptText("what, where");
+    note.textProperty().bindBidirectional(vm.noteProperty());
+    Button photos = new Button("Add photos\u2026 (F)");
+    photos.setId("walk-photos");
+    photos.setOnAction(e -> vm.addPhotos());
+    photos.setFocusTraversable(false);
+    Label photoCount = new Label();
+    photoCount.textProperty().bind(Bindings.size(vm.photos()).asString("%d attached to the next mark"));
+    GridPane details = new GridPane();
+    details.setHgap(8);
+    details.setVgap(6);
+    details.addRow(0, mnemonic("_Defect", defect), defect);
+    details.addRow(1, mnemonic("_Bow mm", bow), bow);
+    details.addRow(2, mnemonic("N_ote", note), note);
+    details.addRow(3, photos, photoCount);
+    GridPane.setHgrow(defect, Priority.ALWAYS);
+    GridPane.setHgrow(note, Priority.ALWAYS);
+    Label bowHint = Widgets.text(vm.bowHintProperty(), "hint");
+    VBox detailBox = Widgets.box("Details for the next mark (Alt+D, Alt+B, Alt+O; Enter returns)", details, bowHint);
+
+    VBox verdict = Widgets.verdictBox(vm.verdictProperty());
+    verdict.setId("walk-verdict");
+    Button undo = new Button("Undo last mark (Backspace)");
+    undo.setId("walk-undo");
+    undo.disableProperty().bind(vm.canUndoProperty().not().or(vm.readOnlyProperty()));
+    undo.setOnAction(e -> vm.undo());
+    undo.setFocusTraversable(false);
+    Label readOnly = Widgets.text("This inspection is finalised: read-only.");
+    readOnly.getStyleClass().add("error-text");
+    readOnly.visibleProperty().bind(vm.readOnlyProperty());
+    readOnly.managedProperty().bind(readOnly.visibleProperty());
+
+    ChoiceBox<WalkOrder> order = new ChoiceBox<>();
+    order.getItems().addAll(WalkOrder.values());
+    order.valueProperty().bindBidirectional(vm.orderProperty());
+    order.setFocusTraversable(false);
+    order.setMaxWidth(Double.MAX_VALUE);
+    VBox orderBox = Widgets.box("Walk order (O changes it)", order);
+    VBox side = new VBox(10, readOnly, verdict, marks, member, detailBox, orderBox, undo);
+    side.getStyleClass().add("side");
+    return side;
+  }
+
+  private static Label mnemonic(String text, Node target) {
+    Label l = new Label(text);
+    l.setMnemonicParsing(true);
+    l.setLabelFor(target);
+    return l;
+  }
+
+  private void onKey(KeyEvent e) {
+    Node focus = getScene() == null ? null : getScene().getFocusOwner();
+    if (focus instanceof TextInputControl
+        || focus instanceof javafx.scene.control.ComboBoxBase
+        || focus instanceof ChoiceBox) {
+      if (e.getCode() == KeyCode.ENTER || e.getCode() == KeyCode.ESCAPE) {
+        canvas.requestFocus();
+        e.consume();
+      }
+      return;
+    }
+    if (e.isAltDown() || e.isMetaDown()) {
+      return;
+    }
+    if (e.isControlDown()) {
+      if (e.getCode() == KeyCode.Z) {
+        vm.undo();
+        e.consume();
+      }
+      return;
+    }
+    boolean handled = true;
+    switch (e.getCode()) {
+      case S, SPACE, DIGIT1, NUMPAD1 -> vm.mark(PanelState.SOUND);
+      case D, DIGIT2, NUMPAD2 -> vm.mark(PanelState.DAMAGED_EFFECTIVE);
+      case U, DIGIT3, NUMPAD3 -> vm.mark(PanelState.DAMAGED_INEFFECTIVE);
+      case M, DIGIT4, NUMPAD4 -> vm.mark(PanelState.MISSING);
+      case E, DIGIT5, NUMPAD5 -> vm.mark(PanelState.EXTRA);
+      case R, DIGIT6, NUMPAD6 -> vm.mark(PanelState.NOT_REACHABLE);
+      case BACK_SPACE -> vm.undo();
+      case UP -> vm.move(1, 0);
+      case DOWN -> vm.move(-1, 0);
+      case LEFT -> vm.move(0, -1);
+      case RIGHT -> vm.move(0, 1);
+      case N, PAGE_DOWN -> vm.next();
+      case B, PAGE_UP -> vm.previous();
+      case HOME -> vm.goToFirstUnmarked();
+      case SLASH -> {
+        if (e.isShiftDown()) {
+          handled = false; // '?' is the help key, handled by the window
+        } else {
+          vm.memberSeenProperty().set(Diagonal.RISING);
+        }
+      }
+      case BACK_SLASH -> vm.memberSeenProperty().set(Diagonal.FALLING);
+      case X -> vm.memberSeenProperty().set(Diagonal.BOTH);
+      case PERIOD -> vm.memberSeenProperty().set(null);
+      case T -> vm.toggleMemberKind();
+      case F -> vm.addPhotos();
+      case O -> vm.cycleOrder();
+      default -> handled = false;
+    }
+    if (handled) {
+      e.consume();
+    }
+  }
+
+  /** Puts keyboard focus on the plane, ready for marks. */
+  public void focusPlane() {
+    canvas.requestFocus();
+  }
+
+  public PlaneCanvas canvas() {
+    return canvas;
+  }
+
+  /** The keys of this screen, for the help overlay and the README. */
+  public static KeyHelp.Section keys() {
+    return new KeyHelp.Section(
+        "Walk-round",
+        List.of(
+            KeyHelp.of("S or Space, 1", "sound"),
+            KeyHelp.of("D, 2", "damaged, still effective"),
+            KeyHelp.of("U, 3", "damaged beyond use (does not count)"),
+            KeyHelp.of("M, 4", "missing"),
+            KeyHelp.of("E, 5", "extra: a member the design does not have"),
+            KeyHelp.of("R, 6", "not reachable (counts as not inspected)"),
+            KeyHelp.of("Backspace, Ctrl+Z", "undo the last mark (recorded as a correction)"),
+            KeyHelp.of("Arrows", "move the cursor one panel"),
+            KeyHelp.of("N / B, PgDn / PgUp", "next / back in the walk order"),
+            KeyHelp.of("Home", "first panel not yet marked"),
+            KeyHelp.of("O", "change the walk order"),
+            KeyHelp.of("/  \\  X  .", "member seen: rising, falling, cross, follows the state"),
+            KeyHelp.of("T", "member seen is tension-only / rigid"),
+            KeyHelp.of("Alt+ D B O", "defect, bow, note fields; Enter or Esc back to the plane"),
+            KeyHelp.of("F", "attach photos from a file or camera folder")));
+  }
+}

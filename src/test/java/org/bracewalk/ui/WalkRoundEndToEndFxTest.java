@@ -1,0 +1,160 @@
+package org.bracewalk.ui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.TimeUnit;
+import javafx.scene.control.Labeled;
+import javafx.scene.input.KeyCode;
+import javafx.stage.Stage;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.app.NewObservation;
+import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.core.model.Inspection;
+import org.bracewalk.core.model.Observation;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.port.InspectionFinalisedException;
+import org.bracewalk.store.Database;
+import org.bracewalk.ui.common.FakeDialogs;
+import org.bracewalk.ui.common.ScreenId;
+import org.bracewalk.ui.walk.WalkOrder;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * A whole walk-round by keys alone, headless, on the demo site: load it into an empty database,
+ * start an inspection of the facade scaffold, mark every panel of the facade (lift 3's braces
+ * missing or beyond use), see the verdict turn to lost rigidity, see the proposed repair, finalise,
+ * issue the report; then check that every mark reached the database.
+ */
+@ExtendWith(ApplicationExtension.class)
+class WalkRoundEndToEndFxTest {
+  @TempDir static Path dir;
+  private AppServices services;
+  private final FakeDialogs dialogs = new FakeDialogs();
+  private final ExecutorService background = Executors.newSingleThreadExecutor();
+  private MainWindow window;
+
+  @Start
+  void start(Stage stage) {
+    services = AppServices.over(Database.open(dir.resolve("walk.db")), Clock.systemUTC(), PlaneAnalyzer.standard());
+    BracewalkApp app = new BracewalkApp(services, PlaneAnalyzer.standard(), Clock.systemUTC(), background,
+        TestReports.issuer(services));
+    window = app.show(stage, dialogs);
+  }
+
+  @AfterEach
+  void close() throws Exception {
+    background.shutdown();
+    background.awaitTermination(30, TimeUnit.SECONDS);
+    services.close();
+  }
+
+  private static void ctrl(FxRobot robot, KeyCode key) {
+    robot.press(KeyCode.CONTROL).type(key).release(KeyCode.CONTROL);
+    WaitForAsyncUtils.waitForFxEvents();
+  }
+
+  private static String text(FxRobot robot, String id) {
+    return robot.lookup(id).queryAs(Labeled.class).getText();
+  }
+
+  @Test
+  void aWholeWalkRoundByKeysReachesTheDatabaseMarkByMark(FxRobot robot) throws Exception {
+    // empty database: the offer to load the demo site
+    assertThat(robot.lookup("#load-demo").tryQuery()).isPresent();
+    robot.type(KeyCode.L);
+    WaitForAsyncUtils.waitForFxEvents();
+    assertThat(services.sites().sites()).hasSize(1);
+
+    // choose the facade plane (rows: site, racking run, 4 frames, spine, scaffold, facade...)
+    for (int i = 0; i < 8; i++) {
+      robot.type(KeyCode.DOWN);
+    }
+    WaitForAsyncUtils.waitForFxEvents();
+    assertThat(text(robot, "#sites-selection")).contains("Plane 'north facade'");
+    robot.type(KeyCode.ENTER); // no open inspection: to the inspector field
+    robot.write("Rowan Test");
+    ctrl(robot, KeyCode.ENTER);
+    assertThat(window.currentScreen()).isEqualTo(ScreenId.WALK);
+    long inspectionId = window.selection().inspectionId();
+    assertThat(inspectionId).isPositive();
+
+    // walk the facade bay by bay; lift 3 was hit
+    PlaneRecord facade = DemoWalk.facade(services);
+    List<PanelRef> order = WalkOrder.BAYS_UP_AND_DOWN.sequence(facade.grid());
+    List<PanelState> states = DemoWalk.states(facade);
+    PanelRef lastHit = new PanelRef(DemoWalk.HIT_LIFT, facade.grid().bays());
+    for (int k = 0; k < order.size(); k++) {
+      robot.type(switch (states.get(k)) {
+        case SOUND -> KeyCode.S;
+        case MISSING -> KeyCode.M;
+        case DAMAGED_INEFFECTIVE -> KeyCode.U;
+        default -> throw new IllegalStateException();
+      });
+      WaitForAsyncUtils.waitForFxEvents();
+      boolean bannerUp = robot.lookup("#walk-alarm-banner").query().isVisible();
+      // the verdict turns exactly when the last brace of lift 3 is marked
+      assertThat(bannerUp).as("alarm after %s", order.get(k)).isEqualTo(k >= order.indexOf(lastHit));
+    }
+    assertThat(text(robot, "#walk-progress")).isEqualTo("50 of 50 panels");
+    assertThat(text(robot, "#walk-alarm"))
+        .contains("Keep people and loads off lifts 3\u20135, all bays")
+        .contains("competent person");
+
+    // findings: the proposed repair is one brace in lift 3
+    ctrl(robot, KeyCode.DIGIT4);
+    assertThat(window.currentScreen()).isEqualTo(ScreenId.FINDINGS);
+    String repair = robot.lookup("#findings-repair").queryAs(javafx.scene.layout.VBox.class).getChildren().stream()
+        .map(n -> ((Labeled) n).getText()).reduce("", String::concat);
+    assertThat(repair).startsWith("1.  lift 3, bay").contains("restores the design");
+
+    // finalise (the dialog answers yes), then issue the report
+    dialogs.confirmAnswers.push(true);
+    ctrl(robot, KeyCode.F);
+    assertThat(robot.lookup("#findings-finalised").query().isVisible()).isTrue();
+    Path pdf = dir.resolve("report.pdf");
+    dialogs.saveAnswers.push(Optional.of(pdf));
+    robot.type(KeyCode.R);
+    WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> text(robot, "#findings-status").contains("report"));
+    assertThat(Files.size(pdf)).isPositive();
+    assertThat(text(robot, "#findings-error")).isEmpty();
+
+    // every mark is in the database, in the order made, with nothing else
+    List<Observation> rows = services.inspections().observations(inspectionId);
+    assertThat(rows).hasSize(order.size());
+    for (int k = 0; k < order.size(); k++) {
+      assertThat(rows.get(k).panel()).isEqualTo(order.get(k));
+      assertThat(rows.get(k).state()).isEqualTo(states.get(k));
+      assertThat(rows.get(k).planeId()).isEqualTo(facade.id());
+      assertThat(rows.get(k).recordedBy()).isEqualTo("Rowan Test");
+    }
+    Inspection done = services.inspections().inspection(inspectionId);
+    assertThat(done.isFinalised()).isTrue();
+    assertThatThrownBy(() -> services.inspections().recordObservation(inspectionId,
+        NewObservation.of(facade.id(), PanelRef.of(1, 1), PanelState.SOUND, "x")))
+        .isInstanceOf(InspectionFinalisedException.class);
+
+    // the walk-round is read-only now: a key records nothing
+    ctrl(robot, KeyCode.DIGIT3);
+    robot.type(KeyCode.M);
+    WaitForAsyncUtils.waitForFxEvents();
+    assertThat(services.inspections().observations(inspectionId)).hasSize(order.size());
+    assertThat(text(robot, "#walk-error")).contains("read-only");
+  }
+}

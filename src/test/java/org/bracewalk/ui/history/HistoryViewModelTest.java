@@ -1,0 +1,54 @@
+package org.bracewalk.ui.history;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Path;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.ui.DemoDatabase;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class HistoryViewModelTest {
+  @TempDir Path dir;
+  private AppServices services;
+
+  @AfterEach
+  void close() {
+    services.close();
+  }
+
+  private PlaneRecord plane(String name) {
+    return services.sites().sites().stream()
+        .flatMap(s -> services.sites().structures(s.id()).stream())
+        .flatMap(st -> services.sites().planes(st.id()).stream())
+        .filter(p -> p.name().equals(name))
+        .findFirst()
+        .orElseThrow();
+  }
+
+  @Test
+  void theLatestInspectionIsDrawnWithThePanelsThatChangedMarked() {
+    services = DemoDatabase.withDemo(dir);
+    HistoryViewModel vm = new HistoryViewModel(services, plane("frame 2").id());
+    assertThat(vm.entries()).hasSize(2);
+    assertThat(vm.chosenProperty().get()).isEqualTo(1);
+    assertThat(vm.timelineProperty().get()).isEqualTo("\u25A0 #1  \u2192  \u25B2 #2");
+    var changed = vm.pictureProperty().get().changed();
+    assertThat(changed).isNotEmpty();
+    assertThat(vm.changes()).hasSize(changed.size()).allMatch(s -> s.contains("\u2192"));
+    vm.older();
+    assertThat(vm.pictureProperty().get().changed()).isEmpty();
+    assertThat(vm.changes()).containsExactly("The first inspection of this plane: nothing to compare with.");
+  }
+
+  @Test
+  void aPlaneNeverInspectedSaysSo() {
+    services = DemoDatabase.withDemo(dir);
+    HistoryViewModel vm = new HistoryViewModel(services, plane("north facade").id());
+    assertThat(vm.entries()).isEmpty();
+    assertThat(vm.timelineProperty().get()).isEqualTo("No inspections yet.");
+    assertThat(vm.headingProperty().get()).contains("not inspected yet");
+  }
+}

@@ -1,0 +1,91 @@
+package org.bracewalk.ui.sites;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.ui.DemoDatabase;
+import org.bracewalk.ui.DemoWalk;
+import org.bracewalk.ui.common.FakeDialogs;
+import org.bracewalk.ui.common.Navigator;
+import org.bracewalk.ui.common.ScreenId;
+import org.bracewalk.ui.common.Selection;
+import org.bracewalk.ui.common.VerdictKind;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class SitesViewModelTest {
+  @TempDir Path dir;
+  private AppServices services;
+  private final FakeDialogs dialogs = new FakeDialogs();
+  private final List<String> opened = new ArrayList<>();
+  private final Navigator navigator = (screen, sel) -> opened.add(screen + " " + sel);
+
+  @AfterEach
+  void close() {
+    services.close();
+  }
+
+  private OverviewRow row(SitesViewModel vm, String name) {
+    return vm.rows().stream().filter(r -> r.name().equals(name)).findFirst().orElseThrow();
+  }
+
+  @Test
+  void anEmptyDatabaseOffersTheDemoAndLoadingItFillsTheOverview() {
+    services = DemoDatabase.empty(dir);
+    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    assertThat(vm.emptyProperty().get()).isTrue();
+    assertThat(vm.loadDemo()).isTrue();
+    assertThat(vm.emptyProperty().get()).isFalse();
+    assertThat(vm.rows()).extracting(OverviewRow::name)
+        .contains("Larkspur Depot", "Aisle C racking run", "frame 2", "North facade scaffold", "north facade");
+  }
+
+  @Test
+  void eachPlaneShowsItsLatestVerdictAndEachStructureWhenItIsDue() {
+    services = DemoDatabase.withDemo(dir);
+    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    // the demo's after-impact inspection of the racking run (2025-03-05) lost frame 2
+    assertThat(row(vm, "frame 2").verdict()).isEqualTo(VerdictKind.LOST);
+    assertThat(row(vm, "frame 1").verdict()).isEqualTo(VerdictKind.HOLDS);
+    OverviewRow racking = row(vm, "Aisle C racking run");
+    assertThat(racking.verdict()).isEqualTo(VerdictKind.LOST);
+    // last finalised 2025-03-05 + 7 days (WAHR 2005 reg. 12 interval) = 2025-03-12 < today 2025-03-15
+    assertThat(racking.lastInspected()).startsWith("2025-03-05");
+    assertThat(racking.due()).isEqualTo(OverviewRow.Due.OVERDUE);
+    assertThat(racking.nextDue()).isEqualTo("since 2025-03-12");
+    assertThat(racking.interval()).isEqualTo("every 7 days");
+    OverviewRow scaffold = row(vm, "North facade scaffold");
+    assertThat(scaffold.due()).isEqualTo(OverviewRow.Due.NEVER_INSPECTED);
+    assertThat(row(vm, "north facade").verdict()).isEqualTo(VerdictKind.NOT_INSPECTED);
+  }
+
+  @Test
+  void anOpenWalkRoundShowsHowFarItHasGot() {
+    services = DemoDatabase.withDemo(dir);
+    DemoWalk.record(services, 20);
+    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    assertThat(row(vm, "north facade").verdictText()).contains("open: 20 of 50 marked");
+    assertThat(row(vm, "north facade").verdict()).isEqualTo(VerdictKind.DEPENDS_ON_UNSEEN);
+  }
+
+  @Test
+  void startingAnInspectionNeedsTheInspectorAndOpensTheWalkRound() {
+    services = DemoDatabase.withDemo(dir);
+    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    vm.selectedProperty().set(row(vm, "north facade"));
+    assertThat(vm.startInspection()).isFalse();
+    assertThat(vm.errorProperty().get()).startsWith("Inspector: empty");
+    assertThat(services.inspections().inspections(row(vm, "north facade").structureId())).isEmpty();
+    vm.inspectorNameProperty().set("  Ada Quill ");
+    assertThat(vm.startInspection()).isTrue();
+    var started = services.inspections().inspections(row(vm, "north facade").structureId());
+    assertThat(started).singleElement().satisfies(i -> assertThat(i.inspectorName()).isEqualTo("Ada Quill"));
+    OverviewRow facade = row(vm, "north facade");
+    assertThat(opened).containsExactly(
+        ScreenId.WALK + " " + new Selection(facade.structureId(), facade.planeId(), started.get(0).id()));
+  }
+}

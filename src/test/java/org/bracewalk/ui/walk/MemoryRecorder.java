@@ -1,0 +1,33 @@
+package org.bracewalk.ui.walk;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.bracewalk.core.model.PanelRef;
+
+/** Keeps every record in a list, as an append-only log would; can be told to fail. */
+final class MemoryRecorder implements MarkRecorder {
+  record Row(long id, PanelRef panel, Mark mark, Long supersedes, String reason) {}
+
+  final List<Row> rows = new ArrayList<>();
+  boolean failNext;
+
+  @Override
+  public RecordedMark record(PanelRef panel, Mark mark) {
+    return add(panel, mark, null, null);
+  }
+
+  @Override
+  public RecordedMark correct(RecordedMark earlier, Mark replacement, String reason) {
+    return add(earlier.panel(), replacement, earlier.id(), reason);
+  }
+
+  private RecordedMark add(PanelRef panel, Mark mark, Long supersedes, String reason) {
+    if (failNext) {
+      failNext = false;
+      throw new IllegalStateException("disk full");
+    }
+    long id = rows.size() + 1;
+    rows.add(new Row(id, panel, mark, supersedes, reason));
+    return new RecordedMark(id, panel, mark);
+  }
+}

@@ -1,0 +1,74 @@
+package org.bracewalk.ui.walk;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.List;
+import java.util.Map;
+import javafx.scene.Scene;
+import javafx.scene.input.KeyCode;
+import javafx.stage.Stage;
+import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.Support;
+import org.bracewalk.ui.Stylesheet;
+import org.bracewalk.ui.common.FakeDialogs;
+import org.bracewalk.ui.common.VerdictKind;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** The walk-round screen driven by keys alone, headless. */
+@ExtendWith(ApplicationExtension.class)
+class WalkViewFxTest {
+  private final MemoryRecorder recorder = new MemoryRecorder();
+  private WalkViewModel vm;
+
+  @Start
+  void start(Stage stage) {
+    PlaneDesign design =
+        PlaneDesign.of(
+            PlaneGrid.uniform(2, 2, Support.PINNED_BASE),
+            Map.of(PanelRef.of(1, 1), Brace.rigid(Diagonal.RISING), PanelRef.of(2, 2), Brace.rigid(Diagonal.FALLING)));
+    vm = new WalkViewModel(design, "Key test", List.of(), recorder, PlaneAnalyzer.standard(), new FakeDialogs(), false, false);
+    WalkView view = new WalkView(vm);
+    Scene scene = new Scene(view, 1280, 800);
+    Stylesheet.apply(scene);
+    stage.setScene(scene);
+    stage.show();
+    view.focusPlane();
+  }
+
+  @Test
+  void keysRecordEachPanelAndTheLastMissingBraceTurnsTheVerdict(FxRobot robot) {
+    robot.type(KeyCode.S); // 1,1 sound
+    robot.type(KeyCode.S); // 2,1 sound (no design brace)
+    robot.type(KeyCode.M); // 2,2 missing: lift 2 has no brace left
+    WaitForAsyncUtils.waitForFxEvents();
+    assertThat(recorder.rows).extracting(MemoryRecorder.Row::panel)
+        .containsExactly(PanelRef.of(1, 1), PanelRef.of(2, 1), PanelRef.of(2, 2));
+    assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.LOST);
+    assertThat(robot.lookup("#walk-alarm-banner").query().isVisible()).isTrue();
+    assertThat(robot.lookup("#walk-alarm").queryLabeled().getText()).contains("Keep people and loads off lift 2");
+    assertThat(robot.lookup("#walk-progress").queryLabeled().getText()).isEqualTo("3 of 4 panels");
+    robot.type(KeyCode.BACK_SPACE);
+    WaitForAsyncUtils.waitForFxEvents();
+    assertThat(recorder.rows).hasSize(4);
+    assertThat(recorder.rows.get(3).mark().state()).isEqualTo(PanelState.NOT_INSPECTED);
+    assertThat(robot.lookup("#walk-alarm-banner").query().isVisible()).isFalse();
+  }
+
+  @Test
+  void aDigitRecordsTheSameStateAsItsLetter(FxRobot robot) {
+    robot.type(KeyCode.DIGIT4);
+    WaitForAsyncUtils.waitForFxEvents();
+    assertThat(recorder.rows).singleElement().extracting(r -> r.mark().state()).isEqualTo(PanelState.MISSING);
+  }
+}

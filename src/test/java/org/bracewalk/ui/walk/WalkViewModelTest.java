@@ -1,0 +1,232 @@
+package org.bracewalk.ui.walk;
+
+import org.bracewalk.core.model.DefectType;
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.Support;
+import org.bracewalk.ui.common.FakeDialogs;
+import org.bracewalk.ui.common.VerdictKind;
+import org.junit.jupiter.api.Test;
+
+class WalkViewModelTest {
+  // one rigid brace per lift on a pinned base: rigid, and every brace critical
+  private final PlaneDesign design =
+      PlaneDesign.of(
+          PlaneGrid.uniform(3, 3, Support.PINNED_BASE),
+          Map.of(
+              PanelRef.of(1, 1), Brace.rigid(Diagonal.RISING),
+              PanelRef.of(2, 2), Brace.rigid(Diagonal.FALLING),
+              PanelRef.of(3, 3), Brace.rigid(Diagonal.RISING)));
+  private final MemoryRecorder recorder = new MemoryRecorder();
+  private final FakeDialogs dialogs = new FakeDialogs();
+
+  private WalkViewModel walk(List<RecordedMark> existing, boolean readOnly) {
+    return new WalkViewModel(
+        design, "Test plane", existing, recorder, PlaneAnalyzer.standard(), dialogs, false, readOnly);
+  }
+
+  private static void markAll(WalkViewModel vm, PanelState state, int times) {
+    for (int k = 0; k < times; k++) {
+      assertThat(vm.mark(state)).isTrue();
+    }
+  }
+
+  @Test
+  void aMarkIsCommittedAndTheCursorMovesOnInWalkOrder() {
+    WalkViewModel vm = walk(List.of(), false);
+    assertThat(vm.cursor()).isEqualTo(PanelRef.of(1, 1));
+    vm.mark(PanelState.SOUND);
+    assertThat(recorder.rows).hasSize(1);
+    assertThat(recorder.rows.get(0).panel()).isEqualTo(PanelRef.of(1, 1));
+    assertThat(recorder.rows.get(0).mark().state()).isEqualTo(PanelState.SOUND);
+    assertThat(vm.cursor()).isEqualTo(PanelRef.of(2, 1));
+    assertThat(vm.progressTextProperty().get()).isEqualTo("1 of 9 panels");
+  }
+
+  @Test
+  void whilePanelsRemainUnseenTheVerdictSaysItDependsOnThem() {
+    WalkViewModel vm = walk(List.of(), false);
+    assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.DEPENDS_ON_UNSEEN);
+    markAll(vm, PanelState.SOUND, 9);
+    assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.HOLDS);
+    assertThat(vm.verdict().detail()).contains("critical");
+    assertThat(vm.alarmProperty().get()).isEmpty();
+  }
+
+  @Test
+  void markingACriticalBraceMissingAnnouncesLostRigidityNamingWhereToKeepPeopleOff() {
+    WalkViewModel vm = walk(List.of(), false);
+    vm.select(PanelRef.of(2, 2));
+    vm.mark(PanelState.MISSING);
+    assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.LOST);
+    // lift 2 shears; lift 3 above it is carried: keep off lifts 2-3
+    assertThat(vm.alarmProperty().get())
+        .contains("Keep people and loads off lifts 2, 3, all bays")
+        .contains("competent person");
+    assertThat(vm.pictureProperty().get().sway().shearing())
+        .containsExactly(PanelRef.of(2, 1), PanelRef.of(2, 2), PanelRef.of(2, 3));
+  }
+
+  @Test
+  void undoRecordsACorrectionAndNeverDeletes() {
+    WalkViewModel vm = walk(List.of(), false);
+    vm.select(PanelRef.of(2, 2));
+    vm.mark(PanelState.MISSING);
+    assertThat(vm.undo()).isTrue();
+    assertThat(recorder.rows).hasSize(2);
+    MemoryRecorder.Row correction = recorder.rows.get(1);
+    assertThat(correction.supersedes()).isEqualTo(1L);
+    assertThat(correction.mark().state()).isEqualTo(PanelState.NOT_INSPECTED);
+    assertThat(correction.reason()).isEqualTo(WalkViewModel.UNDO_REASON);
+    assertThat(vm.cursor()).isEqualTo(PanelRef.of(2, 2));
+    assertThat(vm.verdict().kind()).isNotEqualTo(VerdictKind.LOST);
+    assertThat(vm.alarmProperty().get()).isEmpty();
+    assertThat(vm.progressTextProperty().get()).isEqualTo("0 of 9 panels");
+  }
+
+  @Test
+  void undoAfterARemarkRestoresTheEarlierMark() {
+    WalkViewModel vm = walk(List.of(), false);
+    vm.mark(PanelState.SOUND);
+    vm.select(PanelRef.of(1, 1));
+    vm.mark(PanelState.MISSING);
+    assertThat(recorder.rows.get(1).supersedes()).isEqualTo(1L);
+    assertThat(recorder.rows.get(1).reason()).isEqualTo(WalkViewModel.REMARK_REASON);
+    vm.undo();
+    assertThat(recorder.rows.get(2).mark().state()).isEqualTo(PanelState.SOUND);
+    assertThat(recorder.rows.get(2).supersedes()).isEqualTo(2L);
+  }
+
+  @Test
+  void aBadBowMeasurementRecordsNothingAndNamesTheField() {
+    WalkViewModel vm = walk(List.of(), false);
+    vm.bowMmProperty().set("12a");
+    assertThat(vm.mark(PanelState.DAMAGED_EFFECTIVE)).isFalse();
+    assertThat(recorder.rows).isEmpty();
+    assertThat(vm.errorProperty().get()).startsWith("Bow: '12a' is not a number");
+    assertThat(vm.cursor()).isEqualTo(PanelRef.of(1, 1));
+    vm.bowMmProperty().set("8");
+    vm.defectProperty().set(DefectType.BENT);
+    vm.noteProperty().set("near the base plate");
+    assertThat(vm.mark(PanelState.DAMAGED_EFFECTIVE)).isTrue();
+    Mark m = recorder.rows.get(0).mark();
+    assertThat(m.bowMm()).isEqualTo(8.0);
+    assertThat(m.gaugeLengthMm()).isEqualTo(1000);
+    assertThat(m.defect()).isEqualTo(DefectType.BENT);
+    assertThat(m.note()).isEqualTo("near the base plate");
+    assertThat(vm.bowMmProperty().get()).isEmpty();
+  }
+
+  @Test
+  void aFailedCommitChangesNothingAndSaysSo() {
+    WalkViewModel vm = walk(List.of(), false);
+    recorder.failNext = true;
+    assertThat(vm.mark(PanelState.MISSING)).isFalse();
+    assertThat(vm.cursor()).isEqualTo(PanelRef.of(1, 1));
+    assertThat(vm.findings()).isEmpty();
+    assertThat(dialogs.errors).singleElement().asString().contains("lift 1, bay 1").contains("disk full");
+  }
+
+  @Test
+  void aFinalisedInspectionRefusesMarks() {
+    WalkViewModel vm = walk(List.of(), true);
+    assertThat(vm.mark(PanelState.SOUND)).isFalse();
+    assertThat(recorder.rows).isEmpty();
+    assertThat(vm.errorProperty().get()).contains("read-only");
+  }
+
+  @Test
+  void anExtraMemberIsRecordedOnlyWhereTheDesignHasNone() {
+    WalkViewModel vm = walk(List.of(), false);
+    assertThat(vm.mark(PanelState.EXTRA)).isFalse(); // 1,1 has a design brace
+    assertThat(vm.errorProperty().get()).contains("lift 1, bay 1");
+    vm.select(PanelRef.of(1, 2));
+    vm.memberSeenProperty().set(Diagonal.FALLING);
+    assertThat(vm.mark(PanelState.EXTRA)).isTrue();
+    assertThat(recorder.rows.get(0).mark().memberFound()).isEqualTo(Brace.rigid(Diagonal.FALLING));
+    assertThat(vm.memberSeenProperty().get()).isNull();
+  }
+
+  @Test
+  void anExtraBraceCanStandInForAMissingOne() {
+    WalkViewModel vm = walk(List.of(), false);
+    markAll(vm, PanelState.SOUND, 4); // up bay 1, then 3,2
+    vm.select(PanelRef.of(2, 2));
+    vm.mark(PanelState.MISSING);
+    assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.LOST);
+    vm.select(PanelRef.of(2, 1));
+    vm.mark(PanelState.EXTRA);
+    assertThat(vm.verdict().kind()).isNotEqualTo(VerdictKind.LOST);
+  }
+
+  @Test
+  void photosChosenAreAttachedToTheNextMark() {
+    WalkViewModel vm = walk(List.of(), false);
+    dialogs.photoAnswers.push(List.of(Path.of("/photos/img1.jpg"), Path.of("/photos/img2.jpg")));
+    vm.addPhotos();
+    assertThat(vm.photos()).hasSize(2);
+    vm.mark(PanelState.DAMAGED_EFFECTIVE);
+    assertThat(recorder.rows.get(0).mark().photos()).hasSize(2);
+    assertThat(vm.photos()).isEmpty();
+  }
+
+  @Test
+  void resumingStartsAtTheFirstUnmarkedPanelAndCountsEarlierMarks() {
+    List<RecordedMark> existing =
+        List.of(
+            new RecordedMark(7, PanelRef.of(1, 1), Mark.of(PanelState.SOUND)),
+            new RecordedMark(8, PanelRef.of(2, 1), Mark.of(PanelState.SOUND)));
+    WalkViewModel vm = walk(existing, false);
+    assertThat(vm.cursor()).isEqualTo(PanelRef.of(3, 1));
+    assertThat(vm.doneProperty().get()).isEqualTo(2);
+    vm.select(PanelRef.of(1, 1));
+    vm.mark(PanelState.MISSING);
+    assertThat(recorder.rows.get(0).supersedes()).isEqualTo(7L);
+  }
+
+  @Test
+  void theMembersKeptPanelByPanelAreThoseTheModelDerivesFromTheFindings() {
+    // seeded random walks: the view model's incremental members must equal AsBuiltPlane's
+    java.util.Random rnd = new java.util.Random(20261201L);
+    PanelState[] states = {
+      PanelState.SOUND, PanelState.DAMAGED_EFFECTIVE, PanelState.DAMAGED_INEFFECTIVE,
+      PanelState.MISSING, PanelState.EXTRA, PanelState.NOT_REACHABLE
+    };
+    for (int round = 0; round < 20; round++) {
+      WalkViewModel vm = walk(List.of(), false);
+      for (int k = 0; k < 15; k++) {
+        vm.select(PanelRef.of(1 + rnd.nextInt(3), 1 + rnd.nextInt(3)));
+        PanelState st = states[rnd.nextInt(states.length)];
+        if (rnd.nextInt(4) == 0 || st == PanelState.EXTRA) {
+          vm.memberSeenProperty().set(Diagonal.values()[rnd.nextInt(3)]);
+        }
+        vm.mark(st);
+        if (rnd.nextInt(5) == 0) {
+          vm.undo();
+        }
+        vm.memberSeenProperty().set(null);
+        assertThat(vm.conservativeMembers())
+            .isEqualTo(org.bracewalk.core.model.AsBuiltPlane.fromFindings(design, vm.findings()).members());
+      }
+    }
+  }
+
+  @Test
+  void theCursorStopsAtTheEdges() {
+    WalkViewModel vm = walk(List.of(), false);
+    vm.move(-1, -1);
+    assertThat(vm.cursor()).isEqualTo(PanelRef.of(1, 1));
+    vm.move(5, 5);
+    assertThat(vm.cursor()).isEqualTo(PanelRef.of(3, 3));
+  }
+}
