@@ -3,22 +3,13 @@ package org.bracewalk.boot;
 import java.util.Map;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.ui.findings.ReportIssuer;
+import org.bracewalk.ui.findings.ServiceReportIssuer;
 
-/** Builds the app's report issuer over the report service. */
+/** Builds the app's report issuer over the report service, with the templates the environment names. */
 final class ReportIssuers {
   private ReportIssuers() {}
 
   static ReportIssuer over(AppContext context, AppServices services, Map<String, String> env) {
-    return new ReportIssuer() {
-      @Override
-      public String issueReport(long inspectionId, java.nio.file.Path out, java.util.function.Consumer<Progress> progress) {
-        throw new IllegalStateException("the report service is not part of this build yet");
-      }
-
-      @Override
-      public String issueRepairOrder(long inspectionId, java.nio.file.Path out, java.util.function.Consumer<Progress> progress) {
-        throw new IllegalStateException("the report service is not part of this build yet");
-      }
-    };
+    return new ServiceReportIssuer(context.reportFactory(env).over(services));
   }
 }

@@ -70,7 +70,8 @@ public final class DemoWalk {
     PlaneRecord facade = facade(s);
     Inspection insp =
         s.inspections().start(st.id(),
-            NewInspection.of("Sam Okafor", "Scaffold inspector, Brackwater Access Ltd", InspectionReason.AFTER_IMPACT));
+            new NewInspection("Sam Okafor", "Scaffold inspector, Brackwater Access Ltd", "Sam Okafor", "day shift",
+                null, InspectionReason.AFTER_IMPACT, null, null));
     List<PanelRef> order = WalkOrder.BAYS_UP_AND_DOWN.sequence(facade.grid());
     for (int k = 0; k < Math.min(panels, order.size()); k++) {
       PanelRef p = order.get(k);

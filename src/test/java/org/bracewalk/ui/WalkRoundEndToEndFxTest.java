@@ -26,7 +26,10 @@ import org.bracewalk.core.port.InspectionFinalisedException;
 import org.bracewalk.store.Database;
 import org.bracewalk.ui.common.FakeDialogs;
 import org.bracewalk.ui.common.ScreenId;
+import org.bracewalk.ui.findings.ServiceReportIssuer;
 import org.bracewalk.ui.walk.WalkOrder;
+import org.bracewalk.boot.AppContext;
+import java.util.Map;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -54,7 +57,7 @@ class WalkRoundEndToEndFxTest {
   void start(Stage stage) {
     services = AppServices.over(Database.open(dir.resolve("walk.db")), Clock.systemUTC(), PlaneAnalyzer.standard());
     BracewalkApp app = new BracewalkApp(services, PlaneAnalyzer.standard(), Clock.systemUTC(), background,
-        TestReports.issuer(services));
+        new ServiceReportIssuer(AppContext.standard().reportFactory(Map.of()).over(services)));
     window = app.show(stage, dialogs);
   }
 
@@ -90,6 +93,12 @@ class WalkRoundEndToEndFxTest {
     assertThat(text(robot, "#sites-selection")).contains("Plane 'north facade'");
     robot.type(KeyCode.ENTER); // no open inspection: to the inspector field
     robot.write("Rowan Test");
+    robot.type(KeyCode.TAB, KeyCode.TAB); // past the reason to the position
+    robot.write("Scaffold inspector, Test & Sons");
+    robot.type(KeyCode.TAB);
+    robot.write("Rowan Test");
+    robot.type(KeyCode.TAB);
+    robot.write("day shift");
     ctrl(robot, KeyCode.ENTER);
     assertThat(window.currentScreen()).isEqualTo(ScreenId.WALK);
     long inspectionId = window.selection().inspectionId();
@@ -131,9 +140,12 @@ class WalkRoundEndToEndFxTest {
     Path pdf = dir.resolve("report.pdf");
     dialogs.saveAnswers.push(Optional.of(pdf));
     robot.type(KeyCode.R);
-    WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> text(robot, "#findings-status").contains("report"));
-    assertThat(Files.size(pdf)).isPositive();
+    WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS,
+        () -> text(robot, "#findings-status").contains("Issued") || !text(robot, "#findings-error").isEmpty());
     assertThat(text(robot, "#findings-error")).isEmpty();
+    assertThat(text(robot, "#findings-status")).startsWith("Issued the inspection report").doesNotContain("DRAFT");
+    assertThat(new String(Files.readAllBytes(pdf), 0, 5, java.nio.charset.StandardCharsets.US_ASCII)).isEqualTo("%PDF-");
+    assertThat(services.store().issuedReports().ofInspection(inspectionId)).hasSize(1);
 
     // every mark is in the database, in the order made, with nothing else
     List<Observation> rows = services.inspections().observations(inspectionId);
@@ -146,6 +158,7 @@ class WalkRoundEndToEndFxTest {
     }
     Inspection done = services.inspections().inspection(inspectionId);
     assertThat(done.isFinalised()).isTrue();
+    assertThat(done.inspectorPosition()).isEqualTo("Scaffold inspector, Test & Sons");
     assertThatThrownBy(() -> services.inspections().recordObservation(inspectionId,
         NewObservation.of(facade.id(), PanelRef.of(1, 1), PanelState.SOUND, "x")))
         .isInstanceOf(InspectionFinalisedException.class);

@@ -184,21 +184,30 @@ public final class SitesView extends BorderPane {
     });
     TextField competent = new TextField();
     competent.textProperty().bindBidirectional(vm.competentPersonProperty());
-    competent.setPromptText("if the site needs one");
+    competent.setPromptText("who is the competent person");
+    competent.setId("start-competent");
     TextField shift = new TextField();
     shift.textProperty().bindBidirectional(vm.shiftProperty());
-    shift.setPromptText("shift");
+    shift.setPromptText("e.g. day, before work");
+    shift.setId("start-shift");
+    TextField storage = new TextField();
+    storage.setId("start-storage");
+    storage.textProperty().bindBidirectional(vm.storageSafetyPersonProperty());
+    storage.setPromptText("racking: person responsible for storage equipment safety");
     GridPane form = new GridPane();
     form.setHgap(8);
     form.setVgap(6);
     form.addRow(0, mnemonic("_Inspector", inspector), inspector, mnemonic("_Reason", reason), reason);
     form.addRow(1, mnemonic("_Position", position), position);
-    form.addRow(2, mnemonic("_Competent person (US)", competent), competent, mnemonic("S_hift (US)", shift), shift);
+    form.addRow(2, mnemonic("_Competent person", competent), competent, mnemonic("S_hift", shift), shift);
+    form.add(mnemonic("S_torage safety", storage), 0, 3);
+    form.add(storage, 1, 3, 3, 1);
     GridPane.setHgrow(inspector, Priority.ALWAYS);
     Button start = wide("Start inspection now (Ctrl+Enter)", vm::startInspection);
     start.setId("start-inspection");
     VBox startBox = Widgets.box("New inspection of the selected structure", form, start,
-        Widgets.hint("Every mark you then make is saved the moment you make it."));
+        Widgets.hint("All fields go on the report and cannot be changed later (storage safety: racking only)."
+            + " Every mark you then make is saved the moment you make it."));
     form.getColumnConstraints().addAll(new javafx.scene.layout.ColumnConstraints(),
         new javafx.scene.layout.ColumnConstraints(200, 300, Double.MAX_VALUE));
     javafx.scene.layout.HBox.setHgrow(open, Priority.ALWAYS);

@@ -59,6 +59,7 @@ public final class SitesViewModel {
   private final StringProperty inspectorPosition = new SimpleStringProperty(this, "inspectorPosition", "");
   private final StringProperty competentPerson = new SimpleStringProperty(this, "competentPerson", "");
   private final StringProperty shift = new SimpleStringProperty(this, "shift", "");
+  private final StringProperty storageSafetyPerson = new SimpleStringProperty(this, "storageSafetyPerson", "");
   private final ObjectProperty<InspectionReason> reason =
       new SimpleObjectProperty<>(this, "reason", InspectionReason.ROUTINE);
 
@@ -220,9 +221,30 @@ public final class SitesViewModel {
       error.set("Select the structure (or one of its planes) to inspect first.");
       return false;
     }
-    String name = inspectorName.get() == null ? "" : inspectorName.get().strip();
+    String name = strip(inspectorName.get());
+    boolean racking = services.sites().structure(r.structureId()).kind() == StructureKind.RACKING_RUN;
+    // the report needs every one of these, and an inspection cannot be changed once started
+    List<String> missing = new ArrayList<>();
     if (name.isEmpty()) {
-      error.set("Inspector: empty. Type the name of the person making the inspection (it goes on the report).");
+      missing.add("Inspector");
+    }
+    if (strip(inspectorPosition.get()).isEmpty()) {
+      missing.add("Position");
+    }
+    if (strip(competentPerson.get()).isEmpty()) {
+      missing.add("Competent person");
+    }
+    if (strip(shift.get()).isEmpty()) {
+      missing.add("Shift");
+    }
+    if (racking && strip(storageSafetyPerson.get()).isEmpty()) {
+      missing.add("Storage safety person (racking)");
+    }
+    if (!missing.isEmpty()) {
+      error.set(String.join(", ", missing) + (missing.size() == 1 ? ": empty." : ": empty.")
+          + " The report needs " + (missing.size() == 1 ? "it" : "each of them")
+          + ", and an inspection cannot be changed once started: fill "
+          + (missing.size() == 1 ? "it" : "them") + " in, then start.");
       return false;
     }
     if (r.openInspectionId() > 0
@@ -234,7 +256,8 @@ public final class SitesViewModel {
     Inspection started;
     try {
       started = services.inspections().start(r.structureId(),
-          new NewInspection(name, inspectorPosition.get(), competentPerson.get(), shift.get(), null, reason.get(), null, null));
+          new NewInspection(name, strip(inspectorPosition.get()), strip(competentPerson.get()), strip(shift.get()),
+              racking ? strip(storageSafetyPerson.get()) : null, reason.get(), null, null));
     } catch (RuntimeException e) {
       error.set("Not started: " + e.getMessage());
       return false;
@@ -243,6 +266,10 @@ public final class SitesViewModel {
     long plane = r.planeId() > 0 ? r.planeId() : firstPlane(r.structureId());
     navigator.open(ScreenId.WALK, new Selection(r.structureId(), plane, started.id()));
     return true;
+  }
+
+  private static String strip(String s) {
+    return s == null ? "" : s.strip();
   }
 
   private long firstPlane(long structureId) {
@@ -318,6 +345,10 @@ public final class SitesViewModel {
 
   public StringProperty shiftProperty() {
     return shift;
+  }
+
+  public StringProperty storageSafetyPersonProperty() {
+    return storageSafetyPerson;
   }
 
   public ObjectProperty<InspectionReason> reasonProperty() {

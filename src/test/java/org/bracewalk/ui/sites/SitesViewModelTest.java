@@ -73,14 +73,32 @@ class SitesViewModelTest {
   }
 
   @Test
+  void rackingNeedsThePersonResponsibleForStorageSafety() {
+    services = DemoDatabase.withDemo(dir);
+    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    vm.selectedProperty().set(row(vm, "frame 1"));
+    vm.inspectorNameProperty().set("Ada Quill");
+    vm.inspectorPositionProperty().set("Racking inspector");
+    vm.competentPersonProperty().set("Ada Quill");
+    vm.shiftProperty().set("day");
+    assertThat(vm.startInspection()).isFalse();
+    assertThat(vm.errorProperty().get()).startsWith("Storage safety person (racking): empty.");
+  }
+
+  @Test
   void startingAnInspectionNeedsTheInspectorAndOpensTheWalkRound() {
     services = DemoDatabase.withDemo(dir);
     SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
     vm.selectedProperty().set(row(vm, "north facade"));
     assertThat(vm.startInspection()).isFalse();
-    assertThat(vm.errorProperty().get()).startsWith("Inspector: empty");
-    assertThat(services.inspections().inspections(row(vm, "north facade").structureId())).isEmpty();
+    assertThat(vm.errorProperty().get()).startsWith("Inspector, Position, Competent person, Shift: empty.");
     vm.inspectorNameProperty().set("  Ada Quill ");
+    vm.inspectorPositionProperty().set("Scaffold inspector");
+    vm.competentPersonProperty().set("Ada Quill");
+    assertThat(vm.startInspection()).isFalse();
+    assertThat(vm.errorProperty().get()).startsWith("Shift: empty. The report needs it");
+    assertThat(services.inspections().inspections(row(vm, "north facade").structureId())).isEmpty();
+    vm.shiftProperty().set("day");
     assertThat(vm.startInspection()).isTrue();
     var started = services.inspections().inspections(row(vm, "north facade").structureId());
     assertThat(started).singleElement().satisfies(i -> assertThat(i.inspectorName()).isEqualTo("Ada Quill"));
