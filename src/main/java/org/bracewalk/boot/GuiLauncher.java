@@ -82,7 +82,16 @@ final class GuiLauncher {
     CountDownLatch closed = new CountDownLatch(1);
     CompletableFuture<Void> started = new CompletableFuture<>();
     Platform.setImplicitExit(true);
-    Platform.startup(() -> started.complete(null));
+    try {
+      Platform.startup(() -> started.complete(null));
+    } catch (UnsupportedOperationException | IllegalStateException e) {
+      err.println("bracewalk: cannot open a window here (" + e.getMessage() + ").");
+      err.println("Run it on a desktop session, or use the command line: bracewalk --help."
+          + " 'bracewalk snapshot --list' draws the screens without a display.");
+      err.flush();
+      opening.thenAccept(AppServices::close);
+      return 2;
+    }
     started.join();
     mark(timing, err, "toolkit started");
     ExecutorService background = Executors.newSingleThreadExecutor(r -> {
@@ -111,6 +120,8 @@ final class GuiLauncher {
     }
     mark(timing, err, "database open");
     ReportIssuer issuer = ReportIssuers.over(context, services, env);
+    app.prepare(services, issuer); // reads the Sites rows here, while the FX thread styles the window
+    mark(timing, err, "Sites rows read");
     Platform.runLater(() -> {
       app.attach(services, issuer);
       mark(timing, err, "Sites screen built");

@@ -33,7 +33,45 @@ public final class BracewalkApp {
   private final Executor background;
   private final LateScreens screens = new LateScreens();
   private MainWindow window;
-  private DialogService dialogs;
+  private volatile DialogService dialogs;
+  /** Forwards to the window's dialogs, which exist only once the window does. */
+  private final DialogService lateDialogs =
+      new DialogService() {
+        private DialogService d() {
+          DialogService d = dialogs;
+          return d != null ? d : new QuietDialogs();
+        }
+
+        @Override
+        public boolean confirm(String title, String message, String confirmLabel) {
+          return d().confirm(title, message, confirmLabel);
+        }
+
+        @Override
+        public void inform(String title, String message) {
+          d().inform(title, message);
+        }
+
+        @Override
+        public void showError(String title, String message) {
+          d().showError(title, message);
+        }
+
+        @Override
+        public java.util.List<java.nio.file.Path> choosePhotos(String title, java.nio.file.Path folder) {
+          return d().choosePhotos(title, folder);
+        }
+
+        @Override
+        public java.util.Optional<String> askText(String title, String message, String initial) {
+          return d().askText(title, message, initial);
+        }
+
+        @Override
+        public java.util.Optional<java.nio.file.Path> chooseSaveFile(String title, String suggestedName) {
+          return d().chooseSaveFile(title, suggestedName);
+        }
+      };
 
   public BracewalkApp(PlaneAnalyzer analyzer, Clock clock, Executor background) {
     this.analyzer = analyzer;
@@ -85,10 +123,17 @@ public final class BracewalkApp {
     stage.setMinHeight(Math.min(700, bounds.getHeight()));
     Label what = new Label("Opening " + location + " \u2026");
     what.getStyleClass().add("screen-title");
-    TableView<String> warm = new TableView<>();
-    warm.setVisible(false);
+    // styled and laid out, but not seen: the table's first styling is then paid for here
+    TableView<String> warm = new TableView<>(javafx.collections.FXCollections.observableArrayList("a", "b"));
+    javafx.scene.control.TableColumn<String, String> col = new javafx.scene.control.TableColumn<>("warm");
+    col.setCellValueFactory(c -> new javafx.beans.property.ReadOnlyStringWrapper(c.getValue()));
+    warm.getColumns().add(col);
+    warm.setOpacity(0);
+    warm.setMouseTransparent(true);
+    warm.setFocusTraversable(false);
+    warm.setMaxSize(200, 120);
     Canvas warmCanvas = new Canvas(10, 10);
-    warmCanvas.setVisible(false);
+    warmCanvas.setOpacity(0);
     VBox box = new VBox(14, what, new ProgressIndicator());
     box.getStyleClass().add("empty-offer");
     window.showPlaceholder(new StackPane(warm, warmCanvas, box), "opening the database");
@@ -98,8 +143,22 @@ public final class BracewalkApp {
 
   /** The database is open: builds the screens over it and shows the Sites screen. FX thread. */
   public void attach(AppServices services, ReportIssuer issuer) {
-    screens.delegate = new AppScreens(services, analyzer, clock, dialogs, new FxExecutor(), background, issuer);
+    prepare(services, issuer);
     window.open(ScreenId.OVERVIEW, Selection.NONE);
+  }
+
+  /**
+   * Builds the screens over the open database and reads the Sites screen's rows, on the calling
+   * thread; {@link #attach} then only shows them. Lets the launcher read the database while the
+   * window is still being styled on the FX thread.
+   */
+  public synchronized void prepare(AppServices services, ReportIssuer issuer) {
+    if (screens.delegate != null) {
+      return;
+    }
+    AppScreens s = new AppScreens(services, analyzer, clock, lateDialogs, new FxExecutor(), background, issuer);
+    s.preloadOverview((id, sel) -> window.open(id, sel));
+    screens.delegate = s;
   }
 
   public MainWindow window() {
