@@ -14,6 +14,7 @@ import javafx.stage.Stage;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.cli.CliContext;
 import org.bracewalk.ui.BracewalkApp;
+import org.bracewalk.ui.common.FxDialogService;
 import org.bracewalk.ui.findings.ReportIssuer;
 
 /**
@@ -27,6 +28,14 @@ final class GuiLauncher {
   static final String TIMING_VARIABLE = "BRACEWALK_STARTUP_TIMING";
 
   private GuiLauncher() {}
+
+  private static void mark(boolean timing, PrintWriter err, String what) {
+    if (timing) {
+      long ms = System.currentTimeMillis() - ManagementFactory.getRuntimeMXBean().getStartTime();
+      err.println("bracewalk: " + what + " at " + ms + " ms");
+      err.flush();
+    }
+  }
 
   /**
    * The database option when {@code args} ask for the app: none at all, or only {@code --db FILE}
@@ -47,6 +56,16 @@ final class GuiLauncher {
 
   /** Opens the app on the chosen database and returns the exit status once its window closes. */
   static int run(Optional<Path> dbOption, Map<String, String> env, PrintWriter err) {
+    return run(dbOption, env, err, null);
+  }
+
+  /**
+   * As {@link #run(Optional, Map, PrintWriter)}; {@code ready}, when given, is called on the FX
+   * thread with the milliseconds since the JVM started, once the first frame of the window has been
+   * drawn (the start-up benchmark closes the window there).
+   */
+  static int run(Optional<Path> dbOption, Map<String, String> env, PrintWriter err,
+      java.util.function.BiConsumer<Stage, Long> ready) {
     AppContext context = AppContext.standard();
     CliContext cli = context.cliContext(env);
     Path db = cli.database(dbOption.orElse(null));
@@ -63,8 +82,31 @@ final class GuiLauncher {
     CountDownLatch closed = new CountDownLatch(1);
     CompletableFuture<Void> started = new CompletableFuture<>();
     Platform.setImplicitExit(true);
-    Platform.startup(() -> started.complete(null));
+    try {
+      Platform.startup(() -> started.complete(null));
+    } catch (UnsupportedOperationException | IllegalStateException e) {
+      err.println("bracewalk: cannot open a window here (" + e.getMessage() + ").");
+      err.println("Run it on a desktop session, or use the command line: bracewalk --help."
+          + " 'bracewalk snapshot --list' draws the screens without a display.");
+      err.flush();
+      opening.thenAccept(AppServices::close);
+      return 2;
+    }
     started.join();
+    mark(timing, err, "toolkit started");
+    ExecutorService background = Executors.newSingleThreadExecutor(r -> {
+      Thread t = new Thread(r, "bracewalk-documents");
+      t.setDaemon(true);
+      return t;
+    });
+    BracewalkApp app = new BracewalkApp(context.analyzer(), context.clock(), background);
+    Stage[] stage = new Stage[1];
+    Platform.runLater(() -> {
+      stage[0] = new Stage();
+      stage[0].setOnHidden(e -> closed.countDown());
+      app.showOpening(stage[0], new FxDialogService(stage[0]), db.toString());
+      mark(timing, err, "window shown, database still opening");
+    });
     AppServices services;
     try {
       services = opening.join();
@@ -76,23 +118,34 @@ final class GuiLauncher {
       Platform.exit();
       return 2;
     }
-    ExecutorService background = Executors.newSingleThreadExecutor(r -> {
-      Thread t = new Thread(r, "bracewalk-documents");
-      t.setDaemon(true);
-      return t;
-    });
+    mark(timing, err, "database open");
     ReportIssuer issuer = ReportIssuers.over(context, services, env);
+    app.prepare(services, issuer); // reads the Sites rows here, while the FX thread styles the window
+    mark(timing, err, "Sites rows read");
     Platform.runLater(() -> {
-      Stage stage = new Stage();
-      stage.setOnHidden(e -> closed.countDown());
-      new BracewalkApp(services, context.analyzer(), context.clock(), background, issuer).show(stage);
-      if (timing) {
-        // the frame after show() is the first one drawn
-        Platform.runLater(() -> {
-          long ms = System.currentTimeMillis() - ManagementFactory.getRuntimeMXBean().getStartTime();
-          err.println("bracewalk: window ready " + ms + " ms after the JVM started");
-          err.flush();
-        });
+      app.attach(services, issuer);
+      mark(timing, err, "Sites screen built");
+      if (timing || ready != null) {
+        // a pulse draws the frame; the second pulse after the screen is attached comes once it is drawn
+        new javafx.animation.AnimationTimer() {
+          private int pulses;
+
+          @Override
+          public void handle(long now) {
+            if (++pulses < 2) {
+              return;
+            }
+            stop();
+            long ms = System.currentTimeMillis() - ManagementFactory.getRuntimeMXBean().getStartTime();
+            if (timing) {
+              err.println("bracewalk: window ready " + ms + " ms after the JVM started");
+              err.flush();
+            }
+            if (ready != null) {
+              ready.accept(stage[0], ms);
+            }
+          }
+        }.start();
       }
     });
     try {

@@ -53,6 +53,7 @@ public final class AppScreens implements ScreenFactory {
   private final Executor ui;
   private final Executor background;
   private final ReportIssuer issuer;
+  private SitesViewModel preloaded;
 
   public AppScreens(
       AppServices services,
@@ -90,8 +91,17 @@ public final class AppScreens implements ScreenFactory {
     };
   }
 
+  /**
+   * Reads the Sites screen's rows now, on the calling thread (the launcher's, while the window
+   * is still being styled), for the first time the Sites screen is shown.
+   */
+  public void preloadOverview(Navigator navigator) {
+    preloaded = new SitesViewModel(services, clock, dialogs, navigator);
+  }
+
   private Screen overview(Navigator navigator, Selection selection) {
-    SitesViewModel vm = new SitesViewModel(services, clock, dialogs, navigator);
+    SitesViewModel vm = preloaded != null ? preloaded : new SitesViewModel(services, clock, dialogs, navigator);
+    preloaded = null;
     SitesView view = new SitesView(vm);
     if (selection.hasPlane()) {
       view.selectPlane(selection.planeId());

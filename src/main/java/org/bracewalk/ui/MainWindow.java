@@ -118,6 +118,15 @@ public final class MainWindow implements Navigator {
     return selection;
   }
 
+  /** Shows {@code node} in place of a screen (while the database opens); the rail is disabled. */
+  public void showPlaceholder(Node node, String where) {
+    frame.setCenter(node);
+    crumbs.setText(where);
+    for (ToggleButton b : rail.values()) {
+      b.setDisable(true);
+    }
+  }
+
   @Override
   public void open(ScreenId id, Selection newSelection) {
     selection = newSelection;

@@ -56,9 +56,9 @@ class WalkRoundEndToEndFxTest {
   @Start
   void start(Stage stage) {
     services = AppServices.over(Database.open(dir.resolve("walk.db")), Clock.systemUTC(), PlaneAnalyzer.standard());
-    BracewalkApp app = new BracewalkApp(services, PlaneAnalyzer.standard(), Clock.systemUTC(), background,
+    BracewalkApp app = new BracewalkApp(PlaneAnalyzer.standard(), Clock.systemUTC(), background);
+    window = app.show(stage, dialogs, services,
         new ServiceReportIssuer(AppContext.standard().reportFactory(Map.of()).over(services)));
-    window = app.show(stage, dialogs);
   }
 
   @AfterEach

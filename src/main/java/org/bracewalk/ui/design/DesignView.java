@@ -76,7 +76,7 @@ public final class DesignView extends BorderPane {
   private VBox side() {
     Label verdict = Widgets.text(vm.verdictTextProperty(), "verdict-headline");
     verdict.setId("design-verdict");
-    verdict.setStyle("-fx-font-size: 16px;");
+    verdict.setStyle("-fx-font-size: 1.07em;");
     Label tolerance = Widgets.text(vm.toleranceTextProperty());
     VBox verdictBox = new VBox(6, verdict, tolerance, Widgets.hint(VerdictWords.CAUTION));
     verdictBox.getStyleClass().add("verdict");

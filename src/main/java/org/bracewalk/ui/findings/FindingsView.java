@@ -108,7 +108,10 @@ public final class FindingsView extends BorderPane {
     bar.setMaxWidth(Double.MAX_VALUE);
     bar.progressProperty().bind(vm.progressProperty());
     bar.visibleProperty().bind(vm.busyProperty().or(vm.progressProperty().greaterThan(0)));
+    bar.managedProperty().bind(bar.visibleProperty());
     Label words = Widgets.text(vm.progressWordsProperty(), "hint");
+    words.visibleProperty().bind(vm.progressWordsProperty().isNotEmpty());
+    words.managedProperty().bind(words.visibleProperty());
     VBox docs = Widgets.box("Documents", report, order, bar, words,
         Widgets.hint("An open inspection gives a report marked DRAFT on every page; finalise it for the record."));
 

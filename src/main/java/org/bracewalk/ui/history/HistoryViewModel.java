@@ -49,8 +49,9 @@ public final class HistoryViewModel {
       entries.add("#" + e.inspection().id() + "  " + WHEN.format(e.inspection().startedAt().atZone(zone))
           + "  " + e.inspection().reason().label().replace('-', ' ')
           + (e.inspection().isFinalised() ? "" : " (open)")
-          + "\n" + k.symbol() + " " + k.words() + " \u00b7 " + e.changes().size()
-          + (e.changes().size() == 1 ? " change" : " changes"));
+          + "\n" + k.symbol() + " " + k.words() + " \u00b7 "
+          + (entries.isEmpty() ? "first inspection"
+              : e.changes().size() + (e.changes().size() == 1 ? " change" : " changes")));
       if (line.length() > 0) {
         line.append("  \u2192  ");
       }

@@ -45,11 +45,11 @@ public final class SitesView extends BorderPane {
     table.setId("sites-table");
     table.setItems(vm.rows());
     table.getColumns().add(column("Name", 210, this::name));
-    table.getColumns().add(column("What", 130, r -> r.level() == OverviewRow.Level.SITE ? "" : r.kind()));
-    table.getColumns().add(column("Latest verdict", 300, OverviewRow::verdictText));
-    table.getColumns().add(column("Last inspected", 165, r -> r.level() == OverviewRow.Level.STRUCTURE ? r.lastInspected() : ""));
+    table.getColumns().add(column("What", 120, r -> r.level() == OverviewRow.Level.SITE ? "" : r.kind()));
+    table.getColumns().add(column("Latest verdict", 290, OverviewRow::verdictText));
+    table.getColumns().add(column("Last inspected", 150, r -> r.level() == OverviewRow.Level.STRUCTURE ? r.lastInspected() : ""));
     TableColumn<OverviewRow, OverviewRow> due = new TableColumn<>("Next inspection due");
-    due.setPrefWidth(250);
+    due.setPrefWidth(280);
     due.setCellValueFactory(c -> new javafx.beans.property.SimpleObjectProperty<>(c.getValue()));
     due.setCellFactory(c -> new TableCell<>() {
       @Override
@@ -67,7 +67,7 @@ public final class SitesView extends BorderPane {
       }
     });
     table.getColumns().add(due);
-    table.getColumns().add(column("Interval", 110, OverviewRow::interval));
+    table.getColumns().add(column("Interval", 90, OverviewRow::interval));
     table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY);
     table.setRowFactory(t -> new TableRow<>() {
       @Override
@@ -215,6 +215,8 @@ public final class SitesView extends BorderPane {
     open.setPrefWidth(420);
     startBox.setPrefWidth(560);
     javafx.scene.layout.HBox side = new javafx.scene.layout.HBox(10, open, startBox);
+    side.setMaxHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
+    side.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
     return side;
   }
 

@@ -125,8 +125,8 @@ public final class SitesViewModel {
         }
         VerdictKind sv = worst == null ? VerdictKind.NOT_INSPECTED : worst;
         out.set(structureIndex, new OverviewRow(OverviewRow.Level.STRUCTURE, st.name(), kindWords(st.kind()), sv,
-            sv.symbol() + " " + sv.words() + (open.isPresent() ? " \u2014 inspection " + open.get().id() + " open" : ""),
-            last, dueText, dueState, "every " + st.inspectionIntervalDays() + " days", st.id(), 0,
+            sv.symbol() + " " + sv.words() + (open.isPresent() ? " \u00b7 #" + open.get().id() + " open" : ""),
+            last, dueText, dueState, st.inspectionIntervalDays() + " days", st.id(), 0,
             open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
       }
     }

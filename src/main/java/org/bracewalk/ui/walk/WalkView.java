@@ -329,6 +329,7 @@ public final class WalkView extends BorderPane {
             KeyHelp.of("/  \\  X  .", "member seen: rising, falling, cross, follows the state"),
             KeyHelp.of("T", "member seen is tension-only / rigid"),
             KeyHelp.of("Alt+ D B O", "defect, bow, note fields; Enter or Esc back to the plane"),
-            KeyHelp.of("F", "attach photos from a file or camera folder")));
+            KeyHelp.of("F", "attach photos from a file or camera folder"),
+            KeyHelp.of("Ctrl+P", "another plane of the same inspection")));
   }
 }

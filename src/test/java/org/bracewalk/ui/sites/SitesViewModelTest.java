@@ -57,7 +57,7 @@ class SitesViewModelTest {
     assertThat(racking.lastInspected()).startsWith("2025-03-05");
     assertThat(racking.due()).isEqualTo(OverviewRow.Due.OVERDUE);
     assertThat(racking.nextDue()).isEqualTo("since 2025-03-12");
-    assertThat(racking.interval()).isEqualTo("every 7 days");
+    assertThat(racking.interval()).isEqualTo("7 days");
     OverviewRow scaffold = row(vm, "North facade scaffold");
     assertThat(scaffold.due()).isEqualTo(OverviewRow.Due.NEVER_INSPECTED);
     assertThat(row(vm, "north facade").verdict()).isEqualTo(VerdictKind.NOT_INSPECTED);
