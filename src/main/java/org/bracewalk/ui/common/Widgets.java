@@ -105,4 +105,12 @@ public final class Widgets {
     update.run();
     return box;
   }
+
+  /** A label whose {@code _} letter is an Alt+letter shortcut that moves focus to {@code target}. */
+  public static Label mnemonic(String text, Node target) {
+    Label l = new Label(text);
+    l.setMnemonicParsing(true);
+    l.setLabelFor(target);
+    return l;
+  }
 }

@@ -120,12 +120,12 @@ public final class DesignView extends BorderPane {
     GridPane grid = new GridPane();
     grid.setHgap(8);
     grid.setVgap(6);
-    grid.addRow(0, mnemonic("_Lifts", lifts), lifts, mnemonic("B_ays", bays), bays);
-    grid.add(mnemonic("_Widths m", widths), 0, 1);
+    grid.addRow(0, Widgets.mnemonic("_Lifts", lifts), lifts, Widgets.mnemonic("B_ays", bays), bays);
+    grid.add(Widgets.mnemonic("_Widths m", widths), 0, 1);
     grid.add(widths, 1, 1, 3, 1);
-    grid.add(mnemonic("_Heights m", heights), 0, 2);
+    grid.add(Widgets.mnemonic("_Heights m", heights), 0, 2);
     grid.add(heights, 1, 2, 3, 1);
-    grid.add(mnemonic("Su_pport", support), 0, 3);
+    grid.add(Widgets.mnemonic("Su_pport", support), 0, 3);
     grid.add(support, 1, 3, 3, 1);
     lifts.setPrefWidth(90);
     bays.setPrefWidth(90);
@@ -190,13 +190,6 @@ public final class DesignView extends BorderPane {
       b.setSelected(false);
     });
     return b;
-  }
-
-  private static Label mnemonic(String text, Node target) {
-    Label l = new Label(text);
-    l.setMnemonicParsing(true);
-    l.setLabelFor(target);
-    return l;
   }
 
   private void onKey(KeyEvent e) {

@@ -205,9 +205,9 @@ public final class WalkView extends BorderPane {
     GridPane details = new GridPane();
     details.setHgap(8);
     details.setVgap(6);
-    details.addRow(0, mnemonic("_Defect", defect), defect);
-    details.addRow(1, mnemonic("_Bow mm", bow), bow);
-    details.addRow(2, mnemonic("N_ote", note), note);
+    details.addRow(0, Widgets.mnemonic("_Defect", defect), defect);
+    details.addRow(1, Widgets.mnemonic("_Bow mm", bow), bow);
+    details.addRow(2, Widgets.mnemonic("N_ote", note), note);
     details.addRow(3, photos, photoCount);
     GridPane.setHgrow(defect, Priority.ALWAYS);
     GridPane.setHgrow(note, Priority.ALWAYS);
@@ -235,13 +235,6 @@ public final class WalkView extends BorderPane {
     VBox side = new VBox(10, readOnly, verdict, marks, member, detailBox, orderBox, undo);
     side.getStyleClass().add("side");
     return side;
-  }
-
-  private static Label mnemonic(String text, Node target) {
-    Label l = new Label(text);
-    l.setMnemonicParsing(true);
-    l.setLabelFor(target);
-    return l;
   }
 
   private void onKey(KeyEvent e) {
