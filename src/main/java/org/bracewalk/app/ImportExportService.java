@@ -64,7 +64,8 @@ import org.bracewalk.core.port.RecordStore;
 public final class ImportExportService {
   private final RecordStore store;
   private final Clock clock;
-  private final SiteFileWriter writer = new SiteFileWriter();
+  /** Made on first export: the JSON library is not loaded while the app starts. */
+  private SiteFileWriter writer;
   private final PanelMapParser maps = new PanelMapParser();
   private final PanelMapWriter mapWriter = new PanelMapWriter();
 
@@ -156,7 +157,13 @@ public final class ImportExportService {
 
   /** The site file of one site: everything about it, as text. */
   public String exportSite(long siteId) {
-    return writer.write(siteFile(siteId));
+    SiteFile file = siteFile(siteId);
+    synchronized (this) {
+      if (writer == null) {
+        writer = new SiteFileWriter();
+      }
+      return writer.write(file);
+    }
   }
 
   /** The content of the site file of one site. */

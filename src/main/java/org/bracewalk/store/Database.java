@@ -8,7 +8,9 @@ import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
+import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.concurrent.locks.ReentrantLock;
 import java.util.logging.Level;
@@ -121,7 +123,52 @@ public final class Database implements RecordStore {
     return ds;
   }
 
+  /**
+   * The migration scripts packed as {@code classpath:db/migration}, in the order Flyway applies
+   * them. {@code DatabaseTest} keeps this list equal to the files in {@code db-migrations/}: add a
+   * new script's name here when adding the script.
+   */
+  static final List<String> MIGRATION_SCRIPTS =
+      List.of("V1__site_records.sql", "V2__planes_never_change.sql");
+
+  /**
+   * True when the file's schema history shows exactly the packed scripts, in order, all applied
+   * successfully: then there is nothing for Flyway to do, and opening skips it (loading and
+   * configuring Flyway is about half a second of a cold start, paid while the app's window
+   * waits). Anything else (a new file, a pending or failed migration, a newer program's
+   * migration, a file that is not a database) goes through Flyway, which migrates or names the
+   * problem. Scripts are never edited once released (DEVELOPERS.md), so checksums are left to
+   * Flyway's runs.
+   */
+  static boolean schemaIsCurrent(SQLiteDataSource dataSource) {
+    try (Connection c = dataSource.getConnection(); Statement s = c.createStatement()) {
+      try (ResultSet t = s.executeQuery(
+          "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'flyway_schema_history'")) {
+        if (!t.next()) {
+          return false;
+        }
+      }
+      List<String> applied = new ArrayList<>();
+      try (ResultSet r = s.executeQuery(
+          "SELECT script, success FROM flyway_schema_history WHERE version IS NOT NULL"
+              + " ORDER BY installed_rank")) {
+        while (r.next()) {
+          if (r.getInt(2) != 1) {
+            return false;
+          }
+          applied.add(r.getString(1));
+        }
+      }
+      return applied.equals(MIGRATION_SCRIPTS);
+    } catch (SQLException e) {
+      return false; // Flyway will say what is wrong with the file
+    }
+  }
+
   private static void migrate(SQLiteDataSource dataSource, Path file) {
+    if (schemaIsCurrent(dataSource)) {
+      return;
+    }
     FLYWAY_LOG.fine(() -> "migrating " + file);
     Flyway flyway =
         Flyway.configure(Database.class.getClassLoader())

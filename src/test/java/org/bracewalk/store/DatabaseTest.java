@@ -72,6 +72,52 @@ class DatabaseTest {
   }
 
   @Test
+  void thePackedScriptListIsTheMigrationsFolderInVersionOrder() throws Exception {
+    List<String> files;
+    try (var listing = Files.list(Path.of("db-migrations"))) {
+      files = listing.map(p -> p.getFileName().toString())
+          .filter(n -> n.endsWith(".sql"))
+          .sorted(java.util.Comparator.comparingInt(
+              n -> Integer.parseInt(n.substring(1, n.indexOf("__")))))
+          .toList();
+    }
+    assertThat(Database.MIGRATION_SCRIPTS).isEqualTo(files);
+  }
+
+  @Test
+  void openingAFileAtTheCurrentSchemaSkipsFlywayAndAnOlderFileIsMigrated() throws Exception {
+    Path file = dir.resolve("old.db");
+    // a file made by a program that knew only the first script
+    org.flywaydb.core.Flyway.configure(Database.class.getClassLoader())
+        .dataSource(Database.dataSource(file))
+        .locations("classpath:db/migration")
+        .target("1")
+        .load()
+        .migrate();
+    assertThat(Database.schemaIsCurrent(Database.dataSource(file))).isFalse();
+    try (Database db = Database.open(file)) {
+      assertThat(db.integrityCheck()).isEqualTo("ok");
+    }
+    assertThat(Database.schemaIsCurrent(Database.dataSource(file))).isTrue();
+    try (Connection c = Database.dataSource(file).getConnection(); Statement s = c.createStatement()) {
+      // the second script's trigger is there: the file was migrated, not just marked
+      try (ResultSet r = s.executeQuery(
+          "SELECT count(*) FROM flyway_schema_history WHERE script = 'V2__planes_never_change.sql'")) {
+        r.next();
+        assertThat(r.getInt(1)).isEqualTo(1);
+      }
+      // a newer program's migration, or a failed one: not current, so Flyway looks at it again
+      s.executeUpdate("INSERT INTO flyway_schema_history (installed_rank, version, description, type,"
+          + " script, checksum, installed_by, execution_time, success)"
+          + " VALUES (99, '99', 'later', 'SQL', 'V99__later.sql', 0, 'test', 0, 0)");
+    }
+    assertThat(Database.schemaIsCurrent(Database.dataSource(file))).isFalse();
+    Path text = dir.resolve("notes.db");
+    Files.writeString(text, "not a database at all, just words\n".repeat(100));
+    assertThat(Database.schemaIsCurrent(Database.dataSource(text))).isFalse();
+  }
+
+  @Test
   void aFileThatIsNotADatabaseIsRefusedByName() throws Exception {
     Path file = dir.resolve("notes.db");
     Files.writeString(file, "shopping list: bolts, couplers, tape\n".repeat(200));
