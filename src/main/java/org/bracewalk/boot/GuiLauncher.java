@@ -105,7 +105,7 @@ final class GuiLauncher {
       stage[0] = new Stage();
       stage[0].setOnHidden(e -> closed.countDown());
       app.showOpening(stage[0], new FxDialogService(stage[0]), db.toString());
-      mark(timing, err, "window shown, database still opening");
+      mark(timing, err, "opening window shown");
     });
     AppServices services;
     try {

@@ -71,6 +71,8 @@ public final class WalkBench {
         median(r[0]) / 1e6, pct(r[0], 0.9) / 1e6);
     out.printf("    ... and the frame rendered (median)       %7.2f ms   (90th percentile %7.2f ms)%n",
         median(r[1]) / 1e6, pct(r[1], 0.9) / 1e6);
+    out.printf("    baseline: the same snapshot, nothing changed  %7.2f ms   (so the change itself adds %.1fx the baseline)%n",
+        median(r[3]) / 1e6, (median(r[1]) - median(r[3])) / Math.max(1.0, median(r[3])));
     out.printf("    full redraws (verdict, blocks or critical braces changed): %d of %d keystrokes%n",
         r[2][0], r[0].length);
   }
@@ -136,10 +138,15 @@ public final class WalkBench {
     int warm = 40;
     long[] drawn = new long[samples];
     long[] framed = new long[samples];
+    long[] idle = new long[samples];
     int fullRedraws = 0;
     for (int k = 0; k < warm + samples; k++) {
       KeyCode code = keys[k % keys.length];
       KeyEvent e = new KeyEvent(KeyEvent.KEY_PRESSED, "", "", code, false, false, false, false);
+      // the baseline: the same snapshot with nothing changed (drawing the kept picture, reading it back)
+      long i0 = System.nanoTime();
+      view.canvas().snapshot(null, null);
+      long i1 = System.nanoTime();
       long t0 = System.nanoTime();
       Event.fireEvent(view.canvas(), e);
       long t1 = System.nanoTime();
@@ -148,12 +155,13 @@ public final class WalkBench {
       if (k >= warm) {
         drawn[k - warm] = t1 - t0;
         framed[k - warm] = t2 - t0;
+        idle[k - warm] = i1 - i0;
         if (!view.canvas().lastPaintPartial()) {
           fullRedraws++;
         }
       }
     }
-    return new long[][] {drawn, framed, {fullRedraws}};
+    return new long[][] {drawn, framed, {fullRedraws}, idle};
   }
 
   private static double median(long[] xs) {

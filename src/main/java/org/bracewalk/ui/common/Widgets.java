@@ -74,6 +74,8 @@ public final class Widgets {
     return r;
   }
 
+  private static final java.util.List<String> VERDICT_LOOKS = java.util.List.of("holds", "depends", "lost");
+
   /** A box showing a verdict: its symbol and words in the headline, detail and advice below. */
   public static VBox verdictBox(ObservableValue<VerdictWords> verdict) {
     Label head = new Label();
@@ -88,18 +90,20 @@ public final class Widgets {
     Runnable update =
         () -> {
           VerdictWords w = verdict.getValue();
-          box.getStyleClass().removeAll("holds", "depends", "lost");
-          if (w == null) {
-            head.setText("");
-            detail.setText("");
-            advice.setText("");
-            return;
+          String look = w == null ? null
+              : w.kind().lost() ? "lost" : w.kind() == VerdictKind.HOLDS ? "holds" : "depends";
+          // a changed style class restyles the whole box: only touch it when the kind changes
+          for (String other : VERDICT_LOOKS) {
+            if (!other.equals(look)) {
+              box.getStyleClass().remove(other);
+            }
           }
-          head.setText(w.headline());
-          detail.setText(w.detail());
-          advice.setText(w.advice());
-          box.getStyleClass()
-              .add(w.kind().lost() ? "lost" : w.kind() == VerdictKind.HOLDS ? "holds" : "depends");
+          if (look != null && !box.getStyleClass().contains(look)) {
+            box.getStyleClass().add(look);
+          }
+          head.setText(w == null ? "" : w.headline());
+          detail.setText(w == null ? "" : w.detail());
+          advice.setText(w == null ? "" : w.advice());
         };
     verdict.addListener((o, a, b) -> update.run());
     update.run();

@@ -22,6 +22,7 @@ import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.MemberKind;
@@ -93,11 +94,24 @@ public final class WalkView extends BorderPane {
     VBox centre = new VBox(8, banner, canvas, cursorText, legend);
     setCenter(centre);
 
+    // The verdict stands above the scrolled controls, outside the scroll pane: its words change
+    // with every mark, and a change inside the pane would lay out every control in it again.
+    VBox verdict = Widgets.verdictBox(vm.verdictProperty());
+    verdict.setId("walk-verdict");
+    Label readOnly = Widgets.text("This inspection is finalised: read-only.");
+    readOnly.getStyleClass().add("error-text");
+    readOnly.visibleProperty().bind(vm.readOnlyProperty());
+    readOnly.managedProperty().bind(readOnly.visibleProperty());
     ScrollPane side = new ScrollPane(sidePanel());
     side.setFitToWidth(true);
     side.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
     side.setPrefViewportWidth(400);
-    setRight(side);
+    side.setPrefViewportHeight(300); // the pane takes the height left; its content is not asked
+    VBox.setVgrow(side, Priority.ALWAYS);
+    VBox right = new VBox(10, readOnly, verdict, side);
+    right.setPrefWidth(420); // else the verdict's longest line, unwrapped, would set the width
+    right.setId("walk-side");
+    setRight(right);
 
     Label status = Widgets.text(vm.statusProperty());
     status.setId("walk-status");
@@ -214,17 +228,11 @@ public final class WalkView extends BorderPane {
     Label bowHint = Widgets.text(vm.bowHintProperty(), "hint");
     VBox detailBox = Widgets.box("Details for the next mark (Alt+D, Alt+B, Alt+O; Enter returns)", details, bowHint);
 
-    VBox verdict = Widgets.verdictBox(vm.verdictProperty());
-    verdict.setId("walk-verdict");
     Button undo = new Button("Undo last mark (Backspace)");
     undo.setId("walk-undo");
     undo.disableProperty().bind(vm.canUndoProperty().not().or(vm.readOnlyProperty()));
     undo.setOnAction(e -> vm.undo());
     undo.setFocusTraversable(false);
-    Label readOnly = Widgets.text("This inspection is finalised: read-only.");
-    readOnly.getStyleClass().add("error-text");
-    readOnly.visibleProperty().bind(vm.readOnlyProperty());
-    readOnly.managedProperty().bind(readOnly.visibleProperty());
 
     ChoiceBox<WalkOrder> order = new ChoiceBox<>();
     order.getItems().addAll(WalkOrder.values());
@@ -232,7 +240,7 @@ public final class WalkView extends BorderPane {
     order.setFocusTraversable(false);
     order.setMaxWidth(Double.MAX_VALUE);
     VBox orderBox = Widgets.box("Walk order (O changes it)", order);
-    VBox side = new VBox(10, readOnly, verdict, marks, member, detailBox, orderBox, undo);
+    VBox side = new VBox(10, marks, member, detailBox, orderBox, undo);
     side.getStyleClass().add("side");
     return side;
   }
