@@ -39,7 +39,17 @@ import org.bracewalk.ui.walk.WalkViewModel;
 public final class WalkBench {
   private WalkBench() {}
 
-  public static void main(String[] args) throws Exception {
+  public static void main(String[] args) {
+    try {
+      bench(args);
+      System.exit(0);
+    } catch (Exception | Error e) {
+      e.printStackTrace();
+      System.exit(3); // the toolkit's thread would keep the JVM alive
+    }
+  }
+
+  private static void bench(String[] args) throws Exception {
     PrintStream out = System.out;
     int samples = args.length > 0 ? Integer.parseInt(args[0]) : 200;
     HeadlessFx.start();
@@ -50,19 +60,22 @@ public final class WalkBench {
         Runtime.getRuntime().availableProcessors(),
         java.lang.management.ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
     MarkRecorder memory = memoryRecorder();
-    long[][] result = HeadlessFx.onFx(() -> run(design, samples, memory));
+    long[][] result = HeadlessFx.onFx(() -> run(design, samples, memory, false));
     print(out, "record in memory", result);
+    PlaneDesign thin = withOneBraceInTheTopLift(design);
+    long[][] flips = HeadlessFx.onFx(() -> run(thin, samples, memoryRecorder(), true));
+    print(out, "record in memory; every keystroke changes the verdict (M on the top lift's only"
+        + " brace, then Backspace)", flips);
     java.nio.file.Path dir = java.nio.file.Files.createTempDirectory("bracewalk-bench");
     try (org.bracewalk.app.AppServices services = AppContext.standard().open(dir.resolve("bench.db"))) {
       MarkRecorder stored = storedRecorder(services, design);
-      long[][] db = HeadlessFx.onFx(() -> run(design, samples, stored));
+      long[][] db = HeadlessFx.onFx(() -> run(design, samples, stored, false));
       print(out, "record committed to SQLite (full sync)", db);
     } finally {
       try (var files = java.nio.file.Files.walk(dir)) {
         files.sorted(java.util.Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
       }
     }
-    System.exit(0);
   }
 
   private static void print(PrintStream out, String what, long[][] r) {
@@ -124,7 +137,26 @@ public final class WalkBench {
         braces);
   }
 
-  private static long[][] run(PlaneDesign design, int samples, MarkRecorder recorder) {
+  /** {@code design} with every brace of the top lift taken out but the one at bay 51: that one is critical. */
+  static PlaneDesign withOneBraceInTheTopLift(PlaneDesign design) {
+    int top = design.grid().lifts();
+    Map<PanelRef, Brace> braces = new HashMap<>();
+    design.braces().forEach((p, b) -> {
+      if (p.lift() != top || p.bay() == CRITICAL_BAY) {
+        braces.put(p, b);
+      }
+    });
+    return PlaneDesign.of(design.grid(), braces);
+  }
+
+  private static final int CRITICAL_BAY = 51;
+
+  /**
+   * Times {@code samples} keystrokes after 40 untimed. {@code flip}: the cursor is put on the top
+   * lift's only brace before each keystroke (untimed), and the keys alternate M (rigidity lost)
+   * and Backspace (the mark undone, rigid again), so every keystroke redraws the whole plane.
+   */
+  private static long[][] run(PlaneDesign design, int samples, MarkRecorder recorder, boolean flip) {
     WalkViewModel vm =
         new WalkViewModel(design, "bench plane", List.of(), recorder, PlaneAnalyzer.standard(), NO_DIALOGS, false, false);
     WalkView view = new WalkView(vm);
@@ -142,6 +174,10 @@ public final class WalkBench {
     int fullRedraws = 0;
     for (int k = 0; k < warm + samples; k++) {
       KeyCode code = keys[k % keys.length];
+      if (flip) {
+        code = k % 2 == 0 ? KeyCode.M : KeyCode.BACK_SPACE;
+        vm.select(new PanelRef(design.grid().lifts(), CRITICAL_BAY));
+      }
       KeyEvent e = new KeyEvent(KeyEvent.KEY_PRESSED, "", "", code, false, false, false, false);
       // the baseline: the same snapshot with nothing changed (drawing the kept picture, reading it back)
       long i0 = System.nanoTime();

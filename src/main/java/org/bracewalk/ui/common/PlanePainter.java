@@ -58,10 +58,16 @@ public final class PlanePainter {
     boolean badges = smallest >= 18;
     hatchAll(g, geo, sway);
     paintFrame(g, geo);
-    for (int i = 1; i <= grid.lifts(); i++) {
-      for (int j = 1; j <= grid.bays(); j++) {
-        panel(g, geo, pic, new PanelRef(i, j), badges);
+    // members first, gathered into one path per line style (a shape per line is what makes a
+    // large plane slow in the software renderer), then what is drawn over them
+    MemberLines lines = new MemberLines();
+    for (Pass pass : new Pass[] {Pass.LINES, Pass.OVER}) {
+      for (int i = 1; i <= grid.lifts(); i++) {
+        for (int j = 1; j <= grid.bays(); j++) {
+          panel(g, geo, pic, new PanelRef(i, j), badges, pass, lines);
+        }
       }
+      lines.stroke(g);
     }
     overlays(g, geo, pic, null, badges || smallest >= 12);
     if (labelled) {
@@ -73,16 +79,32 @@ public final class PlanePainter {
     return geo;
   }
 
+  /** Which part of a panel to draw: everything, only its member lines, or all but them. */
+  private enum Pass {
+    ALL,
+    /** the member lines, into a {@link MemberLines} */
+    LINES,
+    /** openings, rod rings, damage ticks and badges: what lies over the member lines */
+    OVER
+  }
+
   /** The contents of one panel: opening, member(s) in the style of their state, badge. */
   private static void panel(GraphicsContext g, PlaneGeometry geo, PlanePicture pic, PanelRef p, boolean badges) {
+    panel(g, geo, pic, p, badges, Pass.ALL, null);
+  }
+
+  private static void panel(GraphicsContext g, PlaneGeometry geo, PlanePicture pic, PanelRef p, boolean badges,
+      Pass pass, MemberLines lines) {
     if (pic.design().isOpening(p)) {
-      opening(g, geo, p);
+      if (pass != Pass.LINES) {
+        opening(g, geo, p);
+      }
       return;
     }
     if (!pic.showFindings()) {
       Brace b = pic.design().braceAt(p);
       if (b != null) {
-        member(g, geo, p, b, PanelLook.SOUND);
+        member(g, geo, p, b, PanelLook.SOUND, pass, lines);
       }
       return;
     }
@@ -93,14 +115,14 @@ public final class PlanePainter {
     if (f != null && (f.state() == PanelState.MISSING || f.state() == PanelState.DAMAGED_INEFFECTIVE)
         && designBrace != null) {
       // the design member drawn in the state's style; a remaining member found drawn solid
-      member(g, geo, p, designBrace, look);
+      member(g, geo, p, designBrace, look, pass, lines);
       if (f.memberFound() != null) {
-        member(g, geo, p, f.memberFound(), PanelLook.SOUND);
+        member(g, geo, p, f.memberFound(), PanelLook.SOUND, pass, lines);
       }
     } else if (shown != null) {
-      member(g, geo, p, shown, look);
+      member(g, geo, p, shown, look, pass, lines);
     }
-    if (badges && (f != null || designBrace != null)) {
+    if (pass != Pass.LINES && badges && (f != null || designBrace != null)) {
       badge(g, geo, p, look);
     }
   }
@@ -189,16 +211,16 @@ public final class PlanePainter {
     g.setLineDashes();
     g.setStroke(FRAME);
     g.setLineWidth(2);
+    g.setFill(FRAME);
     for (int j = j0; j <= j1; j++) {
-      g.strokeLine(geo.lineX(j), geo.levelY(i1), geo.lineX(j), geo.levelY(i0));
+      bar(g, geo.lineX(j), geo.levelY(i1), geo.lineX(j), geo.levelY(i0), 2);
     }
     for (int i = i0; i <= i1; i++) {
-      g.strokeLine(geo.lineX(j0), geo.levelY(i), geo.lineX(j1), geo.levelY(i));
+      bar(g, geo.lineX(j0), geo.levelY(i), geo.lineX(j1), geo.levelY(i), 2);
     }
     if (i0 == 0 && grid.support() == org.bracewalk.core.model.Support.PINNED_BASE) {
       double bottom = geo.levelY(0);
-      g.setLineWidth(3);
-      g.strokeLine(geo.lineX(j0) - (j0 == 0 ? 6 : 0), bottom, geo.lineX(j1) + (j1 == grid.bays() ? 6 : 0), bottom);
+      bar(g, geo.lineX(j0) - (j0 == 0 ? 6 : 0), bottom, geo.lineX(j1) + (j1 == grid.bays() ? 6 : 0), bottom, 3);
       g.setLineWidth(1);
       double start = geo.lineX(0) - 4;
       double from = geo.lineX(j0) - 8;
@@ -206,6 +228,19 @@ public final class PlanePainter {
       for (; x < geo.lineX(j1) + 8 && x < geo.lineX(grid.bays()) + 6; x += 8) {
         g.strokeLine(x, bottom + 1, x - 5, bottom + 7);
       }
+    }
+  }
+
+  /**
+   * An upright or level line of {@code width} from (x0, y0) to (x1, y1), as a stroke with flat
+   * ends would cover it, filled in the current fill.
+   */
+  private static void bar(GraphicsContext g, double x0, double y0, double x1, double y1, double width) {
+    double half = width / 2;
+    if (x0 == x1) {
+      g.fillRect(x0 - half, Math.min(y0, y1), width, Math.abs(y1 - y0));
+    } else {
+      g.fillRect(Math.min(x0, x1), y0 - half, Math.abs(x1 - x0), width);
     }
   }
 
@@ -221,6 +256,74 @@ public final class PlanePainter {
     return s;
   }
 
+  private static final Color[] LOOK_COLOURS = new Color[PanelLook.values().length];
+
+  static {
+    for (PanelLook look : PanelLook.values()) {
+      LOOK_COLOURS[look.ordinal()] = Color.web(look.colour());
+    }
+  }
+
+  private static Color colour(PanelLook look) {
+    return LOOK_COLOURS[look.ordinal()];
+  }
+
+  /**
+   * Member lines gathered by line style (look and member kind), then stroked as one path per
+   * style. Each line is its own sub-path, so a dash pattern starts afresh on every member, as when
+   * each is stroked alone. The broken styles are stroked first, so that a member found solid in a
+   * panel whose design member is missing lies on top, as when the panel is drawn alone.
+   */
+  private static final class MemberLines {
+    /** Stroke order: broken lines (not inspected, not reachable, missing, unusable), then solid. */
+    private static final List<PanelLook> ORDER = List.of(PanelLook.NOT_RECORDED, PanelLook.NOT_REACHABLE,
+        PanelLook.MISSING, PanelLook.DAMAGED_INEFFECTIVE, PanelLook.SOUND, PanelLook.DAMAGED_EFFECTIVE,
+        PanelLook.EXTRA);
+
+    private final java.util.Map<Integer, double[]> coords = new java.util.TreeMap<>();
+    private final java.util.Map<Integer, Integer> counts = new java.util.HashMap<>();
+    private final java.util.Map<Integer, Double> widths = new java.util.HashMap<>();
+
+    void add(PanelLook look, boolean tension, double width, double[] segment) {
+      int key = ORDER.indexOf(look) * 2 + (tension ? 1 : 0);
+      int n = counts.getOrDefault(key, 0);
+      double[] xs = coords.get(key);
+      if (xs == null || xs.length < (n + 1) * 4) {
+        xs = java.util.Arrays.copyOf(xs == null ? new double[0] : xs, Math.max(64, (n + 1) * 8));
+        coords.put(key, xs);
+      }
+      System.arraycopy(segment, 0, xs, n * 4, 4);
+      counts.put(key, n + 1);
+      widths.put(key, width);
+    }
+
+    void stroke(GraphicsContext g) {
+      for (var e : coords.entrySet()) {
+        int key = e.getKey();
+        PanelLook look = ORDER.get(key / 2);
+        double[] xs = e.getValue();
+        g.setStroke(colour(look));
+        g.setLineWidth(widths.get(key));
+        double[] dashes = look.dashes();
+        if (dashes == null) {
+          g.setLineDashes();
+        } else {
+          g.setLineDashes(dashes);
+        }
+        g.beginPath();
+        for (int k = 0, n = counts.get(key); k < n; k++) {
+          g.moveTo(xs[4 * k], xs[4 * k + 1]);
+          g.lineTo(xs[4 * k + 2], xs[4 * k + 3]);
+        }
+        g.stroke();
+        g.setLineDashes();
+      }
+      coords.clear();
+      counts.clear();
+      widths.clear();
+    }
+  }
+
   private static void paintFrame(GraphicsContext g, PlaneGeometry geo) {
     PlaneGrid grid = geo.grid();
     g.setLineDashes();
@@ -228,20 +331,25 @@ public final class PlanePainter {
     g.setLineWidth(2);
     double top = geo.levelY(grid.lifts());
     double bottom = geo.levelY(0);
+    // standards and ledgers as filled bars (a stroke is a shape for the software renderer's
+    // antialiasing; an upright bar fills fast), the ground's ticks as one path
+    g.setFill(FRAME);
     for (int j = 0; j <= grid.bays(); j++) {
-      g.strokeLine(geo.lineX(j), top, geo.lineX(j), bottom);
+      bar(g, geo.lineX(j), top, geo.lineX(j), bottom, 2);
     }
     for (int i = 0; i <= grid.lifts(); i++) {
-      g.strokeLine(geo.lineX(0), geo.levelY(i), geo.lineX(grid.bays()), geo.levelY(i));
+      bar(g, geo.lineX(0), geo.levelY(i), geo.lineX(grid.bays()), geo.levelY(i), 2);
     }
     if (grid.support() == org.bracewalk.core.model.Support.PINNED_BASE) {
       // ground: a heavy base line with short ticks below it
-      g.setLineWidth(3);
-      g.strokeLine(geo.lineX(0) - 6, bottom, geo.lineX(grid.bays()) + 6, bottom);
+      bar(g, geo.lineX(0) - 6, bottom, geo.lineX(grid.bays()) + 6, bottom, 3);
       g.setLineWidth(1);
+      g.beginPath();
       for (double x = geo.lineX(0) - 4; x < geo.lineX(grid.bays()) + 6; x += 8) {
-        g.strokeLine(x, bottom + 1, x - 5, bottom + 7);
+        g.moveTo(x, bottom + 1);
+        g.lineTo(x - 5, bottom + 7);
       }
+      g.stroke();
     }
   }
 
@@ -304,22 +412,33 @@ public final class PlanePainter {
 
   /** Draws the member(s) of {@code b} in {@code p} in the style of {@code look}. */
   static void member(GraphicsContext g, PlaneGeometry geo, PanelRef p, Brace b, PanelLook look) {
+    member(g, geo, p, b, look, Pass.ALL, null);
+  }
+
+  private static void member(GraphicsContext g, PlaneGeometry geo, PanelRef p, Brace b, PanelLook look,
+      Pass pass, MemberLines lines) {
     double inset = Math.min(4, Math.min(geo.panelWidth(p), geo.panelHeight(p)) * 0.08);
     double[][] segs = geo.members(p, b.diagonal(), inset);
-    Color c = Color.web(look.colour());
+    Color c = colour(look);
     boolean tension = b.kind() == MemberKind.TENSION_ONLY;
     double width = tension ? Math.max(1.2, look.width() * 0.5) : look.width();
     for (double[] s : segs) {
-      g.setStroke(c);
-      g.setLineWidth(width);
-      double[] dashes = look.dashes();
-      if (dashes == null) {
-        g.setLineDashes();
-      } else {
-        g.setLineDashes(dashes);
+      if (pass == Pass.LINES) {
+        lines.add(look, tension, width, s);
+        continue;
       }
-      g.strokeLine(s[0], s[1], s[2], s[3]);
-      g.setLineDashes();
+      if (pass == Pass.ALL) {
+        g.setStroke(c);
+        g.setLineWidth(width);
+        double[] dashes = look.dashes();
+        if (dashes == null) {
+          g.setLineDashes();
+        } else {
+          g.setLineDashes(dashes);
+        }
+        g.strokeLine(s[0], s[1], s[2], s[3]);
+        g.setLineDashes();
+      }
       if (tension) {
         // a rod: small rings at both ends
         g.setFill(PAPER);
@@ -362,12 +481,12 @@ public final class PlanePainter {
     double y = geo.top(p) + 3;
     boolean alarm = look == PanelLook.MISSING || look == PanelLook.DAMAGED_INEFFECTIVE;
     g.setLineDashes();
-    g.setFill(alarm ? Color.web(look.colour()) : Color.WHITE);
+    g.setFill(alarm ? colour(look) : Color.WHITE);
     g.fillRoundRect(x, y, size, size, 4, 4);
-    g.setStroke(Color.web(look.colour()));
+    g.setStroke(colour(look));
     g.setLineWidth(1);
     g.strokeRoundRect(x, y, size, size, 4, 4);
-    g.setFill(alarm ? Color.WHITE : Color.web(look.colour()));
+    g.setFill(alarm ? Color.WHITE : colour(look));
     g.setFont(Font.font("DejaVu Sans", FontWeight.BOLD, size * 0.72));
     g.setTextAlign(TextAlignment.CENTER);
     g.setTextBaseline(VPos.CENTER);

@@ -31,6 +31,7 @@ import org.bracewalk.ui.common.KeyHelp;
 import org.bracewalk.ui.common.Legend;
 import org.bracewalk.ui.common.PanelLook;
 import org.bracewalk.ui.common.PlaneCanvas;
+import org.bracewalk.ui.common.SteadyBox;
 import org.bracewalk.ui.common.Widgets;
 
 /**
@@ -91,7 +92,8 @@ public final class WalkView extends BorderPane {
     cursorText.setId("walk-cursor");
     cursorText.setStyle("-fx-font-weight: bold;");
     Legend legend = new Legend(Legend.Set_.WALK);
-    VBox centre = new VBox(8, banner, canvas, cursorText, legend);
+    // the key's sizes are remembered: the line above it changes with every mark
+    VBox centre = new VBox(8, banner, canvas, cursorText, new SteadyBox(0, legend));
     setCenter(centre);
 
     // The verdict stands above the scrolled controls, outside the scroll pane: its words change
@@ -240,7 +242,7 @@ public final class WalkView extends BorderPane {
     order.setFocusTraversable(false);
     order.setMaxWidth(Double.MAX_VALUE);
     VBox orderBox = Widgets.box("Walk order (O changes it)", order);
-    VBox side = new VBox(10, marks, member, detailBox, orderBox, undo);
+    VBox side = new SteadyBox(10, marks, member, detailBox, orderBox, undo);
     side.getStyleClass().add("side");
     return side;
   }
