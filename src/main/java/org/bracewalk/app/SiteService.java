@@ -55,6 +55,29 @@ public final class SiteService {
         .orElseThrow(() -> new NotFoundException("structure " + id));
   }
 
+  /** The fewest and most days between routine inspections a structure may have. */
+  public static final int MIN_INTERVAL_DAYS = 1;
+
+  public static final int MAX_INTERVAL_DAYS = 366;
+
+  /**
+   * Sets the days between routine inspections of a structure: what its "next inspection due"
+   * counts from the last finalised inspection. Reports already issued keep the interval they
+   * printed; their record fingerprint covers the structure, so {@code verify-report} then names
+   * the structure as changed since issue.
+   *
+   * @throws UserInputException naming the field when {@code days} is outside 1 to 366
+   */
+  public Structure setInspectionInterval(long structureId, int days) {
+    if (days < MIN_INTERVAL_DAYS || days > MAX_INTERVAL_DAYS) {
+      throw new UserInputException("days between inspections: " + days + " is outside "
+          + MIN_INTERVAL_DAYS + " to " + MAX_INTERVAL_DAYS);
+    }
+    structure(structureId);
+    return store.structures().setInspectionInterval(structureId, days)
+        .orElseThrow(() -> new NotFoundException("structure " + structureId));
+  }
+
   /** The site a structure stands on. */
   public Site siteOf(Structure structure) {
     return site(structure.siteId());

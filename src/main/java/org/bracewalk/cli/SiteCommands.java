@@ -123,6 +123,34 @@ final class SiteCommands {
     }
   }
 
+  @Command(name = "interval", mixinStandardHelpOptions = true,
+      description = "Set the days between routine inspections of a structure (WAHR 2005 reg. 12:"
+          + " at most 7 for a scaffold platform in Great Britain; follow the local rules).")
+  static final class StructureInterval extends StoreCommand {
+    @Option(names = "--structure", required = true, description = "The structure's id.")
+    long structure;
+
+    @Option(names = "--days", required = true, description = "Days between routine inspections, 1 to 366.")
+    int days;
+
+    StructureInterval(CliContext context) {
+      super(context);
+    }
+
+    @Override
+    int run(AppServices s, PrintWriter out, PrintWriter err) {
+      Structure st = s.sites().setInspectionInterval(structure, days);
+      out.println("structure " + st.id() + " (" + st.name() + "): routine inspection every "
+          + st.inspectionIntervalDays() + (st.inspectionIntervalDays() == 1 ? " day" : " days")
+          + s.inspections().nextInspectionDue(st.id()).map(d -> "; next due " + d).orElse("; not inspected yet"));
+      if (st.kind() == StructureKind.SCAFFOLD && days > 7) {
+        err.println("note: more than the 7 days WAHR 2005 reg. 12 allows between inspections of a scaffold"
+            + " platform in Great Britain; keep it only where the local rules allow it.");
+      }
+      return 0;
+    }
+  }
+
   @Command(name = "list", mixinStandardHelpOptions = true,
       description = "List the structures of a site, with when the next routine inspection is due.")
   static final class StructureList extends StoreCommand {

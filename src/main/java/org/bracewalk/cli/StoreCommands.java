@@ -41,8 +41,10 @@ public final class StoreCommands {
     root.addSubcommand("demo", new FileCommands.Demo(context));
     root.addSubcommand("site", group("site", "Create and list sites.",
         new SiteCommands.SiteCreate(context), new SiteCommands.SiteList(context)));
-    root.addSubcommand("structure", group("structure", "Create and list structures of a site.",
-        new SiteCommands.StructureCreate(context), new SiteCommands.StructureList(context)));
+    root.addSubcommand("structure", group("structure",
+        "Create and list structures of a site; set their inspection interval.",
+        new SiteCommands.StructureCreate(context), new SiteCommands.StructureList(context),
+        new SiteCommands.StructureInterval(context)));
     root.addSubcommand("plane", group("plane", "Create and list brace planes of a structure.",
         new SiteCommands.PlaneCreate(context), new SiteCommands.PlaneList(context)));
     root.addSubcommand("inspection", group("inspection", "Start, list and show inspections.",

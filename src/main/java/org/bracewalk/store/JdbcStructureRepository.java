@@ -58,6 +58,20 @@ final class JdbcStructureRepository implements StructureRepository {
     return query(SELECT + " WHERE site_id = ? ORDER BY id", siteId);
   }
 
+  @Override
+  public Optional<Structure> setInspectionInterval(long structureId, int days) {
+    int changed = db.call(
+        c -> {
+          try (PreparedStatement s = c.prepareStatement(
+              "UPDATE structures SET inspection_interval_days = ? WHERE id = ?")) {
+            s.setInt(1, days);
+            s.setLong(2, structureId);
+            return s.executeUpdate();
+          }
+        });
+    return changed == 0 ? Optional.empty() : find(structureId);
+  }
+
   private List<Structure> query(String sql, long key) {
     return db.call(
         c -> {

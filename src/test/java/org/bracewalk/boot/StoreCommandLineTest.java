@@ -178,6 +178,27 @@ class StoreCommandLineTest {
   }
 
   @Test
+  void theInspectionIntervalOfAStructureCanBeSetAndMovesTheNextDueDate() {
+    run("demo", "--db", db());
+    // the racking run's last finalised inspection finished on 2025-03-05 (demo site file)
+    Run monthly = run("structure", "interval", "--db", db(), "--structure", "1", "--days", "30");
+    assertThat(monthly.code()).as(monthly.err()).isZero();
+    assertThat(monthly.out()).contains("every 30 days; next due 2025-04-04");
+    assertThat(run("structure", "list", "--db", db(), "--site", "1").out())
+        .contains("inspection due 2025-04-04");
+    // WAHR 2005 reg. 12: a scaffold platform is inspected at least every 7 days (trade-facts.md)
+    Run scaffold = run("structure", "interval", "--db", db(), "--structure", "2", "--days", "14");
+    assertThat(scaffold.code()).isZero();
+    assertThat(scaffold.err()).contains("7 days").contains("reg. 12");
+    Run none = run("structure", "interval", "--db", db(), "--structure", "2", "--days", "0");
+    assertThat(none.code()).isEqualTo(2);
+    assertThat(none.err()).contains("days between inspections").contains("1 to 366");
+    Run unknown = run("structure", "interval", "--db", db(), "--structure", "99", "--days", "7");
+    assertThat(unknown.code()).isEqualTo(2);
+    assertThat(unknown.err()).contains("structure 99");
+  }
+
+  @Test
   void listsShowSitesStructuresPlanesAndInspections() {
     run("demo", "--db", db());
     assertThat(run("site", "list", "--db", db()).out()).contains("site 1: Larkspur Depot");

@@ -13,4 +13,10 @@ public interface StructureRepository {
 
   /** The structures of one site, by id. */
   List<Structure> ofSite(long siteId);
+
+  /**
+   * Sets the days between routine inspections of a structure (its only field that may change)
+   * and returns the structure as now stored; empty when there is no such structure.
+   */
+  Optional<Structure> setInspectionInterval(long structureId, int days);
 }

@@ -154,8 +154,11 @@ public final class SitesView extends BorderPane {
     GridPane buttons = new GridPane();
     buttons.setHgap(8);
     buttons.setVgap(8);
+    Button interval = wide("Days between inspections\u2026 (D)", vm::changeInterval);
+    interval.setId("change-interval");
     buttons.addRow(0, walk, design);
     buttons.addRow(1, findings, history);
+    buttons.add(interval, 0, 2, 2, 1);
     javafx.scene.layout.ColumnConstraints half = new javafx.scene.layout.ColumnConstraints();
     half.setPercentWidth(50);
     buttons.getColumnConstraints().addAll(half, half);
@@ -262,6 +265,9 @@ public final class SitesView extends BorderPane {
         vm.open(ScreenId.WALK);
       }
       e.consume();
+    } else if (e.getCode() == KeyCode.D && !e.isShortcutDown() && !e.isAltDown()) {
+      vm.changeInterval();
+      e.consume();
     } else if (e.getCode() == KeyCode.F5) {
       vm.refresh();
       e.consume();
@@ -294,6 +300,7 @@ public final class SitesView extends BorderPane {
             KeyHelp.of("Enter", "open its walk-round (or, with no open inspection, go to the inspector field)"),
             KeyHelp.of("Alt+I, Alt+P, Alt+R", "inspector, position, reason of a new inspection"),
             KeyHelp.of("Ctrl+Enter", "start the inspection now"),
+            KeyHelp.of("D", "days between routine inspections of the selected structure"),
             KeyHelp.of("L", "load the demo site (empty database only)"),
             KeyHelp.of("F5", "read the database again")));
   }

@@ -22,6 +22,7 @@ import org.bracewalk.app.AppServices;
 import org.bracewalk.app.ImportedSite;
 import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.PlaneResult;
+import org.bracewalk.app.SiteService;
 import org.bracewalk.core.analysis.AsBuiltAnalysis;
 import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Inspection;
@@ -274,6 +275,57 @@ public final class SitesViewModel {
 
   private long firstPlane(long structureId) {
     return services.sites().planes(structureId).stream().findFirst().map(PlaneRecord::id).orElse(0L);
+  }
+
+  /**
+   * Asks for the days between routine inspections of the selected structure (or the structure of
+   * the selected plane) and stores them; the overview's next-due dates follow at once. For a
+   * scaffold, more than 7 days is stored only once confirmed (WAHR 2005 reg. 12 in Great Britain).
+   */
+  public boolean changeInterval() {
+    OverviewRow r = selected.get();
+    if (r == null || r.structureId() == 0) {
+      error.set("Select the structure (or one of its planes) whose inspection interval to change.");
+      return false;
+    }
+    Structure st = services.sites().structure(r.structureId());
+    Optional<String> answer = dialogs.askText("Days between inspections",
+        "Days between routine inspections of '" + st.name() + "' (" + SiteService.MIN_INTERVAL_DAYS + " to "
+            + SiteService.MAX_INTERVAL_DAYS + "). The next inspection falls due this many days after the last"
+            + " finalised one; inspect at once after an impact, alteration or bad weather whatever it says."
+            + " Reports already issued keep what they printed (verify-report will name the structure as changed).",
+        Integer.toString(st.inspectionIntervalDays()));
+    if (answer.isEmpty()) {
+      return false;
+    }
+    int days;
+    try {
+      days = Integer.parseInt(answer.get().strip());
+    } catch (NumberFormatException e) {
+      error.set("Days between inspections: '" + answer.get().strip() + "' is not a whole number of days."
+          + " Nothing was changed.");
+      return false;
+    }
+    if (st.kind() == StructureKind.SCAFFOLD && days > 7
+        && !dialogs.confirm("Longer than 7 days",
+            "In Great Britain a scaffold platform is inspected at least every 7 days (Work at Height"
+                + " Regulations 2005, reg. 12). Keep " + days + " days for '" + st.name() + "' only where the"
+                + " local rules allow it.", "Keep " + days + " days")) {
+      return false;
+    }
+    try {
+      Structure changed = services.sites().setInspectionInterval(st.id(), days);
+      error.set("");
+      refresh();
+      status.set("'" + changed.name() + "' is now inspected every " + changed.inspectionIntervalDays()
+          + (changed.inspectionIntervalDays() == 1 ? " day" : " days")
+          + services.inspections().nextInspectionDue(changed.id()).map(d -> "; next due " + d)
+              .orElse("; not inspected yet, so due now") + ".");
+      return true;
+    } catch (RuntimeException e) {
+      error.set("Days between inspections: " + e.getMessage() + ". Nothing was changed.");
+      return false;
+    }
   }
 
   /** The selection the other screens should show for the selected line. */

@@ -64,6 +64,43 @@ class SitesViewModelTest {
   }
 
   @Test
+  void theInspectionIntervalIsASettingPerStructureAndMovesTheDueDate() {
+    services = DemoDatabase.withDemo(dir);
+    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    vm.selectedProperty().set(row(vm, "frame 2"));
+    // last finalised 2025-03-05; today 2025-03-15: 7 days overdue, 14 days due on 2025-03-19
+    dialogs.textAnswers.push(java.util.Optional.of(" 14 "));
+    assertThat(vm.changeInterval()).isTrue();
+    OverviewRow racking = row(vm, "Aisle C racking run");
+    assertThat(racking.interval()).isEqualTo("14 days");
+    assertThat(racking.nextDue()).isEqualTo("2025-03-19");
+    assertThat(racking.due()).isEqualTo(OverviewRow.Due.IN_TIME);
+    assertThat(vm.statusProperty().get()).contains("every 14 days; next due 2025-03-19");
+    assertThat(vm.selectedProperty().get().name()).isEqualTo("frame 2");
+    // not a number, and out of range: refused by name, nothing changed
+    dialogs.textAnswers.push(java.util.Optional.of("fortnight"));
+    assertThat(vm.changeInterval()).isFalse();
+    assertThat(vm.errorProperty().get()).contains("'fortnight' is not a whole number");
+    dialogs.textAnswers.push(java.util.Optional.of("400"));
+    assertThat(vm.changeInterval()).isFalse();
+    assertThat(vm.errorProperty().get()).contains("1 to 366");
+    assertThat(row(vm, "Aisle C racking run").interval()).isEqualTo("14 days");
+    // a scaffold over 7 days (WAHR 2005 reg. 12) only once confirmed
+    vm.selectedProperty().set(row(vm, "North facade scaffold"));
+    dialogs.textAnswers.push(java.util.Optional.of("10"));
+    dialogs.confirmAnswers.push(false);
+    assertThat(vm.changeInterval()).isFalse();
+    assertThat(dialogs.asked.get(dialogs.asked.size() - 1)).contains("reg. 12");
+    assertThat(row(vm, "North facade scaffold").interval()).isEqualTo("7 days");
+    dialogs.textAnswers.push(java.util.Optional.of("10"));
+    dialogs.confirmAnswers.push(true);
+    assertThat(vm.changeInterval()).isTrue();
+    assertThat(row(vm, "North facade scaffold").interval()).isEqualTo("10 days");
+    assertThat(services.sites().structure(row(vm, "North facade scaffold").structureId()).inspectionIntervalDays())
+        .isEqualTo(10);
+  }
+
+  @Test
   void anOpenWalkRoundShowsHowFarItHasGot() {
     services = DemoDatabase.withDemo(dir);
     DemoWalk.record(services, 20);
