@@ -46,6 +46,9 @@ import org.bracewalk.ui.walk.WalkViewModel;
 
 /** Builds every screen over the application's services, each with fresh data from the database. */
 public final class AppScreens implements ScreenFactory {
+  /** The camera folder, remembered in the user's preferences between sessions. */
+  private final org.bracewalk.ui.walk.CameraFolder.Setting cameraFolder =
+      org.bracewalk.ui.walk.CameraFolder.Setting.userPreferences();
   private final AppServices services;
   private final PlaneAnalyzer analyzer;
   private final Clock clock;
@@ -182,6 +185,7 @@ public final class AppScreens implements ScreenFactory {
             InspectionMarkRecorder.existing(services.inspections(), insp.id(), plane.id()),
             new InspectionMarkRecorder(services.inspections(), services.store(), insp.id(), plane.id(), insp.inspectorName()),
             analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised());
+    vm.useCameraFolderSetting(cameraFolder);
     WalkView view = new WalkView(vm);
     Selection here = new Selection(st.id(), plane.id(), insp.id());
     BorderPane wrap = new BorderPane(view);

@@ -63,6 +63,11 @@ public final class BracewalkApp {
         }
 
         @Override
+        public java.util.Optional<java.nio.file.Path> chooseFolder(String title, java.nio.file.Path initial) {
+          return d().chooseFolder(title, initial);
+        }
+
+        @Override
         public java.util.Optional<String> askText(String title, String message, String initial) {
           return d().askText(title, message, initial);
         }

@@ -22,6 +22,11 @@ public interface DialogService {
   /** Lets the person pick photo files, starting in {@code folder} if given; empty when cancelled. */
   List<Path> choosePhotos(String title, Path folder);
 
+  /** Lets the person pick a folder, starting in {@code initial} if given; empty when cancelled. */
+  default Optional<Path> chooseFolder(String title, Path initial) {
+    return Optional.empty();
+  }
+
   /** Asks for a line of text (a name), offering {@code initial}; empty when cancelled. */
   Optional<String> askText(String title, String message, String initial);
 

@@ -65,6 +65,16 @@ public final class FxDialogService implements DialogService {
   }
 
   @Override
+  public Optional<Path> chooseFolder(String title, Path initial) {
+    javafx.stage.DirectoryChooser dc = new javafx.stage.DirectoryChooser();
+    dc.setTitle(title);
+    if (initial != null && initial.toFile().isDirectory()) {
+      dc.setInitialDirectory(initial.toFile());
+    }
+    return Optional.ofNullable(dc.showDialog(owner)).map(File::toPath);
+  }
+
+  @Override
   public Optional<String> askText(String title, String message, String initial) {
     javafx.scene.control.TextInputDialog d = new javafx.scene.control.TextInputDialog(initial);
     d.initOwner(owner);

@@ -224,7 +224,19 @@ public final class WalkView extends BorderPane {
     details.addRow(0, Widgets.mnemonic("_Defect", defect), defect);
     details.addRow(1, Widgets.mnemonic("_Bow mm", bow), bow);
     details.addRow(2, Widgets.mnemonic("N_ote", note), note);
-    details.addRow(3, photos, photoCount);
+    Button camera = new Button("From camera folder (G)");
+    camera.setId("walk-camera");
+    camera.setOnAction(e -> {
+      vm.addCameraPhotos(false);
+      canvas.requestFocus();
+    });
+    camera.setFocusTraversable(false);
+    photos.setMinWidth(Button.USE_PREF_SIZE);
+    camera.setMinWidth(Button.USE_PREF_SIZE);
+    details.add(Widgets.row(8, photos, camera), 0, 3, 2, 1);
+    details.add(photoCount, 0, 4, 2, 1);
+    details.add(Widgets.hint("G takes the pictures the camera saved in its folder since the last mark;"
+        + " Shift+G chooses the folder."), 0, 5, 2, 1);
     GridPane.setHgrow(defect, Priority.ALWAYS);
     GridPane.setHgrow(note, Priority.ALWAYS);
     Label bowHint = Widgets.text(vm.bowHintProperty(), "hint");
@@ -296,6 +308,7 @@ public final class WalkView extends BorderPane {
       case PERIOD -> vm.memberSeenProperty().set(null);
       case T -> vm.toggleMemberKind();
       case F -> vm.addPhotos();
+      case G -> vm.addCameraPhotos(e.isShiftDown());
       case O -> vm.cycleOrder();
       default -> handled = false;
     }
@@ -332,7 +345,8 @@ public final class WalkView extends BorderPane {
             KeyHelp.of("/  \\  X  .", "member seen: rising, falling, cross, follows the state"),
             KeyHelp.of("T", "member seen is tension-only / rigid"),
             KeyHelp.of("Alt+ D B O", "defect, bow, note fields; Enter or Esc back to the plane"),
-            KeyHelp.of("F", "attach photos from a file or camera folder"),
+            KeyHelp.of("F", "attach photo files"),
+            KeyHelp.of("G, Shift+G", "attach the camera folder's new photos; choose the camera folder"),
             KeyHelp.of("Ctrl+P", "another plane of the same inspection")));
   }
 }

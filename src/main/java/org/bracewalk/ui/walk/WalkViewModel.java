@@ -100,6 +100,11 @@ public final class WalkViewModel {
   private final ObjectProperty<MemberKind> memberKind =
       new SimpleObjectProperty<>(this, "memberKind", MemberKind.RIGID);
   private Path photoFolder;
+  private CameraFolder.Setting cameraFolder = CameraFolder.Setting.inMemory();
+  /** Photos from the camera folder count from here: the walk-round's opening, then each mark. */
+  private java.time.Instant cameraSince = java.time.Instant.now();
+  /** Camera photos already attached in this session, so none is taken twice. */
+  private final java.util.Set<Path> cameraTaken = new java.util.HashSet<>();
 
   /** One mark made in this session, so undo can correct it. */
   private record Step(PanelRef panel, RecordedMark before, RecordedMark made) {}
@@ -190,6 +195,7 @@ public final class WalkViewModel {
     undo.push(new Step(p, before, made));
     canUndo.set(true);
     clearDetails();
+    cameraSince = java.time.Instant.now();
     status.set("Saved " + p + ": " + describe(m) + " (record " + made.id() + ")");
     quietCursor = true;
     try {
@@ -285,6 +291,55 @@ public final class WalkViewModel {
         photoFolder = parent;
       }
     }
+  }
+
+  /** Where the camera folder is remembered (the app: the user's preferences; by default memory). */
+  public void useCameraFolderSetting(CameraFolder.Setting setting) {
+    cameraFolder = Objects.requireNonNull(setting);
+  }
+
+  /** The camera folder in use, if one has been chosen. */
+  public java.util.Optional<Path> cameraFolder() {
+    return cameraFolder.get();
+  }
+
+  /**
+   * Attaches to the next mark the photos saved in the camera folder since the previous mark (or
+   * since the walk-round opened); asks for the folder the first time, or when {@code choose}.
+   */
+  public void addCameraPhotos(boolean choose) {
+    java.util.Optional<Path> folder = cameraFolder.get();
+    if (choose || folder.isEmpty() || !java.nio.file.Files.isDirectory(folder.get())) {
+      java.util.Optional<Path> picked = dialogs.chooseFolder(
+          "Camera folder: where the camera or phone saves its pictures", folder.orElse(photoFolder));
+      if (picked.isEmpty()) {
+        return;
+      }
+      cameraFolder.set(picked.get());
+      folder = picked;
+    }
+    List<Path> found;
+    try {
+      found = CameraFolder.photosSince(folder.get(), cameraSince, cameraTaken);
+    } catch (java.io.IOException e) {
+      error.set("The camera folder " + folder.get() + " cannot be read (" + e.getMessage()
+          + "). Press Shift+G to choose another, or F to pick the files.");
+      return;
+    }
+    found = found.stream().filter(f -> !photos.contains(f)).toList();
+    if (found.isEmpty()) {
+      status.set("No new photos in " + folder.get() + " since "
+          + java.time.format.DateTimeFormatter.ofPattern("HH:mm:ss").format(
+              cameraSince.atZone(java.time.ZoneId.systemDefault()))
+          + " (the previous mark). Take the photo, then press G again.");
+      return;
+    }
+    error.set("");
+    photos.addAll(found);
+    cameraTaken.addAll(found);
+    status.set(found.size() + (found.size() == 1 ? " photo" : " photos") + " from " + folder.get()
+        + " attached to the next mark: " + String.join(", ",
+            found.stream().map(f -> f.getFileName().toString()).toList()) + ".");
   }
 
   /** Switches the member seen between rigid and tension-only. */

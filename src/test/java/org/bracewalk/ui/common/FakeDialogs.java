@@ -16,6 +16,7 @@ public final class FakeDialogs implements DialogService {
   public final Deque<List<Path>> photoAnswers = new ArrayDeque<>();
   public final Deque<Optional<Path>> saveAnswers = new ArrayDeque<>();
   public final Deque<Optional<String>> textAnswers = new ArrayDeque<>();
+  public final Deque<Optional<Path>> folderAnswers = new ArrayDeque<>();
 
   @Override
   public boolean confirm(String title, String message, String confirmLabel) {
@@ -37,6 +38,12 @@ public final class FakeDialogs implements DialogService {
   public List<Path> choosePhotos(String title, Path folder) {
     asked.add(title);
     return photoAnswers.isEmpty() ? List.of() : photoAnswers.pop();
+  }
+
+  @Override
+  public Optional<Path> chooseFolder(String title, Path initial) {
+    asked.add(title);
+    return folderAnswers.isEmpty() ? Optional.empty() : folderAnswers.pop();
   }
 
   @Override

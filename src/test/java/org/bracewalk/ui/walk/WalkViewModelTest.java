@@ -54,6 +54,48 @@ class WalkViewModelTest {
   }
 
   @Test
+  void theCameraFolderGivesTheNextMarkThePhotosSavedSinceThePreviousMark(@org.junit.jupiter.api.io.TempDir Path dir)
+      throws Exception {
+    Path camera = java.nio.file.Files.createDirectories(dir.resolve("DCIM"));
+    java.time.Instant now = java.time.Instant.now();
+    Path old = photo(camera, "IMG_0001.jpg", now.minusSeconds(3600)); // before the walk-round opened
+    photo(camera, "notes.txt", now.plusSeconds(5)); // not a photo
+    WalkViewModel vm = walk(List.of(), false);
+    CameraFolder.Setting setting = CameraFolder.Setting.inMemory();
+    vm.useCameraFolderSetting(setting);
+    Path first = photo(camera, "IMG_0002.JPG", now.plusSeconds(10));
+    // the first time the folder is asked for, then remembered
+    dialogs.folderAnswers.push(java.util.Optional.of(camera));
+    vm.addCameraPhotos(false);
+    assertThat(setting.get()).contains(camera);
+    assertThat(vm.photos()).containsExactly(first.toAbsolutePath());
+    vm.addCameraPhotos(false); // nothing new: nothing added twice
+    assertThat(vm.photos()).containsExactly(first.toAbsolutePath());
+    assertThat(vm.statusProperty().get()).contains("No new photos");
+    assertThat(vm.mark(PanelState.DAMAGED_EFFECTIVE)).isTrue();
+    assertThat(recorder.rows.get(0).mark().photos()).containsExactly(first.toAbsolutePath());
+    assertThat(vm.photos()).isEmpty();
+    // after the mark only what arrives later counts; the folder is not asked for again
+    int asked = dialogs.asked.size();
+    Path second = photo(camera, "IMG_0003.jpeg", java.time.Instant.now().plusSeconds(20));
+    Path third = photo(camera, "IMG_0004.png", java.time.Instant.now().plusSeconds(30));
+    vm.addCameraPhotos(false);
+    assertThat(dialogs.asked).hasSize(asked);
+    assertThat(vm.photos()).containsExactly(second.toAbsolutePath(), third.toAbsolutePath());
+    assertThat(vm.photos()).doesNotContain(old.toAbsolutePath(), first.toAbsolutePath());
+    // a folder that has gone: asked again; cancelled: nothing changes
+    setting.set(dir.resolve("unplugged"));
+    vm.addCameraPhotos(false);
+    assertThat(vm.photos()).hasSize(2);
+  }
+
+  private static Path photo(Path folder, String name, java.time.Instant written) throws java.io.IOException {
+    Path f = java.nio.file.Files.write(folder.resolve(name), new byte[] {(byte) 0xFF, (byte) 0xD8, 1, 2});
+    java.nio.file.Files.setLastModifiedTime(f, java.nio.file.attribute.FileTime.from(written));
+    return f;
+  }
+
+  @Test
   void whilePanelsRemainUnseenTheVerdictSaysItDependsOnThem() {
     WalkViewModel vm = walk(List.of(), false);
     assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.DEPENDS_ON_UNSEEN);
