@@ -14,10 +14,14 @@ public final class Main {
     PrintWriter out = new PrintWriter(System.out, true, StandardCharsets.UTF_8);
     PrintWriter err = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
     var app = GuiLauncher.appRequest(args);
-    int code =
-        app.isPresent()
-            ? GuiLauncher.run(app.get(), System.getenv(), err)
-            : Launcher.run(args, out, err, System.getenv());
+    int code;
+    if (app.isPresent()) {
+      // the app opens faster in a second process that maps its classes from an archive
+      var relaunched = QuickStart.runApp(args, System.getenv(), err);
+      code = relaunched.isPresent() ? relaunched.getAsInt() : GuiLauncher.run(app.get(), System.getenv(), err);
+    } else {
+      code = Launcher.run(args, out, err, System.getenv());
+    }
     out.flush();
     err.flush();
     System.exit(code);

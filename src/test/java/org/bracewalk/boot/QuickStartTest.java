@@ -1,0 +1,115 @@
+package org.bracewalk.boot;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** When the app is opened in a second process that maps an archive of its classes, and how. */
+class QuickStartTest {
+  @TempDir Path dir;
+
+  private Path jar() throws Exception {
+    Path jar = dir.resolve("bracewalk.jar");
+    if (!Files.exists(jar)) {
+      Files.write(jar, new byte[] {'P', 'K', 3, 4});
+    }
+    return jar;
+  }
+
+  private QuickStart.Here here(String classPath, List<String> options, Map<String, String> env, boolean hotSpot,
+      boolean child) {
+    return new QuickStart.Here(Optional.of("/opt/jdk/bin/java"), classPath, options, env, "Linux", dir.resolve("home"),
+        "/opt/jdk 17.0.15+6", hotSpot, child);
+  }
+
+  private QuickStart.Here linux(List<String> options) throws Exception {
+    return here(jar().toString(), options, Map.of("XDG_CACHE_HOME", dir.resolve("cache").toString()), true, false);
+  }
+
+  @Test
+  void theFirstRunWritesTheArchiveAndTheNextMapsIt() throws Exception {
+    var first = QuickStart.plan(linux(List.of("-Xmx1g")), "org.bracewalk.boot.Main", List.of("--db", "site.db"));
+    assertThat(first).isPresent();
+    Path archive = first.get().archive();
+    assertThat(archive.getParent()).isEqualTo(dir.resolve("cache").resolve("bracewalk"));
+    assertThat(archive.getFileName().toString()).matches("classes-[0-9a-f]{16}\\.jsa");
+    Path part = first.get().writing().orElseThrow();
+    List<String> c = first.get().command();
+    assertThat(c.get(0)).isEqualTo("/opt/jdk/bin/java");
+    assertThat(c).contains("-Xmx1g", "-XX:ArchiveClassesAtExit=" + part, "-D" + QuickStart.CHILD_PROPERTY + "=1");
+    assertThat(c.subList(c.indexOf("-cp"), c.size()))
+        .containsExactly("-cp", jar().toAbsolutePath().toString(), "org.bracewalk.boot.Main", "--db", "site.db");
+    // the session ends: the archive it wrote is put in place, older archives dropped
+    Path older = Files.writeString(archive.resolveSibling("classes-00000000000000aa.jsa"), "old");
+    Files.writeString(part, "archive bytes");
+    QuickStart.keep(first.get());
+    assertThat(archive).exists();
+    assertThat(part).doesNotExist();
+    assertThat(older).doesNotExist();
+    var next = QuickStart.plan(linux(List.of()), "org.bracewalk.boot.Main", List.of());
+    assertThat(next.get().writing()).isEmpty();
+    assertThat(next.get().command()).contains("-XX:SharedArchiveFile=" + archive)
+        .noneMatch(o -> o.startsWith("-XX:ArchiveClassesAtExit"));
+  }
+
+  @Test
+  void aHalfWrittenArchiveIsClearedAway() throws Exception {
+    var plan = QuickStart.plan(linux(List.of()), "org.bracewalk.boot.Main", List.of()).orElseThrow();
+    Path part = plan.writing().orElseThrow();
+    Files.write(part, new byte[0]);
+    QuickStart.keep(plan);
+    assertThat(part).doesNotExist();
+    assertThat(plan.archive()).doesNotExist();
+  }
+
+  @Test
+  void aNewBuildOfTheJarGetsANewArchive() throws Exception {
+    String before = QuickStart.archiveName(jar(), "/opt/jdk 17.0.15+6");
+    Files.setLastModifiedTime(jar(), FileTime.fromMillis(Files.getLastModifiedTime(jar()).toMillis() + 60_000));
+    assertThat(QuickStart.archiveName(jar(), "/opt/jdk 17.0.15+6")).isNotEqualTo(before);
+    assertThat(QuickStart.archiveName(jar(), "/opt/jdk 21.0.5+11")).isNotEqualTo(QuickStart.archiveName(jar(), "/opt/jdk 17.0.15+6"));
+  }
+
+  @Test
+  void itStandsAsideWhereItCouldGetInTheWay() throws Exception {
+    String cp = jar().toString();
+    Map<String, String> env = Map.of("XDG_CACHE_HOME", dir.resolve("cache").toString());
+    String main = "org.bracewalk.boot.Main";
+    // already the second process; turned off; not HotSpot; not one jar; a debugger or agent attached
+    assertThat(QuickStart.plan(here(cp, List.of(), env, true, true), main, List.of())).isEmpty();
+    assertThat(QuickStart.plan(here(cp, List.of(), Map.of(QuickStart.VARIABLE, "0"), true, false), main, List.of()))
+        .isEmpty();
+    assertThat(QuickStart.plan(here(cp, List.of(), env, false, false), main, List.of())).isEmpty();
+    assertThat(QuickStart.plan(here(cp + java.io.File.pathSeparator + "other.jar", List.of(), env, true, false), main,
+        List.of())).isEmpty();
+    assertThat(QuickStart.plan(here(dir.resolve("classes").toString(), List.of(), env, true, false), main, List.of()))
+        .isEmpty();
+    for (String o : List.of("-agentlib:jdwp=transport=dt_socket", "-javaagent:x.jar", "-Xshare:off",
+        "-XX:SharedArchiveFile=mine.jsa")) {
+      assertThat(QuickStart.plan(here(cp, List.of(o), env, true, false), main, List.of())).as(o).isEmpty();
+    }
+    assertThat(QuickStart.plan(here(cp, List.of("-Xmx2g"), env, true, false), main, List.of())).isPresent();
+  }
+
+  @Test
+  void theArchiveLivesInEachSystemsCacheFolder() throws Exception {
+    Path home = dir.resolve("home");
+    var mac = new QuickStart.Here(Optional.of("java"), "", List.of(), Map.of(), "Mac OS X", home, "", true, false);
+    assertThat(QuickStart.cacheFolder(mac)).isEqualTo(home.resolve("Library/Caches/Bracewalk"));
+    var win = new QuickStart.Here(Optional.of("java"), "", List.of(), Map.of("LOCALAPPDATA", dir.resolve("local").toString()),
+        "Windows 11", home, "", true, false);
+    assertThat(QuickStart.cacheFolder(win)).isEqualTo(dir.resolve("local").resolve("Bracewalk").resolve("Cache"));
+    var linux = new QuickStart.Here(Optional.of("java"), "", List.of(), Map.of(), "Linux", home, "", true, false);
+    assertThat(QuickStart.cacheFolder(linux)).isEqualTo(home.resolve(".cache/bracewalk"));
+    assertThat(QuickStart.isHotSpot("OpenJDK 64-Bit Server VM")).isTrue();
+    assertThat(QuickStart.isHotSpot("Java HotSpot(TM) 64-Bit Server VM")).isTrue();
+    assertThat(QuickStart.isHotSpot("Eclipse OpenJ9 VM")).isFalse();
+  }
+}
