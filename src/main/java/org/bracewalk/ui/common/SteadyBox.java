@@ -11,13 +11,35 @@ import javafx.scene.layout.VBox;
  * line), the remembered answer is the same and costs nothing.
  */
 public class SteadyBox extends VBox {
-  /** Two widths each: a scroll pane asks at its width with and without room for its scroll bar. */
-  private final double[] prefFor = {Double.NaN, Double.NaN};
-  private final double[] pref = new double[2];
-  private final double[] minFor = {Double.NaN, Double.NaN};
-  private final double[] min = new double[2];
-  private int prefNext;
-  private int minNext;
+  /**
+   * One height, remembered for two widths: a scroll pane asks at its width with and without room
+   * for its scroll bar.
+   */
+  private static final class Memo {
+    private final double[] widths = {Double.NaN, Double.NaN};
+    private final double[] heights = new double[2];
+    private int next;
+
+    double get(double width, java.util.function.DoubleUnaryOperator compute) {
+      for (int k = 0; k < 2; k++) {
+        if (widths[k] == width) {
+          return heights[k];
+        }
+      }
+      double h = compute.applyAsDouble(width);
+      widths[next] = width;
+      heights[next] = h;
+      next = 1 - next;
+      return h;
+    }
+
+    void forget() {
+      java.util.Arrays.fill(widths, Double.NaN);
+    }
+  }
+
+  private final Memo pref = new Memo();
+  private final Memo min = new Memo();
 
   public SteadyBox(double spacing, Node... children) {
     super(spacing, children);
@@ -25,38 +47,20 @@ public class SteadyBox extends VBox {
 
   @Override
   public void requestLayout() {
-    if (prefFor != null) { // null while VBox's constructor sets the spacing
-      java.util.Arrays.fill(prefFor, Double.NaN);
-      java.util.Arrays.fill(minFor, Double.NaN);
+    if (pref != null) { // null while VBox's constructor sets the spacing
+      pref.forget();
+      min.forget();
     }
     super.requestLayout();
   }
 
   @Override
   protected double computePrefHeight(double width) {
-    for (int k = 0; k < 2; k++) {
-      if (prefFor[k] == width) {
-        return pref[k];
-      }
-    }
-    double h = super.computePrefHeight(width);
-    prefFor[prefNext] = width;
-    pref[prefNext] = h;
-    prefNext = 1 - prefNext;
-    return h;
+    return pref.get(width, super::computePrefHeight);
   }
 
   @Override
   protected double computeMinHeight(double width) {
-    for (int k = 0; k < 2; k++) {
-      if (minFor[k] == width) {
-        return min[k];
-      }
-    }
-    double h = super.computeMinHeight(width);
-    minFor[minNext] = width;
-    min[minNext] = h;
-    minNext = 1 - minNext;
-    return h;
+    return min.get(width, super::computeMinHeight);
   }
 }
