@@ -4,7 +4,9 @@ import org.bracewalk.core.model.PanelState;
 
 /**
  * How each panel state is drawn: a line style and a badge letter, so that no state depends on
- * colour alone. The badge letter is also the key that records the state in the walk-round.
+ * colour alone. The line styles differ among themselves too (dash pattern, width, a double line,
+ * damage ticks), because a large plane is drawn too small for badges. The badge letter is also
+ * the key that records the state in the walk-round.
  */
 public enum PanelLook {
   NOT_RECORDED("?", "not inspected yet", new double[] {6, 4}, 1.5, "#8a8a8a"),
@@ -12,8 +14,9 @@ public enum PanelLook {
   DAMAGED_EFFECTIVE("D", "damaged, still effective", null, 3.0, "#1b1b1b"),
   DAMAGED_INEFFECTIVE("U", "damaged beyond use", new double[] {11, 5}, 3.0, "#b3261e"),
   MISSING("M", "missing", new double[] {2, 5}, 2.0, "#b3261e"),
-  EXTRA("E", "extra: not in the design", null, 3.0, "#5b2a86"),
-  NOT_REACHABLE("R", "not reachable", new double[] {6, 4}, 1.5, "#8a8a8a");
+  /** drawn as a double line */
+  EXTRA("E", "extra: not in the design", null, 1.3, "#5b2a86"),
+  NOT_REACHABLE("R", "not reachable", new double[] {8, 3, 1.5, 3}, 1.5, "#8a8a8a");
 
   private final String badge;
   private final String words;
@@ -48,6 +51,16 @@ public enum PanelLook {
 
   public String colour() {
     return colour;
+  }
+
+  /** True when the member is drawn as two thin parallel lines (a member the design does not have). */
+  public boolean doubled() {
+    return this == EXTRA;
+  }
+
+  /** True when two short strokes cross the member (a dent or bend). */
+  public boolean ticked() {
+    return this == DAMAGED_EFFECTIVE || this == DAMAGED_INEFFECTIVE;
   }
 
   public static PanelLook of(PanelState state) {

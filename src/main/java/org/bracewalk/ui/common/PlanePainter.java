@@ -418,7 +418,7 @@ public final class PlanePainter {
   private static void member(GraphicsContext g, PlaneGeometry geo, PanelRef p, Brace b, PanelLook look,
       Pass pass, MemberLines lines) {
     double inset = Math.min(4, Math.min(geo.panelWidth(p), geo.panelHeight(p)) * 0.08);
-    double[][] segs = geo.members(p, b.diagonal(), inset);
+    double[][] segs = look.doubled() ? doubled(geo.members(p, b.diagonal(), inset)) : geo.members(p, b.diagonal(), inset);
     Color c = colour(look);
     boolean tension = b.kind() == MemberKind.TENSION_ONLY;
     double width = tension ? Math.max(1.2, look.width() * 0.5) : look.width();
@@ -449,10 +449,24 @@ public final class PlanePainter {
         g.strokeOval(s[0] - r, s[1] - r, 2 * r, 2 * r);
         g.strokeOval(s[2] - r, s[3] - r, 2 * r, 2 * r);
       }
-      if (look == PanelLook.DAMAGED_EFFECTIVE || look == PanelLook.DAMAGED_INEFFECTIVE) {
+      if (look.ticked()) {
         ticks(g, s, c);
       }
     }
+  }
+
+  /** Each segment as two parallel ones, 1.7 px either side of it. */
+  private static double[][] doubled(double[][] segs) {
+    double[][] out = new double[segs.length * 2][];
+    for (int k = 0; k < segs.length; k++) {
+      double[] s = segs[k];
+      double len = Math.hypot(s[2] - s[0], s[3] - s[1]);
+      double nx = len < 1e-9 ? 0 : -(s[3] - s[1]) / len * 1.7;
+      double ny = len < 1e-9 ? 0 : (s[2] - s[0]) / len * 1.7;
+      out[2 * k] = new double[] {s[0] + nx, s[1] + ny, s[2] + nx, s[3] + ny};
+      out[2 * k + 1] = new double[] {s[0] - nx, s[1] - ny, s[2] - nx, s[3] - ny};
+    }
+    return out;
   }
 
   /** Two short strokes across the member: the mark of a dent or bend. */
