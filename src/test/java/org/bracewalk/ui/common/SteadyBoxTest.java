@@ -36,7 +36,12 @@ class SteadyBoxTest {
       steady.getScene().getRoot().applyCss();
       double[] after = {steady.prefHeight(120), plain.prefHeight(120), steady.prefHeight(300), plain.prefHeight(300),
           steady.minHeight(120), plain.minHeight(120)};
-      return new double[][] {before, after};
+      // larger text for a touch screen (the A+ key scales the root's font): heights follow
+      steady.getScene().getRoot().setStyle("-fx-font-size: 24px;");
+      steady.getScene().getRoot().applyCss();
+      double[] larger = {steady.prefHeight(120), plain.prefHeight(120), steady.prefHeight(300), plain.prefHeight(300),
+          steady.minHeight(120), plain.minHeight(120)};
+      return new double[][] {before, after, larger};
     });
     for (double[] row : h) {
       assertThat(row[0]).isEqualTo(row[1]);
@@ -44,6 +49,7 @@ class SteadyBoxTest {
       assertThat(row[4]).isEqualTo(row[5]);
     }
     assertThat(h[1][0]).as("taller at 120 px after the text grew").isGreaterThan(h[0][0]);
+    assertThat(h[2][0]).as("taller again in a larger font").isGreaterThan(h[1][0]);
     assertThat(h[0][0]).as("narrower means taller").isGreaterThan(h[0][2]);
   }
 }
