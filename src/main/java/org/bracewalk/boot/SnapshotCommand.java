@@ -42,6 +42,10 @@ final class SnapshotCommand implements Callable<Integer> {
   @Option(names = "--list", description = "list the screens that can be rendered")
   boolean list;
 
+  @Option(names = "--size", paramLabel = "WIDTHxHEIGHT", defaultValue = "1360x860",
+      description = "picture size in pixels (default ${DEFAULT-VALUE}; 1280x800 is a common tablet)")
+  String size;
+
   private final AppContext context;
   private final Map<String, String> env;
 
@@ -70,6 +74,19 @@ final class SnapshotCommand implements Callable<Integer> {
       err.flush();
       return Launcher.BAD_INPUT;
     }
+    java.util.regex.Matcher m = java.util.regex.Pattern.compile("(\\d{3,4})x(\\d{3,4})").matcher(size.strip());
+    if (!m.matches()) {
+      err.println("bracewalk snapshot: --size '" + size + "': give WIDTHxHEIGHT in pixels, e.g. 1280x800");
+      err.flush();
+      return Launcher.BAD_INPUT;
+    }
+    int width = Integer.parseInt(m.group(1));
+    int height = Integer.parseInt(m.group(2));
+    if (width < 640 || height < 480) {
+      err.println("bracewalk snapshot: --size " + size + " is smaller than the app's 640x480 least");
+      err.flush();
+      return Launcher.BAD_INPUT;
+    }
     Path dir;
     try {
       dir = Files.createTempDirectory("bracewalk-snapshot");
@@ -82,12 +99,11 @@ final class SnapshotCommand implements Callable<Integer> {
         ScreenShots shots = new ScreenShots(services, context.analyzer(), context.clock(),
             ReportIssuers.over(context, services, env));
         HeadlessFx.onFx(() -> {
-          shots.render(screen, out);
+          shots.render(screen, out, width, height);
           return null;
         });
       }
-      o.println("wrote " + out.toAbsolutePath() + " (" + screen + ", "
-          + (int) ScreenShots.WIDTH + " x " + (int) ScreenShots.HEIGHT + ")");
+      o.println("wrote " + out.toAbsolutePath() + " (" + screen + ", " + width + " x " + height + ")");
       o.flush();
       return 0;
     } finally {

@@ -57,6 +57,11 @@ public final class ScreenShots {
    * the others it must hold the demo site, and the scripted walk is recorded on first use.
    */
   public void render(String name, Path out) {
+    render(name, out, WIDTH, HEIGHT);
+  }
+
+  /** As {@link #render(String, Path)}, at {@code width} x {@code height} pixels (a tablet's, say). */
+  public void render(String name, Path out, double width, double height) {
     if (!NAMES.contains(name)) {
       throw new IllegalArgumentException("no screen named '" + name + "'; one of " + String.join(", ", NAMES));
     }
@@ -91,7 +96,7 @@ public final class ScreenShots {
       window.toggleHelp();
     }
     Parent root = window.root();
-    ScreenPicture.write(root, WIDTH, HEIGHT, out);
+    ScreenPicture.write(root, width, height, out);
   }
 
   private Inspection openWalk(PlaneRecord facade) {

@@ -44,6 +44,23 @@ class AppLaunchTest {
   }
 
   @Test
+  void snapshotDrawsAtATabletsSizeAndRefusesASizeItCannotRead() throws Exception {
+    Path png = dir.resolve("tablet.png");
+    StringWriter out = new StringWriter();
+    StringWriter err = new StringWriter();
+    assertThat(run(out, err, "snapshot", "--screen", "overview", "--size", "1280x800", "--out", png.toString()))
+        .as(err.toString()).isZero();
+    BufferedImage img = ImageIO.read(png.toFile());
+    assertThat(img.getWidth()).isEqualTo(1280);
+    assertThat(img.getHeight()).isEqualTo(800);
+    assertThat(out.toString()).contains("1280 x 800");
+    StringWriter err2 = new StringWriter();
+    assertThat(run(new StringWriter(), err2, "snapshot", "--screen", "walk", "--size", "big", "--out",
+        dir.resolve("y.png").toString())).isEqualTo(2);
+    assertThat(err2.toString()).contains("--size 'big'").contains("WIDTHxHEIGHT");
+  }
+
+  @Test
   void snapshotDrawsTheWalkRoundScreenAsAPicture() throws Exception {
     Path png = dir.resolve("walk.png");
     StringWriter out = new StringWriter();
