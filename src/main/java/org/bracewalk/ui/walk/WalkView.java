@@ -42,6 +42,11 @@ import org.bracewalk.ui.common.Widgets;
 public final class WalkView extends BorderPane {
   private final WalkViewModel vm;
   private final PlaneCanvas canvas = new PlaneCanvas();
+  private final javafx.scene.control.TitledPane key =
+      new javafx.scene.control.TitledPane("Key to the drawing (K folds and unfolds it)", null);
+
+  /** Window heights below this start with the key folded. */
+  static final double ROOM_FOR_KEY = 840;
 
   /** The state keys, in button order; digits 1 to 6 do the same. */
   static final List<PanelState> STATES =
@@ -92,8 +97,32 @@ public final class WalkView extends BorderPane {
     cursorText.setId("walk-cursor");
     cursorText.setStyle("-fx-font-weight: bold;");
     Legend legend = new Legend(Legend.Set_.WALK);
-    // the key's sizes are remembered: the line above it changes with every mark
-    VBox centre = new VBox(8, banner, canvas, cursorText, new SteadyBox(0, legend));
+    // the key's sizes are remembered: the line above it changes with every mark. On a short
+    // screen (a tablet) it starts folded, so the plane keeps the room; K or a click unfolds it.
+    key.setContent(new SteadyBox(0, legend));
+    key.setId("walk-key");
+    key.setAnimated(false);
+    key.setFocusTraversable(false);
+    sceneProperty().addListener((o, was, now) -> {
+      if (now == null || was != null) {
+        return;
+      }
+      if (now.getHeight() > 0) {
+        key.setExpanded(now.getHeight() >= ROOM_FOR_KEY);
+      } else { // a scene still being made: decide once its height is known
+        javafx.beans.value.ChangeListener<Number> once = new javafx.beans.value.ChangeListener<>() {
+          @Override
+          public void changed(javafx.beans.value.ObservableValue<? extends Number> v, Number a, Number h) {
+            if (h.doubleValue() > 0) {
+              now.heightProperty().removeListener(this);
+              key.setExpanded(h.doubleValue() >= ROOM_FOR_KEY);
+            }
+          }
+        };
+        now.heightProperty().addListener(once);
+      }
+    });
+    VBox centre = new VBox(8, banner, canvas, cursorText, key);
     setCenter(centre);
 
     // The verdict stands above the scrolled controls, outside the scroll pane: its words change
@@ -309,6 +338,7 @@ public final class WalkView extends BorderPane {
       case T -> vm.toggleMemberKind();
       case F -> vm.addPhotos();
       case G -> vm.addCameraPhotos(e.isShiftDown());
+      case K -> key.setExpanded(!key.isExpanded());
       case O -> vm.cycleOrder();
       default -> handled = false;
     }
@@ -347,6 +377,7 @@ public final class WalkView extends BorderPane {
             KeyHelp.of("Alt+ D B O", "defect, bow, note fields; Enter or Esc back to the plane"),
             KeyHelp.of("F", "attach photo files"),
             KeyHelp.of("G, Shift+G", "attach the camera folder's new photos; choose the camera folder"),
+            KeyHelp.of("K", "fold or unfold the key to the drawing"),
             KeyHelp.of("Ctrl+P", "another plane of the same inspection")));
   }
 }
