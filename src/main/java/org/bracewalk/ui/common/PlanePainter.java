@@ -445,6 +445,8 @@ public final class PlanePainter {
         double r = 2.6;
         g.fillOval(s[0] - r, s[1] - r, 2 * r, 2 * r);
         g.fillOval(s[2] - r, s[3] - r, 2 * r, 2 * r);
+        g.setStroke(c); // in the second pass of a full paint the stroke is still the last panel's
+        g.setLineDashes();
         g.setLineWidth(1.3);
         g.strokeOval(s[0] - r, s[1] - r, 2 * r, 2 * r);
         g.strokeOval(s[2] - r, s[3] - r, 2 * r, 2 * r);

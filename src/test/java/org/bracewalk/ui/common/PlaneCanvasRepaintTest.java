@@ -32,6 +32,9 @@ class PlaneCanvasRepaintTest {
         braces.put(PanelRef.of(i, 1), Brace.rigid(Diagonal.RISING));
         braces.put(PanelRef.of(i, 4), Brace.rigid(Diagonal.FALLING));
         braces.put(PanelRef.of(i, 6), Brace.rigid(Diagonal.BOTH));
+        // rods: rings at both ends, drawn in the state's colour in either way of painting
+        braces.put(PanelRef.of(i, 2), Brace.tension(Diagonal.RISING));
+        braces.put(PanelRef.of(i, 5), Brace.tension(Diagonal.BOTH));
       }
       PlaneDesign d = new PlaneDesign(PlaneGrid.uniform(4, 6, Support.PINNED_BASE), braces, Set.of(PanelRef.of(1, 3)));
       PlaneCanvas incremental = new PlaneCanvas();
@@ -39,7 +42,8 @@ class PlaneCanvasRepaintTest {
       incremental.layout();
       Map<PanelRef, PanelFinding> f = new HashMap<>();
       Random rnd = new Random(7);
-      PanelState[] states = {PanelState.SOUND, PanelState.MISSING, PanelState.DAMAGED_EFFECTIVE, PanelState.NOT_REACHABLE};
+      PanelState[] states = {PanelState.SOUND, PanelState.MISSING, PanelState.DAMAGED_EFFECTIVE, PanelState.NOT_REACHABLE,
+          PanelState.DAMAGED_INEFFECTIVE};
       PanelRef cursor = PanelRef.of(1, 1);
       int partial = 0;
       for (int k = 0; k < 40; k++) {
@@ -88,5 +92,41 @@ class PlaneCanvasRepaintTest {
     assertThat(result[0]).as("partial repaints used").isGreaterThan(30);
     // anti-aliased edges drawn twice may darken a little; nothing may be missing or left behind
     assertThat(result[1]).as("pixels that differ clearly of %d", result[2]).isLessThan(result[2] / 500);
+  }
+
+  @Test
+  void aRodsRingsTakeTheColourOfItsOwnStateNotOfThePanelDrawnBeforeIt() {
+    HeadlessFx.start();
+    int[] reddish = HeadlessFx.onFx(() -> {
+      // bay 1: a rigid brace found missing (red); bay 2: a rod found sound (near black)
+      PlaneDesign d = PlaneDesign.of(PlaneGrid.uniform(1, 2, Support.PINNED_BASE), Map.of(
+          PanelRef.of(1, 1), Brace.rigid(Diagonal.RISING), PanelRef.of(1, 2), Brace.tension(Diagonal.RISING)));
+      Map<PanelRef, PanelFinding> f = Map.of(PanelRef.of(1, 1), PanelFinding.of(PanelState.MISSING),
+          PanelRef.of(1, 2), PanelFinding.of(PanelState.SOUND));
+      javafx.scene.canvas.Canvas c = new javafx.scene.canvas.Canvas(400, 240);
+      PlaneGeometry geo = PlanePainter.paint(c.getGraphicsContext2D(),
+          new PlanePicture(d, f, true, List.of(), Set.of(), List.of(), Set.of(), null), 400, 240);
+      PixelReader r = c.snapshot(null, null).getPixelReader();
+      int count = 0;
+      double inset = Math.min(4, Math.min(geo.panelWidth(PanelRef.of(1, 2)), geo.panelHeight(PanelRef.of(1, 2))) * 0.08);
+      for (double[] seg : geo.members(PanelRef.of(1, 2), Diagonal.RISING, inset)) {
+        for (int end = 0; end < 2; end++) {
+          int cx = (int) Math.round(seg[2 * end]);
+          int cy = (int) Math.round(seg[2 * end + 1]);
+          for (int y = cy - 4; y <= cy + 4; y++) {
+            for (int x = cx - 4; x <= cx + 4; x++) {
+              int argb = r.getArgb(x, y);
+              int red = (argb >> 16) & 255;
+              int green = (argb >> 8) & 255;
+              if (red > 140 && green < 90) {
+                count++;
+              }
+            }
+          }
+        }
+      }
+      return new int[] {count};
+    });
+    assertThat(reddish[0]).as("alarm-red pixels around the sound rod's rings").isZero();
   }
 }
