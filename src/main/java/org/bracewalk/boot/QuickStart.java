@@ -98,7 +98,8 @@ final class QuickStart {
     Path jar = Path.of(cp).toAbsolutePath();
     Path archive;
     try {
-      archive = cacheFolder(here).resolve(archiveName(jar, here.runtime()));
+      // the main class is part of the name: a headless benchmark's classes are not the app's
+      archive = cacheFolder(here).resolve(archiveName(jar, here.runtime(), mainClass));
     } catch (IOException e) {
       return Optional.empty();
     }
@@ -125,12 +126,16 @@ final class QuickStart {
     return Optional.of(new Plan(List.copyOf(command), archive, writing));
   }
 
-  /** The archive's file name: the jar (path, size, time) and the runtime, hashed. */
-  static String archiveName(Path jar, String runtime) throws IOException {
+  /**
+   * The archive's file name: {@code classes-MAIN-HASH.jsa}, the main class's simple name and a
+   * hash of the jar (path, size, time) and the runtime.
+   */
+  static String archiveName(Path jar, String runtime, String mainClass) throws IOException {
     String key = jar + "\n" + Files.size(jar) + "\n" + Files.getLastModifiedTime(jar).toMillis() + "\n" + runtime;
+    String main = mainClass.substring(mainClass.lastIndexOf('.') + 1).toLowerCase(Locale.ROOT);
     try {
       byte[] h = MessageDigest.getInstance("SHA-256").digest(key.getBytes(StandardCharsets.UTF_8));
-      return "classes-" + HexFormat.of().formatHex(h, 0, 8) + ".jsa";
+      return "classes-" + main + "-" + HexFormat.of().formatHex(h, 0, 8) + ".jsa";
     } catch (NoSuchAlgorithmException e) {
       throw new IllegalStateException(e);
     }
@@ -188,35 +193,55 @@ final class QuickStart {
     } catch (IllegalStateException shuttingDown) {
       // the JVM is already on its way out
     }
-    keep(plan.get());
+    keep(plan.get(), code);
     return OptionalInt.of(code);
   }
 
-  /** Puts a newly written archive in place (and drops older ones), or clears a half-written one. */
-  static void keep(Plan plan) {
-    if (plan.writing().isEmpty()) {
-      return;
-    }
-    Path temp = plan.writing().get();
-    try {
-      if (Files.isRegularFile(temp) && Files.size(temp) > 0) {
-        Files.move(temp, plan.archive(), StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        try (DirectoryStream<Path> old = Files.newDirectoryStream(plan.archive().getParent(), "classes-*.jsa")) {
-          for (Path p : old) {
-            if (!p.equals(plan.archive())) {
-              Files.deleteIfExists(p);
-            }
-          }
-        }
-      } else {
-        Files.deleteIfExists(temp);
-      }
-    } catch (IOException e) {
+  /**
+   * After the second process ended with {@code exitStatus}: puts a newly written archive in place
+   * when that session ended normally (status 0; a session that failed, say with no display, loaded
+   * too little to be worth mapping), and clears away what is left over: the half-written file,
+   * older archives, and half-written files of sessions killed more than a day ago.
+   */
+  static void keep(Plan plan, int exitStatus) {
+    Path folder = plan.archive().getParent();
+    if (plan.writing().isPresent()) {
+      Path temp = plan.writing().get();
       try {
-        Files.deleteIfExists(temp);
-      } catch (IOException ignored) {
+        if (exitStatus == 0 && Files.isRegularFile(temp) && Files.size(temp) > 0) {
+          Files.move(temp, plan.archive(), StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        }
+      } catch (IOException e) {
         // a cache file: the next start tries again
       }
+      delete(temp);
+    }
+    java.time.Instant dayAgo = java.time.Instant.now().minus(java.time.Duration.ofDays(1));
+    String name = plan.archive().getFileName().toString();
+    String family = name.substring(0, name.lastIndexOf('-') + 1); // classes-main-
+    try (DirectoryStream<Path> files = Files.newDirectoryStream(folder, "classes-*")) {
+      for (Path p : files) {
+        String n = p.getFileName().toString();
+        boolean olderArchive = n.startsWith(family) && n.endsWith(".jsa") && !p.equals(plan.archive())
+            && Files.exists(plan.archive());
+        boolean staleHalf = n.endsWith(".part") && !plan.writing().map(p::equals).orElse(false)
+            && Files.getLastModifiedTime(p).toInstant().isBefore(dayAgo);
+        if (olderArchive || staleHalf) {
+          delete(p);
+        }
+      }
+    } catch (IOException e) {
+      // nothing to tidy, or not now
+    }
+  }
+
+  /** Deletes a cache file; the JDK writes archives read-only, which Windows will not delete. */
+  private static void delete(Path p) {
+    try {
+      p.toFile().setWritable(true);
+      Files.deleteIfExists(p);
+    } catch (IOException | SecurityException e) {
+      // left for the next start
     }
   }
 }

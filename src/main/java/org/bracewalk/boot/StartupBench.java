@@ -143,7 +143,7 @@ public final class StartupBench {
       }
     }
     int code = child.waitFor();
-    QuickStart.keep(plan.get());
+    QuickStart.keep(plan.get(), code);
     if (ready == 0) {
       System.err.println("the second process did not draw a window (exit " + code + ")");
       return 3;

@@ -39,7 +39,7 @@ class QuickStartTest {
     assertThat(first).isPresent();
     Path archive = first.get().archive();
     assertThat(archive.getParent()).isEqualTo(dir.resolve("cache").resolve("bracewalk"));
-    assertThat(archive.getFileName().toString()).matches("classes-[0-9a-f]{16}\\.jsa");
+    assertThat(archive.getFileName().toString()).matches("classes-main-[0-9a-f]{16}\\.jsa");
     Path part = first.get().writing().orElseThrow();
     List<String> c = first.get().command();
     assertThat(c.get(0)).isEqualTo("/opt/jdk/bin/java");
@@ -47,12 +47,20 @@ class QuickStartTest {
     assertThat(c.subList(c.indexOf("-cp"), c.size()))
         .containsExactly("-cp", jar().toAbsolutePath().toString(), "org.bracewalk.boot.Main", "--db", "site.db");
     // the session ends: the archive it wrote is put in place, older archives dropped
-    Path older = Files.writeString(archive.resolveSibling("classes-00000000000000aa.jsa"), "old");
+    Path older = Files.writeString(archive.resolveSibling("classes-main-00000000000000aa.jsa"), "old");
+    Path benchs = Files.writeString(archive.resolveSibling("classes-startupbench-00000000000000ab.jsa"), "bench");
     Files.writeString(part, "archive bytes");
-    QuickStart.keep(first.get());
+    Path killedLongAgo = Files.writeString(archive.resolveSibling("classes-main-00000000000000bb.jsa.99.part"), "half");
+    Files.setLastModifiedTime(killedLongAgo, FileTime.from(java.time.Instant.now().minus(java.time.Duration.ofDays(3))));
+    Path killedJustNow = Files.writeString(archive.resolveSibling("classes-main-00000000000000cc.jsa.98.part"), "half");
+    older.toFile().setReadOnly(); // as the JDK writes them
+    QuickStart.keep(first.get(), 0);
     assertThat(archive).exists();
     assertThat(part).doesNotExist();
     assertThat(older).doesNotExist();
+    assertThat(benchs).as("the benchmark's own archive is not the app's to drop").exists();
+    assertThat(killedLongAgo).doesNotExist();
+    assertThat(killedJustNow).as("another session may still be writing it").exists();
     var next = QuickStart.plan(linux(List.of()), "org.bracewalk.boot.Main", List.of());
     assertThat(next.get().writing()).isEmpty();
     assertThat(next.get().command()).contains("-XX:SharedArchiveFile=" + archive)
@@ -60,21 +68,35 @@ class QuickStartTest {
   }
 
   @Test
-  void aHalfWrittenArchiveIsClearedAway() throws Exception {
+  void aHalfWrittenArchiveOrOneOfAFailedSessionIsClearedAway() throws Exception {
     var plan = QuickStart.plan(linux(List.of()), "org.bracewalk.boot.Main", List.of()).orElseThrow();
     Path part = plan.writing().orElseThrow();
     Files.write(part, new byte[0]);
-    QuickStart.keep(plan);
+    QuickStart.keep(plan, 0);
+    assertThat(part).doesNotExist();
+    assertThat(plan.archive()).doesNotExist();
+    // a session that ended in failure (no display: exit 2) loaded too little to keep
+    Files.writeString(part, "archive of a session that never drew a window");
+    QuickStart.keep(plan, 2);
     assertThat(part).doesNotExist();
     assertThat(plan.archive()).doesNotExist();
   }
 
   @Test
+  void theBenchmarkAndTheAppKeepArchivesOfTheirOwn() throws Exception {
+    var app = QuickStart.plan(linux(List.of()), "org.bracewalk.boot.Main", List.of()).orElseThrow();
+    var bench = QuickStart.plan(linux(List.of()), "org.bracewalk.boot.StartupBench", List.of()).orElseThrow();
+    assertThat(app.archive()).isNotEqualTo(bench.archive());
+  }
+
+  @Test
   void aNewBuildOfTheJarGetsANewArchive() throws Exception {
-    String before = QuickStart.archiveName(jar(), "/opt/jdk 17.0.15+6");
+    String main = "org.bracewalk.boot.Main";
+    String before = QuickStart.archiveName(jar(), "/opt/jdk 17.0.15+6", main);
     Files.setLastModifiedTime(jar(), FileTime.fromMillis(Files.getLastModifiedTime(jar()).toMillis() + 60_000));
-    assertThat(QuickStart.archiveName(jar(), "/opt/jdk 17.0.15+6")).isNotEqualTo(before);
-    assertThat(QuickStart.archiveName(jar(), "/opt/jdk 21.0.5+11")).isNotEqualTo(QuickStart.archiveName(jar(), "/opt/jdk 17.0.15+6"));
+    assertThat(QuickStart.archiveName(jar(), "/opt/jdk 17.0.15+6", main)).isNotEqualTo(before);
+    assertThat(QuickStart.archiveName(jar(), "/opt/jdk 21.0.5+11", main))
+        .isNotEqualTo(QuickStart.archiveName(jar(), "/opt/jdk 17.0.15+6", main));
   }
 
   @Test
