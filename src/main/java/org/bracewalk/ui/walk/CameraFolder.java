@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
+import org.bracewalk.core.model.Photo;
 
 /**
  * The folder a camera (the tablet's own, or a phone or camera that syncs to the laptop) saves its
@@ -69,35 +70,92 @@ public final class CameraFolder {
     }
   }
 
-  /** True for the picture files a report can hold or the record keeps: JPEG, PNG, HEIC. */
+  /**
+   * True for the picture files the record keeps (JPEG, PNG, HEIC), leaving out hidden files: the
+   * {@code ._} shadows another system leaves on a card, a phone's {@code .pending-} and {@code
+   * .trashed-} files.
+   */
   static boolean isPhoto(Path f) {
     String n = f.getFileName().toString().toLowerCase(Locale.ROOT);
-    return n.endsWith(".jpg") || n.endsWith(".jpeg") || n.endsWith(".png") || n.endsWith(".heic");
+    return !n.startsWith(".")
+        && (n.endsWith(".jpg") || n.endsWith(".jpeg") || n.endsWith(".png") || n.endsWith(".heic"));
   }
 
-  /**
-   * The photo files directly in {@code folder} last written at or after {@code since}, not in
-   * {@code taken}, oldest first; the newest {@link #MOST_AT_ONCE} when there are more.
-   *
-   * @throws IOException when the folder cannot be read
-   */
-  public static List<Path> photosSince(Path folder, Instant since, Set<Path> taken) throws IOException {
-    record Found(Path path, Instant written) {}
-    List<Found> found = new ArrayList<>();
+  /** The names of the photo files directly in {@code folder}, as absolute paths (no sizes read). */
+  public static Set<Path> listing(Path folder) throws IOException {
+    Set<Path> out = new java.util.HashSet<>();
     try (DirectoryStream<Path> entries = Files.newDirectoryStream(folder)) {
       for (Path f : entries) {
-        if (!isPhoto(f) || taken.contains(f.toAbsolutePath())) {
-          continue;
-        }
-        BasicFileAttributes a = Files.readAttributes(f, BasicFileAttributes.class);
-        Instant written = a.lastModifiedTime().toInstant();
-        if (a.isRegularFile() && !written.isBefore(since)) {
-          found.add(new Found(f.toAbsolutePath(), written));
+        if (isPhoto(f)) {
+          out.add(f.toAbsolutePath());
         }
       }
     }
-    found.sort(Comparator.comparing(Found::written).thenComparing(Found::path));
-    List<Found> newest = found.subList(Math.max(0, found.size() - MOST_AT_ONCE), found.size());
-    return newest.stream().map(Found::path).toList();
+    return out;
+  }
+
+  /** The new photos found, oldest first, and how many more there were than are taken at once. */
+  public record Found(List<Path> photos, int leftOut) {}
+
+  /**
+   * The photos in {@code folder} that are new: not in {@code before} (the folder's listing at the
+   * previous mark) when that is known, else last written at or after {@code since} (less two
+   * seconds: a memory card keeps times to two seconds); never one in {@code taken}; only files of
+   * 1 byte to {@link Photo#MAX_BYTES} (one still being copied, or too large to keep, waits).
+   * Oldest first; the newest {@link #MOST_AT_ONCE} when there are more.
+   *
+   * @throws IOException when the folder cannot be read
+   */
+  public static Found newPhotos(Path folder, Set<Path> before, Instant since, Set<Path> taken) throws IOException {
+    record Candidate(Path path, Instant written) {}
+    Instant from = since.minusSeconds(2);
+    List<Candidate> found = new ArrayList<>();
+    for (Path f : listing(folder)) {
+      if (taken.contains(f) || (before != null && before.contains(f))) {
+        continue;
+      }
+      BasicFileAttributes a;
+      try {
+        a = Files.readAttributes(f, BasicFileAttributes.class);
+      } catch (IOException gone) {
+        continue; // removed while being read
+      }
+      Instant written = a.lastModifiedTime().toInstant();
+      if (!a.isRegularFile() || a.size() < 1 || a.size() > Photo.MAX_BYTES) {
+        continue;
+      }
+      if (before == null && written.isBefore(from)) {
+        continue;
+      }
+      found.add(new Candidate(f, written));
+    }
+    found.sort(Comparator.comparing(Candidate::written).thenComparing(Candidate::path));
+    int leftOut = Math.max(0, found.size() - MOST_AT_ONCE);
+    return new Found(found.subList(leftOut, found.size()).stream().map(Candidate::path).toList(), leftOut);
+  }
+
+  /**
+   * Why the photo file {@code f} cannot go with a mark now (gone, unreadable, empty, too large), or
+   * empty when it can.
+   */
+  public static Optional<String> problem(Path f) {
+    try {
+      if (!Files.isRegularFile(f)) {
+        return Optional.of("it is no longer there");
+      }
+      long size = Files.size(f);
+      if (size < 1) {
+        return Optional.of("it is empty (still being copied?)");
+      }
+      if (size > Photo.MAX_BYTES) {
+        return Optional.of("it holds " + size + " bytes; a photo may hold up to 20 MB");
+      }
+      if (!Files.isReadable(f)) {
+        return Optional.of("it cannot be read");
+      }
+      return Optional.empty();
+    } catch (IOException e) {
+      return Optional.of("it cannot be read (" + e.getMessage() + ")");
+    }
   }
 }

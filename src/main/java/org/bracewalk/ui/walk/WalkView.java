@@ -336,7 +336,13 @@ public final class WalkView extends BorderPane {
       case X -> vm.memberSeenProperty().set(Diagonal.BOTH);
       case PERIOD -> vm.memberSeenProperty().set(null);
       case T -> vm.toggleMemberKind();
-      case F -> vm.addPhotos();
+      case F -> {
+        if (e.isShiftDown()) {
+          vm.clearPhotos();
+        } else {
+          vm.addPhotos();
+        }
+      }
       case G -> vm.addCameraPhotos(e.isShiftDown());
       case K -> key.setExpanded(!key.isExpanded());
       case O -> vm.cycleOrder();
@@ -375,7 +381,7 @@ public final class WalkView extends BorderPane {
             KeyHelp.of("/  \\  X  .", "member seen: rising, falling, cross, follows the state"),
             KeyHelp.of("T", "member seen is tension-only / rigid"),
             KeyHelp.of("Alt+ D B O", "defect, bow, note fields; Enter or Esc back to the plane"),
-            KeyHelp.of("F", "attach photo files"),
+            KeyHelp.of("F, Shift+F", "attach photo files; take the photos off the next mark"),
             KeyHelp.of("G, Shift+G", "attach the camera folder's new photos; choose the camera folder"),
             KeyHelp.of("K", "fold or unfold the key to the drawing"),
             KeyHelp.of("Ctrl+P", "another plane of the same inspection")));

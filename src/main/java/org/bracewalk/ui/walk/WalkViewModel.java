@@ -105,6 +105,9 @@ public final class WalkViewModel {
   private java.time.Instant cameraSince = java.time.Instant.now();
   /** Camera photos already attached in this session, so none is taken twice. */
   private final java.util.Set<Path> cameraTaken = new java.util.HashSet<>();
+  /** The camera folder's photos at the previous mark, once the folder is in use; null before. */
+  private java.util.Set<Path> cameraBefore;
+  private boolean cameraInUse;
 
   /** One mark made in this session, so undo can correct it. */
   private record Step(PanelRef panel, RecordedMark before, RecordedMark made) {}
@@ -172,6 +175,15 @@ public final class WalkViewModel {
       return false;
     }
     PanelRef p = cursor.get();
+    for (Path photo : List.copyOf(photos)) {
+      java.util.Optional<String> problem = CameraFolder.problem(photo);
+      if (problem.isPresent()) {
+        photos.remove(photo);
+        error.set("Not recorded: the photo " + photo + " was taken off the mark because " + problem.get()
+            + ". Press the key again to record without it, or attach another (F, G).");
+        return false;
+      }
+    }
     Mark m;
     try {
       m = buildMark(state, p);
@@ -196,6 +208,15 @@ public final class WalkViewModel {
     canUndo.set(true);
     clearDetails();
     cameraSince = java.time.Instant.now();
+    if (cameraInUse) {
+      cameraBefore = cameraFolder.get().map(f -> {
+        try {
+          return CameraFolder.listing(f);
+        } catch (java.io.IOException e) {
+          return null; // the time rule serves until the folder can be read again
+        }
+      }).orElse(null);
+    }
     status.set("Saved " + p + ": " + describe(m) + " (record " + made.id() + ")");
     quietCursor = true;
     try {
@@ -318,28 +339,39 @@ public final class WalkViewModel {
       cameraFolder.set(picked.get());
       folder = picked;
     }
-    List<Path> found;
+    cameraInUse = true;
+    CameraFolder.Found found;
     try {
-      found = CameraFolder.photosSince(folder.get(), cameraSince, cameraTaken);
+      found = CameraFolder.newPhotos(folder.get(), cameraBefore, cameraSince, cameraTaken);
     } catch (java.io.IOException e) {
       error.set("The camera folder " + folder.get() + " cannot be read (" + e.getMessage()
           + "). Press Shift+G to choose another, or F to pick the files.");
       return;
     }
-    found = found.stream().filter(f -> !photos.contains(f)).toList();
-    if (found.isEmpty()) {
-      status.set("No new photos in " + folder.get() + " since "
-          + java.time.format.DateTimeFormatter.ofPattern("HH:mm:ss").format(
-              cameraSince.atZone(java.time.ZoneId.systemDefault()))
-          + " (the previous mark). Take the photo, then press G again.");
+    List<Path> fresh = found.photos().stream().filter(f -> !photos.contains(f)).toList();
+    if (fresh.isEmpty()) {
+      status.set("No new photos in " + folder.get() + " since the previous mark"
+          + " (a photo still being copied waits). Take the photo, then press G again; F picks files.");
       return;
     }
     error.set("");
-    photos.addAll(found);
-    cameraTaken.addAll(found);
-    status.set(found.size() + (found.size() == 1 ? " photo" : " photos") + " from " + folder.get()
+    photos.addAll(fresh);
+    cameraTaken.addAll(fresh);
+    status.set(fresh.size() + (fresh.size() == 1 ? " photo" : " photos") + " from " + folder.get()
         + " attached to the next mark: " + String.join(", ",
-            found.stream().map(f -> f.getFileName().toString()).toList()) + ".");
+            fresh.stream().map(f -> f.getFileName().toString()).toList())
+        + (found.leftOut() > 0 ? "; " + found.leftOut() + " older new ones left out (F picks them)" : "")
+        + ". Shift+F takes them off again.");
+  }
+
+  /** Takes the photos waiting for the next mark off it again (none is deleted from its folder). */
+  public void clearPhotos() {
+    if (photos.isEmpty()) {
+      return;
+    }
+    int n = photos.size();
+    photos.clear();
+    status.set(n + (n == 1 ? " photo" : " photos") + " taken off the next mark (the files stay where they are).");
   }
 
   /** Switches the member seen between rigid and tension-only. */

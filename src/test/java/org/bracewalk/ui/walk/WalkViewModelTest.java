@@ -85,8 +85,44 @@ class WalkViewModelTest {
     assertThat(vm.photos()).doesNotContain(old.toAbsolutePath(), first.toAbsolutePath());
     // a folder that has gone: asked again; cancelled: nothing changes
     setting.set(dir.resolve("unplugged"));
+    int before = dialogs.asked.size();
     vm.addCameraPhotos(false);
+    assertThat(dialogs.asked).hasSize(before + 1);
+    assertThat(dialogs.asked.get(before)).startsWith("Camera folder");
     assertThat(vm.photos()).hasSize(2);
+    // Shift+F takes them off again; the files stay
+    vm.clearPhotos();
+    assertThat(vm.photos()).isEmpty();
+    assertThat(second).exists();
+  }
+
+  @Test
+  void afterAMarkTheCameraFolderIsComparedByItsFilesNotByTheirClocks(@org.junit.jupiter.api.io.TempDir Path dir)
+      throws Exception {
+    Path camera = java.nio.file.Files.createDirectories(dir.resolve("DCIM"));
+    WalkViewModel vm = walk(List.of(), false);
+    CameraFolder.Setting setting = CameraFolder.Setting.inMemory();
+    setting.set(camera);
+    vm.useCameraFolderSetting(setting);
+    Path first = photo(camera, "IMG_0100.jpg", java.time.Instant.now().plusSeconds(1));
+    vm.addCameraPhotos(false);
+    assertThat(vm.photos()).containsExactly(first.toAbsolutePath());
+    assertThat(vm.mark(PanelState.SOUND)).isTrue();
+    // a phone whose clock is an hour behind; a hidden shadow file; a file still being copied (empty)
+    Path late = photo(camera, "IMG_0101.jpg", java.time.Instant.now().minusSeconds(3600));
+    photo(camera, "._IMG_0101.jpg", java.time.Instant.now());
+    java.nio.file.Files.write(camera.resolve("IMG_0102.jpg"), new byte[0]);
+    vm.addCameraPhotos(false);
+    assertThat(vm.photos()).containsExactly(late.toAbsolutePath());
+    // a photo that is gone by the time of the mark: taken off, the mark refused once, saying why
+    java.nio.file.Files.delete(late);
+    int rows = recorder.rows.size();
+    assertThat(vm.mark(PanelState.SOUND)).isFalse();
+    assertThat(vm.errorProperty().get()).contains("IMG_0101.jpg").contains("no longer there");
+    assertThat(vm.photos()).isEmpty();
+    assertThat(recorder.rows).hasSize(rows);
+    assertThat(vm.mark(PanelState.SOUND)).isTrue();
+    assertThat(recorder.rows).hasSize(rows + 1);
   }
 
   private static Path photo(Path folder, String name, java.time.Instant written) throws java.io.IOException {
@@ -212,9 +248,10 @@ class WalkViewModelTest {
   }
 
   @Test
-  void photosChosenAreAttachedToTheNextMark() {
+  void photosChosenAreAttachedToTheNextMark(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
     WalkViewModel vm = walk(List.of(), false);
-    dialogs.photoAnswers.push(List.of(Path.of("/photos/img1.jpg"), Path.of("/photos/img2.jpg")));
+    java.time.Instant now = java.time.Instant.now();
+    dialogs.photoAnswers.push(List.of(photo(dir, "img1.jpg", now), photo(dir, "img2.jpg", now)));
     vm.addPhotos();
     assertThat(vm.photos()).hasSize(2);
     vm.mark(PanelState.DAMAGED_EFFECTIVE);
