@@ -139,7 +139,28 @@ public final class WalkView extends BorderPane {
     side.setPrefViewportWidth(400);
     side.setPrefViewportHeight(300); // the pane takes the height left; its content is not asked
     VBox.setVgrow(side, Priority.ALWAYS);
-    VBox right = new VBox(10, readOnly, verdict, side);
+    // on a short screen both give way, the verdict to its own scroll bar, the controls never below
+    // the mark buttons
+    side.setMinHeight(230);
+    ScrollPane verdictPane = new ScrollPane(verdict);
+    verdictPane.setFitToWidth(true);
+    verdictPane.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+    verdictPane.setMinHeight(110);
+    verdictPane.setFocusTraversable(false);
+    verdictPane.getStyleClass().add("verdict-pane");
+    // the verdict takes the height it needs, as long as the controls keep their least
+    VBox right = new VBox(10, readOnly, verdictPane, side) {
+      @Override
+      protected void layoutChildren() {
+        double width = getWidth() - snappedLeftInset() - snappedRightInset();
+        double wanted = verdict.prefHeight(width) + verdictPane.snappedTopInset() + verdictPane.snappedBottomInset();
+        double others = readOnly.isManaged() ? readOnly.prefHeight(width) + getSpacing() : 0;
+        double room = getHeight() - snappedTopInset() - snappedBottomInset() - others - getSpacing()
+            - side.getMinHeight();
+        verdictPane.setPrefHeight(Math.max(verdictPane.getMinHeight(), Math.min(wanted, room)));
+        super.layoutChildren();
+      }
+    };
     right.setPrefWidth(420); // else the verdict's longest line, unwrapped, would set the width
     right.setId("walk-side");
     setRight(right);
