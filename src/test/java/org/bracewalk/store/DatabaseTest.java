@@ -100,12 +100,24 @@ class DatabaseTest {
     }
     assertThat(Database.schemaIsCurrent(Database.dataSource(file))).isTrue();
     try (Connection c = Database.dataSource(file).getConnection(); Statement s = c.createStatement()) {
-      // the second script's trigger is there: the file was migrated, not just marked
+      // the second script ran: its history row and its trigger are there
       try (ResultSet r = s.executeQuery(
           "SELECT count(*) FROM flyway_schema_history WHERE script = 'V2__planes_never_change.sql'")) {
         r.next();
         assertThat(r.getInt(1)).isEqualTo(1);
       }
+      try (ResultSet r = s.executeQuery(
+          "SELECT count(*) FROM sqlite_master WHERE type = 'trigger' AND name = 'planes_never_change'")) {
+        r.next();
+        assertThat(r.getInt(1)).isEqualTo(1);
+      }
+      // a current file is opened without Flyway: a checksum Flyway would refuse goes unread
+      s.executeUpdate("UPDATE flyway_schema_history SET checksum = 12345 WHERE script = 'V2__planes_never_change.sql'");
+    }
+    try (Database db = Database.open(file)) {
+      assertThat(db.integrityCheck()).isEqualTo("ok");
+    }
+    try (Connection c = Database.dataSource(file).getConnection(); Statement s = c.createStatement()) {
       // a newer program's migration, or a failed one: not current, so Flyway looks at it again
       s.executeUpdate("INSERT INTO flyway_schema_history (installed_rank, version, description, type,"
           + " script, checksum, installed_by, execution_time, success)"
