@@ -25,7 +25,7 @@ public final class PlaneCanvas extends Region {
     getChildren().add(canvas);
     getStyleClass().add("plane-canvas");
     setFocusTraversable(true);
-    setMinSize(200, 160);
+    setMinSize(200, 120);
     setPrefSize(900, 520);
     picture.addListener((obs, a, b) -> redraw());
     canvas.setOnMouseClicked(

@@ -558,9 +558,18 @@ public final class WalkViewModel {
 
   private StateAnalysis lastSeen;
 
+  /**
+   * The banner over the plane: what lost rigidity, where to keep people and loads off, and who
+   * acts. Kept short so it fits a narrow screen; the verdict beside it gives the repair and what
+   * is still to inspect.
+   */
   private String alarmText(VerdictWords w) {
-    return w.headline().toUpperCase(java.util.Locale.ROOT) + " — " + (title == null ? "" : title + ". ")
-        + w.advice();
+    String advice = w.advice();
+    String until = " until a competent person has acted.";
+    int end = advice.indexOf(until);
+    String keepOff = end < 0 ? advice : advice.substring(0, end + until.length())
+        + " Competent person to act: see the verdict.";
+    return w.headline().toUpperCase(java.util.Locale.ROOT) + " — " + (title == null ? "" : title + ". ") + keepOff;
   }
 
   private void refreshPicture() {

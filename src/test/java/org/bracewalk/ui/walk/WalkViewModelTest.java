@@ -150,7 +150,10 @@ class WalkViewModelTest {
     // lift 2 shears; lift 3 above it is carried: keep off lifts 2-3
     assertThat(vm.alarmProperty().get())
         .contains("Keep people and loads off lifts 2, 3, all bays")
-        .contains("competent person");
+        .contains("competent person")
+        .endsWith("Competent person to act: see the verdict.");
+    // the banner stays short; the repair to fit is in the verdict beside it
+    assertThat(vm.verdict().advice()).contains("Competent person to act: fit the");
     assertThat(vm.pictureProperty().get().sway().shearing())
         .containsExactly(PanelRef.of(2, 1), PanelRef.of(2, 2), PanelRef.of(2, 3));
   }
