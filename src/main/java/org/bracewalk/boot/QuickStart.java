@@ -26,12 +26,14 @@ import java.util.OptionalInt;
  * in about two thirds of the time. {@code java -jar} cannot pass JVM options itself, so the first
  * process only starts the second, waits for it and passes on its exit status.
  *
- * <p>Used only where it cannot get in the way: the program runs from one jar file, no class data
- * or agent options were given (a debugger stays attached to the process it started), and {@code
- * BRACEWALK_QUICK_START} is not {@code 0}. The archive lives in the user's cache folder, named by
- * the jar and the Java runtime, so a new build or a new JDK writes a new one; the first session
- * after either starts at the ordinary speed. Anything that fails here falls back to running in
- * this process.
+ * <p>Used only where it cannot get in the way: the program runs from one jar file on HotSpot 13 or
+ * later, no class data or agent options were given (a debugger stays attached to the process it
+ * started), and {@code BRACEWALK_QUICK_START} is not {@code 0}. The archive lives in the user's
+ * cache folder, named by the jar, the Java runtime and the main class, so a new build or a new
+ * JDK writes a new one; the session that writes it is slower than one process (two JVMs start,
+ * and the archive is written as it ends), and it is kept only when that session ended with
+ * status 0. When the second process cannot be started the app runs in this one; a second process
+ * that starts and then fails passes its exit status on.
  */
 final class QuickStart {
   /** Set to 0 to always run in the first process. */
@@ -222,8 +224,9 @@ final class QuickStart {
     try (DirectoryStream<Path> files = Files.newDirectoryStream(folder, "classes-*")) {
       for (Path p : files) {
         String n = p.getFileName().toString();
-        boolean olderArchive = n.startsWith(family) && n.endsWith(".jsa") && !p.equals(plan.archive())
-            && Files.exists(plan.archive());
+        // (classes-HASH.jsa: the name before the main class was part of it)
+        boolean olderArchive = (n.startsWith(family) || n.matches("classes-[0-9a-f]{16}\\.jsa"))
+            && n.endsWith(".jsa") && !p.equals(plan.archive()) && Files.exists(plan.archive());
         boolean staleHalf = n.endsWith(".part") && !plan.writing().map(p::equals).orElse(false)
             && Files.getLastModifiedTime(p).toInstant().isBefore(dayAgo);
         if (olderArchive || staleHalf) {

@@ -94,24 +94,30 @@ public final class CameraFolder {
     return out;
   }
 
-  /** The new photos found, oldest first, and how many more there were than are taken at once. */
-  public record Found(List<Path> photos, int leftOut) {}
+  /**
+   * The new photos found, oldest first; how many more there were than are taken at once; and the
+   * new files passed over, with why (empty: still being copied; too large to keep).
+   */
+  public record Found(List<Path> photos, int leftOut, List<String> passedOver) {}
 
   /**
    * The photos in {@code folder} that are new: not in {@code before} (the folder's listing at the
-   * previous mark) when that is known, else last written at or after {@code since} (less two
-   * seconds: a memory card keeps times to two seconds); never one in {@code taken}; only files of
-   * 1 byte to {@link Photo#MAX_BYTES} (one still being copied, or too large to keep, waits).
-   * Oldest first; the newest {@link #MOST_AT_ONCE} when there are more.
+   * previous mark or when the folder was chosen), or last written at or after {@code since} (less
+   * two seconds: a memory card keeps times to two seconds) — the listing catches a camera whose
+   * clock is behind, the time a file that was still being copied at the mark. Never one in {@code
+   * taken}; only files of 1 byte to {@link Photo#MAX_BYTES}. Oldest first; the newest {@link
+   * #MOST_AT_ONCE} when there are more.
    *
+   * @param before the earlier listing, or null when there is none (then only the time counts)
    * @throws IOException when the folder cannot be read
    */
   public static Found newPhotos(Path folder, Set<Path> before, Instant since, Set<Path> taken) throws IOException {
     record Candidate(Path path, Instant written) {}
     Instant from = since.minusSeconds(2);
     List<Candidate> found = new ArrayList<>();
+    List<String> passedOver = new ArrayList<>();
     for (Path f : listing(folder)) {
-      if (taken.contains(f) || (before != null && before.contains(f))) {
+      if (taken.contains(f)) {
         continue;
       }
       BasicFileAttributes a;
@@ -121,17 +127,22 @@ public final class CameraFolder {
         continue; // removed while being read
       }
       Instant written = a.lastModifiedTime().toInstant();
-      if (!a.isRegularFile() || a.size() < 1 || a.size() > Photo.MAX_BYTES) {
+      boolean unlisted = before != null && !before.contains(f);
+      if (!a.isRegularFile() || !(unlisted || !written.isBefore(from))) {
         continue;
       }
-      if (before == null && written.isBefore(from)) {
-        continue;
+      if (a.size() < 1) {
+        passedOver.add(f.getFileName() + " (empty: still being copied?)");
+      } else if (a.size() > Photo.MAX_BYTES) {
+        passedOver.add(f.getFileName() + " (over 20 MB)");
+      } else {
+        found.add(new Candidate(f, written));
       }
-      found.add(new Candidate(f, written));
     }
     found.sort(Comparator.comparing(Candidate::written).thenComparing(Candidate::path));
     int leftOut = Math.max(0, found.size() - MOST_AT_ONCE);
-    return new Found(found.subList(leftOut, found.size()).stream().map(Candidate::path).toList(), leftOut);
+    return new Found(found.subList(leftOut, found.size()).stream().map(Candidate::path).toList(), leftOut,
+        List.copyOf(passedOver));
   }
 
   /**

@@ -140,8 +140,8 @@ public final class WalkView extends BorderPane {
     side.setPrefViewportHeight(300); // the pane takes the height left; its content is not asked
     VBox.setVgrow(side, Priority.ALWAYS);
     // on a short screen both give way, the verdict to its own scroll bar, the controls never below
-    // the mark buttons
-    side.setMinHeight(230);
+    // the mark buttons (their least height is set in the stylesheet, in em, so it grows with A+)
+    side.getStyleClass().add("walk-controls"); // keeps the mark buttons in sight: a least height in em
     ScrollPane verdictPane = new ScrollPane(verdict);
     verdictPane.setFitToWidth(true);
     verdictPane.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
@@ -283,8 +283,17 @@ public final class WalkView extends BorderPane {
     camera.setFocusTraversable(false);
     photos.setMinWidth(Button.USE_PREF_SIZE);
     camera.setMinWidth(Button.USE_PREF_SIZE);
+    Button clear = new Button("Take off");
+    clear.setId("walk-photos-off");
+    clear.setOnAction(e -> {
+      vm.clearPhotos();
+      canvas.requestFocus();
+    });
+    clear.setFocusTraversable(false);
+    clear.disableProperty().bind(Bindings.isEmpty(vm.photos()));
+    clear.setMinWidth(Button.USE_PREF_SIZE);
     details.add(Widgets.row(8, photos, camera), 0, 3, 2, 1);
-    details.add(photoCount, 0, 4, 2, 1);
+    details.add(Widgets.row(8, photoCount, clear), 0, 4, 2, 1);
     details.add(Widgets.hint("G takes the pictures the camera saved in its folder since the last mark;"
         + " Shift+G chooses the folder."), 0, 5, 2, 1);
     GridPane.setHgrow(defect, Priority.ALWAYS);

@@ -107,7 +107,6 @@ public final class WalkViewModel {
   private final java.util.Set<Path> cameraTaken = new java.util.HashSet<>();
   /** The camera folder's photos at the previous mark, once the folder is in use; null before. */
   private java.util.Set<Path> cameraBefore;
-  private boolean cameraInUse;
 
   /** One mark made in this session, so undo can correct it. */
   private record Step(PanelRef panel, RecordedMark before, RecordedMark made) {}
@@ -175,14 +174,19 @@ public final class WalkViewModel {
       return false;
     }
     PanelRef p = cursor.get();
+    List<String> bad = new java.util.ArrayList<>();
     for (Path photo : List.copyOf(photos)) {
       java.util.Optional<String> problem = CameraFolder.problem(photo);
       if (problem.isPresent()) {
         photos.remove(photo);
-        error.set("Not recorded: the photo " + photo + " was taken off the mark because " + problem.get()
-            + ". Press the key again to record without it, or attach another (F, G).");
-        return false;
+        bad.add(photo + " (" + problem.get() + ")");
       }
+    }
+    if (!bad.isEmpty()) {
+      error.set("Not recorded: taken off the mark: " + String.join("; ", bad)
+          + ". Press the key again to record without " + (bad.size() == 1 ? "it" : "them")
+          + ", or attach another (F, G).");
+      return false;
     }
     Mark m;
     try {
@@ -208,7 +212,7 @@ public final class WalkViewModel {
     canUndo.set(true);
     clearDetails();
     cameraSince = java.time.Instant.now();
-    if (cameraInUse) {
+    if (cameraBefore != null) {
       cameraBefore = cameraFolder.get().map(f -> {
         try {
           return CameraFolder.listing(f);
@@ -317,6 +321,14 @@ public final class WalkViewModel {
   /** Where the camera folder is remembered (the app: the user's preferences; by default memory). */
   public void useCameraFolderSetting(CameraFolder.Setting setting) {
     cameraFolder = Objects.requireNonNull(setting);
+    // what the remembered folder holds now is not new: from here its listing says what is
+    cameraBefore = setting.get().filter(java.nio.file.Files::isDirectory).map(f -> {
+      try {
+        return CameraFolder.listing(f);
+      } catch (java.io.IOException e) {
+        return null;
+      }
+    }).orElse(null);
   }
 
   /** The camera folder in use, if one has been chosen. */
@@ -337,21 +349,27 @@ public final class WalkViewModel {
         return;
       }
       cameraFolder.set(picked.get());
+      if (!picked.equals(folder)) {
+        cameraBefore = null; // another folder: nothing of the old one's listing applies
+      }
       folder = picked;
     }
-    cameraInUse = true;
     CameraFolder.Found found;
     try {
       found = CameraFolder.newPhotos(folder.get(), cameraBefore, cameraSince, cameraTaken);
+      // from here on the folder's own listing says what is new, whatever the camera's clock
+      cameraBefore = CameraFolder.listing(folder.get());
     } catch (java.io.IOException e) {
       error.set("The camera folder " + folder.get() + " cannot be read (" + e.getMessage()
           + "). Press Shift+G to choose another, or F to pick the files.");
       return;
     }
+    String passed = found.passedOver().isEmpty() ? ""
+        : " Passed over: " + String.join(", ", found.passedOver()) + ".";
     List<Path> fresh = found.photos().stream().filter(f -> !photos.contains(f)).toList();
     if (fresh.isEmpty()) {
-      status.set("No new photos in " + folder.get() + " since the previous mark"
-          + " (a photo still being copied waits). Take the photo, then press G again; F picks files.");
+      status.set("No new photos in " + folder.get() + " since the previous mark." + passed
+          + " Take the photo, then press G again; F picks files.");
       return;
     }
     error.set("");
@@ -361,7 +379,7 @@ public final class WalkViewModel {
         + " attached to the next mark: " + String.join(", ",
             fresh.stream().map(f -> f.getFileName().toString()).toList())
         + (found.leftOut() > 0 ? "; " + found.leftOut() + " older new ones left out (F picks them)" : "")
-        + ". Shift+F takes them off again.");
+        + "." + passed + " Shift+F takes them off again.");
   }
 
   /** Takes the photos waiting for the next mark off it again (none is deleted from its folder). */
@@ -370,6 +388,10 @@ public final class WalkViewModel {
       return;
     }
     int n = photos.size();
+    cameraTaken.removeAll(photos); // G may offer them again
+    if (cameraBefore != null) {
+      cameraBefore.removeAll(photos);
+    }
     photos.clear();
     status.set(n + (n == 1 ? " photo" : " photos") + " taken off the next mark (the files stay where they are).");
   }
@@ -559,17 +581,17 @@ public final class WalkViewModel {
   private StateAnalysis lastSeen;
 
   /**
-   * The banner over the plane: what lost rigidity, where to keep people and loads off, and who
-   * acts. Kept short so it fits a narrow screen; the verdict beside it gives the repair and what
-   * is still to inspect.
+   * The banner over the plane: what lost rigidity, where to keep people and loads off, and what the
+   * competent person is to do (fit the braces shown, or take this part out of service). How many
+   * panels are still to inspect is left to the verdict beside it, so the banner fits a narrow
+   * screen.
    */
   private String alarmText(VerdictWords w) {
     String advice = w.advice();
-    String until = " until a competent person has acted.";
-    int end = advice.indexOf(until);
-    String keepOff = end < 0 ? advice : advice.substring(0, end + until.length())
-        + " Competent person to act: see the verdict.";
-    return w.headline().toUpperCase(java.util.Locale.ROOT) + " — " + (title == null ? "" : title + ". ") + keepOff;
+    String service = "out of service.";
+    int end = advice.indexOf(service);
+    String todo = end < 0 ? advice : advice.substring(0, end + service.length());
+    return w.headline().toUpperCase(java.util.Locale.ROOT) + " — " + (title == null ? "" : title + ". ") + todo;
   }
 
   private void refreshPicture() {

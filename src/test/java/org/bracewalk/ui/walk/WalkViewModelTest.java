@@ -114,6 +114,11 @@ class WalkViewModelTest {
     java.nio.file.Files.write(camera.resolve("IMG_0102.jpg"), new byte[0]);
     vm.addCameraPhotos(false);
     assertThat(vm.photos()).containsExactly(late.toAbsolutePath());
+    assertThat(vm.statusProperty().get()).contains("Passed over: IMG_0102.jpg (empty");
+    // taken off with Shift+F, G offers it again
+    vm.clearPhotos();
+    vm.addCameraPhotos(false);
+    assertThat(vm.photos()).containsExactly(late.toAbsolutePath());
     // a photo that is gone by the time of the mark: taken off, the mark refused once, saying why
     java.nio.file.Files.delete(late);
     int rows = recorder.rows.size();
@@ -123,6 +128,29 @@ class WalkViewModelTest {
     assertThat(recorder.rows).hasSize(rows);
     assertThat(vm.mark(PanelState.SOUND)).isTrue();
     assertThat(recorder.rows).hasSize(rows + 1);
+  }
+
+  @Test
+  void choosingAnotherCameraFolderDoesNotBringItsOldPhotos(@org.junit.jupiter.api.io.TempDir Path dir)
+      throws Exception {
+    Path phone = java.nio.file.Files.createDirectories(dir.resolve("phone"));
+    Path card = java.nio.file.Files.createDirectories(dir.resolve("card"));
+    java.time.Instant monthAgo = java.time.Instant.now().minus(java.time.Duration.ofDays(30));
+    for (int k = 0; k < 5; k++) {
+      photo(card, "DSC_00" + k + ".JPG", monthAgo); // last month's pictures on the card
+    }
+    WalkViewModel vm = walk(List.of(), false);
+    CameraFolder.Setting setting = CameraFolder.Setting.inMemory();
+    setting.set(phone);
+    vm.useCameraFolderSetting(setting);
+    assertThat(vm.mark(PanelState.SOUND)).isTrue();
+    dialogs.folderAnswers.push(java.util.Optional.of(card));
+    vm.addCameraPhotos(true); // Shift+G
+    assertThat(setting.get()).contains(card);
+    assertThat(vm.photos()).isEmpty();
+    Path today = photo(card, "DSC_0100.JPG", java.time.Instant.now().plusSeconds(1));
+    vm.addCameraPhotos(false);
+    assertThat(vm.photos()).containsExactly(today.toAbsolutePath());
   }
 
   private static Path photo(Path folder, String name, java.time.Instant written) throws java.io.IOException {
@@ -151,9 +179,8 @@ class WalkViewModelTest {
     assertThat(vm.alarmProperty().get())
         .contains("Keep people and loads off lifts 2, 3, all bays")
         .contains("competent person")
-        .endsWith("Competent person to act: see the verdict.");
-    // the banner stays short; the repair to fit is in the verdict beside it
-    assertThat(vm.verdict().advice()).contains("Competent person to act: fit the");
+        .contains("Competent person to act: fit the")
+        .endsWith("or take this part out of service.");
     assertThat(vm.pictureProperty().get().sway().shearing())
         .containsExactly(PanelRef.of(2, 1), PanelRef.of(2, 2), PanelRef.of(2, 3));
   }
