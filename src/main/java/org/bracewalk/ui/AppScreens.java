@@ -110,27 +110,7 @@ public final class AppScreens implements ScreenFactory {
       view.selectPlane(selection.planeId());
     }
     var sel = Bindings.createObjectBinding(vm::selectionForOthers, vm.selectedProperty());
-    return new Screen() {
-      @Override
-      public Node node() {
-        return view;
-      }
-
-      @Override
-      public String crumbs() {
-        return "Sites";
-      }
-
-      @Override
-      public void focus() {
-        view.focusTable();
-      }
-
-      @Override
-      public javafx.beans.value.ObservableValue<Selection> selection() {
-        return sel;
-      }
-    };
+    return Screen.of(view, "Sites", view::focusTable, sel);
   }
 
   private String crumbs(PlaneRecord plane, Inspection inspection) {
@@ -261,27 +241,7 @@ public final class AppScreens implements ScreenFactory {
   }
 
   private static Screen focusedWithSelection(Node node, String crumbs, Runnable focus, Selection sel) {
-    var value = sel == null ? null : new javafx.beans.property.SimpleObjectProperty<>(sel);
-    return new Screen() {
-      @Override
-      public Node node() {
-        return node;
-      }
-
-      @Override
-      public String crumbs() {
-        return crumbs;
-      }
-
-      @Override
-      public void focus() {
-        focus.run();
-      }
-
-      @Override
-      public javafx.beans.value.ObservableValue<Selection> selection() {
-        return value;
-      }
-    };
+    return Screen.of(node, crumbs, focus, sel == null ? null : new javafx.beans.property.SimpleObjectProperty<>(sel));
   }
+
 }

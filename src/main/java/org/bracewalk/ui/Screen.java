@@ -23,6 +23,15 @@ public interface Screen {
 
   /** A screen with nothing to focus but itself. */
   static Screen of(Node node, String crumbs) {
+    return of(node, crumbs, node::requestFocus, null);
+  }
+
+  /**
+   * A screen whose keyboard focus starts where {@code focus} puts it, showing {@code selection}
+   * ({@code null} for the selection it was opened with).
+   */
+  static Screen of(Node node, String crumbs, Runnable focus,
+      javafx.beans.value.ObservableValue<Selection> selection) {
     return new Screen() {
       @Override
       public Node node() {
@@ -36,7 +45,12 @@ public interface Screen {
 
       @Override
       public void focus() {
-        node.requestFocus();
+        focus.run();
+      }
+
+      @Override
+      public javafx.beans.value.ObservableValue<Selection> selection() {
+        return selection;
       }
     };
   }
