@@ -43,39 +43,14 @@ final class Legend {
     float y1 = cy + 4f;
     cb.saveState();
     switch (entry) {
-      case "design" -> {
-        Glyphs.stroke(cb, Glyphs.Stroke.DESIGN, 1f);
-        Glyphs.line(cb, x0, y0, x1, y1);
-      }
-      case "sound" -> {
-        Glyphs.stroke(cb, Glyphs.Stroke.SOUND, 1f);
-        Glyphs.line(cb, x0, y0, x1, y1);
-      }
-      case "damaged-effective" -> {
-        Glyphs.stroke(cb, Glyphs.Stroke.DAMAGED, 1f);
-        Glyphs.line(cb, x0, y0, x1, y1);
-        Glyphs.mark(cb, font, Glyphs.Mark.OPEN_TRIANGLE, (x0 + x1) / 2, cy, 3.2f);
-      }
-      case "damaged-ineffective" -> {
-        Glyphs.stroke(cb, Glyphs.Stroke.INEFFECTIVE, 1f);
-        Glyphs.line(cb, x0, y0, x1, y1);
-        Glyphs.mark(cb, font, Glyphs.Mark.FILLED_TRIANGLE, (x0 + x1) / 2, cy, 3.2f);
-      }
-      case "missing" -> {
-        Glyphs.stroke(cb, Glyphs.Stroke.MISSING, 1f);
-        Glyphs.line(cb, x0, y0, x1, y1);
-        Glyphs.mark(cb, font, Glyphs.Mark.SLASHED_RING, (x0 + x1) / 2, cy, 3.2f);
-      }
-      case "extra" -> {
-        Glyphs.stroke(cb, Glyphs.Stroke.EXTRA, 1f);
-        Glyphs.line(cb, x0, y0, x1, y1);
-        Glyphs.mark(cb, font, Glyphs.Mark.PLUS, (x0 + x1) / 2, cy, 3.2f);
-      }
-      case "not-inspected" -> {
-        Glyphs.stroke(cb, Glyphs.Stroke.DESIGN, 1f);
-        Glyphs.line(cb, x0, y0, x1, y1);
-        Glyphs.mark(cb, font, Glyphs.Mark.QUESTION, (x0 + x1) / 2, cy, 3.2f);
-      }
+      case "design" -> member(cb, font, Glyphs.Stroke.DESIGN, Glyphs.Mark.NONE, x0, y0, x1, y1, cy);
+      case "sound" -> member(cb, font, Glyphs.Stroke.SOUND, Glyphs.Mark.NONE, x0, y0, x1, y1, cy);
+      case "damaged-effective" -> member(cb, font, Glyphs.Stroke.DAMAGED, Glyphs.Mark.OPEN_TRIANGLE, x0, y0, x1, y1, cy);
+      case "damaged-ineffective" ->
+          member(cb, font, Glyphs.Stroke.INEFFECTIVE, Glyphs.Mark.FILLED_TRIANGLE, x0, y0, x1, y1, cy);
+      case "missing" -> member(cb, font, Glyphs.Stroke.MISSING, Glyphs.Mark.SLASHED_RING, x0, y0, x1, y1, cy);
+      case "extra" -> member(cb, font, Glyphs.Stroke.EXTRA, Glyphs.Mark.PLUS, x0, y0, x1, y1, cy);
+      case "not-inspected" -> member(cb, font, Glyphs.Stroke.DESIGN, Glyphs.Mark.QUESTION, x0, y0, x1, y1, cy);
       case "opening" -> {
         cb.setColorFill(Palette.OPENING);
         cb.rectangle(x0 + 5, y0, 16, 8);
@@ -107,5 +82,15 @@ final class Legend {
       default -> throw new IllegalArgumentException(entry);
     }
     cb.restoreState();
+  }
+
+  /** A member in {@code stroke}, with {@code mark} at its middle (none for {@link Glyphs.Mark#NONE}). */
+  private static void member(PdfContentByte cb, BaseFont font, Glyphs.Stroke stroke, Glyphs.Mark mark,
+      float x0, float y0, float x1, float y1, float cy) {
+    Glyphs.stroke(cb, stroke, 1f);
+    Glyphs.line(cb, x0, y0, x1, y1);
+    if (mark != Glyphs.Mark.NONE) {
+      Glyphs.mark(cb, font, mark, (x0 + x1) / 2, cy, 3.2f);
+    }
   }
 }
