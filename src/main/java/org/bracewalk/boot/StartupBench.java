@@ -108,19 +108,30 @@ public final class StartupBench {
   private static long timed(List<String> command) throws Exception {
     long start = System.currentTimeMillis();
     Process p = new ProcessBuilder(command).redirectErrorStream(true).start();
-    long ready = 0;
-    try (var lines = new java.io.BufferedReader(new java.io.InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8))) {
-      for (String line; (line = lines.readLine()) != null; ) {
-        if (line.startsWith(EPOCH)) {
-          ready = Long.parseLong(line.substring(EPOCH.length()).strip());
-        }
-      }
-    }
+    long ready = readyEpoch(p, line -> {});
     int code = p.waitFor();
     if (ready == 0) {
       throw new IllegalStateException("no window was drawn by " + String.join(" ", command) + " (exit " + code + ")");
     }
     return ready - start;
+  }
+
+  /**
+   * Reads {@code p}'s output to its end: the epoch milliseconds of the window it reports drawn (0
+   * when none), every other line handed to {@code other}.
+   */
+  private static long readyEpoch(Process p, java.util.function.Consumer<String> other) throws java.io.IOException {
+    long ready = 0;
+    try (var lines = new java.io.BufferedReader(new java.io.InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8))) {
+      for (String line; (line = lines.readLine()) != null; ) {
+        if (line.startsWith(EPOCH)) {
+          ready = Long.parseLong(line.substring(EPOCH.length()).strip());
+        } else {
+          other.accept(line);
+        }
+      }
+    }
+    return ready;
   }
 
   private static int viaSecondProcess(String db, boolean display) throws Exception {
@@ -132,16 +143,11 @@ public final class StartupBench {
       return 2;
     }
     Process child = new ProcessBuilder(plan.get().command()).redirectErrorStream(true).start();
-    long ready = 0;
-    try (var lines = new java.io.BufferedReader(new java.io.InputStreamReader(child.getInputStream(), StandardCharsets.UTF_8))) {
-      for (String line; (line = lines.readLine()) != null; ) {
-        if (line.startsWith(EPOCH)) {
-          ready = Long.parseLong(line.substring(EPOCH.length()).strip());
-        } else if (line.startsWith("bracewalk:") || line.startsWith("JVM start")) {
-          System.out.println("  second process: " + line);
-        }
+    long ready = readyEpoch(child, line -> {
+      if (line.startsWith("bracewalk:") || line.startsWith("JVM start")) {
+        System.out.println("  second process: " + line);
       }
-    }
+    });
     int code = child.waitFor();
     QuickStart.keep(plan.get(), code);
     if (ready == 0) {

@@ -213,13 +213,7 @@ public final class WalkViewModel {
     clearDetails();
     cameraSince = java.time.Instant.now();
     if (cameraBefore != null) {
-      cameraBefore = cameraFolder.get().map(f -> {
-        try {
-          return CameraFolder.listing(f);
-        } catch (java.io.IOException e) {
-          return null; // the time rule serves until the folder can be read again
-        }
-      }).orElse(null);
+      cameraBefore = cameraListing();
     }
     status.set("Saved " + p + ": " + describe(m) + " (record " + made.id() + ")");
     quietCursor = true;
@@ -322,7 +316,15 @@ public final class WalkViewModel {
   public void useCameraFolderSetting(CameraFolder.Setting setting) {
     cameraFolder = Objects.requireNonNull(setting);
     // what the remembered folder holds now is not new: from here its listing says what is
-    cameraBefore = setting.get().filter(java.nio.file.Files::isDirectory).map(f -> {
+    cameraBefore = cameraListing();
+  }
+
+  /**
+   * The camera folder's photos now, or null when no folder is set or it cannot be read (then the
+   * time rule serves until it can).
+   */
+  private java.util.Set<Path> cameraListing() {
+    return cameraFolder.get().filter(java.nio.file.Files::isDirectory).map(f -> {
       try {
         return CameraFolder.listing(f);
       } catch (java.io.IOException e) {
