@@ -119,8 +119,8 @@ public final class OutputFiles {
     for (int i = 0; i < reals.size(); i++) {
       for (int j = i + 1; j < reals.size(); j++) {
         if (same(reals.get(i), reals.get(j))) {
-          throw new UserInputException(targets[i] + " and " + targets[j] + " are the same file;"
-              + " give each output its own name (nothing was written)");
+          throw new UserInputException(targets[i] + " and " + targets[j] + " are the same file."
+              + " Nothing was written: give each output its own name");
         }
       }
     }
@@ -254,12 +254,12 @@ public final class OutputFiles {
           + " file itself");
     }
     if (Files.isDirectory(abs)) {
-      throw new UserInputException(target + " is a folder; give a file name (nothing was"
-          + " written)");
+      throw new UserInputException(target + " is a folder. Nothing was written: give a file"
+          + " name");
     }
     Path real = real(abs);
     if (real.getParent() == null || real.getFileName() == null) {
-      throw new UserInputException(target + " is not a file name (nothing was written)");
+      throw new UserInputException(target + " is not a file name. Nothing was written");
     }
     for (Guarded g : guarded) {
       if (same(real, g.real())) {
@@ -271,7 +271,7 @@ public final class OutputFiles {
     }
     if (isSqliteFile(real)) {
       throw new UserInputException(target + " is a SQLite database; an output never replaces a"
-          + " database (nothing was written): choose another file");
+          + " database. Nothing was written: choose another file");
     }
     return real;
   }
