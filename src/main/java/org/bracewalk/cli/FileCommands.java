@@ -155,7 +155,8 @@ final class FileCommands {
     @Option(names = "--plane", description = "A plane (id; with --inspection also its name).")
     String plane;
 
-    @Option(names = "--to", paramLabel = "FILE", description = "Write here (default: standard output).")
+    @Option(names = "--to", paramLabel = "FILE", description = "Write here (default: standard"
+        + " output). Never the database, its -wal/-shm, a link or a database file: refused, exit 2.")
     Path to;
 
     Export(CliContext context) {

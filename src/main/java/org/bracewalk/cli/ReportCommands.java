@@ -116,7 +116,8 @@ public final class ReportCommands {
         description = "Where to write the repair order.")
     Path outFile;
 
-    @Option(names = "--csv", paramLabel = "FILE.csv", description = "Also write the actions as CSV.")
+    @Option(names = "--csv", paramLabel = "FILE.csv", description = "Also write the actions as CSV"
+        + " (a file other than --out; never the database or a link: refused, exit 2).")
     Path csv;
 
     RepairOrderCommand(CliContext context, ReportServiceFactory reports) {

@@ -20,7 +20,9 @@ import picocli.CommandLine.Spec;
 /**
  * A command that works on the database: resolves the file ({@code --db}, {@code BRACEWALK_DB},
  * or the per-user default), prints it to standard error as the first line ({@code database:
- * PATH}), opens the services, runs, closes. A user error (a {@code UserInputException}, a
+ * PATH}), opens the services, runs, closes. The folder must exist unless it is the per-user
+ * default (made then); a file that is not a Bracewalk database is refused unchanged (exit 2).
+ * Output files go through {@link #outputs}: never over the database or a file the command read. A user error (a {@code UserInputException}, a
  * located {@code FileFormatException}, a {@code StoreException} or a value the model refuses)
  * prints {@code error: ...} to standard error and exits with status 2; nothing has been changed
  * then.
