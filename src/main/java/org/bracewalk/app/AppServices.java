@@ -43,6 +43,14 @@ public record AppServices(
         new DemoService(store, files), new RepairService(store, clock));
   }
 
+  /**
+   * The writer of output files for this database: it refuses the database file and its
+   * companions as targets. Add the files a command reads with {@link OutputFiles#withInput}.
+   */
+  public OutputFiles outputs() {
+    return OutputFiles.guarding(store.databaseFile());
+  }
+
   @Override
   public void close() {
     store.close();

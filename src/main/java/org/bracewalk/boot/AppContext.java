@@ -1,8 +1,11 @@
 package org.bracewalk.boot;
 
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.time.Duration;
+import java.util.List;
 import java.util.Map;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.AppServicesFactory;
@@ -39,8 +42,19 @@ public final class AppContext {
     return AppServices.over(Database.open(database), clock, analyzer);
   }
 
+  /** Opens services over a file, and deletes a Bracewalk file to start again. */
   public AppServicesFactory factory() {
-    return this::open;
+    return new AppServicesFactory() {
+      @Override
+      public AppServices open(Path database) {
+        return AppContext.this.open(database);
+      }
+
+      @Override
+      public boolean deleteDatabase(Path database) {
+        return Database.delete(database);
+      }
+    };
   }
 
   public Clock clock() {
@@ -61,7 +75,8 @@ public final class AppContext {
   /**
    * The report service over open services, with the PDF renderers reading their wording from
    * {@code $BRACEWALK_TEMPLATES} (a folder) or the packed {@code templates/}, in the language
-   * {@code $BRACEWALK_LANG} (default {@code en}).
+   * {@code $BRACEWALK_LANG} (default {@code en}). The files of that folder are the factory's
+   * {@link ReportServiceFactory#inputFiles}: no document is written over them.
    */
   public ReportServiceFactory reportFactory(Map<String, String> env) {
     String folder = env.get(TEMPLATES_VARIABLE);
@@ -72,7 +87,27 @@ public final class AppContext {
     PdfReportRenderer reports = new PdfReportRenderer(source, language);
     PdfRepairOrderRenderer orders = new PdfRepairOrderRenderer(source, language);
     PdfDocumentStampReader stamps = new PdfDocumentStampReader();
-    return services -> new ReportService(services, analyzer, reports, orders, stamps, clock);
+    List<Path> inputs = folder == null || folder.isBlank() ? List.of() : filesIn(Path.of(folder));
+    return new ReportServiceFactory() {
+      @Override
+      public ReportService over(AppServices services) {
+        return new ReportService(services, analyzer, reports, orders, stamps, clock);
+      }
+
+      @Override
+      public List<Path> inputFiles() {
+        return inputs;
+      }
+    };
+  }
+
+  /** The files directly in {@code folder} (none when it cannot be listed: the renderer says why). */
+  private static List<Path> filesIn(Path folder) {
+    try (var listing = Files.list(folder)) {
+      return listing.filter(Files::isRegularFile).toList();
+    } catch (IOException e) {
+      return List.of();
+    }
   }
 
   /** What the store commands need, with the environment given to the program. */

@@ -71,12 +71,9 @@ final class GuiLauncher {
     Path db = cli.database(dbOption.orElse(null));
     boolean timing = "1".equals(env.get(TIMING_VARIABLE));
     // open the database while the toolkit starts: the two together decide the start-up time
+    // the default data folder is made when missing; any other folder must exist (CliContext)
     CompletableFuture<AppServices> opening = CompletableFuture.supplyAsync(() -> {
-      try {
-        java.nio.file.Files.createDirectories(db.toAbsolutePath().getParent());
-      } catch (java.io.IOException e) {
-        throw new java.io.UncheckedIOException("cannot create the folder of " + db + ": " + e.getMessage(), e);
-      }
+      cli.prepareFolder(db);
       return context.open(db);
     });
     CountDownLatch closed = new CountDownLatch(1);

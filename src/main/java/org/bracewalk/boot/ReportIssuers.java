@@ -10,6 +10,8 @@ final class ReportIssuers {
   private ReportIssuers() {}
 
   static ReportIssuer over(AppContext context, AppServices services, Map<String, String> env) {
-    return new ServiceReportIssuer(context.reportFactory(env).over(services));
+    var factory = context.reportFactory(env);
+    return new ServiceReportIssuer(factory.over(services),
+        services.outputs().withInputs(factory.inputFiles()));
   }
 }

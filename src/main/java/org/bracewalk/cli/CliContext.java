@@ -1,10 +1,13 @@
 package org.bracewalk.cli;
 
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.util.Map;
 import java.util.Objects;
 import org.bracewalk.app.AppServicesFactory;
+import org.bracewalk.app.UserInputException;
 
 /**
  * What the store commands need from the composition root: a way to open the services over a
@@ -49,6 +52,32 @@ public record CliContext(
       return Path.of(fromEnv).toAbsolutePath();
     }
     return defaultFolder().resolve("bracewalk.db").toAbsolutePath();
+  }
+
+  /**
+   * Makes sure the database's folder is there: the per-user default data folder is created when
+   * missing; any other folder must exist already, so a mistyped {@code --db} or {@code
+   * BRACEWALK_DB} is refused instead of making a new empty database somewhere unexpected.
+   *
+   * @throws UserInputException naming the missing folder
+   */
+  public void prepareFolder(Path database) {
+    Path parent = database.toAbsolutePath().normalize().getParent();
+    if (parent == null || Files.isDirectory(parent)) {
+      return;
+    }
+    if (parent.equals(defaultFolder().toAbsolutePath().normalize())) {
+      try {
+        Files.createDirectories(parent);
+        return;
+      } catch (IOException e) {
+        throw new UserInputException("cannot create the data folder " + parent + ": "
+            + e.getMessage());
+      }
+    }
+    throw new UserInputException("the folder " + parent + " does not exist; give a database"
+        + " file in a folder that exists (--db or " + DB_VARIABLE + "), or create the folder"
+        + " first. Only the default data folder " + defaultFolder() + " is made when missing");
   }
 
   private Path defaultFolder() {

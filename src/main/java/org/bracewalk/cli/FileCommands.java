@@ -1,9 +1,6 @@
 package org.bracewalk.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.List;
@@ -11,7 +8,6 @@ import java.util.Objects;
 import java.util.stream.Stream;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.ImportedSite;
-import org.bracewalk.app.UserInputException;
 import org.bracewalk.core.model.DesignRevision;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.Observation;
@@ -159,7 +155,8 @@ final class FileCommands {
     @Option(names = "--plane", description = "A plane (id; with --inspection also its name).")
     String plane;
 
-    @Option(names = "--to", paramLabel = "FILE", description = "Write here (default: standard output).")
+    @Option(names = "--to", paramLabel = "FILE", description = "Write here (default: standard"
+        + " output). Never the database, its -wal/-shm, a link or a database file: refused, exit 2.")
     Path to;
 
     Export(CliContext context) {
@@ -201,8 +198,9 @@ final class FileCommands {
           "Then try: bracewalk analyse --db FILE --inspection 2"})
   static final class Demo extends StoreCommand {
     @Option(names = "--replace",
-        description = "If the database file exists and is a SQLite database, delete it first"
-            + " (with its -wal and -shm files) so the demo gets its documented ids.")
+        description = "If the database file exists and is a Bracewalk database, delete it first"
+            + " (with its -wal and -shm files) so the demo gets its documented ids. Any other"
+            + " file is refused (exit 2) and left as it was.")
     boolean replace;
 
     Demo(CliContext context) {
@@ -211,23 +209,8 @@ final class FileCommands {
 
     @Override
     void beforeOpen(Path file, PrintWriter err) {
-      if (!replace || !Files.exists(file)) {
-        return;
-      }
-      byte[] head = new byte[16];
-      try (var in = Files.newInputStream(file)) {
-        int n = in.readNBytes(head, 0, 16);
-        if (n < 16 || !new String(head, 0, 15, StandardCharsets.US_ASCII).equals("SQLite format 3")) {
-          throw new UserInputException(file + " is not a SQLite database; --replace deletes only"
-              + " database files, give another --db");
-        }
-        in.close();
-        for (String suffix : List.of("", "-wal", "-shm")) {
-          Files.deleteIfExists(Path.of(file + suffix));
-        }
+      if (replace && context.services().deleteDatabase(file)) {
         err.println("replaced: the old " + file + " was deleted");
-      } catch (IOException e) {
-        throw new UserInputException("cannot replace " + file + ": " + e.getMessage());
       }
     }
 

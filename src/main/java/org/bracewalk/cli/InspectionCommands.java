@@ -274,6 +274,7 @@ final class InspectionCommands {
       out.println(Show.observation(saved, plane.name()));
       if (o.photos != null) {
         for (Path photo : o.photos) {
+          outputs = outputs.withInput(photo);
           byte[] bytes = readBytes(photo);
           var p = s.inspections().attachPhoto(saved.id(), photo.getFileName().toString(),
               mediaType(photo), bytes);

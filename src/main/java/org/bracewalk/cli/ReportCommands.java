@@ -3,10 +3,8 @@ package org.bracewalk.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.List;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.UserInputException;
@@ -47,6 +45,7 @@ public final class ReportCommands {
 
     @Override
     final int run(AppServices services, PrintWriter out, PrintWriter err) {
+      outputs = outputs.withInputs(reports.inputFiles());
       try {
         return run(services, reports.over(services), out, err);
       } catch (RenderingException e) {
@@ -56,31 +55,6 @@ public final class ReportCommands {
     }
 
     abstract int run(AppServices services, ReportService reports, PrintWriter out, PrintWriter err);
-  }
-
-  /** Writes bytes to a file through a temporary file beside it, so a failure leaves no file. */
-  static void writeFile(Path file, byte[] bytes) {
-    Path target = file.toAbsolutePath();
-    try {
-      Path parent = target.getParent();
-      if (parent != null) {
-        Files.createDirectories(parent);
-      }
-      Path tmp = Files.createTempFile(parent, ".bracewalk-", ".part");
-      try {
-        Files.write(tmp, bytes);
-        try {
-          Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING,
-              StandardCopyOption.ATOMIC_MOVE);
-        } catch (AtomicMoveNotSupportedException e) {
-          Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-        }
-      } finally {
-        Files.deleteIfExists(tmp);
-      }
-    } catch (IOException e) {
-      throw new UserInputException("cannot write " + file + ": " + e.getMessage());
-    }
   }
 
   static void planeLines(ReportContent c, PrintWriter out) {
@@ -104,7 +78,8 @@ public final class ReportCommands {
     long inspection;
 
     @Option(names = "--out", required = true, paramLabel = "FILE.pdf",
-        description = "Where to write the report (replaced if it exists).")
+        description = "Where to write the report (replaced if it exists; never the database,"
+            + " a link or a file the command reads: refused, exit 2).")
     Path outFile;
 
     Report(CliContext context, ReportServiceFactory reports) {
@@ -113,9 +88,10 @@ public final class ReportCommands {
 
     @Override
     int run(AppServices s, ReportService reports, PrintWriter out, PrintWriter err) {
+      outputs.check(outFile);
       ReportContent content = reports.reportContent(inspection);
       byte[] pdf = reports.reportPdf(content);
-      writeFile(outFile, pdf);
+      outputs.write(outFile, pdf);
       reports.recordIssued(inspection, outFile.getFileName().toString(), pdf);
       out.println("wrote " + outFile + (content.header().draft() ? " (DRAFT: the inspection is open)" : ""));
       out.println("inspection " + inspection + ", " + content.planes().size() + " planes, "
@@ -140,7 +116,8 @@ public final class ReportCommands {
         description = "Where to write the repair order.")
     Path outFile;
 
-    @Option(names = "--csv", paramLabel = "FILE.csv", description = "Also write the actions as CSV.")
+    @Option(names = "--csv", paramLabel = "FILE.csv", description = "Also write the actions as CSV"
+        + " (a file other than --out; never the database or a link: refused, exit 2).")
     Path csv;
 
     RepairOrderCommand(CliContext context, ReportServiceFactory reports) {
@@ -149,14 +126,19 @@ public final class ReportCommands {
 
     @Override
     int run(AppServices s, ReportService reports, PrintWriter out, PrintWriter err) {
+      if (csv == null) {
+        outputs.check(outFile);
+      } else {
+        outputs.check(outFile, csv);
+      }
       RepairOrderContent order = reports.repairOrderContent(inspection);
       byte[] pdf = reports.repairOrderPdf(order);
       byte[] csvBytes = csv == null ? null
           : ReportService.repairOrderCsv(order).getBytes(StandardCharsets.UTF_8);
-      writeFile(outFile, pdf);
+      outputs.write(outFile, pdf);
       out.println("wrote " + outFile + ": " + order.actions().size() + " actions");
       if (csv != null) {
-        writeFile(csv, csvBytes);
+        outputs.write(csv, csvBytes);
         out.println("wrote " + csv);
       }
       return 0;
@@ -179,6 +161,7 @@ public final class ReportCommands {
     @Override
     int run(AppServices s, ReportService reports, PrintWriter out, PrintWriter err) {
       byte[] bytes;
+      outputs = outputs.withInput(file);
       try {
         bytes = Files.readAllBytes(file);
       } catch (IOException e) {

@@ -9,6 +9,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.bracewalk.app.AppServices;
+import org.bracewalk.app.OutputFiles;
 import org.bracewalk.app.UserInputException;
 import org.bracewalk.app.sitefile.FileFormatException;
 import org.bracewalk.core.port.StoreException;
@@ -19,7 +20,9 @@ import picocli.CommandLine.Spec;
 /**
  * A command that works on the database: resolves the file ({@code --db}, {@code BRACEWALK_DB},
  * or the per-user default), prints it to standard error as the first line ({@code database:
- * PATH}), opens the services, runs, closes. A user error (a {@code UserInputException}, a
+ * PATH}), opens the services, runs, closes. The folder must exist unless it is the per-user
+ * default (made then); a file that is not a Bracewalk database is refused unchanged (exit 2).
+ * Output files go through {@link #outputs}: never over the database or a file the command read. A user error (a {@code UserInputException}, a
  * located {@code FileFormatException}, a {@code StoreException} or a value the model refuses)
  * prints {@code error: ...} to standard error and exits with status 2; nothing has been changed
  * then.
@@ -40,6 +43,12 @@ abstract class StoreCommand implements Callable<Integer> {
 
   final CliContext context;
 
+  /**
+   * Writes the command's output files: never over the database or a file the command has read
+   * ({@link #readText} adds each). Set once the database is open.
+   */
+  OutputFiles outputs = OutputFiles.none();
+
   StoreCommand(CliContext context) {
     this.context = context;
   }
@@ -52,12 +61,14 @@ abstract class StoreCommand implements Callable<Integer> {
     err.println("database: " + file);
     err.flush();
     try {
+      context.prepareFolder(file);
       beforeOpen(file, err);
-    } catch (UserInputException e) {
+    } catch (UserInputException | StoreException e) {
       err.println("error: " + e.getMessage());
       return BAD_INPUT;
     }
     try (AppServices services = context.services().open(file)) {
+      outputs = services.outputs();
       return run(services, out, err);
     } catch (UserInputException | FileFormatException | StoreException | IllegalArgumentException e) {
       out.flush();
@@ -75,8 +86,12 @@ abstract class StoreCommand implements Callable<Integer> {
   /** The command's work; returns the exit status. */
   abstract int run(AppServices services, PrintWriter out, PrintWriter err);
 
-  /** A text file's content (UTF-8), or a user error naming the file. */
-  static String readText(Path file) {
+  /**
+   * A text file's content (UTF-8), or a user error naming the file. The file is guarded from the
+   * command's outputs from then on.
+   */
+  String readText(Path file) {
+    outputs = outputs.withInput(file);
     try {
       byte[] bytes = Files.readAllBytes(file);
       String text = StandardCharsets.UTF_8.newDecoder().decode(ByteBuffer.wrap(bytes)).toString();
@@ -88,16 +103,11 @@ abstract class StoreCommand implements Callable<Integer> {
     }
   }
 
-  /** Writes text to a file (UTF-8), or a user error naming the file. */
-  static void writeText(Path file, String text) {
-    try {
-      Path parent = file.toAbsolutePath().getParent();
-      if (parent != null) {
-        Files.createDirectories(parent);
-      }
-      Files.writeString(file, text, StandardCharsets.UTF_8);
-    } catch (IOException e) {
-      throw new UserInputException("cannot write " + file + ": " + e.getMessage());
-    }
+  /**
+   * Writes text to a file (UTF-8) through {@link #outputs}: a refusal or a failure is a user error
+   * naming the file, and the old file is then as it was.
+   */
+  void writeText(Path file, String text) {
+    outputs.writeText(file, text);
   }
 }

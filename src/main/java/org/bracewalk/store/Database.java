@@ -81,34 +81,67 @@ public final class Database implements RecordStore {
   }
 
   /**
-   * Opens (or creates) the database file and migrates it.
+   * Opens (or creates) the database file and migrates it. The file is first looked at without
+   * writing a byte ({@link DatabaseFile#inspect}): anything that is not a Bracewalk database, and a
+   * file in a folder that does not exist, is refused before the driver opens it. A new file is
+   * marked with Bracewalk's {@code application_id} before anything else is written to it; a
+   * Bracewalk file of before the mark is marked when it is opened.
    *
    * @throws StoreException naming the file when it cannot be opened, is not a Bracewalk database,
    *     or cannot be migrated
    */
   public static Database open(Path file) {
     Path absolute = file.toAbsolutePath();
-    try {
-      Path parent = absolute.getParent();
-      if (parent != null) {
-        Files.createDirectories(parent);
-      }
-    } catch (IOException e) {
-      throw new StoreException(
-          "cannot create the folder for the database " + absolute + ": " + e.getMessage(), e);
-    }
-    if (Files.isDirectory(absolute)) {
-      throw new StoreException(absolute + " is a folder; give a file name for the database");
-    }
+    DatabaseFile.Kind kind = DatabaseFile.inspect(absolute);
     SQLiteDataSource dataSource = dataSource(absolute);
+    if (kind == DatabaseFile.Kind.NEW) {
+      try (Connection c = dataSource.getConnection()) {
+        DatabaseFile.mark(c);
+      } catch (SQLException e) {
+        throw SqlErrors.translate(e, absolute.toString());
+      }
+    }
     migrate(dataSource, absolute);
     try {
       Connection c = dataSource.getConnection();
       requirePragmas(c, absolute);
+      if (kind != DatabaseFile.Kind.BRACEWALK) {
+        DatabaseFile.mark(c);
+      }
       return new Database(absolute, c);
     } catch (SQLException e) {
       throw SqlErrors.translate(e, absolute.toString());
     }
+  }
+
+  /**
+   * Deletes a Bracewalk database file with its {@code -wal}, {@code -shm} and {@code -journal}
+   * files (for {@code demo --replace}); does nothing when there is no file. Anything that is not
+   * a Bracewalk database is refused, as {@link #open} refuses it, and left as it was.
+   *
+   * @return true when a database was deleted (false: no file, or an empty one)
+   * @throws StoreException naming the file and saying what it is, or why it cannot be deleted
+   */
+  public static boolean delete(Path file) {
+    Path absolute = file.toAbsolutePath();
+    if (!Files.exists(absolute, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+      return false;
+    }
+    if (Files.isSymbolicLink(absolute)) {
+      throw new StoreException(absolute + " is a symbolic link; Bracewalk replaces only a database"
+          + " file itself, not a link to one: give the database's own path");
+    }
+    if (DatabaseFile.inspect(absolute) == DatabaseFile.Kind.NEW) {
+      return false; // an empty file: opening it makes the database, nothing to delete
+    }
+    try {
+      for (String suffix : List.of("-wal", "-shm", "-journal", "")) {
+        Files.deleteIfExists(Path.of(absolute + suffix));
+      }
+    } catch (IOException e) {
+      throw new StoreException("cannot replace " + absolute + ": " + e.getMessage(), e);
+    }
+    return true;
   }
 
   static SQLiteDataSource dataSource(Path file) {
@@ -347,6 +380,11 @@ public final class Database implements RecordStore {
   /** The database file. */
   public Path file() {
     return file;
+  }
+
+  @Override
+  public java.util.Optional<Path> databaseFile() {
+    return java.util.Optional.of(file);
   }
 
   @Override

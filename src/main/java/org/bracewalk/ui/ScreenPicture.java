@@ -2,21 +2,23 @@ package org.bracewalk.ui;
 
 import java.awt.image.BufferedImage;
 import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.Parent;
 import javafx.scene.Scene;
 import javafx.scene.image.WritableImage;
 import javax.imageio.ImageIO;
+import org.bracewalk.app.OutputFiles;
 
 /** Renders a screen (a scene-graph root) to a PNG file. Call on the JavaFX thread. */
 public final class ScreenPicture {
   private ScreenPicture() {}
 
-  /** Lays {@code root} out at {@code width} × {@code height}, renders it and writes {@code out}. */
-  public static void write(Parent root, double width, double height, Path out) {
+  /**
+   * Lays {@code root} out at {@code width} × {@code height}, renders it and writes {@code out}
+   * through {@code outputs} (never over the database, through a link, or half-written).
+   */
+  public static void write(Parent root, double width, double height, Path out, OutputFiles outputs) {
     Scene scene = root.getScene();
     if (scene == null) {
       scene = new Scene(root, width, height);
@@ -28,16 +30,10 @@ public final class ScreenPicture {
     BufferedImage bi = SwingFXUtils.fromFXImage(img, null);
     BufferedImage rgb = new BufferedImage(bi.getWidth(), bi.getHeight(), BufferedImage.TYPE_INT_RGB);
     rgb.getGraphics().drawImage(bi, 0, 0, null);
-    try {
-      Path parent = out.toAbsolutePath().getParent();
-      if (parent != null) {
-        Files.createDirectories(parent);
-      }
-      if (!ImageIO.write(rgb, "png", out.toFile())) {
+    outputs.write(out, stream -> {
+      if (!ImageIO.write(rgb, "png", stream)) {
         throw new IOException("no PNG writer available");
       }
-    } catch (IOException e) {
-      throw new UncheckedIOException("could not write the picture to " + out + ": " + e.getMessage(), e);
-    }
+    });
   }
 }

@@ -96,7 +96,7 @@ public final class ScreenShots {
       window.toggleHelp();
     }
     Parent root = window.root();
-    ScreenPicture.write(root, width, height, out);
+    ScreenPicture.write(root, width, height, out, services.outputs());
   }
 
   private Inspection openWalk(PlaneRecord facade) {

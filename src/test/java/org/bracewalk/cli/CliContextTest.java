@@ -5,14 +5,24 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.util.Map;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.app.AppServicesFactory;
 import org.junit.jupiter.api.Test;
 
 class CliContextTest {
   private static final Path HOME = Path.of("/home/inspector");
 
   private static CliContext on(String os, Map<String, String> env) {
-    return new CliContext(file -> {
-      throw new AssertionError("not opened");
+    return new CliContext(new AppServicesFactory() {
+      @Override
+      public AppServices open(Path database) {
+        throw new AssertionError("not opened");
+      }
+
+      @Override
+      public boolean deleteDatabase(Path database) {
+        throw new AssertionError("not deleted");
+      }
     }, env, os, HOME, Clock.systemUTC());
   }
 

@@ -42,6 +42,7 @@ class DatabaseTest {
   @Test
   void everyConnectionHasForeignKeysWalFullSyncAndABusyTimeout() throws Exception {
     Path file = dir.resolve("sub/folder/b.db");
+    Files.createDirectories(file.getParent()); // the store makes no folders (DatabaseFileTest)
     try (Database db = Database.open(file)) {
       assertThat(Files.exists(file)).isTrue();
       for (int i = 0; i < 2; i++) {

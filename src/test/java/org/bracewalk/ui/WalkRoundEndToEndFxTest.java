@@ -58,7 +58,8 @@ class WalkRoundEndToEndFxTest {
     services = AppServices.over(Database.open(dir.resolve("walk.db")), Clock.systemUTC(), PlaneAnalyzer.standard());
     BracewalkApp app = new BracewalkApp(PlaneAnalyzer.standard(), Clock.systemUTC(), background);
     window = app.show(stage, dialogs, services,
-        new ServiceReportIssuer(AppContext.standard().reportFactory(Map.of()).over(services)));
+        new ServiceReportIssuer(AppContext.standard().reportFactory(Map.of()).over(services),
+            services.outputs()));
   }
 
   @AfterEach

@@ -1,5 +1,8 @@
 package org.bracewalk.core.port;
 
+import java.nio.file.Path;
+import java.util.Optional;
+
 /**
  * Everything Bracewalk keeps about sites, in one place (one database file). The repositories share
  * the store's connection; {@link #inTransaction} makes a group of calls all-or-nothing.
@@ -31,6 +34,14 @@ public interface RecordStore extends AutoCloseable {
 
   /** Where the records live, for messages (a file path). */
   String location();
+
+  /**
+   * The database file that holds the records, when they are in one: no output of the program
+   * may be written over it or its companion files ({@code org.bracewalk.app.OutputFiles}).
+   */
+  default Optional<Path> databaseFile() {
+    return Optional.empty();
+  }
 
   /** Closes the store; further calls fail. */
   @Override
