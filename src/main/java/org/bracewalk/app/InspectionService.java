@@ -80,9 +80,15 @@ public final class InspectionService {
     return store.inspections().all();
   }
 
-  /** The structure an inspection is of. */
+  /**
+   * The structure an inspection is of, as the inspection has it: once finalised, with the
+   * inspection interval as at its finalisation, so a later change of interval leaves its report
+   * and record fingerprint as they were; while open, as the structure is now.
+   */
   public Structure structureOf(Inspection inspection) {
-    return store.structures().find(inspection.structureId()).orElseThrow();
+    return store.structures()
+        .asOfInspection(inspection.id())
+        .orElseThrow(() -> new NotFoundException("structure " + inspection.structureId()));
   }
 
   /** The planes an inspection covers: every plane of its structure, by id. */

@@ -62,9 +62,9 @@ public final class SiteService {
 
   /**
    * Sets the days between routine inspections of a structure: what its "next inspection due"
-   * counts from the last finalised inspection. Reports already issued keep the interval they
-   * printed; their record fingerprint covers the structure, so {@code verify-report} then names
-   * the structure as changed since issue.
+   * counts from the last finalised inspection. A finalised inspection keeps the interval as at
+   * its finalisation (the store keeps it with the inspection), so its reports and their record
+   * fingerprint stay as issued.
    *
    * @throws UserInputException naming the field when {@code days} is outside 1 to 366
    */
