@@ -56,11 +56,11 @@ public final class InspectionService {
             : details.carriedOutForAddress();
     return store.inspections()
         .add(
-            new Inspection(
+            TextInput.inspection(new Inspection(
                 0, structureId, clock.instant(), null, details.inspectorName(),
                 details.inspectorPosition(), details.competentPerson(), details.shift(),
                 details.storageSafetyPerson(), details.reason(), InspectionStatus.OPEN, forName,
-                forAddress));
+                forAddress)));
   }
 
   /** The inspection with this id; {@link NotFoundException} otherwise. */
@@ -139,7 +139,8 @@ public final class InspectionService {
             .orElseThrow(() -> new NotFoundException("observation " + observationId));
     requireOpen(inspection(o.inspectionId()), "attach a photo");
     return store.observations()
-        .addPhoto(new Photo(0, observationId, fileName, mediaType, data, clock.instant()));
+        .addPhoto(TextInput.photo(
+            new Photo(0, observationId, fileName, mediaType, data, clock.instant())));
   }
 
   public List<Photo> photos(long observationId) {
@@ -261,10 +262,10 @@ public final class InspectionService {
               + " bays)");
     }
     try {
-      return new Observation(
+      return TextInput.observation(new Observation(
           0, inspection.id(), plane.id(), n.panel(), n.state(), n.memberFound(), n.bowMm(),
           n.gaugeLengthMm(), n.defect(), n.note(), clock.instant(), n.recordedBy(), supersedes,
-          reason);
+          reason));
     } catch (IllegalArgumentException e) {
       throw new UserInputException(
           "observation of plane '" + plane.name() + "', " + n.panel() + ": " + e.getMessage(), e);
