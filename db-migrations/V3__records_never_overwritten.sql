@@ -179,9 +179,10 @@ BEGIN
 END;
 
 CREATE TRIGGER inspections_interval_as_at_finalisation BEFORE UPDATE ON inspections
-WHEN (NEW.status = 'open' AND NEW.inspection_interval_days IS NOT NULL)
+WHEN OLD.status = 'open'
+ AND ((NEW.status = 'open' AND NEW.inspection_interval_days IS NOT NULL)
   OR (NEW.status = 'finalised' AND NEW.inspection_interval_days
-      IS NOT (SELECT inspection_interval_days FROM structures WHERE id = NEW.structure_id))
+      IS NOT (SELECT inspection_interval_days FROM structures WHERE id = NEW.structure_id)))
 BEGIN
   SELECT RAISE(ABORT, 'a finalised inspection keeps the structure''s inspection interval as at its finalisation, an open one none');
 END;
