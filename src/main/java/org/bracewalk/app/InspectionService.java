@@ -200,6 +200,9 @@ public final class InspectionService {
    * When the next routine inspection of a structure is due: the day its last finalised inspection
    * finished plus the structure's interval, in the site's time zone; empty when never inspected.
    * Event-triggered inspections (impact, alteration, weather) are due at once, whatever this says.
+   * The interval is the structure's current one (changing it moves the next due date, which is
+   * what changing it is for); what a finalised inspection's own report shows is the interval as
+   * at its finalisation ({@link #structureOf}).
    */
   public Optional<LocalDate> nextInspectionDue(long structureId) {
     Structure structure =

@@ -303,6 +303,25 @@ class RecordsNeverOverwrittenTest {
   }
 
   @Test
+  void theFileOpensInPythonsSqlite3Module() throws Exception {
+    Path python = Path.of("/usr/bin/python3");
+    assumeThat(Files.isExecutable(python)).as("python3 is not installed at " + python).isTrue();
+    Path copy = dir.resolve("copy.db");
+    Files.copy(file, copy);
+    Process p = new ProcessBuilder(python.toString(), "-c",
+        "import sqlite3, sys\n"
+            + "c = sqlite3.connect(sys.argv[1])\n"
+            + "print(c.execute('PRAGMA integrity_check').fetchone()[0],"
+            + " c.execute('SELECT count(*) FROM observations').fetchone()[0])",
+        copy.toString()).redirectErrorStream(true).start();
+    p.getOutputStream().close();
+    String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+    assertThat(p.waitFor(30, TimeUnit.SECONDS)).isTrue();
+    assertThat(p.exitValue()).as(out).isZero();
+    assertThat(out).isEqualTo("ok 3\n");
+  }
+
+  @Test
   void anotherClientMeetsTheSameRefusal() throws Exception {
     String before = everything();
     Cli reopen = sqlite3(file, "INSERT OR REPLACE INTO inspections (id, structure_id, started_at,"
