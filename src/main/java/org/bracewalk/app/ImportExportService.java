@@ -87,7 +87,7 @@ public final class ImportExportService {
   }
 
   private ImportedSite load(SiteFile file) {
-    Site site = store.sites().add(file.site());
+    Site site = store.sites().add(TextInput.site(file.site()));
     List<Structure> structures = new ArrayList<>();
     List<PlaneRecord> allPlanes = new ArrayList<>();
     List<Inspection> inspections = new ArrayList<>();
@@ -95,36 +95,38 @@ public final class ImportExportService {
     Map<Long, Integer> verifications = new LinkedHashMap<>();
     int observations = 0;
     for (StructureData s : file.structures()) {
-      Structure structure = store.structures().add(new Structure(0, site.id(), s.name(), s.kind(),
-          s.description(), s.designReference(), s.inspectionIntervalDays()));
+      Structure structure = store.structures().add(TextInput.structure(new Structure(0,
+          site.id(), s.name(), s.kind(), s.description(), s.designReference(),
+          s.inspectionIntervalDays())));
       structures.add(structure);
       Map<String, PlaneRecord> planes = new HashMap<>();
       for (PlaneData p : s.planes()) {
-        PlaneRecord plane = store.planes().add(new PlaneRecord(0, structure.id(), p.name(), p.grid()));
+        PlaneRecord plane = store.planes().add(
+            TextInput.plane(new PlaneRecord(0, structure.id(), p.name(), p.grid())));
         planes.put(plane.name(), plane);
         allPlanes.add(plane);
         for (DesignData d : p.designs()) {
-          store.designs().add(new DesignRevision(0, plane.id(), d.number(), d.author(), d.date(),
-              d.approvalNote(), d.recordedAt(), d.design()));
+          store.designs().add(TextInput.revision(new DesignRevision(0, plane.id(), d.number(),
+              d.author(), d.date(), d.approvalNote(), d.recordedAt(), d.design())));
         }
       }
       for (InspectionData i : s.inspections()) {
-        Inspection inspection = store.inspections().add(new Inspection(0, structure.id(),
-            i.startedAt(), null, i.inspectorName(), i.inspectorPosition(), i.competentPerson(),
-            i.shift(), i.storageSafetyPerson(), i.reason(), InspectionStatus.OPEN,
-            i.carriedOutForName(), i.carriedOutForAddress()));
+        Inspection inspection = store.inspections().add(TextInput.inspection(new Inspection(0,
+            structure.id(), i.startedAt(), null, i.inspectorName(), i.inspectorPosition(),
+            i.competentPerson(), i.shift(), i.storageSafetyPerson(), i.reason(),
+            InspectionStatus.OPEN, i.carriedOutForName(), i.carriedOutForAddress())));
         inspectionIds.put(i.number(), inspection.id());
         List<Long> ids = new ArrayList<>();
         for (ObservationData o : i.observations()) {
           Long supersedes = o.supersedes() == null ? null : ids.get(o.supersedes() - 1);
-          Observation stored = store.observations().add(new Observation(0, inspection.id(),
-              planes.get(o.plane()).id(), o.panel(), o.state(), o.member(), o.bowMm(),
-              o.gaugeLengthMm(), o.defect(), o.note(), o.recordedAt(), o.recordedBy(), supersedes,
-              o.correctionReason()));
+          Observation stored = store.observations().add(TextInput.observation(new Observation(0,
+              inspection.id(), planes.get(o.plane()).id(), o.panel(), o.state(), o.member(),
+              o.bowMm(), o.gaugeLengthMm(), o.defect(), o.note(), o.recordedAt(), o.recordedBy(),
+              supersedes, o.correctionReason())));
           ids.add(stored.id());
           for (PhotoData ph : o.photos()) {
-            store.observations().addPhoto(new Photo(0, stored.id(), ph.fileName(), ph.mediaType(),
-                ph.data(), ph.attachedAt()));
+            store.observations().addPhoto(TextInput.photo(new Photo(0, stored.id(), ph.fileName(),
+                ph.mediaType(), ph.data(), ph.attachedAt())));
           }
         }
         observations += ids.size();
@@ -133,12 +135,12 @@ public final class ImportExportService {
         }
         inspections.add(inspection);
         for (RepairOrderData r : i.repairOrders()) {
-          RepairOrder order = store.repairs().addOrder(
-              new RepairOrder(0, inspection.id(), r.createdAt(), r.createdBy(), r.note()));
+          RepairOrder order = store.repairs().addOrder(TextInput.order(
+              new RepairOrder(0, inspection.id(), r.createdAt(), r.createdBy(), r.note())));
           for (RepairActionData a : r.actions()) {
-            RepairAction action = store.repairs().addAction(new RepairAction(0, order.id(),
-                planes.get(a.plane()).id(), a.panel(), a.action(), a.brace(), a.description(),
-                a.dueDate(), a.assignee(), a.doneAt(), a.doneBy(), null));
+            RepairAction action = store.repairs().addAction(TextInput.action(new RepairAction(0,
+                order.id(), planes.get(a.plane()).id(), a.panel(), a.action(), a.brace(),
+                a.description(), a.dueDate(), a.assignee(), a.doneAt(), a.doneBy(), null)));
             if (a.verifiedByInspection() != null) {
               verifications.put(action.id(), a.verifiedByInspection());
             }
@@ -318,9 +320,9 @@ public final class ImportExportService {
       Instant at = r.recordedAt() != null ? r.recordedAt() : clock.instant();
       String by = r.recordedBy().isEmpty() && recordedBy != null ? recordedBy : r.recordedBy();
       Long supersedes = r.supersedesRow() == null ? null : stored.get(r.supersedesRow() - 1).id();
-      Observation o = store.observations().add(new Observation(0, inspectionId,
-          planeIds.get(r.plane()), r.panel(), r.state(), r.member(), r.bowMm(), r.gaugeLengthMm(),
-          r.defect(), r.note(), at, by, supersedes, r.correctionReason()));
+      Observation o = store.observations().add(TextInput.observation(new Observation(0,
+          inspectionId, planeIds.get(r.plane()), r.panel(), r.state(), r.member(), r.bowMm(),
+          r.gaugeLengthMm(), r.defect(), r.note(), at, by, supersedes, r.correctionReason())));
       stored.add(o);
       acknowledged.accept(o);
     }

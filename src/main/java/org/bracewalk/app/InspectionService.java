@@ -56,11 +56,11 @@ public final class InspectionService {
             : details.carriedOutForAddress();
     return store.inspections()
         .add(
-            new Inspection(
+            TextInput.inspection(new Inspection(
                 0, structureId, clock.instant(), null, details.inspectorName(),
                 details.inspectorPosition(), details.competentPerson(), details.shift(),
                 details.storageSafetyPerson(), details.reason(), InspectionStatus.OPEN, forName,
-                forAddress));
+                forAddress)));
   }
 
   /** The inspection with this id; {@link NotFoundException} otherwise. */
@@ -80,9 +80,15 @@ public final class InspectionService {
     return store.inspections().all();
   }
 
-  /** The structure an inspection is of. */
+  /**
+   * The structure an inspection is of, as the inspection has it: once finalised, with the
+   * inspection interval as at its finalisation, so a later change of interval leaves its report
+   * and record fingerprint as they were; while open, as the structure is now.
+   */
   public Structure structureOf(Inspection inspection) {
-    return store.structures().find(inspection.structureId()).orElseThrow();
+    return store.structures()
+        .asOfInspection(inspection.id())
+        .orElseThrow(() -> new NotFoundException("structure " + inspection.structureId()));
   }
 
   /** The planes an inspection covers: every plane of its structure, by id. */
@@ -133,7 +139,8 @@ public final class InspectionService {
             .orElseThrow(() -> new NotFoundException("observation " + observationId));
     requireOpen(inspection(o.inspectionId()), "attach a photo");
     return store.observations()
-        .addPhoto(new Photo(0, observationId, fileName, mediaType, data, clock.instant()));
+        .addPhoto(TextInput.photo(
+            new Photo(0, observationId, fileName, mediaType, data, clock.instant())));
   }
 
   public List<Photo> photos(long observationId) {
@@ -193,6 +200,9 @@ public final class InspectionService {
    * When the next routine inspection of a structure is due: the day its last finalised inspection
    * finished plus the structure's interval, in the site's time zone; empty when never inspected.
    * Event-triggered inspections (impact, alteration, weather) are due at once, whatever this says.
+   * The interval is the structure's current one (changing it moves the next due date, which is
+   * what changing it is for); what a finalised inspection's own report shows is the interval as
+   * at its finalisation ({@link #structureOf}).
    */
   public Optional<LocalDate> nextInspectionDue(long structureId) {
     Structure structure =
@@ -255,10 +265,10 @@ public final class InspectionService {
               + " bays)");
     }
     try {
-      return new Observation(
+      return TextInput.observation(new Observation(
           0, inspection.id(), plane.id(), n.panel(), n.state(), n.memberFound(), n.bowMm(),
           n.gaugeLengthMm(), n.defect(), n.note(), clock.instant(), n.recordedBy(), supersedes,
-          reason);
+          reason));
     } catch (IllegalArgumentException e) {
       throw new UserInputException(
           "observation of plane '" + plane.name() + "', " + n.panel() + ": " + e.getMessage(), e);

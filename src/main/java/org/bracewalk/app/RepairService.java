@@ -30,7 +30,8 @@ public final class RepairService {
   /** Raises a repair order from an inspection now. */
   public RepairOrder raise(long inspectionId, String createdBy, String note) {
     inspection(inspectionId);
-    return store.repairs().addOrder(new RepairOrder(0, inspectionId, clock.instant(), createdBy, note));
+    return store.repairs().addOrder(
+        TextInput.order(new RepairOrder(0, inspectionId, clock.instant(), createdBy, note)));
   }
 
   /**
@@ -50,14 +51,14 @@ public final class RepairService {
     if (panel != null && !plane.grid().contains(panel)) {
       throw new UserInputException("panel " + panel + " lies outside plane '" + plane.name() + "'");
     }
-    return store.repairs().addAction(new RepairAction(0, orderId, planeId, panel, action, brace,
-        description, dueDate, assignee, null, "", null));
+    return store.repairs().addAction(TextInput.action(new RepairAction(0, orderId, planeId,
+        panel, action, brace, description, dueDate, assignee, null, "", null)));
   }
 
   /** Records that an action was done now, by {@code doneBy}. */
   public RepairAction markDone(long actionId, String doneBy) {
     action(actionId);
-    return store.repairs().markDone(actionId, clock.instant(), doneBy);
+    return store.repairs().markDone(actionId, clock.instant(), TextInput.clean(doneBy, "done by"));
   }
 
   /**

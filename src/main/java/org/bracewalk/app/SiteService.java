@@ -25,7 +25,7 @@ public final class SiteService {
   /** Stores a new site (id 0) and returns it with its id. */
   public Site createSite(Site site) {
     requireNew(site.id(), "site");
-    return store.sites().add(site);
+    return store.sites().add(TextInput.site(site));
   }
 
   public List<Site> sites() {
@@ -41,7 +41,7 @@ public final class SiteService {
   public Structure createStructure(Structure structure) {
     requireNew(structure.id(), "structure");
     site(structure.siteId());
-    return store.structures().add(structure);
+    return store.structures().add(TextInput.structure(structure));
   }
 
   public List<Structure> structures(long siteId) {
@@ -62,9 +62,9 @@ public final class SiteService {
 
   /**
    * Sets the days between routine inspections of a structure: what its "next inspection due"
-   * counts from the last finalised inspection. Reports already issued keep the interval they
-   * printed; their record fingerprint covers the structure, so {@code verify-report} then names
-   * the structure as changed since issue.
+   * counts from the last finalised inspection. A finalised inspection keeps the interval as at
+   * its finalisation (the store keeps it with the inspection), so its reports and their record
+   * fingerprint stay as issued.
    *
    * @throws UserInputException naming the field when {@code days} is outside 1 to 366
    */
@@ -92,7 +92,8 @@ public final class SiteService {
       PlaneRecord plane, String author, LocalDate date, String approvalNote, PlaneDesign design) {
     requireNew(plane.id(), "plane");
     structure(plane.structureId());
-    PlaneRecord rounded = new PlaneRecord(0, plane.structureId(), plane.name(), Millimetres.round(plane.grid()));
+    PlaneRecord rounded = TextInput.plane(
+        new PlaneRecord(0, plane.structureId(), plane.name(), Millimetres.round(plane.grid())));
     PlaneDesign roundedDesign = Millimetres.round(design);
     requireSameGrid(rounded, roundedDesign);
     return store.inTransaction(
@@ -100,9 +101,9 @@ public final class SiteService {
           PlaneRecord stored = store.planes().add(rounded);
           store.designs()
               .add(
-                  new DesignRevision(
+                  TextInput.revision(new DesignRevision(
                       0, stored.id(), 1, author, date, approvalNote, clock.instant(),
-                      roundedDesign));
+                      roundedDesign)));
           return stored;
         });
   }
@@ -117,8 +118,8 @@ public final class SiteService {
         () -> {
           int next = store.designs().latest(planeId).map(r -> r.number() + 1).orElse(1);
           return store.designs()
-              .add(new DesignRevision(
-                      0, planeId, next, author, date, approvalNote, clock.instant(), rounded));
+              .add(TextInput.revision(new DesignRevision(
+                      0, planeId, next, author, date, approvalNote, clock.instant(), rounded)));
         });
   }
 

@@ -162,7 +162,10 @@ public final class Database implements RecordStore {
    * new script's name here when adding the script.
    */
   static final List<String> MIGRATION_SCRIPTS =
-      List.of("V1__site_records.sql", "V2__planes_never_change.sql");
+      List.of(
+          "V1__site_records.sql",
+          "V2__planes_never_change.sql",
+          "V3__records_never_overwritten.sql");
 
   /**
    * True when the file's schema history shows exactly the packed scripts, in order, all applied
@@ -276,12 +279,21 @@ public final class Database implements RecordStore {
 
   /** Runs {@code work} on the connection under the lock, translating SQL errors. */
   <T> T call(SqlWork<T> work) {
+    return call(work, null);
+  }
+
+  /**
+   * Runs {@code work} on the connection under the lock; a refusal by a trigger is shown with
+   * {@code subject} (the record the work writes, with the ids the database's literal message
+   * cannot carry).
+   */
+  <T> T call(SqlWork<T> work, SqlErrors.Subject subject) {
     lock.lock();
     try {
       requireOpen();
       return work.run(connection);
     } catch (SQLException e) {
-      throw SqlErrors.translate(e, file.toString());
+      throw SqlErrors.translate(e, file.toString(), subject);
     } finally {
       lock.unlock();
     }

@@ -28,8 +28,8 @@ final class JdbcDesignRepository implements DesignRepository {
   private static final String INSERT =
       """
       INSERT INTO design_revisions
-        (plane_id, number, author, design_date, approval_note, recorded_at)
-      VALUES (?, ?, ?, ?, ?, ?)
+        (plane_id, number, author, design_date, approval_note, recorded_at, panel_count)
+      VALUES (?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String INSERT_PANEL =
       """
@@ -91,6 +91,9 @@ final class JdbcDesignRepository implements DesignRepository {
                     s.setString(4, Columns.text(revision.date()));
                     s.setString(5, revision.approvalNote());
                     s.setString(6, Columns.text(revision.recordedAt()));
+                    // the rows stored below; the database takes no more panels for it after them
+                    s.setInt(7, revision.design().sortedBraces().size()
+                        + revision.design().sortedOpenings().size());
                     s.executeUpdate();
                     id = db.lastInsertId();
                   }
@@ -115,7 +118,9 @@ final class JdbcDesignRepository implements DesignRepository {
                     s.executeBatch();
                   }
                   return read(c, id).orElseThrow();
-                }));
+                },
+                SqlErrors.Subject.of("design revision " + revision.number() + " of plane '"
+                    + plane.name() + "'")));
   }
 
   private static boolean numberTaken(Connection c, DesignRevision revision) throws SQLException {

@@ -22,8 +22,10 @@ final class JdbcInspectionRepository implements InspectionRepository {
       INSERT INTO inspections
         (structure_id, started_at, finished_at, inspector_name, inspector_position,
          competent_person, shift, storage_safety_person, reason, status,
-         carried_out_for_name, carried_out_for_address)
-      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
+         carried_out_for_name, carried_out_for_address, inspection_interval_days)
+      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?,
+              CASE WHEN ?10 = 'finalised'
+                   THEN (SELECT inspection_interval_days FROM structures WHERE id = ?1) END)
       """;
   private static final String SELECT =
       """
@@ -34,7 +36,11 @@ final class JdbcInspectionRepository implements InspectionRepository {
       """;
   private static final String FINALISE =
       """
-      UPDATE inspections SET status = 'finalised', finished_at = ?
+      UPDATE inspections
+      SET status = 'finalised', finished_at = ?,
+          inspection_interval_days =
+            (SELECT s.inspection_interval_days FROM structures s
+             WHERE s.id = inspections.structure_id)
       WHERE id = ? AND status = 'open'
       """;
 
@@ -64,7 +70,8 @@ final class JdbcInspectionRepository implements InspectionRepository {
             s.executeUpdate();
             return find(db.lastInsertId()).orElseThrow();
           }
-        });
+        },
+        SqlErrors.Subject.of("inspection of structure " + inspection.structureId()));
   }
 
   @Override
@@ -99,7 +106,8 @@ final class JdbcInspectionRepository implements InspectionRepository {
             }
           }
           return find(id).orElseThrow();
-        });
+        },
+        SqlErrors.Subject.of("inspection " + id, id));
   }
 
   private List<Inspection> query(String sql, Long key) {

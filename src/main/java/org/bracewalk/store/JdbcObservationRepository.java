@@ -85,7 +85,11 @@ final class JdbcObservationRepository implements ObservationRepository {
                 o.gaugeLengthMm(), o.defect(), o.note(), Columns.millis(o.recordedAt()),
                 o.recordedBy(), o.supersedes(), o.correctionReason());
           }
-        });
+        },
+        SqlErrors.Subject.of("observation of inspection " + o.inspectionId() + ", plane "
+            + o.planeId() + ", " + o.panel()
+            + (o.supersedes() == null ? "" : ", correcting observation " + o.supersedes()),
+            o.inspectionId()));
   }
 
   /** A bow in millimetres as whole tenths, rounded half up. */
@@ -140,6 +144,7 @@ final class JdbcObservationRepository implements ObservationRepository {
 
   @Override
   public Photo addPhoto(Photo photo) {
+    Long inspectionId = find(photo.observationId()).map(Observation::inspectionId).orElse(null);
     return db.call(
         c -> {
           try (PreparedStatement s =
@@ -156,7 +161,10 @@ final class JdbcObservationRepository implements ObservationRepository {
                 .findFirst()
                 .orElseThrow();
           }
-        });
+        },
+        new SqlErrors.Subject("photo '" + photo.fileName() + "' of observation "
+            + photo.observationId()
+            + (inspectionId == null ? "" : " of inspection " + inspectionId), inspectionId));
   }
 
   @Override

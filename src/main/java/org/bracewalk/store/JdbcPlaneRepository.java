@@ -88,7 +88,9 @@ final class JdbcPlaneRepository implements PlaneRepository {
                   insertLengths(c, INSERT_WIDTH, id, widths);
                   insertLengths(c, INSERT_HEIGHT, id, heights);
                   return new PlaneRecord(id, plane.structureId(), plane.name(), grid);
-                }));
+                },
+                SqlErrors.Subject.of(
+                    "plane '" + plane.name() + "' of structure " + plane.structureId())));
   }
 
   private static boolean exists(Connection c, long structureId, String name) throws SQLException {

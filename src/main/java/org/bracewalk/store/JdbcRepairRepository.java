@@ -67,7 +67,8 @@ final class JdbcRepairRepository implements RepairRepository {
             s.executeUpdate();
             return findOrder(db.lastInsertId()).orElseThrow();
           }
-        });
+        },
+        SqlErrors.Subject.of("repair order of inspection " + order.inspectionId()));
   }
 
   @Override
@@ -91,7 +92,9 @@ final class JdbcRepairRepository implements RepairRepository {
             s.executeUpdate();
             return findAction(db.lastInsertId()).orElseThrow();
           }
-        });
+        },
+        SqlErrors.Subject.of("action of repair order " + a.orderId() + " on plane " + a.planeId()
+            + (a.panel() == null ? "" : ", " + a.panel())));
   }
 
   @Override
@@ -147,7 +150,8 @@ final class JdbcRepairRepository implements RepairRepository {
             }
           }
           return findAction(actionId).orElseThrow();
-        });
+        },
+        SqlErrors.Subject.of("repair action " + actionId));
   }
 
   private List<RepairOrder> orders(String sql, long key) {

@@ -45,7 +45,8 @@ final class JdbcSiteRepository implements SiteRepository {
             s.executeUpdate();
             return site.withId(db.lastInsertId());
           }
-        });
+        },
+        SqlErrors.Subject.of("site '" + site.name() + "'"));
   }
 
   @Override

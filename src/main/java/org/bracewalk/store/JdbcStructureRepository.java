@@ -25,6 +25,15 @@ final class JdbcStructureRepository implements StructureRepository {
       FROM structures
       """;
 
+  private static final String AS_OF_INSPECTION =
+      """
+      SELECT s.id, s.site_id, s.name, s.kind, s.description, s.design_reference,
+             coalesce(i.inspection_interval_days, s.inspection_interval_days)
+               AS inspection_interval_days
+      FROM inspections i JOIN structures s ON s.id = i.structure_id
+      WHERE i.id = ?
+      """;
+
   private final Database db;
 
   JdbcStructureRepository(Database db) {
@@ -45,7 +54,8 @@ final class JdbcStructureRepository implements StructureRepository {
             s.executeUpdate();
             return structure.withId(db.lastInsertId());
           }
-        });
+        },
+        SqlErrors.Subject.of("structure '" + structure.name() + "' of site " + structure.siteId()));
   }
 
   @Override
@@ -68,8 +78,14 @@ final class JdbcStructureRepository implements StructureRepository {
             s.setLong(2, structureId);
             return s.executeUpdate();
           }
-        });
+        },
+        SqlErrors.Subject.of("structure " + structureId));
     return changed == 0 ? Optional.empty() : find(structureId);
+  }
+
+  @Override
+  public Optional<Structure> asOfInspection(long inspectionId) {
+    return query(AS_OF_INSPECTION, inspectionId).stream().findFirst();
   }
 
   private List<Structure> query(String sql, long key) {

@@ -8,27 +8,56 @@ import org.bracewalk.core.port.StoreException;
 import org.sqlite.SQLiteErrorCode;
 import org.sqlite.SQLiteException;
 
-/** Turns SQLite errors into messages a user can act on. */
+/**
+ * Turns SQLite errors into messages a user can act on.
+ *
+ * <p>The triggers' messages are literal text (an expression in {@code RAISE(ABORT, ...)} parses
+ * only in SQLite 3.47 and later, and the file must open in older tools), so they name the kind of
+ * record and the rule but no ids. The repository that writes a record passes a {@link Subject}
+ * naming it with its ids, and the message shown is the subject, a colon, and the rule.
+ */
 final class SqlErrors {
   private static final Pattern FINALISED =
-      Pattern.compile("inspection (\\d+) is finalised and cannot be changed \\(([^)]*)\\)");
+      Pattern.compile("is finalised and cannot be changed \\(([^)]*)\\)");
   private static final Pattern DETAIL = Pattern.compile("\\((.*)\\)\\s*$", Pattern.DOTALL);
 
   private SqlErrors() {}
 
-  static StoreException translate(SQLException e, String file) {
-    String message = e.getMessage() == null ? "" : e.getMessage();
-    Matcher finalised = FINALISED.matcher(message);
-    if (finalised.find()) {
-      return new InspectionFinalisedException(
-          Long.parseLong(finalised.group(1)), finalised.group(2), e);
+  /**
+   * The record a statement writes, as the user knows it.
+   *
+   * @param label e.g. "observation of inspection 3, plane 5, lift 2, bay 1"
+   * @param inspectionId the inspection the record belongs to, when there is one, so that a
+   *     refusal because it is finalised names it; {@code null} otherwise
+   */
+  record Subject(String label, Long inspectionId) {
+    static Subject of(String label) {
+      return new Subject(label, null);
     }
+
+    static Subject of(String label, long inspectionId) {
+      return new Subject(label, inspectionId);
+    }
+  }
+
+  static StoreException translate(SQLException e, String file) {
+    return translate(e, file, null);
+  }
+
+  static StoreException translate(SQLException e, String file, Subject subject) {
+    String message = e.getMessage() == null ? "" : e.getMessage();
     SQLiteErrorCode code = e instanceof SQLiteException s ? s.getResultCode() : null;
     if (code == SQLiteErrorCode.SQLITE_CONSTRAINT_TRIGGER) {
-      return new StoreException(detail(message), e);
+      String rule = detail(message);
+      Matcher finalised = FINALISED.matcher(rule);
+      if (finalised.find() && subject != null && subject.inspectionId() != null) {
+        return new InspectionFinalisedException(subject.inspectionId(), finalised.group(1), e);
+      }
+      return new StoreException(subject == null ? rule : subject.label() + ": " + rule, e);
     }
     if (code != null && code.name().startsWith("SQLITE_CONSTRAINT")) {
-      return new StoreException("the database refused the record: " + detail(message), e);
+      return new StoreException("the database refused "
+          + (subject == null ? "the record" : subject.label()) + ": " + detail(message), e);
     }
     if (code != null
         && (code.name().startsWith("SQLITE_BUSY") || code.name().startsWith("SQLITE_LOCKED"))) {

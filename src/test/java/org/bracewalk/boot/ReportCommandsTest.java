@@ -62,6 +62,8 @@ class ReportCommandsTest {
 
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + db);
         Statement st = c.createStatement()) {
+      // the database refuses to change a structure's description; an editor drops that guard
+      st.executeUpdate("DROP TRIGGER structures_keep_their_particulars");
       st.executeUpdate("UPDATE structures SET description = description || '.' WHERE id = 1");
     }
     Run changed = run("verify-report", "--db", db.toString(), pdf.toString());

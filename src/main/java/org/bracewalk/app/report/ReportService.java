@@ -89,7 +89,7 @@ public final class ReportService {
     RecordStore store = services.store();
     return store.inTransaction(() -> {
       Inspection inspection = services.inspections().inspection(inspectionId);
-      Structure structure = services.sites().structure(inspection.structureId());
+      Structure structure = services.inspections().structureOf(inspection);
       Site site = services.sites().site(structure.siteId());
       List<Observation> rows = services.inspections().observations(inspectionId);
       Set<Long> withPhotos = new HashSet<>(store.observations().withPhotos(inspectionId));

@@ -73,11 +73,11 @@ public record Observation(
     correctionReason = Text.optional(correctionReason);
     if (supersedes != null) {
       Text.ref(supersedes, "superseded observation");
-      if (correctionReason.isEmpty()) {
+      if (correctionReason.isBlank()) {
         throw new IllegalArgumentException(
             "a correction of observation " + supersedes + " must say why it is made");
       }
-    } else if (!correctionReason.isEmpty()) {
+    } else if (!correctionReason.isBlank()) {
       throw new IllegalArgumentException(
           "a correction reason was given but no observation to supersede");
     }

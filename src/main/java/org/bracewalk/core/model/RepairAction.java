@@ -43,7 +43,7 @@ public record RepairAction(
     description = Text.optional(description);
     assignee = Text.optional(assignee);
     doneBy = Text.optional(doneBy);
-    if (doneAt == null && !doneBy.isEmpty()) {
+    if (doneAt == null && !doneBy.isBlank()) {
       throw new IllegalArgumentException("an action done by " + doneBy + " needs the time it was done");
     }
     if (verifiedByInspectionId != null) {

@@ -2,23 +2,33 @@ package org.bracewalk.core.model;
 
 import java.util.Objects;
 
-/** Small checks shared by the site records' compact constructors. */
+/**
+ * Small checks shared by the site records' compact constructors.
+ *
+ * <p>Text is kept exactly as given, never trimmed here: a record read back from the store must
+ * show what the store holds, so that text edited outside the program (a blank added at the end
+ * of a note) is seen, fingerprinted and reported as it is. The application trims what people
+ * type before it builds the record it stores ({@code app.TextInput}), and the database refuses
+ * untrimmed text on insert.
+ */
 final class Text {
   private Text() {}
 
-  /** An optional text field: {@code null} becomes the empty string, surrounding blanks go. */
+  /** An optional text field: {@code null} becomes the empty string; otherwise kept as given. */
   static String optional(String value) {
-    return value == null ? "" : value.strip();
+    return value == null ? "" : value;
   }
 
-  /** A required text field: must be present and not blank; names the field when it is not. */
+  /**
+   * A required text field: must be present and not blank; names the field when it is not. Kept
+   * as given.
+   */
   static String required(String value, String field) {
     Objects.requireNonNull(value, field);
-    String s = value.strip();
-    if (s.isEmpty()) {
+    if (value.isBlank()) {
       throw new IllegalArgumentException(field + " must not be empty");
     }
-    return s;
+    return value;
   }
 
   /** A stored id: 0 means "not stored yet", anything else is positive. */

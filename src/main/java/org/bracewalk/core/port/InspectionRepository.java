@@ -19,7 +19,9 @@ public interface InspectionRepository {
   List<Inspection> all();
 
   /**
-   * Marks an open inspection finalised at {@code finishedAt} and returns it.
+   * Marks an open inspection finalised at {@code finishedAt} and returns it. In the same write
+   * the store keeps the structure's inspection interval as at this moment with the inspection
+   * (see {@link StructureRepository#asOfInspection}).
    *
    * @throws InspectionFinalisedException when it already is
    */

@@ -19,4 +19,12 @@ public interface StructureRepository {
    * and returns the structure as now stored; empty when there is no such structure.
    */
   Optional<Structure> setInspectionInterval(long structureId, int days);
+
+  /**
+   * The structure an inspection is of, as that inspection has it: a finalised inspection keeps
+   * the inspection interval as at its finalisation (what its report and fingerprint show, however
+   * the interval changes later); an open one sees the structure as it is now. The other fields
+   * never change. Empty when there is no such inspection.
+   */
+  Optional<Structure> asOfInspection(long inspectionId);
 }

@@ -18,9 +18,11 @@ class SiteRecordsTest {
   }
 
   @Test
-  void optionalTextBecomesEmptyAndRequiredTextMustBeThere() {
+  void optionalTextBecomesEmptyAndRequiredTextMustBeThereAndTextIsKeptAsGiven() {
+    // kept as given: a record read from the store shows what the store holds (the application
+    // trims typed text before storing, app.TextInput)
     Site site = new Site(0, " Depot ", null, null, null, ZoneId.of("UTC"), DisplayUnits.METRIC);
-    assertThat(site.name()).isEqualTo("Depot");
+    assertThat(site.name()).isEqualTo(" Depot ");
     assertThat(site.clientName()).isEmpty();
     assertThatThrownBy(() -> new Site(0, " ", "", "", "", ZoneId.of("UTC"), DisplayUnits.METRIC))
         .hasMessageContaining("site name");
