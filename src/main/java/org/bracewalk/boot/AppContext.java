@@ -10,7 +10,10 @@ import org.bracewalk.app.report.ReportService;
 import org.bracewalk.app.report.ReportServiceFactory;
 import org.bracewalk.cli.CliContext;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.core.port.DocumentSigner;
+import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.report.PdfDocumentStampReader;
+import org.bracewalk.report.Pkcs12Signer;
 import org.bracewalk.report.PdfRepairOrderRenderer;
 import org.bracewalk.report.PdfReportRenderer;
 import org.bracewalk.report.TemplateSource;
@@ -58,10 +61,17 @@ public final class AppContext {
   /** The variable naming the templates' language: {@code report.<lang>.properties} (default en). */
   public static final String LANGUAGE_VARIABLE = "BRACEWALK_LANG";
 
+  /** The variable naming the PKCS#12 file whose key signs reports and repair orders. */
+  public static final String SIGN_FILE_VARIABLE = "BRACEWALK_SIGN_P12";
+
+  /** The variable holding the password of {@code $BRACEWALK_SIGN_P12} (and of its key). */
+  public static final String SIGN_PASSWORD_VARIABLE = "BRACEWALK_SIGN_PASSWORD";
+
   /**
    * The report service over open services, with the PDF renderers reading their wording from
    * {@code $BRACEWALK_TEMPLATES} (a folder) or the packed {@code templates/}, in the language
-   * {@code $BRACEWALK_LANG} (default {@code en}).
+   * {@code $BRACEWALK_LANG} (default {@code en}); reports and repair orders are signed with the
+   * key in {@code $BRACEWALK_SIGN_P12} when it is set (the file is read at the first signature).
    */
   public ReportServiceFactory reportFactory(Map<String, String> env) {
     String folder = env.get(TEMPLATES_VARIABLE);
@@ -72,7 +82,56 @@ public final class AppContext {
     PdfReportRenderer reports = new PdfReportRenderer(source, language);
     PdfRepairOrderRenderer orders = new PdfRepairOrderRenderer(source, language);
     PdfDocumentStampReader stamps = new PdfDocumentStampReader();
-    return services -> new ReportService(services, analyzer, reports, orders, stamps, clock);
+    DocumentSigner signer = signer(env);
+    return services -> new ReportService(services, analyzer, reports, orders, stamps, signer, clock);
+  }
+
+  /**
+   * The signer the environment configures: none when {@code $BRACEWALK_SIGN_P12} is unset or
+   * empty. A file without a password, or a password without a file, is refused when a document
+   * is made (not before: the other commands do not sign), naming the variable.
+   */
+  DocumentSigner signer(Map<String, String> env) {
+    String file = env.get(SIGN_FILE_VARIABLE);
+    String password = env.get(SIGN_PASSWORD_VARIABLE);
+    boolean hasFile = file != null && !file.isBlank();
+    boolean hasPassword = password != null && !password.isEmpty();
+    if (!hasFile && !hasPassword) {
+      return DocumentSigner.NONE;
+    }
+    Path path = null;
+    if (hasFile) {
+      try {
+        path = Path.of(file.strip());
+      } catch (java.nio.file.InvalidPathException e) {
+        return refusing(SIGN_FILE_VARIABLE + " names no usable file: " + e.getMessage());
+      }
+    }
+    if (!hasFile || !hasPassword) {
+      return refusing(hasFile
+          ? SIGN_FILE_VARIABLE + " is set but " + SIGN_PASSWORD_VARIABLE + " is not: set the"
+              + " password of " + file.strip() + " there, or unset " + SIGN_FILE_VARIABLE
+              + " to issue unsigned documents"
+          : SIGN_PASSWORD_VARIABLE + " is set but " + SIGN_FILE_VARIABLE + " is not: set it to"
+              + " the PKCS#12 file (.p12) to sign with");
+    }
+    return new Pkcs12Signer(path, password.toCharArray(), "$" + SIGN_FILE_VARIABLE,
+        "$" + SIGN_PASSWORD_VARIABLE, clock);
+  }
+
+  /** A signer configured wrongly: every document it is asked to sign is refused with the message. */
+  private static DocumentSigner refusing(String message) {
+    return new DocumentSigner() {
+      @Override
+      public byte[] sign(byte[] pdf, String reason) {
+        throw new RenderingException(message);
+      }
+
+      @Override
+      public boolean signs() {
+        return true;
+      }
+    };
   }
 
   /** What the store commands need, with the environment given to the program. */
