@@ -70,7 +70,7 @@ class ForgedDocumentsTest {
     return pdf;
   }
 
-  private static String text(byte[] pdf) throws IOException {
+  static String text(byte[] pdf) throws IOException {
     try (PDDocument d = Loader.loadPDF(pdf)) {
       return new PDFTextStripper().getText(d).replaceAll("\\s+", " ");
     }
