@@ -317,7 +317,9 @@ public final class ReportService {
       }
       if (r.origin() == IssuedReport.Origin.BEFORE_REGISTER) {
         notes.add("registered before the register kept record fingerprints: the fingerprint is"
-            + " taken from the document's own stamp, which its registered SHA-256 shows unchanged");
+            + " taken from the document's own stamp, which its registered SHA-256 shows unchanged;"
+            + " whether this database issued it or a site-file import brought the row in was not"
+            + " recorded then (issue it again for a copy the register vouches for fully)");
       }
     } else {
       List<IssuedReport> named = services.store().issuedReports().ofInspection(id).stream()
