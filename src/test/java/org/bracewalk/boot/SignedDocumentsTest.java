@@ -147,6 +147,28 @@ class SignedDocumentsTest {
         .isEqualTo(1);
   }
 
+  /**
+   * A second, independent reader: poppler's {@code pdfsig} (when installed, as for
+   * {@code PageImagesTest}) checks the signature as a PDF viewer does.
+   */
+  @Test
+  void popplerFindsTheSignatureValidOverTheWholeDocument() throws Exception {
+    Path pdfsig = Path.of("/usr/bin/pdfsig");
+    org.junit.jupiter.api.Assumptions.assumeTrue(Files.isExecutable(pdfsig),
+        "poppler's pdfsig is not installed");
+    Path pdf = dir.resolve("impact.pdf");
+    Run made = run(signing(), "report", "--db", db.toString(), "--inspection", "2", "--out",
+        pdf.toString());
+    assertThat(made.code()).as(made.err()).isZero();
+    Process p = new ProcessBuilder(pdfsig.toString(), pdf.toString()).redirectErrorStream(true).start();
+    String output = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+    assertThat(p.waitFor(60, TimeUnit.SECONDS)).isTrue();
+    assertThat(output).contains("Signer Certificate Common Name: Test Inspector")
+        .contains("Signing Hash Algorithm: SHA-256")
+        .contains("Total document signed")
+        .contains("Signature is Valid");
+  }
+
   @Test
   void aSignedRepairOrderToo() throws Exception {
     Path pdf = dir.resolve("order.pdf");
