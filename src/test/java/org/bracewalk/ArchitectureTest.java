@@ -154,6 +154,17 @@ class ArchitectureTest {
   }
 
   @Test
+  void bouncyCastleOnlyThroughOpenPdf() {
+    check(
+        noClasses()
+            .should()
+            .dependOnClassesThat()
+            .resideInAPackage("org.bouncycastle..")
+            .because("BouncyCastle is on the class path only for OpenPDF's signatures (PdfPKCS7);"
+                + " our signing goes through OpenPDF in the report adapter"));
+  }
+
+  @Test
   void jgraphtOnlyInTheEngine() {
     check(
         noClasses()

@@ -152,8 +152,65 @@ public final class OutputFiles {
    * @throws UserInputException naming the path: refused, or it cannot be written
    */
   public void write(Path target, Body body) {
-    Path real = resolve(target);
-    Path folder = real.getParent();
+    writeAll(List.of(new Staged(target, body)), () -> null);
+  }
+
+  /** One file of {@link #writeAll}: where, and what it holds. */
+  public record Staged(Path target, Body body) {
+    /** A file holding exactly {@code bytes}. */
+    public static Staged of(Path target, byte[] bytes) {
+      Objects.requireNonNull(bytes, "bytes");
+      return new Staged(target, out -> out.write(bytes));
+    }
+  }
+
+  /**
+   * Writes several files as one step: checks every target ({@link #check}: none refused, no two
+   * the same), writes each to a synced temporary file beside it, runs {@code beforeMove} (an issued
+   * document is registered there, so what stands under a name is always a registered copy), then
+   * renames each into place and syncs the folders. A failure before the renames leaves every target
+   * as it was and no temporary file; {@code beforeMove}'s exception passes through unchanged.
+   *
+   * @return what {@code beforeMove} returned
+   * @throws UserInputException naming the path: refused, or it cannot be written
+   */
+  public <T> T writeAll(List<Staged> files, java.util.function.Supplier<T> beforeMove) {
+    check(files.stream().map(Staged::target).toArray(Path[]::new));
+    List<Path> reals = new ArrayList<>();
+    List<Path> temps = new ArrayList<>();
+    try {
+      for (Staged f : files) {
+        Path real = resolve(f.target());
+        reals.add(real);
+        temps.add(writeTemporary(f.target(), real.getParent(), f.body()));
+      }
+      T result = beforeMove.get();
+      for (int i = 0; i < files.size(); i++) {
+        try {
+          move(temps.get(i), reals.get(i));
+        } catch (IOException e) {
+          throw new UserInputException("cannot write " + files.get(i).target() + ": "
+              + e.getMessage(), e);
+        }
+        temps.set(i, null);
+        syncFolder(reals.get(i).getParent());
+      }
+      return result;
+    } finally {
+      for (Path tmp : temps) {
+        if (tmp != null) {
+          try {
+            Files.deleteIfExists(tmp);
+          } catch (IOException ignored) {
+            // the write has failed already and says so; a stray hidden .part file is all that is left
+          }
+        }
+      }
+    }
+  }
+
+  /** The body written to a new synced temporary file in {@code folder} (made when missing). */
+  private static Path writeTemporary(Path target, Path folder, Body body) {
     try {
       Files.createDirectories(folder);
     } catch (IOException e) {
@@ -179,9 +236,9 @@ public final class OutputFiles {
         out.flush();
         channel.force(true);
       }
-      move(tmp, real);
+      Path done = tmp;
       tmp = null;
-      syncFolder(folder);
+      return done;
     } catch (IOException e) {
       throw new UserInputException("cannot write " + target + ": " + e.getMessage(), e);
     } finally {
@@ -189,7 +246,7 @@ public final class OutputFiles {
         try {
           Files.deleteIfExists(tmp);
         } catch (IOException ignored) {
-          // the write has failed already and says so; a stray temporary file is named in the log
+          // the write has failed already and says so
         }
       }
     }

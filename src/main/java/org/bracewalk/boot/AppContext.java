@@ -13,7 +13,10 @@ import org.bracewalk.app.report.ReportService;
 import org.bracewalk.app.report.ReportServiceFactory;
 import org.bracewalk.cli.CliContext;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.core.port.DocumentSigner;
+import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.report.PdfDocumentStampReader;
+import org.bracewalk.report.Pkcs12Signer;
 import org.bracewalk.report.PdfRepairOrderRenderer;
 import org.bracewalk.report.PdfReportRenderer;
 import org.bracewalk.report.TemplateSource;
@@ -72,11 +75,19 @@ public final class AppContext {
   /** The variable naming the templates' language: {@code report.<lang>.properties} (default en). */
   public static final String LANGUAGE_VARIABLE = "BRACEWALK_LANG";
 
+  /** The variable naming the PKCS#12 file whose key signs reports and repair orders. */
+  public static final String SIGN_FILE_VARIABLE = "BRACEWALK_SIGN_P12";
+
+  /** The variable holding the password of {@code $BRACEWALK_SIGN_P12} (and of its key). */
+  public static final String SIGN_PASSWORD_VARIABLE = "BRACEWALK_SIGN_PASSWORD";
+
   /**
    * The report service over open services, with the PDF renderers reading their wording from
    * {@code $BRACEWALK_TEMPLATES} (a folder) or the packed {@code templates/}, in the language
    * {@code $BRACEWALK_LANG} (default {@code en}). The files of that folder are the factory's
-   * {@link ReportServiceFactory#inputFiles}: no document is written over them.
+   * {@link ReportServiceFactory#inputFiles}: no document is written over them. Reports and repair
+   * orders are signed with the key in {@code $BRACEWALK_SIGN_P12} when it is set (the file is read
+   * at the first signature).
    */
   public ReportServiceFactory reportFactory(Map<String, String> env) {
     String folder = env.get(TEMPLATES_VARIABLE);
@@ -87,16 +98,26 @@ public final class AppContext {
     PdfReportRenderer reports = new PdfReportRenderer(source, language);
     PdfRepairOrderRenderer orders = new PdfRepairOrderRenderer(source, language);
     PdfDocumentStampReader stamps = new PdfDocumentStampReader();
-    List<Path> inputs = folder == null || folder.isBlank() ? List.of() : filesIn(Path.of(folder));
+    DocumentSigner signer = signer(env);
+    List<Path> inputs = new java.util.ArrayList<>(
+        folder == null || folder.isBlank() ? List.of() : filesIn(Path.of(folder)));
+    String key = env.get(SIGN_FILE_VARIABLE);
+    if (key != null && !key.isBlank()) {
+      try {
+        inputs.add(Path.of(key.strip())); // the signing key is read too: never written over
+      } catch (java.nio.file.InvalidPathException e) {
+        // the signer refuses it, naming the variable
+      }
+    }
     return new ReportServiceFactory() {
       @Override
       public ReportService over(AppServices services) {
-        return new ReportService(services, analyzer, reports, orders, stamps, clock);
+        return new ReportService(services, analyzer, reports, orders, stamps, signer, clock);
       }
 
       @Override
       public List<Path> inputFiles() {
-        return inputs;
+        return List.copyOf(inputs);
       }
     };
   }
@@ -108,6 +129,54 @@ public final class AppContext {
     } catch (IOException e) {
       return List.of();
     }
+  }
+
+  /**
+   * The signer the environment configures: none when {@code $BRACEWALK_SIGN_P12} is unset or
+   * empty. A file without a password, or a password without a file, is refused when a document
+   * is made (not before: the other commands do not sign), naming the variable.
+   */
+  DocumentSigner signer(Map<String, String> env) {
+    String file = env.get(SIGN_FILE_VARIABLE);
+    String password = env.get(SIGN_PASSWORD_VARIABLE);
+    boolean hasFile = file != null && !file.isBlank();
+    boolean hasPassword = password != null && !password.isEmpty();
+    if (!hasFile && !hasPassword) {
+      return DocumentSigner.NONE;
+    }
+    Path path = null;
+    if (hasFile) {
+      try {
+        path = Path.of(file.strip());
+      } catch (java.nio.file.InvalidPathException e) {
+        return refusing(SIGN_FILE_VARIABLE + " names no usable file: " + e.getMessage());
+      }
+    }
+    if (!hasFile || !hasPassword) {
+      return refusing(hasFile
+          ? SIGN_FILE_VARIABLE + " is set but " + SIGN_PASSWORD_VARIABLE + " is not: set the"
+              + " password of " + file.strip() + " there, or unset " + SIGN_FILE_VARIABLE
+              + " to issue unsigned documents"
+          : SIGN_PASSWORD_VARIABLE + " is set but " + SIGN_FILE_VARIABLE + " is not: set it to"
+              + " the PKCS#12 file (.p12) to sign with");
+    }
+    return new Pkcs12Signer(path, password.toCharArray(), "$" + SIGN_FILE_VARIABLE,
+        "$" + SIGN_PASSWORD_VARIABLE, clock);
+  }
+
+  /** A signer configured wrongly: every document it is asked to sign is refused with the message. */
+  private static DocumentSigner refusing(String message) {
+    return new DocumentSigner() {
+      @Override
+      public byte[] sign(byte[] pdf, String reason) {
+        throw new RenderingException(message);
+      }
+
+      @Override
+      public boolean signs() {
+        return true;
+      }
+    };
   }
 
   /** What the store commands need, with the environment given to the program. */

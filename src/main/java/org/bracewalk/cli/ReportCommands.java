@@ -2,7 +2,6 @@ package org.bracewalk.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -12,6 +11,7 @@ import org.bracewalk.app.report.ReportBenchmark;
 import org.bracewalk.app.report.ReportService;
 import org.bracewalk.app.report.ReportServiceFactory;
 import org.bracewalk.app.report.Verification;
+import org.bracewalk.core.model.IssuedReport;
 import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.PlaneVerdict;
@@ -57,6 +57,13 @@ public final class ReportCommands {
     abstract int run(AppServices services, ReportService reports, PrintWriter out, PrintWriter err);
   }
 
+  /** The line saying what the register now holds for an issued file. */
+  static String registered(IssuedReport r, ReportService reports) {
+    boolean pdf = r.kind() != IssuedReport.Kind.REPAIR_ORDER_CSV;
+    return "registered as issued (" + r.kind().label() + " " + r.id() + ", SHA-256 "
+        + r.fingerprint() + ")" + (pdf && reports.signs() ? "; digitally signed" : "");
+  }
+
   static void planeLines(ReportContent c, PrintWriter out) {
     for (PlaneSection p : c.planes()) {
       PlaneVerdict v = p.verdict();
@@ -72,7 +79,9 @@ public final class ReportCommands {
       description = {"Write the inspection report (PDF) of an inspection.",
           "A finalised inspection gives the report; an open one the same marked DRAFT on every"
               + " page. Refused (exit 2, nothing written) while a recorded particular is empty;"
-              + " the message names every one. The file's fingerprint is remembered as issued."})
+              + " the message names every one. The file's exact bytes are registered as issued"
+              + " (SHA-256, records fingerprint); with $BRACEWALK_SIGN_P12 and"
+              + " $BRACEWALK_SIGN_PASSWORD set, the PDF is also digitally signed."})
   static final class Report extends ReportCommand {
     @Option(names = "--inspection", required = true, description = "The inspection's id.")
     long inspection;
@@ -90,10 +99,9 @@ public final class ReportCommands {
     int run(AppServices s, ReportService reports, PrintWriter out, PrintWriter err) {
       outputs.check(outFile);
       ReportContent content = reports.reportContent(inspection);
-      byte[] pdf = reports.reportPdf(content);
-      outputs.write(outFile, pdf);
-      reports.recordIssued(inspection, outFile.getFileName().toString(), pdf);
+      IssuedReport issued = reports.issueReport(content, outFile, outputs);
       out.println("wrote " + outFile + (content.header().draft() ? " (DRAFT: the inspection is open)" : ""));
+      out.println(registered(issued, reports));
       out.println("inspection " + inspection + ", " + content.planes().size() + " planes, "
           + content.findings().size() + " findings, " + content.actions().size()
           + " repair actions");
@@ -107,7 +115,8 @@ public final class ReportCommands {
       description = {"Write the crew's repair order (PDF) of an inspection, and optionally the"
           + " same actions as CSV (columns in README.md).",
           "Actions come in working order: taking out of service first, then what is needed for"
-              + " rigidity, then the rest of the restore-to-design list."})
+              + " rigidity, then the rest of the restore-to-design list. Both files are registered"
+              + " as issued; the PDF is signed as the report is."})
   static final class RepairOrderCommand extends ReportCommand {
     @Option(names = "--inspection", required = true, description = "The inspection's id.")
     long inspection;
@@ -132,24 +141,25 @@ public final class ReportCommands {
         outputs.check(outFile, csv);
       }
       RepairOrderContent order = reports.repairOrderContent(inspection);
-      byte[] pdf = reports.repairOrderPdf(order);
-      byte[] csvBytes = csv == null ? null
-          : ReportService.repairOrderCsv(order).getBytes(StandardCharsets.UTF_8);
-      outputs.write(outFile, pdf);
+      List<IssuedReport> issued = reports.issueRepairOrder(order, outFile, csv, outputs);
       out.println("wrote " + outFile + ": " + order.actions().size() + " actions");
+      out.println(registered(issued.get(0), reports));
       if (csv != null) {
-        outputs.write(csv, csvBytes);
         out.println("wrote " + csv);
+        out.println(registered(issued.get(1), reports));
       }
       return 0;
     }
   }
 
   @Command(name = "verify-report", mixinStandardHelpOptions = true,
-      description = {"Check a report or repair order against the database: recompute the"
-          + " fingerprint of the inspection's records and compare.",
-          "Exit 0 when they match, 1 when any record differs (each difference is named), 2 when"
-              + " the file is not a Bracewalk document."})
+      description = {"Check a report or repair order (PDF, or its CSV) against the database: it"
+          + " matches only when its bytes are those of a copy in the register of issued documents,"
+          + " its stamp names that same registered document, and the inspection's records still"
+          + " give the fingerprint it was issued with.",
+          "Exit 0 when it matches, 1 when anything differs (each difference is named: bytes"
+              + " edited or never issued, a stamp naming another document, records changed since"
+              + " issue), 2 when the file is not a Bracewalk document."})
   static final class VerifyReport extends ReportCommand {
     @Parameters(paramLabel = "FILE.pdf", description = "The document to check.")
     Path file;
@@ -170,22 +180,24 @@ public final class ReportCommands {
       Verification v = reports.verify(bytes);
       switch (v.outcome()) {
         case NOT_OURS -> out.println("not a Bracewalk document: " + file
-            + " (no Bracewalk record fingerprint in it)");
-        case MATCH -> out.println("matches: the records of inspection " + v.inspectionId()
-            + " are as they were when this " + v.kind() + " was made (fingerprint "
-            + v.fingerprint() + ")");
+            + " (no Bracewalk stamp in it, and its bytes are no registered copy)");
+        case MATCH -> {
+          IssuedReport r = v.issuedCopy().orElseThrow();
+          out.println("matches: " + file + " is the " + r.kind().label() + " issued as "
+              + r.fileName() + " at " + r.issuedAt() + " for inspection " + v.inspectionId()
+              + ", and the records of inspection " + v.inspectionId()
+              + " are as they were then (fingerprint " + v.fingerprint() + ")");
+        }
         case DIFFERS -> {
-          out.println("differs: the records of inspection " + v.inspectionId()
-              + " are not as they were when this " + v.kind() + " was made");
+          out.println("does not match: " + file + " (" + (v.kind().isEmpty() ? "document" : v.kind())
+              + " of inspection " + v.inspectionId() + ")");
           for (String d : v.differences()) {
             out.println("  " + d);
           }
         }
       }
-      if (v.outcome() != Verification.Outcome.NOT_OURS) {
-        out.println(v.issuedCopy()
-            .map(r -> "this file is the copy issued as " + r.fileName() + " at " + r.issuedAt())
-            .orElse("no issued copy with exactly these bytes is recorded"));
+      for (String note : v.notes()) {
+        out.println("note: " + note);
       }
       return v.outcome().exitCode();
     }

@@ -57,8 +57,8 @@ class ReportCommandsTest {
 
     Run same = run("verify-report", "--db", db.toString(), pdf.toString());
     assertThat(same.code()).isZero();
-    assertThat(same.out()).contains("matches: the records of inspection 2")
-        .contains("this file is the copy issued as impact.pdf");
+    assertThat(same.out()).contains("matches: " + pdf + " is the inspection-report issued as"
+        + " impact.pdf").contains("the records of inspection 2 are as they were then");
 
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + db);
         Statement st = c.createStatement()) {
@@ -68,8 +68,8 @@ class ReportCommandsTest {
     }
     Run changed = run("verify-report", "--db", db.toString(), pdf.toString());
     assertThat(changed.code()).isEqualTo(1);
-    assertThat(changed.out()).contains("differs: the records of inspection 2")
-        .contains("changed since the document was made: the structure record");
+    assertThat(changed.out()).contains("does not match: " + pdf + " (inspection-report of"
+        + " inspection 2)").contains("records changed since issue: the structure record");
   }
 
   @Test
@@ -102,12 +102,17 @@ class ReportCommandsTest {
     Run r = run("repair-order", "--db", db.toString(), "--inspection", "2", "--out", pdf.toString(),
         "--csv", csv.toString());
     assertThat(r.code()).as(r.err()).isZero();
-    assertThat(r.out()).contains("wrote " + pdf + ": 3 actions");
+    assertThat(r.out()).contains("wrote " + pdf + ": 3 actions")
+        .containsPattern("registered as issued \\(repair-order \\d+, SHA-256 [0-9a-f]{64}\\)")
+        .containsPattern("registered as issued \\(repair-order-csv \\d+, SHA-256 [0-9a-f]{64}\\)");
     assertThat(Files.readString(csv)).startsWith("number,plane,lift,bay,lifts,action,member,kind,"
         + "urgency,due,deviation,done_by,done_date\r\n1,frame 2,1,1,1 2 3 4 5,out-of-service,");
     Run v = run("verify-report", "--db", db.toString(), pdf.toString());
     assertThat(v.code()).isZero();
-    assertThat(v.out()).contains("when this repair-order was made");
+    assertThat(v.out()).contains("matches: " + pdf + " is the repair-order issued as order.pdf");
+    Run c = run("verify-report", "--db", db.toString(), csv.toString());
+    assertThat(c.code()).as(c.out()).isZero();
+    assertThat(c.out()).contains("matches: " + csv + " is the repair-order-csv issued as order.csv");
   }
 
   @Test

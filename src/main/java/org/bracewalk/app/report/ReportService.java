@@ -4,6 +4,7 @@ import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.file.Path;
 import java.time.Clock;
 import java.time.LocalDate;
 import java.time.ZoneId;
@@ -18,6 +19,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.TreeMap;
 import org.bracewalk.app.AppServices;
+import org.bracewalk.app.OutputFiles;
 import org.bracewalk.app.damage.BowLimits;
 import org.bracewalk.app.damage.RackMember;
 import org.bracewalk.core.analysis.PlaneAnalysis;
@@ -38,6 +40,7 @@ import org.bracewalk.core.model.RepairOrder;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.model.StructureKind;
+import org.bracewalk.core.port.DocumentSigner;
 import org.bracewalk.core.port.DocumentStampReader;
 import org.bracewalk.core.port.RecordStore;
 import org.bracewalk.core.port.RepairOrderRenderer;
@@ -70,16 +73,30 @@ public final class ReportService {
   private final ReportRenderer reports;
   private final RepairOrderRenderer orders;
   private final DocumentStampReader stamps;
+  private final DocumentSigner signer;
   private final Clock clock;
 
+  /** A report service issuing unsigned documents. */
   public ReportService(AppServices services, PlaneAnalyzer analyzer, ReportRenderer reports,
       RepairOrderRenderer orders, DocumentStampReader stamps, Clock clock) {
+    this(services, analyzer, reports, orders, stamps, DocumentSigner.NONE, clock);
+  }
+
+  /** A report service whose reports and repair orders {@code signer} signs. */
+  public ReportService(AppServices services, PlaneAnalyzer analyzer, ReportRenderer reports,
+      RepairOrderRenderer orders, DocumentStampReader stamps, DocumentSigner signer, Clock clock) {
     this.services = Objects.requireNonNull(services, "services");
     this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
     this.reports = Objects.requireNonNull(reports, "reports");
     this.orders = Objects.requireNonNull(orders, "orders");
     this.stamps = Objects.requireNonNull(stamps, "stamps");
+    this.signer = Objects.requireNonNull(signer, "signer");
     this.clock = Objects.requireNonNull(clock, "clock");
+  }
+
+  /** True when issued reports and repair orders carry a digital signature. */
+  public boolean signs() {
+    return signer.signs();
   }
 
   // ---- records and fingerprint --------------------------------------------------------------
@@ -125,7 +142,8 @@ public final class ReportService {
   }
 
   /**
-   * The report as a PDF. Refused, naming every one, while a recorded particular is empty.
+   * The report as a PDF, signed when a certificate is configured: the final bytes. Refused,
+   * naming every one, while a recorded particular is empty.
    *
    * @throws MissingParticularsException when particulars are missing; nothing is made then
    */
@@ -145,13 +163,80 @@ public final class ReportService {
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
-    return out.toByteArray();
+    return signer.sign(out.toByteArray(),
+        "inspection report of inspection " + content.header().inspectionId());
   }
 
-  /** Remembers that {@code pdf} was issued as {@code fileName} for the inspection. */
-  public IssuedReport recordIssued(long inspectionId, String fileName, byte[] pdf) {
-    return services.store().issuedReports().add(new IssuedReport(0, inspectionId, fileName,
-        RecordFingerprinter.sha256(pdf), clock.instant()));
+  /**
+   * Issues the report: its final bytes (signed when a certificate is configured) are registered
+   * as issued and written to {@code out} (through a temporary file beside it, so what stands under
+   * the name is always a registered copy).
+   *
+   * @return the register's row
+   * @throws MissingParticularsException when particulars are missing; nothing is written then
+   */
+  public IssuedReport issueReport(ReportContent content, Path out) {
+    return issueReport(content, out, services.outputs());
+  }
+
+  /**
+   * {@link #issueReport(ReportContent, Path)} written through {@code outputs} (a command's, which
+   * also guards the files it reads): the target is checked before the report is drawn.
+   */
+  public IssuedReport issueReport(ReportContent content, Path out, OutputFiles outputs) {
+    outputs.check(out);
+    byte[] pdf = reportPdf(content);
+    long id = Long.parseLong(content.header().inspectionId());
+    String records = content.fingerprint().sha256();
+    return outputs.writeAll(List.of(OutputFiles.Staged.of(out, pdf)),
+        () -> register(id, IssuedReport.Kind.INSPECTION_REPORT, out, pdf, records));
+  }
+
+  /**
+   * Issues the repair order as a PDF at {@code pdfOut} and, when {@code csvOut} is not null, the
+   * same actions as CSV; both are registered as issued in one transaction before they take their
+   * names.
+   *
+   * @return the register's rows: the PDF's, then the CSV's
+   */
+  public List<IssuedReport> issueRepairOrder(RepairOrderContent order, Path pdfOut, Path csvOut) {
+    return issueRepairOrder(order, pdfOut, csvOut, services.outputs());
+  }
+
+  /** {@link #issueRepairOrder(RepairOrderContent, Path, Path)} written through {@code outputs}. */
+  public List<IssuedReport> issueRepairOrder(RepairOrderContent order, Path pdfOut, Path csvOut,
+      OutputFiles outputs) {
+    if (csvOut == null) {
+      outputs.check(pdfOut);
+    } else {
+      outputs.check(pdfOut, csvOut);
+    }
+    byte[] pdf = repairOrderPdf(order);
+    long id = Long.parseLong(order.header().inspectionId());
+    String records = order.fingerprint().sha256();
+    List<OutputFiles.Staged> files = new ArrayList<>();
+    files.add(OutputFiles.Staged.of(pdfOut, pdf));
+    byte[] csv = csvOut == null ? null
+        : repairOrderCsv(order).getBytes(java.nio.charset.StandardCharsets.UTF_8);
+    if (csv != null) {
+      files.add(OutputFiles.Staged.of(csvOut, csv));
+    }
+    return outputs.writeAll(files, () -> services.store().inTransaction(() -> {
+      List<IssuedReport> rows = new ArrayList<>();
+      rows.add(register(id, IssuedReport.Kind.REPAIR_ORDER, pdfOut, pdf, records));
+      if (csv != null) {
+        rows.add(register(id, IssuedReport.Kind.REPAIR_ORDER_CSV, csvOut, csv, records));
+      }
+      return rows;
+    }));
+  }
+
+  /** Adds a document's exact bytes to the register of issued documents. */
+  IssuedReport register(long inspectionId, IssuedReport.Kind kind, Path file, byte[] bytes,
+      String recordsFingerprint) {
+    return services.store().issuedReports().add(IssuedReport.issued(inspectionId, kind,
+        file.getFileName().toString(), RecordFingerprinter.sha256(bytes), recordsFingerprint,
+        clock.instant()));
   }
 
   // ---- the repair order -----------------------------------------------------------------------
@@ -165,6 +250,7 @@ public final class ReportService {
         c.fingerprint());
   }
 
+  /** The repair order as a PDF, signed when a certificate is configured: the final bytes. */
   public byte[] repairOrderPdf(RepairOrderContent content) {
     ByteArrayOutputStream out = new ByteArrayOutputStream(64 * 1024);
     try {
@@ -172,7 +258,8 @@ public final class ReportService {
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
-    return out.toByteArray();
+    return signer.sign(out.toByteArray(),
+        "repair order of inspection " + content.header().inspectionId());
   }
 
   public static String repairOrderCsv(RepairOrderContent content) {
@@ -181,7 +268,18 @@ public final class ReportService {
 
   // ---- checking a document --------------------------------------------------------------------
 
-  /** Checks a document's fingerprint against the records it names. */
+  /**
+   * Checks a document against the register of issued documents and the records. It matches only
+   * when (a) its SHA-256 is that of a copy this database issued, (b) its stamp names that same
+   * registered document (inspection, kind, records fingerprint), and (c) the inspection's records
+   * now give the registered fingerprint. Anything else differs, and each difference is named. A
+   * document with no stamp is not ours, unless its bytes are a registered CSV repair order.
+   *
+   * <p>A copy registered before the register kept record fingerprints (origin
+   * {@code before-register}) is checked against the fingerprint its own stamp carries: its bytes,
+   * stamp included, are shown unchanged by the registered SHA-256. A row brought in by a site-file
+   * import vouches for nothing: another database issued it.
+   */
   public Verification verify(byte[] document) {
     Optional<DocumentStamp> read;
     try {
@@ -189,42 +287,143 @@ public final class ReportService {
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
+    String bytesHash = RecordFingerprinter.sha256(document);
+    List<IssuedReport> copies = services.store().issuedReports().withBytes(bytesHash);
     if (read.isEmpty()) {
-      return Verification.notOurs();
+      return verifyUnstamped(copies);
     }
     DocumentStamp stamp = read.get();
-    RecordFingerprint carried = stamp.fingerprint();
     long id;
     try {
       id = Long.parseLong(stamp.inspectionId());
     } catch (NumberFormatException e) {
       return Verification.notOurs();
     }
+    String where = services.store().location();
     List<String> differences = new ArrayList<>();
-    Optional<Inspection> inspection = services.store().inspections().find(id);
-    if (inspection.isEmpty()) {
-      differences.add("inspection " + id + " is not in " + services.store().location());
-      return new Verification(Verification.Outcome.DIFFERS, stamp.kind(), stamp.inspectionId(),
-          carried.sha256(), differences, Optional.empty());
-    }
-    InspectionRecords records = records(id);
-    RecordFingerprint now = RecordFingerprinter.fingerprint(records);
-    if (!carried.scheme().equals(now.scheme())) {
-      differences.add("the document uses canonical form " + carried.scheme()
-          + "; this program computes " + now.scheme());
-    } else if (!carried.sha256().equals(now.sha256())) {
-      differences.addAll(compare(carried.sections(), now.sections(), records));
-      if (differences.isEmpty()) {
-        differences.add("the fingerprint differs although every section matches: the document's"
-            + " fingerprint was altered");
+    List<String> notes = new ArrayList<>();
+
+    // (a) the bytes are those of a copy this database issued
+    Optional<IssuedReport> copy = copies.stream()
+        .filter(r -> r.origin() != IssuedReport.Origin.IMPORTED)
+        .min(java.util.Comparator.comparing((IssuedReport r) -> !sameDocument(r, stamp, id)));
+    if (copy.isEmpty()) {
+      if (copies.isEmpty()) {
+        differences.add("these bytes are not an issued copy (edited after issue, or never issued):"
+            + " no document with SHA-256 " + bytesHash + " is in the register of " + where);
+      } else {
+        IssuedReport imported = copies.get(0);
+        differences.add("these bytes are registered only through a site-file import (as "
+            + imported.fileName() + ", issued " + imported.issuedAt() + "): another database issued"
+            + " them, so " + where + " cannot vouch for them; check the document against the"
+            + " database that issued it");
       }
     }
-    String fileHash = RecordFingerprinter.sha256(document);
-    Optional<IssuedReport> copy = services.store().issuedReports().ofInspection(id).stream()
-        .filter(r -> r.fingerprint().equals(fileHash)).findFirst();
+
+    // (b) the stamp names that same registered document
+    if (copy.isPresent()) {
+      IssuedReport r = copy.get();
+      if (r.inspectionId() != id) {
+        differences.add("stamp names inspection " + id + " but this document was issued for"
+            + " inspection " + r.inspectionId());
+      }
+      if (!r.kind().label().equals(stamp.kind())) {
+        differences.add("stamp says " + stamp.kind() + " but this document was issued as "
+            + r.kind().label());
+      }
+      if (r.recordsFingerprint() != null
+          && !r.recordsFingerprint().equals(stamp.fingerprint().sha256())) {
+        differences.add("stamp carries records fingerprint " + stamp.fingerprint().sha256()
+            + " but this document was issued with " + r.recordsFingerprint());
+      }
+      if (r.origin() == IssuedReport.Origin.BEFORE_REGISTER) {
+        notes.add("registered before the register kept record fingerprints: the fingerprint is"
+            + " taken from the document's own stamp, which its registered SHA-256 shows unchanged;"
+            + " whether this database issued it or a site-file import brought the row in was not"
+            + " recorded then (issue it again for a copy the register vouches for fully)");
+      }
+    } else {
+      List<IssuedReport> named = services.store().issuedReports().ofInspection(id).stream()
+          .filter(r -> r.origin() == IssuedReport.Origin.ISSUED && sameDocument(r, stamp, id))
+          .toList();
+      if (named.isEmpty()) {
+        differences.add("stamp names no registered document: no " + stamp.kind()
+            + " of inspection " + id + " with records fingerprint " + stamp.fingerprint().sha256()
+            + " was issued from " + where);
+      } else {
+        IssuedReport n = named.get(named.size() - 1);
+        differences.add("stamp names the " + stamp.kind() + " of inspection " + id + " issued as "
+            + n.fileName() + " at " + n.issuedAt() + ", but this file is not that copy");
+      }
+    }
+
+    // (c) the records still give the fingerprint the document was issued with
+    String issuedWith = copy.map(IssuedReport::recordsFingerprint)
+        .orElse(stamp.fingerprint().sha256());
+    if (issuedWith == null) {
+      issuedWith = stamp.fingerprint().sha256();
+    }
+    Optional<Inspection> inspection = services.store().inspections().find(id);
+    if (inspection.isEmpty()) {
+      differences.add("records changed since issue: inspection " + id + " is not in " + where);
+    } else {
+      InspectionRecords records = records(id);
+      RecordFingerprint now = RecordFingerprinter.fingerprint(records);
+      RecordFingerprint carried = stamp.fingerprint();
+      if (!carried.scheme().equals(now.scheme())) {
+        differences.add("the document uses canonical form " + carried.scheme()
+            + "; this program computes " + now.scheme());
+      } else if (!issuedWith.equals(now.sha256())) {
+        List<String> sections = carried.sha256().equals(issuedWith)
+            ? compare(carried.sections(), now.sections(), records) : List.of();
+        if (sections.isEmpty()) {
+          differences.add("records changed since issue: the records of inspection " + id
+              + " now give fingerprint " + now.sha256() + ", not " + issuedWith);
+        } else {
+          differences.addAll(sections);
+        }
+      }
+    }
     return new Verification(
         differences.isEmpty() ? Verification.Outcome.MATCH : Verification.Outcome.DIFFERS,
-        stamp.kind(), stamp.inspectionId(), carried.sha256(), differences, copy);
+        stamp.kind(), stamp.inspectionId(), issuedWith, differences, copy, notes);
+  }
+
+  /** True when the register row is the document the stamp names. */
+  private static boolean sameDocument(IssuedReport r, DocumentStamp stamp, long id) {
+    return r.inspectionId() == id && r.kind().label().equals(stamp.kind())
+        && (r.recordsFingerprint() == null
+            || r.recordsFingerprint().equals(stamp.fingerprint().sha256()));
+  }
+
+  /** A file with no stamp: ours only when its bytes are a registered CSV repair order. */
+  private Verification verifyUnstamped(List<IssuedReport> copies) {
+    Optional<IssuedReport> csv = copies.stream()
+        .filter(r -> r.origin() == IssuedReport.Origin.ISSUED
+            && r.kind() == IssuedReport.Kind.REPAIR_ORDER_CSV)
+        .reduce((first, second) -> second);
+    if (csv.isEmpty()) {
+      return Verification.notOurs();
+    }
+    IssuedReport r = csv.get();
+    List<String> differences = new ArrayList<>();
+    String where = services.store().location();
+    if (services.store().inspections().find(r.inspectionId()).isEmpty()) {
+      differences.add("records changed since issue: inspection " + r.inspectionId()
+          + " is not in " + where);
+    } else {
+      String now = fingerprint(r.inspectionId()).sha256();
+      if (!now.equals(r.recordsFingerprint())) {
+        differences.add("records changed since issue: the records of inspection "
+            + r.inspectionId() + " now give fingerprint " + now + ", not "
+            + r.recordsFingerprint() + " (a CSV carries no section digests; issue the repair"
+            + " order again, or check its PDF, to see which records changed)");
+      }
+    }
+    return new Verification(
+        differences.isEmpty() ? Verification.Outcome.MATCH : Verification.Outcome.DIFFERS,
+        r.kind().label(), String.valueOf(r.inspectionId()), r.recordsFingerprint(), differences,
+        Optional.of(r), List.of());
   }
 
   private static List<String> compare(List<SectionDigest> then, List<SectionDigest> now,
@@ -239,14 +438,15 @@ public final class ReportService {
     for (Map.Entry<String, String> e : a.entrySet()) {
       String nowDigest = b.get(e.getKey());
       if (nowDigest == null) {
-        out.add("no longer in the database: " + describe(e.getKey(), planeNames));
+        out.add("records changed since issue: no longer in the database: "
+            + describe(e.getKey(), planeNames));
       } else if (!nowDigest.equals(e.getValue())) {
-        out.add("changed since the document was made: " + describe(e.getKey(), planeNames));
+        out.add("records changed since issue: " + describe(e.getKey(), planeNames));
       }
     }
     for (String name : b.keySet()) {
       if (!a.containsKey(name)) {
-        out.add("new in the database: " + describe(name, planeNames));
+        out.add("records changed since issue: new in the database: " + describe(name, planeNames));
       }
     }
     return out;

@@ -1,6 +1,5 @@
 package org.bracewalk.ui.findings;
 
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.Objects;
 import java.util.function.Consumer;
@@ -10,11 +9,12 @@ import org.bracewalk.core.port.report.RepairOrderContent;
 import org.bracewalk.core.port.report.ReportContent;
 
 /**
- * Issues the documents through the report service, as {@code bracewalk report} and {@code bracewalk
- * repair-order} do, and writes them through the same {@link OutputFiles}: never over the database
- * or its companion files, a link or a file the documents are made from; written to a temporary
- * file beside the target and moved into place, so a half-written file never stands under the
- * chosen name. An issued report is recorded with its fingerprint.
+ * Issues the documents through the report service's issuing use case, as {@code bracewalk report}
+ * and {@code bracewalk repair-order} do, writing through the same {@link OutputFiles}: never over
+ * the database or its companion files, a link or a file the documents are made from. The final
+ * bytes (signed when a certificate is configured) are registered as issued and moved into place
+ * from a temporary file beside the target, so a half-written or unregistered file never stands
+ * under the chosen name.
  */
 public final class ServiceReportIssuer implements ReportIssuer {
   private final ReportService reports;
@@ -35,14 +35,11 @@ public final class ServiceReportIssuer implements ReportIssuer {
     outputs.check(out);
     progress.accept(new Progress(0.1, "reading the inspection's records"));
     ReportContent content = reports.reportContent(inspectionId);
-    progress.accept(new Progress(0.4, "drawing the report"));
-    byte[] pdf = reports.reportPdf(content);
-    progress.accept(new Progress(0.8, "writing " + out.getFileName()));
-    outputs.write(out, pdf);
-    progress.accept(new Progress(0.95, "recording the issue"));
-    reports.recordIssued(inspectionId, out.getFileName().toString(), pdf);
+    progress.accept(new Progress(0.4, "drawing the report" + (reports.signs() ? " and signing it" : "")));
+    reports.issueReport(content, out, outputs);
     return "Issued the inspection report " + out + (content.header().draft() ? " (DRAFT: the inspection is open)" : "")
-        + "; record fingerprint " + content.fingerprint().sha256().substring(0, 16) + "\u2026";
+        + "; record fingerprint " + content.fingerprint().sha256().substring(0, 16) + "\u2026"
+        + (reports.signs() ? "; digitally signed" : "");
   }
 
   @Override
@@ -53,11 +50,8 @@ public final class ServiceReportIssuer implements ReportIssuer {
     outputs.check(out, csv);
     progress.accept(new Progress(0.1, "reading the inspection's records"));
     RepairOrderContent order = reports.repairOrderContent(inspectionId);
-    progress.accept(new Progress(0.4, "drawing the repair order"));
-    byte[] pdf = reports.repairOrderPdf(order);
-    progress.accept(new Progress(0.8, "writing " + out.getFileName() + " and " + csv.getFileName()));
-    outputs.write(out, pdf);
-    outputs.write(csv, ReportService.repairOrderCsv(order).getBytes(StandardCharsets.UTF_8));
+    progress.accept(new Progress(0.4, "drawing the repair order" + (reports.signs() ? " and signing it" : "")));
+    reports.issueRepairOrder(order, out, csv, outputs);
     return "Issued the repair order " + out + " (" + order.actions().size() + " actions) and " + csv.getFileName();
   }
 }

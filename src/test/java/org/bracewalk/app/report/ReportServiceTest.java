@@ -131,7 +131,9 @@ class ReportServiceTest {
     PlaneRecord frame = services.sites().planes(impact.structureId()).get(0);
     services.inspections().recordObservation(open.id(),
         NewObservation.of(frame.id(), PanelRef.of(1, 1), PanelState.SOUND, "Priya Danvers"));
-    byte[] draft = reports.reportPdf(open.id());
+    Path draftFile = dir.resolve("draft.pdf");
+    reports.issueReport(reports.reportContent(open.id()), draftFile);
+    byte[] draft = java.nio.file.Files.readAllBytes(draftFile);
     for (String page : pages(draft)) {
       assertThat(page).contains("DRAFT - inspection " + open.id() + " is still open");
     }
@@ -141,18 +143,24 @@ class ReportServiceTest {
         NewObservation.of(frame.id(), PanelRef.of(2, 1), PanelState.MISSING, "Priya Danvers"));
     Verification v = reports.verify(draft);
     assertThat(v.outcome()).isEqualTo(Verification.Outcome.DIFFERS);
-    assertThat(v.differences()).containsExactly("changed since the document was made: the"
+    assertThat(v.differences()).containsExactly("records changed since issue: the"
         + " observations of plane '" + frame.name() + "' (id " + frame.id() + ")");
   }
 
   @Test
   void verifyMatchesAnUnchangedReportAndNamesWhatChanged() throws IOException, SQLException {
-    byte[] pdf = reports.reportPdf(impact.id());
+    byte[] unissued = reports.reportPdf(impact.id());
+    assertThat(reports.verify(unissued).differences()).satisfiesExactly(
+        d -> assertThat(d).startsWith("these bytes are not an issued copy (edited after issue, or"
+            + " never issued)"),
+        d -> assertThat(d).startsWith("stamp names no registered document: no inspection-report"
+            + " of inspection " + impact.id()));
+    Path issued = dir.resolve("impact.pdf");
+    reports.issueReport(reports.reportContent(impact.id()), issued);
+    byte[] pdf = java.nio.file.Files.readAllBytes(issued);
     Verification same = reports.verify(pdf);
     assertThat(same.outcome()).isEqualTo(Verification.Outcome.MATCH);
-    assertThat(same.issuedCopy()).isEmpty();
-    reports.recordIssued(impact.id(), "impact.pdf", pdf);
-    assertThat(reports.verify(pdf).issuedCopy()).hasValueSatisfying(r ->
+    assertThat(same.issuedCopy()).hasValueSatisfying(r ->
         assertThat(r.fileName()).isEqualTo("impact.pdf"));
 
     // a crew marks a recorded action done: the report no longer reflects the records
@@ -160,7 +168,7 @@ class ReportServiceTest {
     RepairAction first = services.store().repairs().actionsOf(order.id()).get(0);
     services.store().repairs().markDone(first.id(), java.time.Instant.parse("2025-03-06T10:00:00Z"), "crew");
     assertThat(reports.verify(pdf).differences())
-        .containsExactly("changed since the document was made: the repair orders and their actions");
+        .containsExactly("records changed since issue: the repair orders and their actions");
 
     // someone edits the file behind the program's back
     services.close();
@@ -177,7 +185,7 @@ class ReportServiceTest {
         new Fixtures.SteppingClock());
     Verification v = again.verify(pdf);
     assertThat(v.outcome()).isEqualTo(Verification.Outcome.DIFFERS);
-    assertThat(v.differences()).contains("changed since the document was made: the site record");
+    assertThat(v.differences()).contains("records changed since issue: the site record");
   }
 
   @Test
