@@ -85,9 +85,13 @@ public final class InspectionService {
     return store.structures().find(inspection.structureId()).orElseThrow();
   }
 
-  /** The planes an inspection covers: every plane of its structure, by id. */
+  /**
+   * The planes an inspection covers, by id: every plane of its structure except those retired at
+   * or before the moment it started (a plane retired later stays in it, as it was).
+   */
   public List<PlaneRecord> planesOf(long inspectionId) {
-    return store.planes().ofStructure(inspection(inspectionId).structureId());
+    inspection(inspectionId);
+    return store.planes().ofInspection(inspectionId);
   }
 
   /**
@@ -242,6 +246,13 @@ public final class InspectionService {
               + inspection.label()
               + " covers; pick one of its planes");
     }
+    store.planes().retirement(plane.id())
+        .filter(r -> r.appliesToInspectionStartedAt(inspection.startedAt()))
+        .ifPresent(r -> {
+          throw new UserInputException("plane '" + plane.name() + "' (id " + plane.id()
+              + ") was retired at " + r.retiredAt() + " (" + r.reason() + "), before "
+              + inspection.label() + " started; it is not part of it");
+        });
     if (!plane.grid().contains(n.panel())) {
       throw new UserInputException(
           "panel "

@@ -129,7 +129,8 @@ public final class Database implements RecordStore {
    * new script's name here when adding the script.
    */
   static final List<String> MIGRATION_SCRIPTS =
-      List.of("V1__site_records.sql", "V2__planes_never_change.sql");
+      List.of("V1__site_records.sql", "V2__planes_never_change.sql",
+          "V6__plane_limits_and_retirements.sql");
 
   /**
    * True when the file's schema history shows exactly the packed scripts, in order, all applied
