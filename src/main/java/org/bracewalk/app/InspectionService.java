@@ -19,6 +19,7 @@ import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.Photo;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.port.InspectionFinalisedException;
@@ -40,7 +41,9 @@ public final class InspectionService {
 
   /**
    * Starts an open inspection of a structure now. Empty "carried out for" fields take the site's
-   * client name and address.
+   * client name and address. It covers the structure's planes not retired by then; its start is
+   * never put before a retirement already recorded for the structure (a clock that stands still
+   * or steps back would otherwise make it cover a plane retired before it was started).
    */
   public Inspection start(long structureId, NewInspection details) {
     Structure structure =
@@ -54,10 +57,16 @@ public final class InspectionService {
         blank(details.carriedOutForAddress())
             ? site.clientAddress()
             : details.carriedOutForAddress();
+    Instant now = clock.instant();
+    for (PlaneRetirement r : store.planes().retirementsOf(structureId)) {
+      if (r.retiredAt().isAfter(now)) {
+        now = r.retiredAt();
+      }
+    }
     return store.inspections()
         .add(
             new Inspection(
-                0, structureId, clock.instant(), null, details.inspectorName(),
+                0, structureId, now, null, details.inspectorName(),
                 details.inspectorPosition(), details.competentPerson(), details.shift(),
                 details.storageSafetyPerson(), details.reason(), InspectionStatus.OPEN, forName,
                 forAddress));
