@@ -137,6 +137,10 @@ public final class SitesViewModel {
               words += " (open: " + marked + " of " + plane.grid().panelCount() + " marked)";
             }
           }
+          if (gone != null) {
+            words += " \u00b7 retired " + WHEN.format(gone.retiredAt().atZone(site.timeZone())) + ": "
+                + gone.reason();
+          }
           worst = worse(worst, v);
           out.add(new OverviewRow(OverviewRow.Level.PLANE, plane.name(),
               plane.grid().lifts() + " lifts \u00d7 " + plane.grid().bays() + (plane.grid().bays() == 1 ? " bay" : " bays"),
