@@ -6,6 +6,9 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.Statement;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.ZoneOffset;
@@ -151,5 +154,38 @@ class PlaneLimitAndRetireCommandsTest {
     Run blank = run("plane", "retire", "--db", db, "--plane", "6", "--reason", "  ");
     assertThat(blank.code()).isEqualTo(2);
     assertThat(blank.err()).contains("say why plane 'north facade' (id 6) is retired");
+  }
+
+  @Test
+  void aTypoPlaneStoredBeforeTheLimitCanBeRetiredAndNewInspectionsRunAtFullSpeedAgain()
+      throws Exception {
+    // a file written before migration V6: the 100000 x 100000 plane of the report that led here
+    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + db);
+        Statement st = c.createStatement()) {
+      st.executeUpdate("DROP TRIGGER planes_within_the_size_limit");
+      st.executeUpdate("INSERT INTO planes (id, structure_id, name, lifts, bays, support)"
+          + " VALUES (8, 1, 'typo', 100000, 100000, 'pinned-base')");
+      st.executeUpdate("WITH RECURSIVE n(i) AS (SELECT 1 UNION ALL SELECT i + 1 FROM n WHERE i < 100000)"
+          + " INSERT INTO plane_bay_widths SELECT 8, i, 1000 FROM n");
+      st.executeUpdate("WITH RECURSIVE n(i) AS (SELECT 1 UNION ALL SELECT i + 1 FROM n WHERE i < 100000)"
+          + " INSERT INTO plane_lift_heights SELECT 8, i, 1000 FROM n");
+      st.executeUpdate("INSERT INTO design_revisions (plane_id, number, design_date, recorded_at)"
+          + " VALUES (8, 1, '2025-03-06', '2025-03-06T08:00:00.000Z')");
+    }
+    Run retire = run("plane", "retire", "--db", db, "--plane", "8", "--reason", "typo in --lifts and --bays");
+    assertThat(retire.code()).as(retire.err()).isZero();
+    Run started = run("inspection", "start", "--db", db, "--structure", "1", "--inspector", "Priya Danvers");
+    assertThat(started.code()).as(started.err()).isZero();
+    String id = started.out().replaceAll("(?s).*?inspection (\\d+).*", "$1");
+    long t = System.nanoTime();
+    Run analysed = run("analyse", "--db", db, "--inspection", id);
+    assertThat(analysed.code()).as(analysed.err()).isEqualTo(1); // nothing marked yet: not rigid
+    assertThat(analysed.out()).doesNotContain("typo");
+    assertThat((System.nanoTime() - t) / 1_000_000).isLessThan(30_000);
+    // the site file cannot carry a map of ten thousand million panels: it says so at once
+    Run export = run("export", "--db", db, "--site", "1", "--to", dir.resolve("site.json").toString());
+    assertThat(export.code()).isEqualTo(2);
+    assertThat(export.err()).contains("structure 'Aisle C racking run', plane 'typo': 100000 lifts x"
+        + " 100000 bays is larger than the limit of 100 lifts x 500 bays");
   }
 }
