@@ -84,6 +84,14 @@ class PlaneLimitAndRetireCommandsTest {
   }
 
   @Test
+  void theReportBenchStoresItsPlanesSoItKeepsToTheLimitToo() {
+    Run r = run("bench-report", "--size", "101", "--planes", "1", "--runs", "1");
+    assertThat(r.code()).isEqualTo(2);
+    assertThat(r.err()).contains("plane 'plane 1': 101 lifts x 101 bays is larger than the limit"
+        + " of 100 lifts x 500 bays").contains("(field --size)");
+  }
+
+  @Test
   void aDesignMapLargerThanTheLimitIsRefusedNamingTheFile() throws Exception {
     StringBuilder map = new StringBuilder();
     for (int lift = 0; lift < 101; lift++) {
