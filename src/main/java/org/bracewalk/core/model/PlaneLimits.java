@@ -11,7 +11,7 @@ import java.util.Optional;
  * about 2.5 m, so 500 bays is a run over a kilometre long (common practice; no scaffold or
  * racking run on record comes near either). A full-size plane, 100 x 500 unbraced, was measured
  * on a shared two-core machine at about 1.2 s for {@code analyse} and 4 to 4.5 s for {@code
- * report} (a 1.9 MB PDF); 200 x 1000 took 3 s and 6 to 12 s, which is why the limit is not
+ * report} (a 1.9 MB PDF); 200 x 1000 took 1.5 to 3 s and 6 to 12 s (7 MB), which is why the limit is not
  * larger. {@code check} and {@code bench} analyse panel maps without storing them and keep their
  * own, larger bounds.
  */
