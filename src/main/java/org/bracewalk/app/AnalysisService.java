@@ -28,14 +28,14 @@ public final class AnalysisService {
     this.analyzer = Objects.requireNonNull(analyzer);
   }
 
-  /** Every plane of the inspection's structure, analysed, by plane id. */
+  /** Every plane the inspection covers ({@link InspectionService#planesOf}), analysed, by id. */
   public InspectionAnalysis analyse(long inspectionId) {
     Inspection inspection = inspections.inspection(inspectionId);
     Structure structure = sites.structure(inspection.structureId());
     Site site = sites.site(structure.siteId());
     List<Observation> rows = inspections.observations(inspectionId);
     List<PlaneResult> results = new ArrayList<>();
-    for (PlaneRecord plane : sites.planes(structure.id())) {
+    for (PlaneRecord plane : inspections.planesOf(inspectionId)) {
       results.add(analysePlane(inspection, plane, rows));
     }
     return new InspectionAnalysis(site, structure, inspection, results);

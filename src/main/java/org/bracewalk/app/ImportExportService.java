@@ -20,6 +20,7 @@ import org.bracewalk.app.sitefile.SiteFile.PhotoData;
 import org.bracewalk.app.sitefile.SiteFile.PlaneData;
 import org.bracewalk.app.sitefile.SiteFile.RepairActionData;
 import org.bracewalk.app.sitefile.SiteFile.RepairOrderData;
+import org.bracewalk.app.sitefile.SiteFile.RetirementData;
 import org.bracewalk.app.sitefile.SiteFile.StructureData;
 import org.bracewalk.app.sitefile.SiteFileReader;
 import org.bracewalk.app.sitefile.SiteFileWriter;
@@ -43,7 +44,9 @@ import org.bracewalk.core.model.IssuedReport;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.Photo;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.RepairAction;
 import org.bracewalk.core.model.RepairOrder;
 import org.bracewalk.core.model.Site;
@@ -152,6 +155,16 @@ public final class ImportExportService {
         }
       }
     }
+    for (int k = 0; k < file.structures().size(); k++) {
+      long structureId = structures.get(k).id();
+      for (PlaneData p : file.structures().get(k).planes()) {
+        if (p.retired() != null) {
+          PlaneRecord plane = store.planes().findByName(structureId, p.name()).orElseThrow();
+          store.planes().retire(new PlaneRetirement(plane.id(), p.retired().at(),
+              p.retired().by(), p.retired().reason()));
+        }
+      }
+    }
     verifications.forEach((action, number) ->
         store.repairs().markVerified(action, inspectionIds.get(number)));
     return new ImportedSite(site, structures, allPlanes, inspections, observations);
@@ -182,14 +195,24 @@ public final class ImportExportService {
     for (Structure s : structures) {
       Map<Long, String> planeNames = new HashMap<>();
       List<PlaneData> planes = new ArrayList<>();
+      Map<Long, PlaneRetirement> retired = new HashMap<>();
+      store.planes().retirementsOf(s.id()).forEach(r -> retired.put(r.planeId(), r));
       for (PlaneRecord p : store.planes().ofStructure(s.id())) {
+        // a plane stored before the limit (migration V6) may be far larger: say so rather than
+        // write a map of millions of panels
+        PlaneLimits.problem(p.name(), p.grid().lifts(), p.grid().bays()).ifPresent(problem -> {
+          throw new UserInputException("structure '" + s.name() + "', " + problem
+              + ", so the site file cannot carry it (it was stored before the limit)");
+        });
         planeNames.put(p.id(), p.name());
         List<DesignData> designs = new ArrayList<>();
         for (DesignRevision d : store.designs().ofPlane(p.id())) {
           designs.add(new DesignData(d.number(), d.author(), d.date(), d.approvalNote(),
               d.recordedAt(), d.design()));
         }
-        planes.add(new PlaneData(p.name(), p.grid(), designs));
+        PlaneRetirement r = retired.get(p.id());
+        planes.add(new PlaneData(p.name(), p.grid(), designs,
+            r == null ? null : new RetirementData(r.retiredAt(), r.retiredBy(), r.reason())));
       }
       List<InspectionData> inspections = new ArrayList<>();
       for (Inspection i : store.inspections().ofStructure(s.id())) {
@@ -279,7 +302,7 @@ public final class ImportExportService {
       throw new InspectionFinalisedException(inspectionId, "record observations from " + fileName);
     }
     Map<String, PlaneGrid> grids = new HashMap<>();
-    for (PlaneRecord p : store.planes().ofStructure(inspection.structureId())) {
+    for (PlaneRecord p : store.planes().ofInspection(inspectionId)) {
       grids.put(p.name(), p.grid());
     }
     return ObservationCsv.read(fileName, text, grids);
@@ -312,7 +335,7 @@ public final class ImportExportService {
       String recordedBy, Consumer<Observation> acknowledged) {
     Inspection inspection = inspection(inspectionId);
     Map<String, Long> planeIds = new HashMap<>();
-    for (PlaneRecord p : store.planes().ofStructure(inspection.structureId())) {
+    for (PlaneRecord p : store.planes().ofInspection(inspection.id())) {
       planeIds.put(p.name(), p.id());
     }
     List<Observation> stored = new ArrayList<>();
@@ -380,6 +403,9 @@ public final class ImportExportService {
   public PlaneRecord createPlaneFromMap(long structureId, String name, String fileName,
       String text, String author, LocalDate date, String approvalNote) {
     PanelMap map = parseMap(fileName, text, MapKind.DESIGN);
+    PlaneLimits.problem(name, map.lifts(), map.bays()).ifPresent(problem -> {
+      throw new UserInputException(fileName + ": " + problem + " (the map's rows and columns)");
+    });
     PlaneGrid grid = map.grid(map.statedSupport().orElse(Support.PINNED_BASE));
     return new SiteService(store, clock).createPlane(new PlaneRecord(0, structureId, name, grid),
         author, date, approvalNote, map.toDesign(grid));

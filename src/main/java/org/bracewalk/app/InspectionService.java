@@ -19,6 +19,7 @@ import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.Photo;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.port.InspectionFinalisedException;
@@ -40,7 +41,9 @@ public final class InspectionService {
 
   /**
    * Starts an open inspection of a structure now. Empty "carried out for" fields take the site's
-   * client name and address.
+   * client name and address. It covers the structure's planes not retired by then; its start is
+   * never put before a retirement already recorded for the structure (a clock that stands still
+   * or steps back would otherwise make it cover a plane retired before it was started).
    */
   public Inspection start(long structureId, NewInspection details) {
     Structure structure =
@@ -54,10 +57,16 @@ public final class InspectionService {
         blank(details.carriedOutForAddress())
             ? site.clientAddress()
             : details.carriedOutForAddress();
+    Instant now = clock.instant();
+    for (PlaneRetirement r : store.planes().retirementsOf(structureId)) {
+      if (r.retiredAt().isAfter(now)) {
+        now = r.retiredAt();
+      }
+    }
     return store.inspections()
         .add(
             TextInput.inspection(new Inspection(
-                0, structureId, clock.instant(), null, details.inspectorName(),
+                0, structureId, now, null, details.inspectorName(),
                 details.inspectorPosition(), details.competentPerson(), details.shift(),
                 details.storageSafetyPerson(), details.reason(), InspectionStatus.OPEN, forName,
                 forAddress)));
@@ -91,9 +100,13 @@ public final class InspectionService {
         .orElseThrow(() -> new NotFoundException("structure " + inspection.structureId()));
   }
 
-  /** The planes an inspection covers: every plane of its structure, by id. */
+  /**
+   * The planes an inspection covers, by id: every plane of its structure except those retired at
+   * or before the moment it started (a plane retired later stays in it, as it was).
+   */
   public List<PlaneRecord> planesOf(long inspectionId) {
-    return store.planes().ofStructure(inspection(inspectionId).structureId());
+    inspection(inspectionId);
+    return store.planes().ofInspection(inspectionId);
   }
 
   /**
@@ -252,6 +265,13 @@ public final class InspectionService {
               + inspection.label()
               + " covers; pick one of its planes");
     }
+    store.planes().retirement(plane.id())
+        .filter(r -> r.appliesToInspectionStartedAt(inspection.startedAt()))
+        .ifPresent(r -> {
+          throw new UserInputException("plane '" + plane.name() + "' (id " + plane.id()
+              + ") was retired at " + r.retiredAt() + " (" + r.reason() + "), before "
+              + inspection.label() + " started; it is not part of it");
+        });
     if (!plane.grid().contains(n.panel())) {
       throw new UserInputException(
           "panel "

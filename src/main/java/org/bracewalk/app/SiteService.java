@@ -1,13 +1,19 @@
 package org.bracewalk.app;
 
 import java.time.Clock;
+import java.time.Instant;
 import java.time.LocalDate;
+import java.time.temporal.ChronoUnit;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.Millimetres;
 import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.port.RecordStore;
@@ -91,6 +97,7 @@ public final class SiteService {
   public PlaneRecord createPlane(
       PlaneRecord plane, String author, LocalDate date, String approvalNote, PlaneDesign design) {
     requireNew(plane.id(), "plane");
+    requireWithinLimits(plane.name(), plane.grid().lifts(), plane.grid().bays(), "lifts", "bays");
     structure(plane.structureId());
     PlaneRecord rounded = TextInput.plane(
         new PlaneRecord(0, plane.structureId(), plane.name(), Millimetres.round(plane.grid())));
@@ -152,6 +159,65 @@ public final class SiteService {
     return store.designs()
         .latest(planeId)
         .orElseThrow(() -> new NotFoundException("design of plane '" + plane.name() + "'"));
+  }
+
+  /**
+   * Refuses a plane larger than the one limit of a stored plane ({@link PlaneLimits}), naming the
+   * plane, its size, the limit and the field it was given in. Front ends call it with the size as
+   * typed, before building anything of that size.
+   *
+   * @throws UserInputException when the plane is larger than the limit
+   */
+  public static void requireWithinLimits(
+      String planeName, long lifts, long bays, String liftsField, String baysField) {
+    PlaneLimits.problem(planeName, lifts, bays).ifPresent(problem -> {
+      throw new UserInputException(problem + " (field "
+          + (PlaneLimits.fieldOver(lifts, bays).equals("lifts") ? liftsField : baysField) + ")");
+    });
+  }
+
+  /**
+   * Retires a plane, for instance one created by mistake: it is kept for the record, with its
+   * designs, observations and reports, and inspections started from now on leave it out.
+   * Inspections already started keep it as they did (even one started within the same
+   * millisecond: the retirement is then recorded one millisecond after it).
+   *
+   * @throws NotFoundException when there is no such plane
+   * @throws UserInputException when the reason is blank or the plane is already retired
+   */
+  public PlaneRetirement retirePlane(long planeId, String retiredBy, String reasonGiven) {
+    PlaneRecord plane = plane(planeId);
+    String reason = reasonGiven == null ? null : TextInput.clean(reasonGiven, "reason");
+    String by = retiredBy == null ? "" : TextInput.clean(retiredBy, "retired by");
+    if (reason == null || reason.isBlank()) {
+      throw new UserInputException("say why plane '" + plane.name() + "' (id " + planeId
+          + ") is retired: the reason is kept with the record");
+    }
+    return store.inTransaction(() -> {
+      store.planes().retirement(planeId).ifPresent(r -> {
+        throw new UserInputException("plane '" + plane.name() + "' (id " + planeId
+            + ") is already retired (" + r.retiredAt() + ": " + r.reason() + ")");
+      });
+      Instant at = clock.instant().truncatedTo(ChronoUnit.MILLIS);
+      for (Inspection i : store.inspections().ofStructure(plane.structureId())) {
+        if (!i.startedAt().isBefore(at)) {
+          at = i.startedAt().truncatedTo(ChronoUnit.MILLIS).plusMillis(1);
+        }
+      }
+      return store.planes().retire(new PlaneRetirement(planeId, at, by, reason));
+    });
+  }
+
+  /** The retirement of a plane, if it is retired. */
+  public Optional<PlaneRetirement> retirement(long planeId) {
+    plane(planeId);
+    return store.planes().retirement(planeId);
+  }
+
+  /** The retirements of the planes of a structure, by plane id. */
+  public List<PlaneRetirement> retirements(long structureId) {
+    structure(structureId);
+    return store.planes().retirementsOf(structureId);
   }
 
   static void requireSameGrid(PlaneRecord plane, PlaneDesign design) {

@@ -213,7 +213,8 @@ public final class ReportCommands {
     int planes;
 
     @Option(names = "--size", defaultValue = "20",
-        description = "Lifts and bays of each plane (default ${DEFAULT-VALUE}).")
+        description = "Lifts and bays of each plane, at most "
+            + org.bracewalk.core.model.PlaneLimits.MAX_LIFTS + " (default ${DEFAULT-VALUE}).")
     int size;
 
     @Option(names = "--runs", defaultValue = "3", description = "Runs of each (default ${DEFAULT-VALUE}).")
@@ -232,6 +233,12 @@ public final class ReportCommands {
       PrintWriter out = spec.commandLine().getOut();
       if (planes < 1 || size < 1 || runs < 1) {
         spec.commandLine().getErr().println("error: --planes, --size and --runs must be 1 or more");
+        return StoreCommand.BAD_INPUT;
+      }
+      // the planes are stored, so they keep to the one limit of a stored plane
+      var tooLarge = org.bracewalk.core.model.PlaneLimits.problem("plane 1", size, size);
+      if (tooLarge.isPresent()) {
+        spec.commandLine().getErr().println("error: " + tooLarge.get() + " (field --size)");
         return StoreCommand.BAD_INPUT;
       }
       Path dir = Files.createTempDirectory("bracewalk-bench");

@@ -5,13 +5,17 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.time.ZoneId;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.bracewalk.app.AppServices;
+import org.bracewalk.app.SiteService;
 import org.bracewalk.core.model.DisplayUnits;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.model.StructureKind;
@@ -188,11 +192,13 @@ final class SiteCommands {
     @Option(names = "--design", paramLabel = "MAP.txt", description = "A design panel map.")
     Path design;
 
-    @Option(names = "--lifts", description = "Without --design: lifts (rows), bottom = 1.")
-    Integer lifts;
+    @Option(names = "--lifts", description = "Without --design: lifts (rows), bottom = 1; at most "
+        + PlaneLimits.MAX_LIFTS + ".")
+    Long lifts;
 
-    @Option(names = "--bays", description = "Without --design: bays (columns), left = 1.")
-    Integer bays;
+    @Option(names = "--bays", description = "Without --design: bays (columns), left = 1; at most "
+        + PlaneLimits.MAX_BAYS + ".")
+    Long bays;
 
     @Option(names = "--widths", split = ",",
         description = "Bay widths in metres, comma-separated, bay 1 first (default 1 each).")
@@ -228,11 +234,17 @@ final class SiteCommands {
       if (lifts == null || bays == null) {
         throw new IllegalArgumentException("give --design MAP.txt, or --lifts and --bays");
       }
+      if (lifts < 1 || bays < 1) {
+        throw new IllegalArgumentException("--" + (lifts < 1 ? "lifts" : "bays")
+            + ": a plane needs at least one lift and one bay, got " + lifts + " x " + bays);
+      }
+      // before anything of that size is built
+      SiteService.requireWithinLimits(name, lifts, bays, "--lifts", "--bays");
       Support sup = Support.fromLabel(support == null ? "pinned-base" : support);
       if (sup == null) {
         throw new IllegalArgumentException("--support: use pinned-base or free, not '" + support + "'");
       }
-      PlaneGrid grid = new PlaneGrid(lifts, bays, widths, heights, sup);
+      PlaneGrid grid = new PlaneGrid(lifts.intValue(), bays.intValue(), widths, heights, sup);
       PlaneRecord p = s.sites().createPlane(new PlaneRecord(0, structure, name, grid), author,
           LocalDate.now(context.clock()), "", PlaneDesign.of(grid, Map.of()));
       out.println(Show.plane(p) + " created, unbraced");
@@ -253,12 +265,47 @@ final class SiteCommands {
     @Override
     int run(AppServices s, PrintWriter out, PrintWriter err) {
       List<String> lines = new ArrayList<>();
+      Map<Long, PlaneRetirement> retired = new HashMap<>();
+      s.sites().retirements(structure).forEach(r -> retired.put(r.planeId(), r));
       for (PlaneRecord p : s.sites().planes(structure)) {
         var d = s.sites().currentDesign(p.id());
+        PlaneRetirement r = retired.get(p.id());
         lines.add(Show.plane(p) + ", design revision " + d.number() + " of " + d.date()
-            + ", " + d.design().braces().size() + " braced panels");
+            + ", " + d.design().braces().size() + " braced panels"
+            + (r == null ? "" : "; retired " + r.retiredAt() + " (" + r.reason()
+                + "): left out of inspections started since"));
       }
       lines.forEach(out::println);
+      return 0;
+    }
+  }
+
+  @Command(name = "retire", mixinStandardHelpOptions = true,
+      description = {"Retire a plane, for instance one created by mistake. It is kept for the"
+          + " record with its designs, observations and reports; inspections started from now on"
+          + " leave it out, and inspections already started keep it as they did. A retirement"
+          + " cannot be undone."})
+  static final class PlaneRetire extends StoreCommand {
+    @Option(names = "--plane", required = true, description = "The plane's id.")
+    long plane;
+
+    @Option(names = "--reason", required = true,
+        description = "Why it is retired (kept with the record).")
+    String reason;
+
+    @Option(names = "--by", description = "Who retires it.")
+    String by;
+
+    PlaneRetire(CliContext context) {
+      super(context);
+    }
+
+    @Override
+    int run(AppServices s, PrintWriter out, PrintWriter err) {
+      PlaneRecord p = s.sites().plane(plane);
+      PlaneRetirement r = s.sites().retirePlane(plane, by, reason);
+      out.println(Show.plane(p) + " retired at " + r.retiredAt() + " (" + r.reason()
+          + "); inspections started from now on leave it out");
       return 0;
     }
   }

@@ -45,8 +45,10 @@ public final class StoreCommands {
         "Create and list structures of a site; set their inspection interval.",
         new SiteCommands.StructureCreate(context), new SiteCommands.StructureList(context),
         new SiteCommands.StructureInterval(context)));
-    root.addSubcommand("plane", group("plane", "Create and list brace planes of a structure.",
-        new SiteCommands.PlaneCreate(context), new SiteCommands.PlaneList(context)));
+    root.addSubcommand("plane", group("plane",
+        "Create, list and retire brace planes of a structure.",
+        new SiteCommands.PlaneCreate(context), new SiteCommands.PlaneList(context),
+        new SiteCommands.PlaneRetire(context)));
     root.addSubcommand("inspection", group("inspection", "Start, list and show inspections.",
         new InspectionCommands.Start(context), new InspectionCommands.ListInspections(context),
         new InspectionCommands.ShowInspection(context)));

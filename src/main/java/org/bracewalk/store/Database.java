@@ -166,7 +166,8 @@ public final class Database implements RecordStore {
           "V1__site_records.sql",
           "V2__planes_never_change.sql",
           "V3__records_never_overwritten.sql",
-          "V5__register_of_issued_documents.sql");
+          "V5__register_of_issued_documents.sql",
+          "V6__plane_limits_and_retirements.sql");
 
   /**
    * True when the file's schema history shows exactly the packed scripts, in order, all applied

@@ -13,6 +13,7 @@ import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.Photo;
 import org.bracewalk.core.port.ObservationRepository;
+import org.bracewalk.core.port.StoreException;
 
 /**
  * Observations in {@code observations}, photos (BLOBs) in {@code photos}. Both append-only: the
@@ -20,6 +21,9 @@ import org.bracewalk.core.port.ObservationRepository;
  * tenths of a millimetre.
  */
 final class JdbcObservationRepository implements ObservationRepository {
+  /** The message of migration V6's trigger refusing observations into a retired plane. */
+  static final String RETIRED_PLANE = "the plane was retired before the inspection started";
+
   private static final String INSERT =
       """
       INSERT INTO observations
@@ -77,7 +81,16 @@ final class JdbcObservationRepository implements ObservationRepository {
             s.setString(13, o.recordedBy());
             Columns.setLong(s, 14, o.supersedes());
             s.setString(15, o.correctionReason());
-            s.executeUpdate();
+            try {
+              s.executeUpdate();
+            } catch (SQLException e) {
+              // the trigger's message is literal text (V6); name the plane and inspection here
+              if (String.valueOf(e.getMessage()).contains(RETIRED_PLANE)) {
+                throw new StoreException("plane " + o.planeId() + " was retired before inspection "
+                    + o.inspectionId() + " started and is not part of it; nothing was stored", e);
+              }
+              throw e;
+            }
             long id = db.lastInsertId();
             // as read back: instants to the millisecond, bows to the tenth
             return new Observation(id, o.inspectionId(), o.planeId(), o.panel(), o.state(),

@@ -13,6 +13,7 @@ import java.util.Optional;
 import org.bracewalk.core.model.Millimetres;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.core.port.PlaneRepository;
 import org.bracewalk.core.port.StoreException;
@@ -49,6 +50,23 @@ final class JdbcPlaneRepository implements PlaneRepository {
   private static final String SAME_NAME =
       """
       SELECT 1 FROM planes WHERE structure_id = ? AND name = ?
+      """;
+
+  private static final String OF_INSPECTION =
+      """
+       WHERE structure_id = (SELECT structure_id FROM inspections WHERE id = ?1)
+         AND NOT EXISTS (SELECT 1 FROM plane_retirements r
+                         WHERE r.plane_id = planes.id
+                           AND r.retired_at <= (SELECT started_at FROM inspections WHERE id = ?1))
+       ORDER BY id
+      """;
+  private static final String INSERT_RETIREMENT =
+      """
+      INSERT INTO plane_retirements (plane_id, retired_at, retired_by, reason) VALUES (?, ?, ?, ?)
+      """;
+  private static final String RETIREMENTS =
+      """
+      SELECT r.plane_id, r.retired_at, r.retired_by, r.reason FROM plane_retirements r
       """;
 
   private final Database db;
@@ -143,6 +161,76 @@ final class JdbcPlaneRepository implements PlaneRepository {
   @Override
   public List<PlaneRecord> ofStructure(long structureId) {
     return query(SELECT + " WHERE structure_id = ? ORDER BY id", structureId, null);
+  }
+
+  @Override
+  public List<PlaneRecord> ofInspection(long inspectionId) {
+    return query(SELECT + OF_INSPECTION, inspectionId, null);
+  }
+
+  @Override
+  public PlaneRetirement retire(PlaneRetirement retirement) {
+    PlaneRetirement stored = new PlaneRetirement(retirement.planeId(),
+        Columns.millis(retirement.retiredAt()), retirement.retiredBy(), retirement.reason());
+    return db.inTransaction(
+        () ->
+            db.call(
+                c -> {
+                  if (retirementOf(c, retirement.planeId()).isPresent()) {
+                    throw new StoreException("plane " + retirement.planeId()
+                        + " is already retired; a retirement is kept as recorded");
+                  }
+                  try (PreparedStatement s = c.prepareStatement(INSERT_RETIREMENT)) {
+                    s.setLong(1, stored.planeId());
+                    s.setString(2, Columns.text(stored.retiredAt()));
+                    s.setString(3, stored.retiredBy());
+                    s.setString(4, stored.reason());
+                    s.executeUpdate();
+                  }
+                  return stored;
+                }));
+  }
+
+  @Override
+  public Optional<PlaneRetirement> retirement(long planeId) {
+    // asked before every observation is recorded: a kept statement
+    return db.call(
+        c -> {
+          PreparedStatement s = db.prepared(RETIREMENTS + " WHERE r.plane_id = ?");
+          s.setLong(1, planeId);
+          return retirements(s).stream().findFirst();
+        });
+  }
+
+  @Override
+  public List<PlaneRetirement> retirementsOf(long structureId) {
+    return db.call(
+        c -> {
+          try (PreparedStatement s = c.prepareStatement(RETIREMENTS
+              + " JOIN planes p ON p.id = r.plane_id WHERE p.structure_id = ? ORDER BY r.plane_id")) {
+            s.setLong(1, structureId);
+            return retirements(s);
+          }
+        });
+  }
+
+  private static Optional<PlaneRetirement> retirementOf(Connection c, long planeId)
+      throws SQLException {
+    try (PreparedStatement s = c.prepareStatement(RETIREMENTS + " WHERE r.plane_id = ?")) {
+      s.setLong(1, planeId);
+      return retirements(s).stream().findFirst();
+    }
+  }
+
+  private static List<PlaneRetirement> retirements(PreparedStatement s) throws SQLException {
+    List<PlaneRetirement> out = new ArrayList<>();
+    try (ResultSet r = s.executeQuery()) {
+      while (r.next()) {
+        out.add(new PlaneRetirement(r.getLong("plane_id"), Columns.instant(r, "retired_at"),
+            r.getString("retired_by"), r.getString("reason")));
+      }
+    }
+    return out;
   }
 
   @Override

@@ -182,7 +182,8 @@ public final class AppScreens implements ScreenFactory {
   private Node planeBar(Inspection insp, Structure st, PlaneRecord current, java.util.function.LongConsumer open) {
     ChoiceBox<PlaneRecord> choice = new ChoiceBox<>();
     choice.setId("plane-choice");
-    choice.getItems().addAll(services.sites().planes(st.id()));
+    // the planes the inspection covers (a plane retired before it started is not one of them)
+    choice.getItems().addAll(insp == null ? services.sites().planes(st.id()) : services.inspections().planesOf(insp.id()));
     choice.setConverter(new javafx.util.StringConverter<>() {
       @Override
       public String toString(PlaneRecord p) {

@@ -16,7 +16,8 @@ import org.bracewalk.core.model.Structure;
 /**
  * Every record an inspection's report rests on, as stored: what the fingerprint covers.
  *
- * @param planes every plane of the inspected structure, by id
+ * @param planes the planes the inspection covers (its structure's, less those retired before it
+ *     started), by id
  * @param orders the repair orders raised from the inspection, by id
  */
 public record InspectionRecords(

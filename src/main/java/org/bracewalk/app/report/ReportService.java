@@ -111,7 +111,7 @@ public final class ReportService {
       List<Observation> rows = services.inspections().observations(inspectionId);
       Set<Long> withPhotos = new HashSet<>(store.observations().withPhotos(inspectionId));
       List<InspectionRecords.PlaneRecords> planes = new ArrayList<>();
-      for (PlaneRecord plane : services.sites().planes(structure.id())) {
+      for (PlaneRecord plane : services.inspections().planesOf(inspectionId)) {
         DesignRevision design = services.inspections().designInForce(inspectionId, plane.id());
         List<Observation> own = rows.stream().filter(o -> o.planeId() == plane.id()).toList();
         Map<Long, List<Photo>> photos = new HashMap<>();

@@ -51,12 +51,30 @@ public record SiteFile(Site site, List<StructureData> structures) {
     }
   }
 
-  /** A plane with its design revisions (by number). */
-  public record PlaneData(String name, PlaneGrid grid, List<DesignData> designs) {
+  /**
+   * A plane with its design revisions (by number) and, when it has been retired, its retirement
+   * (field {@code retired}: {@code at}, {@code by}, {@code reason}; absent for a plane in use).
+   */
+  public record PlaneData(
+      String name, PlaneGrid grid, List<DesignData> designs, RetirementData retired) {
     public PlaneData {
       designs = List.copyOf(designs);
     }
+
+    /** A plane in use (not retired). */
+    public PlaneData(String name, PlaneGrid grid, List<DesignData> designs) {
+      this(name, grid, designs, null);
+    }
   }
+
+  /**
+   * A plane's retirement: inspections started at or after {@code at} leave the plane out.
+   *
+   * @param at when it was retired
+   * @param by who retired it ("" when not known)
+   * @param reason why (required)
+   */
+  public record RetirementData(Instant at, String by, String reason) {}
 
   /** One design revision. */
   public record DesignData(

@@ -29,6 +29,7 @@ import org.bracewalk.app.sitefile.SiteFile.PhotoData;
 import org.bracewalk.app.sitefile.SiteFile.PlaneData;
 import org.bracewalk.app.sitefile.SiteFile.RepairActionData;
 import org.bracewalk.app.sitefile.SiteFile.RepairOrderData;
+import org.bracewalk.app.sitefile.SiteFile.RetirementData;
 import org.bracewalk.app.sitefile.SiteFile.StructureData;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
@@ -46,6 +47,8 @@ import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.Photo;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneLimits;
+import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.RepairAction;
 import org.bracewalk.core.model.RepairActionKind;
 import org.bracewalk.core.model.Site;
@@ -61,9 +64,6 @@ import org.bracewalk.core.model.Support;
  * <p>Unknown fields are errors (a misspelt optional field would otherwise be lost silently).
  */
 public final class SiteFileReader {
-  /** Planes larger than this many panels are refused (a typo, or a file from elsewhere). */
-  public static final int MAX_PANELS_PER_PLANE = 100_000;
-
   private static final ObjectMapper MAPPER =
       JsonMapper.builder()
           .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
@@ -194,14 +194,17 @@ public final class SiteFileReader {
   }
 
   private PlaneData plane(Obj n) {
-    n.known("name", "lifts", "bays", "support", "bayWidthsMm", "liftHeightsMm", "designs");
+    n.known("name", "lifts", "bays", "support", "bayWidthsMm", "liftHeightsMm", "designs",
+        "retired");
     String name = n.requiredText("name");
-    int lifts = n.integer("lifts", 1, 10_000);
-    int bays = n.integer("bays", 1, 10_000);
-    if ((long) lifts * bays > MAX_PANELS_PER_PLANE) {
-      throw n.error("bays", lifts + " x " + bays + " panels is more than the "
-          + MAX_PANELS_PER_PLANE + " a plane may have");
-    }
+    long liftCount = n.count("lifts");
+    long bayCount = n.count("bays");
+    // the one limit of a stored plane (PlaneLimits), checked before anything is allocated
+    PlaneLimits.problem(name, liftCount, bayCount).ifPresent(problem -> {
+      throw n.error(PlaneLimits.fieldOver(liftCount, bayCount), problem);
+    });
+    int lifts = (int) liftCount;
+    int bays = (int) bayCount;
     Support support = n.label("support", s -> {
       Support v = Support.fromLabel(s);
       if (v == null) {
@@ -240,7 +243,20 @@ public final class SiteFileReader {
                 + designs.get(i - 1).number() + "; later revisions are recorded later");
       }
     }
-    return new PlaneData(name, grid, designs);
+    RetirementData retired = null;
+    if (n.has("retired")) {
+      Obj r = n.object("retired");
+      r.known("at", "by", "reason");
+      Instant at = r.instant("at", true);
+      if (at.isBefore(designs.get(0).recordedAt())) {
+        throw r.error("at", "plane \"" + name + "\" is retired before its first design revision"
+            + " was recorded (" + instantText(designs.get(0).recordedAt()) + ")");
+      }
+      PlaneRetirement checked = r.build("reason",
+          () -> new PlaneRetirement(1, at, r.text("by"), r.requiredText("reason")));
+      retired = new RetirementData(at, checked.retiredBy(), checked.reason());
+    }
+    return new PlaneData(name, grid, designs, retired);
   }
 
   private PlaneDesign designMap(Obj d, PlaneGrid grid) {
@@ -308,7 +324,8 @@ public final class SiteFileReader {
     List<ObservationData> observations = new ArrayList<>();
     Set<Integer> corrected = new HashSet<>();
     for (Obj o : n.objects("observations")) {
-      observations.add(observation(o, observations.size() + 1, planes, observations, corrected));
+      observations.add(
+          observation(o, observations.size() + 1, started, planes, observations, corrected));
     }
     List<RepairOrderData> orders = new ArrayList<>();
     for (Obj r : n.objects("repairOrders")) {
@@ -334,11 +351,16 @@ public final class SiteFileReader {
         n.text("carriedOutForAddress"), observations, orders, reports);
   }
 
-  private ObservationData observation(Obj n, int position, Map<String, PlaneData> planes,
-      List<ObservationData> earlier, Set<Integer> corrected) {
+  private ObservationData observation(Obj n, int position, Instant started,
+      Map<String, PlaneData> planes, List<ObservationData> earlier, Set<Integer> corrected) {
     n.known("plane", "lift", "bay", "state", "member", "bowMm", "gaugeLengthMm", "defect",
         "note", "recordedAt", "recordedBy", "supersedes", "correctionReason", "photos");
     PlaneData plane = planeNamed(n, planes);
+    if (plane.retired() != null && !plane.retired().at().isAfter(started)) {
+      throw n.error("plane", "plane \"" + plane.name() + "\" was retired at "
+          + instantText(plane.retired().at()) + ", before this inspection started ("
+          + instantText(started) + "); it is not part of it");
+    }
     PanelRef panel = panel(n, plane);
     PanelState state = n.label("state", PanelState::fromLabel);
     Brace member = n.has("member") ? brace(n, "member") : null;
@@ -508,6 +530,19 @@ public final class SiteFileReader {
         throw error(field, "expected text in quotes, found " + v.getNodeType().name().toLowerCase());
       }
       return v.asText().strip();
+    }
+
+    /** A count of one or more, as given (a number too large for a long reads as the largest). */
+    long count(String field) {
+      JsonNode v = required(field);
+      if (!v.isIntegralNumber()) {
+        throw error(field, "expected a whole number, found " + v);
+      }
+      long c = v.canConvertToLong() ? v.longValue() : (v.bigIntegerValue().signum() < 0 ? Long.MIN_VALUE : Long.MAX_VALUE);
+      if (c < 1) {
+        throw error(field, c + " is out of range: use 1 or more");
+      }
+      return c;
     }
 
     int integer(String field, int min, int max) {

@@ -128,6 +128,12 @@ public final class SiteFileWriter {
       ArrayNode map = dn.putArray("map");
       mapRows(d.design()).forEach(map::add);
     }
+    if (p.retired() != null) {
+      ObjectNode rn = n.putObject("retired");
+      rn.put("at", SiteFileReader.instantText(p.retired().at()));
+      rn.put("by", p.retired().by());
+      rn.put("reason", p.retired().reason());
+    }
     return n;
   }
 

@@ -3,6 +3,7 @@ package org.bracewalk.core.port;
 import java.util.List;
 import java.util.Optional;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.PlaneRetirement;
 
 /** Brace planes of structures. Grids are stored in whole millimetres. */
 public interface PlaneRepository {
@@ -18,4 +19,22 @@ public interface PlaneRepository {
   List<PlaneRecord> ofStructure(long structureId);
 
   Optional<PlaneRecord> findByName(long structureId, String name);
+
+  /**
+   * The planes an inspection covers, by id: the planes of its structure, less those retired at or
+   * before the moment the inspection started. Empty when there is no such inspection.
+   */
+  List<PlaneRecord> ofInspection(long inspectionId);
+
+  /**
+   * Stores a plane's retirement (append-only; the database refuses a second one for a plane, or
+   * any change) and returns it as stored (its instant to the millisecond).
+   */
+  PlaneRetirement retire(PlaneRetirement retirement);
+
+  /** The retirement of a plane, if it is retired. */
+  Optional<PlaneRetirement> retirement(long planeId);
+
+  /** The retirements of the planes of one structure, by plane id. */
+  List<PlaneRetirement> retirementsOf(long structureId);
 }

@@ -22,6 +22,7 @@ import javafx.scene.layout.VBox;
 import javafx.util.StringConverter;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.MemberKind;
+import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.KeyHelp;
 import org.bracewalk.ui.common.Legend;
@@ -87,11 +88,13 @@ public final class DesignView extends BorderPane {
     vm.verdictKindProperty().addListener((o, a, b) -> style.run());
     style.run();
 
-    Spinner<Integer> lifts = new Spinner<>(1, 200, vm.liftsProperty().get());
+    // no spinner maximum: a spinner clamps a larger typed value without a word, the view model
+    // refuses it naming the limit of a stored plane
+    Spinner<Integer> lifts = new Spinner<>(1, Integer.MAX_VALUE, vm.liftsProperty().get());
     lifts.setEditable(true);
     lifts.getValueFactory().valueProperty().addListener((o, a, b) -> vm.liftsProperty().set(b));
     vm.liftsProperty().addListener((o, a, b) -> lifts.getValueFactory().setValue(b.intValue()));
-    Spinner<Integer> bays = new Spinner<>(1, 400, vm.baysProperty().get());
+    Spinner<Integer> bays = new Spinner<>(1, Integer.MAX_VALUE, vm.baysProperty().get());
     bays.setEditable(true);
     bays.getValueFactory().valueProperty().addListener((o, a, b) -> vm.baysProperty().set(b));
     vm.baysProperty().addListener((o, a, b) -> bays.getValueFactory().setValue(b.intValue()));
@@ -147,7 +150,7 @@ public final class DesignView extends BorderPane {
     Spinner<Integer> step = new Spinner<>(1, 50, vm.fillStepProperty().get());
     step.getValueFactory().valueProperty().addListener((o, a, b) -> vm.fillStepProperty().set(b));
     step.setPrefWidth(80);
-    Spinner<Integer> first = new Spinner<>(1, 400, vm.fillFirstBayProperty().get());
+    Spinner<Integer> first = new Spinner<>(1, PlaneLimits.MAX_BAYS, vm.fillFirstBayProperty().get());
     first.getValueFactory().valueProperty().addListener((o, a, b) -> vm.fillFirstBayProperty().set(b));
     first.setPrefWidth(80);
     Button everyK = new Button("/ every k bays, every lift (K)");

@@ -31,6 +31,7 @@ import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.DialogService;
 import org.bracewalk.ui.common.PlanePicture;
@@ -265,12 +266,19 @@ public final class DesignViewModel {
     int m = lifts.get();
     int n = bays.get();
     try {
-      if (m < 1 || m > 200) {
-        throw new IllegalArgumentException("Lifts: " + m + " is out of range; give 1 to 200 lifts.");
+      if (m < 1) {
+        throw new IllegalArgumentException("Lifts: " + m + " is out of range; give 1 to "
+            + PlaneLimits.MAX_LIFTS + " lifts.");
       }
-      if (n < 1 || n > 400) {
-        throw new IllegalArgumentException("Bays: " + n + " is out of range; give 1 to 400 bays.");
+      if (n < 1) {
+        throw new IllegalArgumentException("Bays: " + n + " is out of range; give 1 to "
+            + PlaneLimits.MAX_BAYS + " bays.");
       }
+      // the one limit of a stored plane, before anything of that size is built
+      PlaneLimits.problem(title, m, n).ifPresent(problem -> {
+        throw new IllegalArgumentException(
+            (PlaneLimits.fieldOver(m, n).equals("lifts") ? "Lifts: " : "Bays: ") + problem + ".");
+      });
       List<Double> w = parseSizes("Widths", widths.get(), n, "bay", design.get().grid().bayWidths());
       List<Double> h = parseSizes("Heights", heights.get(), m, "lift", design.get().grid().liftHeights());
       PlaneGrid g = new PlaneGrid(m, n, w, h, support.get());

@@ -156,9 +156,12 @@ public final class SitesView extends BorderPane {
     buttons.setVgap(8);
     Button interval = wide("Days between inspections\u2026 (D)", vm::changeInterval);
     interval.setId("change-interval");
+    Button retire = wide("Retire plane\u2026", vm::retirePlane);
+    retire.setId("retire-plane");
     buttons.addRow(0, walk, design);
     buttons.addRow(1, findings, history);
     buttons.add(interval, 0, 2, 2, 1);
+    buttons.add(retire, 0, 3, 2, 1);
     javafx.scene.layout.ColumnConstraints half = new javafx.scene.layout.ColumnConstraints();
     half.setPercentWidth(50);
     buttons.getColumnConstraints().addAll(half, half);

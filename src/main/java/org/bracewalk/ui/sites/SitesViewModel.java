@@ -28,6 +28,11 @@ import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.PlaneRetirement;
+import java.util.Set;
+import java.util.Map;
+import java.util.HashSet;
+import java.util.HashMap;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.model.StructureKind;
@@ -106,9 +111,23 @@ public final class SitesViewModel {
         int structureIndex = out.size();
         out.add(null); // filled in once the planes are known
         VerdictKind worst = null;
+        Map<Long, PlaneRetirement> retired = new HashMap<>();
+        services.sites().retirements(st.id()).forEach(x -> retired.put(x.planeId(), x));
+        Set<Long> inLatest = new HashSet<>();
+        latest.ifPresent(i -> services.inspections().planesOf(i.id()).forEach(p -> inLatest.add(p.id())));
         for (PlaneRecord plane : services.sites().planes(st.id())) {
           VerdictKind v = VerdictKind.NOT_INSPECTED;
           String words = v.symbol() + " " + v.words();
+          PlaneRetirement gone = retired.get(plane.id());
+          if (gone != null && !inLatest.contains(plane.id())) {
+            // left out of the latest inspection: shown for the record, not analysed, not counted
+            out.add(new OverviewRow(OverviewRow.Level.PLANE, plane.name(),
+                plane.grid().lifts() + " lifts \u00d7 " + plane.grid().bays() + (plane.grid().bays() == 1 ? " bay" : " bays"),
+                v, "retired " + WHEN.format(gone.retiredAt().atZone(site.timeZone())) + ": " + gone.reason(),
+                last, "", OverviewRow.Due.NOT_APPLICABLE, "", st.id(), plane.id(),
+                open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
+            continue;
+          }
           if (latest.isPresent()) {
             PlaneResult r = services.analysis().analysePlane(latest.get().id(), plane.id());
             v = verdictOf(r);
@@ -117,6 +136,10 @@ public final class SitesViewModel {
               int marked = r.latest().size();
               words += " (open: " + marked + " of " + plane.grid().panelCount() + " marked)";
             }
+          }
+          if (gone != null) {
+            words += " \u00b7 retired " + WHEN.format(gone.retiredAt().atZone(site.timeZone())) + ": "
+                + gone.reason();
           }
           worst = worse(worst, v);
           out.add(new OverviewRow(OverviewRow.Level.PLANE, plane.name(),
@@ -264,8 +287,55 @@ public final class SitesViewModel {
       return false;
     }
     error.set("");
-    long plane = r.planeId() > 0 ? r.planeId() : firstPlane(r.structureId());
+    List<PlaneRecord> covered = services.inspections().planesOf(started.id());
+    long plane = covered.stream().anyMatch(p -> p.id() == r.planeId()) ? r.planeId()
+        : covered.stream().findFirst().map(PlaneRecord::id).orElse(0L);
     navigator.open(ScreenId.WALK, new Selection(r.structureId(), plane, started.id()));
+    return true;
+  }
+
+  /**
+   * Retires the selected plane (one created by mistake, say) after asking why and confirming: it
+   * stays in the record and in the inspections already started, and inspections started from now
+   * on leave it out. A retirement cannot be undone.
+   */
+  public boolean retirePlane() {
+    OverviewRow r = selected.get();
+    if (r == null || r.level() != OverviewRow.Level.PLANE) {
+      error.set("Select the plane to retire first.");
+      return false;
+    }
+    PlaneRecord plane = services.sites().plane(r.planeId());
+    if (services.sites().retirement(plane.id()).isPresent()) {
+      error.set("Plane '" + plane.name() + "' is already retired.");
+      return false;
+    }
+    Optional<String> why = dialogs.askText("Retire plane '" + plane.name() + "'",
+        "Why is plane '" + plane.name() + "' retired (for example: created by mistake)? The reason is"
+            + " kept with the record.", "");
+    if (why.isEmpty()) {
+      return false;
+    }
+    if (why.get().isBlank()) {
+      error.set("Retire plane '" + plane.name() + "': give the reason. Nothing was changed.");
+      return false;
+    }
+    if (!dialogs.confirm("Retire plane '" + plane.name() + "'?",
+        "Plane '" + plane.name() + "' (" + plane.grid().lifts() + " lifts \u00d7 " + plane.grid().bays()
+            + " bays) is kept for the record with its designs, observations and reports, and the"
+            + " inspections already started keep it. Inspections started from now on leave it out."
+            + " This cannot be undone.", "Retire")) {
+      return false;
+    }
+    try {
+      services.sites().retirePlane(plane.id(), "", why.get().strip());
+    } catch (RuntimeException e) {
+      error.set("Retire plane '" + plane.name() + "': " + e.getMessage() + ". Nothing was changed.");
+      return false;
+    }
+    error.set("");
+    refresh();
+    status.set("Plane '" + plane.name() + "' retired: inspections started from now on leave it out.");
     return true;
   }
 
