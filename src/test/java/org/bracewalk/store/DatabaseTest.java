@@ -254,6 +254,37 @@ class DatabaseTest {
     }
   }
 
+  /**
+   * Another program holds the write lock past the busy timeout: the transaction is refused as
+   * busy, and the store stays sound: the next transaction is still all or nothing. (With the
+   * driver's own transactions the timed-out BEGIN left it believing one was open, and the next
+   * "transaction" committed statement by statement.)
+   */
+  @Test
+  void aTransactionRefusedAsBusyLeavesTheNextOneAllOrNothing() throws Exception {
+    Path file = dir.resolve("busy.db");
+    try (Database db = Database.open(file, 200);
+        Connection other = DriverManager.getConnection("jdbc:sqlite:" + file);
+        Statement st = other.createStatement()) {
+      Fixtures.Services s = Fixtures.Services.over(db);
+      st.execute("BEGIN IMMEDIATE");
+      assertThatThrownBy(() -> db.inTransaction(() -> s.sites().createSite(Fixtures.site())))
+          .isInstanceOf(org.bracewalk.core.port.StoreBusyException.class)
+          .hasMessageContaining("stayed busy for 0.2 s");
+      st.execute("ROLLBACK");
+      assertThatThrownBy(() -> db.inTransaction(() -> {
+        s.sites().createSite(Fixtures.site());
+        throw new IllegalStateException("boom");
+      })).hasMessage("boom");
+      assertThat(db.sites().all()).isEmpty();
+      db.inTransaction(() -> s.sites().createSite(Fixtures.site()));
+      assertThat(db.sites().all()).hasSize(1);
+      // and the lock is free again between transactions: the other program can write
+      st.execute("BEGIN IMMEDIATE");
+      st.execute("ROLLBACK");
+    }
+  }
+
   @Test
   void aSecondPlaneOfTheSameNameIsRefusedByName() {
     try (Database db = Database.open(dir.resolve("b.db"))) {
