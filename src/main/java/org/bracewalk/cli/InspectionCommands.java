@@ -9,6 +9,7 @@ import java.util.Map;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.NewObservation;
+import org.bracewalk.app.RecordedObservation;
 import org.bracewalk.app.UserInputException;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
@@ -17,6 +18,7 @@ import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.Photo;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.Structure;
 import picocli.CommandLine.ArgGroup;
@@ -204,14 +206,16 @@ final class InspectionCommands {
     @Option(names = "--note", description = "Free text.")
     String note;
 
-    @Option(names = "--supersedes", description = "Id of the observation this corrects.")
+    @Option(names = "--supersedes",
+        description = "Id of the observation this corrects (one of the same inspection).")
     Long supersedes;
 
     @Option(names = "--reason", description = "Why the corrected observation was wrong.")
     String reason;
 
     @Option(names = "--photo", paramLabel = "FILE",
-        description = "A photo to attach (JPEG, PNG, ...); may be repeated. Kept in the database.")
+        description = "A photo to attach, JPEG or PNG, up to 20 MB; may be repeated. Kept in the"
+            + " database, stored with the observation or not at all.")
     List<Path> photos;
   }
 
@@ -268,45 +272,16 @@ final class InspectionCommands {
       NewObservation n = new NewObservation(plane.id(), PanelRef.of(o.lift, o.bay),
           PanelState.fromLabel(o.state), member, o.bow, o.gauge,
           o.defect == null ? null : DefectType.fromLabel(o.defect), o.note, who);
-      Observation saved = o.supersedes == null
-          ? s.inspections().recordObservation(inspection, n)
-          : s.inspections().correct(o.supersedes, n, o.reason);
-      out.println(Show.observation(saved, plane.name()));
-      if (o.photos != null) {
-        for (Path photo : o.photos) {
-          byte[] bytes = readBytes(photo);
-          var p = s.inspections().attachPhoto(saved.id(), photo.getFileName().toString(),
-              mediaType(photo), bytes);
-          out.println("photo " + p.id() + " attached to observation " + saved.id() + ": "
-              + p.fileName() + " (" + p.size() + " bytes)");
-        }
+      List<Path> photos = o.photos == null ? List.of() : o.photos;
+      RecordedObservation saved = o.supersedes == null
+          ? s.inspections().record(inspection, n, photos)
+          : s.inspections().correct(inspection, o.supersedes, n, o.reason, photos);
+      out.println(Show.observation(saved.observation(), plane.name()));
+      for (Photo p : saved.photos()) {
+        out.println("photo " + p.id() + " attached to observation " + saved.observation().id()
+            + ": " + p.fileName() + " (" + p.size() + " bytes, " + p.mediaType() + ")");
       }
       return 0;
-    }
-
-    static String mediaType(Path photo) {
-      String name = photo.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
-      if (name.endsWith(".jpg") || name.endsWith(".jpeg")) {
-        return "image/jpeg";
-      }
-      if (name.endsWith(".png")) {
-        return "image/png";
-      }
-      if (name.endsWith(".heic")) {
-        return "image/heic";
-      }
-      if (name.endsWith(".webp")) {
-        return "image/webp";
-      }
-      return "application/octet-stream";
-    }
-
-    static byte[] readBytes(Path file) {
-      try {
-        return java.nio.file.Files.readAllBytes(file);
-      } catch (java.io.IOException e) {
-        throw new UserInputException("cannot read " + file + ": " + e.getMessage());
-      }
     }
 
     private static Brace braceOf(String token) {

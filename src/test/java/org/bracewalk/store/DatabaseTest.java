@@ -154,7 +154,8 @@ class DatabaseTest {
                   "M. Okafor"));
       assertThat(db.observations().find(o.id())).contains(o);
       assertThat(o.bowMm()).isEqualTo(10.1);
-      Photo photo = s.inspections().attachPhoto(o.id(), "b2.jpg", "image/jpeg", new byte[] {1, 2});
+      Photo photo = db.observations().addPhoto(new Photo(0, o.id(), "b2.jpg", "image/jpeg",
+          new byte[] {1, 2}, java.time.Instant.parse("2025-03-03T08:00:00.123Z")));
       assertThat(s.inspections().photos(o.id())).containsExactly(photo);
       assertThat(db.observations().withPhotos(inspection.id())).containsExactly(o.id());
       assertThat(db.inspections().ofStructure(plane.structureId())).containsExactly(inspection);
@@ -202,7 +203,7 @@ class DatabaseTest {
               NewObservation.of(planeId, PanelRef.of(1, 2), PanelState.SOUND, "M. Okafor")))
           .isInstanceOf(InspectionFinalisedException.class)
           .hasMessageContaining("inspection " + id + " is finalised");
-      assertThatThrownBy(() -> s.inspections().correct(observation,
+      assertThatThrownBy(() -> s.inspections().correct(id, observation,
               NewObservation.of(planeId, PanelRef.of(1, 1), PanelState.MISSING, "M. Okafor"),
               "wrong panel"))
           .isInstanceOf(InspectionFinalisedException.class);
