@@ -7,6 +7,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.bracewalk.app.AppServices;
+import org.bracewalk.app.CsvRecording;
 import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.NewObservation;
 import org.bracewalk.app.RecordedObservation;
@@ -232,8 +233,9 @@ final class InspectionCommands {
   @Command(name = "record", mixinStandardHelpOptions = true,
       description = {"Record observations of an open inspection, each committed to disk as it"
           + " is recorded, one line per acknowledged observation id.",
-          "Either --from FILE.csv (the whole file is checked first; a bad file records nothing)"
-              + " or one observation by options."})
+          "Either --from FILE.csv (the whole file is checked first; a bad file records nothing;"
+              + " rows an earlier run of the same file recorded are not recorded again, so after"
+              + " an interruption run the same command again) or one observation by options."})
   static final class Record extends StoreCommand {
     @Option(names = "--inspection", required = true, description = "The inspection's id.")
     long inspection;
@@ -255,12 +257,13 @@ final class InspectionCommands {
       Map<Long, String> names = planeNames(s, inspection);
       if (source.from != null) {
         String text = readText(source.from);
-        List<Observation> done = s.files().recordFromCsv(inspection, source.from.toString(), text,
+        CsvRecording done = s.files().recordFromCsv(inspection, source.from.toString(), text,
             who, o -> {
               out.println(Show.observation(o, names.get(o.planeId())));
               out.flush();
             });
-        err.println(done.size() + " observations recorded in " + i.label());
+        err.println("observations of " + source.from + ": " + done.summary() + " in "
+            + i.label());
         return 0;
       }
       Single o = source.single;

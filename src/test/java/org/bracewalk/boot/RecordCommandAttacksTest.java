@@ -186,6 +186,50 @@ class RecordCommandAttacksTest {
     assertThat(count("SELECT count(*) FROM photos WHERE observation_id = 66")).isEqualTo(3);
   }
 
+  @Test
+  void recordingTheSameFileAgainRecordsNothingTwice() throws Exception {
+    Path csv = dir.resolve("walk.csv");
+    Files.writeString(csv, "plane,lift,bay,state,supersedes_row,correction_reason\n"
+        + "frame 2,1,1,missing,,\nframe 2,2,1,sound,,\nframe 2,1,1,sound,1,found it\n");
+    Run first = run("record", "--db", db(), "--inspection", "3", "--from", csv.toString());
+    assertThat(first.code()).as(first.err()).isZero();
+    assertThat(first.out()).contains("observation 68 recorded").contains("corrects observation 66");
+    assertThat(first.err()).contains("observations of " + csv + ": 3 recorded in inspection 3");
+    Run again = run("record", "--db", db(), "--inspection", "3", "--from", csv.toString());
+    assertThat(again.code()).as(again.err()).isZero();
+    assertThat(again.out()).isEmpty();
+    assertThat(again.err()).contains(": 0 recorded, 3 already recorded by an earlier run");
+    assertThat(observations()).isEqualTo(68);
+    // the all-or-nothing import knows the rows too
+    Run imported = run("import", "--db", db(), "--inspection", "3", "--csv", csv.toString());
+    assertThat(imported.code()).as(imported.err()).isZero();
+    assertThat(imported.out()).contains("imported 0 observations into inspection 3 (3 rows"
+        + " already recorded by an earlier run)");
+    assertThat(observations()).isEqualTo(68);
+  }
+
+  /** Through the command line: exit 2, and the error says what is recorded (here: nothing). */
+  @Test
+  void aDatabaseThatStaysBusyStopsTheRecordingWithExit2AndSaysWhatIsRecorded() throws Exception {
+    Path csv = dir.resolve("walk.csv");
+    Files.writeString(csv, "plane,lift,bay,state\nframe 2,1,1,missing\nframe 2,2,1,sound\n");
+    try (Connection other = DriverManager.getConnection("jdbc:sqlite:" + db());
+        Statement lock = other.createStatement()) {
+      lock.execute("BEGIN IMMEDIATE");
+      Run r = run("record", "--db", db(), "--inspection", "3", "--from", csv.toString());
+      lock.execute("ROLLBACK");
+      assertThat(r.code()).isEqualTo(2);
+      assertThat(r.out()).isEmpty();
+      assertThat(r.err()).contains("error: recording " + csv + " stopped at line 2: the database "
+          + db() + " stayed busy for 10 s (another Bracewalk is writing to it). No row of " + csv
+          + " is recorded by this run; nothing after it; run the same command again to record the"
+          + " rest");
+    }
+    Run again = run("record", "--db", db(), "--inspection", "3", "--from", csv.toString());
+    assertThat(again.code()).as(again.err()).isZero();
+    assertThat(again.err()).contains(": 2 recorded in inspection 3");
+  }
+
   private static BufferedImage image() {
     BufferedImage img = new BufferedImage(8, 6, BufferedImage.TYPE_INT_RGB);
     img.setRGB(2, 3, 0xCC3300);
