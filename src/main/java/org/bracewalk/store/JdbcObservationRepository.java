@@ -164,10 +164,10 @@ final class JdbcObservationRepository implements ObservationRepository {
             s.setString(5, Columns.text(photo.attachedAt()));
             s.executeUpdate();
             long id = db.lastInsertId();
-            return photosOf(photo.observationId()).stream()
-                .filter(p -> p.id() == id)
-                .findFirst()
-                .orElseThrow();
+            // as read back (instants to the millisecond), without reading the observation's
+            // other photos back: a dozen large photos would otherwise be read a dozen times over
+            return new Photo(id, photo.observationId(), photo.fileName(), photo.mediaType(),
+                photo.data(), Columns.millis(photo.attachedAt()));
           }
         });
   }
