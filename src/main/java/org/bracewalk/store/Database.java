@@ -287,7 +287,7 @@ public final class Database implements RecordStore {
           depth--;
         }
       }
-      execute("BEGIN IMMEDIATE", null);
+      execute("BEGIN IMMEDIATE", false);
       depth = 1;
       T result;
       try {
@@ -298,7 +298,7 @@ public final class Database implements RecordStore {
         throw e;
       }
       depth = 0;
-      execute("COMMIT", "ROLLBACK");
+      execute("COMMIT", true);
       return result;
     } finally {
       lock.unlock();
@@ -306,15 +306,15 @@ public final class Database implements RecordStore {
   }
 
   /**
-   * Runs one transaction-control statement; when it fails, runs {@code onFailure} (if any) as far
-   * as it goes, and throws the first failure, translated.
+   * Runs one transaction-control statement; when it fails, rolls back first if asked (as far as
+   * that goes) and throws the failure, translated.
    */
-  private void execute(String sql, String onFailure) {
+  private void execute(String sql, boolean rollBackOnFailure) {
     try (Statement s = connection.createStatement()) {
       s.execute(sql);
     } catch (SQLException e) {
       StoreException failure = translate(e);
-      if (onFailure != null) {
+      if (rollBackOnFailure) {
         rollback(failure);
       }
       throw failure;
