@@ -53,6 +53,8 @@ import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.port.InspectionFinalisedException;
 import org.bracewalk.core.port.RecordStore;
+import org.bracewalk.core.port.StoreBusyException;
+import org.bracewalk.core.port.StoreException;
 
 /**
  * Files in and out: the JSON site file, the CSV of one inspection's observations, and panel maps
@@ -310,46 +312,124 @@ public final class ImportExportService {
 
   /**
    * Imports an observation CSV into an open inspection, all or nothing (one transaction). Rows
-   * with an empty {@code recorded_at} take the time of import.
+   * with an empty {@code recorded_at} take the time of import. Rows an earlier run of the same
+   * file recorded into this inspection are not recorded again (see {@link #recordFromCsv}).
    */
-  public List<Observation> importObservationsCsv(long inspectionId, String fileName, String text) {
+  public CsvRecording importObservationsCsv(long inspectionId, String fileName, String text) {
     List<ObservationCsv.Row> rows = readObservationsCsv(inspectionId, fileName, text);
-    return store.inTransaction(() -> record(inspectionId, rows, "", o -> { }));
+    return store.inTransaction(
+        () -> record(inspectionId, fileName, text, rows, "", o -> { }, false));
   }
 
   /**
    * Records the rows of an observation CSV one by one, each committed before the next: {@code
    * acknowledged} hears of each stored observation as soon as it is on disk. The whole file is
-   * checked first, so a bad file records nothing; a failure part-way (say, the inspection is
-   * finalised meanwhile) keeps the rows acknowledged so far.
+   * checked first, so a bad file records nothing.
+   *
+   * <p>A row is known by the file's content (SHA-256 of its text) and the line it starts on,
+   * noted in the row's own transaction: a run of the same file into the same inspection skips
+   * the rows already recorded, so running it again after any interruption records the rest and
+   * nothing twice. (Content, not name: an edited file is another file, and its rows are all new;
+   * two files that happen to hold the same row are two findings, not one.)
    *
    * @param recordedBy used where the row's {@code recorded_by} is empty
+   * @throws RecordingStoppedException when a row cannot be stored part-way: it names the rows
+   *     recorded (the last acknowledged line) and says nothing after them is
    */
-  public List<Observation> recordFromCsv(long inspectionId, String fileName, String text,
+  public CsvRecording recordFromCsv(long inspectionId, String fileName, String text,
       String recordedBy, Consumer<Observation> acknowledged) {
     List<ObservationCsv.Row> rows = readObservationsCsv(inspectionId, fileName, text);
-    return record(inspectionId, rows, recordedBy, acknowledged);
+    return record(inspectionId, fileName, text, rows, recordedBy, acknowledged, true);
   }
 
-  private List<Observation> record(long inspectionId, List<ObservationCsv.Row> rows,
-      String recordedBy, Consumer<Observation> acknowledged) {
+  /** The SHA-256 of a file's text as UTF-8, in lower-case hex: the identity of its rows. */
+  static String sourceKey(String text) {
+    try {
+      return java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256")
+          .digest(text.getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+    } catch (java.security.NoSuchAlgorithmException e) {
+      throw new IllegalStateException("every Java runtime has SHA-256", e);
+    }
+  }
+
+  private CsvRecording record(long inspectionId, String fileName, String text,
+      List<ObservationCsv.Row> rows, String recordedBy, Consumer<Observation> acknowledged,
+      boolean eachCommitted) {
     Inspection inspection = inspection(inspectionId);
     Map<String, Long> planeIds = new HashMap<>();
     for (PlaneRecord p : store.planes().ofInspection(inspection.id())) {
       planeIds.put(p.name(), p.id());
     }
+    String source = sourceKey(text);
+    Map<Integer, Long> earlier = store.observations().recordedFrom(inspectionId, source);
+    List<Long> ids = new ArrayList<>(); // by data row: the observation recorded from it
     List<Observation> stored = new ArrayList<>();
-    for (ObservationCsv.Row r : rows) {
+    int already = 0;
+    for (int i = 0; i < rows.size(); i++) {
+      ObservationCsv.Row r = rows.get(i);
+      Long done = earlier.get(r.line());
+      if (done != null) {
+        ids.add(done);
+        already++;
+        continue;
+      }
       Instant at = r.recordedAt() != null ? r.recordedAt() : clock.instant();
       String by = r.recordedBy().isEmpty() && recordedBy != null ? recordedBy : r.recordedBy();
-      Long supersedes = r.supersedesRow() == null ? null : stored.get(r.supersedesRow() - 1).id();
-      Observation o = store.observations().add(TextInput.observation(new Observation(0,
-          inspectionId, planeIds.get(r.plane()), r.panel(), r.state(), r.member(), r.bowMm(),
-          r.gaugeLengthMm(), r.defect(), r.note(), at, by, supersedes, r.correctionReason())));
+      Long supersedes = r.supersedesRow() == null ? null : ids.get(r.supersedesRow() - 1);
+      Observation o;
+      try {
+        o = store.inTransaction(() -> {
+          Observation added = store.observations().add(TextInput.observation(new Observation(0,
+              inspectionId, planeIds.get(r.plane()), r.panel(), r.state(), r.member(), r.bowMm(),
+              r.gaugeLengthMm(), r.defect(), r.note(), at, by, supersedes, r.correctionReason())));
+          store.observations().addSource(inspectionId, source, r.line(), added.id());
+          return added;
+        });
+      } catch (StoreException | UserInputException | IllegalArgumentException e) {
+        if (!eachCommitted) {
+          throw e; // one transaction: nothing of the file is kept
+        }
+        throw stopped(fileName, rows, i, stored.size(), already, earlier, e);
+      }
+      ids.add(o.id());
       stored.add(o);
       acknowledged.accept(o);
     }
-    return stored;
+    return new CsvRecording(stored, already);
+  }
+
+  /**
+   * Says exactly what is recorded when row {@code failed} could not be: rows before it are (by
+   * this run or an earlier one, each committed before the next), it and the rows after it are not
+   * (unless an earlier run recorded some of them, which is said too).
+   */
+  private static RecordingStoppedException stopped(String fileName, List<ObservationCsv.Row> rows,
+      int failed, int byThisRun, int byEarlier, Map<Integer, Long> earlier, RuntimeException e) {
+    ObservationCsv.Row at = rows.get(failed);
+    String why = e instanceof StoreBusyException busy ? busy.reason() : e.getMessage();
+    StringBuilder m = new StringBuilder("recording ").append(fileName).append(" stopped at line ")
+        .append(at.line()).append(": ").append(why).append(". ");
+    int last = failed == 0 ? 0 : rows.get(failed - 1).line();
+    long laterFromEarlier = rows.subList(failed + 1, rows.size()).stream()
+        .filter(r -> earlier.containsKey(r.line())).count();
+    String after = laterFromEarlier == 0 ? "nothing after it"
+        : "after it only the " + laterFromEarlier + " rows an earlier run recorded";
+    if (failed == 0) {
+      m.append("No row of ").append(fileName).append(" is recorded by this run; ").append(after);
+    } else {
+      m.append("Rows ").append(rows.get(0).line()).append('-').append(last).append(" of ")
+          .append(fileName).append(" are recorded (last acknowledged: line ").append(last);
+      if (byThisRun == 0) {
+        m.append(", by an earlier run");
+      } else if (byEarlier > 0) {
+        m.append("; ").append(byThisRun).append(" by this run, ").append(byEarlier)
+            .append(" by an earlier run");
+      }
+      m.append("); ").append(after);
+    }
+    m.append("; run the same command again to record the rest (rows already recorded are not"
+        + " recorded twice)");
+    return new RecordingStoppedException(m.toString(), last, e);
   }
 
   // ------------------------------------------------------------------ panel maps

@@ -1,8 +1,10 @@
 package org.bracewalk.app;
 
+import java.nio.file.Path;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.LocalDate;
+import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -26,8 +28,9 @@ import org.bracewalk.core.port.InspectionFinalisedException;
 import org.bracewalk.core.port.RecordStore;
 
 /**
- * Inspections: start one, record observations panel by panel (each committed when recorded),
- * correct them (a new row naming the one it supersedes), attach photos, finalise. Also the latest
+ * Inspections: start one, record observations panel by panel (each committed when recorded, with
+ * its photos), correct them (a new row of the same inspection naming the one it supersedes),
+ * finalise. Also the latest
  * findings per panel and the as-built plane they give.
  */
 public final class InspectionService {
@@ -117,43 +120,77 @@ public final class InspectionService {
    * @throws UserInputException naming the plane or panel when they do not belong to it
    */
   public Observation recordObservation(long inspectionId, NewObservation observation) {
-    Inspection inspection = inspection(inspectionId);
-    return store.observations().add(toObservation(inspection, observation, null, null));
+    return record(inspectionId, observation, List.of()).observation();
   }
 
   /**
-   * Corrects an earlier observation of an open inspection: stores a new observation that names the
-   * one it supersedes and why. The earlier row stays as it was.
+   * Records one observation now with its photos, all in one transaction: every photo file is
+   * checked before any is read (see {@link PhotoFiles}) and all are read before anything is
+   * stored, so a missing, oversized or non-picture file records nothing.
+   *
+   * @throws UserInputException naming the photo file, plane or panel that cannot be kept
+   * @throws InspectionFinalisedException when the inspection is finalised
    */
-  public Observation correct(long supersededId, NewObservation replacement, String reason) {
+  public RecordedObservation record(
+      long inspectionId, NewObservation observation, List<Path> photos) {
+    Inspection inspection = inspection(inspectionId);
+    return store(toObservation(inspection, observation, null, null), photos);
+  }
+
+  /**
+   * Corrects an earlier observation of an open inspection: stores a new observation of the same
+   * inspection that names the one it supersedes and why. The earlier row stays as it was.
+   *
+   * @throws UserInputException when the observation is not one of this inspection (naming both),
+   *     is already corrected, or no reason is given
+   */
+  public Observation correct(
+      long inspectionId, long supersededId, NewObservation replacement, String reason) {
+    return correct(inspectionId, supersededId, replacement, reason, List.of()).observation();
+  }
+
+  /**
+   * As {@link #correct(long, long, NewObservation, String)}, with photos stored in the same
+   * transaction (see {@link #record}).
+   */
+  public RecordedObservation correct(long inspectionId, long supersededId,
+      NewObservation replacement, String reason, List<Path> photos) {
+    Inspection inspection = inspection(inspectionId);
     Observation old =
         store.observations()
             .find(supersededId)
             .orElseThrow(() -> new NotFoundException("observation " + supersededId));
+    if (old.inspectionId() != inspectionId) {
+      throw new UserInputException("observation " + supersededId + " is of inspection "
+          + old.inspectionId() + ", not of inspection " + inspectionId + ": a correction is"
+          + " recorded in the inspection of the observation it corrects; correct it in inspection "
+          + old.inspectionId() + ", or record a new observation in inspection " + inspectionId);
+    }
     if (blank(reason)) {
       throw new UserInputException(
           "say why observation " + supersededId + " is corrected (the reason is kept with it)");
     }
-    Inspection inspection = inspection(old.inspectionId());
-    for (Observation o : store.observations().ofInspection(old.inspectionId())) {
+    for (Observation o : store.observations().ofInspection(inspectionId)) {
       if (Long.valueOf(supersededId).equals(o.supersedes())) {
         throw new UserInputException("observation " + supersededId + " is already corrected by"
             + " observation " + o.id() + "; correct that one instead");
       }
     }
-    return store.observations().add(toObservation(inspection, replacement, supersededId, reason));
+    return store(toObservation(inspection, replacement, supersededId, reason), photos);
   }
 
-  /** Attaches a photo to an observation of an open inspection. */
-  public Photo attachPhoto(long observationId, String fileName, String mediaType, byte[] data) {
-    Observation o =
-        store.observations()
-            .find(observationId)
-            .orElseThrow(() -> new NotFoundException("observation " + observationId));
-    requireOpen(inspection(o.inspectionId()), "attach a photo");
-    return store.observations()
-        .addPhoto(TextInput.photo(
-            new Photo(0, observationId, fileName, mediaType, data, clock.instant())));
+  /** Reads and checks the photos, then stores the observation and them in one transaction. */
+  private RecordedObservation store(Observation observation, List<Path> photos) {
+    List<PhotoFiles.PhotoFile> files = PhotoFiles.read(photos);
+    return store.inTransaction(() -> {
+      Observation saved = store.observations().add(observation);
+      List<Photo> stored = new ArrayList<>();
+      for (PhotoFiles.PhotoFile f : files) {
+        stored.add(store.observations().addPhoto(TextInput.photo(
+            new Photo(0, saved.id(), f.fileName(), f.mediaType(), f.data(), clock.instant()))));
+      }
+      return new RecordedObservation(saved, stored);
+    });
   }
 
   public List<Photo> photos(long observationId) {

@@ -115,7 +115,7 @@ public final class WalkBench {
         "bench", java.time.LocalDate.of(2025, 1, 1), "", design);
     var insp = s.inspections().start(st.id(), org.bracewalk.app.NewInspection.of("Bench", "bench",
         org.bracewalk.core.model.InspectionReason.ROUTINE));
-    return new org.bracewalk.ui.walk.InspectionMarkRecorder(s.inspections(), s.store(), insp.id(), plane.id(), "Bench");
+    return new org.bracewalk.ui.walk.InspectionMarkRecorder(s.inspections(), insp.id(), plane.id(), "Bench");
   }
 
   /** 20 lifts × 100 bays, pinned base, a brace every 5th bay of every lift, widths and heights as on site. */

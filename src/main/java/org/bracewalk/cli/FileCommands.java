@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Objects;
 import java.util.stream.Stream;
 import org.bracewalk.app.AppServices;
+import org.bracewalk.app.CsvRecording;
 import org.bracewalk.app.ImportedSite;
 import org.bracewalk.core.model.DesignRevision;
 import org.bracewalk.core.model.Inspection;
@@ -92,9 +93,10 @@ final class FileCommands {
       }
       if (csv != null) {
         long id = need(inspection, "--inspection", "--csv");
-        List<Observation> stored =
-            s.files().importObservationsCsv(id, csv.toString(), readText(csv));
-        out.println("imported " + stored.size() + " observations into inspection " + id);
+        CsvRecording stored = s.files().importObservationsCsv(id, csv.toString(), readText(csv));
+        out.println("imported " + stored.recorded().size() + " observations into inspection " + id
+            + (stored.alreadyRecorded() == 0 ? ""
+                : " (" + stored.alreadyRecorded() + " rows already recorded by an earlier run)"));
         return 0;
       }
       if (design != null) {

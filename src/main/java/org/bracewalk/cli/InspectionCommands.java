@@ -7,8 +7,10 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.bracewalk.app.AppServices;
+import org.bracewalk.app.CsvRecording;
 import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.NewObservation;
+import org.bracewalk.app.RecordedObservation;
 import org.bracewalk.app.UserInputException;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
@@ -17,6 +19,7 @@ import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.Photo;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.Structure;
 import picocli.CommandLine.ArgGroup;
@@ -204,14 +207,16 @@ final class InspectionCommands {
     @Option(names = "--note", description = "Free text.")
     String note;
 
-    @Option(names = "--supersedes", description = "Id of the observation this corrects.")
+    @Option(names = "--supersedes",
+        description = "Id of the observation this corrects (one of the same inspection).")
     Long supersedes;
 
     @Option(names = "--reason", description = "Why the corrected observation was wrong.")
     String reason;
 
     @Option(names = "--photo", paramLabel = "FILE",
-        description = "A photo to attach (JPEG, PNG, ...); may be repeated. Kept in the database.")
+        description = "A photo to attach, JPEG or PNG, up to 20 MB; may be repeated. Kept in the"
+            + " database, stored with the observation or not at all.")
     List<Path> photos;
   }
 
@@ -228,8 +233,9 @@ final class InspectionCommands {
   @Command(name = "record", mixinStandardHelpOptions = true,
       description = {"Record observations of an open inspection, each committed to disk as it"
           + " is recorded, one line per acknowledged observation id.",
-          "Either --from FILE.csv (the whole file is checked first; a bad file records nothing)"
-              + " or one observation by options."})
+          "Either --from FILE.csv (the whole file is checked first; a bad file records nothing;"
+              + " rows an earlier run of the same file recorded are not recorded again, so after"
+              + " an interruption run the same command again) or one observation by options."})
   static final class Record extends StoreCommand {
     @Option(names = "--inspection", required = true, description = "The inspection's id.")
     long inspection;
@@ -251,12 +257,13 @@ final class InspectionCommands {
       Map<Long, String> names = planeNames(s, inspection);
       if (source.from != null) {
         String text = readText(source.from);
-        List<Observation> done = s.files().recordFromCsv(inspection, source.from.toString(), text,
+        CsvRecording done = s.files().recordFromCsv(inspection, source.from.toString(), text,
             who, o -> {
               out.println(Show.observation(o, names.get(o.planeId())));
               out.flush();
             });
-        err.println(done.size() + " observations recorded in " + i.label());
+        err.println("observations of " + source.from + ": " + done.summary() + " in "
+            + i.label());
         return 0;
       }
       Single o = source.single;
@@ -268,46 +275,19 @@ final class InspectionCommands {
       NewObservation n = new NewObservation(plane.id(), PanelRef.of(o.lift, o.bay),
           PanelState.fromLabel(o.state), member, o.bow, o.gauge,
           o.defect == null ? null : DefectType.fromLabel(o.defect), o.note, who);
-      Observation saved = o.supersedes == null
-          ? s.inspections().recordObservation(inspection, n)
-          : s.inspections().correct(o.supersedes, n, o.reason);
-      out.println(Show.observation(saved, plane.name()));
-      if (o.photos != null) {
-        for (Path photo : o.photos) {
-          outputs = outputs.withInput(photo);
-          byte[] bytes = readBytes(photo);
-          var p = s.inspections().attachPhoto(saved.id(), photo.getFileName().toString(),
-              mediaType(photo), bytes);
-          out.println("photo " + p.id() + " attached to observation " + saved.id() + ": "
-              + p.fileName() + " (" + p.size() + " bytes)");
-        }
+      List<Path> photos = o.photos == null ? List.of() : o.photos;
+      for (Path photo : photos) {
+        outputs = outputs.withInput(photo);
+      }
+      RecordedObservation saved = o.supersedes == null
+          ? s.inspections().record(inspection, n, photos)
+          : s.inspections().correct(inspection, o.supersedes, n, o.reason, photos);
+      out.println(Show.observation(saved.observation(), plane.name()));
+      for (Photo p : saved.photos()) {
+        out.println("photo " + p.id() + " attached to observation " + saved.observation().id()
+            + ": " + p.fileName() + " (" + p.size() + " bytes, " + p.mediaType() + ")");
       }
       return 0;
-    }
-
-    static String mediaType(Path photo) {
-      String name = photo.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
-      if (name.endsWith(".jpg") || name.endsWith(".jpeg")) {
-        return "image/jpeg";
-      }
-      if (name.endsWith(".png")) {
-        return "image/png";
-      }
-      if (name.endsWith(".heic")) {
-        return "image/heic";
-      }
-      if (name.endsWith(".webp")) {
-        return "image/webp";
-      }
-      return "application/octet-stream";
-    }
-
-    static byte[] readBytes(Path file) {
-      try {
-        return java.nio.file.Files.readAllBytes(file);
-      } catch (java.io.IOException e) {
-        throw new UserInputException("cannot read " + file + ": " + e.getMessage());
-      }
     }
 
     private static Brace braceOf(String token) {

@@ -61,6 +61,7 @@ public final class Database implements RecordStore {
 
   private final Path file;
   private final Connection connection;
+  private final int busyTimeoutMs;
   private final ReentrantLock lock = new ReentrantLock();
   private int depth;
   private boolean closed;
@@ -75,9 +76,10 @@ public final class Database implements RecordStore {
   private final JdbcRepairRepository repairs = new JdbcRepairRepository(this);
   private final JdbcIssuedReportRepository issuedReports = new JdbcIssuedReportRepository(this);
 
-  private Database(Path file, Connection connection) {
+  private Database(Path file, Connection connection, int busyTimeoutMs) {
     this.file = file;
     this.connection = connection;
+    this.busyTimeoutMs = busyTimeoutMs;
   }
 
   /**
@@ -91,9 +93,14 @@ public final class Database implements RecordStore {
    *     or cannot be migrated
    */
   public static Database open(Path file) {
+    return open(file, BUSY_TIMEOUT_MS);
+  }
+
+  /** As {@link #open(Path)}, waiting at most {@code busyTimeoutMs} for another program's write. */
+  static Database open(Path file, int busyTimeoutMs) {
     Path absolute = file.toAbsolutePath();
     DatabaseFile.Kind kind = DatabaseFile.inspect(absolute);
-    SQLiteDataSource dataSource = dataSource(absolute);
+    SQLiteDataSource dataSource = dataSource(absolute, busyTimeoutMs);
     if (kind == DatabaseFile.Kind.NEW) {
       try (Connection c = dataSource.getConnection()) {
         DatabaseFile.mark(c);
@@ -108,9 +115,9 @@ public final class Database implements RecordStore {
       if (kind != DatabaseFile.Kind.BRACEWALK) {
         DatabaseFile.mark(c);
       }
-      return new Database(absolute, c);
+      return new Database(absolute, c, busyTimeoutMs);
     } catch (SQLException e) {
-      throw SqlErrors.translate(e, absolute.toString());
+      throw SqlErrors.translate(e, absolute.toString(), busyTimeoutMs);
     }
   }
 
@@ -145,8 +152,12 @@ public final class Database implements RecordStore {
   }
 
   static SQLiteDataSource dataSource(Path file) {
+    return dataSource(file, BUSY_TIMEOUT_MS);
+  }
+
+  static SQLiteDataSource dataSource(Path file, int busyTimeoutMs) {
     SQLiteConfig config = new SQLiteConfig();
-    config.setBusyTimeout(BUSY_TIMEOUT_MS);
+    config.setBusyTimeout(busyTimeoutMs);
     config.enforceForeignKeys(true);
     config.setJournalMode(SQLiteConfig.JournalMode.WAL);
     config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
@@ -166,6 +177,7 @@ public final class Database implements RecordStore {
           "V1__site_records.sql",
           "V2__planes_never_change.sql",
           "V3__records_never_overwritten.sql",
+          "V4__observation_sources.sql",
           "V5__register_of_issued_documents.sql",
           "V6__plane_limits_and_retirements.sql");
 
@@ -295,12 +307,20 @@ public final class Database implements RecordStore {
       requireOpen();
       return work.run(connection);
     } catch (SQLException e) {
-      throw SqlErrors.translate(e, file.toString(), subject);
+      throw SqlErrors.translate(e, file.toString(), subject, busyTimeoutMs);
     } finally {
       lock.unlock();
     }
   }
 
+  /**
+   * The transaction is begun, committed and rolled back by plain SQL statements while the driver
+   * stays in auto-commit mode. The driver's own transactions (auto-commit off) begin the next
+   * transaction inside {@code commit()}: that {@code BEGIN IMMEDIATE} waits for another program's
+   * write lock and, after the busy timeout, makes {@code commit()} throw although the commit is on
+   * disk (a saved change reported as lost); and a {@code BEGIN} that timed out left the driver
+   * believing a transaction was open, so the next "transaction" ran statement by statement.
+   */
   @Override
   public <T> T inTransaction(Work<T> work) {
     lock.lock();
@@ -314,42 +334,52 @@ public final class Database implements RecordStore {
           depth--;
         }
       }
-      begin();
+      execute("BEGIN IMMEDIATE", false);
       depth = 1;
-      boolean committed = false;
+      T result;
       try {
-        T result = work.run();
-        connection.commit();
-        committed = true;
-        return result;
-      } catch (SQLException e) {
-        throw SqlErrors.translate(e, file.toString());
-      } finally {
+        result = work.run();
+      } catch (RuntimeException | Error e) {
         depth = 0;
-        end(committed);
+        rollback(e);
+        throw e;
       }
+      depth = 0;
+      execute("COMMIT", true);
+      return result;
     } finally {
       lock.unlock();
     }
   }
 
-  private void begin() {
-    try {
-      connection.setAutoCommit(false);
+  /**
+   * Runs one transaction-control statement; when it fails, rolls back first if asked (as far as
+   * that goes) and throws the failure, translated.
+   */
+  private void execute(String sql, boolean rollBackOnFailure) {
+    try (Statement s = connection.createStatement()) {
+      s.execute(sql);
     } catch (SQLException e) {
-      throw SqlErrors.translate(e, file.toString());
+      StoreException failure = translate(e);
+      if (rollBackOnFailure) {
+        rollback(failure);
+      }
+      throw failure;
     }
   }
 
-  private void end(boolean committed) {
-    try {
-      if (!committed) {
-        connection.rollback();
-      }
-      connection.setAutoCommit(true);
+  /** Rolls the open transaction back; a failure to do so is attached to {@code cause}. */
+  private void rollback(Throwable cause) {
+    try (Statement s = connection.createStatement()) {
+      s.execute("ROLLBACK");
     } catch (SQLException e) {
-      throw SqlErrors.translate(e, file.toString());
+      // SQLite rolls back by itself after some errors (disk full, I/O): then none is open
+      cause.addSuppressed(e);
     }
+  }
+
+  private StoreException translate(SQLException e) {
+    return SqlErrors.translate(e, file.toString(), busyTimeoutMs);
   }
 
   /**
@@ -429,7 +459,7 @@ public final class Database implements RecordStore {
         connection.close();
       }
     } catch (SQLException e) {
-      throw SqlErrors.translate(e, file.toString());
+      throw translate(e);
     } finally {
       lock.unlock();
     }

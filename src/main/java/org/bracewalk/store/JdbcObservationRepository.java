@@ -5,7 +5,9 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.bracewalk.core.model.DefectType;
 import org.bracewalk.core.model.Observation;
@@ -53,6 +55,17 @@ final class JdbcObservationRepository implements ObservationRepository {
       """
       SELECT DISTINCT o.id FROM observations o JOIN photos p ON p.observation_id = o.id
       WHERE o.inspection_id = ? ORDER BY o.id
+      """;
+
+  private static final String SOURCES =
+      """
+      SELECT line, observation_id FROM observation_sources
+      WHERE inspection_id = ? AND source_sha256 = ?
+      """;
+  private static final String INSERT_SOURCE =
+      """
+      INSERT INTO observation_sources (inspection_id, source_sha256, line, observation_id)
+      VALUES (?, ?, ?, ?)
       """;
 
   private final Database db;
@@ -169,10 +182,10 @@ final class JdbcObservationRepository implements ObservationRepository {
             s.setString(5, Columns.text(photo.attachedAt()));
             s.executeUpdate();
             long id = db.lastInsertId();
-            return photosOf(photo.observationId()).stream()
-                .filter(p -> p.id() == id)
-                .findFirst()
-                .orElseThrow();
+            // as read back (instants to the millisecond), without reading the observation's
+            // other photos back: a dozen large photos would otherwise be read a dozen times over
+            return new Photo(id, photo.observationId(), photo.fileName(), photo.mediaType(),
+                photo.data(), Columns.millis(photo.attachedAt()));
           }
         },
         new SqlErrors.Subject("photo '" + photo.fileName() + "' of observation "
@@ -218,6 +231,36 @@ final class JdbcObservationRepository implements ObservationRepository {
               return out;
             }
           }
+        });
+  }
+
+  @Override
+  public Map<Integer, Long> recordedFrom(long inspectionId, String sourceSha256) {
+    return db.call(
+        c -> {
+          PreparedStatement s = db.prepared(SOURCES);
+          s.setLong(1, inspectionId);
+          s.setString(2, sourceSha256);
+          try (ResultSet r = s.executeQuery()) {
+            Map<Integer, Long> out = new HashMap<>();
+            while (r.next()) {
+              out.put(r.getInt(1), r.getLong(2));
+            }
+            return out;
+          }
+        });
+  }
+
+  @Override
+  public void addSource(long inspectionId, String sourceSha256, int line, long observationId) {
+    db.call(
+        c -> {
+          PreparedStatement s = db.prepared(INSERT_SOURCE);
+          s.setLong(1, inspectionId);
+          s.setString(2, sourceSha256);
+          s.setInt(3, line);
+          s.setLong(4, observationId);
+          return s.executeUpdate();
         });
   }
 }

@@ -4,6 +4,7 @@ import java.sql.SQLException;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.bracewalk.core.port.InspectionFinalisedException;
+import org.bracewalk.core.port.StoreBusyException;
 import org.bracewalk.core.port.StoreException;
 import org.sqlite.SQLiteErrorCode;
 import org.sqlite.SQLiteException;
@@ -41,10 +42,20 @@ final class SqlErrors {
   }
 
   static StoreException translate(SQLException e, String file) {
-    return translate(e, file, null);
+    return translate(e, file, null, Database.BUSY_TIMEOUT_MS);
   }
 
+  /** As {@link #translate(SQLException, String)}, for a store that waits {@code busyTimeoutMs}. */
+  static StoreException translate(SQLException e, String file, int busyTimeoutMs) {
+    return translate(e, file, null, busyTimeoutMs);
+  }
+
+  /** As {@link #translate(SQLException, String)}, naming the record written. */
   static StoreException translate(SQLException e, String file, Subject subject) {
+    return translate(e, file, subject, Database.BUSY_TIMEOUT_MS);
+  }
+
+  static StoreException translate(SQLException e, String file, Subject subject, int busyTimeoutMs) {
     String message = e.getMessage() == null ? "" : e.getMessage();
     SQLiteErrorCode code = e instanceof SQLiteException s ? s.getResultCode() : null;
     if (code == SQLiteErrorCode.SQLITE_CONSTRAINT_TRIGGER) {
@@ -61,18 +72,22 @@ final class SqlErrors {
     }
     if (code != null
         && (code.name().startsWith("SQLITE_BUSY") || code.name().startsWith("SQLITE_LOCKED"))) {
-      return new StoreException(
+      return new StoreBusyException(
           "the database "
               + file
               + " stayed busy for "
-              + Database.BUSY_TIMEOUT_MS / 1000
-              + " s (another Bracewalk is writing to it); nothing was saved, try again",
+              + seconds(busyTimeoutMs)
+              + " s (another Bracewalk is writing to it)",
           e);
     }
     if (code == SQLiteErrorCode.SQLITE_NOTADB || code == SQLiteErrorCode.SQLITE_CORRUPT) {
       return new StoreException(file + " is not a readable Bracewalk database: " + message, e);
     }
     return new StoreException("database " + file + ": " + message, e);
+  }
+
+  private static String seconds(int ms) {
+    return ms % 1000 == 0 ? String.valueOf(ms / 1000) : String.valueOf(ms / 1000.0);
   }
 
   private static String detail(String message) {

@@ -163,7 +163,7 @@ public final class AppScreens implements ScreenFactory {
     WalkViewModel vm =
         new WalkViewModel(design.design(), st.name() + ", " + plane.name(),
             InspectionMarkRecorder.existing(services.inspections(), insp.id(), plane.id()),
-            new InspectionMarkRecorder(services.inspections(), services.store(), insp.id(), plane.id(), insp.inspectorName()),
+            new InspectionMarkRecorder(services.inspections(), insp.id(), plane.id(), insp.inspectorName()),
             analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised());
     vm.useCameraFolderSetting(cameraFolder);
     WalkView view = new WalkView(vm);

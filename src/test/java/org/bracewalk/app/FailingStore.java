@@ -67,6 +67,16 @@ final class FailingStore implements RecordStore {
       public List<Long> withPhotos(long inspectionId) {
         return o.withPhotos(inspectionId);
       }
+
+      @Override
+      public java.util.Map<Integer, Long> recordedFrom(long inspectionId, String sourceSha256) {
+        return o.recordedFrom(inspectionId, sourceSha256);
+      }
+
+      @Override
+      public void addSource(long inspectionId, String sourceSha256, int line, long observationId) {
+        o.addSource(inspectionId, sourceSha256, line, observationId);
+      }
     };
   }
 

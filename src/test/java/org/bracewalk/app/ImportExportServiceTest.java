@@ -147,7 +147,8 @@ class ImportExportServiceTest {
           org.bracewalk.app.sitefile.ObservationCsv.COLUMNS));
       Inspection fresh = s.inspections().start(1, NewInspection.of("Priya Danvers", "",
           InspectionReason.ROUTINE));
-      List<Observation> stored = s.files().importObservationsCsv(fresh.id(), "i1.csv", csv);
+      List<Observation> stored =
+          s.files().importObservationsCsv(fresh.id(), "i1.csv", csv).recorded();
       assertThat(stored).hasSize(33);
       assertThat(stored.get(32).supersedes()).isEqualTo(stored.get(17).id());
       assertThat(s.files().exportObservationsCsv(fresh.id())).isEqualTo(csv);
@@ -183,7 +184,7 @@ class ImportExportServiceTest {
             assertThat(s.inspections().observations(fresh.id())).extracting(Observation::id)
                 .contains(o.id());
             seen.add(o.id());
-          });
+          }).recorded();
       assertThat(seen).containsExactlyElementsOf(stored.stream().map(Observation::id).toList());
       assertThat(stored.get(1).state()).isEqualTo(PanelState.MISSING);
       assertThat(stored.get(1).note()).isEqualTo("taken out, for access");

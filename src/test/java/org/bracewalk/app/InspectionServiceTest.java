@@ -56,7 +56,7 @@ class InspectionServiceTest {
     Observation first = record(1, 1, PanelState.SOUND);
     record(1, 1, PanelState.MISSING); // looked again later: the later one counts
     Observation wrong = record(2, 1, PanelState.MISSING);
-    Observation fixed = s.inspections().correct(wrong.id(),
+    Observation fixed = s.inspections().correct(inspection.id(), wrong.id(),
         NewObservation.of(plane.id(), PanelRef.of(2, 1), PanelState.SOUND, "M. Okafor"),
         "brace hidden behind sheeting, it is there");
     Map<PanelRef, Observation> latest = s.inspections().latestObservations(inspection.id(), plane.id());
@@ -66,7 +66,7 @@ class InspectionServiceTest {
     assertThat(fixed.supersedes()).isEqualTo(wrong.id());
     assertThat(s.inspections().observations(inspection.id()))
         .hasSize(4).contains(first, wrong);
-    assertThatThrownBy(() -> s.inspections().correct(wrong.id(),
+    assertThatThrownBy(() -> s.inspections().correct(inspection.id(), wrong.id(),
             NewObservation.of(plane.id(), PanelRef.of(2, 1), PanelState.SOUND, "x"), "again"))
         .hasMessageContaining("already corrected by observation " + fixed.id());
   }

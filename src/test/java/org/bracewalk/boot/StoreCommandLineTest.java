@@ -123,7 +123,7 @@ class StoreCommandLineTest {
         "1", "--bay", "1", "--state", "sound", "--supersedes", "66", "--reason", "misread gauge",
         "--photo", photo.toString());
     assertThat(fix.out()).contains("observation 67 recorded").contains("corrects observation 66")
-        .contains("photo 2 attached to observation 67: gauge.jpg (6 bytes)");
+        .contains("photo 2 attached to observation 67: gauge.jpg (6 bytes, image/jpeg)");
     assertThat(run("finalise", "--db", db(), "--inspection", "3").code()).isZero();
     Run refused = run("record", "--db", db(), "--inspection", "3", "--plane", "spine", "--lift",
         "1", "--bay", "1", "--state", "sound");

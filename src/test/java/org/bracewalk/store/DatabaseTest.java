@@ -155,7 +155,8 @@ class DatabaseTest {
                   "M. Okafor"));
       assertThat(db.observations().find(o.id())).contains(o);
       assertThat(o.bowMm()).isEqualTo(10.1);
-      Photo photo = s.inspections().attachPhoto(o.id(), "b2.jpg", "image/jpeg", new byte[] {1, 2});
+      Photo photo = db.observations().addPhoto(new Photo(0, o.id(), "b2.jpg", "image/jpeg",
+          new byte[] {1, 2}, java.time.Instant.parse("2025-03-03T08:00:00.123Z")));
       assertThat(s.inspections().photos(o.id())).containsExactly(photo);
       assertThat(db.observations().withPhotos(inspection.id())).containsExactly(o.id());
       assertThat(db.inspections().ofStructure(plane.structureId())).containsExactly(inspection);
@@ -204,7 +205,7 @@ class DatabaseTest {
               NewObservation.of(planeId, PanelRef.of(1, 2), PanelState.SOUND, "M. Okafor")))
           .isInstanceOf(InspectionFinalisedException.class)
           .hasMessageContaining("inspection " + id + " is finalised");
-      assertThatThrownBy(() -> s.inspections().correct(observation,
+      assertThatThrownBy(() -> s.inspections().correct(id, observation,
               NewObservation.of(planeId, PanelRef.of(1, 1), PanelState.MISSING, "M. Okafor"),
               "wrong panel"))
           .isInstanceOf(InspectionFinalisedException.class);
@@ -253,6 +254,37 @@ class DatabaseTest {
       assertThat(db.sites().all()).isEmpty();
       db.inTransaction(() -> s.sites().createSite(Fixtures.site()));
       assertThat(db.sites().all()).hasSize(1);
+    }
+  }
+
+  /**
+   * Another program holds the write lock past the busy timeout: the transaction is refused as
+   * busy, and the store stays sound: the next transaction is still all or nothing. (With the
+   * driver's own transactions the timed-out BEGIN left it believing one was open, and the next
+   * "transaction" committed statement by statement.)
+   */
+  @Test
+  void aTransactionRefusedAsBusyLeavesTheNextOneAllOrNothing() throws Exception {
+    Path file = dir.resolve("busy.db");
+    try (Database db = Database.open(file, 200);
+        Connection other = DriverManager.getConnection("jdbc:sqlite:" + file);
+        Statement st = other.createStatement()) {
+      Fixtures.Services s = Fixtures.Services.over(db);
+      st.execute("BEGIN IMMEDIATE");
+      assertThatThrownBy(() -> db.inTransaction(() -> s.sites().createSite(Fixtures.site())))
+          .isInstanceOf(org.bracewalk.core.port.StoreBusyException.class)
+          .hasMessageContaining("stayed busy for 0.2 s");
+      st.execute("ROLLBACK");
+      assertThatThrownBy(() -> db.inTransaction(() -> {
+        s.sites().createSite(Fixtures.site());
+        throw new IllegalStateException("boom");
+      })).hasMessage("boom");
+      assertThat(db.sites().all()).isEmpty();
+      db.inTransaction(() -> s.sites().createSite(Fixtures.site()));
+      assertThat(db.sites().all()).hasSize(1);
+      // and the lock is free again between transactions: the other program can write
+      st.execute("BEGIN IMMEDIATE");
+      st.execute("ROLLBACK");
     }
   }
 

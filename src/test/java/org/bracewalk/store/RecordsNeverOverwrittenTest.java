@@ -78,8 +78,9 @@ class RecordsNeverOverwrittenTest {
           NewInspection.of("M. Okafor", "competent person", InspectionReason.ROUTINE)).id();
       finalisedObservation = s.inspections().recordObservation(finalised,
           NewObservation.of(plane, PanelRef.of(1, 1), PanelState.SOUND, "M. Okafor")).id();
-      photo = s.inspections().attachPhoto(finalisedObservation, "a1.jpg", "image/jpeg",
-          new byte[] {1, 2, 3}).id();
+      photo = db.observations().addPhoto(new org.bracewalk.core.model.Photo(0,
+          finalisedObservation, "a1.jpg", "image/jpeg", new byte[] {1, 2, 3},
+          s.clock().instant())).id();
       s.inspections().finalise(finalised);
       RepairService repairs = new RepairService(db, s.clock());
       order = repairs.raise(finalised, "M. Okafor", "brace bay 2").id();
@@ -90,7 +91,7 @@ class RecordsNeverOverwrittenTest {
           NewInspection.of("M. Okafor", "competent person", InspectionReason.ROUTINE)).id();
       openObservation = s.inspections().recordObservation(open,
           NewObservation.of(plane, PanelRef.of(2, 1), PanelState.SOUND, "M. Okafor")).id();
-      openCorrection = s.inspections().correct(openObservation,
+      openCorrection = s.inspections().correct(open, openObservation,
           NewObservation.of(plane, PanelRef.of(2, 1), PanelState.MISSING, "M. Okafor"),
           "misread").id();
     }

@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
+import org.bracewalk.app.PhotoFiles;
 import org.bracewalk.core.model.Photo;
 
 /**
@@ -22,6 +23,10 @@ import org.bracewalk.core.model.Photo;
 public final class CameraFolder {
   /** At most this many photos are taken at once (the newest). */
   public static final int MOST_AT_ONCE = 12;
+
+  /** Why a file that is not a JPEG or PNG picture (by its first bytes) is not taken. */
+  static final String NOT_A_PICTURE =
+      "not a JPEG or PNG picture, which is all the report can draw: save it as JPEG";
 
   private CameraFolder() {}
 
@@ -105,7 +110,7 @@ public final class CameraFolder {
    * previous mark or when the folder was chosen), or last written at or after {@code since} (less
    * two seconds: a memory card keeps times to two seconds) — the listing catches a camera whose
    * clock is behind, the time a file that was still being copied at the mark. Never one in {@code
-   * taken}; only files of 1 byte to {@link Photo#MAX_BYTES}. Oldest first; the newest {@link
+   * taken}; only JPEG and PNG pictures of 1 byte to {@link Photo#MAX_BYTES}. Oldest first; the newest {@link
    * #MOST_AT_ONCE} when there are more.
    *
    * @param before the earlier listing, or null when there is none (then only the time counts)
@@ -135,6 +140,8 @@ public final class CameraFolder {
         passedOver.add(f.getFileName() + " (empty: still being copied?)");
       } else if (a.size() > Photo.MAX_BYTES) {
         passedOver.add(f.getFileName() + " (over 20 MB)");
+      } else if (PhotoFiles.problem(f).isPresent()) {
+        passedOver.add(f.getFileName() + " (" + NOT_A_PICTURE + ")");
       } else {
         found.add(new Candidate(f, written));
       }
@@ -146,7 +153,8 @@ public final class CameraFolder {
   }
 
   /**
-   * Why the photo file {@code f} cannot go with a mark now (gone, unreadable, empty, too large), or
+   * Why the photo file {@code f} cannot go with a mark now (gone, unreadable, empty, too large, not
+   * a JPEG or PNG picture by its first bytes), or
    * empty when it can.
    */
   public static Optional<String> problem(Path f) {
@@ -164,7 +172,7 @@ public final class CameraFolder {
       if (!Files.isReadable(f)) {
         return Optional.of("it cannot be read");
       }
-      return Optional.empty();
+      return PhotoFiles.problem(f).map(why -> NOT_A_PICTURE);
     } catch (IOException e) {
       return Optional.of("it cannot be read (" + e.getMessage() + ")");
     }

@@ -154,7 +154,7 @@ class WalkViewModelTest {
   }
 
   private static Path photo(Path folder, String name, java.time.Instant written) throws java.io.IOException {
-    Path f = java.nio.file.Files.write(folder.resolve(name), new byte[] {(byte) 0xFF, (byte) 0xD8, 1, 2});
+    Path f = java.nio.file.Files.write(folder.resolve(name), new byte[] {(byte) 0xFF, (byte) 0xD8, (byte) 0xFF, (byte) 0xE0, 1, 2}); // JPEG's first bytes
     java.nio.file.Files.setLastModifiedTime(f, java.nio.file.attribute.FileTime.from(written));
     return f;
   }
