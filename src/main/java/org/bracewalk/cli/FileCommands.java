@@ -12,6 +12,9 @@ import java.util.stream.Stream;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.ImportedSite;
 import org.bracewalk.app.UserInputException;
+import org.bracewalk.app.panelmap.PanelMapParser;
+import org.bracewalk.app.sitefile.ObservationCsv;
+import org.bracewalk.app.sitefile.SiteFileReader;
 import org.bracewalk.core.model.DesignRevision;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.Observation;
@@ -89,7 +92,7 @@ final class FileCommands {
             "give exactly one of --site, --csv, --design or --map (see 'bracewalk import --help')");
       }
       if (site != null) {
-        ImportedSite imported = s.files().importSite(site.toString(), readText(site));
+        ImportedSite imported = s.files().importSite(site.toString(), readText(site, SiteFileReader.LIMITS));
         out.println("imported " + site);
         summary(imported, out);
         return 0;
@@ -97,13 +100,13 @@ final class FileCommands {
       if (csv != null) {
         long id = need(inspection, "--inspection", "--csv");
         List<Observation> stored =
-            s.files().importObservationsCsv(id, csv.toString(), readText(csv));
+            s.files().importObservationsCsv(id, csv.toString(), readText(csv, ObservationCsv.LIMITS));
         out.println("imported " + stored.size() + " observations into inspection " + id);
         return 0;
       }
       if (design != null) {
         long planeId = planeId(need(plane, "--plane", "--design"));
-        DesignRevision d = s.files().importDesignMap(planeId, design.toString(), readText(design),
+        DesignRevision d = s.files().importDesignMap(planeId, design.toString(), readText(design, PanelMapParser.LIMITS),
             author, date == null ? LocalDate.now(context.clock()) : date, note);
         out.println("design revision " + d.number() + " of plane " + planeId + " stored ("
             + d.design().braces().size() + " braced panels, " + d.design().openings().size()
@@ -114,7 +117,7 @@ final class FileCommands {
       Inspection i = s.inspections().inspection(id);
       PlaneRecord p = InspectionCommands.plane(s, i, need(plane, "--plane", "--map"));
       List<Observation> stored = s.files().importAsBuiltMap(id, p.id(), map.toString(),
-          readText(map), null);
+          readText(map, PanelMapParser.LIMITS), null);
       for (Observation o : stored) {
         out.println(Show.observation(o, p.name()));
       }

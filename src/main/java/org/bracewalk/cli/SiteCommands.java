@@ -8,6 +8,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.bracewalk.app.AppServices;
+import org.bracewalk.app.panelmap.PanelMapParser;
+import org.bracewalk.app.sitefile.SiteFileReader;
 import org.bracewalk.core.model.DisplayUnits;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
@@ -221,7 +223,7 @@ final class SiteCommands {
               + " --lifts, --bays, --widths, --heights and --support");
         }
         PlaneRecord p = s.files().createPlaneFromMap(structure, name, design.toString(),
-            readText(design), author, LocalDate.now(context.clock()), "");
+            readText(design, PanelMapParser.LIMITS), author, LocalDate.now(context.clock()), "");
         out.println(Show.plane(p) + " created from " + design);
         return 0;
       }
@@ -231,6 +233,13 @@ final class SiteCommands {
       Support sup = Support.fromLabel(support == null ? "pinned-base" : support);
       if (sup == null) {
         throw new IllegalArgumentException("--support: use pinned-base or free, not '" + support + "'");
+      }
+      // bounded before the grid allocates a width and a height per bay and lift
+      long panels = (long) lifts * bays;
+      if (panels > SiteFileReader.MAX_PANELS_PER_PLANE) {
+        throw new IllegalArgumentException("--lifts " + lifts + " x --bays " + bays + " is "
+            + panels + " panels, more than the limit of " + SiteFileReader.MAX_PANELS_PER_PLANE
+            + " panels a plane may have: check the numbers");
       }
       PlaneGrid grid = new PlaneGrid(lifts, bays, widths, heights, sup);
       PlaneRecord p = s.sites().createPlane(new PlaneRecord(0, structure, name, grid), author,

@@ -1,5 +1,7 @@
 package org.bracewalk.app.sitefile;
 
+import org.bracewalk.app.text.TextInput;
+import org.bracewalk.app.text.TextInputException;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.databind.DeserializationFeature;
@@ -64,6 +66,14 @@ public final class SiteFileReader {
   /** Planes larger than this many panels are refused (a typo, or a file from elsewhere). */
   public static final int MAX_PANELS_PER_PLANE = 100_000;
 
+  /**
+   * The bounds of a site file: 512 MiB (photos travel in it, base64); no line limit, as a photo
+   * is one line. Line ends and separators follow {@link TextInput}, as in every text file: a raw
+   * U+2028 is valid JSON inside a string, but is refused here like everywhere else.
+   */
+  public static final TextInput.Limits LIMITS =
+      new TextInput.Limits("site file", 512L * 1024 * 1024, 0);
+
   private static final ObjectMapper MAPPER =
       JsonMapper.builder()
           .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
@@ -97,6 +107,11 @@ public final class SiteFileReader {
   }
 
   private SiteFile read() {
+    try {
+      TextInput.checkCharacters(fileName, text, LIMITS);
+    } catch (TextInputException e) {
+      throw FileFormatException.of(e);
+    }
     JsonNode root;
     try {
       root = MAPPER.readTree(text);
