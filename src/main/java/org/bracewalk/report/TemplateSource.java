@@ -16,7 +16,7 @@ import org.bracewalk.core.port.RenderingException;
  */
 public final class TemplateSource {
   /** The bounds of a template file: 4 MiB (the packed English one is about 13 KB), 100,000 characters a line. */
-  static final TextInput.Limits LIMITS = new TextInput.Limits("template file", 4L * 1024 * 1024, 100_000);
+  static final TextInput.Limits LIMITS = new TextInput.Limits("a template file", 4L * 1024 * 1024, 100_000);
 
   private final Path folder;
   private final ClassLoader loader;

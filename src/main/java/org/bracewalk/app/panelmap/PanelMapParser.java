@@ -33,7 +33,7 @@ public final class PanelMapParser {
    * characters a line (over 30,000 bays of the widest token).
    */
   public static final TextInput.Limits LIMITS =
-      new TextInput.Limits("panel map", 64L * 1024 * 1024, 100_000);
+      new TextInput.Limits("a panel map", 64L * 1024 * 1024, 100_000);
 
   private static final Pattern NUMBER = Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?");
   private static final Pattern WORD = Pattern.compile("[A-Za-z][A-Za-z_-]+");

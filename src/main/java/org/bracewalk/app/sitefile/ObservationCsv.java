@@ -47,7 +47,7 @@ public final class ObservationCsv {
    * 100,000 characters a line.
    */
   public static final TextInput.Limits LIMITS =
-      new TextInput.Limits("observation CSV", 64L * 1024 * 1024, 100_000);
+      new TextInput.Limits("an observation CSV", 64L * 1024 * 1024, 100_000);
 
   private ObservationCsv() {}
 

@@ -72,7 +72,7 @@ public final class SiteFileReader {
    * U+2028 is valid JSON inside a string, but is refused here like everywhere else.
    */
   public static final TextInput.Limits LIMITS =
-      new TextInput.Limits("site file", 512L * 1024 * 1024, 0);
+      new TextInput.Limits("a site file", 512L * 1024 * 1024, 0);
 
   private static final ObjectMapper MAPPER =
       JsonMapper.builder()

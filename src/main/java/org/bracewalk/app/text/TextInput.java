@@ -43,7 +43,8 @@ public final class TextInput {
   /**
    * The bounds of one text format.
    *
-   * @param what the format in words, for messages ("panel map", "site file")
+   * @param what the format in words with its article, for messages ("a panel map", "an
+   *     observation CSV")
    * @param maxBytes the largest file accepted, in bytes (at most 1 GiB)
    * @param maxLineChars the longest line accepted, in characters; 0 for no limit (JSON keeps
    *     photos on one line: its bound is the file's)
@@ -91,14 +92,14 @@ public final class TextInput {
   public static byte[] readBytes(Path file, String name, Limits limits) {
     try {
       if (Files.isDirectory(file)) {
-        throw TextInputException.wholeFile(name, "is a folder, not a " + limits.what()
+        throw TextInputException.wholeFile(name, "is a folder, not " + limits.what()
             + ": give the path of a file");
       }
       if (Files.isRegularFile(file)) {
         long size = Files.size(file);
         if (size > limits.maxBytes()) {
           throw TextInputException.wholeFile(name, "is " + size + " bytes, more than the "
-              + size(limits.maxBytes()) + " a " + limits.what() + " may have: check that it is"
+              + size(limits.maxBytes()) + " " + limits.what() + " may have: check that it is"
               + " the right file");
         }
       }
@@ -138,7 +139,7 @@ public final class TextInput {
       }
       if (total > max) {
         throw TextInputException.wholeFile(name, (notRegular ? "is not a regular file and gives"
-            : "has grown to") + " more than the " + size(max) + " a " + limits.what() + " may have:"
+            : "has grown to") + " more than the " + size(max) + " " + limits.what() + " may have:"
             + " give a file of at most " + size(max));
       }
       if (chunk.length < want) {
