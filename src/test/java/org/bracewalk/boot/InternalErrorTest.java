@@ -115,4 +115,55 @@ class InternalErrorTest {
         .isEqualTo(System.getProperty("os.name").toLowerCase().startsWith("linux")
             ? data.resolve("bracewalk").resolve("logs") : context.cliContext(Map.of()).logFolder());
   }
+
+  @Test
+  void aRealOutOfMemoryInTheProgramExitsThreeWithOneLine() throws Exception {
+    // a panel map within the 64 MiB file limit, in a JVM with too little memory to parse it
+    Path map = dir.resolve("large.txt");
+    String row = "/ ".repeat(5000).strip() + "\n";
+    try (var w = Files.newBufferedWriter(map)) {
+      for (int i = 0; i < 3000; i++) {
+        w.write(row);
+      }
+    }
+    Path logs = dir.resolve("child-logs");
+    String classpath = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
+    Path java = Path.of(System.getProperty("java.home"), "bin", "java");
+    ProcessBuilder pb = new ProcessBuilder(java.toString(), "-Xmx64m", "-cp", classpath,
+        Main.class.getName(), "check", map.toString(), "--format", "json")
+        .redirectOutput(dir.resolve("out.txt").toFile())
+        .redirectError(dir.resolve("err.txt").toFile());
+    pb.environment().put("BRACEWALK_LOG_DIR", logs.toString());
+    Process child = pb.start();
+    assertThat(child.waitFor(120, java.util.concurrent.TimeUnit.SECONDS)).isTrue();
+    String err = Files.readString(dir.resolve("err.txt"));
+    assertThat(child.exitValue()).as(err).isEqualTo(3);
+    assertThat(err.lines()).containsExactly("bracewalk: internal error"
+        + " (java.lang.OutOfMemoryError): Java heap space; details in "
+        + logs.resolve(ErrorLog.FILE_NAME));
+    assertThat(Files.readString(dir.resolve("out.txt"))).isEmpty();
+    assertThat(Files.readString(logs.resolve(ErrorLog.FILE_NAME)))
+        .contains("bracewalk check " + map).contains("java.lang.OutOfMemoryError");
+  }
+
+  @Test
+  void theDesktopAppLogsAnUncaughtErrorAndSaysSoInOneLine() throws Exception {
+    Thread.UncaughtExceptionHandler before = Thread.getDefaultUncaughtExceptionHandler();
+    ErrorLog log = new ErrorLog(dir.resolve("logs"));
+    StringWriter err = new StringWriter();
+    try {
+      GuiLauncher.logInternalErrors(log, new PrintWriter(err));
+      Thread t = new Thread(() -> {
+        throw new IllegalStateException("a screen failed");
+      }, "bracewalk-test-thread");
+      t.start();
+      t.join();
+    } finally {
+      Thread.setDefaultUncaughtExceptionHandler(before);
+    }
+    assertThat(err.toString().lines()).containsExactly("bracewalk: internal error"
+        + " (java.lang.IllegalStateException): a screen failed; details in " + log.file());
+    assertThat(Files.readString(log.file())).contains("desktop app, thread bracewalk-test-thread")
+        .contains("at org.bracewalk.boot.InternalErrorTest.");
+  }
 }
