@@ -128,8 +128,8 @@ class InternalErrorTest {
     }
     Path logs = dir.resolve("child-logs");
     String classpath = System.getProperty("surefire.test.class.path", System.getProperty("java.class.path"));
-    Path java = Path.of(System.getProperty("java.home"), "bin", "java");
-    ProcessBuilder pb = new ProcessBuilder(java.toString(), "-Xmx64m", "-cp", classpath,
+    Path javaBin = Path.of(System.getProperty("java.home"), "bin", "java");
+    ProcessBuilder pb = new ProcessBuilder(javaBin.toString(), "-Xmx64m", "-cp", classpath,
         Main.class.getName(), "check", map.toString(), "--format", "json")
         .redirectOutput(dir.resolve("out.txt").toFile())
         .redirectError(dir.resolve("err.txt").toFile());
