@@ -231,8 +231,8 @@ public final class ObservationCsv {
 
   /**
    * The records of the text. Line ends are those of every text file ({@link TextInput}): LF, CRLF
-   * or a bare CR, inside a quoted value too (where they are kept as written); other separators
-   * and controls are refused at their line and column first.
+   * or a bare CR, inside a quoted value too (where each is kept as one LF); other separators and
+   * controls are refused at their line and column first.
    */
   private static List<Record> split(String file, String text) {
     try {
@@ -259,10 +259,15 @@ public final class ObservationCsv {
             continue;
           }
           quoted = false;
-        } else {
-          if (ch == '\n' && !(i > 0 && text.charAt(i - 1) == '\r') || ch == '\r') {
-            line++; // LF, CRLF and CR each end one line
+        } else if (ch == '\n' || ch == '\r') {
+          // a line break inside a value: LF, CRLF and CR alike, kept as one LF, so the same file
+          // saved with other line ends gives the same values
+          if (ch == '\r' && i + 1 < n && text.charAt(i + 1) == '\n') {
+            i++;
           }
+          line++;
+          cell.append('\n');
+        } else {
           cell.append(ch);
         }
         i++;
