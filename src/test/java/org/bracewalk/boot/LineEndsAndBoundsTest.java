@@ -231,4 +231,21 @@ class LineEndsAndBoundsTest {
     assertThat(r.code()).isEqualTo(2);
     assertThat(r.err()).contains("--lifts 2000000000 x --bays 1").contains("limit of 100000 panels");
   }
+
+  @Test
+  void aSiteFileHoldingAPhotoOfTheLargestSizeAllowedImports() throws Exception {
+    // base64 of a 20 MiB photo is about 28 million characters: more than the 20 million Jackson
+    // accepts in one string by default (StreamReadConstraints, jackson-core docs)
+    byte[] photo = new byte[org.bracewalk.core.model.Photo.MAX_BYTES];
+    byte[] png = {(byte) 0x89, 'P', 'N', 'G', '\r', '\n', 0x1A, '\n'};
+    System.arraycopy(png, 0, photo, 0, png.length);
+    String text = DemoService.siteFileText();
+    int start = text.indexOf("\"data\": \"") + 9;
+    int end = text.indexOf('"', start);
+    Path big = dir.resolve("big-photo.json");
+    Files.writeString(big, text.substring(0, start)
+        + java.util.Base64.getEncoder().encodeToString(photo) + text.substring(end));
+    Run r = run("import", "--db", db(), "--site", big.toString());
+    assertThat(r.code()).as(r.err()).isZero();
+  }
 }
