@@ -14,6 +14,8 @@ import org.bracewalk.app.report.ReportBenchmark;
 import org.bracewalk.app.report.ReportService;
 import org.bracewalk.app.report.ReportServiceFactory;
 import org.bracewalk.app.report.Verification;
+import org.bracewalk.app.text.TextInput;
+import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.PlaneVerdict;
@@ -169,6 +171,10 @@ public final class ReportCommands {
           "Exit 0 when they match, 1 when any record differs (each difference is named), 2 when"
               + " the file is not a Bracewalk document."})
   static final class VerifyReport extends ReportCommand {
+    /** A document to verify: at most 1 GiB (the largest array; reports with photos are megabytes). */
+    static final TextInput.Limits DOCUMENT_LIMITS =
+        new TextInput.Limits("a Bracewalk document", TextInput.Limits.MOST_BYTES, 0);
+
     @Parameters(paramLabel = "FILE.pdf", description = "The document to check.")
     Path file;
 
@@ -180,9 +186,10 @@ public final class ReportCommands {
     int run(AppServices s, ReportService reports, PrintWriter out, PrintWriter err) {
       byte[] bytes;
       try {
-        bytes = Files.readAllBytes(file);
-      } catch (IOException e) {
-        throw new UserInputException("cannot read " + file + ": " + e.getMessage());
+        // bounded before reading, as every input is (a device such as /dev/zero included)
+        bytes = TextInput.readBytes(file, file.toString(), DOCUMENT_LIMITS);
+      } catch (TextInputException e) {
+        throw new UserInputException(e.getMessage(), e);
       }
       Verification v = reports.verify(bytes);
       switch (v.outcome()) {

@@ -248,4 +248,17 @@ class LineEndsAndBoundsTest {
     Run r = run("import", "--db", db(), "--site", big.toString());
     assertThat(r.code()).as(r.err()).isZero();
   }
+
+  @Test
+  void verifyReportOfAThreeGigabyteFileIsRefusedFromItsSize() throws Exception {
+    assertThat(run("demo", "--db", db()).code()).isZero();
+    Path big = dir.resolve("big.pdf");
+    try (java.io.RandomAccessFile f = new java.io.RandomAccessFile(big.toFile(), "rw")) {
+      f.setLength(3L << 30); // sparse: no memory and almost no disk
+    }
+    Run r = run("verify-report", "--db", db(), big.toString());
+    assertThat(r.code()).isEqualTo(2);
+    assertThat(r.err()).contains("error: " + big + ": is 3221225472 bytes, more than the 1 GiB"
+        + " a Bracewalk document may have");
+  }
 }
