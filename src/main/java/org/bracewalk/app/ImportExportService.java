@@ -92,7 +92,7 @@ public final class ImportExportService {
   }
 
   private ImportedSite load(SiteFile file) {
-    Site site = store.sites().add(TextInput.site(file.site()));
+    Site site = store.sites().add(StoredText.site(file.site()));
     List<Structure> structures = new ArrayList<>();
     List<PlaneRecord> allPlanes = new ArrayList<>();
     List<Inspection> inspections = new ArrayList<>();
@@ -100,23 +100,23 @@ public final class ImportExportService {
     Map<Long, Integer> verifications = new LinkedHashMap<>();
     int observations = 0;
     for (StructureData s : file.structures()) {
-      Structure structure = store.structures().add(TextInput.structure(new Structure(0,
+      Structure structure = store.structures().add(StoredText.structure(new Structure(0,
           site.id(), s.name(), s.kind(), s.description(), s.designReference(),
           s.inspectionIntervalDays())));
       structures.add(structure);
       Map<String, PlaneRecord> planes = new HashMap<>();
       for (PlaneData p : s.planes()) {
         PlaneRecord plane = store.planes().add(
-            TextInput.plane(new PlaneRecord(0, structure.id(), p.name(), p.grid())));
+            StoredText.plane(new PlaneRecord(0, structure.id(), p.name(), p.grid())));
         planes.put(plane.name(), plane);
         allPlanes.add(plane);
         for (DesignData d : p.designs()) {
-          store.designs().add(TextInput.revision(new DesignRevision(0, plane.id(), d.number(),
+          store.designs().add(StoredText.revision(new DesignRevision(0, plane.id(), d.number(),
               d.author(), d.date(), d.approvalNote(), d.recordedAt(), d.design())));
         }
       }
       for (InspectionData i : s.inspections()) {
-        Inspection inspection = store.inspections().add(TextInput.inspection(new Inspection(0,
+        Inspection inspection = store.inspections().add(StoredText.inspection(new Inspection(0,
             structure.id(), i.startedAt(), null, i.inspectorName(), i.inspectorPosition(),
             i.competentPerson(), i.shift(), i.storageSafetyPerson(), i.reason(),
             InspectionStatus.OPEN, i.carriedOutForName(), i.carriedOutForAddress())));
@@ -124,13 +124,13 @@ public final class ImportExportService {
         List<Long> ids = new ArrayList<>();
         for (ObservationData o : i.observations()) {
           Long supersedes = o.supersedes() == null ? null : ids.get(o.supersedes() - 1);
-          Observation stored = store.observations().add(TextInput.observation(new Observation(0,
+          Observation stored = store.observations().add(StoredText.observation(new Observation(0,
               inspection.id(), planes.get(o.plane()).id(), o.panel(), o.state(), o.member(),
               o.bowMm(), o.gaugeLengthMm(), o.defect(), o.note(), o.recordedAt(), o.recordedBy(),
               supersedes, o.correctionReason())));
           ids.add(stored.id());
           for (PhotoData ph : o.photos()) {
-            store.observations().addPhoto(TextInput.photo(new Photo(0, stored.id(), ph.fileName(),
+            store.observations().addPhoto(StoredText.photo(new Photo(0, stored.id(), ph.fileName(),
                 ph.mediaType(), ph.data(), ph.attachedAt())));
           }
         }
@@ -140,10 +140,10 @@ public final class ImportExportService {
         }
         inspections.add(inspection);
         for (RepairOrderData r : i.repairOrders()) {
-          RepairOrder order = store.repairs().addOrder(TextInput.order(
+          RepairOrder order = store.repairs().addOrder(StoredText.order(
               new RepairOrder(0, inspection.id(), r.createdAt(), r.createdBy(), r.note())));
           for (RepairActionData a : r.actions()) {
-            RepairAction action = store.repairs().addAction(TextInput.action(new RepairAction(0,
+            RepairAction action = store.repairs().addAction(StoredText.action(new RepairAction(0,
                 order.id(), planes.get(a.plane()).id(), a.panel(), a.action(), a.brace(),
                 a.description(), a.dueDate(), a.assignee(), a.doneAt(), a.doneBy(), null)));
             if (a.verifiedByInspection() != null) {
@@ -379,7 +379,7 @@ public final class ImportExportService {
       Observation o;
       try {
         o = store.inTransaction(() -> {
-          Observation added = store.observations().add(TextInput.observation(new Observation(0,
+          Observation added = store.observations().add(StoredText.observation(new Observation(0,
               inspectionId, planeIds.get(r.plane()), r.panel(), r.state(), r.member(), r.bowMm(),
               r.gaugeLengthMm(), r.defect(), r.note(), at, by, supersedes, r.correctionReason())));
           store.observations().addSource(inspectionId, source, r.line(), added.id());

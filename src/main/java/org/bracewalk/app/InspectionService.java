@@ -68,7 +68,7 @@ public final class InspectionService {
     }
     return store.inspections()
         .add(
-            TextInput.inspection(new Inspection(
+            StoredText.inspection(new Inspection(
                 0, structureId, now, null, details.inspectorName(),
                 details.inspectorPosition(), details.competentPerson(), details.shift(),
                 details.storageSafetyPerson(), details.reason(), InspectionStatus.OPEN, forName,
@@ -186,7 +186,7 @@ public final class InspectionService {
       Observation saved = store.observations().add(observation);
       List<Photo> stored = new ArrayList<>();
       for (PhotoFiles.PhotoFile f : files) {
-        stored.add(store.observations().addPhoto(TextInput.photo(
+        stored.add(store.observations().addPhoto(StoredText.photo(
             new Photo(0, saved.id(), f.fileName(), f.mediaType(), f.data(), clock.instant()))));
       }
       return new RecordedObservation(saved, stored);
@@ -322,7 +322,7 @@ public final class InspectionService {
               + " bays)");
     }
     try {
-      return TextInput.observation(new Observation(
+      return StoredText.observation(new Observation(
           0, inspection.id(), plane.id(), n.panel(), n.state(), n.memberFound(), n.bowMm(),
           n.gaugeLengthMm(), n.defect(), n.note(), clock.instant(), n.recordedBy(), supersedes,
           reason));

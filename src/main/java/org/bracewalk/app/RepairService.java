@@ -31,7 +31,7 @@ public final class RepairService {
   public RepairOrder raise(long inspectionId, String createdBy, String note) {
     inspection(inspectionId);
     return store.repairs().addOrder(
-        TextInput.order(new RepairOrder(0, inspectionId, clock.instant(), createdBy, note)));
+        StoredText.order(new RepairOrder(0, inspectionId, clock.instant(), createdBy, note)));
   }
 
   /**
@@ -51,14 +51,14 @@ public final class RepairService {
     if (panel != null && !plane.grid().contains(panel)) {
       throw new UserInputException("panel " + panel + " lies outside plane '" + plane.name() + "'");
     }
-    return store.repairs().addAction(TextInput.action(new RepairAction(0, orderId, planeId,
+    return store.repairs().addAction(StoredText.action(new RepairAction(0, orderId, planeId,
         panel, action, brace, description, dueDate, assignee, null, "", null)));
   }
 
   /** Records that an action was done now, by {@code doneBy}. */
   public RepairAction markDone(long actionId, String doneBy) {
     action(actionId);
-    return store.repairs().markDone(actionId, clock.instant(), TextInput.clean(doneBy, "done by"));
+    return store.repairs().markDone(actionId, clock.instant(), StoredText.clean(doneBy, "done by"));
   }
 
   /**

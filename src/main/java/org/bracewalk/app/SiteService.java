@@ -31,7 +31,7 @@ public final class SiteService {
   /** Stores a new site (id 0) and returns it with its id. */
   public Site createSite(Site site) {
     requireNew(site.id(), "site");
-    return store.sites().add(TextInput.site(site));
+    return store.sites().add(StoredText.site(site));
   }
 
   public List<Site> sites() {
@@ -47,7 +47,7 @@ public final class SiteService {
   public Structure createStructure(Structure structure) {
     requireNew(structure.id(), "structure");
     site(structure.siteId());
-    return store.structures().add(TextInput.structure(structure));
+    return store.structures().add(StoredText.structure(structure));
   }
 
   public List<Structure> structures(long siteId) {
@@ -99,7 +99,7 @@ public final class SiteService {
     requireNew(plane.id(), "plane");
     requireWithinLimits(plane.name(), plane.grid().lifts(), plane.grid().bays(), "lifts", "bays");
     structure(plane.structureId());
-    PlaneRecord rounded = TextInput.plane(
+    PlaneRecord rounded = StoredText.plane(
         new PlaneRecord(0, plane.structureId(), plane.name(), Millimetres.round(plane.grid())));
     PlaneDesign roundedDesign = Millimetres.round(design);
     requireSameGrid(rounded, roundedDesign);
@@ -108,7 +108,7 @@ public final class SiteService {
           PlaneRecord stored = store.planes().add(rounded);
           store.designs()
               .add(
-                  TextInput.revision(new DesignRevision(
+                  StoredText.revision(new DesignRevision(
                       0, stored.id(), 1, author, date, approvalNote, clock.instant(),
                       roundedDesign)));
           return stored;
@@ -125,7 +125,7 @@ public final class SiteService {
         () -> {
           int next = store.designs().latest(planeId).map(r -> r.number() + 1).orElse(1);
           return store.designs()
-              .add(TextInput.revision(new DesignRevision(
+              .add(StoredText.revision(new DesignRevision(
                       0, planeId, next, author, date, approvalNote, clock.instant(), rounded)));
         });
   }
@@ -187,8 +187,8 @@ public final class SiteService {
    */
   public PlaneRetirement retirePlane(long planeId, String retiredBy, String reasonGiven) {
     PlaneRecord plane = plane(planeId);
-    String reason = reasonGiven == null ? null : TextInput.clean(reasonGiven, "reason");
-    String by = retiredBy == null ? "" : TextInput.clean(retiredBy, "retired by");
+    String reason = reasonGiven == null ? null : StoredText.clean(reasonGiven, "reason");
+    String by = retiredBy == null ? "" : StoredText.clean(retiredBy, "retired by");
     if (reason == null || reason.isBlank()) {
       throw new UserInputException("say why plane '" + plane.name() + "' (id " + planeId
           + ") is retired: the reason is kept with the record");

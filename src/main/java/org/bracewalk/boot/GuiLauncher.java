@@ -54,6 +54,30 @@ final class GuiLauncher {
     return Optional.empty();
   }
 
+  /**
+   * Any error no screen handled, on any thread (the FX thread included: its event handlers' errors
+   * end here): the stack trace goes to the error log, one line to standard error and to an error
+   * window.
+   */
+  static void logInternalErrors(ErrorLog log, PrintWriter err) {
+    Thread.setDefaultUncaughtExceptionHandler((thread, e) -> {
+      String line = log.record(e, "desktop app, thread " + thread.getName(), err);
+      err.println(line);
+      err.flush();
+      try {
+        Platform.runLater(() -> {
+          javafx.scene.control.Alert alert =
+              new javafx.scene.control.Alert(javafx.scene.control.Alert.AlertType.ERROR, line);
+          alert.setTitle("Bracewalk: internal error");
+          alert.setHeaderText("Something failed that is not a problem with your input.");
+          alert.show();
+        });
+      } catch (RuntimeException notRunning) {
+        // the toolkit is not running: the line on standard error and the log must do
+      }
+    });
+  }
+
   /** Opens the app on the chosen database and returns the exit status once its window closes. */
   static int run(Optional<Path> dbOption, Map<String, String> env, PrintWriter err) {
     return run(dbOption, env, err, null);
@@ -70,6 +94,7 @@ final class GuiLauncher {
     CliContext cli = context.cliContext(env);
     Path db = cli.database(dbOption.orElse(null));
     boolean timing = "1".equals(env.get(TIMING_VARIABLE));
+    logInternalErrors(new ErrorLog(cli.logFolder()), err);
     // open the database while the toolkit starts: the two together decide the start-up time
     // the default data folder is made when missing; any other folder must exist (CliContext)
     CompletableFuture<AppServices> opening = CompletableFuture.supplyAsync(() -> {

@@ -4,6 +4,10 @@ import java.io.PrintWriter;
 import java.lang.management.ManagementFactory;
 import java.util.Map;
 import org.bracewalk.app.AnalysisOutput;
+import org.bracewalk.app.UserInputException;
+import org.bracewalk.app.panelmap.PanelMapException;
+import org.bracewalk.app.sitefile.FileFormatException;
+import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.app.bench.BenchFormat;
 import org.bracewalk.app.bench.BenchPlan;
 import org.bracewalk.app.bench.BenchService;
@@ -32,10 +36,7 @@ public final class Launcher {
 
   /** Runs one command; returns the exit code. Only {@link Main} touches the process streams. */
   public static int run(String[] args, PrintWriter out, PrintWriter err, Map<String, String> env) {
-    CommandLine cli = commandLine(env);
-    cli.setOut(out);
-    cli.setErr(err);
-    return cli.execute(args);
+    return run(args, out, err, env, AppContext.standard());
   }
 
   static CommandLine commandLine(Map<String, String> env) {
@@ -67,24 +68,68 @@ public final class Launcher {
     ReportCommands.addTo(cli, context.cliContext(env), context.reportFactory(env));
     cli.addSubcommand("snapshot", new SnapshotCommand(context, env));
     // Set after the sub-commands are added: picocli copies these settings down the hierarchy.
+    handleErrors(cli, new ErrorLog(context.cliContext(env).logFolder()));
+    return cli;
+  }
+
+  /**
+   * What a command's failure exits with: a located user error that escaped its command (a bad
+   * file) prints {@code error: ...} and exits 2; anything else is an internal error: exit 3, one
+   * line on standard error, the stack trace in the error log.
+   */
+  static void handleErrors(CommandLine cli, ErrorLog log) {
     cli.setExitCodeExceptionMapper(e -> e instanceof ParameterException ? BAD_INPUT : INTERNAL_ERROR);
     cli.setExecutionExceptionHandler(
-        (e, command, parseResult) -> {
-          PrintWriter err = command.getErr();
-          err.println("bracewalk: internal error (not a problem with your input): " + e);
-          e.printStackTrace(err);
-          err.flush();
-          return INTERNAL_ERROR;
-        });
-    return cli;
+        (e, command, parseResult) -> failed(e, command.getErr(), log, "bracewalk "
+            + String.join(" ", parseResult.originalArgs())));
+  }
+
+  /** Exits 2 for an input error that escaped its command, else records an internal error: 3. */
+  private static int failed(Throwable e, PrintWriter err, ErrorLog log, String context) {
+    if (isUserError(e)) {
+      err.println("error: " + e.getMessage());
+      err.flush();
+      return BAD_INPUT;
+    }
+    err.println(log.record(e, context, err));
+    err.flush();
+    return INTERNAL_ERROR;
+  }
+
+  /** The located errors about the user's input, which commands normally catch themselves. */
+  private static boolean isUserError(Throwable e) {
+    return e instanceof UserInputException || e instanceof FileFormatException
+        || e instanceof PanelMapException || e instanceof TextInputException;
   }
 
   /** Runs one command over a given context; returns the exit code. */
   static int run(
       String[] args, PrintWriter out, PrintWriter err, Map<String, String> env, AppContext context) {
-    CommandLine cli = commandLine(env, context);
-    cli.setOut(out);
-    cli.setErr(err);
-    return cli.execute(args);
+    ErrorLog log = new ErrorLog(context.cliContext(env).logFolder());
+    try {
+      CommandLine cli = commandLine(env, context);
+      cli.setOut(out);
+      cli.setErr(err);
+      return execute(cli, args, err, log);
+    } catch (Throwable e) { // building the command line failed: still one line and exit 3
+      out.flush();
+      return failed(e, err, log, "bracewalk " + String.join(" ", args));
+    }
+  }
+
+  /**
+   * Executes a command line whose errors {@link #handleErrors} set. picocli hands only {@link
+   * Exception}s to the handler; an {@link Error} (memory exhausted, stack overflow) leaves {@code
+   * execute}, and is caught here: it too is an internal error, exit 3 and one line, never a Java
+   * stack trace on the console and the JVM's exit 1 (which {@code check} uses for "does not hold
+   * its shape").
+   */
+  static int execute(CommandLine cli, String[] args, PrintWriter err, ErrorLog log) {
+    try {
+      return cli.execute(args);
+    } catch (Throwable e) {
+      cli.getOut().flush();
+      return failed(e, err, log, "bracewalk " + String.join(" ", args));
+    }
   }
 }

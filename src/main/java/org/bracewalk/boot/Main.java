@@ -17,8 +17,14 @@ public final class Main {
     int code;
     if (app.isPresent()) {
       // the app opens faster in a second process that maps its classes from an archive
-      var relaunched = QuickStart.runApp(args, System.getenv(), err);
-      code = relaunched.isPresent() ? relaunched.getAsInt() : GuiLauncher.run(app.get(), System.getenv(), err);
+      try {
+        var relaunched = QuickStart.runApp(args, System.getenv(), err);
+        code = relaunched.isPresent() ? relaunched.getAsInt() : GuiLauncher.run(app.get(), System.getenv(), err);
+      } catch (Throwable e) { // as on the command line: one line, the details in the log, exit 3
+        ErrorLog log = new ErrorLog(AppContext.standard().cliContext(System.getenv()).logFolder());
+        err.println(log.record(e, "desktop app start", err));
+        code = Launcher.INTERNAL_ERROR;
+      }
     } else {
       code = Launcher.run(args, out, err, System.getenv());
     }

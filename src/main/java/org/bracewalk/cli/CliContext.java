@@ -80,6 +80,21 @@ public record CliContext(
         + " first. Only the default data folder " + defaultFolder() + " is made when missing");
   }
 
+  /** The variable that names the folder of the error log (default: {@code logs} in the data folder). */
+  public static final String LOG_VARIABLE = "BRACEWALK_LOG_DIR";
+
+  /**
+   * The folder of the error log, where an internal error's details go: {@code $BRACEWALK_LOG_DIR}
+   * when set, else {@code logs} in the per-user data folder of {@link #database}.
+   */
+  public Path logFolder() {
+    String fromEnv = env.get(LOG_VARIABLE);
+    if (fromEnv != null && !fromEnv.isBlank()) {
+      return Path.of(fromEnv).toAbsolutePath();
+    }
+    return defaultFolder().resolve("logs").toAbsolutePath();
+  }
+
   private Path defaultFolder() {
     String os = osName.toLowerCase(java.util.Locale.ROOT);
     if (os.startsWith("windows")) {

@@ -9,6 +9,10 @@ import java.util.stream.Stream;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.CsvRecording;
 import org.bracewalk.app.ImportedSite;
+import org.bracewalk.app.UserInputException;
+import org.bracewalk.app.panelmap.PanelMapParser;
+import org.bracewalk.app.sitefile.ObservationCsv;
+import org.bracewalk.app.sitefile.SiteFileReader;
 import org.bracewalk.core.model.DesignRevision;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.Observation;
@@ -86,14 +90,14 @@ final class FileCommands {
             "give exactly one of --site, --csv, --design or --map (see 'bracewalk import --help')");
       }
       if (site != null) {
-        ImportedSite imported = s.files().importSite(site.toString(), readText(site));
+        ImportedSite imported = s.files().importSite(site.toString(), readText(site, SiteFileReader.LIMITS));
         out.println("imported " + site);
         summary(imported, out);
         return 0;
       }
       if (csv != null) {
         long id = need(inspection, "--inspection", "--csv");
-        CsvRecording stored = s.files().importObservationsCsv(id, csv.toString(), readText(csv));
+        CsvRecording stored = s.files().importObservationsCsv(id, csv.toString(), readText(csv, ObservationCsv.LIMITS));
         out.println("imported " + stored.recorded().size() + " observations into inspection " + id
             + (stored.alreadyRecorded() == 0 ? ""
                 : " (" + stored.alreadyRecorded() + " rows already recorded by an earlier run)"));
@@ -101,7 +105,7 @@ final class FileCommands {
       }
       if (design != null) {
         long planeId = planeId(need(plane, "--plane", "--design"));
-        DesignRevision d = s.files().importDesignMap(planeId, design.toString(), readText(design),
+        DesignRevision d = s.files().importDesignMap(planeId, design.toString(), readText(design, PanelMapParser.LIMITS),
             author, date == null ? LocalDate.now(context.clock()) : date, note);
         out.println("design revision " + d.number() + " of plane " + planeId + " stored ("
             + d.design().braces().size() + " braced panels, " + d.design().openings().size()
@@ -112,7 +116,7 @@ final class FileCommands {
       Inspection i = s.inspections().inspection(id);
       PlaneRecord p = InspectionCommands.plane(s, i, need(plane, "--plane", "--map"));
       List<Observation> stored = s.files().importAsBuiltMap(id, p.id(), map.toString(),
-          readText(map), null);
+          readText(map, PanelMapParser.LIMITS), null);
       for (Observation o : stored) {
         out.println(Show.observation(o, p.name()));
       }

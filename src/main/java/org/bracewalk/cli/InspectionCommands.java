@@ -12,6 +12,7 @@ import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.NewObservation;
 import org.bracewalk.app.RecordedObservation;
 import org.bracewalk.app.UserInputException;
+import org.bracewalk.app.sitefile.ObservationCsv;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
 import org.bracewalk.core.model.Inspection;
@@ -256,7 +257,7 @@ final class InspectionCommands {
       String who = by == null || by.isBlank() ? i.inspectorName() : by;
       Map<Long, String> names = planeNames(s, inspection);
       if (source.from != null) {
-        String text = readText(source.from);
+        String text = readText(source.from, ObservationCsv.LIMITS);
         CsvRecording done = s.files().recordFromCsv(inspection, source.from.toString(), text,
             who, o -> {
               out.println(Show.observation(o, names.get(o.planeId())));

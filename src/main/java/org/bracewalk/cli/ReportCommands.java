@@ -12,6 +12,8 @@ import org.bracewalk.app.report.ReportService;
 import org.bracewalk.app.report.ReportServiceFactory;
 import org.bracewalk.app.report.Verification;
 import org.bracewalk.core.model.IssuedReport;
+import org.bracewalk.app.text.TextInput;
+import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.PlaneVerdict;
@@ -161,6 +163,10 @@ public final class ReportCommands {
               + " edited or never issued, a stamp naming another document, records changed since"
               + " issue), 2 when the file is not a Bracewalk document."})
   static final class VerifyReport extends ReportCommand {
+    /** A document to verify: at most 1 GiB (the largest array; reports with photos are megabytes). */
+    static final TextInput.Limits DOCUMENT_LIMITS =
+        new TextInput.Limits("a Bracewalk document", TextInput.Limits.MOST_BYTES, 0);
+
     @Parameters(paramLabel = "FILE.pdf", description = "The document to check.")
     Path file;
 
@@ -173,9 +179,10 @@ public final class ReportCommands {
       byte[] bytes;
       outputs = outputs.withInput(file);
       try {
-        bytes = Files.readAllBytes(file);
-      } catch (IOException e) {
-        throw new UserInputException("cannot read " + file + ": " + e.getMessage());
+        // bounded before reading, as every input is (a device such as /dev/zero included)
+        bytes = TextInput.readBytes(file, file.toString(), DOCUMENT_LIMITS);
+      } catch (TextInputException e) {
+        throw new UserInputException(e.getMessage(), e);
       }
       Verification v = reports.verify(bytes);
       switch (v.outcome()) {

@@ -10,6 +10,8 @@ import java.util.List;
 import java.util.Map;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.SiteService;
+import org.bracewalk.app.panelmap.PanelMapParser;
+import org.bracewalk.app.sitefile.SiteFileReader;
 import org.bracewalk.core.model.DisplayUnits;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
@@ -227,7 +229,7 @@ final class SiteCommands {
               + " --lifts, --bays, --widths, --heights and --support");
         }
         PlaneRecord p = s.files().createPlaneFromMap(structure, name, design.toString(),
-            readText(design), author, LocalDate.now(context.clock()), "");
+            readText(design, PanelMapParser.LIMITS), author, LocalDate.now(context.clock()), "");
         out.println(Show.plane(p) + " created from " + design);
         return 0;
       }

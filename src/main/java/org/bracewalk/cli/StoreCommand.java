@@ -2,8 +2,6 @@ package org.bracewalk.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -12,6 +10,8 @@ import org.bracewalk.app.AppServices;
 import org.bracewalk.app.OutputFiles;
 import org.bracewalk.app.UserInputException;
 import org.bracewalk.app.sitefile.FileFormatException;
+import org.bracewalk.app.text.TextInput;
+import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.port.StoreException;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -87,19 +87,18 @@ abstract class StoreCommand implements Callable<Integer> {
   abstract int run(AppServices services, PrintWriter out, PrintWriter err);
 
   /**
-   * A text file's content (UTF-8), or a user error naming the file. The file is guarded from the
-   * command's outputs from then on.
+   * A text file's content: bounded by the format's limits before it is read, strict UTF-8 (a
+   * leading byte-order mark dropped), or a user error naming the file (and the line and column of
+   * a byte that is not UTF-8). The format's reader checks line ends and separators. The file is
+   * guarded from the command's outputs from then on.
    */
-  String readText(Path file) {
+  String readText(Path file, TextInput.Limits limits) {
     outputs = outputs.withInput(file);
     try {
-      byte[] bytes = Files.readAllBytes(file);
-      String text = StandardCharsets.UTF_8.newDecoder().decode(ByteBuffer.wrap(bytes)).toString();
+      String text = TextInput.decode(file.toString(), TextInput.readBytes(file, file.toString(), limits));
       return text.startsWith("\uFEFF") ? text.substring(1) : text;
-    } catch (CharacterCodingException e) {
-      throw new UserInputException(file + " is not UTF-8 text; save it as UTF-8 and try again");
-    } catch (IOException e) {
-      throw new UserInputException("cannot read " + file + ": " + e.getMessage());
+    } catch (TextInputException e) {
+      throw new UserInputException(e.getMessage(), e);
     }
   }
 

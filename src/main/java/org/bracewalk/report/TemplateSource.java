@@ -3,9 +3,10 @@ package org.bracewalk.report;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Objects;
+import org.bracewalk.app.text.TextInput;
+import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.port.RenderingException;
 
 /**
@@ -14,6 +15,9 @@ import org.bracewalk.core.port.RenderingException;
  * so an edit takes effect on the next document.
  */
 public final class TemplateSource {
+  /** The bounds of a template file: 4 MiB (the packed English one is about 13 KB), 100,000 characters a line. */
+  static final TextInput.Limits LIMITS = new TextInput.Limits("a template file", 4L * 1024 * 1024, 100_000);
+
   private final Path folder;
   private final ClassLoader loader;
 
@@ -45,12 +49,16 @@ public final class TemplateSource {
           if (in == null) {
             throw missing(fileName);
           }
-          return in.readAllBytes();
+          return TextInput.readBytes(in, describe(fileName), LIMITS);
         }
       }
-      return Files.readAllBytes(folder.resolve(fileName));
-    } catch (NoSuchFileException e) {
-      throw missing(fileName);
+      Path file = folder.resolve(fileName);
+      if (!Files.exists(file)) {
+        throw missing(fileName);
+      }
+      return TextInput.readBytes(file, describe(fileName), LIMITS);
+    } catch (TextInputException e) {
+      throw new RenderingException("template file " + e.getMessage(), e);
     } catch (IOException e) {
       throw new RenderingException(
           "template file " + describe(fileName) + " cannot be read: " + e.getMessage(), e);

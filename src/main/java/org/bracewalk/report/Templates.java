@@ -23,6 +23,8 @@ import java.util.Map;
 import java.util.Properties;
 import java.util.Set;
 import java.util.TreeSet;
+import org.bracewalk.app.text.TextInput;
+import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.port.RenderingException;
 
 /**
@@ -66,17 +68,16 @@ final class Templates {
     byte[] bytes = source.read(fileName);
     String text;
     try {
-      text =
-          StandardCharsets.UTF_8
-              .newDecoder()
-              .onMalformedInput(CodingErrorAction.REPORT)
-              .onUnmappableCharacter(CodingErrorAction.REPORT)
-              .decode(ByteBuffer.wrap(bytes))
-              .toString();
-    } catch (CharacterCodingException e) {
-      throw new RenderingException(
-          "template file " + file + " is not valid UTF-8 (line " + badLine(bytes)
-              + "): save it as UTF-8");
+      // strict UTF-8, and the line ends and separators of every text file: Properties would take
+      // a form feed as a blank, another reader as a line end
+      text = TextInput.decode(file, bytes);
+      TextInput.checkCharacters(file, text, TemplateSource.LIMITS);
+    } catch (TextInputException e) {
+      throw new RenderingException(e.problem().startsWith("this is not UTF-8")
+          ? "template file " + file + " is not valid UTF-8 (line " + e.line() + ") at column "
+              + e.column() + ": save it as UTF-8"
+          : "template file " + file + ", line " + e.line() + ", column " + e.column() + ": "
+              + e.problem());
     }
     Properties props = new Properties();
     try {
@@ -92,25 +93,6 @@ final class Templates {
     }
     check(file, values);
     return new Templates(file, Map.copyOf(values));
-  }
-
-  private static int badLine(byte[] bytes) {
-    var decoder =
-        StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT);
-    int line = 1;
-    int start = 0;
-    for (int i = 0; i <= bytes.length; i++) {
-      if (i == bytes.length || bytes[i] == '\n') {
-        try {
-          decoder.reset().decode(ByteBuffer.wrap(bytes, start, i - start));
-        } catch (CharacterCodingException e) {
-          return line;
-        }
-        line++;
-        start = i + 1;
-      }
-    }
-    return line;
   }
 
   private static void check(String file, Map<String, String> values) {

@@ -1,15 +1,5 @@
 package org.bracewalk.app.check;
 
-import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.CharBuffer;
-import java.nio.charset.CharsetDecoder;
-import java.nio.charset.CoderResult;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AccessDeniedException;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Objects;
@@ -20,6 +10,8 @@ import org.bracewalk.app.panelmap.PanelMap.GridRow;
 import org.bracewalk.app.panelmap.PanelMap.HeaderEntry;
 import org.bracewalk.app.panelmap.PanelMapException;
 import org.bracewalk.app.panelmap.PanelMapParser;
+import org.bracewalk.app.text.TextInput;
+import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.core.model.AsBuiltPlane;
@@ -33,9 +25,6 @@ import org.bracewalk.core.model.Support;
  * PanelMapException} that names the file, line and column; nothing is analysed then.
  */
 public final class CheckService {
-
-  /** Larger files are refused before reading: a 1000 x 1000 map is about 2 MB. */
-  static final long MAX_FILE_BYTES = 64L * 1024 * 1024;
 
   private final PlaneAnalyzer analyzer;
   private final PanelMapParser parser;
@@ -166,55 +155,25 @@ public final class CheckService {
     return n + (n == 1 ? " bay" : " bays");
   }
 
-  /** Reads a file as UTF-8; an unreadable file or a byte that is not UTF-8 is a located error. */
+  /**
+   * Reads a map file through {@link TextInput}: bounded by {@link PanelMapParser#LIMITS} before
+   * reading (a device such as {@code /dev/zero} included), strict UTF-8, located errors.
+   */
   static MapSource read(Path file) {
     String name = file.toString();
-    byte[] bytes;
     try {
-      if (Files.isDirectory(file)) {
-        throw PanelMapException.wholeFile(name, "is a folder, not a panel map: give the path of a map file");
-      }
-      if (Files.exists(file) && Files.size(file) > MAX_FILE_BYTES) {
-        throw PanelMapException.wholeFile(
-            name, "is larger than 64 MiB, far more than any panel map: check that it is the right file");
-      }
-      bytes = Files.readAllBytes(file);
-    } catch (NoSuchFileException e) {
-      throw PanelMapException.wholeFile(name, "no such file: check the path and the file name");
-    } catch (AccessDeniedException e) {
-      throw PanelMapException.wholeFile(name, "cannot be read (permission denied): check its permissions");
-    } catch (IOException e) {
-      throw PanelMapException.wholeFile(name, "cannot be read (" + e.getMessage() + "): check the file");
+      return new MapSource(name, TextInput.read(file, name, PanelMapParser.LIMITS));
+    } catch (TextInputException e) {
+      throw PanelMapException.of(e);
     }
-    return new MapSource(name, decode(name, bytes));
   }
 
   /** Strict UTF-8; on a bad byte, names its line and column (counted in characters). */
   static String decode(String name, byte[] bytes) {
-    CharsetDecoder decoder =
-        StandardCharsets.UTF_8
-            .newDecoder()
-            .onMalformedInput(CodingErrorAction.REPORT)
-            .onUnmappableCharacter(CodingErrorAction.REPORT);
-    ByteBuffer in = ByteBuffer.wrap(bytes);
-    CharBuffer out = CharBuffer.allocate(bytes.length + 1);
-    CoderResult r = decoder.decode(in, out, true);
-    if (r.isError()) {
-      out.flip();
-      String good = out.toString();
-      int line = 1;
-      int lineStart = 0;
-      for (int i = 0; i < good.length(); i++) {
-        if (good.charAt(i) == '\n') {
-          line++;
-          lineStart = i + 1;
-        }
-      }
-      throw new PanelMapException(
-          name, line, good.length() - lineStart + 1, "this is not UTF-8 text: save the map as UTF-8 (plain text)");
+    try {
+      return TextInput.decode(name, bytes);
+    } catch (TextInputException e) {
+      throw PanelMapException.of(e);
     }
-    decoder.flush(out);
-    out.flip();
-    return out.toString();
   }
 }

@@ -32,6 +32,11 @@ public final class PanelMapException extends RuntimeException {
     return new PanelMapException(source, 0, 0, problem);
   }
 
+  /** The same problem, located as a panel map's problems are. */
+  public static PanelMapException of(org.bracewalk.app.text.TextInputException e) {
+    return new PanelMapException(e.source(), e.line(), e.column(), e.problem());
+  }
+
   private static String format(String source, int line, int column, String problem) {
     return line > 0 ? source + ":" + line + ":" + column + ": " + problem : source + ": " + problem;
   }

@@ -9,12 +9,16 @@ import java.util.Map;
 import java.util.regex.Pattern;
 import org.bracewalk.app.panelmap.PanelMap.GridRow;
 import org.bracewalk.app.panelmap.PanelMap.HeaderEntry;
+import org.bracewalk.app.text.TextInput;
+import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.model.Support;
 
 /**
  * Reads the panel-map format of {@code shared/design/check-contract.md}: optional {@code key:
  * value} header lines, then one line per lift, <b>top lift first</b>, one whitespace-separated
  * token per bay, bay 1 on the left; {@code #} starts a comment line, blank lines are skipped.
+ * Lines end in LF, CRLF or a bare CR alike; other separators (VT, FF, NUL, U+2028, U+2029) are
+ * refused where they stand ({@link TextInput}).
  *
  * <p>Every problem is a {@link PanelMapException} naming the file, the 1-based line and column, and
  * what to do. Stateless; safe to share.
@@ -23,6 +27,13 @@ public final class PanelMapParser {
 
   /** The header keys a panel map may use. */
   public static final List<String> HEADER_KEYS = List.of("support", "widths", "heights");
+
+  /**
+   * The bounds of a panel-map file: 64 MiB (a 1000 x 1000 map is about 2 MB) and 100,000
+   * characters a line (over 30,000 bays of the widest token).
+   */
+  public static final TextInput.Limits LIMITS =
+      new TextInput.Limits("a panel map", 64L * 1024 * 1024, 100_000);
 
   private static final Pattern NUMBER = Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?");
   private static final Pattern WORD = Pattern.compile("[A-Za-z][A-Za-z_-]+");
@@ -54,18 +65,20 @@ public final class PanelMapParser {
     }
 
     PanelMap parse(String text) {
-      String[] lines = text.split("\n", -1);
-      int lastLine = lines.length;
+      List<TextInput.Line> lines;
+      try {
+        lines = TextInput.lines(source, text, LIMITS);
+      } catch (TextInputException e) {
+        throw PanelMapException.of(e);
+      }
+      int lastLine = lines.size();
       int lastLength = 0;
-      for (int i = 0; i < lines.length; i++) {
-        String line = lines[i];
-        if (line.endsWith("\r")) {
-          line = line.substring(0, line.length() - 1);
-        }
+      for (int i = 0; i < lines.size(); i++) {
+        String line = lines.get(i).text();
         if (i == 0 && line.startsWith("\uFEFF")) {
           line = " " + line.substring(1); // keep the columns of the rest of the line
         }
-        int number = i + 1;
+        int number = lines.get(i).number();
         String trimmed = line.strip();
         if (!trimmed.isEmpty()) {
           lastLine = number;

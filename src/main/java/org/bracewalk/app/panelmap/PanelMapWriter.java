@@ -48,7 +48,10 @@ public final class PanelMapWriter {
   private static String render(PlaneGrid grid, String comment, Function<PanelRef, PanelToken> tokens) {
     StringBuilder sb = new StringBuilder();
     if (comment != null && !comment.isEmpty()) {
-      for (String line : comment.split("\\R", -1)) {
+      // line breaks of any kind start a comment line; other controls, which the reader refuses,
+      // are written as '?' so the map always reads back
+      for (String raw : comment.split("\\R", -1)) {
+        String line = raw.replaceAll("[\\x00-\\x08\\x0E-\\x1F]", "?");
         sb.append(line.isEmpty() ? "#" : "# " + line).append('\n');
       }
     }

@@ -33,6 +33,12 @@ public class FileFormatException extends RuntimeException {
     this.problem = problem;
   }
 
+  /** A text-level problem (size, encoding, a refused separator), located the same way. */
+  public static FileFormatException of(org.bracewalk.app.text.TextInputException e) {
+    return new FileFormatException(e.source(), e.line(), e.line() > 0 ? "column " + e.column() : "",
+        "", e.problem());
+  }
+
   private static String format(String file, int line, String path, String field, String problem) {
     StringBuilder b = new StringBuilder(file);
     if (line > 0) {

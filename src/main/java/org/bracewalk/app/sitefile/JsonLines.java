@@ -1,6 +1,5 @@
 package org.bracewalk.app.sitefile;
 
-import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonStreamContext;
 import com.fasterxml.jackson.core.JsonToken;
@@ -16,7 +15,7 @@ final class JsonLines {
   private final Map<String, Integer> lines = new HashMap<>();
 
   JsonLines(String text) {
-    try (JsonParser p = new JsonFactory().createParser(text)) {
+    try (JsonParser p = SiteFileReader.FACTORY.createParser(text)) {
       JsonToken t;
       while ((t = p.nextToken()) != null) {
         int line = p.currentTokenLocation().getLineNr();

@@ -11,6 +11,8 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.Function;
+import org.bracewalk.app.text.TextInput;
+import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
 import org.bracewalk.core.model.Observation;
@@ -39,6 +41,13 @@ public final class ObservationCsv {
           "note", "recorded_at", "recorded_by", "supersedes_row", "correction_reason");
 
   private static final Set<String> REQUIRED = Set.of("plane", "lift", "bay", "state");
+
+  /**
+   * The bounds of an observation CSV: 64 MiB (a 5,000-row file is about half a megabyte) and
+   * 100,000 characters a line.
+   */
+  public static final TextInput.Limits LIMITS =
+      new TextInput.Limits("an observation CSV", 64L * 1024 * 1024, 100_000);
 
   private ObservationCsv() {}
 
@@ -220,7 +229,17 @@ public final class ObservationCsv {
   /** One CSV record: its values and the line it starts on. */
   private record Record(int line, List<String> values) {}
 
+  /**
+   * The records of the text. Line ends are those of every text file ({@link TextInput}): LF, CRLF
+   * or a bare CR, inside a quoted value too (where each is kept as one LF); other separators and
+   * controls are refused at their line and column first.
+   */
   private static List<Record> split(String file, String text) {
+    try {
+      TextInput.checkCharacters(file, text, LIMITS);
+    } catch (TextInputException e) {
+      throw FileFormatException.of(e);
+    }
     List<Record> out = new ArrayList<>();
     List<String> values = new ArrayList<>();
     StringBuilder cell = new StringBuilder();
@@ -240,10 +259,15 @@ public final class ObservationCsv {
             continue;
           }
           quoted = false;
-        } else {
-          if (ch == '\n') {
-            line++;
+        } else if (ch == '\n' || ch == '\r') {
+          // a line break inside a value: LF, CRLF and CR alike, kept as one LF, so the same file
+          // saved with other line ends gives the same values
+          if (ch == '\r' && i + 1 < n && text.charAt(i + 1) == '\n') {
+            i++;
           }
+          line++;
+          cell.append('\n');
+        } else {
           cell.append(ch);
         }
         i++;

@@ -1,5 +1,9 @@
 package org.bracewalk.app.sitefile;
 
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.StreamReadConstraints;
+import org.bracewalk.app.text.TextInput;
+import org.bracewalk.app.text.TextInputException;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.databind.DeserializationFeature;
@@ -64,8 +68,27 @@ import org.bracewalk.core.model.Support;
  * <p>Unknown fields are errors (a misspelt optional field would otherwise be lost silently).
  */
 public final class SiteFileReader {
+  /**
+   * The bounds of a site file: 512 MiB (photos travel in it, base64); no line limit, as a photo
+   * is one line. Line ends and separators follow {@link TextInput}, as in every text file: a raw
+   * U+2028 is valid JSON inside a string, but is refused here like everywhere else.
+   */
+  public static final TextInput.Limits LIMITS =
+      new TextInput.Limits("a site file", 512L * 1024 * 1024, 0);
+
+  /**
+   * The JSON parser's bounds: a string may be as long as a photo of the largest size allowed,
+   * base64 ({@link Photo#MAX_BYTES}: 28 million characters; Jackson's default is 20 million, so
+   * a site file holding a 16 MB photo could be exported and not imported).
+   */
+  static final JsonFactory FACTORY = JsonFactory.builder()
+      .streamReadConstraints(StreamReadConstraints.builder()
+          .maxStringLength((Photo.MAX_BYTES + 2) / 3 * 4 + 16)
+          .build())
+      .build();
+
   private static final ObjectMapper MAPPER =
-      JsonMapper.builder()
+      JsonMapper.builder(FACTORY)
           .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
           .enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY)
           .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
@@ -97,6 +120,11 @@ public final class SiteFileReader {
   }
 
   private SiteFile read() {
+    try {
+      TextInput.checkCharacters(fileName, text, LIMITS);
+    } catch (TextInputException e) {
+      throw FileFormatException.of(e);
+    }
     JsonNode root;
     try {
       root = MAPPER.readTree(text);

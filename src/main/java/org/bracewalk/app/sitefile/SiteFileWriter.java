@@ -57,7 +57,7 @@ public final class SiteFileWriter {
     DefaultPrettyPrinter.Indenter indenter = new LayoutIndenter();
     DefaultPrettyPrinter printer =
         new DefaultPrettyPrinter(separators).withObjectIndenter(indenter).withArrayIndenter(indenter);
-    writer = new ObjectMapper().writer(printer);
+    writer = new ObjectMapper().writer(printer).with(new SeparatorEscapes());
   }
 
   /** The file's text, ending in a newline. */
@@ -310,6 +310,29 @@ public final class SiteFileWriter {
     @Override
     public boolean isInline() {
       return false;
+    }
+  }
+
+  /**
+   * Writes NEL, LINE SEPARATOR and PARAGRAPH SEPARATOR as {@code \\u} escapes: JSON allows them raw
+   * inside strings, but the reader refuses them raw like every text file does ({@code
+   * app.text.TextInput}), so a note holding one must still read back. (Jackson escapes the C0
+   * controls itself.)
+   */
+  private static final class SeparatorEscapes extends com.fasterxml.jackson.core.io.CharacterEscapes {
+    private static final long serialVersionUID = 1L;
+    private final int[] ascii = standardAsciiEscapesForJSON();
+
+    @Override
+    public int[] getEscapeCodesForAscii() {
+      return ascii;
+    }
+
+    @Override
+    public com.fasterxml.jackson.core.SerializableString getEscapeSequence(int ch) {
+      return ch == 0x85 || ch == 0x2028 || ch == 0x2029
+          ? new com.fasterxml.jackson.core.io.SerializedString(String.format("\\u%04x", ch))
+          : null;
     }
   }
 }

@@ -8,7 +8,7 @@ import java.util.Objects;
  * <p>Text is kept exactly as given, never trimmed here: a record read back from the store must
  * show what the store holds, so that text edited outside the program (a blank added at the end
  * of a note) is seen, fingerprinted and reported as it is. The application trims what people
- * type before it builds the record it stores ({@code app.TextInput}), and the database refuses
+ * type before it builds the record it stores ({@code app.StoredText}), and the database refuses
  * untrimmed text on insert.
  */
 final class Text {

@@ -138,7 +138,7 @@ class CheckServiceTest {
   void decodingStopsAtTheFirstByteThatIsNotUtf8() {
     byte[] bytes = {'/', '\n', 'X', ' ', (byte) 0xC3};
     assertThatThrownBy(() -> CheckService.decode("m.txt", bytes))
-        .hasMessage("m.txt:2:3: this is not UTF-8 text: save the map as UTF-8 (plain text)");
+        .hasMessage("m.txt:2:3: this is not UTF-8 text: save the file as UTF-8 (plain text)");
     assertThat(CheckService.decode("m.txt", "é /\n".getBytes(java.nio.charset.StandardCharsets.UTF_8)))
         .isEqualTo("é /\n");
   }

@@ -20,7 +20,7 @@ class SiteRecordsTest {
   @Test
   void optionalTextBecomesEmptyAndRequiredTextMustBeThereAndTextIsKeptAsGiven() {
     // kept as given: a record read from the store shows what the store holds (the application
-    // trims typed text before storing, app.TextInput)
+    // trims typed text before storing, app.StoredText)
     Site site = new Site(0, " Depot ", null, null, null, ZoneId.of("UTC"), DisplayUnits.METRIC);
     assertThat(site.name()).isEqualTo(" Depot ");
     assertThat(site.clientName()).isEmpty();

@@ -17,19 +17,19 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /** Typed text is trimmed once, before it is stored; what is stored comes back as stored. */
-class TextInputTest {
+class StoredTextTest {
   @TempDir Path dir;
 
   @Test
   void blanksAtTheEndsGoAndALineBreakInsideStays() {
-    assertThat(TextInput.clean("  4 Quarry Lane\nEastmere \n", "client address"))
+    assertThat(StoredText.clean("  4 Quarry Lane\nEastmere \n", "client address"))
         .isEqualTo("4 Quarry Lane\nEastmere");
-    assertThat(TextInput.clean(null, "note")).isEmpty();
+    assertThat(StoredText.clean(null, "note")).isEmpty();
   }
 
   @Test
   void aControlCharacterIsRefusedNamingTheField() {
-    assertThatThrownBy(() -> TextInput.clean("dent\tnear node", "note"))
+    assertThatThrownBy(() -> StoredText.clean("dent\tnear node", "note"))
         .isInstanceOf(UserInputException.class)
         .hasMessageContaining("note").hasMessageContaining("position 5");
   }

@@ -16,8 +16,8 @@ import org.bracewalk.core.model.Structure;
  * what the store gives back is never trimmed again, so a record edited outside the program is
  * seen (and fingerprinted) as it is. The database refuses untrimmed text on insert too.
  */
-public final class TextInput {
-  private TextInput() {}
+public final class StoredText {
+  private StoredText() {}
 
   /**
    * {@code value} without blanks at its ends; {@code null} becomes empty.
