@@ -35,6 +35,13 @@ public final class PanelMapParser {
   public static final TextInput.Limits LIMITS =
       new TextInput.Limits("a panel map", 64L * 1024 * 1024, 100_000);
 
+  /**
+   * The most panels a map may hold: 4,000,000 (2000 x 2000), four times the largest plane the
+   * engine is measured on (1000 x 1000, a few hundred milliseconds). Counted as grid lines are read,
+   * so a huge map is refused at the line that passes the limit instead of filling the memory.
+   */
+  public static final long MAX_PANELS = 4_000_000;
+
   private static final Pattern NUMBER = Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?");
   private static final Pattern WORD = Pattern.compile("[A-Za-z][A-Za-z_-]+");
   private static final Map<String, String> LOOK_ALIKES =
@@ -227,6 +234,8 @@ public final class PanelMapParser {
               + hint);
     }
 
+    private long panels;
+
     private void gridLine(int number, String line) {
       List<Word> words = words(line, 0);
       List<PanelToken> tokens = new ArrayList<>(words.size());
@@ -263,6 +272,12 @@ public final class PanelMapParser {
                   + bays
                   + ": give every lift one token per bay (use . for a panel with no diagonal)");
         }
+      }
+      panels += tokens.size();
+      if (panels > MAX_PANELS) {
+        throw error(number, 1, "the map holds more than " + MAX_PANELS + " panels by this line,"
+            + " the most a panel map may hold: check the file (a plane of 2000 lifts x 2000 bays"
+            + " is the largest)");
       }
       rowsTopFirst.add(new GridRow(number, tokens, columns));
     }

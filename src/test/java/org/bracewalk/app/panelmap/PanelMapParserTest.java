@@ -65,6 +65,20 @@ class PanelMapParserTest {
   }
 
   @Test
+  void aMapOfMorePanelsThanTheLimitIsRefusedAtTheLineThatPassesIt() {
+    // 2,001 lines of 2,000 bays: the 2,001st grid line passes 4,000,000 panels
+    String row = String.join(" ", java.util.Collections.nCopies(2000, "."));
+    String text = String.join("\n", java.util.Collections.nCopies(2001, row)) + "\n";
+    assertThatThrownBy(() -> parser.parse("huge.txt", text, MapKind.DESIGN))
+        .isInstanceOf(PanelMapException.class)
+        .hasMessageStartingWith("huge.txt:2001:1: ")
+        .hasMessageContaining("more than 4000000 panels");
+    // 2000 x 2000 itself is read
+    String most = String.join("\n", java.util.Collections.nCopies(2000, row)) + "\n";
+    assertThat(parser.parse("most.txt", most, MapKind.DESIGN).lifts()).isEqualTo(2000);
+  }
+
+  @Test
   void slashRisesToTheRightAndBackslashFallsToTheRight() {
     PanelMap map = parser.parse("m.txt", "/ \\\n\\ /\n", MapKind.DESIGN);
     PlaneDesign d = map.toDesign(map.grid(Support.FREE));
