@@ -1,12 +1,11 @@
 package org.bracewalk.boot;
 
+import org.bracewalk.boot.Commands.Run;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -47,13 +46,8 @@ class ForgedDocumentsTest {
       new AppContext(Clock.fixed(Instant.parse("2025-03-06T09:00:00Z"), ZoneOffset.UTC),
           PlaneAnalyzer.standard());
 
-  record Run(int code, String out, String err) {}
-
   Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    int code = Launcher.run(args, new PrintWriter(out), new PrintWriter(err), Map.of(), context);
-    return new Run(code, out.toString(), err.toString());
+    return Commands.run(context, Map.of(), args);
   }
 
   @BeforeEach

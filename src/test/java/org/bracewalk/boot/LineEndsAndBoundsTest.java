@@ -1,11 +1,10 @@
 package org.bracewalk.boot;
 
+import org.bracewalk.boot.Commands.Run;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -41,14 +40,8 @@ class LineEndsAndBoundsTest {
           new Fixtures.SteppingClock(java.time.Instant.parse("2025-03-10T08:00:00Z")),
           PlaneAnalyzer.standard());
 
-  record Run(int code, String out, String err) {}
-
   private Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    int code = Launcher.run(args, new PrintWriter(out), new PrintWriter(err),
-        Map.of("BRACEWALK_LOG_DIR", dir.resolve("logs").toString()), context);
-    return new Run(code, out.toString(), err.toString());
+    return Commands.run(context, Map.of("BRACEWALK_LOG_DIR", dir.resolve("logs").toString()), args);
   }
 
   private String db() {

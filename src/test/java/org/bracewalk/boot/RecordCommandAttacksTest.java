@@ -1,12 +1,11 @@
 package org.bracewalk.boot;
 
+import org.bracewalk.boot.Commands.Run;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.awt.image.BufferedImage;
-import java.io.PrintWriter;
 import java.io.RandomAccessFile;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Connection;
@@ -34,13 +33,8 @@ class RecordCommandAttacksTest {
   private final AppContext context =
       new AppContext(new Fixtures.SteppingClock(), PlaneAnalyzer.standard());
 
-  record Run(int code, String out, String err) {}
-
   private Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    int code = Launcher.run(args, new PrintWriter(out), new PrintWriter(err), Map.of(), context);
-    return new Run(code, out.toString(), err.toString());
+    return Commands.run(context, Map.of(), args);
   }
 
   private String db() {

@@ -1,9 +1,8 @@
 package org.bracewalk.boot;
 
+import org.bracewalk.boot.Commands.Run;
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -25,13 +24,8 @@ class StoreCommandLineTest {
   private final AppContext context =
       new AppContext(new Fixtures.SteppingClock(), PlaneAnalyzer.standard());
 
-  record Run(int code, String out, String err) {}
-
   private Run run(Map<String, String> env, String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    int code = Launcher.run(args, new PrintWriter(out), new PrintWriter(err), env, context);
-    return new Run(code, out.toString(), err.toString());
+    return Commands.run(context, env, args);
   }
 
   private Run run(String... args) {
