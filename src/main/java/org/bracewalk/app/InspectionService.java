@@ -44,9 +44,12 @@ public final class InspectionService {
 
   /**
    * Starts an open inspection of a structure now. Empty "carried out for" fields take the site's
-   * client name and address. It covers the structure's planes not retired by then; its start is
-   * never put before a retirement already recorded for the structure (a clock that stands still
-   * or steps back would otherwise make it cover a plane retired before it was started).
+   * client name and address. Its scope is fixed here, in the same transaction: the structure's
+   * planes not retired by then, each with its highest-numbered design revision; analysis, report,
+   * repair order, history and export of the inspection use exactly that, whatever is added or
+   * revised later. Its start is never put before a retirement already recorded for the structure
+   * (a clock that stands still or steps back would otherwise make it cover a plane retired before
+   * it was started).
    */
   public Inspection start(long structureId, NewInspection details) {
     Structure structure =
