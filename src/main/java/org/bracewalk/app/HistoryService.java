@@ -22,12 +22,19 @@ public final class HistoryService {
     this.analysis = Objects.requireNonNull(analysis);
   }
 
-  /** The plane in every inspection of its structure, oldest first. */
+  /**
+   * The plane in every inspection of its structure that covers it (its scope, fixed when it
+   * started, holds the plane), oldest first: a plane added later has no part in earlier
+   * inspections, and a retired plane none in those started after its retirement.
+   */
   public PlaneHistory history(long planeId) {
     PlaneRecord plane = sites.plane(planeId);
     List<PlaneHistory.Entry> entries = new ArrayList<>();
     Map<PanelRef, PanelFinding> previous = null;
     for (Inspection inspection : inspections.inspections(plane.structureId())) {
+      if (!inspections.covers(inspection.id(), planeId)) {
+        continue;
+      }
       PlaneResult result = analysis.analysePlane(inspection.id(), planeId);
       Map<PanelRef, PanelFinding> findings = inspections.latestFindings(inspection.id(), planeId);
       List<PanelChange> changes = previous == null ? List.of() : changes(previous, findings);

@@ -5,10 +5,12 @@ import java.time.Instant;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Set;
 import java.util.function.Consumer;
 import org.bracewalk.app.sitefile.ObservationCsv;
 import org.bracewalk.app.sitefile.SiteFile;
@@ -121,6 +123,13 @@ public final class ImportExportService {
             i.competentPerson(), i.shift(), i.storageSafetyPerson(), i.reason(),
             InspectionStatus.OPEN, i.carriedOutForName(), i.carriedOutForAddress())));
         inspectionIds.put(i.number(), inspection.id());
+        Map<Long, Long> scope = new java.util.TreeMap<>();
+        for (SiteFile.ScopeData d : i.scope() != null ? i.scope() : scopeAtStart(s, i)) {
+          PlaneRecord plane = planes.get(d.plane());
+          scope.put(plane.id(), store.designs().ofPlane(plane.id()).stream()
+              .filter(r -> r.number() == d.design()).findFirst().orElseThrow().id());
+        }
+        store.planes().fixScope(inspection.id(), scope);
         List<Long> ids = new ArrayList<>();
         for (ObservationData o : i.observations()) {
           Long supersedes = o.supersedes() == null ? null : ids.get(o.supersedes() - 1);
@@ -170,6 +179,52 @@ public final class ImportExportService {
     verifications.forEach((action, number) ->
         store.repairs().markVerified(action, inspectionIds.get(number)));
     return new ImportedSite(site, structures, allPlanes, inspections, observations);
+  }
+
+  /**
+   * The scope of an inspection whose site file does not state it (a file written before the scope
+   * was recorded), by the rule migration V7 gave the inspections already in a database: the planes
+   * of the structure that have a design, are not retired by the inspection's start and were
+   * created (first design revision recorded) by its start, or by its last issued document when
+   * it has one; and every plane it has an observation or repair action of. A finalised
+   * inspection is checked against the highest revision recorded by its finish (else revision 1),
+   * an open one against the highest revision.
+   */
+  static List<SiteFile.ScopeData> scopeAtStart(StructureData s, InspectionData i) {
+    Set<String> used = new HashSet<>();
+    i.observations().forEach(o -> used.add(o.plane()));
+    i.repairOrders().forEach(r -> r.actions().forEach(a -> used.add(a.plane())));
+    Instant upTo = i.startedAt();
+    for (IssuedReportData r : i.issuedReports()) {
+      if (r.issuedAt().isAfter(upTo)) {
+        upTo = r.issuedAt();
+      }
+    }
+    List<SiteFile.ScopeData> out = new ArrayList<>();
+    for (PlaneData p : s.planes()) {
+      if (p.designs().isEmpty()) {
+        continue;
+      }
+      Instant born = p.designs().stream().map(DesignData::recordedAt)
+          .min(Instant::compareTo).orElseThrow();
+      boolean retired = p.retired() != null && !p.retired().at().isAfter(i.startedAt());
+      if (!used.contains(p.name()) && (retired || born.isAfter(upTo))) {
+        continue;
+      }
+      List<DesignData> byNumber = new ArrayList<>(p.designs());
+      byNumber.sort(java.util.Comparator.comparingInt(DesignData::number));
+      DesignData design = byNumber.get(byNumber.size() - 1);
+      if (i.status() == InspectionStatus.FINALISED) {
+        design = byNumber.get(0);
+        for (DesignData d : byNumber) {
+          if (!d.recordedAt().isAfter(i.finishedAt())) {
+            design = d;
+          }
+        }
+      }
+      out.add(new SiteFile.ScopeData(p.name(), design.number()));
+    }
+    return out;
   }
 
   /** The site file of one site: everything about it, as text. */
@@ -268,10 +323,13 @@ public final class ImportExportService {
     for (IssuedReport r : store.issuedReports().ofInspection(i.id())) {
       reports.add(new IssuedReportData(r.fileName(), r.fingerprint(), r.issuedAt()));
     }
+    List<SiteFile.ScopeData> scope = new ArrayList<>();
+    store.planes().scopeOf(i.id()).forEach((plane, revision) -> scope.add(new SiteFile.ScopeData(
+        planeNames.get(plane), store.designs().find(revision).orElseThrow().number())));
     return new InspectionData(numbers.get(i.id()), i.startedAt(), i.finishedAt(), i.status(),
         i.reason(), i.inspectorName(), i.inspectorPosition(), i.competentPerson(), i.shift(),
         i.storageSafetyPerson(), i.carriedOutForName(), i.carriedOutForAddress(), observations,
-        orders, reports);
+        orders, reports, scope);
   }
 
   /** The CSV of every observation of an inspection, superseded ones included, in order. */

@@ -44,9 +44,12 @@ public final class InspectionService {
 
   /**
    * Starts an open inspection of a structure now. Empty "carried out for" fields take the site's
-   * client name and address. It covers the structure's planes not retired by then; its start is
-   * never put before a retirement already recorded for the structure (a clock that stands still
-   * or steps back would otherwise make it cover a plane retired before it was started).
+   * client name and address. Its scope is fixed here, in the same transaction: the structure's
+   * planes not retired by then, each with its highest-numbered design revision; analysis, report,
+   * repair order, history and export of the inspection use exactly that, whatever is added or
+   * revised later. Its start is never put before a retirement already recorded for the structure
+   * (a clock that stands still or steps back would otherwise make it cover a plane retired before
+   * it was started).
    */
   public Inspection start(long structureId, NewInspection details) {
     Structure structure =
@@ -66,13 +69,36 @@ public final class InspectionService {
         now = r.retiredAt();
       }
     }
-    return store.inspections()
-        .add(
-            StoredText.inspection(new Inspection(
-                0, structureId, now, null, details.inspectorName(),
-                details.inspectorPosition(), details.competentPerson(), details.shift(),
-                details.storageSafetyPerson(), details.reason(), InspectionStatus.OPEN, forName,
-                forAddress)));
+    Inspection inspection = StoredText.inspection(new Inspection(
+        0, structureId, now, null, details.inspectorName(),
+        details.inspectorPosition(), details.competentPerson(), details.shift(),
+        details.storageSafetyPerson(), details.reason(), InspectionStatus.OPEN, forName,
+        forAddress));
+    Instant startedAt = now;
+    return store.inTransaction(() -> {
+      Inspection started = store.inspections().add(inspection);
+      store.planes().fixScope(started.id(), scopeAt(structureId, startedAt));
+      return started;
+    });
+  }
+
+  /**
+   * The scope of an inspection of a structure started at {@code startedAt}: each plane of the
+   * structure not retired by then, with its highest-numbered design revision (design revision id
+   * by plane id). A plane with no design revision cannot be analysed and is left out.
+   */
+  private Map<Long, Long> scopeAt(long structureId, Instant startedAt) {
+    Map<Long, Long> scope = new TreeMap<>();
+    Map<Long, PlaneRetirement> retired = new java.util.HashMap<>();
+    store.planes().retirementsOf(structureId).forEach(r -> retired.put(r.planeId(), r));
+    for (PlaneRecord p : store.planes().ofStructure(structureId)) {
+      PlaneRetirement r = retired.get(p.id());
+      if (r != null && r.appliesToInspectionStartedAt(startedAt)) {
+        continue;
+      }
+      store.designs().latest(p.id()).ifPresent(d -> scope.put(p.id(), d.id()));
+    }
+    return scope;
   }
 
   /** The inspection with this id; {@link NotFoundException} otherwise. */
@@ -104,8 +130,9 @@ public final class InspectionService {
   }
 
   /**
-   * The planes an inspection covers, by id: every plane of its structure except those retired at
-   * or before the moment it started (a plane retired later stays in it, as it was).
+   * The planes an inspection covers, by id: its scope, fixed when it started (the planes of its
+   * structure not retired by then that had a design). A plane added later, or retired later, is
+   * as it was: not in it, or still in it.
    */
   public List<PlaneRecord> planesOf(long inspectionId) {
     inspection(inspectionId);
@@ -230,14 +257,32 @@ public final class InspectionService {
     return out;
   }
 
-  /** The design revision in force for this inspection and plane (see {@code DesignRepository}). */
+  /**
+   * The design revision this inspection checks the plane against: the one in its scope, fixed
+   * when it started. A revision recorded later (even while the inspection is open) is for later
+   * inspections; the walk continues against the revision in force at the start.
+   *
+   * @throws NotFoundException naming the plane and the inspection when the plane is not in the
+   *     inspection's scope (for instance a plane added to the structure after it started)
+   */
   public DesignRevision designInForce(long inspectionId, long planeId) {
     Inspection inspection = inspection(inspectionId);
     PlaneRecord plane = plane(planeId);
-    Instant at = inspection.finishedAt() != null ? inspection.finishedAt() : clock.instant();
+    Long revisionId = store.planes().scopeOf(inspectionId).get(planeId);
+    if (revisionId == null) {
+      throw new UserInputException("plane '" + plane.name() + "' (id " + planeId + ") is not"
+          + " part of " + inspection.label() + ": the planes an inspection covers are fixed when"
+          + " it starts; inspect it in an inspection started after it was added");
+    }
     return store.designs()
-        .inForceAt(planeId, at)
-        .orElseThrow(() -> new NotFoundException("design of plane '" + plane.name() + "'"));
+        .find(revisionId)
+        .orElseThrow(() -> new NotFoundException("design revision " + revisionId + " of plane '"
+            + plane.name() + "'"));
+  }
+
+  /** True when the inspection covers the plane (its scope, fixed when it started, holds it). */
+  public boolean covers(long inspectionId, long planeId) {
+    return store.planes().scopeOf(inspectionId).containsKey(planeId);
   }
 
   /** The plane as found in this inspection, against the design in force. */
@@ -309,6 +354,11 @@ public final class InspectionService {
               + ") was retired at " + r.retiredAt() + " (" + r.reason() + "), before "
               + inspection.label() + " started; it is not part of it");
         });
+    if (!store.planes().scopeOf(inspection.id()).containsKey(plane.id())) {
+      throw new UserInputException("plane '" + plane.name() + "' (id " + plane.id() + ") is not"
+          + " part of " + inspection.label() + ": the planes an inspection covers are fixed when"
+          + " it starts, and this one was added after; record it in a new inspection");
+    }
     if (!plane.grid().contains(n.panel())) {
       throw new UserInputException(
           "panel "

@@ -7,6 +7,7 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -54,11 +55,17 @@ final class JdbcPlaneRepository implements PlaneRepository {
 
   private static final String OF_INSPECTION =
       """
-       WHERE structure_id = (SELECT structure_id FROM inspections WHERE id = ?1)
-         AND NOT EXISTS (SELECT 1 FROM plane_retirements r
-                         WHERE r.plane_id = planes.id
-                           AND r.retired_at <= (SELECT started_at FROM inspections WHERE id = ?1))
+       WHERE id IN (SELECT plane_id FROM inspection_scope WHERE inspection_id = ?)
        ORDER BY id
+      """;
+  private static final String INSERT_SCOPE =
+      """
+      INSERT INTO inspection_scope (inspection_id, plane_id, design_revision_id) VALUES (?, ?, ?)
+      """;
+  private static final String SCOPE =
+      """
+      SELECT plane_id, design_revision_id FROM inspection_scope WHERE inspection_id = ?
+       ORDER BY plane_id
       """;
   private static final String INSERT_RETIREMENT =
       """
@@ -166,6 +173,46 @@ final class JdbcPlaneRepository implements PlaneRepository {
   @Override
   public List<PlaneRecord> ofInspection(long inspectionId) {
     return query(SELECT + OF_INSPECTION, inspectionId, null);
+  }
+
+  @Override
+  public void fixScope(long inspectionId, Map<Long, Long> revisionByPlane) {
+    db.inTransaction(
+        () ->
+            db.call(
+                c -> {
+                  if (revisionByPlane.isEmpty()) {
+                    return null;
+                  }
+                  try (PreparedStatement s = c.prepareStatement(INSERT_SCOPE)) {
+                    for (Map.Entry<Long, Long> e : revisionByPlane.entrySet()) {
+                      s.setLong(1, inspectionId);
+                      s.setLong(2, e.getKey());
+                      s.setLong(3, e.getValue());
+                      s.addBatch();
+                    }
+                    s.executeBatch();
+                  }
+                  return null;
+                },
+                SqlErrors.Subject.of("scope of inspection " + inspectionId + " (planes "
+                    + revisionByPlane.keySet() + ")", inspectionId)));
+  }
+
+  @Override
+  public Map<Long, Long> scopeOf(long inspectionId) {
+    return db.call(
+        c -> {
+          PreparedStatement s = db.prepared(SCOPE);
+          s.setLong(1, inspectionId);
+          Map<Long, Long> out = new LinkedHashMap<>();
+          try (ResultSet r = s.executeQuery()) {
+            while (r.next()) {
+              out.put(r.getLong(1), r.getLong(2));
+            }
+          }
+          return out;
+        });
   }
 
   @Override

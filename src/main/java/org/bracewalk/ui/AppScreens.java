@@ -158,7 +158,12 @@ public final class AppScreens implements ScreenFactory {
       return focused(box, crumbs(plane, null), back::requestFocus);
     }
     Inspection insp = found.get();
+    if (!services.inspections().covers(insp.id(), plane.id())) {
+      return notInScope(plane, insp, s, navigator);
+    }
     Structure st = services.sites().structure(plane.structureId());
+    // the design fixed when the inspection started: a revision saved while it is open is for the
+    // next inspection, so the walk continues against the design it started with
     DesignRevision design = services.inspections().designInForce(insp.id(), plane.id());
     WalkViewModel vm =
         new WalkViewModel(design.design(), st.name() + ", " + plane.name(),
@@ -213,6 +218,22 @@ public final class AppScreens implements ScreenFactory {
     return bar;
   }
 
+  /**
+   * The planes of an inspection are fixed when it starts: a plane added later is walked, and its
+   * findings shown, in a later inspection.
+   */
+  private Screen notInScope(PlaneRecord plane, Inspection insp, Selection s, Navigator navigator) {
+    Label l = Widgets.text("Plane '" + plane.name() + "' is not part of inspection " + insp.id()
+        + ": the planes an inspection covers are fixed when it starts, and this plane was added"
+        + " after. To inspect it, start a new inspection on Sites (Ctrl+1).");
+    l.getStyleClass().add("screen-title");
+    Button back = new Button("Go to Sites (Ctrl+1)");
+    back.setOnAction(e -> navigator.open(ScreenId.OVERVIEW, s));
+    VBox box = new VBox(14, l, back);
+    box.getStyleClass().add("empty-offer");
+    return focused(box, crumbs(plane, insp), back::requestFocus);
+  }
+
   private Screen findings(Selection s, Navigator navigator) {
     PlaneRecord plane = services.sites().plane(s.planeId());
     Optional<Inspection> found = inspectionFor(s);
@@ -224,6 +245,9 @@ public final class AppScreens implements ScreenFactory {
       return focused(box, crumbs(plane, null), box::requestFocus);
     }
     Inspection insp = found.get();
+    if (!services.inspections().covers(insp.id(), plane.id())) {
+      return notInScope(plane, insp, s, navigator);
+    }
     FindingsViewModel vm = new FindingsViewModel(services, analyzer, issuer, dialogs, ui, background, insp.id(), plane.id());
     FindingsView view = new FindingsView(vm,
         p -> navigator.open(ScreenId.FINDINGS, new Selection(plane.structureId(), p, insp.id())));

@@ -16,8 +16,8 @@ import org.bracewalk.core.model.Structure;
 /**
  * Every record an inspection's report rests on, as stored: what the fingerprint covers.
  *
- * @param planes the planes the inspection covers (its structure's, less those retired before it
- *     started), by id
+ * @param planes the planes the inspection covers (its scope, fixed when it started), by id, each
+ *     with the design revision of its scope
  * @param orders the repair orders raised from the inspection, by id
  */
 public record InspectionRecords(

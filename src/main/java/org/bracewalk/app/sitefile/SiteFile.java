@@ -85,7 +85,19 @@ public record SiteFile(Site site, List<StructureData> structures) {
       Instant recordedAt,
       PlaneDesign design) {}
 
-  /** One inspection; {@code number} is its 1-based place among all inspections of the file. */
+  /**
+   * One plane an inspection covers, with the number of the design revision it is checked against
+   * (field {@code scope} of an inspection: {@code plane}, {@code design}).
+   */
+  public record ScopeData(String plane, int design) {}
+
+  /**
+   * One inspection; {@code number} is its 1-based place among all inspections of the file. {@code
+   * scope} is the planes it covers, fixed when it started, each with its design revision number;
+   * {@code null} when the file does not say (a file written before the scope was recorded): the
+   * importer then gives it the planes that existed at its start (see {@code
+   * ImportExportService}).
+   */
   public record InspectionData(
       int number,
       Instant startedAt,
@@ -101,11 +113,25 @@ public record SiteFile(Site site, List<StructureData> structures) {
       String carriedOutForAddress,
       List<ObservationData> observations,
       List<RepairOrderData> repairOrders,
-      List<IssuedReportData> issuedReports) {
+      List<IssuedReportData> issuedReports,
+      List<ScopeData> scope) {
     public InspectionData {
       observations = List.copyOf(observations);
       repairOrders = List.copyOf(repairOrders);
       issuedReports = List.copyOf(issuedReports);
+      scope = scope == null ? null : List.copyOf(scope);
+    }
+
+    /** An inspection whose scope the file does not state. */
+    public InspectionData(int number, Instant startedAt, Instant finishedAt,
+        InspectionStatus status, InspectionReason reason, String inspectorName,
+        String inspectorPosition, String competentPerson, String shift,
+        String storageSafetyPerson, String carriedOutForName, String carriedOutForAddress,
+        List<ObservationData> observations, List<RepairOrderData> repairOrders,
+        List<IssuedReportData> issuedReports) {
+      this(number, startedAt, finishedAt, status, reason, inspectorName, inspectorPosition,
+          competentPerson, shift, storageSafetyPerson, carriedOutForName, carriedOutForAddress,
+          observations, repairOrders, issuedReports, null);
     }
   }
 

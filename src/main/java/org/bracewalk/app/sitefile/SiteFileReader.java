@@ -335,7 +335,7 @@ public final class SiteFileReader {
       List<Pending> pending) {
     n.known("number", "reason", "status", "startedAt", "finishedAt", "inspectorName",
         "inspectorPosition", "competentPerson", "shift", "storageSafetyPerson",
-        "carriedOutForName", "carriedOutForAddress", "observations", "repairOrders",
+        "carriedOutForName", "carriedOutForAddress", "scope", "observations", "repairOrders",
         "issuedReports");
     int declared = n.integer("number", 1, Integer.MAX_VALUE);
     if (declared != number) {
@@ -349,11 +349,40 @@ public final class SiteFileReader {
     n.build(status == InspectionStatus.FINALISED ? "finishedAt" : "status", () -> new Inspection(
         0, 1, started, finished, n.requiredText("inspectorName"), "", "", "", "", reason, status,
         "", ""));
+    List<SiteFile.ScopeData> scope = null;
+    Set<String> scoped = new HashSet<>();
+    if (n.has("scope")) {
+      scope = new ArrayList<>();
+      for (Obj d : n.objects("scope")) {
+        d.known("plane", "design");
+        PlaneData plane = planeNamed(d, planes);
+        if (!scoped.add(plane.name())) {
+          throw d.error("plane", "plane \"" + plane.name() + "\" is in this inspection's scope"
+              + " twice; name each plane once");
+        }
+        int design = d.integer("design", 1, Integer.MAX_VALUE);
+        if (plane.designs().stream().noneMatch(r -> r.number() == design)) {
+          throw d.error("design", "plane \"" + plane.name() + "\" has no design revision "
+              + design);
+        }
+        if (plane.retired() != null && !plane.retired().at().isAfter(started)) {
+          throw d.error("plane", "plane \"" + plane.name() + "\" was retired at "
+              + instantText(plane.retired().at()) + ", before this inspection started ("
+              + instantText(started) + "); it is not part of it");
+        }
+        scope.add(new SiteFile.ScopeData(plane.name(), design));
+      }
+    }
     List<ObservationData> observations = new ArrayList<>();
     Set<Integer> corrected = new HashSet<>();
     for (Obj o : n.objects("observations")) {
       observations.add(
           observation(o, observations.size() + 1, started, planes, observations, corrected));
+      if (scope != null && !scoped.contains(observations.get(observations.size() - 1).plane())) {
+        throw o.error("plane", "plane \"" + observations.get(observations.size() - 1).plane()
+            + "\" is not in this inspection's scope (field scope): an inspection covers the"
+            + " planes fixed when it started");
+      }
     }
     List<RepairOrderData> orders = new ArrayList<>();
     for (Obj r : n.objects("repairOrders")) {
@@ -376,7 +405,7 @@ public final class SiteFileReader {
     return new InspectionData(number, started, finished, status, reason,
         n.requiredText("inspectorName"), n.text("inspectorPosition"), n.text("competentPerson"),
         n.text("shift"), n.text("storageSafetyPerson"), n.text("carriedOutForName"),
-        n.text("carriedOutForAddress"), observations, orders, reports);
+        n.text("carriedOutForAddress"), observations, orders, reports, scope);
   }
 
   private ObservationData observation(Obj n, int position, Instant started,

@@ -41,7 +41,7 @@ public final class SiteFileWriter {
   private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
   /** Arrays whose elements are each written on one line. */
-  private static final Set<String> ONE_LINE_ELEMENTS = Set.of("observations", "actions", "issuedReports");
+  private static final Set<String> ONE_LINE_ELEMENTS = Set.of("observations", "actions", "issuedReports", "scope");
 
   /** Arrays written on one line altogether. */
   private static final Set<String> ONE_LINE_ARRAYS = Set.of("bayWidthsMm", "liftHeightsMm");
@@ -172,6 +172,14 @@ public final class SiteFileWriter {
     n.put("storageSafetyPerson", i.storageSafetyPerson());
     n.put("carriedOutForName", i.carriedOutForName());
     n.put("carriedOutForAddress", i.carriedOutForAddress());
+    if (i.scope() != null) {
+      ArrayNode scope = n.putArray("scope");
+      for (SiteFile.ScopeData d : i.scope()) {
+        ObjectNode dn = scope.addObject();
+        dn.put("plane", d.plane());
+        dn.put("design", d.design());
+      }
+    }
     ArrayNode observations = n.putArray("observations");
     for (ObservationData o : i.observations()) {
       observations.add(observation(o));

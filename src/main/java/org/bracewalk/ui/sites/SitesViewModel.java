@@ -128,7 +128,10 @@ public final class SitesViewModel {
                 open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
             continue;
           }
-          if (latest.isPresent()) {
+          if (latest.isPresent() && !inLatest.contains(plane.id())) {
+            // added after the latest inspection started: not part of it (its scope is fixed)
+            words += " (added after inspection " + latest.get().id() + " started)";
+          } else if (latest.isPresent()) {
             PlaneResult r = services.analysis().analysePlane(latest.get().id(), plane.id());
             v = verdictOf(r);
             words = v.symbol() + " " + v.words();

@@ -101,6 +101,21 @@ class SitesViewModelTest {
   }
 
   @Test
+  void aPlaneAddedAfterTheLatestInspectionIsShownAsNotPartOfIt() {
+    services = DemoDatabase.withDemo(dir);
+    var frame2 = services.sites().planeByName(1, "frame 2");
+    var design = services.sites().currentDesign(frame2.id()).design();
+    services.sites().createPlane(
+        new org.bracewalk.core.model.PlaneRecord(0, 1, "west return", frame2.grid()),
+        "Ines Carrow", java.time.LocalDate.of(2025, 3, 15), "", design);
+    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    // the demo's inspection 2 covers the planes fixed when it started: not this one
+    assertThat(row(vm, "west return").verdict()).isEqualTo(VerdictKind.NOT_INSPECTED);
+    assertThat(row(vm, "west return").verdictText()).contains("added after inspection 2 started");
+    assertThat(row(vm, "frame 2").verdict()).isEqualTo(VerdictKind.LOST);
+  }
+
+  @Test
   void anOpenWalkRoundShowsHowFarItHasGot() {
     services = DemoDatabase.withDemo(dir);
     DemoWalk.record(services, 20);
