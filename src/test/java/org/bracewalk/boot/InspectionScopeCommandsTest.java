@@ -1,9 +1,8 @@
 package org.bracewalk.boot;
 
+import org.bracewalk.boot.Commands.Run;
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
@@ -49,13 +48,8 @@ class InspectionScopeCommandsTest {
 
   private final AppContext context = new AppContext(new Ticking(), PlaneAnalyzer.standard());
 
-  record Run(int code, String out, String err) {}
-
   Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    int code = Launcher.run(args, new PrintWriter(out), new PrintWriter(err), Map.of(), context);
-    return new Run(code, out.toString(), err.toString());
+    return Commands.run(context, Map.of(), args);
   }
 
   private Run ok(String... args) {
