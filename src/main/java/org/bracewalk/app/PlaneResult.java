@@ -35,9 +35,12 @@ public record PlaneResult(
     Objects.requireNonNull(analysis, "analysis");
   }
 
-  /** The one verdict on this plane ({@link Verdict}): kind, freedoms and keep-off zone. */
+  /**
+   * The one verdict on this plane ({@link Verdict}): kind, freedoms and keep-off zone; "not yet
+   * inspected" while the inspection holds no observation on it.
+   */
   public Verdict verdict() {
-    return Verdict.of(analysis, plane.role());
+    return Verdict.of(analysis, plane.role(), !latest.isEmpty());
   }
 
   /** The conservative as-built verdict: uninspected panels count as missing. */

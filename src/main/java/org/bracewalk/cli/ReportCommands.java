@@ -68,7 +68,7 @@ public final class ReportCommands {
 
   static void planeLines(ReportContent c, PrintWriter out) {
     for (PlaneSection p : c.planes()) {
-      Verdict v = Verdict.of(p.analysis(), p.role());
+      Verdict v = Verdict.of(p.analysis(), p.role(), !p.findings().isEmpty());
       out.println("  " + p.name() + ": " + v.headline()
           + (v.keepOffZone().isPresent() ? ". " + v.keepOff() : ""));
     }

@@ -14,8 +14,9 @@ import org.bracewalk.core.port.report.PlaneSection;
 final class KeepOffLines {
   private KeepOffLines() {}
 
+  /** The one verdict on a plane of the document ("not yet inspected" when nothing is recorded). */
   static Verdict verdict(PlaneSection p) {
-    return Verdict.of(p.analysis(), p.role());
+    return Verdict.of(p.analysis(), p.role(), !p.findings().isEmpty());
   }
 
   static List<String> of(List<PlaneSection> planes, Wording w) {

@@ -150,7 +150,7 @@ public final class PdfReportRenderer implements ReportRenderer {
         VerdictKind kind = KeepOffLines.verdict(p).kind();
         if (kind.lost()) {
           lost.add(p.name());
-        } else if (kind == VerdictKind.DEPENDS_ON_UNSEEN) {
+        } else if (kind == VerdictKind.DEPENDS_ON_UNSEEN || kind == VerdictKind.NOT_INSPECTED) {
           depends.add(p.name());
         }
       }

@@ -161,7 +161,7 @@ public final class AppScreens implements ScreenFactory {
     Structure st = services.sites().structure(plane.structureId());
     DesignRevision design = services.inspections().designInForce(insp.id(), plane.id());
     WalkViewModel vm =
-        new WalkViewModel(design.design(), st.name() + ", " + plane.name(),
+        new WalkViewModel(design.design(), st.name() + ", " + plane.name(), plane.role(),
             InspectionMarkRecorder.existing(services.inspections(), insp.id(), plane.id()),
             new InspectionMarkRecorder(services.inspections(), insp.id(), plane.id(), insp.inspectorName()),
             analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised());

@@ -62,7 +62,7 @@ public final class RepairSteps {
       Map<PanelRef, BowAssessment> planeBows = bows.getOrDefault(name, Map.of());
       Set<PanelRef> covered = new HashSet<>();
       boolean planeIsolated = false;
-      Verdict verdict = Verdict.of(plane.analysis(), plane.role());
+      Verdict verdict = Verdict.of(plane.analysis(), plane.role(), !plane.findings().isEmpty());
       if (verdict.keepOffZone().isPresent()) {
         List<Integer> lifts = verdict.keepOffZone().get().lifts();
         isolate.add(new Draft(name, new PanelRef(lifts.get(0), 1), lifts,

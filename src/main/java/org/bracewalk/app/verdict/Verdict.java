@@ -52,6 +52,21 @@ public record Verdict(
 
   /** The verdict on the analysed state of a plane (as built when known, else as designed). */
   public static Verdict of(PlaneAnalysis analysis, PlaneRole role) {
+    return of(analysis, role, true);
+  }
+
+  /**
+   * The verdict on a plane of an inspection. {@code recorded} is false when the inspection holds
+   * no observation on the plane at all: then the kind is "not yet inspected", while the zone stays
+   * the worst case (every panel counted as missing), since nobody has looked.
+   */
+  public static Verdict of(PlaneAnalysis analysis, PlaneRole role, boolean recorded) {
+    Verdict v = classifyAnalysis(analysis, role);
+    return recorded ? v
+        : new Verdict(VerdictKind.NOT_INSPECTED, v.degreesOfFreedom, v.unknownPanels, role, v.keepOffZone);
+  }
+
+  private static Verdict classifyAnalysis(PlaneAnalysis analysis, PlaneRole role) {
     Optional<AsBuiltAnalysis> ab = analysis.asBuilt();
     return classify(
         analysis.grid(),

@@ -27,8 +27,8 @@ import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.KeyHelp;
 import org.bracewalk.ui.common.Legend;
 import org.bracewalk.ui.common.PlaneCanvas;
-import org.bracewalk.ui.common.VerdictKind;
-import org.bracewalk.ui.common.VerdictWords;
+import org.bracewalk.app.verdict.VerdictKind;
+import org.bracewalk.app.verdict.Cautions;
 import org.bracewalk.ui.common.Widgets;
 
 /** The design editor screen. Only binds to its view model. */
@@ -79,7 +79,7 @@ public final class DesignView extends BorderPane {
     verdict.setId("design-verdict");
     verdict.setStyle("-fx-font-size: 1.07em;");
     Label tolerance = Widgets.text(vm.toleranceTextProperty());
-    VBox verdictBox = new VBox(6, verdict, tolerance, Widgets.hint(VerdictWords.CAUTION));
+    VBox verdictBox = new VBox(6, verdict, tolerance, Widgets.hint(Cautions.STANDING));
     verdictBox.getStyleClass().add("verdict");
     Runnable style = () -> {
       verdictBox.getStyleClass().removeAll("holds", "lost");

@@ -35,7 +35,7 @@ import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.DialogService;
 import org.bracewalk.ui.common.PlanePicture;
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 
 /**
  * Edits one plane's design: grid size and dimensions, support, and the brace or opening of each
