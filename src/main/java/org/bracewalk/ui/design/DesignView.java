@@ -23,6 +23,7 @@ import javafx.util.StringConverter;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PlaneLimits;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.KeyHelp;
 import org.bracewalk.ui.common.Legend;
@@ -130,6 +131,25 @@ public final class DesignView extends BorderPane {
     grid.add(heights, 1, 2, 3, 1);
     grid.add(Widgets.mnemonic("Su_pport", support), 0, 3);
     grid.add(support, 1, 3, 3, 1);
+    // what the plane is: its keep-off zone depends on it (an upright frame's takes in the bays
+    // beside it); fixed for a stored plane, chosen for a new plane saved from a changed grid
+    ChoiceBox<PlaneRole> role = new ChoiceBox<>();
+    role.setId("design-role");
+    role.getItems().addAll(PlaneRole.values());
+    role.setConverter(new StringConverter<>() {
+      @Override
+      public String toString(PlaneRole r) {
+        return r == null ? "" : r.words();
+      }
+
+      @Override
+      public PlaneRole fromString(String s) {
+        return null;
+      }
+    });
+    role.valueProperty().bindBidirectional(vm.roleProperty());
+    grid.add(Widgets.mnemonic("R_ole", role), 0, 4);
+    grid.add(role, 1, 4, 3, 1);
     lifts.setPrefWidth(90);
     bays.setPrefWidth(90);
     VBox gridBox = Widgets.box("Grid", grid,
