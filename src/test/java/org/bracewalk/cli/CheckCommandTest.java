@@ -103,6 +103,23 @@ class CheckCommandTest {
   }
 
   @Test
+  void theRoleOfAnUprightFrameAddsTheBeamBaysBesideItToTheKeepOffZone() throws IOException {
+    Run frame = run("check", design.toString(), asBuilt.toString(), "--format", "json", "--role", "upright-frame");
+    assertThat(frame.code()).isEqualTo(1);
+    JsonNode v = JSON.readTree(frame.out());
+    assertThat(v.at("/keepOffZone/offloadBeside").asBoolean()).isTrue();
+    assertThat(v.get("keepOff").asText()).contains("off-load the beam bays on both sides of this upright frame");
+    // the contract's fields do not change with the role
+    assertThat(contractFields(v)).isEqualTo(JSON.readTree(resource("contract-example.expected.json")));
+    Run text = run("check", design.toString(), asBuilt.toString(), "--role", "upright-frame");
+    assertThat(text.out().replaceAll("\\s+", " ")).contains("off-load the beam bays on both sides of this upright frame");
+    Run bad = run("check", design.toString(), "--role", "shelf");
+    assertThat(bad.code()).isEqualTo(2);
+    assertThat(bad.out()).isEmpty();
+    assertThat(bad.err()).contains("--role").contains("unknown plane role 'shelf'");
+  }
+
+  @Test
   void aRigidDesignOnItsOwnExitsZeroWithAnEmptyRepair() throws IOException {
     Run r = run("check", design.toString(), "--format", "json");
 
