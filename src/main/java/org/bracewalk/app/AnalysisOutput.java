@@ -11,7 +11,6 @@ import org.bracewalk.app.json.PrettyJson;
 import org.bracewalk.app.verdict.Cautions;
 import org.bracewalk.app.verdict.VerdictJson;
 import org.bracewalk.app.verdict.VerdictText;
-import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelState;
 

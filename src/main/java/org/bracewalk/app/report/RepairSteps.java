@@ -6,15 +6,11 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.TreeSet;
-import org.bracewalk.core.analysis.Block;
 import org.bracewalk.core.analysis.RepairBrace;
 import org.bracewalk.core.analysis.RestoreItem;
-import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
-import org.bracewalk.core.model.Support;
 import org.bracewalk.core.port.report.BowAssessment;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.app.verdict.Verdict;
@@ -58,7 +54,6 @@ public final class RepairSteps {
     List<Draft> scheduled = new ArrayList<>();
     for (PlaneSection plane : planes) {
       String name = plane.name();
-      StateAnalysis state = plane.analysis().analysedState();
       Map<PanelRef, BowAssessment> planeBows = bows.getOrDefault(name, Map.of());
       Set<PanelRef> covered = new HashSet<>();
       boolean planeIsolated = false;

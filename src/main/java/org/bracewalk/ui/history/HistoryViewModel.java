@@ -17,7 +17,6 @@ import javafx.collections.ObservableList;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.PanelChange;
 import org.bracewalk.app.PlaneHistory;
-import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;

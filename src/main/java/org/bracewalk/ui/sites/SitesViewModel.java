@@ -23,8 +23,6 @@ import org.bracewalk.app.ImportedSite;
 import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.PlaneResult;
 import org.bracewalk.app.SiteService;
-import org.bracewalk.core.analysis.AsBuiltAnalysis;
-import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.PlaneRecord;
