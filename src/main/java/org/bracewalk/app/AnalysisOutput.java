@@ -11,7 +11,6 @@ import org.bracewalk.app.json.PrettyJson;
 import org.bracewalk.app.verdict.Cautions;
 import org.bracewalk.app.verdict.VerdictJson;
 import org.bracewalk.app.verdict.VerdictText;
-import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelState;
 
@@ -19,8 +18,8 @@ import org.bracewalk.core.model.PanelState;
  * An inspection's analysis as JSON and as text, in the {@code check} contract's terms.
  *
  * <p>JSON: {@code {"inspection": ID, "status", "structure", "rigid", "planes": [{"plane": NAME,
- * "support", "lifts", "bays", "designRevision", "design": ..., "asBuilt": ..., "repair": ...,
- * "keepOff"?}], "caution"}}; {@code design}, {@code asBuilt} and {@code repair} are exactly the
+ * "support", "lifts", "bays", "designRevision", "role", "design": ..., "asBuilt": ..., "repair": ...,
+ * "verdict", "keepOff"?, "keepOffZone"?}], "caution"}}; {@code design}, {@code asBuilt} and {@code repair} are exactly the
  * contract's (from {@link VerdictJson}); the rest are added fields. {@code rigid} is true when
  * every plane holds its shape as built (uninspected panels counted as missing).
  */
@@ -50,11 +49,10 @@ public final class AnalysisOutput {
       n.put("lifts", p.plane().grid().lifts());
       n.put("bays", p.plane().grid().bays());
       n.put("designRevision", p.design().number());
+      n.put("role", p.plane().role().label());
       json.parts(p.analysis()).putInto(n);
-      StateAnalysis analysed = p.analysis().analysedState();
-      if (!analysed.rigid()) {
-        n.put("keepOff", Cautions.keepOff(analysed, p.plane().grid()));
-      }
+      n.put("verdict", p.verdict().kind().code());
+      json.putKeepOff(n, p.verdict());
     }
     root.put("caution", Cautions.STANDING);
     return PrettyJson.write(root);
@@ -100,7 +98,7 @@ public final class AnalysisOutput {
       String title = "inspection " + a.inspection().id() + ", plane '" + p.plane().name()
           + "' against design revision " + p.design().number();
       out.append(text.render(title, "as stored for the plane", p.design().design(),
-          Optional.of(p.asBuilt()), p.analysis()));
+          Optional.of(p.asBuilt()), p.analysis(), p.plane().role()));
     }
     return out.toString();
   }

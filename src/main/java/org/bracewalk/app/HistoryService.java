@@ -41,7 +41,7 @@ public final class HistoryService {
       entries.add(
           new PlaneHistory.Entry(
               inspection, result.design(), findings, result.asBuilt(),
-              result.analysis().analysedState(), changes));
+              result.analysis().analysedState(), changes, result.verdict()));
       previous = findings;
     }
     return new PlaneHistory(plane, entries);

@@ -48,6 +48,7 @@ import org.bracewalk.core.model.Photo;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.RepairAction;
 import org.bracewalk.core.model.RepairOrder;
@@ -109,7 +110,7 @@ public final class ImportExportService {
       Map<String, PlaneRecord> planes = new HashMap<>();
       for (PlaneData p : s.planes()) {
         PlaneRecord plane = store.planes().add(
-            StoredText.plane(new PlaneRecord(0, structure.id(), p.name(), p.grid())));
+            StoredText.plane(new PlaneRecord(0, structure.id(), p.name(), p.grid(), p.role())));
         planes.put(plane.name(), plane);
         allPlanes.add(plane);
         for (DesignData d : p.designs()) {
@@ -269,7 +270,7 @@ public final class ImportExportService {
         }
         PlaneRetirement r = retired.get(p.id());
         planes.add(new PlaneData(p.name(), p.grid(), designs,
-            r == null ? null : new RetirementData(r.retiredAt(), r.retiredBy(), r.reason())));
+            r == null ? null : new RetirementData(r.retiredAt(), r.retiredBy(), r.reason()), p.role()));
       }
       List<InspectionData> inspections = new ArrayList<>();
       for (Inspection i : store.inspections().ofStructure(s.id())) {
@@ -540,12 +541,19 @@ public final class ImportExportService {
    */
   public PlaneRecord createPlaneFromMap(long structureId, String name, String fileName,
       String text, String author, LocalDate date, String approvalNote) {
+    return createPlaneFromMap(structureId, name, PlaneRole.OTHER, fileName, text, author, date,
+        approvalNote);
+  }
+
+  /** As above, for a plane of the given role. */
+  public PlaneRecord createPlaneFromMap(long structureId, String name, PlaneRole role, String fileName,
+      String text, String author, LocalDate date, String approvalNote) {
     PanelMap map = parseMap(fileName, text, MapKind.DESIGN);
     PlaneLimits.problem(name, map.lifts(), map.bays()).ifPresent(problem -> {
       throw new UserInputException(fileName + ": " + problem + " (the map's rows and columns)");
     });
     PlaneGrid grid = map.grid(map.statedSupport().orElse(Support.PINNED_BASE));
-    return new SiteService(store, clock).createPlane(new PlaneRecord(0, structureId, name, grid),
+    return new SiteService(store, clock).createPlane(new PlaneRecord(0, structureId, name, grid, role),
         author, date, approvalNote, map.toDesign(grid));
   }
 

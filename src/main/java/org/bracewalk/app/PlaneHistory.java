@@ -1,5 +1,6 @@
 package org.bracewalk.app;
 
+import org.bracewalk.app.verdict.Verdict;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
@@ -34,6 +35,7 @@ public record PlaneHistory(PlaneRecord plane, List<Entry> entries) {
    * @param verdict the as-built verdict (uninspected panels counted as missing)
    * @param changes the panels whose finding differs from the previous inspection's, by panel
    *     (empty for the first inspection)
+   * @param summary the one verdict on the plane in this inspection ({@link Verdict})
    */
   public record Entry(
       Inspection inspection,
@@ -41,9 +43,11 @@ public record PlaneHistory(PlaneRecord plane, List<Entry> entries) {
       Map<PanelRef, PanelFinding> findings,
       AsBuiltPlane asBuilt,
       StateAnalysis verdict,
-      List<PanelChange> changes) {
+      List<PanelChange> changes,
+      Verdict summary) {
 
     public Entry {
+      Objects.requireNonNull(summary, "summary");
       Objects.requireNonNull(inspection, "inspection");
       Objects.requireNonNull(design, "design");
       findings = Map.copyOf(findings);

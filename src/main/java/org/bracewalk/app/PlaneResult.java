@@ -2,6 +2,7 @@ package org.bracewalk.app;
 
 import java.util.Map;
 import java.util.Objects;
+import org.bracewalk.app.verdict.Verdict;
 import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.DesignRevision;
@@ -32,6 +33,14 @@ public record PlaneResult(
     latest = Map.copyOf(latest);
     Objects.requireNonNull(asBuilt, "asBuilt");
     Objects.requireNonNull(analysis, "analysis");
+  }
+
+  /**
+   * The one verdict on this plane ({@link Verdict}): kind, freedoms and keep-off zone; "not yet
+   * inspected" while the inspection holds no observation on it.
+   */
+  public Verdict verdict() {
+    return Verdict.of(analysis, plane.role(), !latest.isEmpty());
   }
 
   /** The conservative as-built verdict: uninspected panels count as missing. */

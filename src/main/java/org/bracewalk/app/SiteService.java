@@ -100,7 +100,7 @@ public final class SiteService {
     requireWithinLimits(plane.name(), plane.grid().lifts(), plane.grid().bays(), "lifts", "bays");
     structure(plane.structureId());
     PlaneRecord rounded = StoredText.plane(
-        new PlaneRecord(0, plane.structureId(), plane.name(), Millimetres.round(plane.grid())));
+        new PlaneRecord(0, plane.structureId(), plane.name(), Millimetres.round(plane.grid()), plane.role()));
     PlaneDesign roundedDesign = Millimetres.round(design);
     requireSameGrid(rounded, roundedDesign);
     return store.inTransaction(

@@ -53,7 +53,7 @@ public final class StoredText {
   }
 
   static PlaneRecord plane(PlaneRecord p) {
-    return new PlaneRecord(p.id(), p.structureId(), clean(p.name(), "plane name"), p.grid());
+    return new PlaneRecord(p.id(), p.structureId(), clean(p.name(), "plane name"), p.grid(), p.role());
   }
 
   static DesignRevision revision(DesignRevision d) {

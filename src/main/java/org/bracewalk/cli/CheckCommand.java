@@ -9,6 +9,7 @@ import org.bracewalk.app.check.CheckService;
 import org.bracewalk.app.panelmap.PanelMapException;
 import org.bracewalk.app.verdict.VerdictJson;
 import org.bracewalk.app.verdict.VerdictText;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.Support;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -67,6 +68,13 @@ public final class CheckCommand implements Callable<Integer> {
       description = "text (a readable verdict, the default) or json (the contract's fields)")
   String format;
 
+  @Option(
+      names = "--role",
+      paramLabel = "ROLE",
+      description = "what the plane is: upright-frame, spine, facade, transverse-frame, plan-bracing or"
+          + " other (default other); an upright frame's keep-off zone takes in the beam bays on both sides")
+  String role;
+
   private final CheckService service;
   private final VerdictJson json;
   private final VerdictText text;
@@ -87,6 +95,12 @@ public final class CheckCommand implements Callable<Integer> {
             spec.commandLine(), "--support must be pinned-base or free, got '" + support + "'");
       }
     }
+    PlaneRole planeRole;
+    try {
+      planeRole = role == null ? PlaneRole.OTHER : PlaneRole.fromLabel(role);
+    } catch (IllegalArgumentException e) {
+      throw new ParameterException(spec.commandLine(), "--role: " + e.getMessage());
+    }
     if (!format.equals("text") && !format.equals("json")) {
       throw new ParameterException(spec.commandLine(), "--format must be text or json, got '" + format + "'");
     }
@@ -101,7 +115,7 @@ public final class CheckCommand implements Callable<Integer> {
       return BAD_INPUT;
     }
     if (format.equals("json")) {
-      out.print(json.write(json.verdict(result.analysis())));
+      out.print(json.write(json.verdict(result.analysis(), planeRole)));
     } else {
       String title = design + (asBuilt == null ? " (design only)" : ", as built: " + asBuilt);
       out.print(
@@ -110,7 +124,8 @@ public final class CheckCommand implements Callable<Integer> {
               result.supportChoice().description(),
               result.design(),
               result.asBuilt(),
-              result.analysis()));
+              result.analysis(),
+              planeRole));
     }
     out.flush();
     return result.rigid() ? RIGID : NOT_RIGID;

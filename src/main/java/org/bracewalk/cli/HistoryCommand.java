@@ -1,11 +1,12 @@
 package org.bracewalk.cli;
 
+import org.bracewalk.app.verdict.Verdict;
+import org.bracewalk.app.verdict.VerdictKind;
 import java.io.PrintWriter;
 import java.time.ZoneId;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.PanelChange;
 import org.bracewalk.app.PlaneHistory;
-import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.Structure;
@@ -31,12 +32,11 @@ final class HistoryCommand extends StoreCommand {
     return f.state().label() + (f.memberFound() == null ? "" : " (" + f.memberFound().token() + ")");
   }
 
-  static String verdict(StateAnalysis v) {
-    if (v.rigid()) {
-      return "rigid as built";
-    }
-    return "NOT rigid as built (" + v.degreesOfFreedom() + " degrees of freedom"
-        + (v.oneWayOnly() ? ", sways one way" : "") + ")";
+  /** The one verdict's words ({@link Verdict}), with its keep-off zone when it has one. */
+  static String verdict(Verdict v) {
+    String freedoms = v.kind() == VerdictKind.HOLDS || v.kind() == VerdictKind.NOT_INSPECTED ? ""
+        : ", " + v.degreesOfFreedom() + (v.degreesOfFreedom() == 1 ? " degree" : " degrees") + " of freedom";
+    return v.headline() + freedoms + (v.keepOffZone().isPresent() ? " (" + v.keepOff() + ")" : "");
   }
 
   @Override
@@ -57,7 +57,7 @@ final class HistoryCommand extends StoreCommand {
       out.println("inspection " + e.inspection().id() + " (" + e.inspection().reason().label()
           + ", " + e.inspection().status().label() + ", started "
           + Show.time(e.inspection().startedAt(), zone) + "), design revision "
-          + e.design().number() + ": " + verdict(e.verdict()) + "; " + inspected + " of "
+          + e.design().number() + ": " + verdict(e.summary()) + "; " + inspected + " of "
           + p.grid().panelCount() + " panels inspected");
       if (previous != null) {
         if (e.changes().isEmpty()) {

@@ -16,7 +16,7 @@ import org.bracewalk.app.text.TextInput;
 import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.core.port.report.PlaneSection;
-import org.bracewalk.core.port.report.PlaneVerdict;
+import org.bracewalk.app.verdict.Verdict;
 import org.bracewalk.core.port.report.RepairOrderContent;
 import org.bracewalk.core.port.report.ReportContent;
 import picocli.CommandLine;
@@ -68,12 +68,9 @@ public final class ReportCommands {
 
   static void planeLines(ReportContent c, PrintWriter out) {
     for (PlaneSection p : c.planes()) {
-      PlaneVerdict v = p.verdict();
-      out.println("  " + p.name() + ": " + switch (v) {
-        case HOLDS_SHAPE -> "holds its shape";
-        case LOST_RIGIDITY -> "LOST RIGIDITY";
-        case DEPENDS_ON_UNINSPECTED -> "depends on panels not inspected";
-      });
+      Verdict v = Verdict.of(p.analysis(), p.role(), !p.findings().isEmpty());
+      out.println("  " + p.name() + ": " + v.headline()
+          + (v.keepOffZone().isPresent() ? ". " + v.keepOff() : ""));
     }
   }
 

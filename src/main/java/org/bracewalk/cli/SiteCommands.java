@@ -15,6 +15,7 @@ import org.bracewalk.app.sitefile.SiteFileReader;
 import org.bracewalk.core.model.DisplayUnits;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.PlaneRetirement;
@@ -217,18 +218,30 @@ final class SiteCommands {
     @Option(names = "--author", description = "Who drew the design.")
     String author;
 
+    @Option(names = "--role", paramLabel = "ROLE",
+        description = "What the plane is: upright-frame, spine, facade, transverse-frame, plan-bracing or"
+            + " other (default other). An upright frame's keep-off zone takes in the beam bays on both"
+            + " sides of it. Fixed once created.")
+    String role;
+
     PlaneCreate(CliContext context) {
       super(context);
     }
 
     @Override
     int run(AppServices s, PrintWriter out, PrintWriter err) {
+      PlaneRole planeRole;
+      try {
+        planeRole = role == null ? PlaneRole.OTHER : PlaneRole.fromLabel(role);
+      } catch (IllegalArgumentException e) {
+        throw new IllegalArgumentException("--role: " + e.getMessage());
+      }
       if (design != null) {
         if (lifts != null || bays != null || widths != null || heights != null || support != null) {
           throw new IllegalArgumentException("with --design the map gives the grid: leave out"
               + " --lifts, --bays, --widths, --heights and --support");
         }
-        PlaneRecord p = s.files().createPlaneFromMap(structure, name, design.toString(),
+        PlaneRecord p = s.files().createPlaneFromMap(structure, name, planeRole, design.toString(),
             readText(design, PanelMapParser.LIMITS), author, LocalDate.now(context.clock()), "");
         out.println(Show.plane(p) + " created from " + design);
         return 0;
@@ -247,7 +260,7 @@ final class SiteCommands {
         throw new IllegalArgumentException("--support: use pinned-base or free, not '" + support + "'");
       }
       PlaneGrid grid = new PlaneGrid(lifts.intValue(), bays.intValue(), widths, heights, sup);
-      PlaneRecord p = s.sites().createPlane(new PlaneRecord(0, structure, name, grid), author,
+      PlaneRecord p = s.sites().createPlane(new PlaneRecord(0, structure, name, grid, planeRole), author,
           LocalDate.now(context.clock()), "", PlaneDesign.of(grid, Map.of()));
       out.println(Show.plane(p) + " created, unbraced");
       return 0;

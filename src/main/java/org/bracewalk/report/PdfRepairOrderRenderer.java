@@ -22,6 +22,7 @@ import org.bracewalk.core.port.RepairOrderRenderer;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.RepairStep;
 import org.bracewalk.core.port.report.RepairOrderContent;
+import org.bracewalk.app.verdict.Cautions;
 import org.bracewalk.core.port.report.RepairUrgency;
 import org.bracewalk.core.port.report.ReportHeader;
 
@@ -79,6 +80,10 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
       }
       doc.add(pdf.box(Palette.ALERT_FILL, Palette.LOST,
           new Paragraph(w.text("order.safety"), pdf.boldFont(10f, Palette.LOST))));
+      for (String keepOff : KeepOffLines.of(order.planes(), w)) {
+        doc.add(pdf.box(Palette.ALERT_FILL, Palette.LOST,
+            new Paragraph(keepOff, pdf.boldFont(9.5f, Palette.LOST))));
+      }
       if (order.actions().isEmpty()) {
         doc.add(pdf.para(w.text("order.none"), 10f));
       } else {
@@ -99,11 +104,10 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
         }
         doc.add(table);
       }
-      Paragraph review = new Paragraph(w.text("caution.review"), pdf.boldFont(8f));
+      Paragraph review = new Paragraph(Cautions.STANDING, pdf.boldFont(8f));
       review.setSpacingBefore(6f);
       doc.add(pdf.box(Palette.NOTE_FILL, Palette.GRID,
           new Paragraph(w.text("heading.cautions"), pdf.boldFont(9f)),
-          new Paragraph(w.text("caution.scope"), pdf.font(8f)),
           new Paragraph(w.text("caution.lost"), pdf.font(8f)),
           review));
       doc.close();

@@ -33,7 +33,9 @@ import org.bracewalk.core.port.report.ReportContent;
 import org.bracewalk.core.port.report.Particular;
 import org.bracewalk.core.port.report.FindingPhoto;
 import org.bracewalk.core.port.report.PlaneSection;
-import org.bracewalk.core.port.report.PlaneVerdict;
+import org.bracewalk.app.verdict.Cautions;
+import org.bracewalk.app.verdict.Verdict;
+import org.bracewalk.app.verdict.VerdictKind;
 import org.bracewalk.core.port.report.RecordedOrder;
 import org.bracewalk.core.port.report.RepairStep;
 import org.bracewalk.core.port.report.RepairStepKind;
@@ -145,9 +147,10 @@ public final class PdfReportRenderer implements ReportRenderer {
       List<String> lost = new ArrayList<>();
       List<String> depends = new ArrayList<>();
       for (PlaneSection p : r.planes()) {
-        if (p.verdict() == PlaneVerdict.LOST_RIGIDITY) {
+        VerdictKind kind = KeepOffLines.verdict(p).kind();
+        if (kind.lost()) {
           lost.add(p.name());
-        } else if (p.verdict() == PlaneVerdict.DEPENDS_ON_UNINSPECTED) {
+        } else if (kind == VerdictKind.DEPENDS_ON_UNSEEN || kind == VerdictKind.NOT_INSPECTED) {
           depends.add(p.name());
         }
       }
@@ -161,6 +164,9 @@ public final class PdfReportRenderer implements ReportRenderer {
         lines.add(new Paragraph(
             w.format("summary.alert.depends", "count", depends.size(), "planes",
                 String.join(", ", depends)), pdf.boldFont(9.5f, Palette.DAMAGED)));
+      }
+      for (String keepOff : KeepOffLines.of(r.planes(), w)) {
+        lines.add(new Paragraph(keepOff, pdf.boldFont(9.5f, Palette.LOST)));
       }
       if (lines.isEmpty()) {
         lines.add(new Paragraph(
@@ -180,9 +186,9 @@ public final class PdfReportRenderer implements ReportRenderer {
         t.addCell(pdf.headCell(w.text("summary.col." + k)));
       }
       for (PlaneSection p : r.planes()) {
-        PlaneVerdict v = p.verdict();
-        Font f = v == PlaneVerdict.HOLDS_SHAPE ? pdf.font(8f)
-            : pdf.boldFont(8f, v == PlaneVerdict.LOST_RIGIDITY ? Palette.LOST : Palette.DAMAGED);
+        VerdictKind v = KeepOffLines.verdict(p).kind();
+        Font f = v == VerdictKind.HOLDS ? pdf.font(8f)
+            : pdf.boldFont(8f, v.lost() ? Palette.LOST : Palette.DAMAGED);
         StateAnalysis design = p.analysis().design();
         StateAnalysis asBuilt = p.analysis().analysedState();
         t.addCell(pdf.cell(p.name(), f));
@@ -201,9 +207,8 @@ public final class PdfReportRenderer implements ReportRenderer {
     private void cautions() throws DocumentException {
       doc.add(pdf.box(Palette.NOTE_FILL, Palette.GRID,
           new Paragraph(w.text("heading.cautions"), pdf.boldFont(9.5f)),
-          cautionPara(w.text("caution.scope")),
           cautionPara(w.text("caution.lost")),
-          cautionParaBold(w.text("caution.review"))));
+          cautionParaBold(Cautions.STANDING)));
     }
 
     private Paragraph cautionPara(String s) {
@@ -259,7 +264,7 @@ public final class PdfReportRenderer implements ReportRenderer {
     private String riskMatters() {
       List<String> lines = new ArrayList<>();
       for (PlaneSection p : r.planes()) {
-        if (p.verdict() != PlaneVerdict.HOLDS_SHAPE) {
+        if (KeepOffLines.verdict(p).kind() != VerdictKind.HOLDS) {
           lines.add(w.format("particulars.risk.plane", "plane", p.name(), "verdict", verdictWords(p)));
         }
       }
@@ -311,10 +316,10 @@ public final class PdfReportRenderer implements ReportRenderer {
       PlaneGrid g = plane.design().grid();
       StateAnalysis design = plane.analysis().design();
       StateAnalysis state = plane.analysis().analysedState();
-      PlaneVerdict verdict = plane.verdict();
+      VerdictKind verdict = KeepOffLines.verdict(plane).kind();
       doc.add(pdf.heading(w.format("heading.plane", "plane", plane.name()), 13f));
-      Font verdictFont = verdict == PlaneVerdict.HOLDS_SHAPE ? pdf.boldFont(9.5f)
-          : pdf.boldFont(9.5f, verdict == PlaneVerdict.LOST_RIGIDITY ? Palette.LOST : Palette.DAMAGED);
+      Font verdictFont = verdict == VerdictKind.HOLDS ? pdf.boldFont(9.5f)
+          : pdf.boldFont(9.5f, verdict.lost() ? Palette.LOST : Palette.DAMAGED);
       Paragraph v = new Paragraph(
           w.format("plane.verdict", "verdict", verdictWords(plane), "dof", state.degreesOfFreedom(),
               "designDof", design.degreesOfFreedom(), "tolerance", tolerance(state),
@@ -335,12 +340,29 @@ public final class PdfReportRenderer implements ReportRenderer {
       List<Parts.Part> parts = Parts.of(state);
       Parts.Part moving = Parts.moving(state, free);
       if (!state.rigid() && parts.size() > 1) {
+        int lowest = Verdict.lowestSwayingLift(g, state);
         for (Parts.Part part : parts) {
           String lifts = listOrNone(part.block().lifts());
           String bays = listOrNone(part.block().bays());
-          Paragraph p = part.held()
-              ? new Paragraph(w.format("plane.part.held", "lifts", lifts, "bays", bays), pdf.font(8.5f))
-              : new Paragraph(w.format("plane.part", "letter", part.letter(), "state",
+          if (part.held()) {
+            // a lift above the lowest swaying lift keeps its shape but is carried sideways: never "held"
+            List<Integer> held = part.block().lifts().stream().filter(i -> i < lowest).toList();
+            List<Integer> carried = part.block().lifts().stream().filter(i -> i >= lowest).toList();
+            if (!held.isEmpty() || carried.isEmpty()) {
+              Paragraph p = new Paragraph(w.format("plane.part.held", "lifts", listOrNone(held),
+                  "bays", bays), pdf.font(8.5f));
+              p.setIndentationLeft(8f);
+              doc.add(p);
+            }
+            if (!carried.isEmpty()) {
+              Paragraph p = new Paragraph(w.format("plane.part.carried", "lifts",
+                  listOrNone(carried)), pdf.boldFont(8.5f, Palette.LOST));
+              p.setIndentationLeft(8f);
+              doc.add(p);
+            }
+            continue;
+          }
+          Paragraph p = new Paragraph(w.format("plane.part", "letter", part.letter(), "state",
                   w.text(free ? "plane.part.free" : "plane.part.sways"), "lifts", lifts, "bays", bays),
                   pdf.boldFont(8.5f, Palette.LOST));
           p.setIndentationLeft(8f);
@@ -553,11 +575,7 @@ public final class PdfReportRenderer implements ReportRenderer {
     // ---- wording helpers --------------------------------------------------------------------
 
     private String verdictWords(PlaneSection p) {
-      PlaneVerdict v = p.verdict();
-      if (v == PlaneVerdict.LOST_RIGIDITY && p.analysis().analysedState().oneWayOnly()) {
-        return w.text("verdict.one-way");
-      }
-      return w.code("verdict", v.code());
+      return w.code("verdict", KeepOffLines.verdict(p).kind().code());
     }
 
     private String tolerance(StateAnalysis s) {

@@ -6,7 +6,7 @@ import java.util.Set;
 import org.bracewalk.core.model.DefectType;
 import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.port.report.Particular;
-import org.bracewalk.core.port.report.PlaneVerdict;
+import org.bracewalk.app.verdict.VerdictKind;
 import org.bracewalk.core.port.report.RackDamageLevel;
 import org.bracewalk.core.port.report.RepairStepKind;
 import org.bracewalk.core.port.report.RepairUrgency;
@@ -105,15 +105,14 @@ final class TemplateSpec {
     k.put("summary.model", Set.of());
     k.put("tolerance.not-rigid", Set.of());
     k.put("tolerance.at-least", Set.of("n"));
-    for (PlaneVerdict v : PlaneVerdict.values()) {
+    k.put("summary.alert.keepoff", Set.of("plane", "lifts", "bays"));
+    k.put("summary.alert.keepoff.beside", Set.of("plane", "lifts", "bays"));
+    for (VerdictKind v : VerdictKind.values()) {
       k.put("verdict." + v.code(), Set.of());
     }
-    k.put("verdict.one-way", Set.of());
     // cautions
     k.put("heading.cautions", Set.of());
-    k.put("caution.scope", Set.of());
     k.put("caution.lost", Set.of());
-    k.put("caution.review", Set.of());
     // plane pages
     k.put("heading.plane", Set.of("plane"));
     k.put("plane.verdict", Set.of("verdict", "dof", "designDof", "tolerance", "designTolerance"));
@@ -122,6 +121,7 @@ final class TemplateSpec {
     k.put("support.free", Set.of());
     k.put("plane.part", Set.of("letter", "state", "lifts", "bays"));
     k.put("plane.part.held", Set.of("lifts", "bays"));
+    k.put("plane.part.carried", Set.of("lifts"));
     k.put("plane.part.sways", Set.of());
     k.put("plane.part.free", Set.of());
     k.put("plane.design", Set.of("number", "date", "author"));

@@ -13,6 +13,7 @@ import java.util.Map;
 import java.util.Optional;
 import org.bracewalk.core.model.Millimetres;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.Support;
@@ -26,7 +27,7 @@ import org.bracewalk.core.port.StoreException;
 final class JdbcPlaneRepository implements PlaneRepository {
   private static final String INSERT =
       """
-      INSERT INTO planes (structure_id, name, lifts, bays, support) VALUES (?, ?, ?, ?, ?)
+      INSERT INTO planes (structure_id, name, lifts, bays, support, role) VALUES (?, ?, ?, ?, ?, ?)
       """;
   private static final String INSERT_WIDTH =
       """
@@ -38,7 +39,7 @@ final class JdbcPlaneRepository implements PlaneRepository {
       """;
   private static final String SELECT =
       """
-      SELECT id, structure_id, name, lifts, bays, support FROM planes
+      SELECT id, structure_id, name, lifts, bays, support, role FROM planes
       """;
   private static final String WIDTHS =
       """
@@ -107,12 +108,13 @@ final class JdbcPlaneRepository implements PlaneRepository {
                     s.setInt(3, grid.lifts());
                     s.setInt(4, grid.bays());
                     s.setString(5, grid.support().label());
+                    s.setString(6, plane.role().label());
                     s.executeUpdate();
                     id = db.lastInsertId();
                   }
                   insertLengths(c, INSERT_WIDTH, id, widths);
                   insertLengths(c, INSERT_HEIGHT, id, heights);
-                  return new PlaneRecord(id, plane.structureId(), plane.name(), grid);
+                  return new PlaneRecord(id, plane.structureId(), plane.name(), grid, plane.role());
                 },
                 SqlErrors.Subject.of(
                     "plane '" + plane.name() + "' of structure " + plane.structureId())));
@@ -310,7 +312,8 @@ final class JdbcPlaneRepository implements PlaneRepository {
                             r.getInt("bays"),
                             null,
                             null,
-                            Support.fromLabel(r.getString("support")))));
+                            Support.fromLabel(r.getString("support"))),
+                        PlaneRole.fromLabel(r.getString("role"))));
               }
             }
           }
@@ -327,7 +330,8 @@ final class JdbcPlaneRepository implements PlaneRepository {
                         g.bays(),
                         Millimetres.toMetres(lengths(WIDTHS, p.id())),
                         Millimetres.toMetres(lengths(HEIGHTS, p.id())),
-                        g.support())));
+                        g.support()),
+                    p.role()));
           }
           return full;
         });

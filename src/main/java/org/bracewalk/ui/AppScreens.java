@@ -166,7 +166,7 @@ public final class AppScreens implements ScreenFactory {
     // next inspection, so the walk continues against the design it started with
     DesignRevision design = services.inspections().designInForce(insp.id(), plane.id());
     WalkViewModel vm =
-        new WalkViewModel(design.design(), st.name() + ", " + plane.name(),
+        new WalkViewModel(design.design(), st.name() + ", " + plane.name(), plane.role(),
             InspectionMarkRecorder.existing(services.inspections(), insp.id(), plane.id()),
             new InspectionMarkRecorder(services.inspections(), insp.id(), plane.id(), insp.inspectorName()),
             analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised());

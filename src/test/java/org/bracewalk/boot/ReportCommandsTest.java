@@ -45,7 +45,7 @@ class ReportCommandsTest {
     Path pdf = dir.resolve("out/impact.pdf");
     Run made = run("report", "--db", db.toString(), "--inspection", "2", "--out", pdf.toString());
     assertThat(made.code()).as(made.err()).isZero();
-    assertThat(made.out()).contains("wrote " + pdf).contains("frame 2: LOST RIGIDITY")
+    assertThat(made.out()).contains("wrote " + pdf).contains("frame 2: \u25b2 Lost rigidity. Keep people and loads off lifts 1-5, bay 1")
         .containsPattern("record fingerprint [0-9a-f]{64}");
     assertThat(Files.readAllBytes(pdf)).startsWith("%PDF-".getBytes(StandardCharsets.US_ASCII));
 

@@ -164,9 +164,9 @@ class StoreCommandLineTest {
     assertThat(r.out())
         .contains("plane 2 'frame 2'")
         .contains("inspection 1 (routine")
-        .contains("rigid as built")
+        .contains("design revision 1: \u25a0 Holds its shape; 5 of 5 panels inspected")
         .contains("inspection 2 (after-impact")
-        .contains("NOT rigid as built (2 degrees of freedom)")
+        .contains("\u25b2 Lost rigidity, 2 degrees of freedom (Keep people and loads off lifts 1-5, bay 1")
         .contains("lift 1, bay 1: sound -> damaged-ineffective")
         .contains("lift 2, bay 1: sound -> damaged-ineffective");
   }
@@ -223,7 +223,7 @@ class StoreCommandLineTest {
     Run impact = run("analyse", "--db", db(), "--inspection", "2");
     assertThat(impact.code()).isEqualTo(1);
     assertThat(impact.out()).contains("lost rigidity: frame 2")
-        .contains("Keep people and loads off lifts 1, 2 (all bays)");
+        .contains("Keep people and loads off lifts 1-5, bay 1");
     Run json = run("analyse", "--db", db(), "--inspection", "2", "--format", "json");
     assertThat(json.code()).isEqualTo(1);
     JsonNode root = new ObjectMapper().readTree(json.out());

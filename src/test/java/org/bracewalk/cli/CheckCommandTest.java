@@ -60,6 +60,7 @@ class CheckCommandTest {
     ObjectNode copy = verdict.deepCopy();
     copy.remove("caution");
     copy.remove("keepOff");
+    copy.remove("keepOffZone");
     for (String state : new String[] {"design", "asBuilt"}) {
       if (copy.has(state)) {
         ((ObjectNode) copy.get(state)).remove("lossToleranceExact");
@@ -80,8 +81,12 @@ class CheckCommandTest {
     JsonNode expected = JSON.readTree(resource("contract-example.expected.json"));
     assertThat(contractFields(actual)).isEqualTo(expected);
     assertThat(actual.get("caution").asText()).contains("does not check the strength of members");
+    // added field keepOffZone: lift 3 sways on a pinned base, so lift 4 above it is carried
+    // sideways with it (shared/design/analysis.md): the zone is lifts 3-4, every bay
+    assertThat(actual.get("keepOffZone")).isEqualTo(JSON.readTree(
+        "{\"lifts\": [3, 4], \"bays\": [1, 2, 3, 4, 5], \"offloadBeside\": false}"));
     assertThat(actual.get("keepOff").asText()).isEqualTo(
-        "Keep people and loads off lift 3 (all bays) until a competent person has acted.");
+        "Keep people and loads off lifts 3, 4, bays 1-5 until a competent person has acted.");
   }
 
   @Test
@@ -98,6 +103,23 @@ class CheckCommandTest {
   }
 
   @Test
+  void theRoleOfAnUprightFrameAddsTheBeamBaysBesideItToTheKeepOffZone() throws IOException {
+    Run frame = run("check", design.toString(), asBuilt.toString(), "--format", "json", "--role", "upright-frame");
+    assertThat(frame.code()).isEqualTo(1);
+    JsonNode v = JSON.readTree(frame.out());
+    assertThat(v.at("/keepOffZone/offloadBeside").asBoolean()).isTrue();
+    assertThat(v.get("keepOff").asText()).contains("off-load the beam bays on both sides of this upright frame");
+    // the contract's fields do not change with the role
+    assertThat(contractFields(v)).isEqualTo(JSON.readTree(resource("contract-example.expected.json")));
+    Run text = run("check", design.toString(), asBuilt.toString(), "--role", "upright-frame");
+    assertThat(text.out().replaceAll("\\s+", " ")).contains("off-load the beam bays on both sides of this upright frame");
+    Run bad = run("check", design.toString(), "--role", "shelf");
+    assertThat(bad.code()).isEqualTo(2);
+    assertThat(bad.out()).isEmpty();
+    assertThat(bad.err()).contains("--role").contains("unknown plane role 'shelf'");
+  }
+
+  @Test
   void aRigidDesignOnItsOwnExitsZeroWithAnEmptyRepair() throws IOException {
     Run r = run("check", design.toString(), "--format", "json");
 
@@ -108,6 +130,7 @@ class CheckCommandTest {
     assertThat(v.get("repair").get("braces")).isEmpty();
     assertThat(v.get("repair").get("minimum").asInt()).isZero();
     assertThat(v.has("keepOff")).isFalse();
+    assertThat(v.has("keepOffZone")).isFalse();
   }
 
   @Test
@@ -137,7 +160,7 @@ class CheckCommandTest {
     assertThat(rigid.out()).contains("As designed: holds its shape.").doesNotContain("Keep people");
     assertThat(lost.out())
         .contains("As built: has lost rigidity: 1 independent motion.")
-        .contains("Keep people and loads off lift 3 (all bays) until a competent person has acted.");
+        .contains("Keep people and loads off lifts 3, 4, bays 1-5 until a competent person has acted.");
   }
 
   @Test

@@ -58,7 +58,7 @@ class PdfRepairOrderRendererTest {
   void theKeepOffNoteAndDoneBoxesArePresent() throws IOException {
     String text = PdfReportRendererTest.flat(String.join("\n", PdfReportRendererTest.pageTexts(pdf)));
     assertThat(text).contains("Keep people and loads off every part named here as out of service")
-        .contains("review by a licensed engineer");
+        .contains("reviewed by a licensed engineer");
     assertThat(text.split("_______________ date", -1)).hasSize(ReportFixtures.actions().size() + 1);
   }
 

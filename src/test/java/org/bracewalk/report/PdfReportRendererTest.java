@@ -91,9 +91,9 @@ class PdfReportRendererTest {
     String first = flat(pages.get(0));
     String last = flat(pages.get(pages.size() - 1) + pages.get(Math.max(0, pages.size() - 2)));
     for (String s : new String[] {
-        "geometric check of bracing continuity on a pin-jointed model",
+        "on a model in which every joint is a pin",
         "keep people and loads off the affected part",
-        "review by a licensed engineer"}) {
+        "reviewed by a licensed engineer"}) {
       assertThat(first).contains(s);
       assertThat(last).contains(s);
     }

@@ -22,7 +22,8 @@ import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.core.port.report.PlaneSection;
-import org.bracewalk.core.port.report.PlaneVerdict;
+import org.bracewalk.app.verdict.Verdict;
+import org.bracewalk.app.verdict.VerdictKind;
 import org.bracewalk.core.port.report.ReportContent;
 import org.junit.jupiter.api.Test;
 
@@ -94,8 +95,8 @@ class RandomPlanesRenderTest {
     for (int k = 1; k <= 24; k++) {
       planes.add(plane(rnd, k, engine));
     }
-    assertThat(planes).extracting(PlaneSection::verdict)
-        .contains(PlaneVerdict.HOLDS_SHAPE, PlaneVerdict.LOST_RIGIDITY);
+    assertThat(planes).extracting(p -> Verdict.of(p.analysis(), p.role()).kind())
+        .contains(VerdictKind.HOLDS, VerdictKind.LOST);
     ReportContent base = ReportFixtures.report(true);
     ReportContent r = new ReportContent(base.header(), base.particulars(), planes, List.of(),
         List.of(), base.fingerprint());

@@ -125,10 +125,10 @@ class TemplatesTest {
     assertThat(PdfReportRendererTest.pageTexts(out.toByteArray()).get(0))
         .contains("Bracing survey of Hollin Vale Scaffolds Ltd");
 
-    TemplateSource broken = folderWith(replaceLine(packedText(), "caution.review", ""));
+    TemplateSource broken = folderWith(replaceLine(packedText(), "caution.lost", ""));
     ByteArrayOutputStream none = new ByteArrayOutputStream();
     assertThatThrownBy(() -> new PdfReportRenderer(broken, "en").renderReport(ReportFixtures.report(true), none))
-        .hasMessageContaining("key 'caution.review' is missing");
+        .hasMessageContaining("key 'caution.lost' is missing");
     assertThat(none.size()).isZero();
   }
 }

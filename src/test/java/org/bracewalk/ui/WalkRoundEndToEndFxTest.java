@@ -124,7 +124,7 @@ class WalkRoundEndToEndFxTest {
     }
     assertThat(text(robot, "#walk-progress")).isEqualTo("50 of 50 panels");
     assertThat(text(robot, "#walk-alarm"))
-        .contains("Keep people and loads off lifts 3\u20135, all bays")
+        .contains("Keep people and loads off lifts 3-5, bays 1-10")
         .contains("competent person");
 
     // findings: the proposed repair is one brace in lift 3

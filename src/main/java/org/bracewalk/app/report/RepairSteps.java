@@ -6,18 +6,14 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.TreeSet;
-import org.bracewalk.core.analysis.Block;
 import org.bracewalk.core.analysis.RepairBrace;
 import org.bracewalk.core.analysis.RestoreItem;
-import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
-import org.bracewalk.core.model.Support;
 import org.bracewalk.core.port.report.BowAssessment;
 import org.bracewalk.core.port.report.PlaneSection;
-import org.bracewalk.core.port.report.PlaneVerdict;
+import org.bracewalk.app.verdict.Verdict;
 import org.bracewalk.core.port.report.RackDamageLevel;
 import org.bracewalk.core.port.report.RepairStep;
 import org.bracewalk.core.port.report.RepairStepKind;
@@ -58,12 +54,12 @@ public final class RepairSteps {
     List<Draft> scheduled = new ArrayList<>();
     for (PlaneSection plane : planes) {
       String name = plane.name();
-      StateAnalysis state = plane.analysis().analysedState();
       Map<PanelRef, BowAssessment> planeBows = bows.getOrDefault(name, Map.of());
       Set<PanelRef> covered = new HashSet<>();
       boolean planeIsolated = false;
-      if (plane.verdict() != PlaneVerdict.HOLDS_SHAPE) {
-        List<Integer> lifts = isolatedLifts(plane, state);
+      Verdict verdict = Verdict.of(plane.analysis(), plane.role(), !plane.findings().isEmpty());
+      if (verdict.keepOffZone().isPresent()) {
+        List<Integer> lifts = verdict.keepOffZone().get().lifts();
         isolate.add(new Draft(name, new PanelRef(lifts.get(0), 1), lifts,
             RepairStepKind.TAKE_OUT_OF_SERVICE, null, RepairUrgency.ISOLATE, false, day));
         planeIsolated = true;
@@ -113,32 +109,6 @@ public final class RepairSteps {
       }
     }
     return steps;
-  }
-
-  /** The lifts to keep people and loads off when a plane lost rigidity. */
-  static List<Integer> isolatedLifts(PlaneSection plane, StateAnalysis state) {
-    int lifts = plane.design().grid().lifts();
-    boolean anyFixed = state.blocks().stream().anyMatch(Block::fixed);
-    if (plane.design().grid().support() == Support.PINNED_BASE && anyFixed) {
-      TreeSet<Integer> swaying = new TreeSet<>();
-      for (Block b : state.blocks()) {
-        if (!b.fixed()) {
-          swaying.addAll(b.lifts());
-        }
-      }
-      if (!swaying.isEmpty()) {
-        List<Integer> out = new ArrayList<>();
-        for (int i = swaying.first(); i <= lifts; i++) {
-          out.add(i);
-        }
-        return out;
-      }
-    }
-    List<Integer> all = new ArrayList<>();
-    for (int i = 1; i <= lifts; i++) {
-      all.add(i);
-    }
-    return all;
   }
 
   private static boolean uninspected(PlaneSection plane, PanelRef p) {

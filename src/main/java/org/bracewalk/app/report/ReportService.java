@@ -490,7 +490,8 @@ public final class ReportService {
       PlaneAnalysis analysis = analyzer.analyse(p.design().design(), asBuilt);
       String name = p.plane().name();
       sections.add(new PlaneSection(name, p.design().design(), asBuilt, panelFindings, analysis,
-          new PlaneSection.DesignRef(p.design().number(), p.design().date(), p.design().author())));
+          new PlaneSection.DesignRef(p.design().number(), p.design().date(), p.design().author()),
+          p.plane().role()));
       for (Observation o : latest.values()) {
         if (o.state() == PanelState.SOUND) {
           continue;

@@ -12,6 +12,7 @@ import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.RepairActionKind;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.StructureKind;
@@ -56,9 +57,15 @@ public record SiteFile(Site site, List<StructureData> structures) {
    * (field {@code retired}: {@code at}, {@code by}, {@code reason}; absent for a plane in use).
    */
   public record PlaneData(
-      String name, PlaneGrid grid, List<DesignData> designs, RetirementData retired) {
+      String name, PlaneGrid grid, List<DesignData> designs, RetirementData retired, PlaneRole role) {
     public PlaneData {
       designs = List.copyOf(designs);
+      role = role == null ? PlaneRole.OTHER : role;
+    }
+
+    /** A plane of no particular role. */
+    public PlaneData(String name, PlaneGrid grid, List<DesignData> designs, RetirementData retired) {
+      this(name, grid, designs, retired, PlaneRole.OTHER);
     }
 
     /** A plane in use (not retired). */

@@ -51,6 +51,7 @@ import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.Photo;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.RepairAction;
@@ -222,7 +223,7 @@ public final class SiteFileReader {
   }
 
   private PlaneData plane(Obj n) {
-    n.known("name", "lifts", "bays", "support", "bayWidthsMm", "liftHeightsMm", "designs",
+    n.known("name", "lifts", "bays", "support", "role", "bayWidthsMm", "liftHeightsMm", "designs",
         "retired");
     String name = n.requiredText("name");
     long liftCount = n.count("lifts");
@@ -240,6 +241,8 @@ public final class SiteFileReader {
       }
       return v;
     });
+    // optional: absent means other (files written before planes had roles)
+    PlaneRole role = n.has("role") ? n.label("role", PlaneRole::fromLabel) : PlaneRole.OTHER;
     List<Integer> widths = n.millimetres("bayWidthsMm", bays, "bays");
     List<Integer> heights = n.millimetres("liftHeightsMm", lifts, "lifts");
     PlaneGrid grid = new PlaneGrid(lifts, bays, Millimetres.toMetres(widths),
@@ -284,7 +287,7 @@ public final class SiteFileReader {
           () -> new PlaneRetirement(1, at, r.text("by"), r.requiredText("reason")));
       retired = new RetirementData(at, checked.retiredBy(), checked.reason());
     }
-    return new PlaneData(name, grid, designs, retired);
+    return new PlaneData(name, grid, designs, retired, role);
   }
 
   private PlaneDesign designMap(Obj d, PlaneGrid grid) {

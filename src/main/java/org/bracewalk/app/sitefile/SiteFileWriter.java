@@ -21,6 +21,7 @@ import org.bracewalk.core.model.Millimetres;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.app.sitefile.SiteFile.DesignData;
 import org.bracewalk.app.sitefile.SiteFile.InspectionData;
@@ -113,6 +114,9 @@ public final class SiteFileWriter {
     n.put("lifts", g.lifts());
     n.put("bays", g.bays());
     n.put("support", g.support().label());
+    if (p.role() != PlaneRole.OTHER) {
+      n.put("role", p.role().label()); // absent means other, so older files read and write alike
+    }
     ArrayNode widths = n.putArray("bayWidthsMm");
     Millimetres.toMillimetres(g.bayWidths()).forEach(widths::add);
     ArrayNode heights = n.putArray("liftHeightsMm");

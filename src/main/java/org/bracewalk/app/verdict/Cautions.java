@@ -1,11 +1,5 @@
 package org.bracewalk.app.verdict;
 
-import java.util.ArrayList;
-import java.util.List;
-import java.util.TreeSet;
-import org.bracewalk.core.analysis.Block;
-import org.bracewalk.core.analysis.StateAnalysis;
-import org.bracewalk.core.model.PlaneGrid;
 
 /**
  * The cautions every Bracewalk output carries, from "Cautions every output carries" in {@code
@@ -27,50 +21,14 @@ public final class Cautions {
 
   /**
    * What to do while a plane has lost rigidity, naming where: {@code Keep people and loads off
-   * lift 3 (all bays) until a competent person has acted.}
+   * lifts 3-5, bays 1-5 until a competent person has acted.} For an upright frame it adds the beam
+   * bays either side.
    */
-  public static String keepOff(StateAnalysis state, PlaneGrid grid) {
-    return "Keep people and loads off " + swayingPart(state, grid) + " until a competent person has acted.";
-  }
-
-  /**
-   * The part of the plane that can move: the lifts and bays outside the block held by the base, or
-   * the whole plane when nothing is held (a free plane) or the motion is one way only.
-   */
-  static String swayingPart(StateAnalysis state, PlaneGrid grid) {
-    boolean anyFixed = state.blocks().stream().anyMatch(Block::fixed);
-    TreeSet<Integer> lifts = new TreeSet<>();
-    TreeSet<Integer> bays = new TreeSet<>();
-    for (Block b : state.blocks()) {
-      if (!b.fixed()) {
-        lifts.addAll(b.lifts());
-        bays.addAll(b.bays());
-      }
-    }
-    String whole =
-        "the whole plane ("
-            + Wording.numbered("lift", List.copyOf(range(grid.lifts())))
-            + ", "
-            + Wording.numbered("bay", List.copyOf(range(grid.bays())))
-            + ")";
-    if (!anyFixed || state.oneWayOnly() || (lifts.isEmpty() && bays.isEmpty())) {
-      return whole;
-    }
-    List<String> parts = new ArrayList<>();
-    if (!lifts.isEmpty()) {
-      parts.add(Wording.numbered("lift", List.copyOf(lifts)) + (bays.isEmpty() ? " (all bays)" : ""));
-    }
-    if (!bays.isEmpty()) {
-      parts.add(Wording.numbered("bay", List.copyOf(bays)) + (lifts.isEmpty() ? " (all lifts)" : ""));
-    }
-    return String.join(" and ", parts);
-  }
-
-  private static TreeSet<Integer> range(int n) {
-    TreeSet<Integer> all = new TreeSet<>();
-    for (int i = 1; i <= n; i++) {
-      all.add(i);
-    }
-    return all;
+  public static String keepOff(KeepOffZone zone) {
+    return "Keep people and loads off " + zone.where()
+        + (zone.offloadBeside()
+            ? ", and off-load the beam bays on both sides of this upright frame,"
+            : "")
+        + " until a competent person has acted.";
   }
 }

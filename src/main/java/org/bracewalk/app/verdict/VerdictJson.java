@@ -17,6 +17,7 @@ import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRole;
 
 /**
  * The JSON verdict of {@code shared/design/check-contract.md}. The contract's fields keep their
@@ -26,7 +27,10 @@ import org.bracewalk.core.model.PlaneGrid;
  *   <li>{@code lossToleranceExact: false} in a state whose loss tolerance is only a lower bound
  *       (absent when exact);
  *   <li>{@code caution} at the top: the standing caution of {@link Cautions#STANDING};
- *   <li>{@code keepOff} at the top when the analysed state is not rigid: {@link Cautions#keepOff}.
+ *   <li>{@code keepOff} at the top when the analysed state is not rigid: {@link Cautions#keepOff};
+ *   <li>{@code keepOffZone} beside it: {@code {"lifts": [...], "bays": [...], "offloadBeside":
+ *       true|false}}, the {@link KeepOffZone} of the one {@link Verdict} (absent when nothing need
+ *       be kept off).
  * </ul>
  *
  * Lists keep the engine's order (lift, then bay). Stateless; safe to share.
@@ -38,8 +42,13 @@ public final class VerdictJson {
 
   public VerdictJson() {}
 
-  /** The whole verdict on one plane: support, lifts, bays, design, asBuilt (if any), repair. */
+  /** As {@link #verdict(PlaneAnalysis, PlaneRole)} for a plane of no particular role. */
   public ObjectNode verdict(PlaneAnalysis analysis) {
+    return verdict(analysis, PlaneRole.OTHER);
+  }
+
+  /** The whole verdict on one plane: support, lifts, bays, design, asBuilt (if any), repair. */
+  public ObjectNode verdict(PlaneAnalysis analysis, PlaneRole role) {
     PlaneGrid grid = analysis.grid();
     ObjectNode root = NODES.objectNode();
     root.put("support", grid.support().label());
@@ -47,11 +56,19 @@ public final class VerdictJson {
     root.put("bays", grid.bays());
     parts(analysis).putInto(root);
     root.put("caution", Cautions.STANDING);
-    StateAnalysis analysed = analysis.analysedState();
-    if (!analysed.rigid()) {
-      root.put("keepOff", Cautions.keepOff(analysed, grid));
-    }
+    putKeepOff(root, Verdict.of(analysis, role));
     return root;
+  }
+
+  /** Adds {@code keepOff} (words) and {@code keepOffZone} when the verdict has a zone. */
+  public void putKeepOff(ObjectNode target, Verdict verdict) {
+    verdict.keepOffZone().ifPresent(z -> {
+      target.put("keepOff", Cautions.keepOff(z));
+      ObjectNode zone = target.putObject("keepOffZone");
+      numbers(zone.putArray("lifts"), z.lifts());
+      numbers(zone.putArray("bays"), z.bays());
+      zone.put("offloadBeside", z.offloadBeside());
+    });
   }
 
   /** The design, asBuilt and repair parts on their own, for outputs that nest them. */

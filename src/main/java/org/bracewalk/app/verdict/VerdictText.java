@@ -21,6 +21,7 @@ import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.Support;
 
 /**
@@ -56,9 +57,22 @@ public final class VerdictText {
       PlaneDesign design,
       Optional<AsBuiltPlane> asBuilt,
       PlaneAnalysis analysis) {
+    return render(title, supportNote, design, asBuilt, analysis, PlaneRole.OTHER);
+  }
+
+  /** As above, for a plane of the given role (an upright frame's zone takes in the bays beside). */
+  public String render(
+      String title,
+      String supportNote,
+      PlaneDesign design,
+      Optional<AsBuiltPlane> asBuilt,
+      PlaneAnalysis analysis,
+      PlaneRole role) {
+    Verdict verdict = Verdict.of(analysis, role);
     PlaneGrid grid = analysis.grid();
     StringBuilder out = new StringBuilder();
     out.append("Bracewalk check: ").append(title).append('\n');
+    out.append("Verdict: ").append(verdict.headline()).append('\n');
     out.append("Plane: ")
         .append(Wording.plural(grid.lifts(), "lift", "lifts"))
         .append(" x ")
@@ -88,9 +102,8 @@ public final class VerdictText {
     }
 
     out.append('\n');
-    StateAnalysis analysed = analysis.analysedState();
-    if (!analysed.rigid()) {
-      wrap(out, Cautions.keepOff(analysed, grid), "");
+    if (verdict.keepOffZone().isPresent()) {
+      wrap(out, verdict.keepOff(), "");
     }
     wrap(out, Cautions.STANDING, "");
     return out.toString();
@@ -167,7 +180,7 @@ public final class VerdictText {
       }
       shown++;
       if (b.fixed()) {
-        out.append("    held by the base: ").append(extent(b)).append('\n');
+        heldAndCarried(out, b, Verdict.lowestSwayingLift(grid, s));
       } else {
         boolean together = b.lifts().size() + b.bays().size() > 1;
         out.append("    ")
@@ -177,6 +190,27 @@ public final class VerdictText {
             .append(together ? " can sway together" : " can sway")
             .append(anyFixed ? ", not held\n" : "\n");
       }
+    }
+  }
+
+  /**
+   * The block held by the base, split where a lift below sways: a lift above the lowest swaying
+   * lift keeps its shape but is carried sideways with it, so it is never called held.
+   */
+  private static void heldAndCarried(StringBuilder out, Block fixed, int lowestSwaying) {
+    List<Integer> held = new ArrayList<>();
+    List<Integer> carried = new ArrayList<>();
+    for (int lift : fixed.lifts()) {
+      (lift < lowestSwaying ? held : carried).add(lift);
+    }
+    String bays = fixed.bays().isEmpty() ? "" : "; " + Wording.numbered("bay", fixed.bays());
+    if (!held.isEmpty() || carried.isEmpty()) {
+      out.append("    held by the base: ").append(Wording.numbered("lift", held)).append(bays).append('\n');
+    }
+    if (!carried.isEmpty()) {
+      out.append("    keeps its shape but is carried sideways by the swaying lift below: ")
+          .append(Wording.numbered("lift", carried))
+          .append('\n');
     }
   }
 
@@ -271,9 +305,14 @@ public final class VerdictText {
     Map<Block, String> names = blockNames(s, grid);
     String[] liftMark = new String[grid.lifts() + 1];
     String[] bayMark = new String[grid.bays() + 1];
+    int lowestSwaying = s.rigid() ? Integer.MAX_VALUE : Verdict.lowestSwayingLift(grid, s);
+    boolean anyCarried = false;
     for (Block b : s.blocks()) {
       for (int lift : b.lifts()) {
-        liftMark[lift] = names.get(b);
+        // a held lift above a swaying one is carried sideways with it: marked, never blank
+        boolean carried = b.fixed() && s.blocks().size() > 1 && lift > lowestSwaying;
+        liftMark[lift] = carried ? ">" : names.get(b);
+        anyCarried |= carried;
       }
       for (int bay : b.bays()) {
         bayMark[bay] = names.get(b);
@@ -338,6 +377,9 @@ public final class VerdictText {
         out.append("        A, B, ...: the block of the panel's lift (the block row: of each bay); nothing is held\n");
       } else {
         out.append("        A, B, ...: the panel's lift belongs to a block that can sway; blank: held by the base\n");
+      }
+      if (anyCarried) {
+        out.append("        >: the lift keeps its shape but is carried sideways by a swaying lift below it\n");
       }
     }
   }

@@ -12,17 +12,24 @@ import java.util.Objects;
  * @param structureId the structure it belongs to
  * @param name unique within the structure (the store enforces it)
  * @param grid lifts, bays, dimensions and support
+ * @param role what the plane is in its structure (decides what else a keep-off zone covers)
  */
-public record PlaneRecord(long id, long structureId, String name, PlaneGrid grid) {
+public record PlaneRecord(long id, long structureId, String name, PlaneGrid grid, PlaneRole role) {
+
+  /** A plane of no particular role ({@link PlaneRole#OTHER}). */
+  public PlaneRecord(long id, long structureId, String name, PlaneGrid grid) {
+    this(id, structureId, name, grid, PlaneRole.OTHER);
+  }
 
   public PlaneRecord {
     Text.id(id, "plane id");
     Text.ref(structureId, "structure");
     name = Text.required(name, "plane name");
     Objects.requireNonNull(grid, "grid");
+    Objects.requireNonNull(role, "role");
   }
 
   public PlaneRecord withId(long newId) {
-    return new PlaneRecord(newId, structureId, name, grid);
+    return new PlaneRecord(newId, structureId, name, grid, role);
   }
 }

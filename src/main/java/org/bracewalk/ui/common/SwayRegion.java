@@ -2,30 +2,23 @@ package org.bracewalk.ui.common;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Set;
-import java.util.TreeSet;
 import org.bracewalk.core.analysis.Block;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
 
 /**
- * Which part of a plane moves when it is not rigid, worked out from its blocks. A panel whose lift
- * and bay lie in different blocks shears (it does not stay square). On a pinned base every bay is
- * held, so a lift in a free block shears, and every lift above it is carried sideways with it:
- * the affected part runs from the lowest shearing lift to the top. On a free plane the affected
- * part is every lift and bay holding a shearing panel.
+ * Which panels of a plane shear when it is not rigid, worked out from its blocks, for drawing: a
+ * panel whose lift and bay lie in different blocks does not stay square. Where people and loads
+ * must be kept off is not decided here but by the one verdict ({@code app.verdict.Verdict}'s
+ * keep-off zone).
  *
  * @param shearing the panels that do not stay square, lift-then-bay order
- * @param affectedLifts lifts people and loads must be kept off
- * @param affectedBays bays people and loads must be kept off
  */
-public record SwayRegion(List<PanelRef> shearing, Set<Integer> affectedLifts, Set<Integer> affectedBays) {
+public record SwayRegion(List<PanelRef> shearing) {
 
   public SwayRegion {
     shearing = List.copyOf(shearing);
-    affectedLifts = Set.copyOf(affectedLifts);
-    affectedBays = Set.copyOf(affectedBays);
   }
 
   /** Nothing moves: one block, or no blocks given. */
@@ -62,7 +55,7 @@ public record SwayRegion(List<PanelRef> shearing, Set<Integer> affectedLifts, Se
       }
     }
     if (blocks.size() <= 1) {
-      return new SwayRegion(List.of(), Set.of(), Set.of());
+      return new SwayRegion(List.of());
     }
     if (grid.support() == Support.PINNED_BASE && fixed >= 0) {
       for (int j = 1; j <= n; j++) {
@@ -72,25 +65,13 @@ public record SwayRegion(List<PanelRef> shearing, Set<Integer> affectedLifts, Se
       }
     }
     List<PanelRef> shearing = new ArrayList<>();
-    TreeSet<Integer> lifts = new TreeSet<>();
-    TreeSet<Integer> bays = new TreeSet<>();
     for (int i = 1; i <= m; i++) {
       for (int j = 1; j <= n; j++) {
         if (liftBlock[i] != bayBlock[j]) {
           shearing.add(new PanelRef(i, j));
-          lifts.add(i);
-          bays.add(j);
         }
       }
     }
-    if (grid.support() == Support.PINNED_BASE && !lifts.isEmpty()) {
-      for (int i = lifts.first(); i <= m; i++) {
-        lifts.add(i);
-      }
-      for (int j = 1; j <= n; j++) {
-        bays.add(j);
-      }
-    }
-    return new SwayRegion(shearing, lifts, bays);
+    return new SwayRegion(shearing);
   }
 }

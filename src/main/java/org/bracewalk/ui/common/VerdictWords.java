@@ -1,131 +1,81 @@
 package org.bracewalk.ui.common;
 
+import org.bracewalk.app.verdict.Verdict;
+import org.bracewalk.app.verdict.VerdictKind;
 import org.bracewalk.core.analysis.StateAnalysis;
-import org.bracewalk.core.model.PlaneGrid;
 
 /**
- * The verdict on a plane in words a person on site can act on. A lost verdict names the lifts and
- * bays to keep people and loads off and says a competent person must act; a holding verdict says
- * what kind of check it was and never calls the structure safe.
+ * The one {@link Verdict} laid out for a screen: the headline is the verdict's own words, the
+ * advice names its keep-off zone in the words of {@link Verdict#keepOff()}, so the walk-round, the
+ * findings screen, the command line and the documents say the same. Never calls a structure safe.
  *
  * @param kind which of the verdicts
  * @param headline a few words, with the verdict's symbol
  * @param detail what the analysis found: motions, critical braces, loss tolerance
  * @param advice what to do now
+ * @param verdict the verdict these words show
+ * @param action what the competent person is to do (empty unless it lost rigidity)
  */
-public record VerdictWords(VerdictKind kind, String headline, String detail, String advice) {
-
-  /** The standing caution every verdict carries (from the project's trade facts). */
-  public static final String CAUTION =
-      "A geometric check of bracing continuity on a pin-jointed model: it does not check member"
-          + " strength, connections, ties, foundations, loading or plumb, and does not replace the"
-          + " inspection. Restoring rigidity and any deviation from the design need review by a"
-          + " licensed engineer or the system's manufacturer under the local codes.";
+public record VerdictWords(
+    VerdictKind kind, String headline, String detail, String advice, Verdict verdict, String action) {
 
   /**
-   * Words for a state.
+   * The banner over a plane that lost rigidity, built from the parts (never cut out of the
+   * advice): {@code LOST RIGIDITY — Aisle C, frame 2. Keep people and loads off lifts 1-5, bay 1
+   * until a competent person has acted. Competent person to act: ...}; empty otherwise.
+   */
+  public String alarm(String title) {
+    if (!kind.lost()) {
+      return "";
+    }
+    return kind.headline().toUpperCase(java.util.Locale.ROOT) + " \u2014 "
+        + (title == null || title.isBlank() ? "" : title + ". ") + verdict.keepOff() + " " + action;
+  }
+
+  /**
+   * Words for a verdict.
    *
-   * @param grid the plane
-   * @param seen the state with panels not yet inspected taken as designed (so what is shown is
-   *     what the marks so far prove)
-   * @param unknownPanels panels not inspected (0 for a design or a finished walk-round)
-   * @param rigidCountingUnknownMissing the conservative verdict, panels not inspected counted as
-   *     missing
+   * @param verdict the one verdict
+   * @param state the conservative state it was classified from (loss tolerance, critical braces)
    * @param repairCount braces in the minimal repair set
    */
-  public static VerdictWords of(
-      PlaneGrid grid,
-      StateAnalysis seen,
-      int unknownPanels,
-      boolean rigidCountingUnknownMissing,
-      int repairCount) {
-    if (!seen.rigid()) {
-      SwayRegion sway = SwayRegion.of(grid, seen.blocks());
-      boolean oneWay = seen.oneWayOnly() || sway.isEmpty();
-      VerdictKind kind = oneWay && seen.degreesOfFreedom() == 0 ? VerdictKind.SWAYS_ONE_WAY : VerdictKind.LOST;
-      String where = where(grid, sway);
-      String detail;
-      if (kind == VerdictKind.SWAYS_ONE_WAY) {
-        detail =
-            "Tension-only members go slack one way, so the plane can lean that way.";
-      } else {
-        detail =
-            seen.degreesOfFreedom()
-                + (seen.degreesOfFreedom() == 1 ? " independent motion" : " independent motions")
-                + "; shearing: "
-                + Ranges.named("lift", "lifts", liftsOf(sway))
-                + shearingBays(grid, sway)
-                + ".";
-      }
-      String fix =
-          repairCount > 0
-              ? " Competent person to act: fit the "
-                  + repairCount
-                  + (repairCount == 1 ? " brace" : " braces")
-                  + " shown under Findings, or take this part out of service."
-              : " Competent person to act: take this part out of service until it is re-braced.";
-      String advice =
-          "Keep people and loads off " + where + " until a competent person has acted." + fix;
-      if (unknownPanels > 0) {
-        advice += " " + unknownPanels + plural(unknownPanels, " panel", " panels") + " still to inspect.";
-      }
-      return new VerdictWords(kind, kind.symbol() + " " + kind.words(), detail, advice);
+  public static VerdictWords of(Verdict verdict, StateAnalysis state, int repairCount) {
+    VerdictKind kind = verdict.kind();
+    int unknown = verdict.unknownPanels();
+    String stillToInspect =
+        unknown > 0 ? " " + unknown + plural(unknown, " panel", " panels") + " still to inspect." : "";
+    if (kind.lost()) {
+      String detail = kind == VerdictKind.SWAYS_ONE_WAY
+          ? "Tension-only members go slack one way, so the plane can lean that way."
+          : verdict.degreesOfFreedom()
+              + plural(verdict.degreesOfFreedom(), " independent motion", " independent motions")
+              + "; the lowest swaying lift carries every lift above it sideways.";
+      String fix = repairCount > 0
+          ? "Competent person to act: fit the " + repairCount + plural(repairCount, " brace", " braces")
+              + " shown under Findings, or take this part out of service."
+          : "Competent person to act: take this part out of service until it is re-braced.";
+      return new VerdictWords(kind, kind.headline(), detail,
+          verdict.keepOff() + " " + fix + stillToInspect, verdict, fix);
     }
-    String tolerance = tolerance(seen);
-    if (!rigidCountingUnknownMissing && unknownPanels > 0) {
-      VerdictKind kind = VerdictKind.DEPENDS_ON_UNSEEN;
-      return new VerdictWords(
-          kind,
-          kind.symbol() + " " + kind.words(),
-          "Holds its shape if the "
-              + unknownPanels
-              + plural(unknownPanels, " panel", " panels")
-              + " not yet inspected are as designed. "
-              + tolerance,
-          "Inspect the remaining panels before relying on this verdict.");
+    String tolerance = tolerance(state);
+    if (kind == VerdictKind.DEPENDS_ON_UNSEEN || kind == VerdictKind.NOT_INSPECTED) {
+      return new VerdictWords(kind, kind.headline(),
+          "Holds its shape only if the " + unknown + plural(unknown, " panel", " panels")
+              + " not yet inspected are as designed.",
+          "Inspect the remaining panels before relying on this verdict."
+              + (verdict.keepOffZone().isPresent() ? " Until then, at worst: " + verdict.keepOff() : ""),
+          verdict, "");
     }
-    VerdictKind kind = VerdictKind.HOLDS;
-    String unseen =
-        unknownPanels > 0
-            ? " The " + unknownPanels + plural(unknownPanels, " panel", " panels")
-                + " not inspected cannot change this."
-            : "";
-    return new VerdictWords(
-        kind,
-        kind.symbol() + " " + kind.words(),
-        tolerance + unseen,
-        "Bracing check only: record any other defect and act on it as the inspection requires.");
+    String unseen = unknown > 0
+        ? " The " + unknown + plural(unknown, " panel", " panels") + " not inspected cannot change this."
+        : "";
+    return new VerdictWords(kind, kind.headline(), tolerance + unseen,
+        "Bracing check only: record any other defect and act on it as the inspection requires.",
+        verdict, "");
   }
 
   private static String plural(int n, String one, String many) {
     return n == 1 ? one : many;
-  }
-
-  private static java.util.Set<Integer> liftsOf(SwayRegion sway) {
-    java.util.TreeSet<Integer> lifts = new java.util.TreeSet<>();
-    sway.shearing().forEach(p -> lifts.add(p.lift()));
-    return lifts;
-  }
-
-  private static String shearingBays(PlaneGrid grid, SwayRegion sway) {
-    java.util.TreeSet<Integer> bays = new java.util.TreeSet<>();
-    sway.shearing().forEach(p -> bays.add(p.bay()));
-    if (bays.size() == grid.bays()) {
-      return " (all bays)";
-    }
-    return ", " + Ranges.named("bay", "bays", bays);
-  }
-
-  private static String where(PlaneGrid grid, SwayRegion sway) {
-    if (sway.isEmpty()) {
-      return "the whole plane (lifts 1\u2013" + grid.lifts() + ", bays 1\u2013" + grid.bays() + ")";
-    }
-    String lifts = Ranges.named("lift", "lifts", sway.affectedLifts());
-    String bays =
-        sway.affectedBays().size() == grid.bays()
-            ? "all bays"
-            : Ranges.named("bay", "bays", sway.affectedBays());
-    return lifts + ", " + bays;
   }
 
   private static String tolerance(StateAnalysis s) {
@@ -133,14 +83,9 @@ public record VerdictWords(VerdictKind kind, String headline, String detail, Str
     String atLeast = s.lossToleranceExact() ? "" : "at least ";
     int critical = s.criticalBraces().size();
     if (k <= 0) {
-      return "No spare bracing: "
-          + critical
-          + (critical == 1 ? " brace is" : " braces are")
+      return "No spare bracing: " + critical + (critical == 1 ? " brace is" : " braces are")
           + " critical, and losing any one lets the plane sway.";
     }
-    return "Stays rigid after losing any "
-        + atLeast
-        + k
-        + (k == 1 ? " brace." : " braces.");
+    return "Stays rigid after losing any " + atLeast + k + (k == 1 ? " brace." : " braces.");
   }
 }

@@ -1,6 +1,8 @@
 package org.bracewalk.ui.common;
 
 import javafx.beans.value.ObservableValue;
+import org.bracewalk.app.verdict.Cautions;
+import org.bracewalk.app.verdict.VerdictKind;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.control.Label;
@@ -84,7 +86,7 @@ public final class Widgets {
     Label detail = text("");
     Label advice = text("");
     advice.setStyle("-fx-font-weight: bold;");
-    Label caution = hint(VerdictWords.CAUTION);
+    Label caution = hint(Cautions.STANDING);
     VBox box = new VBox(head, detail, advice, caution);
     box.getStyleClass().add("verdict");
     Runnable update =

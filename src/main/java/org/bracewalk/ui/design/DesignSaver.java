@@ -1,5 +1,6 @@
 package org.bracewalk.ui.design;
 
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.PlaneDesign;
 
 /** Saves a plane's design as a new revision. */
@@ -10,4 +11,17 @@ public interface DesignSaver {
    * for the status line.
    */
   String save(PlaneDesign design, String author, String note);
+
+  /**
+   * As {@link #save(PlaneDesign, String, String)}, with the role the person chose: it is the role
+   * of a new plane (a stored plane's role is fixed).
+   */
+  default String save(PlaneDesign design, String author, String note, PlaneRole role) {
+    return save(design, author, note);
+  }
+
+  /** The role of the plane being edited (the choice box starts there). */
+  default PlaneRole role() {
+    return PlaneRole.OTHER;
+  }
 }

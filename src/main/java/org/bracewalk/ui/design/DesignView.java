@@ -23,12 +23,13 @@ import javafx.util.StringConverter;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PlaneLimits;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.KeyHelp;
 import org.bracewalk.ui.common.Legend;
 import org.bracewalk.ui.common.PlaneCanvas;
-import org.bracewalk.ui.common.VerdictKind;
-import org.bracewalk.ui.common.VerdictWords;
+import org.bracewalk.app.verdict.VerdictKind;
+import org.bracewalk.app.verdict.Cautions;
 import org.bracewalk.ui.common.Widgets;
 
 /** The design editor screen. Only binds to its view model. */
@@ -79,7 +80,7 @@ public final class DesignView extends BorderPane {
     verdict.setId("design-verdict");
     verdict.setStyle("-fx-font-size: 1.07em;");
     Label tolerance = Widgets.text(vm.toleranceTextProperty());
-    VBox verdictBox = new VBox(6, verdict, tolerance, Widgets.hint(VerdictWords.CAUTION));
+    VBox verdictBox = new VBox(6, verdict, tolerance, Widgets.hint(Cautions.STANDING));
     verdictBox.getStyleClass().add("verdict");
     Runnable style = () -> {
       verdictBox.getStyleClass().removeAll("holds", "lost");
@@ -130,6 +131,25 @@ public final class DesignView extends BorderPane {
     grid.add(heights, 1, 2, 3, 1);
     grid.add(Widgets.mnemonic("Su_pport", support), 0, 3);
     grid.add(support, 1, 3, 3, 1);
+    // what the plane is: its keep-off zone depends on it (an upright frame's takes in the bays
+    // beside it); fixed for a stored plane, chosen for a new plane saved from a changed grid
+    ChoiceBox<PlaneRole> role = new ChoiceBox<>();
+    role.setId("design-role");
+    role.getItems().addAll(PlaneRole.values());
+    role.setConverter(new StringConverter<>() {
+      @Override
+      public String toString(PlaneRole r) {
+        return r == null ? "" : r.words();
+      }
+
+      @Override
+      public PlaneRole fromString(String s) {
+        return null;
+      }
+    });
+    role.valueProperty().bindBidirectional(vm.roleProperty());
+    grid.add(Widgets.mnemonic("R_ole", role), 0, 4);
+    grid.add(role, 1, 4, 3, 1);
     lifts.setPrefWidth(90);
     bays.setPrefWidth(90);
     VBox gridBox = Widgets.box("Grid", grid,

@@ -30,12 +30,13 @@ import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.DialogService;
 import org.bracewalk.ui.common.PlanePicture;
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 
 /**
  * Edits one plane's design: grid size and dimensions, support, and the brace or opening of each
@@ -46,6 +47,7 @@ import org.bracewalk.ui.common.VerdictKind;
 public final class DesignViewModel {
   private final PlaneAnalyzer analyzer;
   private final DesignSaver saver;
+  private final ObjectProperty<PlaneRole> role;
   private final DialogService dialogs;
   private final String title;
 
@@ -79,6 +81,7 @@ public final class DesignViewModel {
       PlaneDesign initial, String title, PlaneAnalyzer analyzer, DesignSaver saver, DialogService dialogs) {
     this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
     this.saver = Objects.requireNonNull(saver, "saver");
+    this.role = new SimpleObjectProperty<>(this, "role", saver.role());
     this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
     this.title = title;
     cursor.set(new PanelRef(1, 1));
@@ -405,7 +408,8 @@ public final class DesignViewModel {
       n = (n.isEmpty() ? "" : n + " ") + "[saved although not rigid as designed; warning acknowledged]";
     }
     try {
-      String rev = saver.save(d, author.get() == null ? "" : author.get().strip(), n);
+      String rev = saver.save(d, author.get() == null ? "" : author.get().strip(), n,
+          role.get() == null ? saver.role() : role.get());
       dirty.set(false);
       status.set("Saved as " + rev + ".");
       return true;
@@ -417,6 +421,14 @@ public final class DesignViewModel {
   }
 
   // ---- properties -----------------------------------------------------------------------------
+
+  /**
+   * What the plane is (upright frame, spine, facade, ...): the role of a new plane saved from a
+   * changed grid; a stored plane keeps its own.
+   */
+  public ObjectProperty<PlaneRole> roleProperty() {
+    return role;
+  }
 
   public String title() {
     return title;

@@ -9,6 +9,7 @@ import org.bracewalk.core.model.DesignRevision;
 import org.bracewalk.core.model.Millimetres;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.ui.common.DialogService;
 
 /**
@@ -31,8 +32,23 @@ public final class PlaneDesignSaver implements DesignSaver {
 
   @Override
   public String save(PlaneDesign design, String author, String note) {
+    return save(design, author, note, plane.role());
+  }
+
+  @Override
+  public PlaneRole role() {
+    return plane.role();
+  }
+
+  @Override
+  public String save(PlaneDesign design, String author, String note, PlaneRole role) {
     LocalDate today = LocalDate.now(clock);
     if (Millimetres.round(design.grid()).equals(plane.grid())) {
+      if (role != plane.role()) {
+        throw new IllegalStateException("plane '" + plane.name() + "' is stored as " + plane.role().words()
+            + " and a stored plane's role is fixed: choose " + plane.role().words()
+            + " to save a revision, or change the grid to save a new plane of another role");
+      }
       DesignRevision r = sites.addDesignRevision(plane.id(), author, today, note, design);
       return "revision " + r.number() + " of plane '" + plane.name() + "'";
     }
@@ -47,7 +63,8 @@ public final class PlaneDesignSaver implements DesignSaver {
       throw new IllegalStateException("not saved: no name given for the new plane");
     }
     PlaneRecord p =
-        sites.createPlane(new PlaneRecord(0, plane.structureId(), name.get(), design.grid()), author, today, note, design);
+        sites.createPlane(new PlaneRecord(0, plane.structureId(), name.get(), design.grid(), role), author, today,
+            note, design);
     return "new plane '" + p.name() + "', revision 1";
   }
 }

@@ -36,7 +36,7 @@ import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.ui.common.DialogService;
 import org.bracewalk.ui.common.PlanePicture;
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 import org.bracewalk.ui.common.VerdictWords;
 
 /**
@@ -133,7 +133,7 @@ public final class FindingsViewModel {
       seen = analyzer.analyseState(design.grid(), AsBuiltPlane.fromFindings(design, optimistic).members());
     }
     List<RepairBrace> repair = analysis.repair().braces();
-    verdict.set(VerdictWords.of(design.grid(), seen, ab.unknownPanels(), ab.state().rigid(), repair.size()));
+    verdict.set(VerdictWords.of(result.verdict(), ab.state(), repair.size()));
     picture.set(new PlanePicture(design, findings, true, seen.blocks(), Set.copyOf(seen.criticalBraces()),
         repair, Set.of(), null));
 
@@ -192,14 +192,7 @@ public final class FindingsViewModel {
   }
 
   private static VerdictKind kind(PlaneResult r) {
-    AsBuiltAnalysis ab = r.analysis().asBuilt().orElseThrow();
-    if (ab.state().rigid()) {
-      return VerdictKind.HOLDS;
-    }
-    if (ab.unknownPanels() > 0 && ab.rigidIfUnknownSound()) {
-      return VerdictKind.DEPENDS_ON_UNSEEN;
-    }
-    return ab.state().oneWayOnly() ? VerdictKind.SWAYS_ONE_WAY : VerdictKind.LOST;
+    return r.verdict().kind();
   }
 
   // ---- documents ------------------------------------------------------------------------------

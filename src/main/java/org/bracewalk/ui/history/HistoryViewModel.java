@@ -17,12 +17,11 @@ import javafx.collections.ObservableList;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.PanelChange;
 import org.bracewalk.app.PlaneHistory;
-import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
 import org.bracewalk.ui.common.PlanePicture;
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 
 /** A plane across the inspections of its structure; the chosen one drawn with its changes marked. */
 public final class HistoryViewModel {
@@ -66,15 +65,7 @@ public final class HistoryViewModel {
   }
 
   static VerdictKind kind(PlaneHistory.Entry e) {
-    StateAnalysis s = e.verdict();
-    if (s.rigid()) {
-      return VerdictKind.HOLDS;
-    }
-    boolean unknown = e.asBuilt().uninspected().size() > 0;
-    if (unknown && e.findings().isEmpty()) {
-      return VerdictKind.NOT_INSPECTED;
-    }
-    return s.oneWayOnly() ? VerdictKind.SWAYS_ONE_WAY : VerdictKind.LOST;
+    return e.summary().kind();
   }
 
   private void show(int i) {

@@ -1,6 +1,6 @@
 package org.bracewalk.ui.sites;
 
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 
 /**
  * One line of the overview: a site, a structure or a plane.
@@ -47,7 +47,9 @@ public record OverviewRow(
     NEVER_INSPECTED("\u25CB never inspected"),
     IN_TIME("\u2713 in time"),
     DUE_TODAY("\u25B7 due today"),
-    OVERDUE("\u25B2 OVERDUE");
+    OVERDUE("\u25B2 OVERDUE"),
+    /** The date is not past, but a plane has lost rigidity: never a tick beside that. */
+    LOST_RIGIDITY("\u25B2 lost rigidity: act and re-inspect now");
 
     private final String words;
 

@@ -61,7 +61,8 @@ public final class SitesView extends BorderPane {
           return;
         }
         setText(r.due().words() + " \u00b7 " + r.nextDue());
-        if (r.due() == OverviewRow.Due.OVERDUE || r.due() == OverviewRow.Due.NEVER_INSPECTED) {
+        if (r.due() == OverviewRow.Due.OVERDUE || r.due() == OverviewRow.Due.NEVER_INSPECTED
+            || r.due() == OverviewRow.Due.LOST_RIGIDITY) {
           getStyleClass().add("overdue");
         }
       }

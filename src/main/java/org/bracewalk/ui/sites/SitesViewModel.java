@@ -23,8 +23,6 @@ import org.bracewalk.app.ImportedSite;
 import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.PlaneResult;
 import org.bracewalk.app.SiteService;
-import org.bracewalk.core.analysis.AsBuiltAnalysis;
-import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.PlaneRecord;
@@ -40,7 +38,7 @@ import org.bracewalk.ui.common.DialogService;
 import org.bracewalk.ui.common.Navigator;
 import org.bracewalk.ui.common.ScreenId;
 import org.bracewalk.ui.common.Selection;
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 
 /**
  * The overview of every site, structure and plane in the database, the demo-site offer when it is
@@ -115,9 +113,17 @@ public final class SitesViewModel {
         services.sites().retirements(st.id()).forEach(x -> retired.put(x.planeId(), x));
         Set<Long> inLatest = new HashSet<>();
         latest.ifPresent(i -> services.inspections().planesOf(i.id()).forEach(p -> inLatest.add(p.id())));
+        Map<Long, Set<Long>> covered = new HashMap<>();
+        for (Inspection i : insp) {
+          Set<Long> ids = new HashSet<>();
+          services.inspections().planesOf(i.id()).forEach(p -> ids.add(p.id()));
+          covered.put(i.id(), ids);
+        }
+        List<Inspection> newestFirst =
+            insp.stream().sorted(Comparator.comparing(Inspection::startedAt).reversed()).toList();
         for (PlaneRecord plane : services.sites().planes(st.id())) {
           VerdictKind v = VerdictKind.NOT_INSPECTED;
-          String words = v.symbol() + " " + v.words();
+          String words;
           PlaneRetirement gone = retired.get(plane.id());
           if (gone != null && !inLatest.contains(plane.id())) {
             // left out of the latest inspection: shown for the record, not analysed, not counted
@@ -128,31 +134,30 @@ public final class SitesViewModel {
                 open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
             continue;
           }
+          Shown shown = shownVerdict(plane, newestFirst, covered);
+          v = shown.kind();
+          words = shown.words();
           if (latest.isPresent() && !inLatest.contains(plane.id())) {
             // added after the latest inspection started: not part of it (its scope is fixed)
             words += " (added after inspection " + latest.get().id() + " started)";
-          } else if (latest.isPresent()) {
-            PlaneResult r = services.analysis().analysePlane(latest.get().id(), plane.id());
-            v = verdictOf(r);
-            words = v.symbol() + " " + v.words();
-            if (!latest.get().isFinalised()) {
-              int marked = r.latest().size();
-              words += " (open: " + marked + " of " + plane.grid().panelCount() + " marked)";
-            }
           }
           if (gone != null) {
             words += " \u00b7 retired " + WHEN.format(gone.retiredAt().atZone(site.timeZone())) + ": "
                 + gone.reason();
           }
-          worst = worse(worst, v);
+          worst = VerdictKind.worse(worst, v);
           out.add(new OverviewRow(OverviewRow.Level.PLANE, plane.name(),
               plane.grid().lifts() + " lifts \u00d7 " + plane.grid().bays() + (plane.grid().bays() == 1 ? " bay" : " bays"),
               v, words, last, "", OverviewRow.Due.NOT_APPLICABLE, "", st.id(), plane.id(),
               open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
         }
         VerdictKind sv = worst == null ? VerdictKind.NOT_INSPECTED : worst;
+        if (sv.lost() && (dueState == OverviewRow.Due.IN_TIME || dueState == OverviewRow.Due.DUE_TODAY)) {
+          // never a tick beside lost rigidity: the date still stands, the mark warns
+          dueState = OverviewRow.Due.LOST_RIGIDITY;
+        }
         out.set(structureIndex, new OverviewRow(OverviewRow.Level.STRUCTURE, st.name(), kindWords(st.kind()), sv,
-            sv.symbol() + " " + sv.words() + (open.isPresent() ? " \u00b7 #" + open.get().id() + " open" : ""),
+            sv.headline() + (open.isPresent() ? " \u00b7 #" + open.get().id() + " open" : ""),
             last, dueText, dueState, st.inspectionIntervalDays() + " days", st.id(), 0,
             open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
       }
@@ -179,34 +184,59 @@ public final class SitesViewModel {
     };
   }
 
-  /** The verdict of one plane in its latest inspection, in the screen's four kinds. */
-  static VerdictKind verdictOf(PlaneResult r) {
-    AsBuiltAnalysis ab = r.analysis().asBuilt().orElseThrow();
-    StateAnalysis s = ab.state();
-    if (s.rigid()) {
-      return VerdictKind.HOLDS;
+  /** What the overview shows for one plane: the kind and its words. */
+  record Shown(VerdictKind kind, String words) {}
+
+  /**
+   * The verdict the overview shows for a plane, from the one {@link org.bracewalk.app.verdict.Verdict}
+   * of each inspection: the last finalised inspection that recorded the plane gives the known
+   * verdict; a later inspection replaces it only once it has recorded the plane (any observation
+   * on it), and an open inspection whose unseen panels leave its verdict open ("depends on panels
+   * not inspected") never hides a known lost rigidity.
+   *
+   * @param newestFirst the structure's inspections, newest first
+   * @param covered the planes each inspection covers, by inspection id
+   */
+  Shown shownVerdict(PlaneRecord plane, List<Inspection> newestFirst, Map<Long, Set<Long>> covered) {
+    PlaneResult later = null;
+    Inspection laterInspection = null;
+    for (Inspection i : newestFirst) {
+      if (!covered.getOrDefault(i.id(), Set.of()).contains(plane.id())) {
+        continue;
+      }
+      PlaneResult r = services.analysis().analysePlane(i.id(), plane.id());
+      if (r.latest().isEmpty()) {
+        continue; // nothing recorded on this plane in this inspection: it changes nothing known
+      }
+      if (i.isFinalised()) {
+        VerdictKind known = r.verdict().kind();
+        String knownWords = known.headline() + " (#" + i.id() + ")";
+        if (later == null) {
+          return new Shown(known, knownWords);
+        }
+        VerdictKind now = later.verdict().kind();
+        String progress = progress(laterInspection, later, plane);
+        if (known.lost() && !now.lost() && now != VerdictKind.HOLDS) {
+          // the open walk-round's unseen panels must not hide what is known
+          return new Shown(known, knownWords + ", not yet cleared" + progress);
+        }
+        return new Shown(now, now.headline() + progress);
+      }
+      if (later == null) {
+        later = r;
+        laterInspection = i;
+      }
     }
-    if (ab.unknownPanels() > 0 && ab.rigidIfUnknownSound()) {
-      return VerdictKind.DEPENDS_ON_UNSEEN;
+    if (later == null) {
+      return new Shown(VerdictKind.NOT_INSPECTED, VerdictKind.NOT_INSPECTED.headline());
     }
-    return s.oneWayOnly() ? VerdictKind.SWAYS_ONE_WAY : VerdictKind.LOST;
+    VerdictKind now = later.verdict().kind();
+    return new Shown(now, now.headline() + progress(laterInspection, later, plane));
   }
 
-  private static VerdictKind worse(VerdictKind a, VerdictKind b) {
-    if (a == null) {
-      return b;
-    }
-    return rank(b) > rank(a) ? b : a;
-  }
-
-  private static int rank(VerdictKind k) {
-    return switch (k) {
-      case HOLDS -> 0;
-      case NOT_INSPECTED -> 1;
-      case DEPENDS_ON_UNSEEN -> 2;
-      case SWAYS_ONE_WAY -> 3;
-      case LOST -> 4;
-    };
+  private static String progress(Inspection i, PlaneResult r, PlaneRecord plane) {
+    return (i.isFinalised() ? " (#" + i.id() : " (open #" + i.id()) + ": " + r.latest().size() + " of "
+        + plane.grid().panelCount() + " marked)";
   }
 
   private void describeSelection() {

@@ -40,8 +40,9 @@ import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.ui.common.DialogService;
 import org.bracewalk.ui.common.PlanePicture;
-import org.bracewalk.ui.common.VerdictKind;
 import org.bracewalk.ui.common.VerdictWords;
+import org.bracewalk.app.verdict.Verdict;
+import org.bracewalk.core.model.PlaneRole;
 
 /**
  * The walk-round of one plane. A cursor walks the panels in a chosen order; one command records a
@@ -61,6 +62,7 @@ public final class WalkViewModel {
 
   private final PlaneDesign design;
   private final String title;
+  private final PlaneRole role;
   private final MarkRecorder recorder;
   private final PlaneAnalyzer analyzer;
   private final DialogService dialogs;
@@ -130,6 +132,21 @@ public final class WalkViewModel {
       DialogService dialogs,
       boolean racking,
       boolean readOnly) {
+    this(design, title, PlaneRole.OTHER, existing, recorder, analyzer, dialogs, racking, readOnly);
+  }
+
+  /** As above, for a plane of the given role (its keep-off zone depends on it). */
+  public WalkViewModel(
+      PlaneDesign design,
+      String title,
+      PlaneRole role,
+      List<RecordedMark> existing,
+      MarkRecorder recorder,
+      PlaneAnalyzer analyzer,
+      DialogService dialogs,
+      boolean racking,
+      boolean readOnly) {
+    this.role = Objects.requireNonNull(role, "role");
     this.design = Objects.requireNonNull(design, "design");
     this.title = title;
     this.recorder = Objects.requireNonNull(recorder, "recorder");
@@ -568,9 +585,10 @@ public final class WalkViewModel {
     done.set(count);
     progressText.set(count + " of " + total + " panels");
     int repairCount = seen.rigid() ? 0 : Math.max(1, seen.degreesOfFreedom());
-    VerdictWords words = VerdictWords.of(design.grid(), seen, unknown, conservative.rigid(), repairCount);
+    Verdict one = Verdict.classify(design.grid(), role, conservative, unknown, seen.rigid());
+    VerdictWords words = VerdictWords.of(one, conservative, repairCount);
     verdict.set(words);
-    alarm.set(words.kind().lost() ? alarmText(words) : "");
+    alarm.set(words.alarm(title));
     lastSeen = seen;
     refreshPicture();
   }
@@ -581,20 +599,6 @@ public final class WalkViewModel {
   }
 
   private StateAnalysis lastSeen;
-
-  /**
-   * The banner over the plane: what lost rigidity, where to keep people and loads off, and what the
-   * competent person is to do (fit the braces shown, or take this part out of service). How many
-   * panels are still to inspect is left to the verdict beside it, so the banner fits a narrow
-   * screen.
-   */
-  private String alarmText(VerdictWords w) {
-    String advice = w.advice();
-    String service = "out of service.";
-    int end = advice.indexOf(service);
-    String todo = end < 0 ? advice : advice.substring(0, end + service.length());
-    return w.headline().toUpperCase(java.util.Locale.ROOT) + " — " + (title == null ? "" : title + ". ") + todo;
-  }
 
   private void refreshPicture() {
     StateAnalysis s = lastSeen;

@@ -97,8 +97,8 @@ class ReportServiceTest {
     byte[] pdf = reports.reportPdf(content);
     List<String> pages = pages(pdf);
     assertThat(pages.get(0)).contains("LOST RIGIDITY: frame 2 (1 of 5 planes)")
-        .contains("Keep people and loads off the affected part")
-        .contains("review by a licensed engineer");
+        .contains("Keep people and loads off plane frame 2: lifts 1-5, bay 1")
+        .contains("reviewed by a licensed engineer");
     String all = String.join(" ", pages);
     assertThat(content.findings()).isNotEmpty();
     for (Finding f : content.findings()) {

@@ -100,7 +100,9 @@ class VerdictJsonTest {
     assertThat(parts.putInto(mapper.createObjectNode()).properties().stream().map(e -> e.getKey()).toList())
         .containsExactly("design", "asBuilt", "repair");
     assertThat(whole.get("support").asText()).isEqualTo("free");
-    assertThat(whole.get("keepOff").asText()).contains("the whole plane");
+    // sways one way only: the engine names no block, so every lift and bay is kept off
+    assertThat(whole.get("keepOff").asText()).contains("lifts 1-3, bays 1-3");
+    assertThat(whole.get("keepOffZone").get("lifts").toString()).isEqualTo("[1,2,3]");
     assertThat(whole.get("caution").asText()).isEqualTo(Cautions.STANDING);
   }
 

@@ -51,13 +51,16 @@ class VerdictTextTest {
         .contains(
             """
               bay      1    2
-              lift 3   \\    .
+              lift 3 > \\  > .
               lift 2 A+/  A .
               lift 1   .    ~X
             """)
         .contains("A, B, ...: the panel's lift belongs to a block that can sway; blank: held by the base")
         .contains("A: lift 2 can sway, not held")
-        .contains("Keep people and loads off lift 2 (all bays) until a competent person has acted.");
+        // lift 3 keeps its shape but rides on the swaying lift 2: carried sideways, never "held"
+        .contains("keeps its shape but is carried sideways by the swaying lift below: lift 3")
+        .doesNotContain("held by the base: lifts 1, 3")
+        .contains("Keep people and loads off lifts 2, 3, bays 1, 2 until a competent person has acted.");
   }
 
   @Test
@@ -74,7 +77,7 @@ class VerdictTextTest {
         .contains("A: lifts 1, 2; bay 1 can sway together")
         .contains("B: bay 2 can sway")
         .contains("  block    A    B\n")
-        .contains("Keep people and loads off the whole plane (lifts 1, 2, bays 1, 2)");
+        .contains("Keep people and loads off lifts 1, 2, bays 1, 2 until a competent person has acted.");
   }
 
   @Test

@@ -14,7 +14,7 @@ import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.FakeDialogs;
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 import org.junit.jupiter.api.Test;
 
 class DesignViewModelTest {

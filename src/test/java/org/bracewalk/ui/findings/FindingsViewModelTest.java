@@ -15,7 +15,7 @@ import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.ui.DemoDatabase;
 import org.bracewalk.ui.DemoWalk;
 import org.bracewalk.ui.common.FakeDialogs;
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;

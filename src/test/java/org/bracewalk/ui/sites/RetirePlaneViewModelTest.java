@@ -44,7 +44,7 @@ class RetirePlaneViewModelTest {
     assertThat(dialogs.asked.get(1)).contains("Retire plane 'spine'?").contains("cannot be undone");
     // the latest inspection started before: it keeps the plane and its verdict
     assertThat(row(vm, "spine").verdictText())
-        .endsWith("Holds its shape \u00b7 retired 2025-03-15 09:00: dismantled after the impact");
+        .endsWith("Holds its shape (#2) \u00b7 retired 2025-03-15 09:00: dismantled after the impact");
     assertThat(vm.statusProperty().get()).contains("Plane 'spine' retired");
 
     vm.selectedProperty().set(row(vm, "spine"));

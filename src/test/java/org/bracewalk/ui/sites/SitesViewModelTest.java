@@ -12,7 +12,7 @@ import org.bracewalk.ui.common.FakeDialogs;
 import org.bracewalk.ui.common.Navigator;
 import org.bracewalk.ui.common.ScreenId;
 import org.bracewalk.ui.common.Selection;
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -74,7 +74,9 @@ class SitesViewModelTest {
     OverviewRow racking = row(vm, "Aisle C racking run");
     assertThat(racking.interval()).isEqualTo("14 days");
     assertThat(racking.nextDue()).isEqualTo("2025-03-19");
-    assertThat(racking.due()).isEqualTo(OverviewRow.Due.IN_TIME);
+    // in time by the date, but frame 2 has lost rigidity: a warning mark, never the tick of "in time"
+    assertThat(racking.due()).isEqualTo(OverviewRow.Due.LOST_RIGIDITY);
+    assertThat(racking.due().words()).doesNotContain("\u2713").contains("lost rigidity");
     assertThat(vm.statusProperty().get()).contains("every 14 days; next due 2025-03-19");
     assertThat(vm.selectedProperty().get().name()).isEqualTo("frame 2");
     // not a number, and out of range: refused by name, nothing changed
@@ -120,8 +122,36 @@ class SitesViewModelTest {
     services = DemoDatabase.withDemo(dir);
     DemoWalk.record(services, 20);
     SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
-    assertThat(row(vm, "north facade").verdictText()).contains("open: 20 of 50 marked");
+    assertThat(row(vm, "north facade").verdictText()).contains("open #3: 20 of 50 marked");
     assertThat(row(vm, "north facade").verdict()).isEqualTo(VerdictKind.DEPENDS_ON_UNSEEN);
+  }
+
+  @Test
+  void anOpenInspectionNeverHidesAKnownLostRigidityUntilItHasShownOtherwise() {
+    services = DemoDatabase.withDemo(dir);
+    SitesViewModel before = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    assertThat(row(before, "frame 2").verdict()).isEqualTo(VerdictKind.LOST);
+    long racking = row(before, "Aisle C racking run").structureId();
+    long frame2 = row(before, "frame 2").planeId();
+    // the attack: a new inspection of the racking run, nothing recorded on frame 2 yet
+    var open = services.inspections().start(racking, new org.bracewalk.app.NewInspection("Priya Danvers",
+        "Storage equipment inspector", "Priya Danvers", "day shift", "Ola Brandt",
+        org.bracewalk.core.model.InspectionReason.ROUTINE, null, null));
+    SitesViewModel started = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    assertThat(row(started, "frame 2").verdict()).isEqualTo(VerdictKind.LOST);
+    assertThat(row(started, "frame 2").verdictText()).startsWith(VerdictKind.LOST.headline() + " (#2)");
+    assertThat(row(started, "Aisle C racking run").verdict()).isEqualTo(VerdictKind.LOST);
+
+    // one sound panel recorded: the rest unseen, so the open verdict depends on them; the known
+    // lost rigidity still shows, with how far the open walk-round has got
+    services.inspections().recordObservation(open.id(), org.bracewalk.app.NewObservation.of(frame2,
+        org.bracewalk.core.model.PanelRef.of(3, 1), org.bracewalk.core.model.PanelState.SOUND, "Priya Danvers"));
+    SitesViewModel marked = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    assertThat(row(marked, "frame 2").verdict()).isEqualTo(VerdictKind.LOST);
+    assertThat(row(marked, "frame 2").verdictText()).contains("not yet cleared")
+        .contains("open #" + open.id() + ": 1 of 5 marked");
+    // a plane the open inspection has not touched keeps its last finalised verdict, not "not inspected"
+    assertThat(row(marked, "frame 1").verdict()).isEqualTo(VerdictKind.HOLDS);
   }
 
   @Test

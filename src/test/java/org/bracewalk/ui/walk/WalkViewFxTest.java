@@ -17,7 +17,7 @@ import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.Stylesheet;
 import org.bracewalk.ui.common.FakeDialogs;
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;

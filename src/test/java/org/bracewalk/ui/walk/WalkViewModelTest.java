@@ -15,7 +15,7 @@ import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.FakeDialogs;
-import org.bracewalk.ui.common.VerdictKind;
+import org.bracewalk.app.verdict.VerdictKind;
 import org.junit.jupiter.api.Test;
 
 class WalkViewModelTest {
@@ -175,9 +175,17 @@ class WalkViewModelTest {
     vm.select(PanelRef.of(2, 2));
     vm.mark(PanelState.MISSING);
     assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.LOST);
-    // lift 2 shears; lift 3 above it is carried: keep off lifts 2-3
+    // lift 1 not yet seen: the zone is the worst case (unseen panels counted as missing), as in
+    // check and analyse of the same marks: every lift from lift 1 up
     assertThat(vm.alarmProperty().get())
-        .contains("Keep people and loads off lifts 2, 3, all bays")
+        .contains("Keep people and loads off lifts 1-3, bays 1-3 until a competent person has acted.");
+    vm.select(PanelRef.of(1, 1));
+    markAll(vm, PanelState.SOUND, 1);
+    vm.select(PanelRef.of(3, 3));
+    markAll(vm, PanelState.SOUND, 1);
+    // lift 2 shears; lift 3 above it is carried sideways: keep off lifts 2-3, every bay
+    assertThat(vm.alarmProperty().get())
+        .contains("Keep people and loads off lifts 2, 3, bays 1-3")
         .contains("competent person")
         .contains("Competent person to act: fit the")
         .endsWith("or take this part out of service.");

@@ -7,6 +7,7 @@ import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneRole;
 
 /**
  * One plane as the report shows it.
@@ -17,6 +18,7 @@ import org.bracewalk.core.model.PlaneDesign;
  * @param findings the latest finding per panel (a panel without one was not inspected)
  * @param analysis the engine's analysis of {@code asBuilt} against {@code design}
  * @param revision the design revision in force: its number, date and author
+ * @param role the plane's role in its structure (the verdict's keep-off zone depends on it)
  */
 public record PlaneSection(
     String name,
@@ -24,8 +26,17 @@ public record PlaneSection(
     AsBuiltPlane asBuilt,
     Map<PanelRef, PanelFinding> findings,
     PlaneAnalysis analysis,
-    DesignRef revision) {
+    DesignRef revision,
+    PlaneRole role) {
+
+  /** A section of a plane of no particular role. */
+  public PlaneSection(String name, PlaneDesign design, AsBuiltPlane asBuilt,
+      Map<PanelRef, PanelFinding> findings, PlaneAnalysis analysis, DesignRef revision) {
+    this(name, design, asBuilt, findings, analysis, revision, PlaneRole.OTHER);
+  }
+
   public PlaneSection {
+    Objects.requireNonNull(role, "role");
     Objects.requireNonNull(name, "name");
     Objects.requireNonNull(design, "design");
     Objects.requireNonNull(asBuilt, "asBuilt");
@@ -40,9 +51,5 @@ public record PlaneSection(
       Objects.requireNonNull(date, "date");
       author = author == null ? "" : author;
     }
-  }
-
-  public PlaneVerdict verdict() {
-    return PlaneVerdict.of(analysis);
   }
 }

@@ -1,0 +1,69 @@
+package org.bracewalk.app.verdict;
+
+/**
+ * The five verdicts a plane can have, each with its own code (the report template's key), words
+ * and symbol, so none depends on colour. Never "safe": holding its shape is a statement about
+ * bracing continuity only.
+ */
+public enum VerdictKind {
+  /** Rigid even with every panel not inspected counted as missing. */
+  HOLDS("holds-shape", "Holds its shape", "\u25A0"),
+  /** Not rigid with the panels not inspected counted as missing, rigid if they are as designed. */
+  DEPENDS_ON_UNSEEN("depends-on-uninspected", "Depends on panels not inspected", "\u25D1"),
+  /** No free motion with members taken as rigid, but tension-only members let it lean one way. */
+  SWAYS_ONE_WAY("one-way", "Lost rigidity: sways one way only", "\u25B2"),
+  /** Not rigid whatever the panels not yet seen turn out to be. */
+  LOST("lost-rigidity", "Lost rigidity", "\u25B2"),
+  /** Nothing recorded for this plane yet. */
+  NOT_INSPECTED("not-inspected", "Not yet inspected", "\u25CB");
+
+  private final String code;
+  private final String words;
+  private final String symbol;
+
+  VerdictKind(String code, String words, String symbol) {
+    this.code = code;
+    this.words = words;
+    this.symbol = symbol;
+  }
+
+  /** A stable code: the report template's key is {@code verdict.<code>}. */
+  public String code() {
+    return code;
+  }
+
+  public String words() {
+    return words;
+  }
+
+  /** A symbol that tells the verdicts apart without colour. */
+  public String symbol() {
+    return symbol;
+  }
+
+  /** {@code ▲ Lost rigidity}. */
+  public String headline() {
+    return symbol + " " + words;
+  }
+
+  /** Lost rigidity, either way (the plane can move now). */
+  public boolean lost() {
+    return this == LOST || this == SWAYS_ONE_WAY;
+  }
+
+  /** Worst first: lost, sways one way, depends on unseen panels, not inspected, holds. */
+  public int severity() {
+    return switch (this) {
+      case HOLDS -> 0;
+      case NOT_INSPECTED -> 1;
+      case DEPENDS_ON_UNSEEN -> 2;
+      case SWAYS_ONE_WAY -> 3;
+      case LOST -> 4;
+    };
+  }
+
+  /** The worse of two verdicts; {@code a} may be null. */
+  public static VerdictKind worse(VerdictKind a, VerdictKind b) {
+    return a == null || b.severity() > a.severity() ? b : a;
+  }
+}

@@ -1,0 +1,34 @@
+package org.bracewalk.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.bracewalk.app.verdict.KeepOffZone;
+import org.bracewalk.app.verdict.Verdict;
+import org.bracewalk.core.port.report.PlaneSection;
+
+/**
+ * The keep-off lines of page 1 of the report and of the top of the repair order: one per plane
+ * whose one {@link Verdict} has a keep-off zone, naming the plane, its lifts and its bays, in the
+ * template's words ({@code summary.alert.keepoff}). Both documents take them from here.
+ */
+final class KeepOffLines {
+  private KeepOffLines() {}
+
+  /** The one verdict on a plane of the document ("not yet inspected" when nothing is recorded). */
+  static Verdict verdict(PlaneSection p) {
+    return Verdict.of(p.analysis(), p.role(), !p.findings().isEmpty());
+  }
+
+  static List<String> of(List<PlaneSection> planes, Wording w) {
+    List<String> lines = new ArrayList<>();
+    for (PlaneSection p : planes) {
+      verdict(p).keepOffZone().ifPresent(z -> lines.add(line(p.name(), z, w)));
+    }
+    return lines;
+  }
+
+  private static String line(String plane, KeepOffZone z, Wording w) {
+    return w.format(z.offloadBeside() ? "summary.alert.keepoff.beside" : "summary.alert.keepoff",
+        "plane", plane, "lifts", z.liftsText(), "bays", z.baysText());
+  }
+}
