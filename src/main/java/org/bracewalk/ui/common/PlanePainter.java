@@ -2,7 +2,6 @@ package org.bracewalk.ui.common;
 
 import java.util.List;
 import java.util.Map;
-import org.bracewalk.core.analysis.Block;
 import org.bracewalk.core.analysis.RepairBrace;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.MemberKind;
@@ -662,10 +661,5 @@ public final class PlanePainter {
     g.strokeLine(x0, y1, x0, y1 - c);
     g.strokeLine(x1, y1, x1 - c, y1);
     g.strokeLine(x1, y1, x1, y1 - c);
-  }
-
-  /** The blocks as letters for a legend: A (fixed), B, C... */
-  public static String blockName(List<Block> blocks, Block b) {
-    return Character.toString((char) ('A' + blocks.indexOf(b)));
   }
 }

@@ -426,10 +426,6 @@ public final class DesignViewModel {
     return design.get();
   }
 
-  public ReadOnlyObjectProperty<PlaneDesign> designProperty() {
-    return design.getReadOnlyProperty();
-  }
-
   public PlaneAnalysis analysis() {
     return lastAnalysis;
   }
