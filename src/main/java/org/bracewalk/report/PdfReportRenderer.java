@@ -34,6 +34,7 @@ import org.bracewalk.core.port.report.Particular;
 import org.bracewalk.core.port.report.FindingPhoto;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.PlaneVerdict;
+import org.bracewalk.core.port.report.RackDamageLevel;
 import org.bracewalk.core.port.report.RecordedOrder;
 import org.bracewalk.core.port.report.RepairStep;
 import org.bracewalk.core.port.report.RepairStepKind;
@@ -447,7 +448,7 @@ public final class PdfReportRenderer implements ReportRenderer {
               "gauge", w.small(fd.bow().gaugeMm()), "limit", w.small(fd.bow().limitMm())), f));
           String due = fd.bow().dueDate() == null ? w.text("list.none") : w.date(fd.bow().dueDate());
           t.addCell(pdf.cell(w.format("damage." + fd.bow().level().code(), "due", due),
-              pdf.boldFont(7.5f, fd.bow().level().ordinal() == 0 ? Palette.GRID : Palette.LOST)));
+              pdf.boldFont(7.5f, fd.bow().level() == RackDamageLevel.MONITOR ? Palette.GRID : Palette.LOST)));
         } else {
           t.addCell(pdf.cell("", f));
           t.addCell(pdf.cell("", f));

@@ -73,7 +73,7 @@ final class Templates {
       text = TextInput.decode(file, bytes);
       TextInput.checkCharacters(file, text, TemplateSource.LIMITS);
     } catch (TextInputException e) {
-      throw new RenderingException(e.problem().startsWith("this is not UTF-8")
+      throw new RenderingException(e.notUtf8()
           ? "template file " + file + " is not valid UTF-8 (line " + e.line() + ") at column "
               + e.column() + ": save it as UTF-8"
           : "template file " + file + ", line " + e.line() + ", column " + e.column() + ": "

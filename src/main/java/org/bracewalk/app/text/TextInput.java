@@ -173,7 +173,7 @@ public final class TextInput {
       at.advance(out);
       out.clear();
       if (r.isError()) {
-        throw new TextInputException(name, at.line, at.column(), "this is not UTF-8 text: save the"
+        throw TextInputException.notUtf8(name, at.line, at.column(), "this is not UTF-8 text: save the"
             + " file as UTF-8 (plain text)");
       }
       if (r.isUnderflow()) {

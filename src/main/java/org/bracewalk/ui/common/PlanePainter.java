@@ -1,5 +1,6 @@
 package org.bracewalk.ui.common;
 
+import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import org.bracewalk.core.analysis.RepairBrace;
@@ -255,16 +256,16 @@ public final class PlanePainter {
     return s;
   }
 
-  private static final Color[] LOOK_COLOURS = new Color[PanelLook.values().length];
+  private static final Map<PanelLook, Color> LOOK_COLOURS = new EnumMap<>(PanelLook.class);
 
   static {
     for (PanelLook look : PanelLook.values()) {
-      LOOK_COLOURS[look.ordinal()] = Color.web(look.colour());
+      LOOK_COLOURS.put(look, Color.web(look.colour()));
     }
   }
 
   private static Color colour(PanelLook look) {
-    return LOOK_COLOURS[look.ordinal()];
+    return LOOK_COLOURS.get(look);
   }
 
   /**

@@ -570,7 +570,13 @@ public final class WalkViewModel {
     int repairCount = seen.rigid() ? 0 : Math.max(1, seen.degreesOfFreedom());
     VerdictWords words = VerdictWords.of(design.grid(), seen, unknown, conservative.rigid(), repairCount);
     verdict.set(words);
-    alarm.set(words.kind().lost() ? alarmText(words) : "");
+    // The banner leaves the count of panels still to inspect to the verdict beside it: its words
+    // are asked for without that count, never cut out of the advice.
+    alarm.set(
+        words.kind().lost()
+            ? alarmText(words.headline(),
+                VerdictWords.of(design.grid(), seen, 0, conservative.rigid(), repairCount).advice())
+            : "");
     lastSeen = seen;
     refreshPicture();
   }
@@ -588,12 +594,8 @@ public final class WalkViewModel {
    * panels are still to inspect is left to the verdict beside it, so the banner fits a narrow
    * screen.
    */
-  private String alarmText(VerdictWords w) {
-    String advice = w.advice();
-    String service = "out of service.";
-    int end = advice.indexOf(service);
-    String todo = end < 0 ? advice : advice.substring(0, end + service.length());
-    return w.headline().toUpperCase(java.util.Locale.ROOT) + " — " + (title == null ? "" : title + ". ") + todo;
+  private String alarmText(String headline, String todo) {
+    return headline.toUpperCase(java.util.Locale.ROOT) + " — " + (title == null ? "" : title + ". ") + todo;
   }
 
   private void refreshPicture() {
