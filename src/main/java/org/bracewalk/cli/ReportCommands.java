@@ -1,8 +1,6 @@
 package org.bracewalk.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.bracewalk.app.AppServices;
