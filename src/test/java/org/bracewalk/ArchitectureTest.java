@@ -42,7 +42,8 @@ class ArchitectureTest {
                 "org.bracewalk.report..",
                 "org.bracewalk.ui..",
                 "org.bracewalk.cli..",
-                "org.bracewalk.boot..")
+                "org.bracewalk.boot..",
+                "org.bracewalk.bench..")
             .because("the engine and the model are the centre: everything depends on them, never"
                 + " the other way"));
   }
@@ -73,6 +74,7 @@ class ArchitectureTest {
                 "org.bracewalk.ui..",
                 "org.bracewalk.cli..",
                 "org.bracewalk.boot..",
+                "org.bracewalk.bench..",
                 "javafx..",
                 "java.sql..",
                 "com.lowagie..",
@@ -110,7 +112,7 @@ class ArchitectureTest {
     check(
         noClasses()
             .that()
-            .resideOutsideOfPackages("org.bracewalk.ui..", "org.bracewalk.boot..")
+            .resideOutsideOfPackages("org.bracewalk.ui..", "org.bracewalk.boot..", "org.bracewalk.bench..")
             .should()
             .dependOnClassesThat()
             .resideInAPackage("javafx..")
@@ -146,7 +148,7 @@ class ArchitectureTest {
     check(
         noClasses()
             .that()
-            .resideOutsideOfPackages("org.bracewalk.cli..", "org.bracewalk.boot..")
+            .resideOutsideOfPackages("org.bracewalk.cli..", "org.bracewalk.boot..", "org.bracewalk.bench..")
             .should()
             .dependOnClassesThat()
             .resideInAPackage("picocli..")
@@ -162,6 +164,20 @@ class ArchitectureTest {
             .resideInAPackage("org.bouncycastle..")
             .because("BouncyCastle is on the class path only for OpenPDF's signatures (PdfPKCS7);"
                 + " our signing goes through OpenPDF in the report adapter"));
+  }
+
+  @Test
+  void benchmarkAndPictureScaffoldingIsUsedByNothingButTheCompositionRoot() {
+    check(
+        noClasses()
+            .that()
+            .resideOutsideOfPackages("org.bracewalk.bench..", "org.bracewalk.boot..")
+            .should()
+            .dependOnClassesThat()
+            .resideInAPackage("org.bracewalk.bench..")
+            .because("timings, demo walks and screen pictures are tools beside the product: boot"
+                + " registers their commands, and no use case, screen or command may come to rely"
+                + " on them"));
   }
 
   @Test
@@ -203,7 +219,7 @@ class ArchitectureTest {
     check(
         noClasses()
             .that()
-            .resideOutsideOfPackages("org.bracewalk.cli..", "org.bracewalk.boot..")
+            .resideOutsideOfPackages("org.bracewalk.cli..", "org.bracewalk.boot..", "org.bracewalk.bench..")
             .should()
             .accessField(System.class, "out")
             .orShould()

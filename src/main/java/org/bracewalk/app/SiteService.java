@@ -84,11 +84,6 @@ public final class SiteService {
         .orElseThrow(() -> new NotFoundException("structure " + structureId));
   }
 
-  /** The site a structure stands on. */
-  public Site siteOf(Structure structure) {
-    return site(structure.siteId());
-  }
-
   /**
    * Stores a new plane of an existing structure with its first design revision, in one
    * transaction. Widths and heights are rounded to whole millimetres; the design's grid must then
@@ -137,20 +132,6 @@ public final class SiteService {
 
   public PlaneRecord plane(long id) {
     return store.planes().find(id).orElseThrow(() -> new NotFoundException("plane " + id));
-  }
-
-  /** The plane of that name in the structure; {@link NotFoundException} naming both otherwise. */
-  public PlaneRecord planeByName(long structureId, String name) {
-    return store.planes()
-        .findByName(structureId, name)
-        .orElseThrow(
-            () -> new NotFoundException("plane '" + name + "' of structure " + structureId));
-  }
-
-  /** Every design revision of a plane, by number. */
-  public List<DesignRevision> designRevisions(long planeId) {
-    plane(planeId);
-    return store.designs().ofPlane(planeId);
   }
 
   /** The latest design revision of a plane. */

@@ -5,17 +5,20 @@ import java.lang.management.ManagementFactory;
 import java.util.Map;
 import org.bracewalk.app.AnalysisOutput;
 import org.bracewalk.app.UserInputException;
+import org.bracewalk.app.check.CheckService;
 import org.bracewalk.app.panelmap.PanelMapException;
+import org.bracewalk.app.panelmap.PanelMapParser;
 import org.bracewalk.app.sitefile.FileFormatException;
 import org.bracewalk.app.text.TextInputException;
-import org.bracewalk.app.bench.BenchFormat;
-import org.bracewalk.app.bench.BenchPlan;
-import org.bracewalk.app.bench.BenchService;
-import org.bracewalk.app.check.CheckService;
-import org.bracewalk.app.panelmap.PanelMapParser;
 import org.bracewalk.app.verdict.VerdictJson;
 import org.bracewalk.app.verdict.VerdictText;
-import org.bracewalk.cli.BenchCommand;
+import org.bracewalk.bench.BenchCommand;
+import org.bracewalk.bench.BenchFormat;
+import org.bracewalk.bench.BenchPlan;
+import org.bracewalk.bench.BenchReportCommand;
+import org.bracewalk.bench.BenchService;
+import org.bracewalk.bench.BenchStoreCommand;
+import org.bracewalk.bench.SnapshotCommand;
 import org.bracewalk.cli.BracewalkCommand;
 import org.bracewalk.cli.CheckCommand;
 import org.bracewalk.cli.ReportCommands;
@@ -66,7 +69,12 @@ public final class Launcher {
     StoreCommands.addTo(cli, context.cliContext(env),
         new AnalysisOutput(new VerdictJson(), new VerdictText()));
     ReportCommands.addTo(cli, context.cliContext(env), context.reportFactory(env));
-    cli.addSubcommand("snapshot", new SnapshotCommand(context, env));
+    // benchmark and picture scaffolding (package bench): registered here, used by nothing else
+    cli.addSubcommand("bench-store", new BenchStoreCommand(context.cliContext(env)));
+    cli.addSubcommand("bench-report",
+        new BenchReportCommand(context.cliContext(env), context.reportFactory(env)));
+    cli.addSubcommand("snapshot", new SnapshotCommand(context::open, context.analyzer(),
+        context.clock(), services -> ReportIssuers.over(context, services, env)));
     // Set after the sub-commands are added: picocli copies these settings down the hierarchy.
     handleErrors(cli, new ErrorLog(context.cliContext(env).logFolder()));
     return cli;

@@ -1,13 +1,14 @@
 package org.bracewalk.boot;
 
+
 import java.io.PrintWriter;
+import java.lang.management.ManagementFactory;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.Map;
-import java.util.Optional;
 import java.util.ArrayList;
 import java.util.List;
-import java.lang.management.ManagementFactory;
+import java.util.Map;
+import java.util.Optional;
 
 /**
  * Start-up to a usable window, once, cold: this JVM starts, opens the app on the database given

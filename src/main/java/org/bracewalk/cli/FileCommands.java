@@ -9,7 +9,6 @@ import java.util.stream.Stream;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.CsvRecording;
 import org.bracewalk.app.ImportedSite;
-import org.bracewalk.app.UserInputException;
 import org.bracewalk.app.panelmap.PanelMapParser;
 import org.bracewalk.app.sitefile.ObservationCsv;
 import org.bracewalk.app.sitefile.SiteFileReader;

@@ -11,7 +11,6 @@ import java.util.Map;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.SiteService;
 import org.bracewalk.app.panelmap.PanelMapParser;
-import org.bracewalk.app.sitefile.SiteFileReader;
 import org.bracewalk.core.model.DisplayUnits;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;

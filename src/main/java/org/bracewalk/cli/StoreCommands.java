@@ -35,7 +35,7 @@ public final class StoreCommands {
 
   /**
    * Registers demo, site, structure, plane, inspection, record, finalise, import, export,
-   * analyse, history and bench-store.
+   * analyse and history.
    */
   public static void addTo(CommandLine root, CliContext context, AnalysisOutput analysisOutput) {
     root.addSubcommand("demo", new FileCommands.Demo(context));
@@ -58,6 +58,5 @@ public final class StoreCommands {
     root.addSubcommand("export", new FileCommands.Export(context));
     root.addSubcommand("analyse", new AnalyseCommand(context, analysisOutput));
     root.addSubcommand("history", new HistoryCommand(context));
-    root.addSubcommand("bench-store", new BenchStoreCommand(context));
   }
 }

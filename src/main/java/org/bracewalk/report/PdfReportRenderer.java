@@ -36,6 +36,7 @@ import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.app.verdict.Cautions;
 import org.bracewalk.app.verdict.Verdict;
 import org.bracewalk.app.verdict.VerdictKind;
+import org.bracewalk.core.port.report.RackDamageLevel;
 import org.bracewalk.core.port.report.RecordedOrder;
 import org.bracewalk.core.port.report.RepairStep;
 import org.bracewalk.core.port.report.RepairStepKind;
@@ -469,7 +470,7 @@ public final class PdfReportRenderer implements ReportRenderer {
               "gauge", w.small(fd.bow().gaugeMm()), "limit", w.small(fd.bow().limitMm())), f));
           String due = fd.bow().dueDate() == null ? w.text("list.none") : w.date(fd.bow().dueDate());
           t.addCell(pdf.cell(w.format("damage." + fd.bow().level().code(), "due", due),
-              pdf.boldFont(7.5f, fd.bow().level().ordinal() == 0 ? Palette.GRID : Palette.LOST)));
+              pdf.boldFont(7.5f, fd.bow().level() == RackDamageLevel.MONITOR ? Palette.GRID : Palette.LOST)));
         } else {
           t.addCell(pdf.cell("", f));
           t.addCell(pdf.cell("", f));

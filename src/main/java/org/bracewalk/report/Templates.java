@@ -2,12 +2,8 @@ package org.bracewalk.report;
 
 import java.io.IOException;
 import java.io.StringReader;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
 import java.nio.charset.Charset;
 import java.nio.charset.CharsetEncoder;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.text.DecimalFormat;
 import java.text.DecimalFormatSymbols;
 import java.time.Instant;
@@ -73,7 +69,7 @@ final class Templates {
       text = TextInput.decode(file, bytes);
       TextInput.checkCharacters(file, text, TemplateSource.LIMITS);
     } catch (TextInputException e) {
-      throw new RenderingException(e.problem().startsWith("this is not UTF-8")
+      throw new RenderingException(e.notUtf8()
           ? "template file " + file + " is not valid UTF-8 (line " + e.line() + ") at column "
               + e.column() + ": save it as UTF-8"
           : "template file " + file + ", line " + e.line() + ", column " + e.column() + ": "

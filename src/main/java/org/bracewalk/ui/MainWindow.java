@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import java.util.function.Consumer;
 import javafx.geometry.Insets;
 import javafx.scene.Node;
 import javafx.scene.Parent;
@@ -44,7 +43,6 @@ public final class MainWindow implements Navigator {
   private Selection selection = Selection.NONE;
   private HelpOverlay help;
   private int fontSize = 15;
-  private Consumer<ScreenId> onShown = id -> {};
 
   public MainWindow(ScreenFactory factory, List<KeyHelp.Section> screenKeys, String statusText) {
     this.factory = factory;
@@ -101,11 +99,6 @@ public final class MainWindow implements Navigator {
     return root;
   }
 
-  /** Called after each screen is shown (used by tests and timing). */
-  public void setOnShown(Consumer<ScreenId> listener) {
-    onShown = listener == null ? id -> {} : listener;
-  }
-
   public ScreenId currentScreen() {
     return currentId;
   }
@@ -153,7 +146,6 @@ public final class MainWindow implements Navigator {
     }
     updateRail();
     s.focus();
-    onShown.accept(id);
   }
 
   private void updateRail() {
@@ -209,10 +201,6 @@ public final class MainWindow implements Navigator {
       help = new HelpOverlay(keys, this::closeHelp);
       root.getChildren().add(help);
     }
-  }
-
-  public boolean helpShown() {
-    return help != null;
   }
 
   private void closeHelp() {

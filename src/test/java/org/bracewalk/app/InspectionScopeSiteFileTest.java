@@ -36,7 +36,7 @@ class InspectionScopeSiteFileTest {
       long site = s.demo().load().site().id();
       Inspection open = s.inspections().start(1,
           NewInspection.of("Priya Danvers", "racking inspector", InspectionReason.ROUTINE));
-      PlaneRecord frame2 = s.sites().planeByName(1, "frame 2");
+      PlaneRecord frame2 = s.sites().planes(1).stream().filter(p -> p.name().equals("frame 2")).findFirst().orElseThrow();
       s.sites().addDesignRevision(frame2.id(), "Ines Carrow", LocalDate.of(2025, 3, 6),
           "stiffer", s.sites().currentDesign(frame2.id()).design());
       assertThat(s.inspections().designInForce(open.id(), frame2.id()).number()).isEqualTo(1);
@@ -52,7 +52,8 @@ class InspectionScopeSiteFileTest {
       ImportedSite site = s.files().importSite("a.json", first);
       Inspection open = site.inspections().get(site.inspections().size() - 1);
       assertThat(open.isFinalised()).isFalse();
-      PlaneRecord frame2 = s.sites().planeByName(site.structures().get(0).id(), "frame 2");
+      PlaneRecord frame2 = s.sites().planes(site.structures().get(0).id()).stream()
+          .filter(p -> p.name().equals("frame 2")).findFirst().orElseThrow();
       assertThat(s.sites().currentDesign(frame2.id()).number()).isEqualTo(2);
       assertThat(s.inspections().designInForce(open.id(), frame2.id()).number()).isEqualTo(1);
       assertThat(s.files().exportSite(site.site().id())).isEqualTo(first);

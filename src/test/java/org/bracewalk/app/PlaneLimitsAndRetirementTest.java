@@ -99,7 +99,7 @@ class PlaneLimitsAndRetirementTest {
     String first;
     try (AppServices a = context.open(dir.resolve("a.db"))) {
       long site = a.demo().load().site().id();
-      PlaneRecord spine = a.sites().planeByName(1, "spine");
+      PlaneRecord spine = spineOf(a);
       a.sites().retirePlane(spine.id(), "Priya Danvers", "dismantled after the impact");
       first = a.files().exportSite(site);
     }
@@ -110,7 +110,7 @@ class PlaneLimitsAndRetirementTest {
     String second;
     try (AppServices b = context.open(dir.resolve("b.db"))) {
       long site = b.files().importSite("first.json", first).site().id();
-      PlaneRecord spine = b.sites().planeByName(1, "spine");
+      PlaneRecord spine = spineOf(b);
       assertThat(b.sites().retirement(spine.id())).contains(new PlaneRetirement(spine.id(),
           Instant.parse("2025-03-10T08:00:00Z"), "Priya Danvers", "dismantled after the impact"));
       second = b.files().exportSite(site);
@@ -124,7 +124,7 @@ class PlaneLimitsAndRetirementTest {
     String text;
     try (AppServices a = context.open(dir.resolve("a.db"))) {
       long site = a.demo().load().site().id();
-      a.sites().retirePlane(a.sites().planeByName(1, "spine").id(), "", "dismantled");
+      a.sites().retirePlane(spineOf(a).id(), "", "dismantled");
       text = a.files().exportSite(site);
     }
     // between the two demo inspections: the second one still has observations of the spine
@@ -150,7 +150,7 @@ class PlaneLimitsAndRetirementTest {
     try (AppServices s = new AppContext(Clock.fixed(Instant.parse("2025-03-10T08:00:00Z"),
         ZoneOffset.UTC), PlaneAnalyzer.standard()).open(dir.resolve("a.db"))) {
       s.demo().load();
-      PlaneRecord spine = s.sites().planeByName(1, "spine");
+      PlaneRecord spine = spineOf(s);
       Inspection open = s.inspections().start(1, NewInspection.of("P. Danvers", "", InspectionReason.ROUTINE));
       PlaneRetirement r = s.sites().retirePlane(spine.id(), "", "dismantled");
       assertThat(r.retiredAt()).isEqualTo(Instant.parse("2025-03-10T08:00:00.001Z"));
@@ -176,5 +176,13 @@ class PlaneLimitsAndRetirementTest {
       // the plane and its records stay
       assertThat(s.sites().planes(1)).contains(spine);
     }
+  }
+
+  /** The plane named "spine" of structure 1 (the demo's racking run). */
+  private static PlaneRecord spineOf(AppServices services) {
+    return services.sites().planes(1).stream()
+        .filter(p -> p.name().equals("spine"))
+        .findFirst()
+        .orElseThrow();
   }
 }

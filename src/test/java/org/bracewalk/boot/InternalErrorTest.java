@@ -69,6 +69,31 @@ class InternalErrorTest {
   }
 
   @Test
+  void theDetailIsLoggedOnceThroughTheSystemLoggerAndNotToTheConsole() throws Exception {
+    ErrorLog log = new ErrorLog(dir.resolve("logs"));
+    java.util.logging.Logger backend = java.util.logging.Logger.getLogger(ErrorLog.LOGGER_NAME);
+    java.util.List<java.util.logging.LogRecord> seen = new java.util.ArrayList<>();
+    backend.setFilter(r -> seen.add(r));
+    try {
+      IllegalStateException bug = new IllegalStateException("a bug");
+      Run r = execute(bug, log);
+      assertThat(r.code()).isEqualTo(3);
+      // System.Logger's ERROR is java.util.logging's SEVERE (java.lang.System.Logger javadoc)
+      assertThat(seen).singleElement().satisfies(rec -> {
+        assertThat(rec.getLevel()).isEqualTo(java.util.logging.Level.SEVERE);
+        assertThat(rec.getThrown()).isSameAs(bug);
+        assertThat(rec.getMessage()).isEqualTo("bracewalk ");
+      });
+      assertThat(backend.getUseParentHandlers()).as("the console handler of the root logger").isFalse();
+      String logged = Files.readString(log.file());
+      assertThat(logged.split("java.lang.IllegalStateException: a bug", -1)).hasSize(2);
+      assertThat(r.err()).doesNotContain("\tat ");
+    } finally {
+      backend.setFilter(null);
+    }
+  }
+
+  @Test
   void aStackOverflowAndARuntimeExceptionAreInternalErrorsToo() throws Exception {
     ErrorLog log = new ErrorLog(dir.resolve("logs"));
     Run overflow = execute(new StackOverflowError(), log);

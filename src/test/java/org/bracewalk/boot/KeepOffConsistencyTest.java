@@ -31,7 +31,7 @@ import org.bracewalk.report.PdfRepairOrderRenderer;
 import org.bracewalk.report.PdfReportRenderer;
 import org.bracewalk.report.TemplateSource;
 import org.bracewalk.store.Database;
-import org.bracewalk.ui.DemoWalk;
+import org.bracewalk.bench.DemoWalk;
 import org.bracewalk.ui.common.FakeDialogs;
 import org.bracewalk.ui.walk.InspectionMarkRecorder;
 import org.bracewalk.ui.walk.WalkViewModel;

@@ -1,5 +1,6 @@
 package org.bracewalk.boot;
 
+
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Files;

@@ -166,14 +166,13 @@ class DatabaseTest {
   @Test
   void observationsCannotBeChangedOrDeletedEvenBySql() throws Exception {
     Path file = dir.resolve("b.db");
-    long id;
     try (Database db = Database.open(file)) {
       Fixtures.Services s = Fixtures.Services.over(db);
       PlaneRecord plane = Fixtures.plane(s);
       long inspection = s.inspections().start(plane.structureId(),
           NewInspection.of("M. Okafor", "", InspectionReason.ROUTINE)).id();
-      id = s.inspections().recordObservation(inspection,
-          NewObservation.of(plane.id(), PanelRef.of(1, 1), PanelState.SOUND, "M. Okafor")).id();
+      s.inspections().recordObservation(inspection,
+          NewObservation.of(plane.id(), PanelRef.of(1, 1), PanelState.SOUND, "M. Okafor"));
     }
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
         Statement st = c.createStatement()) {

@@ -6,6 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import org.bracewalk.bench.ScreenShots;
 import org.bracewalk.ui.common.KeyHelp;
 import org.junit.jupiter.api.Test;
 

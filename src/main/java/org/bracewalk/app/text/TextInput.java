@@ -173,7 +173,7 @@ public final class TextInput {
       at.advance(out);
       out.clear();
       if (r.isError()) {
-        throw new TextInputException(name, at.line, at.column(), "this is not UTF-8 text: save the"
+        throw TextInputException.notUtf8(name, at.line, at.column(), "this is not UTF-8 text: save the"
             + " file as UTF-8 (plain text)");
       }
       if (r.isUnderflow()) {
@@ -206,17 +206,18 @@ public final class TextInput {
     int n = text.length();
     int line = 1;
     int start = 0;
-    for (int i = 0; i < n; i++) {
+    int i = 0;
+    while (i < n) {
       char c = text.charAt(i);
       if (c == '\n' || c == '\r') {
         if (out != null) {
           out.add(new Line(line, text.substring(start, i)));
         }
-        if (c == '\r' && i + 1 < n && text.charAt(i + 1) == '\n') {
-          i++;
-        }
+        // CRLF is one line end
+        int next = c == '\r' && i + 1 < n && text.charAt(i + 1) == '\n' ? i + 2 : i + 1;
         line++;
-        start = i + 1;
+        start = next;
+        i = next;
         continue;
       }
       String bad = forbidden(c);
@@ -229,6 +230,7 @@ public final class TextInput {
         throw new TextInputException(name, line, maxLine + 1, "this line is longer than the "
             + maxLine + " characters a line may have: check that it is the right file");
       }
+      i++;
     }
     if (out != null) {
       out.add(new Line(line, text.substring(start)));

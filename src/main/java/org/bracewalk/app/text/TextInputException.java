@@ -14,6 +14,7 @@ public final class TextInputException extends RuntimeException {
   private final int line;
   private final int column;
   private final String problem;
+  private final boolean notUtf8;
 
   /**
    * @param source the file name as the user gave it
@@ -22,6 +23,10 @@ public final class TextInputException extends RuntimeException {
    * @param problem what is wrong and what to do
    */
   public TextInputException(String source, int line, int column, String problem) {
+    this(source, line, column, problem, false);
+  }
+
+  private TextInputException(String source, int line, int column, String problem, boolean notUtf8) {
     super(line > 0
         ? source + ": line " + line + ", column " + column + ": " + problem
         : source + ": " + problem);
@@ -29,6 +34,12 @@ public final class TextInputException extends RuntimeException {
     this.line = line;
     this.column = column;
     this.problem = problem;
+    this.notUtf8 = notUtf8;
+  }
+
+  /** Bytes that are not UTF-8 at that line and column. */
+  static TextInputException notUtf8(String source, int line, int column, String problem) {
+    return new TextInputException(source, line, column, problem, true);
   }
 
   /** A problem with the whole file. */
@@ -48,6 +59,11 @@ public final class TextInputException extends RuntimeException {
   /** 1-based, or 0 for the whole file. */
   public int column() {
     return column;
+  }
+
+  /** Whether the bytes are not UTF-8 (a format words that in its own way). */
+  public boolean notUtf8() {
+    return notUtf8;
   }
 
   /** The message without the location. */

@@ -88,27 +88,30 @@ final class BraceGraphPlaneAnalyzer implements PlaneAnalyzer {
   }
 
   private static boolean isRigid(BraceGraph g) {
-    return g.hasTension() ? g.strongComponentCount() == 1 : g.components(false).count() == 1;
+    return g.hasTension()
+        ? ContractedStrongComponents.of(g).count() == 1
+        : UnionFindBlocks.of(g, false).count() == 1;
   }
 
   private static StateAnalysis analyse(BraceGraph g) {
-    BraceGraph.UnionFind uf = g.components(false);
+    UnionFindBlocks uf = UnionFindBlocks.of(g, false);
     int dof = uf.count() - 1;
-    boolean rigid = dof == 0 && (!g.hasTension() || g.strongComponentCount() == 1);
+    boolean rigid = dof == 0 && (!g.hasTension() || ContractedStrongComponents.of(g).count() == 1);
     boolean oneWay = dof == 0 && !rigid;
-    List<PanelRef> critical = new ArrayList<>(g.panelsOf(g.bridges(false)));
+    List<PanelRef> critical = new ArrayList<>(g.panelsOf(TarjanBridges.of(g, false)));
     critical.sort(Comparator.naturalOrder());
     int tolerance = -1;
     boolean exact = true;
     if (rigid) {
-      BraceGraph.Connectivity c = g.rigidEdgeConnectivity(EXACT_CUT_LIMIT);
+      StoerWagnerEdgeConnectivity.Connectivity c =
+          StoerWagnerEdgeConnectivity.of(g, EXACT_CUT_LIMIT);
       tolerance = Math.max(0, c.value() - 1);
       exact = c.exact();
     }
     return new StateAnalysis(rigid, dof, oneWay, tolerance, exact, critical, blocks(g, uf));
   }
 
-  private static List<Block> blocks(BraceGraph g, BraceGraph.UnionFind uf) {
+  private static List<Block> blocks(BraceGraph g, UnionFindBlocks uf) {
     Map<Integer, List<Integer>> lifts = new HashMap<>();
     Map<Integer, List<Integer>> bays = new HashMap<>();
     List<Integer> roots = new ArrayList<>();

@@ -81,7 +81,7 @@ final class RepairPlanner {
 
   private static Attempt rigidRepair(
       Candidates space, BraceGraph state, List<RepairBrace> designCandidates) {
-    BraceGraph.UnionFind uf = state.components(false);
+    UnionFindBlocks uf = UnionFindBlocks.of(state, false);
     int lifts = state.lifts;
     List<RepairBrace> chosen = new ArrayList<>();
     if (uf.count() == 1) {
@@ -99,7 +99,7 @@ final class RepairPlanner {
 
   private static Attempt tensionRepair(
       Candidates space, BraceGraph state, List<RepairBrace> designCandidates) {
-    if (state.strongComponentCount() == 1) {
+    if (ContractedStrongComponents.of(state).count() == 1) {
       return new Attempt(true, List.of());
     }
     // Restore every missing design member: tension members often work only in pairs (each stops
@@ -110,18 +110,18 @@ final class RepairPlanner {
       g.add(c.panel(), c.brace());
       chosen.add(c);
     }
-    int[] comp = g.strongComponents();
-    int sccs = comp[g.vertexCount];
+    ContractedStrongComponents comp = ContractedStrongComponents.of(g);
+    int sccs = comp.count();
     // Then rigid members elsewhere: one between two strong components always merges them.
     int lifts = state.lifts;
     Iterator<RepairBrace> others = space.iterator(List.of());
     while (sccs > 1 && others.hasNext()) {
       RepairBrace c = others.next();
-      if (comp[c.panel().lift() - 1] != comp[lifts + c.panel().bay() - 1]) {
+      if (comp.of(c.panel().lift() - 1) != comp.of(lifts + c.panel().bay() - 1)) {
         g.add(c.panel(), c.brace());
         chosen.add(c);
-        comp = g.strongComponents();
-        sccs = comp[g.vertexCount];
+        comp = ContractedStrongComponents.of(g);
+        sccs = comp.count();
       }
     }
     // Drop every brace that is not needed: deviations from the design first, then design members
@@ -141,7 +141,7 @@ final class RepairPlanner {
       for (RepairBrace r : without) {
         trial.add(r.panel(), r.brace());
       }
-      if (trial.strongComponentCount() <= sccs) {
+      if (ContractedStrongComponents.of(trial).count() <= sccs) {
         kept = without;
       }
     }

@@ -1,7 +1,6 @@
 package org.bracewalk.core.analysis;
 
 import java.util.List;
-import java.util.Optional;
 import org.bracewalk.core.model.PanelRef;
 
 /**
@@ -30,11 +29,5 @@ public record StateAnalysis(
   public StateAnalysis {
     criticalBraces = List.copyOf(criticalBraces);
     blocks = List.copyOf(blocks);
-  }
-
-  /** The block that can sway, if there is one: the first block that is not fixed. */
-  public Optional<Block> firstFreeBlock() {
-    boolean anyFixed = blocks.stream().anyMatch(Block::fixed);
-    return blocks.stream().filter(b -> !b.fixed()).skip(anyFixed ? 0 : 1).findFirst();
   }
 }

@@ -73,14 +73,6 @@ public record Inspection(
         carriedOutForAddress);
   }
 
-  /** This inspection finalised at {@code at}. */
-  public Inspection finalisedAt(Instant at) {
-    return new Inspection(
-        id, structureId, startedAt, at, inspectorName, inspectorPosition, competentPerson, shift,
-        storageSafetyPerson, reason, InspectionStatus.FINALISED, carriedOutForName,
-        carriedOutForAddress);
-  }
-
   /** A short name for messages: "inspection 7". */
   public String label() {
     return "inspection " + id;

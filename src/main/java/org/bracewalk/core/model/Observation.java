@@ -88,10 +88,6 @@ public record Observation(
     return new PanelFinding(state, memberFound);
   }
 
-  public boolean isCorrection() {
-    return supersedes != null;
-  }
-
   public Observation withId(long newId) {
     return new Observation(
         newId, inspectionId, planeId, panel, state, memberFound, bowMm, gaugeLengthMm, defect,

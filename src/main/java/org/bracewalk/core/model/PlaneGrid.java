@@ -44,10 +44,6 @@ public record PlaneGrid(
     return new PlaneGrid(lifts, bays, null, null, support);
   }
 
-  public PlaneGrid withSupport(Support newSupport) {
-    return new PlaneGrid(lifts, bays, bayWidths, liftHeights, newSupport);
-  }
-
   public boolean contains(PanelRef p) {
     return p.lift() <= lifts && p.bay() <= bays;
   }

@@ -1,8 +1,8 @@
 package org.bracewalk.ui.common;
 
+import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import org.bracewalk.core.analysis.Block;
 import org.bracewalk.core.analysis.RepairBrace;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.MemberKind;
@@ -256,16 +256,16 @@ public final class PlanePainter {
     return s;
   }
 
-  private static final Color[] LOOK_COLOURS = new Color[PanelLook.values().length];
+  private static final Map<PanelLook, Color> LOOK_COLOURS = new EnumMap<>(PanelLook.class);
 
   static {
     for (PanelLook look : PanelLook.values()) {
-      LOOK_COLOURS[look.ordinal()] = Color.web(look.colour());
+      LOOK_COLOURS.put(look, Color.web(look.colour()));
     }
   }
 
   private static Color colour(PanelLook look) {
-    return LOOK_COLOURS[look.ordinal()];
+    return LOOK_COLOURS.get(look);
   }
 
   /**
@@ -662,10 +662,5 @@ public final class PlanePainter {
     g.strokeLine(x0, y1, x0, y1 - c);
     g.strokeLine(x1, y1, x1 - c, y1);
     g.strokeLine(x1, y1, x1, y1 - c);
-  }
-
-  /** The blocks as letters for a legend: A (fixed), B, C... */
-  public static String blockName(List<Block> blocks, Block b) {
-    return Character.toString((char) ('A' + blocks.indexOf(b)));
   }
 }

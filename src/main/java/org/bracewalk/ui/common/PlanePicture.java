@@ -54,16 +54,6 @@ public record PlanePicture(
     return design.grid();
   }
 
-  public PlanePicture withCursor(PanelRef newCursor) {
-    return new PlanePicture(
-        design, findings, showFindings, blocks, critical, repair, changed, newCursor);
-  }
-
-  public PlanePicture withChanged(Set<PanelRef> newChanged) {
-    return new PlanePicture(
-        design, findings, showFindings, blocks, critical, repair, newChanged, cursor);
-  }
-
   /** The member drawn in {@code p} as found: the finding's own member, else the design's. */
   public Brace memberShown(PanelRef p) {
     PanelFinding f = findings.get(p);

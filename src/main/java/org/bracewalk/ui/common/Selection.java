@@ -28,8 +28,4 @@ public record Selection(long structureId, long planeId, long inspectionId) {
   public Selection withPlane(long structure, long plane) {
     return new Selection(structure, plane, structure == structureId ? inspectionId : 0);
   }
-
-  public Selection withInspection(long inspection) {
-    return new Selection(structureId, planeId, inspection);
-  }
 }

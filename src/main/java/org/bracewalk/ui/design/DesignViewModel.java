@@ -56,6 +56,8 @@ public final class DesignViewModel {
   private final ReadOnlyObjectWrapper<PanelRef> cursor = new ReadOnlyObjectWrapper<>(this, "cursor");
   private final ReadOnlyObjectWrapper<VerdictKind> verdictKind = new ReadOnlyObjectWrapper<>(this, "verdictKind");
   private final ReadOnlyStringWrapper verdictText = new ReadOnlyStringWrapper(this, "verdictText");
+  /** The verdict's sentence without its symbol, for the save warning. */
+  private String verdictSentence = "";
   private final ReadOnlyStringWrapper toleranceText = new ReadOnlyStringWrapper(this, "toleranceText");
   private final ReadOnlyStringWrapper error = new ReadOnlyStringWrapper(this, "error", "");
   private final ReadOnlyStringWrapper status = new ReadOnlyStringWrapper(this, "status", "");
@@ -123,7 +125,8 @@ public final class DesignViewModel {
     int need = lastAnalysis.repair().minimum();
     if (s.rigid()) {
       verdictKind.set(VerdictKind.HOLDS);
-      verdictText.set(VerdictKind.HOLDS.symbol() + " As designed, the plane holds its shape.");
+      verdictSentence = "As designed, the plane holds its shape.";
+      verdictText.set(VerdictKind.HOLDS.symbol() + " " + verdictSentence);
     } else {
       verdictKind.set(VerdictKind.LOST);
       String how =
@@ -134,7 +137,8 @@ public final class DesignViewModel {
           lastAnalysis.repair().possible()
               ? " " + need + (need == 1 ? " more brace would" : " more braces would") + " make it rigid (drawn dash-dot, numbered)."
               : " No brace in the allowed panels can make it rigid: remove an opening or change the support.";
-      verdictText.set(VerdictKind.LOST.symbol() + " As designed, the plane does NOT hold its shape: " + how + fix);
+      verdictSentence = "As designed, the plane does NOT hold its shape: " + how + fix;
+      verdictText.set(VerdictKind.LOST.symbol() + " " + verdictSentence);
     }
     int k = s.lossTolerance();
     String atLeast = s.lossToleranceExact() ? "" : "at least ";
@@ -397,7 +401,7 @@ public final class DesignViewModel {
               "This design does not hold its shape",
               (title == null ? "This plane" : title)
                   + " as designed can sway: "
-                  + verdictText.get().substring(2)
+                  + verdictSentence
                   + "\n\nA plane built to this design would need more bracing before it is used."
                   + " Save it anyway (for example, as a record of what is on site)?",
               "Save anyway");
@@ -436,10 +440,6 @@ public final class DesignViewModel {
 
   public PlaneDesign design() {
     return design.get();
-  }
-
-  public ReadOnlyObjectProperty<PlaneDesign> designProperty() {
-    return design.getReadOnlyProperty();
   }
 
   public PlaneAnalysis analysis() {

@@ -4,7 +4,6 @@ import java.util.List;
 import java.util.function.LongConsumer;
 import javafx.collections.ObservableList;
 import javafx.geometry.Insets;
-import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
@@ -164,10 +163,5 @@ public final class FindingsView extends BorderPane {
             KeyHelp.of("O", "issue the repair order (PDF and CSV)"),
             KeyHelp.of("P", "choose another plane of the inspection"),
             KeyHelp.of("Ctrl+F", "finalise the inspection (asks first; then read-only)")));
-  }
-
-  /** For tests: the node that lists the proposed repair. */
-  Node repairList() {
-    return lookup("#findings-repair");
   }
 }

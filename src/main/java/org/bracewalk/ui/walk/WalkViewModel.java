@@ -657,15 +657,6 @@ public final class WalkViewModel {
     return title;
   }
 
-  public boolean isRacking() {
-    return racking;
-  }
-
-  /** The latest mark of each panel in this inspection, withdrawn ones included. */
-  public Map<PanelRef, RecordedMark> latestMarks() {
-    return Map.copyOf(latest);
-  }
-
   public List<PanelRef> sequence() {
     return List.copyOf(sequence);
   }

@@ -93,6 +93,11 @@ class TextInputTest {
         .hasMessage("m.txt: line 3, column 3: this is not UTF-8 text: save the file as UTF-8"
             + " (plain text)");
     assertThat(TextInput.decode("m.txt", "é\r".getBytes(StandardCharsets.UTF_8))).isEqualTo("é\r");
+    // the kind of problem is carried, so a format words it without reading the words back
+    assertThatThrownBy(() -> TextInput.decode("m.txt", bytes))
+        .isInstanceOfSatisfying(TextInputException.class, e -> assertThat(e.notUtf8()).isTrue());
+    assertThatThrownBy(() -> TextInput.checkCharacters("m.txt", "a\u0007", LIMITS))
+        .isInstanceOfSatisfying(TextInputException.class, e -> assertThat(e.notUtf8()).isFalse());
   }
 
   @Test

@@ -7,7 +7,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
-import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.Brace;

@@ -14,9 +14,9 @@ import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
 import org.jgrapht.Graph;
-import org.jgrapht.alg.StoerWagnerMinimumCut;
 import org.jgrapht.alg.connectivity.BiconnectivityInspector;
 import org.jgrapht.alg.connectivity.ConnectivityInspector;
+import org.jgrapht.alg.flow.EdmondsKarpMFImpl;
 import org.jgrapht.graph.Pseudograph;
 import org.jgrapht.graph.WeightedPseudograph;
 import org.junit.jupiter.api.Test;
@@ -26,8 +26,12 @@ import org.junit.jupiter.api.Test;
  * here (E. D. Bolker, H. Crapo, "Bracing rectangular frameworks I", SIAM J. Appl. Math. 36 (1979):
  * one vertex per lift and per bay, one edge per diagonal member, a cross being two parallel edges;
  * a pinned base adds a ground vertex linked to every bay). Bridges (Tarjan, via
- * BiconnectivityInspector) against the critical braces, the Stoer-Wagner minimum cut (M. Stoer,
- * F. Wagner, J. ACM 44 (1997)) against the loss tolerance, connected components against the blocks.
+ * BiconnectivityInspector) against the critical braces; the global minimum cut as the least
+ * maximum flow from one vertex to each other (max-flow min-cut: L. R. Ford, D. R. Fulkerson, Canad.
+ * J. Math. 8 (1956); Edmonds-Karp, J. ACM 19 (1972)), an algorithm other than the engine's
+ * Stoer-Wagner, against the loss tolerance; connected components against the blocks; the strong
+ * components of the uncontracted digraph by transitive closure (Warshall, J. ACM 9 (1962)) against
+ * the engine's contracted ones.
  */
 class GraphCrossCheckTest {
   private static final String GROUND = "ground";
@@ -123,7 +127,8 @@ class GraphCrossCheckTest {
   }
 
   /**
-   * Edge connectivity of the rigid members' graph by Stoer-Wagner. On a pinned base the ground and
+   * Edge connectivity of the rigid members' graph: the least s-t maximum flow from the first lift
+   * to every other vertex (unit capacity per member). On a pinned base the ground and
    * every bay are joined by unbreakable links, so they are one vertex here.
    */
   private static int rigidEdgeConnectivity(PlaneGrid grid, Map<PanelRef, Brace> members) {
@@ -148,7 +153,14 @@ class GraphCrossCheckTest {
     if (!new ConnectivityInspector<>(g).isConnected()) {
       return 0;
     }
-    return (int) Math.round(new StoerWagnerMinimumCut<>(g).minCutWeight());
+    String source = lift(1);
+    double least = Double.MAX_VALUE;
+    for (String t : g.vertexSet()) {
+      if (!t.equals(source)) {
+        least = Math.min(least, new EdmondsKarpMFImpl<>(g).getMaximumFlowValue(source, t));
+      }
+    }
+    return least == Double.MAX_VALUE ? 0 : (int) Math.round(least);
   }
 
   @Test
@@ -187,5 +199,67 @@ class GraphCrossCheckTest {
       several += expected.size() > 2 ? 1 : 0;
     }
     assertThat(several).isGreaterThan(100);
+  }
+
+  @Test
+  void contractedStrongComponentsAreTheStrongComponentsOfTheWholeDigraph() {
+    Random rnd = new Random(0x6A7F_0004L);
+    int several = 0;
+    for (int k = 0; k < 400; k++) {
+      Support s = k % 2 == 0 ? Support.FREE : Support.PINNED_BASE;
+      PlaneGrid grid = TestPlanes.unevenGrid(rnd, 1 + rnd.nextInt(7), 1 + rnd.nextInt(7), s);
+      Map<PanelRef, Brace> members =
+          TestPlanes.members(rnd, grid, 0.2 + 0.7 * rnd.nextDouble(), 0.3 + 0.7 * rnd.nextDouble());
+      BraceGraph g = BraceGraph.of(grid, members);
+      boolean[][] reach = closure(g);
+      ContractedStrongComponents comp = ContractedStrongComponents.of(g);
+      Set<Integer> ids = new HashSet<>();
+      for (int a = 0; a < g.vertexCount; a++) {
+        ids.add(comp.of(a));
+        for (int b = 0; b < g.vertexCount; b++) {
+          assertThat(comp.of(a) == comp.of(b))
+              .as("vertices %d and %d together in%s", a, b, TestPlanes.map(grid, members))
+              .isEqualTo(reach[a][b] && reach[b][a]);
+        }
+      }
+      assertThat(comp.count()).isEqualTo(ids.size());
+      several += comp.count() > 1 ? 1 : 0;
+    }
+    assertThat(several).isGreaterThan(100);
+  }
+
+  /** Reachability in the whole brace digraph (arcs as in analysis.md), by Warshall's closure. */
+  private static boolean[][] closure(BraceGraph g) {
+    int v = g.vertexCount;
+    boolean[][] r = new boolean[v][v];
+    for (int x = 0; x < v; x++) {
+      r[x][x] = true;
+    }
+    for (int e = 0; e < g.memberCount(); e++) {
+      int l = g.liftVertex(e);
+      int b = g.bayVertex(e);
+      if (g.isRigid(e) || g.isRising(e)) {
+        r[l][b] = true;
+      }
+      if (g.isRigid(e) || !g.isRising(e)) {
+        r[b][l] = true;
+      }
+    }
+    if (g.pinned) {
+      for (int j = 0; j < g.bays; j++) {
+        r[g.ground][g.lifts + j] = true;
+        r[g.lifts + j][g.ground] = true;
+      }
+    }
+    for (int m = 0; m < v; m++) {
+      for (int a = 0; a < v; a++) {
+        if (r[a][m]) {
+          for (int b = 0; b < v; b++) {
+            r[a][b] |= r[m][b];
+          }
+        }
+      }
+    }
+    return r;
   }
 }

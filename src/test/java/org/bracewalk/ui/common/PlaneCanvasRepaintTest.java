@@ -9,6 +9,7 @@ import java.util.Random;
 import java.util.Set;
 import javafx.scene.image.PixelReader;
 import javafx.scene.image.WritableImage;
+import org.bracewalk.bench.HeadlessFx;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.PanelFinding;
@@ -17,7 +18,6 @@ import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
-import org.bracewalk.ui.HeadlessFx;
 import org.junit.jupiter.api.Test;
 
 /** Repainting only the panels that changed must leave the same picture as drawing it all again. */

@@ -6,7 +6,7 @@ import javafx.scene.Scene;
 import javafx.scene.control.Label;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
-import org.bracewalk.ui.HeadlessFx;
+import org.bracewalk.bench.HeadlessFx;
 import org.junit.jupiter.api.Test;
 
 /** A box that remembers its heights must still answer as a plain box does after its content changes. */

@@ -84,6 +84,10 @@ class DesignViewModelTest {
     assertThat(vm.save()).isFalse();
     assertThat(saved).isEmpty();
     assertThat(dialogs.asked).singleElement().asString().startsWith("This design does not hold its shape");
+    // the warning carries the verdict's own sentence, whole and without the verdict's symbol
+    assertThat(dialogs.asked.get(0))
+        .contains("as designed can sway: As designed, the plane does NOT hold its shape: ")
+        .doesNotContain(VerdictKind.LOST.symbol());
     dialogs.confirmAnswers.push(true);
     assertThat(vm.save()).isTrue();
     assertThat(notes.get(0)).contains("warning acknowledged");

@@ -58,7 +58,7 @@ class RetirePlaneViewModelTest {
     assertThat(services.inspections().planesOf(started.id())).extracting(PlaneRecord::name)
         .doesNotContain("spine");
     // the walk-round opens on a plane the inspection covers, not on the retired one
-    long spine = services.sites().planeByName(1, "spine").id();
+    long spine = spineOf(services).id();
     assertThat(opened.get(0)).doesNotContain("plane=" + spine + ",").contains("WALK");
     assertThat(services.inspections().planesOf(1)).extracting(PlaneRecord::name).contains("spine");
     vm.refresh();
@@ -69,7 +69,7 @@ class RetirePlaneViewModelTest {
   void declinedOrWithoutAReasonNothingIsRetired() {
     services = DemoDatabase.withDemo(dir);
     SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
-    long spine = services.sites().planeByName(1, "spine").id();
+    long spine = spineOf(services).id();
     vm.selectedProperty().set(row(vm, "spine"));
     dialogs.textAnswers.add(Optional.of("typo"));
     dialogs.confirmAnswers.add(false);
@@ -81,5 +81,13 @@ class RetirePlaneViewModelTest {
     assertThat(vm.retirePlane()).isFalse();
     assertThat(vm.errorProperty().get()).isEqualTo("Select the plane to retire first.");
     assertThat(services.sites().retirement(spine)).isEmpty();
+  }
+
+  /** The plane named "spine" of structure 1 (the demo's racking run). */
+  private static PlaneRecord spineOf(AppServices services) {
+    return services.sites().planes(1).stream()
+        .filter(p -> p.name().equals("spine"))
+        .findFirst()
+        .orElseThrow();
   }
 }

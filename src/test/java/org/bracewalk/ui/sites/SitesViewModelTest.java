@@ -6,8 +6,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.bracewalk.app.AppServices;
+import org.bracewalk.bench.DemoWalk;
 import org.bracewalk.ui.DemoDatabase;
-import org.bracewalk.ui.DemoWalk;
 import org.bracewalk.ui.common.FakeDialogs;
 import org.bracewalk.ui.common.Navigator;
 import org.bracewalk.ui.common.ScreenId;
@@ -105,7 +105,7 @@ class SitesViewModelTest {
   @Test
   void aPlaneAddedAfterTheLatestInspectionIsShownAsNotPartOfIt() {
     services = DemoDatabase.withDemo(dir);
-    var frame2 = services.sites().planeByName(1, "frame 2");
+    var frame2 = services.sites().planes(1).stream().filter(p -> p.name().equals("frame 2")).findFirst().orElseThrow();
     var design = services.sites().currentDesign(frame2.id()).design();
     services.sites().createPlane(
         new org.bracewalk.core.model.PlaneRecord(0, 1, "west return", frame2.grid()),

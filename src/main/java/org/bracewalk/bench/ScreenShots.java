@@ -1,4 +1,4 @@
-package org.bracewalk.ui;
+package org.bracewalk.bench;
 
 import java.nio.file.Path;
 import java.time.Clock;
@@ -10,6 +10,9 @@ import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.StructureKind;
+import org.bracewalk.ui.AppScreens;
+import org.bracewalk.ui.MainWindow;
+import org.bracewalk.ui.QuietDialogs;
 import org.bracewalk.ui.common.ScreenId;
 import org.bracewalk.ui.common.Selection;
 import org.bracewalk.ui.findings.ReportIssuer;

@@ -1,4 +1,4 @@
-package org.bracewalk.app;
+package org.bracewalk.bench;
 
 import java.nio.file.Path;
 import java.time.Clock;
@@ -7,13 +7,17 @@ import java.time.Instant;
 import java.time.LocalDate;
 import java.time.ZoneId;
 import java.util.ArrayList;
-
 import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.function.LongSupplier;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.app.AppServicesFactory;
+import org.bracewalk.app.ImportedSite;
+import org.bracewalk.app.NewInspection;
+import org.bracewalk.app.NewObservation;
 import org.bracewalk.app.sitefile.SiteFile;
 import org.bracewalk.app.sitefile.SiteFile.DesignData;
 import org.bracewalk.app.sitefile.SiteFile.InspectionData;

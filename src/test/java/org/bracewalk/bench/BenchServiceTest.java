@@ -1,4 +1,4 @@
-package org.bracewalk.app.bench;
+package org.bracewalk.bench;
 
 import static org.assertj.core.api.Assertions.assertThat;
 

@@ -1,4 +1,4 @@
-package org.bracewalk.cli;
+package org.bracewalk.bench;
 
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -10,9 +10,10 @@ import java.util.Comparator;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import java.util.stream.Stream;
-import org.bracewalk.app.StoreBenchmark;
 import org.bracewalk.app.UserInputException;
+import org.bracewalk.cli.CliContext;
 import org.bracewalk.core.port.StoreException;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -24,7 +25,7 @@ import picocli.CommandLine.Spec;
         + " commit (target: median under 5 ms), and importing a 10,000-panel site (target: under"
         + " 2 s). Works in new database files in --dir (default: a temporary folder, removed"
         + " afterwards); your own database is not touched."})
-final class BenchStoreCommand implements Callable<Integer> {
+public final class BenchStoreCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
   @Option(names = "--dir", paramLabel = "FOLDER",
@@ -45,7 +46,7 @@ final class BenchStoreCommand implements Callable<Integer> {
 
   private final CliContext context;
 
-  BenchStoreCommand(CliContext context) {
+  public BenchStoreCommand(CliContext context) {
     this.context = context;
   }
 
@@ -55,7 +56,7 @@ final class BenchStoreCommand implements Callable<Integer> {
     PrintWriter err = spec.commandLine().getErr();
     if (records < 1 || panels < 1 || imports < 1) {
       err.println("error: --records, --panels and --imports must be at least 1");
-      return StoreCommand.BAD_INPUT;
+      return CommandLine.ExitCode.USAGE;
     }
     boolean temporary = dir == null;
     try {
@@ -88,10 +89,10 @@ final class BenchStoreCommand implements Callable<Integer> {
       }
     } catch (IOException e) {
       err.println("error: cannot use the folder: " + e.getMessage());
-      return StoreCommand.BAD_INPUT;
+      return CommandLine.ExitCode.USAGE;
     } catch (UserInputException | StoreException e) {
       err.println("error: " + e.getMessage());
-      return StoreCommand.BAD_INPUT;
+      return CommandLine.ExitCode.USAGE;
     }
   }
 

@@ -1,4 +1,4 @@
-package org.bracewalk.cli;
+package org.bracewalk.bench;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -9,9 +9,6 @@ import java.io.StringWriter;
 import java.lang.management.ManagementFactory;
 import java.util.List;
 import java.util.concurrent.atomic.AtomicLong;
-import org.bracewalk.app.bench.BenchFormat;
-import org.bracewalk.app.bench.BenchPlan;
-import org.bracewalk.app.bench.BenchService;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.junit.jupiter.api.Test;
 import picocli.CommandLine;

@@ -1,6 +1,7 @@
-package org.bracewalk.boot;
+package org.bracewalk.bench;
 
 import java.io.PrintStream;
+import java.time.Clock;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
@@ -11,6 +12,7 @@ import javafx.event.Event;
 import javafx.scene.Scene;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
+import org.bracewalk.app.AppServices;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
@@ -18,7 +20,7 @@ import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
-import org.bracewalk.ui.HeadlessFx;
+import org.bracewalk.store.Database;
 import org.bracewalk.ui.Stylesheet;
 import org.bracewalk.ui.common.DialogService;
 import org.bracewalk.ui.walk.Mark;
@@ -34,7 +36,7 @@ import org.bracewalk.ui.walk.WalkViewModel;
  * drawing (by a snapshot of the canvas, an upper bound: it adds reading the pixels back). Runs once
  * with the marks kept in memory and once committed to a fresh SQLite database with full sync, as
  * the app does. Prints medians; a benchmark, not a test. Run: {@code java -cp target/bracewalk.jar
- * org.bracewalk.boot.WalkBench [samples]}.
+ * org.bracewalk.bench.WalkBench [samples]}.
  */
 public final class WalkBench {
   private WalkBench() {}
@@ -67,7 +69,7 @@ public final class WalkBench {
     print(out, "record in memory; every keystroke changes the verdict (M on the top lift's only"
         + " brace, then Backspace)", flips);
     java.nio.file.Path dir = java.nio.file.Files.createTempDirectory("bracewalk-bench");
-    try (org.bracewalk.app.AppServices services = AppContext.standard().open(dir.resolve("bench.db"))) {
+    try (AppServices services = AppServices.over(Database.open(dir.resolve("bench.db")), Clock.systemUTC(), PlaneAnalyzer.standard())) {
       MarkRecorder stored = storedRecorder(services, design);
       long[][] db = HeadlessFx.onFx(() -> run(design, samples, stored, false));
       print(out, "record committed to SQLite (full sync)", db);

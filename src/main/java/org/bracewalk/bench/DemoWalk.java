@@ -1,4 +1,4 @@
-package org.bracewalk.ui;
+package org.bracewalk.bench;
 
 import java.util.ArrayList;
 import java.util.List;

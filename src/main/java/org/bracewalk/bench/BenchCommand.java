@@ -1,12 +1,8 @@
-package org.bracewalk.cli;
+package org.bracewalk.bench;
 
 import java.io.PrintWriter;
 import java.util.Objects;
 import java.util.concurrent.Callable;
-import org.bracewalk.app.bench.BenchFormat;
-import org.bracewalk.app.bench.BenchPlan;
-import org.bracewalk.app.bench.BenchReport;
-import org.bracewalk.app.bench.BenchService;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;

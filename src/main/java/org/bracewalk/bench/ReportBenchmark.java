@@ -1,4 +1,4 @@
-package org.bracewalk.app.report;
+package org.bracewalk.bench;
 
 import java.time.LocalDate;
 import java.time.ZoneId;
@@ -12,6 +12,7 @@ import org.bracewalk.app.AppServices;
 import org.bracewalk.app.ImportedSite;
 import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.NewObservation;
+import org.bracewalk.app.report.ReportService;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.DisplayUnits;

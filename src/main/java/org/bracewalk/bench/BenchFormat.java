@@ -1,4 +1,4 @@
-package org.bracewalk.app.bench;
+package org.bracewalk.bench;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;

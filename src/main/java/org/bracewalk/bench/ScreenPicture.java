@@ -1,4 +1,4 @@
-package org.bracewalk.ui;
+package org.bracewalk.bench;
 
 import java.awt.image.BufferedImage;
 import java.io.IOException;
@@ -9,6 +9,7 @@ import javafx.scene.Scene;
 import javafx.scene.image.WritableImage;
 import javax.imageio.ImageIO;
 import org.bracewalk.app.OutputFiles;
+import org.bracewalk.ui.Stylesheet;
 
 /** Renders a screen (a scene-graph root) to a PNG file. Call on the JavaFX thread. */
 public final class ScreenPicture {

@@ -1,4 +1,4 @@
-package org.bracewalk.app.bench;
+package org.bracewalk.bench;
 
 import java.util.ArrayList;
 import java.util.HashMap;

@@ -1,17 +1,19 @@
-package org.bracewalk.boot;
+package org.bracewalk.bench;
 
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Clock;
 import java.util.Comparator;
-import java.util.Map;
 import java.util.concurrent.Callable;
+import java.util.function.Function;
 import java.util.stream.Stream;
 import org.bracewalk.app.AppServices;
-import org.bracewalk.ui.HeadlessFx;
-import org.bracewalk.ui.ScreenShots;
+import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.ui.findings.ReportIssuer;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -30,7 +32,7 @@ import picocli.CommandLine.Spec;
           + " temporary database that is deleted afterwards).",
       "Use --list for the screen names."
     })
-final class SnapshotCommand implements Callable<Integer> {
+public final class SnapshotCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
   @Option(names = "--screen", paramLabel = "NAME", description = "the screen to render (see --list)")
@@ -46,12 +48,21 @@ final class SnapshotCommand implements Callable<Integer> {
       description = "picture size in pixels (default ${DEFAULT-VALUE}; 1280x800 is a common tablet)")
   String size;
 
-  private final AppContext context;
-  private final Map<String, String> env;
+  private final Function<Path, AppServices> open;
+  private final PlaneAnalyzer analyzer;
+  private final Clock clock;
+  private final Function<AppServices, ReportIssuer> issuers;
 
-  SnapshotCommand(AppContext context, Map<String, String> env) {
-    this.context = context;
-    this.env = env;
+  /**
+   * @param open opens the services over a database file
+   * @param issuers the report issuer over the services opened
+   */
+  public SnapshotCommand(Function<Path, AppServices> open, PlaneAnalyzer analyzer, Clock clock,
+      Function<AppServices, ReportIssuer> issuers) {
+    this.open = open;
+    this.analyzer = analyzer;
+    this.clock = clock;
+    this.issuers = issuers;
   }
 
   @Override
@@ -66,26 +77,26 @@ final class SnapshotCommand implements Callable<Integer> {
     if (screen == null || out == null) {
       err.println("bracewalk snapshot: give --screen NAME and --out FILE.png (or --list)");
       err.flush();
-      return Launcher.BAD_INPUT;
+      return CommandLine.ExitCode.USAGE;
     }
     if (!ScreenShots.NAMES.contains(screen)) {
       err.println("bracewalk snapshot: no screen named '" + screen + "'; use one of "
           + String.join(", ", ScreenShots.NAMES));
       err.flush();
-      return Launcher.BAD_INPUT;
+      return CommandLine.ExitCode.USAGE;
     }
     java.util.regex.Matcher m = java.util.regex.Pattern.compile("(\\d{3,4})x(\\d{3,4})").matcher(size.strip());
     if (!m.matches()) {
       err.println("bracewalk snapshot: --size '" + size + "': give WIDTHxHEIGHT in pixels, e.g. 1280x800");
       err.flush();
-      return Launcher.BAD_INPUT;
+      return CommandLine.ExitCode.USAGE;
     }
     int width = Integer.parseInt(m.group(1));
     int height = Integer.parseInt(m.group(2));
     if (width < 640 || height < 480) {
       err.println("bracewalk snapshot: --size " + size + " is smaller than the app's 640x480 least");
       err.flush();
-      return Launcher.BAD_INPUT;
+      return CommandLine.ExitCode.USAGE;
     }
     Path dir;
     try {
@@ -95,9 +106,8 @@ final class SnapshotCommand implements Callable<Integer> {
     }
     try {
       HeadlessFx.start();
-      try (AppServices services = context.open(dir.resolve("demo.db"))) {
-        ScreenShots shots = new ScreenShots(services, context.analyzer(), context.clock(),
-            ReportIssuers.over(context, services, env));
+      try (AppServices services = open.apply(dir.resolve("demo.db"))) {
+        ScreenShots shots = new ScreenShots(services, analyzer, clock, issuers.apply(services));
         HeadlessFx.onFx(() -> {
           shots.render(screen, out, width, height);
           return null;
