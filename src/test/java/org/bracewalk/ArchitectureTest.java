@@ -61,6 +61,20 @@ class ArchitectureTest {
   }
 
   @Test
+  void frontEndsCallUseCasesOnly() {
+    check(
+        noClasses()
+            .that()
+            .resideInAnyPackage("org.bracewalk.cli..", "org.bracewalk.ui..")
+            .should()
+            .dependOnClassesThat()
+            .resideInAnyPackage("org.bracewalk.core.port..", "org.bracewalk.store..")
+            .because("a use case lives in app once and every front end calls it: a front end that"
+                + " reached the ports or the store would be writing a use case of its own (as the"
+                + " command line once committed an observation and its photos in two transactions)"));
+  }
+
+  @Test
   void appDoesNotSeeAdapters() {
     check(
         noClasses()

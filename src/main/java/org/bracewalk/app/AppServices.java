@@ -43,6 +43,11 @@ public record AppServices(
         new DemoService(store, files), new RepairService(store, clock));
   }
 
+  /** Where the record is kept (the database file's path), for the user to see. */
+  public String location() {
+    return store.location();
+  }
+
   /**
    * The writer of output files for this database: it refuses the database file and its
    * companions as targets. Add the files a command reads with {@link OutputFiles#withInput}.

@@ -4,12 +4,9 @@ import java.io.PrintWriter;
 import java.lang.management.ManagementFactory;
 import java.util.Map;
 import org.bracewalk.app.AnalysisOutput;
-import org.bracewalk.app.UserInputException;
+import org.bracewalk.app.Refusals;
 import org.bracewalk.app.check.CheckService;
-import org.bracewalk.app.panelmap.PanelMapException;
 import org.bracewalk.app.panelmap.PanelMapParser;
-import org.bracewalk.app.sitefile.FileFormatException;
-import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.app.verdict.VerdictJson;
 import org.bracewalk.app.verdict.VerdictText;
 import org.bracewalk.bench.BenchCommand;
@@ -106,8 +103,7 @@ public final class Launcher {
 
   /** The located errors about the user's input, which commands normally catch themselves. */
   private static boolean isUserError(Throwable e) {
-    return e instanceof UserInputException || e instanceof FileFormatException
-        || e instanceof PanelMapException || e instanceof TextInputException;
+    return Refusals.isInputError(e);
   }
 
   /** Runs one command over a given context; returns the exit code. */

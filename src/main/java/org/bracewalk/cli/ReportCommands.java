@@ -2,20 +2,15 @@ package org.bracewalk.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.UserInputException;
+import org.bracewalk.app.report.Issued;
 import org.bracewalk.app.report.ReportService;
 import org.bracewalk.app.report.ReportServiceFactory;
 import org.bracewalk.app.report.Verification;
 import org.bracewalk.app.text.TextInput;
 import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.model.IssuedReport;
-import org.bracewalk.core.port.RenderingException;
-import org.bracewalk.core.port.report.PlaneSection;
-import org.bracewalk.app.verdict.Verdict;
-import org.bracewalk.core.port.report.RepairOrderContent;
-import org.bracewalk.core.port.report.ReportContent;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -32,7 +27,7 @@ public final class ReportCommands {
     root.addSubcommand("verify-report", new VerifyReport(context, reports));
   }
 
-  /** A store command that needs the report service; wording-template faults are bad input. */
+  /** A store command that needs the report service (a wording-template fault is bad input, exit 2). */
   abstract static class ReportCommand extends StoreCommand {
     final ReportServiceFactory reports;
 
@@ -44,30 +39,17 @@ public final class ReportCommands {
     @Override
     final int run(AppServices services, PrintWriter out, PrintWriter err) {
       outputs = outputs.withInputs(reports.inputFiles());
-      try {
-        return run(services, reports.over(services), out, err);
-      } catch (RenderingException e) {
-        err.println("error: " + e.getMessage());
-        return BAD_INPUT;
-      }
+      return run(services, reports.over(services), out, err);
     }
 
     abstract int run(AppServices services, ReportService reports, PrintWriter out, PrintWriter err);
   }
 
   /** The line saying what the register now holds for an issued file. */
-  static String registered(IssuedReport r, ReportService reports) {
+  static String registered(IssuedReport r, boolean signed) {
     boolean pdf = r.kind() != IssuedReport.Kind.REPAIR_ORDER_CSV;
     return "registered as issued (" + r.kind().label() + " " + r.id() + ", SHA-256 "
-        + r.fingerprint() + ")" + (pdf && reports.signs() ? "; digitally signed" : "");
-  }
-
-  static void planeLines(ReportContent c, PrintWriter out) {
-    for (PlaneSection p : c.planes()) {
-      Verdict v = Verdict.of(p.analysis(), p.role(), !p.findings().isEmpty());
-      out.println("  " + p.name() + ": " + v.headline()
-          + (v.keepOffZone().isPresent() ? ". " + v.keepOff() : ""));
-    }
+        + r.fingerprint() + ")" + (pdf && signed ? "; digitally signed" : "");
   }
 
   @Command(name = "report", mixinStandardHelpOptions = true,
@@ -92,16 +74,13 @@ public final class ReportCommands {
 
     @Override
     int run(AppServices s, ReportService reports, PrintWriter out, PrintWriter err) {
-      outputs.check(outFile);
-      ReportContent content = reports.reportContent(inspection);
-      IssuedReport issued = reports.issueReport(content, outFile, outputs);
-      out.println("wrote " + outFile + (content.header().draft() ? " (DRAFT: the inspection is open)" : ""));
-      out.println(registered(issued, reports));
-      out.println("inspection " + inspection + ", " + content.planes().size() + " planes, "
-          + content.findings().size() + " findings, " + content.actions().size()
-          + " repair actions");
-      planeLines(content, out);
-      out.println("record fingerprint " + content.fingerprint().sha256());
+      Issued.Report issued = reports.issueReport(inspection, outFile, outputs, Issued.Progress.NONE);
+      out.println("wrote " + outFile + (issued.draft() ? " (DRAFT: the inspection is open)" : ""));
+      out.println(registered(issued.registered(), issued.signed()));
+      out.println("inspection " + inspection + ", " + issued.planes() + " planes, "
+          + issued.findings() + " findings, " + issued.actions() + " repair actions");
+      issued.planeLines().forEach(line -> out.println("  " + line));
+      out.println("record fingerprint " + issued.recordsFingerprint());
       return 0;
     }
   }
@@ -130,18 +109,13 @@ public final class ReportCommands {
 
     @Override
     int run(AppServices s, ReportService reports, PrintWriter out, PrintWriter err) {
-      if (csv == null) {
-        outputs.check(outFile);
-      } else {
-        outputs.check(outFile, csv);
-      }
-      RepairOrderContent order = reports.repairOrderContent(inspection);
-      List<IssuedReport> issued = reports.issueRepairOrder(order, outFile, csv, outputs);
-      out.println("wrote " + outFile + ": " + order.actions().size() + " actions");
-      out.println(registered(issued.get(0), reports));
+      Issued.RepairOrder issued =
+          reports.issueRepairOrder(inspection, outFile, csv, outputs, Issued.Progress.NONE);
+      out.println("wrote " + outFile + ": " + issued.actions() + " actions");
+      out.println(registered(issued.registered().get(0), issued.signed()));
       if (csv != null) {
         out.println("wrote " + csv);
-        out.println(registered(issued.get(1), reports));
+        out.println(registered(issued.registered().get(1), issued.signed()));
       }
       return 0;
     }

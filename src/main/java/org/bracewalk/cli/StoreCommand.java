@@ -5,11 +5,10 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.OutputFiles;
+import org.bracewalk.app.Refusals;
 import org.bracewalk.app.UserInputException;
-import org.bracewalk.app.sitefile.FileFormatException;
 import org.bracewalk.app.text.TextInput;
 import org.bracewalk.app.text.TextInputException;
-import org.bracewalk.core.port.StoreException;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -60,14 +59,20 @@ abstract class StoreCommand implements Callable<Integer> {
     try {
       context.prepareFolder(file);
       beforeOpen(file, err);
-    } catch (UserInputException | StoreException e) {
+    } catch (RuntimeException e) {
+      if (!Refusals.isRefusal(e)) {
+        throw e;
+      }
       err.println("error: " + e.getMessage());
       return BAD_INPUT;
     }
     try (AppServices services = context.services().open(file)) {
       outputs = services.outputs();
       return run(services, out, err);
-    } catch (UserInputException | FileFormatException | StoreException | IllegalArgumentException e) {
+    } catch (RuntimeException e) {
+      if (!Refusals.isRefusal(e)) {
+        throw e; // the launcher's: exit 3, one line, the detail in the log
+      }
       out.flush();
       err.println("error: " + e.getMessage());
       return BAD_INPUT;

@@ -104,7 +104,7 @@ public final class BracewalkApp {
 
   /** As {@link #show(Stage, AppServices, ReportIssuer)}, with the dialogs given (tests answer them). */
   public MainWindow show(Stage stage, DialogService dialogs, AppServices services, ReportIssuer issuer) {
-    showOpening(stage, dialogs, services.store().location());
+    showOpening(stage, dialogs, services.location());
     attach(services, issuer);
     return window;
   }

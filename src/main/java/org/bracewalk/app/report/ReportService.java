@@ -231,6 +231,53 @@ public final class ReportService {
     }));
   }
 
+  /**
+   * The report use case as a front end calls it: checks the target, gathers the inspection's
+   * records, draws, signs when configured, registers and writes the report (see {@link
+   * #issueReport(ReportContent, Path, OutputFiles)}), telling {@code progress} as it goes.
+   */
+  public Issued.Report issueReport(long inspectionId, Path out, OutputFiles outputs,
+      Issued.Progress progress) {
+    outputs.check(out);
+    progress.at(0.1, "reading the inspection's records");
+    ReportContent content = reportContent(inspectionId);
+    progress.at(0.4, "drawing the report" + (signs() ? " and signing it" : ""));
+    IssuedReport row = issueReport(content, out, outputs);
+    return new Issued.Report(row, inspectionId, content.header().draft(), content.planes().size(),
+        content.findings().size(), content.actions().size(), planeLines(content),
+        content.fingerprint().sha256(), signs());
+  }
+
+  /**
+   * The repair-order use case as a front end calls it: the PDF at {@code pdfOut} and, when {@code
+   * csvOut} is not null, the CSV, both checked before anything is drawn and registered together.
+   */
+  public Issued.RepairOrder issueRepairOrder(long inspectionId, Path pdfOut, Path csvOut,
+      OutputFiles outputs, Issued.Progress progress) {
+    if (csvOut == null) {
+      outputs.check(pdfOut);
+    } else {
+      outputs.check(pdfOut, csvOut);
+    }
+    progress.at(0.1, "reading the inspection's records");
+    RepairOrderContent order = repairOrderContent(inspectionId);
+    progress.at(0.4, "drawing the repair order" + (signs() ? " and signing it" : ""));
+    List<IssuedReport> rows = issueRepairOrder(order, pdfOut, csvOut, outputs);
+    return new Issued.RepairOrder(rows, order.actions().size(), signs());
+  }
+
+  /** One line per plane: its name, verdict and, where anything must be kept off, where. */
+  static List<String> planeLines(ReportContent c) {
+    List<String> lines = new ArrayList<>();
+    for (PlaneSection p : c.planes()) {
+      org.bracewalk.app.verdict.Verdict v =
+          org.bracewalk.app.verdict.Verdict.of(p.analysis(), p.role(), !p.findings().isEmpty());
+      lines.add(p.name() + ": " + v.headline()
+          + (v.keepOffZone().isPresent() ? ". " + v.keepOff() : ""));
+    }
+    return lines;
+  }
+
   /** Adds a document's exact bytes to the register of issued documents. */
   IssuedReport register(long inspectionId, IssuedReport.Kind kind, Path file, byte[] bytes,
       String recordsFingerprint) {

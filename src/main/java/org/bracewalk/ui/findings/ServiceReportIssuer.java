@@ -5,8 +5,7 @@ import java.util.Objects;
 import java.util.function.Consumer;
 import org.bracewalk.app.OutputFiles;
 import org.bracewalk.app.report.ReportService;
-import org.bracewalk.core.port.report.RepairOrderContent;
-import org.bracewalk.core.port.report.ReportContent;
+import org.bracewalk.app.report.Issued;
 
 /**
  * Issues the documents through the report service's issuing use case, as {@code bracewalk report}
@@ -32,14 +31,11 @@ public final class ServiceReportIssuer implements ReportIssuer {
 
   @Override
   public String issueReport(long inspectionId, Path out, Consumer<Progress> progress) {
-    outputs.check(out);
-    progress.accept(new Progress(0.1, "reading the inspection's records"));
-    ReportContent content = reports.reportContent(inspectionId);
-    progress.accept(new Progress(0.4, "drawing the report" + (reports.signs() ? " and signing it" : "")));
-    reports.issueReport(content, out, outputs);
-    return "Issued the inspection report " + out + (content.header().draft() ? " (DRAFT: the inspection is open)" : "")
-        + "; record fingerprint " + content.fingerprint().sha256().substring(0, 16) + "\u2026"
-        + (reports.signs() ? "; digitally signed" : "");
+    Issued.Report issued = reports.issueReport(inspectionId, out, outputs,
+        (fraction, doing) -> progress.accept(new Progress(fraction, doing)));
+    return "Issued the inspection report " + out + (issued.draft() ? " (DRAFT: the inspection is open)" : "")
+        + "; record fingerprint " + issued.recordsFingerprint().substring(0, 16) + "\u2026"
+        + (issued.signed() ? "; digitally signed" : "");
   }
 
   @Override
@@ -47,11 +43,8 @@ public final class ServiceReportIssuer implements ReportIssuer {
     String name = out.getFileName().toString();
     Path csv = out.resolveSibling((name.toLowerCase(java.util.Locale.ROOT).endsWith(".pdf")
         ? name.substring(0, name.length() - 4) : name) + ".csv");
-    outputs.check(out, csv);
-    progress.accept(new Progress(0.1, "reading the inspection's records"));
-    RepairOrderContent order = reports.repairOrderContent(inspectionId);
-    progress.accept(new Progress(0.4, "drawing the repair order" + (reports.signs() ? " and signing it" : "")));
-    reports.issueRepairOrder(order, out, csv, outputs);
-    return "Issued the repair order " + out + " (" + order.actions().size() + " actions) and " + csv.getFileName();
+    Issued.RepairOrder issued = reports.issueRepairOrder(inspectionId, out, csv, outputs,
+        (fraction, doing) -> progress.accept(new Progress(fraction, doing)));
+    return "Issued the repair order " + out + " (" + issued.actions() + " actions) and " + csv.getFileName();
   }
 }

@@ -511,6 +511,6 @@ public final class SitesViewModel {
   }
 
   public String databaseLocation() {
-    return services.store().location();
+    return services.location();
   }
 }
