@@ -169,7 +169,7 @@ public final class AppScreens implements ScreenFactory {
         new WalkViewModel(design.design(), st.name() + ", " + plane.name(), plane.role(),
             InspectionMarkRecorder.existing(services.inspections(), insp.id(), plane.id()),
             new InspectionMarkRecorder(services.inspections(), insp.id(), plane.id(), insp.inspectorName()),
-            analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised());
+            analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised(), clock);
     vm.useCameraFolderSetting(cameraFolder);
     WalkView view = new WalkView(vm);
     Selection here = new Selection(st.id(), plane.id(), insp.id());

@@ -102,13 +102,8 @@ public final class WalkViewModel {
   private final ObjectProperty<MemberKind> memberKind =
       new SimpleObjectProperty<>(this, "memberKind", MemberKind.RIGID);
   private Path photoFolder;
-  private CameraFolder.Setting cameraFolder = CameraFolder.Setting.inMemory();
-  /** Photos from the camera folder count from here: the walk-round's opening, then each mark. */
-  private java.time.Instant cameraSince = java.time.Instant.now();
-  /** Camera photos already attached in this session, so none is taken twice. */
-  private final java.util.Set<Path> cameraTaken = new java.util.HashSet<>();
-  /** The camera folder's photos at the previous mark, once the folder is in use; null before. */
-  private java.util.Set<Path> cameraBefore;
+  private final java.time.Clock clock;
+  private CameraFolder cameraFolder;
 
   /** One mark made in this session, so undo can correct it. */
   private record Step(PanelRef panel, RecordedMark before, RecordedMark made) {}
@@ -122,6 +117,7 @@ public final class WalkViewModel {
    * @param dialogs for photos and warnings
    * @param racking true for storage racking (bow hints use the EN 15635 limits)
    * @param readOnly true when the inspection is finalised
+   * @param clock when a mark is made (the camera folder's photos count from the previous mark)
    */
   public WalkViewModel(
       PlaneDesign design,
@@ -131,8 +127,9 @@ public final class WalkViewModel {
       PlaneAnalyzer analyzer,
       DialogService dialogs,
       boolean racking,
-      boolean readOnly) {
-    this(design, title, PlaneRole.OTHER, existing, recorder, analyzer, dialogs, racking, readOnly);
+      boolean readOnly,
+      java.time.Clock clock) {
+    this(design, title, PlaneRole.OTHER, existing, recorder, analyzer, dialogs, racking, readOnly, clock);
   }
 
   /** As above, for a plane of the given role (its keep-off zone depends on it). */
@@ -145,7 +142,10 @@ public final class WalkViewModel {
       PlaneAnalyzer analyzer,
       DialogService dialogs,
       boolean racking,
-      boolean readOnly) {
+      boolean readOnly,
+      java.time.Clock clock) {
+    this.clock = Objects.requireNonNull(clock, "clock");
+    this.cameraFolder = new CameraFolder(CameraFolder.Setting.inMemory(), clock);
     this.role = Objects.requireNonNull(role, "role");
     this.design = Objects.requireNonNull(design, "design");
     this.title = title;
@@ -228,10 +228,7 @@ public final class WalkViewModel {
     undo.push(new Step(p, before, made));
     canUndo.set(true);
     clearDetails();
-    cameraSince = java.time.Instant.now();
-    if (cameraBefore != null) {
-      cameraBefore = cameraListing();
-    }
+    cameraFolder.markMade();
     status.set("Saved " + p + ": " + describe(m) + " (record " + made.id() + ")");
     quietCursor = true;
     try {
@@ -331,28 +328,12 @@ public final class WalkViewModel {
 
   /** Where the camera folder is remembered (the app: the user's preferences; by default memory). */
   public void useCameraFolderSetting(CameraFolder.Setting setting) {
-    cameraFolder = Objects.requireNonNull(setting);
-    // what the remembered folder holds now is not new: from here its listing says what is
-    cameraBefore = cameraListing();
-  }
-
-  /**
-   * The camera folder's photos now, or null when no folder is set or it cannot be read (then the
-   * time rule serves until it can).
-   */
-  private java.util.Set<Path> cameraListing() {
-    return cameraFolder.get().filter(java.nio.file.Files::isDirectory).map(f -> {
-      try {
-        return CameraFolder.listing(f);
-      } catch (java.io.IOException e) {
-        return null;
-      }
-    }).orElse(null);
+    cameraFolder = new CameraFolder(setting, clock);
   }
 
   /** The camera folder in use, if one has been chosen. */
   public java.util.Optional<Path> cameraFolder() {
-    return cameraFolder.get();
+    return cameraFolder.folder();
   }
 
   /**
@@ -360,24 +341,19 @@ public final class WalkViewModel {
    * since the walk-round opened); asks for the folder the first time, or when {@code choose}.
    */
   public void addCameraPhotos(boolean choose) {
-    java.util.Optional<Path> folder = cameraFolder.get();
+    java.util.Optional<Path> folder = cameraFolder.folder();
     if (choose || folder.isEmpty() || !java.nio.file.Files.isDirectory(folder.get())) {
       java.util.Optional<Path> picked = dialogs.chooseFolder(
           "Camera folder: where the camera or phone saves its pictures", folder.orElse(photoFolder));
       if (picked.isEmpty()) {
         return;
       }
-      cameraFolder.set(picked.get());
-      if (!picked.equals(folder)) {
-        cameraBefore = null; // another folder: nothing of the old one's listing applies
-      }
+      cameraFolder.choose(picked.get());
       folder = picked;
     }
     CameraFolder.Found found;
     try {
-      found = CameraFolder.newPhotos(folder.get(), cameraBefore, cameraSince, cameraTaken);
-      // from here on the folder's own listing says what is new, whatever the camera's clock
-      cameraBefore = CameraFolder.listing(folder.get());
+      found = cameraFolder.take();
     } catch (java.io.IOException e) {
       error.set("The camera folder " + folder.get() + " cannot be read (" + e.getMessage()
           + "). Press Shift+G to choose another, or F to pick the files.");
@@ -393,7 +369,7 @@ public final class WalkViewModel {
     }
     error.set("");
     photos.addAll(fresh);
-    cameraTaken.addAll(fresh);
+    cameraFolder.taken(fresh);
     status.set(fresh.size() + (fresh.size() == 1 ? " photo" : " photos") + " from " + folder.get()
         + " attached to the next mark: " + String.join(", ",
             fresh.stream().map(f -> f.getFileName().toString()).toList())
@@ -407,10 +383,7 @@ public final class WalkViewModel {
       return;
     }
     int n = photos.size();
-    cameraTaken.removeAll(photos); // G may offer them again
-    if (cameraBefore != null) {
-      cameraBefore.removeAll(photos);
-    }
+    cameraFolder.released(photos); // G may offer them again
     photos.clear();
     status.set(n + (n == 1 ? " photo" : " photos") + " taken off the next mark (the files stay where they are).");
   }

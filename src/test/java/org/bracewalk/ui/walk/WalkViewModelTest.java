@@ -32,7 +32,7 @@ class WalkViewModelTest {
 
   private WalkViewModel walk(List<RecordedMark> existing, boolean readOnly) {
     return new WalkViewModel(
-        design, "Test plane", existing, recorder, PlaneAnalyzer.standard(), dialogs, false, readOnly);
+        design, "Test plane", existing, recorder, PlaneAnalyzer.standard(), dialogs, false, readOnly, java.time.Clock.systemUTC());
   }
 
   private static void markAll(WalkViewModel vm, PanelState state, int times) {
