@@ -14,9 +14,10 @@ import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.beans.property.SimpleIntegerProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
-import org.bracewalk.app.AppServices;
+import org.bracewalk.app.HistoryService;
 import org.bracewalk.app.PanelChange;
 import org.bracewalk.app.PlaneHistory;
+import org.bracewalk.app.SiteService;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
@@ -36,12 +37,18 @@ public final class HistoryViewModel {
   private final ReadOnlyStringWrapper heading = new ReadOnlyStringWrapper(this, "heading", "");
   private final ReadOnlyStringWrapper timeline = new ReadOnlyStringWrapper(this, "timeline", "");
 
-  public HistoryViewModel(AppServices services, long planeId) {
-    Objects.requireNonNull(services, "services");
-    this.history = services.history().history(planeId);
+  /**
+   * @param histories a plane across inspections
+   * @param sites for the site's time zone
+   * @param planeId the plane shown
+   */
+  public HistoryViewModel(HistoryService histories, SiteService sites, long planeId) {
+    Objects.requireNonNull(histories, "histories");
+    Objects.requireNonNull(sites, "sites");
+    this.history = histories.history(planeId);
     var plane = history.plane();
-    var structure = services.sites().structure(plane.structureId());
-    this.zone = services.sites().site(structure.siteId()).timeZone();
+    var structure = sites.structure(plane.structureId());
+    this.zone = sites.site(structure.siteId()).timeZone();
     StringBuilder line = new StringBuilder();
     for (PlaneHistory.Entry e : history.entries()) {
       VerdictKind k = kind(e);

@@ -18,11 +18,13 @@ import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
-import org.bracewalk.app.AppServices;
+import org.bracewalk.app.AnalysisService;
+import org.bracewalk.app.DemoService;
+import org.bracewalk.app.InspectionService;
+import org.bracewalk.app.SiteService;
 import org.bracewalk.app.ImportedSite;
 import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.PlaneResult;
-import org.bracewalk.app.SiteService;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.PlaneRecord;
@@ -47,7 +49,11 @@ import org.bracewalk.app.verdict.VerdictKind;
 public final class SitesViewModel {
   private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm");
 
-  private final AppServices services;
+  private final SiteService sites;
+  private final InspectionService inspections;
+  private final AnalysisService analysis;
+  private final DemoService demo;
+  private final String databaseLocation;
   private final Clock clock;
   private final DialogService dialogs;
   private final Navigator navigator;
@@ -67,8 +73,23 @@ public final class SitesViewModel {
   private final ObjectProperty<InspectionReason> reason =
       new SimpleObjectProperty<>(this, "reason", InspectionReason.ROUTINE);
 
-  public SitesViewModel(AppServices services, Clock clock, DialogService dialogs, Navigator navigator) {
-    this.services = Objects.requireNonNull(services, "services");
+  /**
+   * @param sites sites, structures, planes
+   * @param inspections starting and listing inspections
+   * @param analysis the verdict of each plane
+   * @param demo the demo site offered on an empty database
+   * @param databaseLocation where the database is, as shown
+   * @param clock today, for what is due
+   * @param dialogs questions and warnings
+   * @param navigator opens the other screens
+   */
+  public SitesViewModel(SiteService sites, InspectionService inspections, AnalysisService analysis, DemoService demo,
+      String databaseLocation, Clock clock, DialogService dialogs, Navigator navigator) {
+    this.sites = Objects.requireNonNull(sites, "sites");
+    this.inspections = Objects.requireNonNull(inspections, "inspections");
+    this.analysis = Objects.requireNonNull(analysis, "analysis");
+    this.demo = Objects.requireNonNull(demo, "demo");
+    this.databaseLocation = Objects.requireNonNull(databaseLocation, "databaseLocation");
     this.clock = Objects.requireNonNull(clock, "clock");
     this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
     this.navigator = Objects.requireNonNull(navigator, "navigator");
@@ -79,18 +100,18 @@ public final class SitesViewModel {
   /** Reads every site again. */
   public void refresh() {
     List<OverviewRow> out = new ArrayList<>();
-    for (Site site : services.sites().sites()) {
+    for (Site site : sites.sites()) {
       out.add(new OverviewRow(OverviewRow.Level.SITE, site.name(), site.location(), null, "", "", "",
           OverviewRow.Due.NOT_APPLICABLE, "", 0, 0, 0, 0));
       LocalDate today = LocalDate.now(clock.withZone(site.timeZone()));
-      for (Structure st : services.sites().structures(site.id())) {
-        List<Inspection> insp = services.inspections().inspections(st.id());
+      for (Structure st : sites.structures(site.id())) {
+        List<Inspection> insp = inspections.inspections(st.id());
         Optional<Inspection> latest = insp.stream().max(Comparator.comparing(Inspection::startedAt));
         Optional<Inspection> open = insp.stream().filter(i -> !i.isFinalised()).max(Comparator.comparing(Inspection::startedAt));
         Optional<Inspection> lastDone =
             insp.stream().filter(Inspection::isFinalised).max(Comparator.comparing(Inspection::finishedAt));
         String last = lastDone.map(i -> WHEN.format(i.finishedAt().atZone(site.timeZone()))).orElse("never");
-        Optional<LocalDate> due = services.inspections().nextInspectionDue(st.id());
+        Optional<LocalDate> due = inspections.nextInspectionDue(st.id());
         OverviewRow.Due dueState;
         String dueText;
         if (due.isEmpty()) {
@@ -110,18 +131,18 @@ public final class SitesViewModel {
         out.add(null); // filled in once the planes are known
         VerdictKind worst = null;
         Map<Long, PlaneRetirement> retired = new HashMap<>();
-        services.sites().retirements(st.id()).forEach(x -> retired.put(x.planeId(), x));
+        sites.retirements(st.id()).forEach(x -> retired.put(x.planeId(), x));
         Set<Long> inLatest = new HashSet<>();
-        latest.ifPresent(i -> services.inspections().planesOf(i.id()).forEach(p -> inLatest.add(p.id())));
+        latest.ifPresent(i -> inspections.planesOf(i.id()).forEach(p -> inLatest.add(p.id())));
         Map<Long, Set<Long>> covered = new HashMap<>();
         for (Inspection i : insp) {
           Set<Long> ids = new HashSet<>();
-          services.inspections().planesOf(i.id()).forEach(p -> ids.add(p.id()));
+          inspections.planesOf(i.id()).forEach(p -> ids.add(p.id()));
           covered.put(i.id(), ids);
         }
         List<Inspection> newestFirst =
             insp.stream().sorted(Comparator.comparing(Inspection::startedAt).reversed()).toList();
-        for (PlaneRecord plane : services.sites().planes(st.id())) {
+        for (PlaneRecord plane : sites.planes(st.id())) {
           VerdictKind v = VerdictKind.NOT_INSPECTED;
           String words;
           PlaneRetirement gone = retired.get(plane.id());
@@ -204,7 +225,7 @@ public final class SitesViewModel {
       if (!covered.getOrDefault(i.id(), Set.of()).contains(plane.id())) {
         continue;
       }
-      PlaneResult r = services.analysis().analysePlane(i.id(), plane.id());
+      PlaneResult r = analysis.analysePlane(i.id(), plane.id());
       if (r.latest().isEmpty()) {
         continue; // nothing recorded on this plane in this inspection: it changes nothing known
       }
@@ -254,7 +275,7 @@ public final class SitesViewModel {
   /** Loads the demo site (only offered on an empty database). */
   public boolean loadDemo() {
     try {
-      ImportedSite s = services.demo().load();
+      ImportedSite s = demo.load();
       status.set("Loaded the demo site '" + s.site().name() + "': " + s.structures().size() + " structures, "
           + s.planes().size() + " planes, " + s.inspections().size()
           + " finalised inspections. Select a structure and start a new inspection to walk a plane.");
@@ -279,7 +300,7 @@ public final class SitesViewModel {
       return false;
     }
     String name = strip(inspectorName.get());
-    boolean racking = services.sites().structure(r.structureId()).kind() == StructureKind.RACKING_RUN;
+    boolean racking = sites.structure(r.structureId()).kind() == StructureKind.RACKING_RUN;
     // the report needs every one of these, and an inspection cannot be changed once started
     List<String> missing = new ArrayList<>();
     if (name.isEmpty()) {
@@ -312,7 +333,7 @@ public final class SitesViewModel {
     }
     Inspection started;
     try {
-      started = services.inspections().start(r.structureId(),
+      started = inspections.start(r.structureId(),
           new NewInspection(name, strip(inspectorPosition.get()), strip(competentPerson.get()), strip(shift.get()),
               racking ? strip(storageSafetyPerson.get()) : null, reason.get(), null, null));
     } catch (RuntimeException e) {
@@ -320,7 +341,7 @@ public final class SitesViewModel {
       return false;
     }
     error.set("");
-    List<PlaneRecord> covered = services.inspections().planesOf(started.id());
+    List<PlaneRecord> covered = inspections.planesOf(started.id());
     long plane = covered.stream().anyMatch(p -> p.id() == r.planeId()) ? r.planeId()
         : covered.stream().findFirst().map(PlaneRecord::id).orElse(0L);
     navigator.open(ScreenId.WALK, new Selection(r.structureId(), plane, started.id()));
@@ -338,8 +359,8 @@ public final class SitesViewModel {
       error.set("Select the plane to retire first.");
       return false;
     }
-    PlaneRecord plane = services.sites().plane(r.planeId());
-    if (services.sites().retirement(plane.id()).isPresent()) {
+    PlaneRecord plane = sites.plane(r.planeId());
+    if (sites.retirement(plane.id()).isPresent()) {
       error.set("Plane '" + plane.name() + "' is already retired.");
       return false;
     }
@@ -361,7 +382,7 @@ public final class SitesViewModel {
       return false;
     }
     try {
-      services.sites().retirePlane(plane.id(), "", why.get().strip());
+      sites.retirePlane(plane.id(), "", why.get().strip());
     } catch (RuntimeException e) {
       error.set("Retire plane '" + plane.name() + "': " + e.getMessage() + ". Nothing was changed.");
       return false;
@@ -377,7 +398,7 @@ public final class SitesViewModel {
   }
 
   private long firstPlane(long structureId) {
-    return services.sites().planes(structureId).stream().findFirst().map(PlaneRecord::id).orElse(0L);
+    return sites.planes(structureId).stream().findFirst().map(PlaneRecord::id).orElse(0L);
   }
 
   /**
@@ -391,7 +412,7 @@ public final class SitesViewModel {
       error.set("Select the structure (or one of its planes) whose inspection interval to change.");
       return false;
     }
-    Structure st = services.sites().structure(r.structureId());
+    Structure st = sites.structure(r.structureId());
     Optional<String> answer = dialogs.askText("Days between inspections",
         "Days between routine inspections of '" + st.name() + "' (" + SiteService.MIN_INTERVAL_DAYS + " to "
             + SiteService.MAX_INTERVAL_DAYS + "). The next inspection falls due this many days after the last"
@@ -417,12 +438,12 @@ public final class SitesViewModel {
       return false;
     }
     try {
-      Structure changed = services.sites().setInspectionInterval(st.id(), days);
+      Structure changed = sites.setInspectionInterval(st.id(), days);
       error.set("");
       refresh();
       status.set("'" + changed.name() + "' is now inspected every " + changed.inspectionIntervalDays()
           + (changed.inspectionIntervalDays() == 1 ? " day" : " days")
-          + services.inspections().nextInspectionDue(changed.id()).map(d -> "; next due " + d)
+          + inspections.nextInspectionDue(changed.id()).map(d -> "; next due " + d)
               .orElse("; not inspected yet, so due now") + ".");
       return true;
     } catch (RuntimeException e) {
@@ -511,6 +532,6 @@ public final class SitesViewModel {
   }
 
   public String databaseLocation() {
-    return services.store().location();
+    return databaseLocation;
   }
 }

@@ -31,7 +31,7 @@ class HistoryViewModelTest {
   @Test
   void theLatestInspectionIsDrawnWithThePanelsThatChangedMarked() {
     services = DemoDatabase.withDemo(dir);
-    HistoryViewModel vm = new HistoryViewModel(services, plane("frame 2").id());
+    HistoryViewModel vm = new HistoryViewModel(services.history(), services.sites(), plane("frame 2").id());
     assertThat(vm.entries()).hasSize(2);
     assertThat(vm.chosenProperty().get()).isEqualTo(1);
     assertThat(vm.timelineProperty().get()).isEqualTo("\u25A0 #1  \u2192  \u25B2 #2");
@@ -46,7 +46,7 @@ class HistoryViewModelTest {
   @Test
   void aPlaneNeverInspectedSaysSo() {
     services = DemoDatabase.withDemo(dir);
-    HistoryViewModel vm = new HistoryViewModel(services, plane("north facade").id());
+    HistoryViewModel vm = new HistoryViewModel(services.history(), services.sites(), plane("north facade").id());
     assertThat(vm.entries()).isEmpty();
     assertThat(vm.timelineProperty().get()).isEqualTo("No inspections yet.");
     assertThat(vm.headingProperty().get()).contains("not inspected yet");
