@@ -262,7 +262,7 @@ public final class AppScreens implements ScreenFactory {
 
   private Screen history(Selection s) {
     PlaneRecord plane = services.sites().plane(s.planeId());
-    HistoryView view = new HistoryView(new HistoryViewModel(services.history(), services.sites(), plane.id()));
+    HistoryView view = new HistoryView(new HistoryViewModel(services.history(), services.sites(), ui, background, plane.id()));
     return focused(view, crumbs(plane, null) + "  \u00b7  history", view::focusList);
   }
 
