@@ -160,6 +160,15 @@ class WalkViewModelTest {
   }
 
   @Test
+  void theMarkThatCompletesThePlaneSaysEveryPanelIsMarked() {
+    WalkViewModel vm = walk(List.of(), false);
+    markAll(vm, PanelState.SOUND, 8);
+    assertThat(vm.statusProperty().get()).doesNotContain("Every panel is marked");
+    markAll(vm, PanelState.SOUND, 1); // the ninth and last in walk order
+    assertThat(vm.statusProperty().get()).endsWith(". Every panel is marked: see Findings (Ctrl+4).");
+  }
+
+  @Test
   void whilePanelsRemainUnseenTheVerdictSaysItDependsOnThem() {
     WalkViewModel vm = walk(List.of(), false);
     assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.DEPENDS_ON_UNSEEN);
