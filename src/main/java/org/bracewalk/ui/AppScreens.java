@@ -131,7 +131,7 @@ public final class AppScreens implements ScreenFactory {
     DesignRevision rev = services.sites().currentDesign(plane.id());
     DesignViewModel vm =
         new DesignViewModel(rev.design(), plane.name() + " (revision " + rev.number() + ")", analyzer,
-            new PlaneDesignSaver(services.sites(), plane, clock, dialogs), dialogs);
+            new PlaneDesignSaver(services.sites(), plane, clock, dialogs), dialogs, ui, background);
     DesignView view = new DesignView(vm);
     return focused(view, crumbs(plane, null) + "  \u00b7  design", view::focusPlane);
   }
