@@ -104,7 +104,7 @@ public final class AppScreens implements ScreenFactory {
 
   private SitesViewModel sites(Navigator navigator) {
     return new SitesViewModel(services.sites(), services.inspections(), services.analysis(), services.demo(),
-        services.store().location(), clock, dialogs, navigator);
+        services.store().location(), clock, dialogs, navigator, ui, background);
   }
 
   private Screen overview(Navigator navigator, Selection selection) {

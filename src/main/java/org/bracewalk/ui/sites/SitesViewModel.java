@@ -30,6 +30,7 @@ import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.PlaneRetirement;
 import java.util.Set;
+import java.util.concurrent.Executor;
 import java.util.Map;
 import java.util.HashSet;
 import java.util.HashMap;
@@ -57,6 +58,9 @@ public final class SitesViewModel {
   private final Clock clock;
   private final DialogService dialogs;
   private final Navigator navigator;
+  private final Executor ui;
+  private final Executor background;
+  private final ReadOnlyBooleanWrapper loading = new ReadOnlyBooleanWrapper(this, "loading");
 
   private final ObservableList<OverviewRow> rows = FXCollections.observableArrayList();
   private final ObjectProperty<OverviewRow> selected = new SimpleObjectProperty<>(this, "selected");
@@ -82,9 +86,14 @@ public final class SitesViewModel {
    * @param clock today, for what is due
    * @param dialogs questions and warnings
    * @param navigator opens the other screens
+   * @param ui runs on the toolkit's thread (tests: same thread)
+   * @param background runs the reading of the overview and the loading of the demo site (tests: same thread)
    */
   public SitesViewModel(SiteService sites, InspectionService inspections, AnalysisService analysis, DemoService demo,
-      String databaseLocation, Clock clock, DialogService dialogs, Navigator navigator) {
+      String databaseLocation, Clock clock, DialogService dialogs, Navigator navigator, Executor ui,
+      Executor background) {
+    this.ui = Objects.requireNonNull(ui, "ui");
+    this.background = Objects.requireNonNull(background, "background");
     this.sites = Objects.requireNonNull(sites, "sites");
     this.inspections = Objects.requireNonNull(inspections, "inspections");
     this.analysis = Objects.requireNonNull(analysis, "analysis");
@@ -97,8 +106,38 @@ public final class SitesViewModel {
     refresh();
   }
 
-  /** Reads every site again. */
+  /**
+   * Reads every site again on the background executor (each plane's verdict is worked out from
+   * its inspections) and shows the rows through the UI one.
+   */
   public void refresh() {
+    refresh(() -> { });
+  }
+
+  /** As {@link #refresh()}, then runs {@code then} on the UI executor once the rows are shown. */
+  private void refresh(Runnable then) {
+    loading.set(true);
+    background.execute(() -> {
+      List<OverviewRow> out;
+      try {
+        out = readRows();
+      } catch (RuntimeException e) {
+        ui.execute(() -> {
+          loading.set(false);
+          error.set("The sites could not be read from the database " + databaseLocation + " ("
+              + e.getMessage() + "). Press F5 to read it again.");
+        });
+        return;
+      }
+      ui.execute(() -> {
+        show(out);
+        loading.set(false);
+        then.run();
+      });
+    });
+  }
+
+  private List<OverviewRow> readRows() {
     List<OverviewRow> out = new ArrayList<>();
     for (Site site : sites.sites()) {
       out.add(new OverviewRow(OverviewRow.Level.SITE, site.name(), site.location(), null, "", "", "",
@@ -183,6 +222,10 @@ public final class SitesViewModel {
             open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
       }
     }
+    return out;
+  }
+
+  private void show(List<OverviewRow> out) {
     OverviewRow keep = selected.get();
     rows.setAll(out);
     empty.set(out.isEmpty());
@@ -272,21 +315,50 @@ public final class SitesViewModel {
     selectionText.set((r.level() == OverviewRow.Level.PLANE ? "Plane " : "Structure ") + "'" + r.name() + "'. " + open);
   }
 
-  /** Loads the demo site (only offered on an empty database). */
-  public boolean loadDemo() {
-    try {
-      ImportedSite s = demo.load();
-      status.set("Loaded the demo site '" + s.site().name() + "': " + s.structures().size() + " structures, "
-          + s.planes().size() + " planes, " + s.inspections().size()
-          + " finalised inspections. Select a structure and start a new inspection to walk a plane.");
-      error.set("");
-      refresh();
-      return true;
-    } catch (RuntimeException e) {
-      error.set("The demo site was not loaded: " + e.getMessage());
-      dialogs.showError("Demo site not loaded", error.get());
+  /**
+   * Loads the demo site (only offered on an empty database) on the background executor; the status
+   * says when it is in, and {@code then} runs on the UI executor once its rows are shown. False when
+   * a load or read is already running.
+   */
+  public boolean loadDemo(Runnable then) {
+    if (loading.get()) {
       return false;
     }
+    loading.set(true);
+    status.set("Loading the demo site\u2026");
+    background.execute(() -> {
+      ImportedSite loaded;
+      try {
+        loaded = demo.load();
+      } catch (RuntimeException e) {
+        ui.execute(() -> {
+          loading.set(false);
+          status.set("");
+          error.set("The demo site was not loaded: " + e.getMessage());
+          dialogs.showError("Demo site not loaded", error.get());
+        });
+        return;
+      }
+      ImportedSite s = loaded;
+      ui.execute(() -> {
+        status.set("Loaded the demo site '" + s.site().name() + "': " + s.structures().size() + " structures, "
+            + s.planes().size() + " planes, " + s.inspections().size()
+            + " finalised inspections. Select a structure and start a new inspection to walk a plane.");
+        error.set("");
+        refresh(then);
+      });
+    });
+    return true;
+  }
+
+  /** As {@link #loadDemo(Runnable)} with nothing to run after. */
+  public boolean loadDemo() {
+    return loadDemo(() -> { });
+  }
+
+  /** True while the overview is being read or the demo site loaded. */
+  public ReadOnlyBooleanProperty loadingProperty() {
+    return loading.getReadOnlyProperty();
   }
 
   /**

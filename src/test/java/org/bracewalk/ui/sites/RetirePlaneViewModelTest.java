@@ -31,7 +31,7 @@ class RetirePlaneViewModelTest {
 
   private SitesViewModel sitesOf(AppServices s) {
     return new SitesViewModel(s.sites(), s.inspections(), s.analysis(), s.demo(), s.store().location(),
-        DemoDatabase.CLOCK, dialogs, navigator);
+        DemoDatabase.CLOCK, dialogs, navigator, Runnable::run, Runnable::run);
   }
 
   private OverviewRow row(SitesViewModel vm, String name) {

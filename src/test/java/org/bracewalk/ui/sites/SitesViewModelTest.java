@@ -31,7 +31,7 @@ class SitesViewModelTest {
 
   private SitesViewModel sitesOf(AppServices s) {
     return new SitesViewModel(s.sites(), s.inspections(), s.analysis(), s.demo(), s.store().location(),
-        DemoDatabase.CLOCK, dialogs, navigator);
+        DemoDatabase.CLOCK, dialogs, navigator, Runnable::run, Runnable::run);
   }
 
   private OverviewRow row(SitesViewModel vm, String name) {
@@ -47,6 +47,37 @@ class SitesViewModelTest {
     assertThat(vm.emptyProperty().get()).isFalse();
     assertThat(vm.rows()).extracting(OverviewRow::name)
         .contains("Larkspur Depot", "Aisle C racking run", "frame 2", "North facade scaffold", "north facade");
+  }
+
+  @Test
+  void theOverviewIsReadAndTheDemoLoadedOnTheBackgroundExecutorAndShownThroughTheUiOne() {
+    services = DemoDatabase.empty(dir);
+    List<Runnable> background = new ArrayList<>();
+    List<Runnable> ui = new ArrayList<>();
+    SitesViewModel vm = new SitesViewModel(services.sites(), services.inspections(), services.analysis(),
+        services.demo(), services.store().location(), DemoDatabase.CLOCK, dialogs, navigator, ui::add, background::add);
+    // nothing read on the calling (toolkit) thread; no demo offer before the database is read
+    assertThat(vm.loadingProperty().get()).isTrue();
+    assertThat(vm.emptyProperty().get()).isFalse();
+    background.remove(0).run();
+    ui.remove(0).run();
+    assertThat(vm.emptyProperty().get()).isTrue();
+    assertThat(vm.loadingProperty().get()).isFalse();
+    List<String> after = new ArrayList<>();
+    assertThat(vm.loadDemo(() -> after.add("rows shown"))).isTrue();
+    assertThat(vm.loadDemo()).isFalse(); // one load at a time
+    assertThat(services.sites().sites()).isEmpty(); // not yet: it waits on the background executor
+    assertThat(vm.statusProperty().get()).startsWith("Loading the demo site");
+    background.remove(0).run();
+    assertThat(services.sites().sites()).hasSize(1);
+    ui.remove(0).run(); // the status, then the overview is read again
+    background.remove(0).run();
+    assertThat(vm.rows()).isEmpty();
+    ui.remove(0).run();
+    assertThat(vm.rows()).extracting(OverviewRow::name).contains("Larkspur Depot");
+    assertThat(after).containsExactly("rows shown");
+    assertThat(background).isEmpty();
+    assertThat(ui).isEmpty();
   }
 
   @Test
