@@ -106,6 +106,9 @@ class WalkRoundEndToEndFxTest {
     robot.type(KeyCode.TAB);
     robot.write("day shift");
     ctrl(robot, KeyCode.ENTER);
+    // the inspection is started on the background executor; the walk-round opens once it is
+    WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> window.currentScreen() == ScreenId.WALK);
+    WaitForAsyncUtils.waitForFxEvents();
     assertThat(window.currentScreen()).isEqualTo(ScreenId.WALK);
     long inspectionId = window.selection().inspectionId();
     assertThat(inspectionId).isPositive();

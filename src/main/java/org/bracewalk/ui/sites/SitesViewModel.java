@@ -31,6 +31,9 @@ import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.PlaneRetirement;
 import java.util.Set;
 import java.util.concurrent.Executor;
+import java.util.function.Consumer;
+import java.util.function.Function;
+import java.util.function.Supplier;
 import java.util.Map;
 import java.util.HashSet;
 import java.util.HashMap;
@@ -60,6 +63,8 @@ public final class SitesViewModel {
   private final Navigator navigator;
   private final Executor ui;
   private final Executor background;
+  /** True while a write runs on the background executor. */
+  private boolean writing;
   private final ReadOnlyBooleanWrapper loading = new ReadOnlyBooleanWrapper(this, "loading");
 
   private final ObservableList<OverviewRow> rows = FXCollections.observableArrayList();
@@ -403,20 +408,49 @@ public final class SitesViewModel {
                 + " (The open one stays open until it is finalised.)", "Start another")) {
       return false;
     }
-    Inspection started;
-    try {
-      started = inspections.start(r.structureId(),
-          new NewInspection(name, strip(inspectorPosition.get()), strip(competentPerson.get()), strip(shift.get()),
-              racking ? strip(storageSafetyPerson.get()) : null, reason.get(), null, null));
-    } catch (RuntimeException e) {
-      error.set("Not started: " + e.getMessage());
+    NewInspection details = new NewInspection(name, strip(inspectorPosition.get()), strip(competentPerson.get()),
+        strip(shift.get()), racking ? strip(storageSafetyPerson.get()) : null, reason.get(), null, null);
+    return write("Starting the inspection", () -> {
+      Inspection started = inspections.start(r.structureId(), details);
+      List<PlaneRecord> covered = inspections.planesOf(started.id());
+      long plane = covered.stream().anyMatch(p -> p.id() == r.planeId()) ? r.planeId()
+          : covered.stream().findFirst().map(PlaneRecord::id).orElse(0L);
+      return new Selection(r.structureId(), plane, started.id());
+    }, opened -> navigator.open(ScreenId.WALK, opened), e -> "Not started: " + e.getMessage());
+  }
+
+  /**
+   * Runs the database write {@code work} on the background executor and {@code done} with its
+   * answer on the UI one; a failure sets the error to {@code failed}'s words. One write at a time:
+   * false (and the status says so) while another runs.
+   */
+  private <T> boolean write(String what, Supplier<T> work, Consumer<T> done,
+      Function<RuntimeException, String> failed) {
+    if (writing) {
+      status.set("Still saving; wait for it to finish.");
       return false;
     }
-    error.set("");
-    List<PlaneRecord> covered = inspections.planesOf(started.id());
-    long plane = covered.stream().anyMatch(p -> p.id() == r.planeId()) ? r.planeId()
-        : covered.stream().findFirst().map(PlaneRecord::id).orElse(0L);
-    navigator.open(ScreenId.WALK, new Selection(r.structureId(), plane, started.id()));
+    writing = true;
+    status.set(what + "\u2026");
+    background.execute(() -> {
+      T answer;
+      try {
+        answer = work.get();
+      } catch (RuntimeException e) {
+        ui.execute(() -> {
+          writing = false;
+          status.set("");
+          error.set(failed.apply(e));
+        });
+        return;
+      }
+      ui.execute(() -> {
+        writing = false;
+        status.set("");
+        error.set("");
+        done.accept(answer);
+      });
+    });
     return true;
   }
 
@@ -453,16 +487,14 @@ public final class SitesViewModel {
             + " This cannot be undone.", "Retire")) {
       return false;
     }
-    try {
-      sites.retirePlane(plane.id(), "", why.get().strip());
-    } catch (RuntimeException e) {
-      error.set("Retire plane '" + plane.name() + "': " + e.getMessage() + ". Nothing was changed.");
-      return false;
-    }
-    error.set("");
-    refresh();
-    status.set("Plane '" + plane.name() + "' retired: inspections started from now on leave it out.");
-    return true;
+    String reasonGiven = why.get().strip();
+    return write("Retiring plane '" + plane.name() + "'", () -> {
+      sites.retirePlane(plane.id(), "", reasonGiven);
+      return plane;
+    }, done -> {
+      refresh();
+      status.set("Plane '" + plane.name() + "' retired: inspections started from now on leave it out.");
+    }, e -> "Retire plane '" + plane.name() + "': " + e.getMessage() + ". Nothing was changed.");
   }
 
   private static String strip(String s) {
@@ -502,6 +534,12 @@ public final class SitesViewModel {
           + " Nothing was changed.");
       return false;
     }
+    if (days < SiteService.MIN_INTERVAL_DAYS || days > SiteService.MAX_INTERVAL_DAYS) {
+      // refused here, before any database work (the service refuses it too)
+      error.set("Days between inspections: " + days + " is out of range: give " + SiteService.MIN_INTERVAL_DAYS
+          + " to " + SiteService.MAX_INTERVAL_DAYS + " days. Nothing was changed.");
+      return false;
+    }
     if (st.kind() == StructureKind.SCAFFOLD && days > 7
         && !dialogs.confirm("Longer than 7 days",
             "In Great Britain a scaffold platform is inspected at least every 7 days (Work at Height"
@@ -509,19 +547,17 @@ public final class SitesViewModel {
                 + " local rules allow it.", "Keep " + days + " days")) {
       return false;
     }
-    try {
-      Structure changed = sites.setInspectionInterval(st.id(), days);
-      error.set("");
-      refresh();
-      status.set("'" + changed.name() + "' is now inspected every " + changed.inspectionIntervalDays()
+    int chosen = days;
+    return write("Saving the days between inspections", () -> {
+      Structure changed = sites.setInspectionInterval(st.id(), chosen);
+      return changed.name() + "' is now inspected every " + changed.inspectionIntervalDays()
           + (changed.inspectionIntervalDays() == 1 ? " day" : " days")
           + inspections.nextInspectionDue(changed.id()).map(d -> "; next due " + d)
-              .orElse("; not inspected yet, so due now") + ".");
-      return true;
-    } catch (RuntimeException e) {
-      error.set("Days between inspections: " + e.getMessage() + ". Nothing was changed.");
-      return false;
-    }
+              .orElse("; not inspected yet, so due now") + ".";
+    }, words -> {
+      refresh();
+      status.set("'" + words);
+    }, e -> "Days between inspections: " + e.getMessage() + ". Nothing was changed.");
   }
 
   /** The selection the other screens should show for the selected line. */

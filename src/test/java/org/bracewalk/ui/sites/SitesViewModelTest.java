@@ -81,6 +81,33 @@ class SitesViewModelTest {
   }
 
   @Test
+  void startingAnInspectionWritesOnTheBackgroundExecutorOneWriteAtATime() {
+    services = DemoDatabase.withDemo(dir);
+    List<Runnable> background = new ArrayList<>();
+    SitesViewModel vm = new SitesViewModel(services.sites(), services.inspections(), services.analysis(),
+        services.demo(), services.store().location(), DemoDatabase.CLOCK, dialogs, navigator, Runnable::run,
+        background::add);
+    background.remove(0).run(); // the overview
+    vm.selectedProperty().set(row(vm, "north facade"));
+    vm.inspectorNameProperty().set("Rowan Test");
+    vm.inspectorPositionProperty().set("Scaffold inspector");
+    vm.competentPersonProperty().set("Rowan Test");
+    vm.shiftProperty().set("day");
+    long structure = row(vm, "north facade").structureId();
+    int before = services.inspections().inspections(structure).size();
+    assertThat(vm.startInspection()).isTrue();
+    // nothing written on the calling (toolkit) thread, and a second press starts no second inspection
+    assertThat(services.inspections().inspections(structure)).hasSize(before);
+    assertThat(vm.startInspection()).isFalse();
+    assertThat(vm.statusProperty().get()).startsWith("Still saving");
+    assertThat(opened).isEmpty();
+    background.remove(0).run();
+    assertThat(services.inspections().inspections(structure)).hasSize(before + 1);
+    assertThat(opened).singleElement().asString().startsWith("WALK");
+    assertThat(background).isEmpty();
+  }
+
+  @Test
   void eachPlaneShowsItsLatestVerdictAndEachStructureWhenItIsDue() {
     services = DemoDatabase.withDemo(dir);
     SitesViewModel vm = sitesOf(services);
