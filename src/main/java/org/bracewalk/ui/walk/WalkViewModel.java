@@ -291,11 +291,6 @@ public final class WalkViewModel {
 
   // ---- state ----------------------------------------------------------------------------------
 
-  /** Parses the bow field (millimetres over a 1 m straight edge, to 0.1 mm); empty is none. */
-  static Double parseBow(String text) {
-    return MarkDetails.parseBow(text);
-  }
-
   private void advance() {
     if (cursor.next()) {
       return;
