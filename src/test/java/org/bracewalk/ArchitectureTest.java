@@ -219,6 +219,21 @@ class ArchitectureTest {
   }
 
   @Test
+  void viewModelsTakeTheServicesTheyUseNotTheBag() {
+    check(
+        noClasses()
+            .that()
+            .haveSimpleNameEndingWith("ViewModel")
+            .and()
+            .resideInAPackage("org.bracewalk.ui..")
+            .should()
+            .dependOnClassesThat()
+            .haveFullyQualifiedName("org.bracewalk.app.AppServices")
+            .because("a view model names the services it uses, so what it can reach is plain from its"
+                + " constructor and a test builds only those; ui.AppScreens passes them"));
+  }
+
+  @Test
   void noPackageCycles() {
     check(
         slices()

@@ -160,7 +160,8 @@ public final class WalkBench {
    */
   private static long[][] run(PlaneDesign design, int samples, MarkRecorder recorder, boolean flip) {
     WalkViewModel vm =
-        new WalkViewModel(design, "bench plane", List.of(), recorder, PlaneAnalyzer.standard(), NO_DIALOGS, false, false);
+        new WalkViewModel(design, "bench plane", List.of(), recorder, PlaneAnalyzer.standard(), NO_DIALOGS, false, false,
+            Clock.systemUTC());
     WalkView view = new WalkView(vm);
     Scene scene = new Scene(view, 1600, 900);
     Stylesheet.apply(scene);

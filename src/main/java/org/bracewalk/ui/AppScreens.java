@@ -99,11 +99,16 @@ public final class AppScreens implements ScreenFactory {
    * is still being styled), for the first time the Sites screen is shown.
    */
   public void preloadOverview(Navigator navigator) {
-    preloaded = new SitesViewModel(services, clock, dialogs, navigator);
+    preloaded = sites(navigator);
+  }
+
+  private SitesViewModel sites(Navigator navigator) {
+    return new SitesViewModel(services.sites(), services.inspections(), services.analysis(), services.demo(),
+        services.location(), clock, dialogs, navigator, ui, background);
   }
 
   private Screen overview(Navigator navigator, Selection selection) {
-    SitesViewModel vm = preloaded != null ? preloaded : new SitesViewModel(services, clock, dialogs, navigator);
+    SitesViewModel vm = preloaded != null ? preloaded : sites(navigator);
     preloaded = null;
     SitesView view = new SitesView(vm);
     if (selection.hasPlane()) {
@@ -126,7 +131,7 @@ public final class AppScreens implements ScreenFactory {
     DesignRevision rev = services.sites().currentDesign(plane.id());
     DesignViewModel vm =
         new DesignViewModel(rev.design(), plane.name() + " (revision " + rev.number() + ")", analyzer,
-            new PlaneDesignSaver(services.sites(), plane, clock, dialogs), dialogs);
+            new PlaneDesignSaver(services.sites(), plane, clock, dialogs), dialogs, ui, background);
     DesignView view = new DesignView(vm);
     return focused(view, crumbs(plane, null) + "  \u00b7  design", view::focusPlane);
   }
@@ -169,7 +174,7 @@ public final class AppScreens implements ScreenFactory {
         new WalkViewModel(design.design(), st.name() + ", " + plane.name(), plane.role(),
             InspectionMarkRecorder.existing(services.inspections(), insp.id(), plane.id()),
             new InspectionMarkRecorder(services.inspections(), insp.id(), plane.id(), insp.inspectorName()),
-            analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised());
+            analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised(), clock);
     vm.useCameraFolderSetting(cameraFolder);
     WalkView view = new WalkView(vm);
     Selection here = new Selection(st.id(), plane.id(), insp.id());
@@ -248,7 +253,7 @@ public final class AppScreens implements ScreenFactory {
     if (!services.inspections().covers(insp.id(), plane.id())) {
       return notInScope(plane, insp, s, navigator);
     }
-    FindingsViewModel vm = new FindingsViewModel(services, analyzer, issuer, dialogs, ui, background, insp.id(), plane.id());
+    FindingsViewModel vm = new FindingsViewModel(services.sites(), services.inspections(), services.analysis(), analyzer, issuer, dialogs, ui, background, insp.id(), plane.id());
     FindingsView view = new FindingsView(vm,
         p -> navigator.open(ScreenId.FINDINGS, new Selection(plane.structureId(), p, insp.id())));
     return focusedWithSelection(view, crumbs(plane, insp), view::focusPlane,
@@ -257,7 +262,7 @@ public final class AppScreens implements ScreenFactory {
 
   private Screen history(Selection s) {
     PlaneRecord plane = services.sites().plane(s.planeId());
-    HistoryView view = new HistoryView(new HistoryViewModel(services, plane.id()));
+    HistoryView view = new HistoryView(new HistoryViewModel(services.history(), services.sites(), ui, background, plane.id()));
     return focused(view, crumbs(plane, null) + "  \u00b7  history", view::focusList);
   }
 

@@ -106,7 +106,8 @@ class KeepOffConsistencyTest {
             services.inspections().designInForce(s.inspection(), s.planeId()).design(), s.title(), plane.role(),
             InspectionMarkRecorder.existing(services.inspections(), s.inspection(), s.planeId()),
             new InspectionMarkRecorder(services.inspections(), s.inspection(), s.planeId(), "nobody"),
-            PlaneAnalyzer.standard(), new FakeDialogs(), racking.id() == plane.structureId(), true);
+            PlaneAnalyzer.standard(), new FakeDialogs(), racking.id() == plane.structureId(), true,
+            java.time.Clock.systemUTC());
         banners.add(walk.alarmProperty().get());
         assertThat(insp.id()).isEqualTo(s.inspection());
       }

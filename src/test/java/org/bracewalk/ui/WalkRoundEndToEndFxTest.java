@@ -83,7 +83,11 @@ class WalkRoundEndToEndFxTest {
   void aWholeWalkRoundByKeysReachesTheDatabaseMarkByMark(FxRobot robot) throws Exception {
     // empty database: the offer to load the demo site
     assertThat(robot.lookup("#load-demo").tryQuery()).isPresent();
+    // the overview is read on the background executor: the offer shows once it is read
+    WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> robot.lookup("#load-demo").query().getParent().isVisible());
     robot.type(KeyCode.L);
+    WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS,
+        () -> !robot.lookup("#sites-table").queryTableView().getItems().isEmpty());
     WaitForAsyncUtils.waitForFxEvents();
     assertThat(services.sites().sites()).hasSize(1);
 
@@ -102,6 +106,9 @@ class WalkRoundEndToEndFxTest {
     robot.type(KeyCode.TAB);
     robot.write("day shift");
     ctrl(robot, KeyCode.ENTER);
+    // the inspection is started on the background executor; the walk-round opens once it is
+    WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> window.currentScreen() == ScreenId.WALK);
+    WaitForAsyncUtils.waitForFxEvents();
     assertThat(window.currentScreen()).isEqualTo(ScreenId.WALK);
     long inspectionId = window.selection().inspectionId();
     assertThat(inspectionId).isPositive();

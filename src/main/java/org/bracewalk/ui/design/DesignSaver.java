@@ -20,6 +20,18 @@ public interface DesignSaver {
     return save(design, author, note);
   }
 
+  /**
+   * Does on the calling (toolkit) thread what must be done there before saving — asking the person
+   * anything, refusing what cannot be saved — and returns the database work, to be run on a
+   * background thread, which answers the saved revision's label. By default it only defers {@link
+   * #save(PlaneDesign, String, String, PlaneRole)}.
+   *
+   * @throws IllegalStateException (or another runtime exception) saying why nothing will be saved
+   */
+  default java.util.function.Supplier<String> prepare(PlaneDesign design, String author, String note, PlaneRole role) {
+    return () -> save(design, author, note, role);
+  }
+
   /** The role of the plane being edited (the choice box starts there). */
   default PlaneRole role() {
     return PlaneRole.OTHER;

@@ -5,6 +5,8 @@ import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.concurrent.Executor;
+import java.util.function.Supplier;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
@@ -49,7 +51,11 @@ public final class DesignViewModel {
   private final DesignSaver saver;
   private final ObjectProperty<PlaneRole> role;
   private final DialogService dialogs;
+  private final Executor ui;
+  private final Executor background;
   private final String title;
+  /** True while a save runs on the background executor. */
+  private boolean saving;
 
   private final ReadOnlyObjectWrapper<PlaneDesign> design = new ReadOnlyObjectWrapper<>(this, "design");
   private final ReadOnlyObjectWrapper<PlanePicture> picture = new ReadOnlyObjectWrapper<>(this, "picture");
@@ -79,8 +85,19 @@ public final class DesignViewModel {
 
   private PlaneAnalysis lastAnalysis;
 
-  public DesignViewModel(
-      PlaneDesign initial, String title, PlaneAnalyzer analyzer, DesignSaver saver, DialogService dialogs) {
+  /**
+   * @param initial the design shown first
+   * @param title the plane's name as shown
+   * @param analyzer the engine
+   * @param saver stores the design
+   * @param dialogs questions and warnings
+   * @param ui runs on the toolkit's thread (tests: same thread)
+   * @param background runs the database work of saving (tests: same thread)
+   */
+  public DesignViewModel(PlaneDesign initial, String title, PlaneAnalyzer analyzer, DesignSaver saver,
+      DialogService dialogs, Executor ui, Executor background) {
+    this.ui = Objects.requireNonNull(ui, "ui");
+    this.background = Objects.requireNonNull(background, "background");
     this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
     this.saver = Objects.requireNonNull(saver, "saver");
     this.role = new SimpleObjectProperty<>(this, "role", saver.role());
@@ -391,8 +408,16 @@ public final class DesignViewModel {
 
   // ---- save -----------------------------------------------------------------------------------
 
-  /** Saves the design as a new revision; asks first when it does not hold its shape. */
+  /**
+   * Saves the design as a new revision; asks first when it does not hold its shape. The database
+   * work runs on the background executor and the status says when it is done; false when nothing
+   * is being saved.
+   */
   public boolean save() {
+    if (saving) {
+      status.set("Still saving the design; wait for it to finish.");
+      return false;
+    }
     PlaneDesign d = design.get();
     String n = note.get() == null ? "" : note.get().strip();
     if (!lastAnalysis.design().rigid()) {
@@ -411,17 +436,42 @@ public final class DesignViewModel {
       }
       n = (n.isEmpty() ? "" : n + " ") + "[saved although not rigid as designed; warning acknowledged]";
     }
+    Supplier<String> work;
     try {
-      String rev = saver.save(d, author.get() == null ? "" : author.get().strip(), n,
+      work = saver.prepare(d, author.get() == null ? "" : author.get().strip(), n,
           role.get() == null ? saver.role() : role.get());
-      dirty.set(false);
-      status.set("Saved as " + rev + ".");
-      return true;
     } catch (RuntimeException e) {
-      error.set("Design not saved: " + e.getMessage());
-      dialogs.showError("Design not saved", error.get());
+      notSaved(e);
       return false;
     }
+    saving = true;
+    error.set("");
+    status.set("Saving the design\u2026");
+    background.execute(() -> {
+      try {
+        String rev = work.get();
+        ui.execute(() -> {
+          saving = false;
+          // a change made while saving is not in the saved revision
+          if (design.get().equals(d)) {
+            dirty.set(false);
+          }
+          status.set("Saved as " + rev + ".");
+        });
+      } catch (RuntimeException e) {
+        ui.execute(() -> {
+          saving = false;
+          status.set("");
+          notSaved(e);
+        });
+      }
+    });
+    return true;
+  }
+
+  private void notSaved(RuntimeException e) {
+    error.set("Design not saved: " + e.getMessage());
+    dialogs.showError("Design not saved", error.get());
   }
 
   // ---- properties -----------------------------------------------------------------------------

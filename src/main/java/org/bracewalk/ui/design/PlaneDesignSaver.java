@@ -4,6 +4,7 @@ import java.time.Clock;
 import java.time.LocalDate;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.function.Supplier;
 import org.bracewalk.app.SiteService;
 import org.bracewalk.core.model.DesignRevision;
 import org.bracewalk.core.model.Millimetres;
@@ -42,6 +43,12 @@ public final class PlaneDesignSaver implements DesignSaver {
 
   @Override
   public String save(PlaneDesign design, String author, String note, PlaneRole role) {
+    return prepare(design, author, note, role).get();
+  }
+
+  /** Refuses a changed role and asks the new plane's name here; the returned work only stores. */
+  @Override
+  public Supplier<String> prepare(PlaneDesign design, String author, String note, PlaneRole role) {
     LocalDate today = LocalDate.now(clock);
     if (Millimetres.round(design.grid()).equals(plane.grid())) {
       if (role != plane.role()) {
@@ -49,8 +56,10 @@ public final class PlaneDesignSaver implements DesignSaver {
             + " and a stored plane's role is fixed: choose " + plane.role().words()
             + " to save a revision, or change the grid to save a new plane of another role");
       }
-      DesignRevision r = sites.addDesignRevision(plane.id(), author, today, note, design);
-      return "revision " + r.number() + " of plane '" + plane.name() + "'";
+      return () -> {
+        DesignRevision r = sites.addDesignRevision(plane.id(), author, today, note, design);
+        return "revision " + r.number() + " of plane '" + plane.name() + "'";
+      };
     }
     Optional<String> name =
         dialogs.askText(
@@ -62,9 +71,12 @@ public final class PlaneDesignSaver implements DesignSaver {
     if (name.isEmpty()) {
       throw new IllegalStateException("not saved: no name given for the new plane");
     }
-    PlaneRecord p =
-        sites.createPlane(new PlaneRecord(0, plane.structureId(), name.get(), design.grid(), role), author, today,
-            note, design);
-    return "new plane '" + p.name() + "', revision 1";
+    String chosen = name.get();
+    return () -> {
+      PlaneRecord p =
+          sites.createPlane(new PlaneRecord(0, plane.structureId(), chosen, design.grid(), role), author, today,
+              note, design);
+      return "new plane '" + p.name() + "', revision 1";
+    };
   }
 }

@@ -18,7 +18,9 @@ import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
-import org.bracewalk.app.AppServices;
+import org.bracewalk.app.AnalysisService;
+import org.bracewalk.app.InspectionService;
+import org.bracewalk.app.SiteService;
 import org.bracewalk.app.PlaneResult;
 import org.bracewalk.core.analysis.AsBuiltAnalysis;
 import org.bracewalk.core.analysis.PlacedBrace;
@@ -45,7 +47,9 @@ import org.bracewalk.ui.common.VerdictWords;
  * finalising. Documents are made on the background executor; results come back on the UI one.
  */
 public final class FindingsViewModel {
-  private final AppServices services;
+  private final SiteService sites;
+  private final InspectionService inspections;
+  private final AnalysisService analysis;
   private final PlaneAnalyzer analyzer;
   private final ReportIssuer issuer;
   private final DialogService dialogs;
@@ -78,7 +82,9 @@ public final class FindingsViewModel {
   }
 
   public FindingsViewModel(
-      AppServices services,
+      SiteService sites,
+      InspectionService inspections,
+      AnalysisService analysis,
       PlaneAnalyzer analyzer,
       ReportIssuer issuer,
       DialogService dialogs,
@@ -86,7 +92,9 @@ public final class FindingsViewModel {
       Executor background,
       long inspectionId,
       long planeId) {
-    this.services = Objects.requireNonNull(services, "services");
+    this.sites = Objects.requireNonNull(sites, "sites");
+    this.inspections = Objects.requireNonNull(inspections, "inspections");
+    this.analysis = Objects.requireNonNull(analysis, "analysis");
     this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
     this.issuer = Objects.requireNonNull(issuer, "issuer");
     this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
@@ -98,17 +106,17 @@ public final class FindingsViewModel {
   }
 
   private void load() {
-    Inspection inspection = services.inspections().inspection(inspectionId);
+    Inspection inspection = inspections.inspection(inspectionId);
     finalised.set(inspection.isFinalised());
-    PlaneRecord plane = services.sites().plane(planeId);
+    PlaneRecord plane = sites.plane(planeId);
     title.set(plane.name() + " in inspection " + inspectionId + " (" + inspection.reason().label().replace('-', ' ')
         + ", " + (inspection.isFinalised() ? "finalised" : "open") + ")");
     planes.clear();
-    for (PlaneRecord p : services.inspections().planesOf(inspectionId)) {
-      PlaneResult r = services.analysis().analysePlane(inspectionId, p.id());
+    for (PlaneRecord p : inspections.planesOf(inspectionId)) {
+      PlaneResult r = analysis.analysePlane(inspectionId, p.id());
       planes.add(new PlaneChoice(p.id(), p.name(), kind(r)));
     }
-    PlaneResult result = services.analysis().analysePlane(inspectionId, planeId);
+    PlaneResult result = analysis.analysePlane(inspectionId, planeId);
     PlaneDesign design = result.design().design();
     PlaneAnalysis analysis = result.analysis();
     AsBuiltAnalysis ab = analysis.asBuilt().orElseThrow();
@@ -257,8 +265,8 @@ public final class FindingsViewModel {
       return false;
     }
     List<String> gaps = new ArrayList<>();
-    for (PlaneRecord p : services.inspections().planesOf(inspectionId)) {
-      long marked = services.inspections().latestObservations(inspectionId, p.id()).values().stream()
+    for (PlaneRecord p : inspections.planesOf(inspectionId)) {
+      long marked = inspections.latestObservations(inspectionId, p.id()).values().stream()
           .filter(o -> o.state().inspected()).count();
       int total = p.grid().panelCount();
       if (marked < total) {
@@ -274,7 +282,7 @@ public final class FindingsViewModel {
       return false;
     }
     try {
-      services.inspections().finalise(inspectionId);
+      inspections.finalise(inspectionId);
     } catch (RuntimeException e) {
       error.set("Not finalised: " + e.getMessage());
       dialogs.showError("Not finalised", error.get());

@@ -21,7 +21,8 @@ public final class HistoryView extends BorderPane {
   public HistoryView(HistoryViewModel vm) {
     getStyleClass().add("screen");
     setId("history-screen");
-    Label title = new Label("History: " + vm.planeName());
+    Label title = new Label();
+    title.textProperty().bind(javafx.beans.binding.Bindings.concat("History: ", vm.planeNameProperty()));
     title.getStyleClass().add("screen-title");
     Label timeline = Widgets.text(vm.timelineProperty());
     timeline.setId("history-timeline");

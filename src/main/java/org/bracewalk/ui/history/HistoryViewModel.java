@@ -6,6 +6,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import java.util.concurrent.Executor;
 import javafx.beans.property.IntegerProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
@@ -14,9 +15,10 @@ import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.beans.property.SimpleIntegerProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
-import org.bracewalk.app.AppServices;
+import org.bracewalk.app.HistoryService;
 import org.bracewalk.app.PanelChange;
 import org.bracewalk.app.PlaneHistory;
+import org.bracewalk.app.SiteService;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
@@ -27,8 +29,10 @@ import org.bracewalk.app.verdict.VerdictKind;
 public final class HistoryViewModel {
   private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm");
 
-  private final PlaneHistory history;
-  private final ZoneId zone;
+  /** Null until read. */
+  private PlaneHistory history;
+  private ZoneId zone;
+  private final ReadOnlyStringWrapper planeName = new ReadOnlyStringWrapper(this, "planeName", "");
   private final ObservableList<String> entries = FXCollections.observableArrayList();
   private final ObservableList<String> changes = FXCollections.observableArrayList();
   private final IntegerProperty chosen = new SimpleIntegerProperty(this, "chosen", -1);
@@ -36,12 +40,42 @@ public final class HistoryViewModel {
   private final ReadOnlyStringWrapper heading = new ReadOnlyStringWrapper(this, "heading", "");
   private final ReadOnlyStringWrapper timeline = new ReadOnlyStringWrapper(this, "timeline", "");
 
-  public HistoryViewModel(AppServices services, long planeId) {
-    Objects.requireNonNull(services, "services");
-    this.history = services.history().history(planeId);
-    var plane = history.plane();
-    var structure = services.sites().structure(plane.structureId());
-    this.zone = services.sites().site(structure.siteId()).timeZone();
+  /**
+   * Reads the plane's history on {@code background} and shows it through {@code ui}; until then
+   * the heading says it is being read.
+   *
+   * @param histories a plane across inspections
+   * @param sites for the site's time zone
+   * @param ui runs on the toolkit's thread (tests: same thread)
+   * @param background runs the database work (tests: same thread)
+   * @param planeId the plane shown
+   */
+  public HistoryViewModel(HistoryService histories, SiteService sites, Executor ui, Executor background, long planeId) {
+    Objects.requireNonNull(histories, "histories");
+    Objects.requireNonNull(sites, "sites");
+    Objects.requireNonNull(ui, "ui");
+    chosen.addListener((o, a, b) -> show(b.intValue()));
+    heading.set("Reading the history of plane " + planeId + " from the database\u2026");
+    background.execute(() -> {
+      PlaneHistory read;
+      ZoneId tz;
+      try {
+        read = histories.history(planeId);
+        var structure = sites.structure(read.plane().structureId());
+        tz = sites.site(structure.siteId()).timeZone();
+      } catch (RuntimeException e) {
+        ui.execute(() -> heading.set("The history of plane " + planeId + " could not be read from the database ("
+            + e.getMessage() + "). Open History again (Ctrl+5) to retry."));
+        return;
+      }
+      ui.execute(() -> loaded(read, tz));
+    });
+  }
+
+  private void loaded(PlaneHistory read, ZoneId tz) {
+    this.history = read;
+    this.zone = tz;
+    planeName.set(read.plane().name());
     StringBuilder line = new StringBuilder();
     for (PlaneHistory.Entry e : history.entries()) {
       VerdictKind k = kind(e);
@@ -57,10 +91,9 @@ public final class HistoryViewModel {
       line.append(k.symbol()).append(" #").append(e.inspection().id());
     }
     timeline.set(line.length() == 0 ? "No inspections yet." : line.toString());
-    chosen.addListener((o, a, b) -> show(b.intValue()));
     chosen.set(history.entries().size() - 1);
     if (history.entries().isEmpty()) {
-      heading.set(plane.name() + ": not inspected yet.");
+      heading.set(read.plane().name() + ": not inspected yet.");
     }
   }
 
@@ -69,7 +102,7 @@ public final class HistoryViewModel {
   }
 
   private void show(int i) {
-    if (i < 0 || i >= history.entries().size()) {
+    if (history == null || i < 0 || i >= history.entries().size()) {
       return;
     }
     PlaneHistory.Entry e = history.entries().get(i);
@@ -110,13 +143,14 @@ public final class HistoryViewModel {
   }
 
   public void newer() {
-    if (chosen.get() < history.entries().size() - 1) {
+    if (history != null && chosen.get() < history.entries().size() - 1) {
       chosen.set(chosen.get() + 1);
     }
   }
 
-  public String planeName() {
-    return history.plane().name();
+  /** The plane's name, once read. */
+  public ReadOnlyStringProperty planeNameProperty() {
+    return planeName.getReadOnlyProperty();
   }
 
   public ObservableList<String> entries() {

@@ -32,6 +32,10 @@ public final class SitesView extends BorderPane {
   private final SitesViewModel vm;
   private final TableView<OverviewRow> table = new TableView<>();
   private final TextField inspector = new TextField();
+  /** A plane to select once the rows are read (0: none). */
+  private long pendingPlane;
+  /** Select the first structure once the rows are read. */
+  private boolean pendingFirst;
 
   public SitesView(SitesViewModel vm) {
     this.vm = vm;
@@ -43,6 +47,20 @@ public final class SitesView extends BorderPane {
 
     table.setId("sites-table");
     table.setItems(vm.rows());
+    vm.rows().addListener((javafx.collections.ListChangeListener<OverviewRow>) c -> {
+      if (vm.rows().isEmpty()) {
+        return;
+      }
+      if (pendingPlane != 0) {
+        long p = pendingPlane;
+        pendingPlane = 0;
+        pendingFirst = false;
+        selectPlane(p);
+      } else if (pendingFirst) {
+        pendingFirst = false;
+        focusTable();
+      }
+    });
     table.getColumns().add(column("Name", 210, this::name));
     table.getColumns().add(column("What", 120, r -> r.level() == OverviewRow.Level.SITE ? "" : r.kind()));
     table.getColumns().add(column("Latest verdict", 290, OverviewRow::verdictText));
@@ -128,12 +146,10 @@ public final class SitesView extends BorderPane {
     Button load = new Button("Load the demo site (L)");
     load.setId("load-demo");
     load.setDefaultButton(true);
-    load.setOnAction(e -> {
-      if (vm.loadDemo()) {
-        table.requestFocus();
-        table.getSelectionModel().select(0);
-      }
-    });
+    load.setOnAction(e -> vm.loadDemo(() -> {
+      table.requestFocus();
+      table.getSelectionModel().select(0);
+    }));
     load.setStyle("-fx-font-size: 1.2em; -fx-min-height: 56;");
     VBox box = new VBox(14, head, where, offer, load);
     box.getStyleClass().add("empty-offer");
@@ -256,9 +272,10 @@ public final class SitesView extends BorderPane {
       return;
     }
     if (e.getCode() == KeyCode.L && vm.emptyProperty().get()) {
-      vm.loadDemo();
-      table.requestFocus();
-      table.getSelectionModel().select(0);
+      vm.loadDemo(() -> {
+        table.requestFocus();
+        table.getSelectionModel().select(0);
+      });
       e.consume();
     } else if (e.getCode() == KeyCode.ENTER && focus == table) {
       OverviewRow r = vm.selectedProperty().get();
@@ -277,16 +294,25 @@ public final class SitesView extends BorderPane {
     }
   }
 
-  /** Focus on the table, first structure selected. */
+  /** Focus on the table, first structure selected (once the rows are read). */
   public void focusTable() {
     table.requestFocus();
-    if (table.getSelectionModel().isEmpty() && !vm.rows().isEmpty()) {
+    if (vm.rows().isEmpty()) {
+      pendingFirst = true;
+      return;
+    }
+    if (table.getSelectionModel().isEmpty()) {
       int index = vm.rows().size() > 1 ? 1 : 0;
       table.getSelectionModel().select(index);
     }
   }
 
   public void selectPlane(long planeId) {
+    if (vm.rows().isEmpty()) {
+      // the rows are still being read: select the plane when they arrive
+      pendingPlane = planeId;
+      return;
+    }
     for (int i = 0; i < vm.rows().size(); i++) {
       if (vm.rows().get(i).planeId() == planeId) {
         table.getSelectionModel().select(i);

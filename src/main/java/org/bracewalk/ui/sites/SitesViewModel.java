@@ -18,16 +18,22 @@ import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
-import org.bracewalk.app.AppServices;
+import org.bracewalk.app.AnalysisService;
+import org.bracewalk.app.DemoService;
+import org.bracewalk.app.InspectionService;
+import org.bracewalk.app.SiteService;
 import org.bracewalk.app.ImportedSite;
 import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.PlaneResult;
-import org.bracewalk.app.SiteService;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.PlaneRetirement;
 import java.util.Set;
+import java.util.concurrent.Executor;
+import java.util.function.Consumer;
+import java.util.function.Function;
+import java.util.function.Supplier;
 import java.util.Map;
 import java.util.HashSet;
 import java.util.HashMap;
@@ -47,10 +53,19 @@ import org.bracewalk.app.verdict.VerdictKind;
 public final class SitesViewModel {
   private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm");
 
-  private final AppServices services;
+  private final SiteService sites;
+  private final InspectionService inspections;
+  private final AnalysisService analysis;
+  private final DemoService demo;
+  private final String databaseLocation;
   private final Clock clock;
   private final DialogService dialogs;
   private final Navigator navigator;
+  private final Executor ui;
+  private final Executor background;
+  /** True while a write runs on the background executor. */
+  private boolean writing;
+  private final ReadOnlyBooleanWrapper loading = new ReadOnlyBooleanWrapper(this, "loading");
 
   private final ObservableList<OverviewRow> rows = FXCollections.observableArrayList();
   private final ObjectProperty<OverviewRow> selected = new SimpleObjectProperty<>(this, "selected");
@@ -67,8 +82,28 @@ public final class SitesViewModel {
   private final ObjectProperty<InspectionReason> reason =
       new SimpleObjectProperty<>(this, "reason", InspectionReason.ROUTINE);
 
-  public SitesViewModel(AppServices services, Clock clock, DialogService dialogs, Navigator navigator) {
-    this.services = Objects.requireNonNull(services, "services");
+  /**
+   * @param sites sites, structures, planes
+   * @param inspections starting and listing inspections
+   * @param analysis the verdict of each plane
+   * @param demo the demo site offered on an empty database
+   * @param databaseLocation where the database is, as shown
+   * @param clock today, for what is due
+   * @param dialogs questions and warnings
+   * @param navigator opens the other screens
+   * @param ui runs on the toolkit's thread (tests: same thread)
+   * @param background runs the reading of the overview and the loading of the demo site (tests: same thread)
+   */
+  public SitesViewModel(SiteService sites, InspectionService inspections, AnalysisService analysis, DemoService demo,
+      String databaseLocation, Clock clock, DialogService dialogs, Navigator navigator, Executor ui,
+      Executor background) {
+    this.ui = Objects.requireNonNull(ui, "ui");
+    this.background = Objects.requireNonNull(background, "background");
+    this.sites = Objects.requireNonNull(sites, "sites");
+    this.inspections = Objects.requireNonNull(inspections, "inspections");
+    this.analysis = Objects.requireNonNull(analysis, "analysis");
+    this.demo = Objects.requireNonNull(demo, "demo");
+    this.databaseLocation = Objects.requireNonNull(databaseLocation, "databaseLocation");
     this.clock = Objects.requireNonNull(clock, "clock");
     this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
     this.navigator = Objects.requireNonNull(navigator, "navigator");
@@ -76,21 +111,51 @@ public final class SitesViewModel {
     refresh();
   }
 
-  /** Reads every site again. */
+  /**
+   * Reads every site again on the background executor (each plane's verdict is worked out from
+   * its inspections) and shows the rows through the UI one.
+   */
   public void refresh() {
+    refresh(() -> { });
+  }
+
+  /** As {@link #refresh()}, then runs {@code then} on the UI executor once the rows are shown. */
+  private void refresh(Runnable then) {
+    loading.set(true);
+    background.execute(() -> {
+      List<OverviewRow> out;
+      try {
+        out = readRows();
+      } catch (RuntimeException e) {
+        ui.execute(() -> {
+          loading.set(false);
+          error.set("The sites could not be read from the database " + databaseLocation + " ("
+              + e.getMessage() + "). Press F5 to read it again.");
+        });
+        return;
+      }
+      ui.execute(() -> {
+        show(out);
+        loading.set(false);
+        then.run();
+      });
+    });
+  }
+
+  private List<OverviewRow> readRows() {
     List<OverviewRow> out = new ArrayList<>();
-    for (Site site : services.sites().sites()) {
+    for (Site site : sites.sites()) {
       out.add(new OverviewRow(OverviewRow.Level.SITE, site.name(), site.location(), null, "", "", "",
           OverviewRow.Due.NOT_APPLICABLE, "", 0, 0, 0, 0));
       LocalDate today = LocalDate.now(clock.withZone(site.timeZone()));
-      for (Structure st : services.sites().structures(site.id())) {
-        List<Inspection> insp = services.inspections().inspections(st.id());
+      for (Structure st : sites.structures(site.id())) {
+        List<Inspection> insp = inspections.inspections(st.id());
         Optional<Inspection> latest = insp.stream().max(Comparator.comparing(Inspection::startedAt));
         Optional<Inspection> open = insp.stream().filter(i -> !i.isFinalised()).max(Comparator.comparing(Inspection::startedAt));
         Optional<Inspection> lastDone =
             insp.stream().filter(Inspection::isFinalised).max(Comparator.comparing(Inspection::finishedAt));
         String last = lastDone.map(i -> WHEN.format(i.finishedAt().atZone(site.timeZone()))).orElse("never");
-        Optional<LocalDate> due = services.inspections().nextInspectionDue(st.id());
+        Optional<LocalDate> due = inspections.nextInspectionDue(st.id());
         OverviewRow.Due dueState;
         String dueText;
         if (due.isEmpty()) {
@@ -110,18 +175,18 @@ public final class SitesViewModel {
         out.add(null); // filled in once the planes are known
         VerdictKind worst = null;
         Map<Long, PlaneRetirement> retired = new HashMap<>();
-        services.sites().retirements(st.id()).forEach(x -> retired.put(x.planeId(), x));
+        sites.retirements(st.id()).forEach(x -> retired.put(x.planeId(), x));
         Set<Long> inLatest = new HashSet<>();
-        latest.ifPresent(i -> services.inspections().planesOf(i.id()).forEach(p -> inLatest.add(p.id())));
+        latest.ifPresent(i -> inspections.planesOf(i.id()).forEach(p -> inLatest.add(p.id())));
         Map<Long, Set<Long>> covered = new HashMap<>();
         for (Inspection i : insp) {
           Set<Long> ids = new HashSet<>();
-          services.inspections().planesOf(i.id()).forEach(p -> ids.add(p.id()));
+          inspections.planesOf(i.id()).forEach(p -> ids.add(p.id()));
           covered.put(i.id(), ids);
         }
         List<Inspection> newestFirst =
             insp.stream().sorted(Comparator.comparing(Inspection::startedAt).reversed()).toList();
-        for (PlaneRecord plane : services.sites().planes(st.id())) {
+        for (PlaneRecord plane : sites.planes(st.id())) {
           VerdictKind v = VerdictKind.NOT_INSPECTED;
           String words;
           PlaneRetirement gone = retired.get(plane.id());
@@ -162,6 +227,10 @@ public final class SitesViewModel {
             open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
       }
     }
+    return out;
+  }
+
+  private void show(List<OverviewRow> out) {
     OverviewRow keep = selected.get();
     rows.setAll(out);
     empty.set(out.isEmpty());
@@ -204,7 +273,7 @@ public final class SitesViewModel {
       if (!covered.getOrDefault(i.id(), Set.of()).contains(plane.id())) {
         continue;
       }
-      PlaneResult r = services.analysis().analysePlane(i.id(), plane.id());
+      PlaneResult r = analysis.analysePlane(i.id(), plane.id());
       if (r.latest().isEmpty()) {
         continue; // nothing recorded on this plane in this inspection: it changes nothing known
       }
@@ -251,21 +320,50 @@ public final class SitesViewModel {
     selectionText.set((r.level() == OverviewRow.Level.PLANE ? "Plane " : "Structure ") + "'" + r.name() + "'. " + open);
   }
 
-  /** Loads the demo site (only offered on an empty database). */
-  public boolean loadDemo() {
-    try {
-      ImportedSite s = services.demo().load();
-      status.set("Loaded the demo site '" + s.site().name() + "': " + s.structures().size() + " structures, "
-          + s.planes().size() + " planes, " + s.inspections().size()
-          + " finalised inspections. Select a structure and start a new inspection to walk a plane.");
-      error.set("");
-      refresh();
-      return true;
-    } catch (RuntimeException e) {
-      error.set("The demo site was not loaded: " + e.getMessage());
-      dialogs.showError("Demo site not loaded", error.get());
+  /**
+   * Loads the demo site (only offered on an empty database) on the background executor; the status
+   * says when it is in, and {@code then} runs on the UI executor once its rows are shown. False when
+   * a load or read is already running.
+   */
+  public boolean loadDemo(Runnable then) {
+    if (loading.get()) {
       return false;
     }
+    loading.set(true);
+    status.set("Loading the demo site\u2026");
+    background.execute(() -> {
+      ImportedSite loaded;
+      try {
+        loaded = demo.load();
+      } catch (RuntimeException e) {
+        ui.execute(() -> {
+          loading.set(false);
+          status.set("");
+          error.set("The demo site was not loaded: " + e.getMessage());
+          dialogs.showError("Demo site not loaded", error.get());
+        });
+        return;
+      }
+      ImportedSite s = loaded;
+      ui.execute(() -> {
+        status.set("Loaded the demo site '" + s.site().name() + "': " + s.structures().size() + " structures, "
+            + s.planes().size() + " planes, " + s.inspections().size()
+            + " finalised inspections. Select a structure and start a new inspection to walk a plane.");
+        error.set("");
+        refresh(then);
+      });
+    });
+    return true;
+  }
+
+  /** As {@link #loadDemo(Runnable)} with nothing to run after. */
+  public boolean loadDemo() {
+    return loadDemo(() -> { });
+  }
+
+  /** True while the overview is being read or the demo site loaded. */
+  public ReadOnlyBooleanProperty loadingProperty() {
+    return loading.getReadOnlyProperty();
   }
 
   /**
@@ -279,7 +377,7 @@ public final class SitesViewModel {
       return false;
     }
     String name = strip(inspectorName.get());
-    boolean racking = services.sites().structure(r.structureId()).kind() == StructureKind.RACKING_RUN;
+    boolean racking = sites.structure(r.structureId()).kind() == StructureKind.RACKING_RUN;
     // the report needs every one of these, and an inspection cannot be changed once started
     List<String> missing = new ArrayList<>();
     if (name.isEmpty()) {
@@ -310,20 +408,49 @@ public final class SitesViewModel {
                 + " (The open one stays open until it is finalised.)", "Start another")) {
       return false;
     }
-    Inspection started;
-    try {
-      started = services.inspections().start(r.structureId(),
-          new NewInspection(name, strip(inspectorPosition.get()), strip(competentPerson.get()), strip(shift.get()),
-              racking ? strip(storageSafetyPerson.get()) : null, reason.get(), null, null));
-    } catch (RuntimeException e) {
-      error.set("Not started: " + e.getMessage());
+    NewInspection details = new NewInspection(name, strip(inspectorPosition.get()), strip(competentPerson.get()),
+        strip(shift.get()), racking ? strip(storageSafetyPerson.get()) : null, reason.get(), null, null);
+    return write("Starting the inspection", () -> {
+      Inspection started = inspections.start(r.structureId(), details);
+      List<PlaneRecord> covered = inspections.planesOf(started.id());
+      long plane = covered.stream().anyMatch(p -> p.id() == r.planeId()) ? r.planeId()
+          : covered.stream().findFirst().map(PlaneRecord::id).orElse(0L);
+      return new Selection(r.structureId(), plane, started.id());
+    }, opened -> navigator.open(ScreenId.WALK, opened), e -> "Not started: " + e.getMessage());
+  }
+
+  /**
+   * Runs the database write {@code work} on the background executor and {@code done} with its
+   * answer on the UI one; a failure sets the error to {@code failed}'s words. One write at a time:
+   * false (and the status says so) while another runs.
+   */
+  private <T> boolean write(String what, Supplier<T> work, Consumer<T> done,
+      Function<RuntimeException, String> failed) {
+    if (writing) {
+      status.set("Still saving; wait for it to finish.");
       return false;
     }
-    error.set("");
-    List<PlaneRecord> covered = services.inspections().planesOf(started.id());
-    long plane = covered.stream().anyMatch(p -> p.id() == r.planeId()) ? r.planeId()
-        : covered.stream().findFirst().map(PlaneRecord::id).orElse(0L);
-    navigator.open(ScreenId.WALK, new Selection(r.structureId(), plane, started.id()));
+    writing = true;
+    status.set(what + "\u2026");
+    background.execute(() -> {
+      T answer;
+      try {
+        answer = work.get();
+      } catch (RuntimeException e) {
+        ui.execute(() -> {
+          writing = false;
+          status.set("");
+          error.set(failed.apply(e));
+        });
+        return;
+      }
+      ui.execute(() -> {
+        writing = false;
+        status.set("");
+        error.set("");
+        done.accept(answer);
+      });
+    });
     return true;
   }
 
@@ -338,8 +465,8 @@ public final class SitesViewModel {
       error.set("Select the plane to retire first.");
       return false;
     }
-    PlaneRecord plane = services.sites().plane(r.planeId());
-    if (services.sites().retirement(plane.id()).isPresent()) {
+    PlaneRecord plane = sites.plane(r.planeId());
+    if (sites.retirement(plane.id()).isPresent()) {
       error.set("Plane '" + plane.name() + "' is already retired.");
       return false;
     }
@@ -360,16 +487,14 @@ public final class SitesViewModel {
             + " This cannot be undone.", "Retire")) {
       return false;
     }
-    try {
-      services.sites().retirePlane(plane.id(), "", why.get().strip());
-    } catch (RuntimeException e) {
-      error.set("Retire plane '" + plane.name() + "': " + e.getMessage() + ". Nothing was changed.");
-      return false;
-    }
-    error.set("");
-    refresh();
-    status.set("Plane '" + plane.name() + "' retired: inspections started from now on leave it out.");
-    return true;
+    String reasonGiven = why.get().strip();
+    return write("Retiring plane '" + plane.name() + "'", () -> {
+      sites.retirePlane(plane.id(), "", reasonGiven);
+      return plane;
+    }, done -> {
+      refresh();
+      status.set("Plane '" + plane.name() + "' retired: inspections started from now on leave it out.");
+    }, e -> "Retire plane '" + plane.name() + "': " + e.getMessage() + ". Nothing was changed.");
   }
 
   private static String strip(String s) {
@@ -377,7 +502,7 @@ public final class SitesViewModel {
   }
 
   private long firstPlane(long structureId) {
-    return services.sites().planes(structureId).stream().findFirst().map(PlaneRecord::id).orElse(0L);
+    return sites.planes(structureId).stream().findFirst().map(PlaneRecord::id).orElse(0L);
   }
 
   /**
@@ -391,7 +516,7 @@ public final class SitesViewModel {
       error.set("Select the structure (or one of its planes) whose inspection interval to change.");
       return false;
     }
-    Structure st = services.sites().structure(r.structureId());
+    Structure st = sites.structure(r.structureId());
     Optional<String> answer = dialogs.askText("Days between inspections",
         "Days between routine inspections of '" + st.name() + "' (" + SiteService.MIN_INTERVAL_DAYS + " to "
             + SiteService.MAX_INTERVAL_DAYS + "). The next inspection falls due this many days after the last"
@@ -409,6 +534,12 @@ public final class SitesViewModel {
           + " Nothing was changed.");
       return false;
     }
+    if (days < SiteService.MIN_INTERVAL_DAYS || days > SiteService.MAX_INTERVAL_DAYS) {
+      // refused here, before any database work (the service refuses it too)
+      error.set("Days between inspections: " + days + " is out of range: give " + SiteService.MIN_INTERVAL_DAYS
+          + " to " + SiteService.MAX_INTERVAL_DAYS + " days. Nothing was changed.");
+      return false;
+    }
     if (st.kind() == StructureKind.SCAFFOLD && days > 7
         && !dialogs.confirm("Longer than 7 days",
             "In Great Britain a scaffold platform is inspected at least every 7 days (Work at Height"
@@ -416,19 +547,17 @@ public final class SitesViewModel {
                 + " local rules allow it.", "Keep " + days + " days")) {
       return false;
     }
-    try {
-      Structure changed = services.sites().setInspectionInterval(st.id(), days);
-      error.set("");
-      refresh();
-      status.set("'" + changed.name() + "' is now inspected every " + changed.inspectionIntervalDays()
+    int chosen = days;
+    return write("Saving the days between inspections", () -> {
+      Structure changed = sites.setInspectionInterval(st.id(), chosen);
+      return changed.name() + "' is now inspected every " + changed.inspectionIntervalDays()
           + (changed.inspectionIntervalDays() == 1 ? " day" : " days")
-          + services.inspections().nextInspectionDue(changed.id()).map(d -> "; next due " + d)
-              .orElse("; not inspected yet, so due now") + ".");
-      return true;
-    } catch (RuntimeException e) {
-      error.set("Days between inspections: " + e.getMessage() + ". Nothing was changed.");
-      return false;
-    }
+          + inspections.nextInspectionDue(changed.id()).map(d -> "; next due " + d)
+              .orElse("; not inspected yet, so due now") + ".";
+    }, words -> {
+      refresh();
+      status.set("'" + words);
+    }, e -> "Days between inspections: " + e.getMessage() + ". Nothing was changed.");
   }
 
   /** The selection the other screens should show for the selected line. */
@@ -511,6 +640,6 @@ public final class SitesViewModel {
   }
 
   public String databaseLocation() {
-    return services.location();
+    return databaseLocation;
   }
 }

@@ -5,11 +5,15 @@ import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.BasicFileAttributes;
+import java.time.Clock;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.Comparator;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
 import org.bracewalk.app.PhotoFiles;
@@ -28,7 +32,93 @@ public final class CameraFolder {
   static final String NOT_A_PICTURE =
       "not a JPEG or PNG picture, which is all the report can draw: save it as JPEG";
 
-  private CameraFolder() {}
+  private final Setting setting;
+  private final Clock clock;
+  /** Photos count from here: the walk-round's opening, then each mark (read from the clock). */
+  private Instant since;
+  /** Photos already taken in this session, so none is taken twice. */
+  private final Set<Path> taken = new HashSet<>();
+  /** The folder's photos at the previous mark, once the folder is in use; null before. */
+  private Set<Path> before;
+
+  /**
+   * The camera folder of one walk-round: remembered in {@code setting}; "since the previous mark"
+   * is read from {@code clock} (never the system clock directly), so it can be tested with a fixed one.
+   */
+  public CameraFolder(Setting setting, Clock clock) {
+    this.setting = Objects.requireNonNull(setting, "setting");
+    this.clock = Objects.requireNonNull(clock, "clock");
+    this.since = clock.instant();
+    // what the remembered folder holds now is not new: from here its listing says what is
+    this.before = currentListing();
+  }
+
+  /** The folder in use, if one has been chosen. */
+  public Optional<Path> folder() {
+    return setting.get();
+  }
+
+  /** The instant photos count from (the opening, or the previous mark). */
+  public Instant since() {
+    return since;
+  }
+
+  /** Uses {@code folder} from now on; another folder than before brings none of its old listing. */
+  public void choose(Path folder) {
+    Optional<Path> old = setting.get();
+    setting.set(folder);
+    if (!old.equals(Optional.of(folder))) {
+      before = null; // another folder: nothing of the old one's listing applies
+    }
+  }
+
+  /**
+   * The new photos in the folder in use (see {@link #newPhotos}); from here on its own listing says
+   * what is new, whatever the camera's clock.
+   *
+   * @throws IOException when the folder cannot be read
+   */
+  public Found take() throws IOException {
+    Path folder = setting.get().orElseThrow(() -> new IllegalStateException("no camera folder chosen"));
+    Found found = newPhotos(folder, before, since, taken);
+    before = listing(folder);
+    return found;
+  }
+
+  /** Notes that {@code photos} went with the next mark, so they are not taken again. */
+  public void taken(Collection<Path> photos) {
+    taken.addAll(photos);
+  }
+
+  /** Notes that {@code photos} were taken off the next mark: they may be offered again. */
+  public void released(Collection<Path> photos) {
+    taken.removeAll(photos);
+    if (before != null) {
+      before.removeAll(photos);
+    }
+  }
+
+  /** A mark was made: photos count from now (by the clock), and from the folder's listing now. */
+  public void markMade() {
+    since = clock.instant();
+    if (before != null) {
+      before = currentListing();
+    }
+  }
+
+  /**
+   * The folder's photos now, or null when no folder is set or it cannot be read (then the time
+   * rule serves until it can).
+   */
+  private Set<Path> currentListing() {
+    return setting.get().filter(Files::isDirectory).map(f -> {
+      try {
+        return listing(f);
+      } catch (IOException e) {
+        return null;
+      }
+    }).orElse(null);
+  }
 
   /** Where the chosen camera folder is remembered between sessions. */
   public interface Setting {

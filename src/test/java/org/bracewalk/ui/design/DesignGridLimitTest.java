@@ -14,7 +14,8 @@ import org.junit.jupiter.api.Test;
 class DesignGridLimitTest {
   private DesignViewModel editor() {
     return new DesignViewModel(PlaneDesign.of(PlaneGrid.uniform(2, 3, Support.PINNED_BASE), Map.of()),
-        "frame 9", PlaneAnalyzer.standard(), (d, a, n) -> "revision 1", new FakeDialogs());
+        "frame 9", PlaneAnalyzer.standard(), (d, a, n) -> "revision 1", new FakeDialogs(),
+        Runnable::run, Runnable::run);
   }
 
   @Test

@@ -29,7 +29,7 @@ class DesignViewModelTest {
       };
 
   private DesignViewModel editor(PlaneDesign d) {
-    return new DesignViewModel(d, "Test plane", PlaneAnalyzer.standard(), saver, dialogs);
+    return new DesignViewModel(d, "Test plane", PlaneAnalyzer.standard(), saver, dialogs, Runnable::run, Runnable::run);
   }
 
   @Test
@@ -129,5 +129,44 @@ class DesignViewModelTest {
     vm.widthsProperty().set("2.4");
     assertThat(vm.applyGrid()).isTrue();
     assertThat(vm.cursor()).isEqualTo(PanelRef.of(1, 1));
+  }
+
+  @Test
+  void savingRunsOnTheBackgroundExecutorAndReportsThroughTheUiOne() {
+    List<Runnable> background = new ArrayList<>();
+    List<Runnable> ui = new ArrayList<>();
+    DesignViewModel vm = new DesignViewModel(PlaneDesign.of(PlaneGrid.uniform(3, 6, Support.PINNED_BASE), Map.of()),
+        "Test plane", PlaneAnalyzer.standard(), saver, dialogs, ui::add, background::add);
+    vm.fillStepProperty().set(5);
+    assertThat(vm.fillZigZag()).isTrue();
+    assertThat(vm.save()).isTrue();
+    // nothing stored on the calling (toolkit) thread; a second save waits for the first
+    assertThat(saved).isEmpty();
+    assertThat(vm.statusProperty().get()).startsWith("Saving the design");
+    assertThat(vm.save()).isFalse();
+    assertThat(vm.statusProperty().get()).startsWith("Still saving");
+    assertThat(background).hasSize(1);
+    background.remove(0).run();
+    assertThat(saved).hasSize(1);
+    assertThat(vm.dirtyProperty().get()).isTrue(); // not yet told
+    ui.remove(0).run();
+    assertThat(vm.statusProperty().get()).isEqualTo("Saved as revision 1.");
+    assertThat(vm.dirtyProperty().get()).isFalse();
+  }
+
+  @Test
+  void aSaveThatFailsOnTheBackgroundSaysWhyAndKeepsTheEdits() {
+    DesignSaver failing = (d, author, note) -> {
+      throw new IllegalStateException("the database is locked by another program");
+    };
+    DesignViewModel vm = new DesignViewModel(PlaneDesign.of(PlaneGrid.uniform(3, 6, Support.PINNED_BASE), Map.of()),
+        "Test plane", PlaneAnalyzer.standard(), failing, dialogs, Runnable::run, Runnable::run);
+    vm.fillStepProperty().set(5);
+    assertThat(vm.fillZigZag()).isTrue();
+    vm.save();
+    assertThat(vm.errorProperty().get()).isEqualTo("Design not saved: the database is locked by another program");
+    assertThat(vm.dirtyProperty().get()).isTrue();
+    // and another save may be tried
+    assertThat(vm.save()).isTrue();
   }
 }

@@ -53,4 +53,24 @@ class PlaneDesignSaverRoleTest {
         .filter(p -> p.name().equals("frame 2 end bracing")).findFirst().orElseThrow();
     assertThat(made.role()).isEqualTo(PlaneRole.PLAN_BRACING);
   }
+
+  @Test
+  void theNewPlanesNameIsAskedWhenPreparedAndNothingIsStoredUntilTheWorkRuns() {
+    services = DemoDatabase.withDemo(dir);
+    PlaneRecord frame2 = services.sites().sites().stream()
+        .flatMap(s -> services.sites().structures(s.id()).stream())
+        .flatMap(st -> services.sites().planes(st.id()).stream())
+        .filter(p -> p.name().equals("frame 2")).findFirst().orElseThrow();
+    FakeDialogs dialogs = new FakeDialogs();
+    PlaneDesignSaver saver = new PlaneDesignSaver(services.sites(), frame2, DemoDatabase.CLOCK, dialogs);
+    int planes = services.sites().planes(frame2.structureId()).size();
+    dialogs.textAnswers.push(Optional.of("frame 2 top"));
+    PlaneDesign changed = PlaneDesign.of(PlaneGrid.uniform(2, 1, Support.PINNED_BASE), Map.of());
+    // the dialog is answered on the calling (toolkit) thread; the work only stores
+    var work = saver.prepare(changed, "Priya", "", PlaneRole.UPRIGHT_FRAME);
+    assertThat(dialogs.textAnswers).isEmpty();
+    assertThat(services.sites().planes(frame2.structureId())).hasSize(planes);
+    assertThat(work.get()).startsWith("new plane 'frame 2 top'");
+    assertThat(services.sites().planes(frame2.structureId())).hasSize(planes + 1);
+  }
 }

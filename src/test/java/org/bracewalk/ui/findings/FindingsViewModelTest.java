@@ -60,7 +60,7 @@ class FindingsViewModelTest {
   }
 
   private FindingsViewModel vm() {
-    return new FindingsViewModel(services, PlaneAnalyzer.standard(), issuer, dialogs, ui, background, walk.id(), facade.id());
+    return new FindingsViewModel(services.sites(), services.inspections(), services.analysis(), PlaneAnalyzer.standard(), issuer, dialogs, ui, background, walk.id(), facade.id());
   }
 
   @Test

@@ -31,7 +31,7 @@ class HistoryViewModelTest {
   @Test
   void theLatestInspectionIsDrawnWithThePanelsThatChangedMarked() {
     services = DemoDatabase.withDemo(dir);
-    HistoryViewModel vm = new HistoryViewModel(services, plane("frame 2").id());
+    HistoryViewModel vm = new HistoryViewModel(services.history(), services.sites(), Runnable::run, Runnable::run, plane("frame 2").id());
     assertThat(vm.entries()).hasSize(2);
     assertThat(vm.chosenProperty().get()).isEqualTo(1);
     assertThat(vm.timelineProperty().get()).isEqualTo("\u25A0 #1  \u2192  \u25B2 #2");
@@ -46,9 +46,37 @@ class HistoryViewModelTest {
   @Test
   void aPlaneNeverInspectedSaysSo() {
     services = DemoDatabase.withDemo(dir);
-    HistoryViewModel vm = new HistoryViewModel(services, plane("north facade").id());
+    HistoryViewModel vm = new HistoryViewModel(services.history(), services.sites(), Runnable::run, Runnable::run, plane("north facade").id());
     assertThat(vm.entries()).isEmpty();
     assertThat(vm.timelineProperty().get()).isEqualTo("No inspections yet.");
     assertThat(vm.headingProperty().get()).contains("not inspected yet");
+  }
+
+  @Test
+  void theHistoryIsReadOnTheBackgroundExecutorAndShownThroughTheUiOne() {
+    services = DemoDatabase.withDemo(dir);
+    java.util.List<Runnable> background = new java.util.ArrayList<>();
+    java.util.List<Runnable> ui = new java.util.ArrayList<>();
+    HistoryViewModel vm = new HistoryViewModel(services.history(), services.sites(), ui::add, background::add,
+        plane("frame 2").id());
+    // nothing read on the calling (toolkit) thread: the view shows that it is being read
+    assertThat(vm.entries()).isEmpty();
+    assertThat(vm.headingProperty().get()).contains("Reading the history");
+    assertThat(background).hasSize(1);
+    background.remove(0).run();
+    assertThat(vm.entries()).isEmpty(); // the result waits for the UI executor
+    assertThat(ui).hasSize(1);
+    ui.remove(0).run();
+    assertThat(vm.entries()).hasSize(2);
+    assertThat(vm.planeNameProperty().get()).isEqualTo("frame 2");
+  }
+
+  @Test
+  void aHistoryThatCannotBeReadSaysSoNamingThePlane() {
+    services = DemoDatabase.withDemo(dir);
+    HistoryViewModel vm = new HistoryViewModel(services.history(), services.sites(), Runnable::run, Runnable::run,
+        987654L);
+    assertThat(vm.entries()).isEmpty();
+    assertThat(vm.headingProperty().get()).contains("plane 987654 could not be read");
   }
 }

@@ -29,6 +29,11 @@ class RetirePlaneViewModelTest {
     services.close();
   }
 
+  private SitesViewModel sitesOf(AppServices s) {
+    return new SitesViewModel(s.sites(), s.inspections(), s.analysis(), s.demo(), s.store().location(),
+        DemoDatabase.CLOCK, dialogs, navigator, Runnable::run, Runnable::run);
+  }
+
   private OverviewRow row(SitesViewModel vm, String name) {
     return vm.rows().stream().filter(r -> r.name().equals(name)).findFirst().orElseThrow();
   }
@@ -36,7 +41,7 @@ class RetirePlaneViewModelTest {
   @Test
   void aConfirmedRetirementKeepsThePlaneListedAndLeavesItOutOfTheNextInspection() {
     services = DemoDatabase.withDemo(dir);
-    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel vm = sitesOf(services);
     vm.selectedProperty().set(row(vm, "spine"));
     dialogs.textAnswers.add(Optional.of("dismantled after the impact"));
     dialogs.confirmAnswers.add(true);
@@ -68,7 +73,7 @@ class RetirePlaneViewModelTest {
   @Test
   void declinedOrWithoutAReasonNothingIsRetired() {
     services = DemoDatabase.withDemo(dir);
-    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel vm = sitesOf(services);
     long spine = spineOf(services).id();
     vm.selectedProperty().set(row(vm, "spine"));
     dialogs.textAnswers.add(Optional.of("typo"));

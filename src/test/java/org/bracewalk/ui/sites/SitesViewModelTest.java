@@ -29,6 +29,11 @@ class SitesViewModelTest {
     services.close();
   }
 
+  private SitesViewModel sitesOf(AppServices s) {
+    return new SitesViewModel(s.sites(), s.inspections(), s.analysis(), s.demo(), s.store().location(),
+        DemoDatabase.CLOCK, dialogs, navigator, Runnable::run, Runnable::run);
+  }
+
   private OverviewRow row(SitesViewModel vm, String name) {
     return vm.rows().stream().filter(r -> r.name().equals(name)).findFirst().orElseThrow();
   }
@@ -36,7 +41,7 @@ class SitesViewModelTest {
   @Test
   void anEmptyDatabaseOffersTheDemoAndLoadingItFillsTheOverview() {
     services = DemoDatabase.empty(dir);
-    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel vm = sitesOf(services);
     assertThat(vm.emptyProperty().get()).isTrue();
     assertThat(vm.loadDemo()).isTrue();
     assertThat(vm.emptyProperty().get()).isFalse();
@@ -45,9 +50,67 @@ class SitesViewModelTest {
   }
 
   @Test
+  void theOverviewIsReadAndTheDemoLoadedOnTheBackgroundExecutorAndShownThroughTheUiOne() {
+    services = DemoDatabase.empty(dir);
+    List<Runnable> background = new ArrayList<>();
+    List<Runnable> ui = new ArrayList<>();
+    SitesViewModel vm = new SitesViewModel(services.sites(), services.inspections(), services.analysis(),
+        services.demo(), services.store().location(), DemoDatabase.CLOCK, dialogs, navigator, ui::add, background::add);
+    // nothing read on the calling (toolkit) thread; no demo offer before the database is read
+    assertThat(vm.loadingProperty().get()).isTrue();
+    assertThat(vm.emptyProperty().get()).isFalse();
+    background.remove(0).run();
+    ui.remove(0).run();
+    assertThat(vm.emptyProperty().get()).isTrue();
+    assertThat(vm.loadingProperty().get()).isFalse();
+    List<String> after = new ArrayList<>();
+    assertThat(vm.loadDemo(() -> after.add("rows shown"))).isTrue();
+    assertThat(vm.loadDemo()).isFalse(); // one load at a time
+    assertThat(services.sites().sites()).isEmpty(); // not yet: it waits on the background executor
+    assertThat(vm.statusProperty().get()).startsWith("Loading the demo site");
+    background.remove(0).run();
+    assertThat(services.sites().sites()).hasSize(1);
+    ui.remove(0).run(); // the status, then the overview is read again
+    background.remove(0).run();
+    assertThat(vm.rows()).isEmpty();
+    ui.remove(0).run();
+    assertThat(vm.rows()).extracting(OverviewRow::name).contains("Larkspur Depot");
+    assertThat(after).containsExactly("rows shown");
+    assertThat(background).isEmpty();
+    assertThat(ui).isEmpty();
+  }
+
+  @Test
+  void startingAnInspectionWritesOnTheBackgroundExecutorOneWriteAtATime() {
+    services = DemoDatabase.withDemo(dir);
+    List<Runnable> background = new ArrayList<>();
+    SitesViewModel vm = new SitesViewModel(services.sites(), services.inspections(), services.analysis(),
+        services.demo(), services.store().location(), DemoDatabase.CLOCK, dialogs, navigator, Runnable::run,
+        background::add);
+    background.remove(0).run(); // the overview
+    vm.selectedProperty().set(row(vm, "north facade"));
+    vm.inspectorNameProperty().set("Rowan Test");
+    vm.inspectorPositionProperty().set("Scaffold inspector");
+    vm.competentPersonProperty().set("Rowan Test");
+    vm.shiftProperty().set("day");
+    long structure = row(vm, "north facade").structureId();
+    int before = services.inspections().inspections(structure).size();
+    assertThat(vm.startInspection()).isTrue();
+    // nothing written on the calling (toolkit) thread, and a second press starts no second inspection
+    assertThat(services.inspections().inspections(structure)).hasSize(before);
+    assertThat(vm.startInspection()).isFalse();
+    assertThat(vm.statusProperty().get()).startsWith("Still saving");
+    assertThat(opened).isEmpty();
+    background.remove(0).run();
+    assertThat(services.inspections().inspections(structure)).hasSize(before + 1);
+    assertThat(opened).singleElement().asString().startsWith("WALK");
+    assertThat(background).isEmpty();
+  }
+
+  @Test
   void eachPlaneShowsItsLatestVerdictAndEachStructureWhenItIsDue() {
     services = DemoDatabase.withDemo(dir);
-    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel vm = sitesOf(services);
     // the demo's after-impact inspection of the racking run (2025-03-05) lost frame 2
     assertThat(row(vm, "frame 2").verdict()).isEqualTo(VerdictKind.LOST);
     assertThat(row(vm, "frame 1").verdict()).isEqualTo(VerdictKind.HOLDS);
@@ -66,7 +129,7 @@ class SitesViewModelTest {
   @Test
   void theInspectionIntervalIsASettingPerStructureAndMovesTheDueDate() {
     services = DemoDatabase.withDemo(dir);
-    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel vm = sitesOf(services);
     vm.selectedProperty().set(row(vm, "frame 2"));
     // last finalised 2025-03-05; today 2025-03-15: 7 days overdue, 14 days due on 2025-03-19
     dialogs.textAnswers.push(java.util.Optional.of(" 14 "));
@@ -110,7 +173,7 @@ class SitesViewModelTest {
     services.sites().createPlane(
         new org.bracewalk.core.model.PlaneRecord(0, 1, "west return", frame2.grid()),
         "Ines Carrow", java.time.LocalDate.of(2025, 3, 15), "", design);
-    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel vm = sitesOf(services);
     // the demo's inspection 2 covers the planes fixed when it started: not this one
     assertThat(row(vm, "west return").verdict()).isEqualTo(VerdictKind.NOT_INSPECTED);
     assertThat(row(vm, "west return").verdictText()).contains("added after inspection 2 started");
@@ -121,7 +184,7 @@ class SitesViewModelTest {
   void anOpenWalkRoundShowsHowFarItHasGot() {
     services = DemoDatabase.withDemo(dir);
     DemoWalk.record(services, 20);
-    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel vm = sitesOf(services);
     assertThat(row(vm, "north facade").verdictText()).contains("open #3: 20 of 50 marked");
     assertThat(row(vm, "north facade").verdict()).isEqualTo(VerdictKind.DEPENDS_ON_UNSEEN);
   }
@@ -129,7 +192,7 @@ class SitesViewModelTest {
   @Test
   void anOpenInspectionNeverHidesAKnownLostRigidityUntilItHasShownOtherwise() {
     services = DemoDatabase.withDemo(dir);
-    SitesViewModel before = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel before = sitesOf(services);
     assertThat(row(before, "frame 2").verdict()).isEqualTo(VerdictKind.LOST);
     long racking = row(before, "Aisle C racking run").structureId();
     long frame2 = row(before, "frame 2").planeId();
@@ -137,7 +200,7 @@ class SitesViewModelTest {
     var open = services.inspections().start(racking, new org.bracewalk.app.NewInspection("Priya Danvers",
         "Storage equipment inspector", "Priya Danvers", "day shift", "Ola Brandt",
         org.bracewalk.core.model.InspectionReason.ROUTINE, null, null));
-    SitesViewModel started = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel started = sitesOf(services);
     assertThat(row(started, "frame 2").verdict()).isEqualTo(VerdictKind.LOST);
     assertThat(row(started, "frame 2").verdictText()).startsWith(VerdictKind.LOST.headline() + " (#2)");
     assertThat(row(started, "Aisle C racking run").verdict()).isEqualTo(VerdictKind.LOST);
@@ -146,7 +209,7 @@ class SitesViewModelTest {
     // lost rigidity still shows, with how far the open walk-round has got
     services.inspections().recordObservation(open.id(), org.bracewalk.app.NewObservation.of(frame2,
         org.bracewalk.core.model.PanelRef.of(3, 1), org.bracewalk.core.model.PanelState.SOUND, "Priya Danvers"));
-    SitesViewModel marked = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel marked = sitesOf(services);
     assertThat(row(marked, "frame 2").verdict()).isEqualTo(VerdictKind.LOST);
     assertThat(row(marked, "frame 2").verdictText()).contains("not yet cleared")
         .contains("open #" + open.id() + ": 1 of 5 marked");
@@ -157,7 +220,7 @@ class SitesViewModelTest {
   @Test
   void rackingNeedsThePersonResponsibleForStorageSafety() {
     services = DemoDatabase.withDemo(dir);
-    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel vm = sitesOf(services);
     vm.selectedProperty().set(row(vm, "frame 1"));
     vm.inspectorNameProperty().set("Ada Quill");
     vm.inspectorPositionProperty().set("Racking inspector");
@@ -170,7 +233,7 @@ class SitesViewModelTest {
   @Test
   void startingAnInspectionNeedsTheInspectorAndOpensTheWalkRound() {
     services = DemoDatabase.withDemo(dir);
-    SitesViewModel vm = new SitesViewModel(services, DemoDatabase.CLOCK, dialogs, navigator);
+    SitesViewModel vm = sitesOf(services);
     vm.selectedProperty().set(row(vm, "north facade"));
     assertThat(vm.startInspection()).isFalse();
     assertThat(vm.errorProperty().get()).startsWith("Inspector, Position, Competent person, Shift: empty.");

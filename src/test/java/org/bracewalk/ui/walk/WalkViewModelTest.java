@@ -32,7 +32,7 @@ class WalkViewModelTest {
 
   private WalkViewModel walk(List<RecordedMark> existing, boolean readOnly) {
     return new WalkViewModel(
-        design, "Test plane", existing, recorder, PlaneAnalyzer.standard(), dialogs, false, readOnly);
+        design, "Test plane", existing, recorder, PlaneAnalyzer.standard(), dialogs, false, readOnly, java.time.Clock.systemUTC());
   }
 
   private static void markAll(WalkViewModel vm, PanelState state, int times) {
@@ -157,6 +157,15 @@ class WalkViewModelTest {
     Path f = java.nio.file.Files.write(folder.resolve(name), new byte[] {(byte) 0xFF, (byte) 0xD8, (byte) 0xFF, (byte) 0xE0, 1, 2}); // JPEG's first bytes
     java.nio.file.Files.setLastModifiedTime(f, java.nio.file.attribute.FileTime.from(written));
     return f;
+  }
+
+  @Test
+  void theMarkThatCompletesThePlaneSaysEveryPanelIsMarked() {
+    WalkViewModel vm = walk(List.of(), false);
+    markAll(vm, PanelState.SOUND, 8);
+    assertThat(vm.statusProperty().get()).doesNotContain("Every panel is marked");
+    markAll(vm, PanelState.SOUND, 1); // the ninth and last in walk order
+    assertThat(vm.statusProperty().get()).endsWith(". Every panel is marked: see Findings (Ctrl+4).");
   }
 
   @Test

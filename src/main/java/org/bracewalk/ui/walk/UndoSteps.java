@@ -1,0 +1,37 @@
+package org.bracewalk.ui.walk;
+
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.Optional;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyBooleanWrapper;
+import org.bracewalk.core.model.PanelRef;
+
+/** The marks made in this walk-round, newest first, so undo can correct them. One job: undo. */
+final class UndoSteps {
+  /** One mark made in this session: the panel, what it held before (null: nothing), the mark made. */
+  record Step(PanelRef panel, RecordedMark before, RecordedMark made) {}
+
+  private final Deque<Step> steps = new ArrayDeque<>();
+  private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper(this, "canUndo");
+
+  void made(Step step) {
+    steps.push(step);
+    canUndo.set(true);
+  }
+
+  /** The newest step, if any, still held until {@link #undone()}. */
+  Optional<Step> newest() {
+    return Optional.ofNullable(steps.peek());
+  }
+
+  /** The newest step was corrected. */
+  void undone() {
+    steps.pop();
+    canUndo.set(!steps.isEmpty());
+  }
+
+  ReadOnlyBooleanProperty canUndoProperty() {
+    return canUndo.getReadOnlyProperty();
+  }
+}
