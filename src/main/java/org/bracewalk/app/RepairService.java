@@ -35,7 +35,7 @@ public final class RepairService {
   }
 
   /**
-   * Adds an action to an order: on a panel of a plane of the inspected structure ({@code panel}
+   * Adds an action to an order: on a panel of a plane the inspection covers ({@code panel}
    * {@code null} for the whole plane), with the brace to fit when there is one.
    */
   public RepairAction addAction(long orderId, long planeId, PanelRef panel, RepairActionKind action,
@@ -47,6 +47,11 @@ public final class RepairService {
     if (plane.structureId() != inspection.structureId()) {
       throw new UserInputException("plane '" + plane.name() + "' is not part of the structure "
           + inspection.label() + " covers");
+    }
+    if (!store.planes().scopeOf(inspection.id()).containsKey(planeId)) {
+      throw new UserInputException("plane '" + plane.name() + "' (id " + planeId + ") is not part of"
+          + " inspection " + inspection.id() + ": it was added or retired outside the planes that"
+          + " inspection covers; raise the repair from an inspection that covers it");
     }
     if (panel != null && !plane.grid().contains(panel)) {
       throw new UserInputException("panel " + panel + " lies outside plane '" + plane.name() + "'");

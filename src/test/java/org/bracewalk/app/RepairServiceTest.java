@@ -50,4 +50,31 @@ class RepairServiceTest {
       assertThat(repairs.orders(found.id())).containsExactly(order);
     }
   }
+
+  @Test
+  void anActionOnAPlaneTheInspectionDoesNotCoverIsRefused() {
+    try (Database db = Database.open(dir.resolve("scope.db"))) {
+      Fixtures.Services s = Fixtures.Services.over(db);
+      RepairService repairs = new RepairService(db, s.clock());
+      PlaneRecord spine = Fixtures.plane(s);
+      Inspection found = s.inspections().start(spine.structureId(),
+          NewInspection.of("M. Okafor", "", InspectionReason.ROUTINE));
+      // a plane added after the inspection started is not part of it (its scope is fixed)
+      PlaneRecord later = s.sites().createPlane(
+          new PlaneRecord(0, spine.structureId(), "west return", spine.grid()),
+          "D. Fenwick", LocalDate.of(2025, 3, 9), "", org.bracewalk.core.model.PlaneDesign.of(
+              spine.grid(), java.util.Map.of()));
+      RepairOrder order = repairs.raise(found.id(), "M. Okafor", "walk-round");
+      assertThatThrownBy(() -> repairs.addAction(order.id(), later.id(), PanelRef.of(1, 1),
+              RepairActionKind.BRACE, Brace.rigid(Diagonal.RISING), "", null, ""))
+          .isInstanceOf(UserInputException.class)
+          .hasMessageContaining("plane 'west return' (id " + later.id() + ") is not part of"
+              + " inspection " + found.id());
+      assertThat(repairs.actions(order.id())).isEmpty();
+      // a plane it covers takes the action
+      assertThat(repairs.addAction(order.id(), spine.id(), PanelRef.of(1, 1),
+          RepairActionKind.BRACE, Brace.rigid(Diagonal.RISING), "", null, "").planeId())
+          .isEqualTo(spine.id());
+    }
+  }
 }
