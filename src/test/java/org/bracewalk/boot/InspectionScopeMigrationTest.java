@@ -12,6 +12,7 @@ import java.time.Instant;
 import java.time.ZoneOffset;
 import java.util.List;
 import java.util.Map;
+import org.bracewalk.store.OlderFiles;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.report.ReportService;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
@@ -23,7 +24,6 @@ import org.bracewalk.report.TemplateSource;
 import org.bracewalk.store.Database;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.sqlite.SQLiteDataSource;
 
 /**
  * Migration V7 gives the inspections of a file made before it the scope they had: the planes that
@@ -87,14 +87,7 @@ class InspectionScopeMigrationTest {
   /** A file at migration V6 holding the statements' records. */
   private Path v6File(String name, String[]... parts) throws Exception {
     Path file = dir.resolve(name);
-    SQLiteDataSource source = new SQLiteDataSource();
-    source.setUrl("jdbc:sqlite:" + file);
-    org.flywaydb.core.Flyway.configure(Database.class.getClassLoader())
-        .dataSource(source)
-        .locations("classpath:db/migration")
-        .target("6")
-        .load()
-        .migrate();
+    OlderFiles.migratedTo(file, "6");
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
         Statement st = c.createStatement()) {
       for (String[] part : parts) {

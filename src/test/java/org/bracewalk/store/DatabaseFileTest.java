@@ -125,11 +125,7 @@ class DatabaseFileTest {
   void aBracewalkFileFromBeforeTheMarkIsOpenedAndThenMarked() throws Exception {
     Path file = dir.resolve("older.db");
     // as an older Bracewalk made it: migrated by Flyway, application id 0
-    org.flywaydb.core.Flyway.configure(Database.class.getClassLoader())
-        .dataSource(Database.dataSource(file))
-        .locations("classpath:db/migration")
-        .load()
-        .migrate();
+    OlderFiles.migratedTo(file, "latest");
     assertThat(DatabaseFile.applicationId(header(file))).isZero();
     assertThat(DatabaseFile.inspect(file)).isEqualTo(DatabaseFile.Kind.UNMARKED_BRACEWALK);
     try (Database db = Database.open(file)) {

@@ -89,12 +89,7 @@ class DatabaseTest {
   void openingAFileAtTheCurrentSchemaSkipsFlywayAndAnOlderFileIsMigrated() throws Exception {
     Path file = dir.resolve("old.db");
     // a file made by a program that knew only the first script
-    org.flywaydb.core.Flyway.configure(Database.class.getClassLoader())
-        .dataSource(Database.dataSource(file))
-        .locations("classpath:db/migration")
-        .target("1")
-        .load()
-        .migrate();
+    OlderFiles.migratedTo(file, "1");
     assertThat(Database.schemaIsCurrent(Database.dataSource(file))).isFalse();
     try (Database db = Database.open(file)) {
       assertThat(db.integrityCheck()).isEqualTo("ok");

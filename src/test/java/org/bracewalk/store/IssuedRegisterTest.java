@@ -133,12 +133,7 @@ class IssuedRegisterTest {
   void aRowRegisteredBeforeTheRegisterIsKeptAsSuch() throws Exception {
     Path file = dir.resolve("old.db");
     // a file made by a program that knew only the first two scripts, with one issued report
-    org.flywaydb.core.Flyway.configure(Database.class.getClassLoader())
-        .dataSource(Database.dataSource(file))
-        .locations("classpath:db/migration")
-        .target("2")
-        .load()
-        .migrate();
+    OlderFiles.migratedTo(file, "2");
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
         Statement st = c.createStatement()) {
       st.executeUpdate("INSERT INTO sites (id, name, time_zone, display_units)"

@@ -26,12 +26,7 @@ class MigrationToLiteralTriggersTest {
   @Test
   void aV2FileKeepsItsFinalisedInspectionsIntervalAndItsDesignsPanelsAreSealed() throws Exception {
     Path file = dir.resolve("v2.db");
-    org.flywaydb.core.Flyway.configure(Database.class.getClassLoader())
-        .dataSource(Database.dataSource(file))
-        .locations("classpath:db/migration")
-        .target("2")
-        .load()
-        .migrate();
+    OlderFiles.migratedTo(file, "2");
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
         Statement st = c.createStatement()) {
       st.executeUpdate("INSERT INTO sites (id, name, time_zone, display_units)"
