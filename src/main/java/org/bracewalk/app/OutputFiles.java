@@ -107,11 +107,12 @@ public final class OutputFiles {
   /**
    * Checks that every one of {@code targets} may be written, and that no two are the same file,
    * before anything is made: a command that writes two files checks both first, so a refusal
-   * leaves neither written.
+   * leaves neither written. A null target (an optional output not asked for) is passed over.
    *
    * @throws UserInputException naming the path and what it is
    */
   public void check(Path... targets) {
+    targets = Arrays.stream(targets).filter(Objects::nonNull).toArray(Path[]::new);
     List<Path> reals = new ArrayList<>();
     for (Path t : targets) {
       reals.add(resolve(t));

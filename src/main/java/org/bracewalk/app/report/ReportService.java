@@ -185,6 +185,11 @@ public final class ReportService {
    */
   public IssuedReport issueReport(ReportContent content, Path out, OutputFiles outputs) {
     outputs.check(out);
+    return writeReport(content, out, outputs);
+  }
+
+  /** Draws, signs, registers and writes the report; the target is checked already. */
+  private IssuedReport writeReport(ReportContent content, Path out, OutputFiles outputs) {
     byte[] pdf = reportPdf(content);
     long id = Long.parseLong(content.header().inspectionId());
     String records = content.fingerprint().sha256();
@@ -206,11 +211,13 @@ public final class ReportService {
   /** {@link #issueRepairOrder(RepairOrderContent, Path, Path)} written through {@code outputs}. */
   public List<IssuedReport> issueRepairOrder(RepairOrderContent order, Path pdfOut, Path csvOut,
       OutputFiles outputs) {
-    if (csvOut == null) {
-      outputs.check(pdfOut);
-    } else {
-      outputs.check(pdfOut, csvOut);
-    }
+    outputs.check(pdfOut, csvOut);
+    return writeRepairOrder(order, pdfOut, csvOut, outputs);
+  }
+
+  /** Draws, signs, registers and writes the repair order; the targets are checked already. */
+  private List<IssuedReport> writeRepairOrder(RepairOrderContent order, Path pdfOut, Path csvOut,
+      OutputFiles outputs) {
     byte[] pdf = repairOrderPdf(order);
     long id = Long.parseLong(order.header().inspectionId());
     String records = order.fingerprint().sha256();
@@ -242,7 +249,7 @@ public final class ReportService {
     progress.at(0.1, "reading the inspection's records");
     ReportContent content = reportContent(inspectionId);
     progress.at(0.4, "drawing the report" + (signs() ? " and signing it" : ""));
-    IssuedReport row = issueReport(content, out, outputs);
+    IssuedReport row = writeReport(content, out, outputs);
     return new Issued.Report(row, inspectionId, content.header().draft(), content.planes().size(),
         content.findings().size(), content.actions().size(), planeLines(content),
         content.fingerprint().sha256(), signs());
@@ -254,15 +261,11 @@ public final class ReportService {
    */
   public Issued.RepairOrder issueRepairOrder(long inspectionId, Path pdfOut, Path csvOut,
       OutputFiles outputs, Issued.Progress progress) {
-    if (csvOut == null) {
-      outputs.check(pdfOut);
-    } else {
-      outputs.check(pdfOut, csvOut);
-    }
+    outputs.check(pdfOut, csvOut);
     progress.at(0.1, "reading the inspection's records");
     RepairOrderContent order = repairOrderContent(inspectionId);
     progress.at(0.4, "drawing the repair order" + (signs() ? " and signing it" : ""));
-    List<IssuedReport> rows = issueRepairOrder(order, pdfOut, csvOut, outputs);
+    List<IssuedReport> rows = writeRepairOrder(order, pdfOut, csvOut, outputs);
     return new Issued.RepairOrder(rows, order.actions().size(), signs());
   }
 
