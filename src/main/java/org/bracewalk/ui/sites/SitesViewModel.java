@@ -176,14 +176,13 @@ public final class SitesViewModel {
         VerdictKind worst = null;
         Map<Long, PlaneRetirement> retired = new HashMap<>();
         sites.retirements(st.id()).forEach(x -> retired.put(x.planeId(), x));
-        Set<Long> inLatest = new HashSet<>();
-        latest.ifPresent(i -> inspections.planesOf(i.id()).forEach(p -> inLatest.add(p.id())));
         Map<Long, Set<Long>> covered = new HashMap<>();
         for (Inspection i : insp) {
           Set<Long> ids = new HashSet<>();
           inspections.planesOf(i.id()).forEach(p -> ids.add(p.id()));
           covered.put(i.id(), ids);
         }
+        Set<Long> inLatest = latest.map(i -> covered.get(i.id())).orElse(Set.of());
         List<Inspection> newestFirst =
             insp.stream().sorted(Comparator.comparing(Inspection::startedAt).reversed()).toList();
         for (PlaneRecord plane : sites.planes(st.id())) {
