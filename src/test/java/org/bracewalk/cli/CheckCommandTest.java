@@ -102,6 +102,10 @@ class CheckCommandTest {
     assertThat(r.out()).isEqualTo(expected);
   }
 
+  /**
+   * Common practice (racking, no published source checked): the beams of the bays on both sides of
+   * an upright frame load it, so those bays are offloaded with it.
+   */
   @Test
   void theRoleOfAnUprightFrameAddsTheBeamBaysBesideItToTheKeepOffZone() throws IOException {
     Run frame = run("check", design.toString(), asBuilt.toString(), "--format", "json", "--role", "upright-frame");

@@ -21,7 +21,8 @@ import org.junit.jupiter.api.Test;
  * lift above it, all bays; the whole plane where nothing is held or it leans one way only). Facts
  * from shared/design/analysis.md: on a pinned base a plane is rigid iff every lift has an
  * effective diagonal, a lift above a swaying lift is carried sideways with it, and tension-only
- * members in one way only let the plane lean that way.
+ * members in one way only let the plane lean that way. That an upright frame's keep-off zone takes
+ * in the beam bays beside it is common practice for racking (no published source checked).
  */
 class VerdictTest {
   private final PlaneAnalyzer engine = PlaneAnalyzer.standard();
