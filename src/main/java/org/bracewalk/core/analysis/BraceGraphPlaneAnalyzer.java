@@ -28,6 +28,20 @@ final class BraceGraphPlaneAnalyzer implements PlaneAnalyzer {
   }
 
   @Override
+  public StateAnalysis analyseState(BuiltFrame state) {
+    if (!state.frameComplete()) {
+      throw new UnsupportedOperationException(
+          "frame members missing: the exact framework analysis is not wired in yet");
+    }
+    return analyseState(state.grid(), state.braces());
+  }
+
+  @Override
+  public Optional<JointMotion> motion(BuiltFrame state, Freedom freedom) {
+    throw new UnsupportedOperationException("joint motions are not wired in yet");
+  }
+
+  @Override
   public PlaneAnalysis analyse(PlaneDesign design) {
     PlaneGrid grid = design.grid();
     byte[] codes = PanelCodes.encode(grid, design.braces());

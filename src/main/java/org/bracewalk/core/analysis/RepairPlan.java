@@ -10,16 +10,31 @@ import java.util.List;
  * @param braces the minimal set: with rigid members only, the least number (equal to the degrees
  *     of freedom), design panels used before others, openings never; with tension-only members an
  *     irreducible set
- * @param restoreToDesign every design member missing from the as-built state
+ * @param restoreToDesign every design diagonal missing from the as-built state
+ * @param members frame members in the least set (design members to refit), ledgers first
+ * @param restoreFrame every design frame member missing, ineffective or not inspected as built
  */
-public record RepairPlan(boolean possible, List<RepairBrace> braces, List<RestoreItem> restoreToDesign) {
+public record RepairPlan(
+    boolean possible,
+    List<RepairBrace> braces,
+    List<RestoreItem> restoreToDesign,
+    List<RepairMember> members,
+    List<RestoreFrameItem> restoreFrame) {
+
+  /** A repair of diagonals only (the frame complete as built). */
+  public RepairPlan(boolean possible, List<RepairBrace> braces, List<RestoreItem> restoreToDesign) {
+    this(possible, braces, restoreToDesign, List.of(), List.of());
+  }
 
   public RepairPlan {
     braces = List.copyOf(braces);
     restoreToDesign = List.copyOf(restoreToDesign);
+    members = List.copyOf(members);
+    restoreFrame = List.copyOf(restoreFrame);
   }
 
+  /** Diagonals and frame members in the least set together. */
   public int minimum() {
-    return braces.size();
+    return braces.size() + members.size();
   }
 }

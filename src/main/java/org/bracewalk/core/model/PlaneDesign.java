@@ -7,15 +7,27 @@ import java.util.TreeMap;
 import java.util.TreeSet;
 
 /**
- * A plane as designed: its grid, the brace of each braced panel, and the openings (doorways,
- * access, loading gaps) where no diagonal may ever be placed.
+ * A plane as designed: its grid, the brace of each braced panel, the openings (doorways, access,
+ * loading gaps) where no diagonal may ever be placed, and the frame members the design leaves out
+ * (say a ledger left out for access; never proposed in a repair). Every other ledger and standard
+ * of the grid is in the design.
  */
-public record PlaneDesign(PlaneGrid grid, Map<PanelRef, Brace> braces, Set<PanelRef> openings) {
+public record PlaneDesign(
+    PlaneGrid grid, Map<PanelRef, Brace> braces, Set<PanelRef> openings, Set<FrameRef> omittedFrame) {
+
+  /** A design with every frame member. */
+  public PlaneDesign(PlaneGrid grid, Map<PanelRef, Brace> braces, Set<PanelRef> openings) {
+    this(grid, braces, openings, Set.of());
+  }
 
   public PlaneDesign {
     Objects.requireNonNull(grid, "grid");
     braces = Map.copyOf(braces);
     openings = Set.copyOf(openings);
+    omittedFrame = Set.copyOf(omittedFrame);
+    for (FrameRef f : omittedFrame) {
+      f.requireWithin(grid);
+    }
     for (PanelRef p : braces.keySet()) {
       grid.requireContains(p);
       if (openings.contains(p)) {
@@ -48,8 +60,28 @@ public record PlaneDesign(PlaneGrid grid, Map<PanelRef, Brace> braces, Set<Panel
     return new TreeSet<>(openings);
   }
 
+  /** Whether the design has this frame member (it leaves out only those in {@link #omittedFrame}). */
+  public boolean hasFrameMember(FrameRef member) {
+    return !omittedFrame.contains(member);
+  }
+
+  /** Whether every ledger and standard of the grid is in the design. */
+  public boolean frameComplete() {
+    return omittedFrame.isEmpty();
+  }
+
+  /** Frame members left out, in output order (ledgers first). */
+  public TreeSet<FrameRef> sortedOmittedFrame() {
+    return new TreeSet<>(omittedFrame);
+  }
+
   public PlaneDesign withGrid(PlaneGrid newGrid) {
-    return new PlaneDesign(newGrid, braces, openings);
+    return new PlaneDesign(newGrid, braces, openings, omittedFrame);
+  }
+
+  /** The same design with these frame members left out (and every other one in). */
+  public PlaneDesign withOmittedFrame(Set<FrameRef> omitted) {
+    return new PlaneDesign(grid, braces, openings, omitted);
   }
 
   /** The same design with the brace at {@code p} replaced ({@code null} removes it). */
@@ -60,6 +92,6 @@ public record PlaneDesign(PlaneGrid grid, Map<PanelRef, Brace> braces, Set<Panel
     } else {
       copy.put(p, brace);
     }
-    return new PlaneDesign(grid, copy, openings);
+    return new PlaneDesign(grid, copy, openings, omittedFrame);
   }
 }

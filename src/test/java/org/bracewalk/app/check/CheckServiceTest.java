@@ -32,6 +32,18 @@ class CheckServiceTest {
     }
 
     @Override
+    public StateAnalysis analyseState(org.bracewalk.core.analysis.BuiltFrame state) {
+      calls.incrementAndGet();
+      return engine.analyseState(state);
+    }
+
+    @Override
+    public Optional<org.bracewalk.core.analysis.JointMotion> motion(
+        org.bracewalk.core.analysis.BuiltFrame state, org.bracewalk.core.analysis.Freedom freedom) {
+      return engine.motion(state, freedom);
+    }
+
+    @Override
     public PlaneAnalysis analyse(PlaneDesign design) {
       calls.incrementAndGet();
       return engine.analyse(design);
