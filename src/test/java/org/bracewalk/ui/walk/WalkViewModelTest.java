@@ -359,6 +359,22 @@ class WalkViewModelTest {
   }
 
   @Test
+  void thePhotoFilesAreCheckedWhereTheMarkIsWrittenNotAtTheKeyPress(@org.junit.jupiter.api.io.TempDir Path dir)
+      throws Exception {
+    HeldTasks queue = new HeldTasks();
+    WalkViewModel vm = new WalkViewModel(design, "Test plane", List.of(), recorder, PlaneAnalyzer.standard(), dialogs,
+        false, false, java.time.Clock.systemUTC(), Runnable::run, queue);
+    Path gone = dir.resolve("gone.jpg"); // never there: a check at the key press would refuse the mark
+    dialogs.photoAnswers.push(List.of(gone));
+    vm.addPhotos();
+    assertThat(vm.mark(PanelState.DAMAGED_EFFECTIVE)).isTrue();
+    assertThat(vm.errorProperty().get()).isEmpty();
+    queue.runAll();
+    assertThat(recorder.rows).isEmpty();
+    assertThat(vm.errorProperty().get()).contains("lift 1, bay 1").contains("gone.jpg").contains("no longer there");
+  }
+
+  @Test
   void theCameraFolderIsReadOnTheWriteQueueNotOnTheCallersTurn(@org.junit.jupiter.api.io.TempDir Path dir)
       throws Exception {
     Path camera = java.nio.file.Files.createDirectories(dir.resolve("DCIM"));
