@@ -2,8 +2,12 @@ package org.bracewalk.ui.walk;
 
 import java.nio.file.Path;
 import java.time.Clock;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.Executor;
+import java.util.function.LongFunction;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
@@ -39,9 +43,17 @@ import org.bracewalk.ui.common.VerdictWords;
  * The walk-round of one plane, for the view: a thin composition of pieces with one job each — the
  * cursor and walk order ({@link WalkCursor}), the marks so far ({@link MarkedPanels}), the detail
  * fields ({@link MarkDetails}), the photos and camera folder ({@link PhotoAttachment}), the live
- * verdict and banner ({@link LiveVerdict}) and undo ({@link UndoSteps}). One command records a state
- * for the current panel, commits it through the {@link MarkRecorder}, re-analyses the plane and
- * moves on. Undo records a correction (the earlier state, or "not inspected"), never a deletion.
+ * verdict and banner ({@link LiveVerdict}), undo ({@link UndoSteps}) and the writes ({@link
+ * MarkWrites}). One command records a state for the current panel and moves on. Undo records a
+ * correction (the earlier state, or "not inspected"), never a deletion.
+ *
+ * <p>Recording: the screen shows a mark at once (the picture, the cursor, the status) and queues
+ * its write on the ordered write queue, off the JavaFX thread; there the photo files are checked
+ * and the mark is committed through the {@link MarkRecorder}, each correction naming the record
+ * before it. The live verdict, the banner and the progress follow what is stored: they are drawn
+ * again when the record confirms a write. A write that fails takes the panel back to what the
+ * record holds and says so in {@link #errorProperty()}, naming the panel and the mark, until that
+ * panel is marked again and stored (no window is opened: the walk goes on).
  * When the marks prove the plane has lost rigidity, {@link #alarmProperty()} says so in words that
  * name the lifts and bays to keep people and loads off.
  *
@@ -56,11 +68,22 @@ public final class WalkViewModel {
 
   private final PlaneDesign design;
   private final String title;
-  private final MarkRecorder recorder;
   private final PlaneAnalyzer analyzer;
-  private final DialogService dialogs;
 
+  /** The marks as shown: each at once, at the key press. */
   private final MarkedPanels marks;
+  /** The marks as stored: as the record confirms them; the live verdict is drawn from these. */
+  private final MarkedPanels stored;
+  private final MarkWrites writes;
+  /** Writes queued and not yet answered, by panel. */
+  private final Map<PanelRef, Integer> pending = new HashMap<>();
+  /** What the status says once a write is stored, by ticket (given the record id). */
+  private final Map<Long, LongFunction<String>> saidWhenStored = new HashMap<>();
+  /** The undo steps whose correction is queued, by ticket (put back if it fails). */
+  private final Map<Long, UndoSteps.Step> undoing = new HashMap<>();
+  /** The marks that did not reach the record, by panel, until the panel is stored again. */
+  private final Map<PanelRef, String> unsaved = new LinkedHashMap<>();
+  private long newestTicket;
   private final WalkCursor cursor;
   private final MarkDetails details;
   private final PhotoAttachment photos;
@@ -84,6 +107,10 @@ public final class WalkViewModel {
    * @param racking true for storage racking (bow hints use the EN 15635 limits)
    * @param readOnly true when the inspection is finalised
    * @param clock when a mark is made (the camera folder's photos count from the previous mark)
+   * @param ui runs on the JavaFX thread ({@code FxExecutor}; tests: {@code Runnable::run})
+   * @param writes where the marks are written and the photo files and camera folder read, never
+   *     the JavaFX thread (the app: its background thread); its tasks are run one at a time, in
+   *     the order queued
    */
   public WalkViewModel(
       PlaneDesign design,
@@ -94,8 +121,10 @@ public final class WalkViewModel {
       DialogService dialogs,
       boolean racking,
       boolean readOnly,
-      Clock clock) {
-    this(design, title, PlaneRole.OTHER, existing, recorder, analyzer, dialogs, racking, readOnly, clock);
+      Clock clock,
+      Executor ui,
+      Executor writes) {
+    this(design, title, PlaneRole.OTHER, existing, recorder, analyzer, dialogs, racking, readOnly, clock, ui, writes);
   }
 
   /** As above, for a plane of the given role (its keep-off zone depends on it). */
@@ -109,17 +138,20 @@ public final class WalkViewModel {
       DialogService dialogs,
       boolean racking,
       boolean readOnly,
-      Clock clock) {
+      Clock clock,
+      Executor ui,
+      Executor writes) {
     this.design = Objects.requireNonNull(design, "design");
     this.title = title;
-    this.recorder = Objects.requireNonNull(recorder, "recorder");
     this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
-    this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
+    Objects.requireNonNull(dialogs, "dialogs");
     this.readOnly.set(readOnly);
     this.marks = new MarkedPanels(design, existing);
+    this.stored = new MarkedPanels(design, existing);
+    this.writes = new MarkWrites(existing, recorder, ui, writes, new Outcome());
     this.cursor = new WalkCursor(design.grid(), marks::isMarked);
     this.details = new MarkDetails(design, racking);
-    this.photos = new PhotoAttachment(dialogs, clock);
+    this.photos = new PhotoAttachment(dialogs, clock, ui, this.writes::onQueue);
     this.live = new LiveVerdict(design, title, Objects.requireNonNull(role, "role"), analyzer);
     cursor.cursorProperty().addListener((obs, a, b) -> {
       if (!quietCursor) {
@@ -131,7 +163,11 @@ public final class WalkViewModel {
 
   // ---- commands -------------------------------------------------------------------------------
 
-  /** Records {@code state} for the current panel with the details entered, then moves on. */
+  /**
+   * Shows {@code state} for the current panel with the details entered, queues its write, and moves
+   * on. True when the mark was taken (its write is queued; a failure comes back in {@link
+   * #errorProperty()}); false when it was refused here (read-only, a bad field), saying why.
+   */
   public boolean mark(PanelState state) {
     if (state == PanelState.NOT_INSPECTED) {
       throw new IllegalArgumentException("a mark records what was found; use undo to withdraw one");
@@ -141,13 +177,6 @@ public final class WalkViewModel {
       return false;
     }
     PanelRef p = cursor.get();
-    List<String> bad = photos.dropUnusable();
-    if (!bad.isEmpty()) {
-      error.set("Not recorded: taken off the mark: " + String.join("; ", bad)
-          + ". Press the key again to record without " + (bad.size() == 1 ? "it" : "them")
-          + ", or attach another (F, G).");
-      return false;
-    }
     Mark m;
     try {
       m = details.build(state, p, photos.photos());
@@ -156,28 +185,25 @@ public final class WalkViewModel {
       return false;
     }
     RecordedMark before = marks.latest(p);
-    RecordedMark made;
-    try {
-      made = before == null ? recorder.record(p, m) : recorder.correct(before, m, REMARK_REASON);
-    } catch (RuntimeException e) {
-      error.set("Not recorded: " + p + " could not be saved (" + e.getMessage()
-          + "). Nothing was changed; try the mark again.");
-      dialogs.showError("Mark not saved", error.get());
-      return false;
-    }
-    error.set("");
-    marks.put(p, made, m);
-    undo.made(new UndoSteps.Step(p, before, made));
+    long ticket = writes.ticket();
+    newestTicket = ticket;
+    marks.put(p, new RecordedMark(0, p, m), m);
+    pending.merge(p, 1, Integer::sum);
+    undo.made(new UndoSteps.Step(p, before == null ? null : before.mark(), m, ticket));
     details.clear();
     photos.markMade();
-    status.set("Saved " + p + ": " + describe(m) + " (record " + made.id() + ")");
+    error.set(unsavedWords());
+    String after;
     quietCursor = true;
     try {
-      advance();
+      after = advance();
     } finally {
       quietCursor = false;
     }
-    reanalyse();
+    status.set("Marked " + p + ": " + describe(m) + after);
+    saidWhenStored.put(ticket, id -> "Saved " + p + ": " + describe(m) + " (record " + id + ")" + after);
+    refreshPicture();
+    writes.mark(ticket, p, m, REMARK_REASON);
     return true;
   }
 
@@ -193,28 +219,97 @@ public final class WalkViewModel {
       return false;
     }
     UndoSteps.Step step = newest.get();
-    RecordedMark current = marks.latest(step.panel());
-    Mark back = step.before() == null ? Mark.of(PanelState.NOT_INSPECTED) : step.before().mark();
-    RecordedMark made;
-    try {
-      made = recorder.correct(current, back, UNDO_REASON);
-    } catch (RuntimeException e) {
-      error.set("Undo not recorded for " + step.panel() + " (" + e.getMessage() + "). Nothing was changed.");
-      dialogs.showError("Undo not saved", error.get());
-      return false;
-    }
+    PanelRef p = step.panel();
+    Mark back = step.before() == null ? Mark.of(PanelState.NOT_INSPECTED) : step.before();
+    long ticket = writes.ticket();
+    newestTicket = ticket;
     undo.undone();
-    marks.put(step.panel(), made, back);
-    error.set("");
-    status.set("Undone " + step.panel() + ": now " + describe(back) + " (correction record " + made.id() + ")");
+    undoing.put(ticket, step);
+    marks.put(p, new RecordedMark(0, p, back), back);
+    pending.merge(p, 1, Integer::sum);
+    error.set(unsavedWords());
+    status.set("Undone " + p + ": now " + describe(back));
+    saidWhenStored.put(ticket, id -> "Undone " + p + ": now " + describe(back) + " (correction record " + id + ")");
     quietCursor = true;
     try {
-      cursor.set(step.panel());
+      cursor.set(p);
     } finally {
       quietCursor = false;
     }
-    reanalyse();
+    refreshPicture();
+    writes.undo(ticket, step.ticket(), p, back, UNDO_REASON);
     return true;
+  }
+
+  /** What the write queue says, on the UI thread. */
+  private final class Outcome implements MarkWrites.Outcome {
+    @Override
+    public void stored(long ticket, RecordedMark made) {
+      PanelRef p = made.panel();
+      stored.put(p, made, made.mark());
+      if (answered(p)) {
+        marks.put(p, made, made.mark());
+      }
+      undoing.remove(ticket);
+      unsaved.remove(p);
+      error.set(unsavedWords());
+      LongFunction<String> said = saidWhenStored.remove(ticket);
+      if (said != null && ticket == newestTicket) {
+        status.set(said.apply(made.id()));
+      }
+      reanalyse();
+    }
+
+    @Override
+    public void refused(long ticket, PanelRef p, Mark mark, String why) {
+      saidWhenStored.remove(ticket);
+      UndoSteps.Step undone = undoing.remove(ticket);
+      if (undone != null) {
+        undo.made(undone); // the mark stands in the record: it can still be undone
+      } else {
+        undo.forget(ticket);
+      }
+      if (answered(p)) {
+        marks.reset(p, stored.latest(p));
+      }
+      RecordedMark holds = stored.latest(p);
+      unsaved.put(p, "Not recorded: " + (undone != null ? "the undo of " : "") + p + " " + describe(mark)
+          + " (" + why + "). The panel shows what the record holds"
+          + (holds == null || holds.mark().state() == PanelState.NOT_INSPECTED ? " (no mark)" : " (" + describe(holds.mark()) + ")")
+          + ": mark it again.");
+      error.set(unsavedWords());
+      reanalyse();
+    }
+
+    @Override
+    public void passedOver(long ticket, PanelRef p) {
+      saidWhenStored.remove(ticket);
+      undoing.remove(ticket);
+      if (answered(p)) {
+        marks.reset(p, stored.latest(p));
+      }
+      reanalyse();
+    }
+
+    /** One write on {@code p} answered: true when none is left waiting (the screen may take the record's). */
+    private boolean answered(PanelRef p) {
+      int left = pending.merge(p, -1, Integer::sum);
+      if (left <= 0) {
+        pending.remove(p);
+        return true;
+      }
+      return false;
+    }
+  }
+
+  /** The marks not recorded, each naming its panel; empty when every write so far is stored. */
+  private String unsavedWords() {
+    return String.join(" ", unsaved.values());
+  }
+
+  /** True while some mark or undo is queued and not yet answered by the record. */
+  public boolean writing() {
+    return !pending.isEmpty();
   }
 
   /** Moves the cursor to the next panel in the walk order (stays on the last). */
@@ -262,13 +357,14 @@ public final class WalkViewModel {
    * since the walk-round opened); asks for the folder the first time, or when {@code choose}.
    */
   public void addCameraPhotos(boolean choose) {
-    PhotoAttachment.Said said = photos.addCameraPhotos(choose);
-    if (said.error() != null) {
-      error.set(said.error());
-    }
-    if (said.status() != null) {
-      status.set(said.status());
-    }
+    photos.addCameraPhotos(choose, said -> {
+      if (said.error() != null) {
+        error.set(said.error());
+      }
+      if (said.status() != null) {
+        status.set(said.status());
+      }
+    });
   }
 
   /** Takes the photos waiting for the next mark off it again (none is deleted from its folder). */
@@ -291,34 +387,36 @@ public final class WalkViewModel {
 
   // ---- state ----------------------------------------------------------------------------------
 
-  private void advance() {
+  /** Moves on in the walk order; at its end, what the status adds (else empty). */
+  private String advance() {
     if (cursor.next()) {
-      return;
+      return "";
     }
     // counted from the marks as they are now, this one included
     if (allMarked()) {
-      status.set(status.get() + ". Every panel is marked: see Findings (Ctrl+4).");
-    } else {
-      status.set(status.get() + ". End of the walk order; press Home for the first panel not yet marked.");
+      return ". Every panel is marked: see Findings (Ctrl+4).";
     }
+    return ". End of the walk order; press Home for the first panel not yet marked.";
   }
 
+  /** Counted from the marks as shown (this one included). */
   private boolean allMarked() {
     return marks.findingMap().size() == design.grid().panelCount();
   }
 
-  /** The finding of each panel with a mark (withdrawn marks excluded). */
+  /** The finding of each panel with a stored mark (withdrawn marks excluded): what the record holds. */
   public Map<PanelRef, PanelFinding> findings() {
-    return Map.copyOf(marks.findingMap());
+    return Map.copyOf(stored.findingMap());
   }
 
-  /** The effective members as the conservative verdict counts them (for tests). */
+  /** The effective members as the conservative verdict counts them, from the stored marks (for tests). */
   Map<PanelRef, Brace> conservativeMembers() {
-    return Map.copyOf(marks.conservativeMembers());
+    return Map.copyOf(stored.conservativeMembers());
   }
 
+  /** The live verdict drawn again from the stored marks, and the picture. */
   private void reanalyse() {
-    live.update(marks);
+    live.update(stored);
     refreshPicture();
   }
 
