@@ -111,7 +111,7 @@ class FrameOracleSelfCheckTest {
     // space) uses: two routes through the same matroid must agree
     Random rnd = new Random(0xF0AC_0004L);
     int coloops = 0;
-    for (int k = 0; k < 60; k++) {
+    for (int k = 0; k < 40; k++) {
       BuiltFrame state = FramePlanes.state(rnd, 5, k % 2 == 0 ? Support.FREE : Support.PINNED_BASE, 0);
       FrameOracle o = FrameOracle.of(state);
       List<FrameOracle.Bar> byRemoval = o.coloops();
@@ -119,7 +119,7 @@ class FrameOracleSelfCheckTest {
           .containsExactlyElementsOf(byRemoval);
       coloops += byRemoval.size();
     }
-    assertThat(coloops).isGreaterThan(100);
+    assertThat(coloops).isGreaterThan(60);
   }
 
   @Test

@@ -284,7 +284,7 @@ class FrameRepairCrossCheckTest {
         continue;
       }
       List<Candidate> cands = candidates(c, built);
-      if (binomial(cands.size(), dof) > 3000) {
+      if (binomial(cands.size(), dof) > 1500) {
         continue;
       }
       Least greedy = least(c);
