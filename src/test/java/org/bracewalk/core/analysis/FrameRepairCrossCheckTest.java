@@ -195,7 +195,7 @@ class FrameRepairCrossCheckTest {
       }
       assertRestoreFrame(c, repair, plane);
       repaired += dof > 0 ? 1 : 0;
-      withFrame += repair.members().isEmpty() ? 0 : 1;
+      withFrame += repair.restoreFrame().isEmpty() ? 0 : 1;
       withOutside += least.outside() > 0 ? 1 : 0;
     }
     assertThat(skipped).isLessThan(60);

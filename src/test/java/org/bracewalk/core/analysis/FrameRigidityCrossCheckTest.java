@@ -33,7 +33,7 @@ class FrameRigidityCrossCheckTest {
     int withCrosses = 0;
     int withCables = 0;
     int pinnedMoving = 0;
-    for (int k = 0; k < 600; k++) {
+    for (int k = 0; k < 520; k++) {
       BuiltFrame state = FramePlanes.state(rnd, 8, support(k), 0.2);
       FrameEngineChecks.assertVerdictMatches(engine, state);
       FrameOracle o = FrameOracle.of(state);
@@ -44,9 +44,9 @@ class FrameRigidityCrossCheckTest {
       pinnedMoving += o.pinned() && !o.movingJoints().isEmpty() ? 1 : 0;
     }
     // the sample must hold both verdicts, complete and damaged frames, crosses and cables
-    assertThat(mechanisms).isBetween(150, 570);
-    assertThat(complete).isBetween(40, 120);
-    assertThat(withCrosses).isGreaterThan(300);
+    assertThat(mechanisms).isBetween(150, 500);
+    assertThat(complete).isBetween(40, 200);
+    assertThat(withCrosses).isGreaterThan(250);
     assertThat(withCables).isGreaterThan(200);
     assertThat(pinnedMoving).isGreaterThan(100);
   }
@@ -112,7 +112,7 @@ class FrameRigidityCrossCheckTest {
             .isEmpty();
       }
     }
-    assertThat(motions).isGreaterThan(150);
+    assertThat(motions).isGreaterThan(120);
   }
 
   @Test
