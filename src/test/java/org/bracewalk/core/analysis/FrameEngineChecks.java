@@ -154,12 +154,12 @@ final class FrameEngineChecks {
   }
 
   /**
-   * Critical members and braces by removal and rank: a member is critical iff removing it alone
-   * lowers the exact rank of the rigidity matrix (analysis.md, "Frame members": a coloop of the row
-   * matroid; equivalently it carries no self-stress). A member that alone holds a joint is one.
+   * Critical members and braces by removal and rank: a member is critical iff its loss alone adds
+   * a freedom (check-contract.md, "Frame members"), found by removing each member and taking the
+   * exact rank again. That is a coloop of the row matroid (analysis.md) that leaves no joint bare.
    */
   static void assertCriticalMatch(StateAnalysis a, BuiltFrame state) {
-    assertCriticalMatch(a, state, FrameOracle.of(state).coloops());
+    assertCriticalMatch(a, state, FrameOracle.of(state).criticalByRemoval());
   }
 
   /** The same with the critical bars given (say by the faster stress route). */

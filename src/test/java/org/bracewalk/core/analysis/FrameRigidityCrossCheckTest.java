@@ -70,16 +70,16 @@ class FrameRigidityCrossCheckTest {
   }
 
   @Test
-  void criticalMembersAndBracesAreTheColoopsOfTheRigidityMatrix() {
-    // coloops by the self-stress route (FrameOracle.coloopsByStresses), which
-    // FrameOracleSelfCheckTest ties to removal and rank; FrameCriticalMembersTest removes each
-    // member literally on smaller planes
+  void criticalMembersAndBracesAreThoseWhoseLossAddsAFreedomInTheRigidityMatrix() {
+    // by the self-stress route (FrameOracle.criticalByStresses), which FrameOracleSelfCheckTest
+    // ties to removal and rank; FrameCriticalMembersTest removes each member literally on smaller
+    // planes
     Random rnd = new Random(0xF7A3_0003L);
     int critical = 0;
     for (int k = 0; k < 500; k++) {
       BuiltFrame state = FramePlanes.state(rnd, 8, support(k), 0.2);
       StateAnalysis a = engine.analyseState(state);
-      List<FrameOracle.Bar> bars = FrameOracle.of(state).coloopsByStresses();
+      List<FrameOracle.Bar> bars = FrameOracle.of(state).criticalByStresses();
       FrameEngineChecks.assertCriticalMatch(a, state, bars);
       int members = (int) bars.stream().filter(b -> b.frame() != null).count();
       critical += members;
