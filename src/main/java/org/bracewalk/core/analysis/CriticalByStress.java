@@ -9,11 +9,11 @@ import org.bracewalk.core.model.PanelRef;
 
 /**
  * Critical frame members and critical braces of a {@link FrameFramework}: members whose loss alone
- * lowers the rank of the rigidity matrix (analysis.md, "Frame members"), i.e. those that carry no
- * self-stress ({@link RandomSelfStress}). A member holding a loose end is critical in this sense
- * (its loss frees nothing new, but the joint it held drops out with it). A diagonal of a cross is
- * critical iff either of its halves carries no self-stress (both carry the same force through the
- * crossing).
+ * adds a freedom (check-contract.md, "Frame members"). Removing a member lowers the rank of the rigidity matrix iff it carries no
+ * self-stress ({@link RandomSelfStress}); the freedoms then grow by one unless the removal also
+ * drops a joint from the framework (a joint held by that member alone, which takes its own
+ * freedoms with it), so such a member is not critical. A diagonal of a cross is critical iff
+ * either of its halves carries no self-stress (both carry the same force through the crossing).
  */
 final class CriticalByStress {
   record Critical(List<FrameRef> members, List<PanelRef> braces) {}
@@ -23,6 +23,13 @@ final class CriticalByStress {
   static Critical of(FrameFramework fw, long seed) {
     FaceClassSystem sys = new FaceClassSystem(fw, new int[0], new int[0]);
     boolean[] stressed = RandomSelfStress.stressed(sys, new SplittableRandom(seed));
+    int[] deg = new int[fw.jointCount];
+    for (int e = 0; e < fw.memberCount; e++) {
+      if (fw.present[e] && !fw.ground[e]) {
+        deg[fw.ja[e]]++;
+        deg[fw.jb[e]]++;
+      }
+    }
     List<FrameRef> members = new ArrayList<>();
     TreeSet<PanelRef> braces = new TreeSet<>();
     for (int e = 0; e < fw.memberCount; e++) {
@@ -34,12 +41,15 @@ final class CriticalByStress {
         if (e > t) {
           continue;
         }
-        if (!stressed[e] || !stressed[t]) {
+        // the diagonal's ends are the grid corners of its two halves
+        int a = fw.isGridJoint(fw.ja[e]) ? fw.ja[e] : fw.jb[e];
+        int b = fw.isGridJoint(fw.ja[t]) ? fw.ja[t] : fw.jb[t];
+        if ((!stressed[e] || !stressed[t]) && !isolated(fw, deg, a) && !isolated(fw, deg, b)) {
           braces.add(fw.panelRef(fw.panel[e]));
         }
         continue;
       }
-      if (stressed[e]) {
+      if (stressed[e] || isolated(fw, deg, fw.ja[e]) || isolated(fw, deg, fw.jb[e])) {
         continue;
       }
       if (fw.isFrame(e)) {
@@ -50,5 +60,9 @@ final class CriticalByStress {
     }
     members.sort(null);
     return new Critical(members, new ArrayList<>(braces));
+  }
+
+  private static boolean isolated(FrameFramework fw, int[] deg, int j) {
+    return deg[j] == 1 && !(fw.pinned && j <= fw.bays);
   }
 }

@@ -316,9 +316,10 @@ class FrameExamplesTest {
     }
     Set<FrameRef> more = new HashSet<>(absent);
     more.add(f);
-    // analysis.md, "Frame members": critical iff its removal lowers the rank (a coloop)
-    int before = oracle(grid, b, absent).rank();
-    int after = oracle(grid, b, more).rank();
-    assertThat(s.criticalMembers().contains(f)).as(where + " member " + f).isEqualTo(after < before);
+    // check-contract.md, "Frame members": critical iff its loss alone adds a freedom (the
+    // rigidity matrix before and after, joints left bare dropped)
+    int before = Math.max(0, oracle(grid, b, absent).dof());
+    int after = Math.max(0, oracle(grid, b, more).dof());
+    assertThat(s.criticalMembers().contains(f)).as(where + " member " + f).isEqualTo(after > before);
   }
 }
