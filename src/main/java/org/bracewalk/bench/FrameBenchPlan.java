@@ -13,8 +13,9 @@ package org.bracewalk.bench;
  * @param largeMissing frame members missing in it
  * @param baselineSize the square plane timed against the rigidity-matrix rank
  * @param baselineShare share of its frame members missing
- * @param rankSamples timed calls of the rigidity-matrix rank on it (each takes seconds; no warm-up:
- *     the engine side of the ratio is the quick one)
+ * @param slowSamples timed calls of the rigidity-matrix rank on the baseline plane and of the
+ *     verdict and repair of the large one (each takes seconds; no warm-up beyond the call that
+ *     measures the large plane's heap)
  */
 public record FrameBenchPlan(
     int walkLifts,
@@ -26,14 +27,14 @@ public record FrameBenchPlan(
     int largeMissing,
     int baselineSize,
     double baselineShare,
-    int rankSamples) {
+    int slowSamples) {
 
   public FrameBenchPlan {
     if (walkLifts < 1 || walkBays < 1 || mediumSize < 1 || largeSize < 1 || baselineSize < 1) {
       throw new IllegalArgumentException("every frame bench plane needs at least one lift and bay");
     }
-    if (rankSamples < 1) {
-      throw new IllegalArgumentException("at least one timed call of the rank");
+    if (slowSamples < 1) {
+      throw new IllegalArgumentException("at least one timed call of the slow measurements");
     }
     if (walkMissing < 0 || largeMissing < 0 || !(mediumShare >= 0 && mediumShare <= 1)
         || !(baselineShare >= 0 && baselineShare <= 1)) {
@@ -50,7 +51,7 @@ public record FrameBenchPlan(
     return new FrameBenchPlan(20, 100, 20, 100, 0.01, 1000, 1000, 20, 0.01, 3);
   }
 
-  /** The same cases with one call of the rank (for {@code bench --quick}). */
+  /** The same cases with one call of the slow measurements (for {@code bench --quick}). */
   public static FrameBenchPlan quick() {
     return new FrameBenchPlan(20, 100, 20, 100, 0.01, 1000, 1000, 20, 0.01, 1);
   }

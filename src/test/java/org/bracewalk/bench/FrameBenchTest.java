@@ -42,6 +42,7 @@ class FrameBenchTest {
             "engine-verdict-repair-6x6-frame-3-missing");
     assertThat(steps).hasSize(report.results().size());
     assertThat(report.results().get(10).samples()).as("calls of the frame rank").isEqualTo(2);
+    assertThat(report.results().get(11).samples()).as("calls of the large frame plane").isEqualTo(2);
     assertThat(report.ratios()).containsKeys(
         "frameMissingOverComplete3x5", "frameMissingOverComplete5x5", "rigidityMatrixOverEngineFrame4x4");
     BenchResult large = report.results().get(report.results().size() - 1);
