@@ -145,7 +145,7 @@ class PdfReportRendererTest {
     assertThat(firstPlane).isPositive();
     assertThat(indexOf(pages, "Plane: " + ReportFixtures.FRAME)).isEqualTo(firstPlane + 1);
     assertThat(indexOf(pages, "Plane: " + ReportFixtures.PLAN)).isEqualTo(firstPlane + 2);
-    assertThat(indexOf(pages, "Findings: every panel not found sound")).isEqualTo(firstPlane + 3);
+    assertThat(indexOf(pages, "Findings: every panel and frame member not found sound")).isEqualTo(firstPlane + 3);
     try (PDDocument d = Loader.loadPDF(finalised)) {
       assertThat(d.getNumberOfPages()).isEqualTo(pages.size());
     }
