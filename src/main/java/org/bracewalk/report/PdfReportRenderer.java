@@ -444,8 +444,12 @@ public final class PdfReportRenderer implements ReportRenderer {
               .filter(a -> a.plane().equals(plane.name())
                   && a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY)
               .map(RepairStep::number).toList();
-          doc.add(pdf.para(w.format("plane.repair", "count", plane.analysis().repair().minimum(),
-              "actions", Wording.ranges(numbers)), 8.5f));
+          int members = plane.analysis().repair().members().size();
+          doc.add(pdf.para(members == 0
+              ? w.format("plane.repair", "count", plane.analysis().repair().minimum(),
+                  "actions", Wording.ranges(numbers))
+              : w.format("plane.repair.members", "count", plane.analysis().repair().minimum(),
+                  "members", members, "actions", Wording.ranges(numbers)), 8.5f));
         } else {
           doc.add(new Paragraph(w.text("plane.repair.impossible"), pdf.boldFont(8.5f, Palette.LOST)));
         }

@@ -157,6 +157,7 @@ final class TemplateSpec {
     k.put("frame.and", Set.of("first", "second"));
     k.put("plane.uninspected", Set.of("count", "verdict"));
     k.put("plane.repair", Set.of("count", "actions"));
+    k.put("plane.repair.members", Set.of("count", "members", "actions"));
     k.put("plane.repair.impossible", Set.of());
     k.put("plane.extra", Set.of("panels"));
     k.put("list.none", Set.of());
