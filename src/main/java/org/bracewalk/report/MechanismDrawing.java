@@ -310,8 +310,16 @@ final class MechanismDrawing {
     double len = Math.hypot(x1 - x0, y1 - y0);
     if (len > 1) {
       double grow = Math.max(1, 28 / len);
+      // lifted clear of the top joint, but never into the title
       float lift = bi == m && f.kind() == FreedomKind.SWAY ? 7 : 0;
-      arrow(cb, x0, y0 + lift, (float) (x0 + (x1 - x0) * grow), (float) (y0 + (y1 - y0) * grow) + lift);
+      float ex = (float) (x0 + (x1 - x0) * grow);
+      float ey = (float) (y0 + (y1 - y0) * grow);
+      float roof = y + height - 14f;
+      lift = Math.max(0, Math.min(lift, roof - Math.max(y0, ey)));
+      if (Math.max(y0, ey) + lift > roof) {
+        ey = Math.min(ey, roof);
+      }
+      arrow(cb, x0, y0 + lift, ex, ey + lift);
     }
   }
 

@@ -155,7 +155,9 @@ public final class PdfReportRenderer implements ReportRenderer {
       List<String> depends = new ArrayList<>();
       for (PlaneSection p : r.planes()) {
         VerdictKind kind = KeepOffLines.verdict(p).kind();
-        if (kind.lost()) {
+        if (kind.lost() && kind != VerdictKind.LOST_RESTRAINT) {
+          // a plane whose only freedoms are joints without sideways restraint is named on its
+          // own line below (an engineer's check before loading), not as a collapse
           lost.add(p.name());
         } else if (kind == VerdictKind.DEPENDS_ON_UNSEEN || kind == VerdictKind.NOT_INSPECTED) {
           depends.add(p.name());
