@@ -596,7 +596,8 @@ public final class ImportExportService {
    * nothing: one observation per panel that is not {@code ?}, its state found by comparing the
    * map with the design in force (as designed: sound; design member gone: missing, naming what is
    * left; a member where the design has none: extra). Panels marked {@code ?} get no observation
-   * and so count as not inspected.
+   * and so count as not inspected. Frame lines become observations of their members (see {@link
+   * #frameFindings}).
    */
   public List<Observation> importAsBuiltMap(long inspectionId, long planeId, String fileName,
       String text, String recordedBy) {
@@ -624,8 +625,42 @@ public final class ImportExportService {
               f.state(), f.memberFound(), null, null, null, "from panel map " + fileName, by)));
         }
       }
+      frameFindings(map, design).forEach((member, state) ->
+          stored.add(inspections.recordObservation(inspectionId, new NewObservation(planeId, null,
+              state, null, null, null, null, "from panel map " + fileName, by, member))));
       return stored;
     });
+  }
+
+  /**
+   * The frame-member states that make the as-built plane carry exactly the map's frame: each frame
+   * line's state ({@code sound}, {@code damaged} effective, {@code ineffective}, {@code missing},
+   * {@code ?} not inspected), and {@code extra} for a member the design leaves out that the map
+   * has there (listed sound or damaged, or not listed: an as-built map's unlisted members are
+   * there). Members the design has and the map does not list are not recorded (taken as
+   * designed). In member order.
+   */
+  static Map<FrameRef, PanelState> frameFindings(PanelMap map, PlaneDesign design) {
+    Map<FrameRef, PanelState> out = new java.util.TreeMap<>();
+    for (FrameRef omitted : design.omittedFrame()) {
+      out.put(omitted, PanelState.EXTRA);
+    }
+    for (PanelMap.FrameLine line : map.frameLines()) {
+      FrameRef m = line.member();
+      PanelState state = switch (line.state()) {
+        case SOUND -> PanelState.SOUND;
+        case DAMAGED -> PanelState.DAMAGED_EFFECTIVE;
+        case INEFFECTIVE -> PanelState.DAMAGED_INEFFECTIVE;
+        case MISSING -> PanelState.MISSING;
+        case UNKNOWN -> PanelState.NOT_INSPECTED;
+        case NONE -> throw new IllegalStateException("a design state in an as-built map");
+      };
+      if (!design.hasFrameMember(m) && state.effective()) {
+        state = PanelState.EXTRA;
+      }
+      out.put(m, state);
+    }
+    return out;
   }
 
   /**
