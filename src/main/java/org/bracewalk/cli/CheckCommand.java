@@ -31,6 +31,8 @@ import picocli.CommandLine.Spec;
       "Analyses one brace plane from panel maps: does it hold its shape, what can sway, which braces"
           + " are critical, and the least set of braces that restores it.",
       "With one map: the design. With two: the as-built state against the design.",
+      "Frame lines after the grid name ledgers and standards (beams, uprights) that are left out,"
+          + " missing, damaged or not inspected: 'ledger LEVEL BAY STATE', 'standard LIFT LINE STATE'.",
       "Exit status: 0 holds its shape, 1 does not, 2 bad input."
     })
 public final class CheckCommand implements Callable<Integer> {

@@ -141,9 +141,8 @@ public final class VerdictText {
         .append(list(s.criticalBraces(), Wording::panel))
         .append('\n');
     if (frame.shown()) {
-      out.append("  Critical frame members (losing any one of them alone adds a motion): ")
-          .append(list(s.criticalMembers(), f -> Wording.frameMember(f, frame.terms())))
-          .append('\n');
+      wrap(out, "Critical frame members (losing any one of them alone adds a motion): "
+          + list(s.criticalMembers(), f -> Wording.frameMember(f, frame.terms())), "  ");
     }
     if (s.frameComplete() && !s.blocks().isEmpty()) {
       blocks(out, s, grid);

@@ -41,6 +41,21 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
 
   @Override
   public Optional<JointMotion> motion(BuiltFrame state, Freedom freedom) {
+    if (state.frameComplete()) {
+      PlaneGrid grid = state.grid();
+      byte[] codes = PanelCodes.encode(grid, state.braces());
+      StateAnalysis s = BraceGraphPlaneAnalyzer.analyse(BraceGraph.of(grid, codes));
+      List<Block> moving = swayingBlocks(s, grid.support() == org.bracewalk.core.model.Support.PINNED_BASE);
+      if (moving.isEmpty()) {
+        return Optional.empty();
+      }
+      for (Block b : moving) {
+        if (swayOf(b, grid).equals(freedom)) {
+          return Optional.of(blockMotion(grid, b));
+        }
+      }
+      throw new IllegalArgumentException("not a freedom of this state: " + freedom);
+    }
     FrameFramework fw = FrameFramework.of(state.grid(), state.braces(), state.absentFrame());
     FrameFreedoms ff = FrameFreedoms.of(fw, SEED);
     if (ff.dof == 0) {
@@ -152,38 +167,12 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
     CriticalByStress.Critical critical = CriticalByStress.of(fw, SEED);
     List<Freedom> freedoms = new ArrayList<>();
     boolean pinned = fw.pinned;
-    List<Block> moving = new ArrayList<>();
-    for (Block b : s.blocks()) {
-      if (!b.fixed()) {
-        moving.add(b);
-      }
-    }
-    if (!pinned && !moving.isEmpty()) {
-      // the reference: the block holding bay 1 (the plane's own rigid motions)
-      Block reference = null;
-      for (Block b : moving) {
-        if (b.containsBay(1)) {
-          reference = b;
-        }
-      }
-      moving.remove(reference);
-    }
     int m = grid.lifts();
     int n = grid.bays();
     int lowest = Integer.MAX_VALUE;
-    for (Block b : moving) {
-      int minLift = b.lifts().isEmpty() ? Integer.MAX_VALUE : b.lifts().get(0);
-      int minBay = b.bays().isEmpty() ? Integer.MAX_VALUE : b.bays().get(0);
-      List<Joint> js = new ArrayList<>();
-      for (int level = 0; level <= m; level++) {
-        for (int line = 0; line <= n; line++) {
-          if (level >= minLift || line >= minBay) {
-            js.add(new Joint(level, line));
-          }
-        }
-      }
-      lowest = Math.min(lowest, minLift);
-      freedoms.add(new Freedom(FreedomKind.SWAY, 1, js, List.of(), List.of()));
+    for (Block b : swayingBlocks(s, pinned)) {
+      lowest = Math.min(lowest, b.lifts().isEmpty() ? Integer.MAX_VALUE : b.lifts().get(0));
+      freedoms.add(swayOf(b, grid));
     }
     freedoms.sort((a, b) -> a.joints().get(0).compareTo(b.joints().get(0)));
     List<Joint> movingJoints = new ArrayList<>();
@@ -197,6 +186,64 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
     return new StateAnalysis(
         s.rigid(), s.degreesOfFreedom(), s.oneWayOnly(), s.lossTolerance(), s.lossToleranceExact(),
         s.criticalBraces(), s.blocks(), critical.members(), movingJoints, freedoms, true);
+  }
+
+  /** The blocks that sway: not fixed, and on a free plane not the one holding bay 1. */
+  private static List<Block> swayingBlocks(StateAnalysis s, boolean pinned) {
+    List<Block> moving = new ArrayList<>();
+    for (Block b : s.blocks()) {
+      if (!b.fixed() && (pinned || !b.containsBay(1))) {
+        moving.add(b);
+      }
+    }
+    return moving;
+  }
+
+  /** A block's sway: every joint at or above its lowest lift, or right of its first bay. */
+  private static Freedom swayOf(Block b, PlaneGrid grid) {
+    int minLift = b.lifts().isEmpty() ? Integer.MAX_VALUE : b.lifts().get(0);
+    int minBay = b.bays().isEmpty() ? Integer.MAX_VALUE : b.bays().get(0);
+    List<Joint> js = new ArrayList<>();
+    for (int level = 0; level <= grid.lifts(); level++) {
+      for (int line = 0; line <= grid.bays(); line++) {
+        if (level >= minLift || line >= minBay) {
+          js.add(new Joint(level, line));
+        }
+      }
+    }
+    return new Freedom(FreedomKind.SWAY, 1, js, List.of(), List.of());
+  }
+
+  /**
+   * The first-order motion of a block turning (analysis.md, "Mechanism shape"): joint (i, j) moves
+   * by (-sum of the block's lift heights up to i, sum of its bay widths up to j), scaled to 1.
+   */
+  private static JointMotion blockMotion(PlaneGrid grid, Block b) {
+    int m = grid.lifts();
+    int n = grid.bays();
+    double[] dx = new double[(m + 1) * (n + 1)];
+    double[] dy = new double[(m + 1) * (n + 1)];
+    double max = 0;
+    double up = 0;
+    for (int i = 0; i <= m; i++) {
+      if (i > 0 && b.containsLift(i)) {
+        up += grid.liftHeights().get(i - 1);
+      }
+      double across = 0;
+      for (int j = 0; j <= n; j++) {
+        if (j > 0 && b.containsBay(j)) {
+          across += grid.bayWidths().get(j - 1);
+        }
+        dx[i * (n + 1) + j] = -up;
+        dy[i * (n + 1) + j] = across;
+        max = Math.max(max, Math.hypot(up, across));
+      }
+    }
+    for (int k = 0; k < dx.length; k++) {
+      dx[k] /= max;
+      dy[k] /= max;
+    }
+    return new JointMotion(m, n, dx, dy);
   }
 
   static StateAnalysis analyseIncomplete(
