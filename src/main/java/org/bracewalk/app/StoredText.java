@@ -92,6 +92,6 @@ public final class StoredText {
     return new RepairAction(a.id(), a.orderId(), a.planeId(), a.panel(), a.action(), a.brace(),
         clean(a.description(), "action description"), a.dueDate(),
         clean(a.assignee(), "assignee"), a.doneAt(), clean(a.doneBy(), "done by"),
-        a.verifiedByInspectionId());
+        a.verifiedByInspectionId(), a.frameMember());
   }
 }
