@@ -485,7 +485,11 @@ public final class PdfReportRenderer implements ReportRenderer {
       float legendH = Legend.height(frame);
       float top = writer.getVerticalPosition(true) - 6;
       float room = top - doc.bottom() - legendH - mechMin - 12;
-      if (room < 150) {
+      // a page of words (a frame's freedoms and members) leaves the drawing too little room: give
+      // it a page of its own rather than shrink it below what it would take there (to 260 points)
+      float wanted = Math.min(260f, ElevationDrawing.preferredHeight(plane.design().grid(), width,
+          doc.top() - doc.bottom() - legendH - mechMin - 12));
+      if (room < Math.max(150f, wanted)) {
         doc.newPage();
         writer.setPageEmpty(false);
         top = doc.top();

@@ -644,13 +644,15 @@ public final class ReportService {
   }
 
   /**
-   * The motion the report sketches: where the analysed state has freedoms, the engine's motion of
-   * the first swaying part, else of the first freedom of any kind; {@code null} when the state has
-   * none listed (the sketch then follows the engine's blocks) or the engine gives no motion.
+   * The motion the report sketches where the analysed frame is incomplete: the engine's motion of
+   * the first swaying part, else of the first freedom of any kind; {@code null} when the frame is
+   * complete (the sketch then turns the engine's blocks: an exact finite motion that costs nothing
+   * more on the largest planes), when the state lists no freedom, or when the engine gives no
+   * motion.
    */
   MotionSketch sketch(PlaneAnalysis analysis, AsBuiltPlane asBuilt) {
     StateAnalysis state = analysis.analysedState();
-    if (state.rigid() || state.freedoms().isEmpty()) {
+    if (state.rigid() || state.frameComplete() || state.freedoms().isEmpty()) {
       return null;
     }
     Freedom shown = state.freedoms().stream().filter(f -> f.kind() == FreedomKind.SWAY)
