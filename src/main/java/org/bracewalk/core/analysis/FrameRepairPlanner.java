@@ -2,7 +2,6 @@ package org.bracewalk.core.analysis;
 
 import java.util.ArrayList;
 import java.util.BitSet;
-import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -13,7 +12,6 @@ import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.MemberKind;
-import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
 
 /**
@@ -141,6 +139,57 @@ final class FrameRepairPlanner {
       motion = Motion.of(FrameFramework.of(grid, codes, there), rnd);
       rigid = motion.dof == 0;
     }
+    // tension-only members: the freedoms are gone, but a cable may still go slack; restore the
+    // design's members left, then add rigid diagonals, until the exact test is met
+    boolean tension = false;
+    for (byte code : analysed) {
+      tension |= code != PanelCodes.NONE && !PanelCodes.isRigid(code);
+    }
+    for (Brace b : designMissing.values()) {
+      tension |= !b.isRigid();
+    }
+    if (rigid && tension) {
+      byte[] kinds = analysed.clone();
+      Set<Candidate> inPlan = new HashSet<>(taken);
+      for (Candidate c : taken) {
+        if (c.frame() == null) {
+          kinds[c.panel()] |= (byte) ((1 << c.way()) | (c.kind() == MemberKind.RIGID ? 0 : 4));
+        }
+      }
+      List<Candidate> more = new ArrayList<>();
+      for (Candidate c : candidates) {
+        if (!inPlan.contains(c)) {
+          more.add(c);
+        }
+      }
+      for (int idx = 0; idx < m * n; idx++) {
+        for (int way = 0; way < 2; way++) {
+          if (!openings.get(idx) && (codes[idx] & (1 << way)) == 0
+              && !designWays.contains(idx * 2L + way)) {
+            more.add(new Candidate(idx, way, null, MemberKind.RIGID, false));
+          }
+        }
+      }
+      rigid = TensionOnlyFrame.rigid(grid, kinds, absentOf(grid, there));
+      for (int i = 0; i < more.size() && !rigid; i++) {
+        Candidate c = more.get(i);
+        taken.add(c);
+        if (c.frame() != null) {
+          there[FrameFramework.frameId(m, n, c.frame())] = true;
+        } else {
+          // a panel holds members of one kind: skip a member of the other kind
+          int have = kinds[c.panel()];
+          boolean tensionHere = (have & 4) != 0;
+          if ((have & 3) != 0 && tensionHere != (c.kind() != MemberKind.RIGID)) {
+            taken.remove(taken.size() - 1);
+            continue;
+          }
+          kinds[c.panel()] |= (byte) ((1 << c.way()) | (c.kind() == MemberKind.RIGID ? 0 : 4));
+          codes[c.panel()] |= (byte) (1 << c.way());
+        }
+        rigid = TensionOnlyFrame.rigid(grid, kinds, absentOf(grid, there));
+      }
+    }
     // the plan
     List<RepairMember> members = new ArrayList<>();
     Set<FrameRef> takenFrame = new HashSet<>();
@@ -193,6 +242,19 @@ final class FrameRepairPlanner {
       }
     }
     return new RepairPlan(rigid, braces, restore, members, restoreFrame);
+  }
+
+  private static Set<FrameRef> absentOf(PlaneGrid grid, boolean[] there) {
+    Set<FrameRef> out = new HashSet<>();
+    int ledgers = (grid.lifts() + 1) * grid.bays();
+    for (int e = 0; e < there.length; e++) {
+      if (!there[e]) {
+        out.add(e < ledgers
+            ? FrameRef.ledger(e / grid.bays(), e % grid.bays() + 1)
+            : FrameRef.standard((e - ledgers) / (grid.bays() + 1) + 1, (e - ledgers) % (grid.bays() + 1)));
+      }
+    }
+    return out;
   }
 
   /** One random first-order motion of a framework (mod p) and its freedoms (mod p). */

@@ -143,6 +143,32 @@ class FrameExamplesTest {
     assertThat(complete.freedomsOf(FreedomKind.SWAY)).isEqualTo(1);
   }
 
+  @Test
+  void aSlackCableWhereALedgerIsMissingIsRepairedByRefittingTheLedger() {
+    // 1 lift x 2 bays, pinned, designed with tension-only crosses; as built the ledger over bay 2
+    // is missing and bay 2 keeps only its rising cable. The joint (1, 2) is held by the standard and
+    // that cable: no freedom with cables as bars, but moving it left shortens the cable (it goes
+    // slack), so the plane sways one way (B. Roth, W. Whiteley, Trans. AMS 265 (1981)). Refitting
+    // the design ledger makes the lift a complete frame held by the cross of bay 1 (analysis.md,
+    // "Why a bipartite graph"): one item.
+    PlaneGrid grid = PlaneGrid.uniform(1, 2, Support.PINNED_BASE);
+    Map<PanelRef, Brace> design = Map.of(
+        new PanelRef(1, 1), Brace.tension(Diagonal.BOTH), new PanelRef(1, 2), Brace.tension(Diagonal.BOTH));
+    Map<PanelRef, Brace> built = Map.of(
+        new PanelRef(1, 1), Brace.tension(Diagonal.BOTH), new PanelRef(1, 2), Brace.tension(Diagonal.RISING));
+    PlaneAnalysis a = engine.analyse(
+        new org.bracewalk.core.model.PlaneDesign(grid, design, Set.of()),
+        new org.bracewalk.core.model.AsBuiltPlane(grid, built, Set.of(), Set.of(FrameRef.ledger(1, 2)), Set.of()));
+    StateAnalysis s = a.asBuilt().orElseThrow().state();
+    assertThat(s.degreesOfFreedom()).isZero();
+    assertThat(s.rigid()).isFalse();
+    assertThat(s.oneWayOnly()).isTrue();
+    assertThat(a.repair().possible()).isTrue();
+    assertThat(a.repair().members()).containsExactly(new RepairMember(FrameRef.ledger(1, 2), true));
+    assertThat(a.repair().restoreFrame())
+        .containsExactly(new RestoreFrameItem(FrameRef.ledger(1, 2), true));
+  }
+
   // ---- the rigidity matrix, for seeded random planes ----
 
   private record Oracle(int dof, int rank, Set<Joint> moving) {}
