@@ -75,7 +75,7 @@ public final class StoredText {
     return new Observation(o.id(), o.inspectionId(), o.planeId(), o.panel(), o.state(),
         o.memberFound(), o.bowMm(), o.gaugeLengthMm(), o.defect(), clean(o.note(), "note"),
         o.recordedAt(), clean(o.recordedBy(), "recorded by"), o.supersedes(),
-        clean(o.correctionReason(), "correction reason"));
+        clean(o.correctionReason(), "correction reason"), o.frameMember());
   }
 
   static Photo photo(Photo p) {
@@ -92,6 +92,6 @@ public final class StoredText {
     return new RepairAction(a.id(), a.orderId(), a.planeId(), a.panel(), a.action(), a.brace(),
         clean(a.description(), "action description"), a.dueDate(),
         clean(a.assignee(), "assignee"), a.doneAt(), clean(a.doneBy(), "done by"),
-        a.verifiedByInspectionId());
+        a.verifiedByInspectionId(), a.frameMember());
   }
 }

@@ -15,6 +15,7 @@ import org.bracewalk.app.UserInputException;
 import org.bracewalk.app.sitefile.ObservationCsv;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.Observation;
@@ -165,7 +166,7 @@ final class InspectionCommands {
       out.println(rows.size() + " observations:");
       for (Observation o : rows) {
         out.println("  " + o.id() + "  " + Show.time(o.recordedAt(), zone) + "  "
-            + names.get(o.planeId()) + ", " + o.panel() + ": " + o.state().label()
+            + names.get(o.planeId()) + ", " + Show.where(o) + ": " + o.state().label()
             + (o.memberFound() == null ? "" : " (" + o.memberFound().token() + ")")
             + (o.bowMm() == null ? "" : ", bow " + o.bowMm() + " mm / " + o.gaugeLengthMm() + " mm")
             + (o.defect() == null ? "" : ", " + o.defect().label())
@@ -182,11 +183,60 @@ final class InspectionCommands {
     @Option(names = "--plane", required = true, description = "Plane name (or id).")
     String plane;
 
-    @Option(names = "--lift", required = true, description = "Lift, 1 = bottom.")
-    int lift;
+    @Option(names = "--lift", description = "Lift, 1 = bottom (with --bay: the panel).")
+    Integer lift;
 
-    @Option(names = "--bay", required = true, description = "Bay, 1 = left.")
-    int bay;
+    @Option(names = "--bay", description = "Bay, 1 = left (with --lift: the panel).")
+    Integer bay;
+
+    @Option(names = {"--ledger", "--beam"}, paramLabel = "LEVEL,BAY",
+        description = "Instead of a panel, the ledger (racking: beam or frame horizontal) at"
+            + " LEVEL (0 = base, i = top of lift i) across BAY, e.g. 1,2.")
+    String ledger;
+
+    @Option(names = {"--standard", "--upright"}, paramLabel = "LIFT,LINE",
+        description = "Instead of a panel, the standard (racking: upright) segment of LIFT on"
+            + " LINE (0 = left end, j = right side of bay j), e.g. 2,0.")
+    String standard;
+
+    /** The frame member named, or null for a panel; refuses both or neither, naming the options. */
+    FrameRef frameMember() {
+      int given = (ledger != null ? 1 : 0) + (standard != null ? 1 : 0)
+          + (lift != null || bay != null ? 1 : 0);
+      if (given != 1) {
+        throw new UserInputException("name one panel (--lift and --bay) or one frame member"
+            + " (--ledger LEVEL,BAY or --standard LIFT,LINE)");
+      }
+      if (ledger != null) {
+        int[] n = pair("--ledger", ledger);
+        return FrameRef.ledger(n[0], n[1]);
+      }
+      if (standard != null) {
+        int[] n = pair("--standard", standard);
+        return FrameRef.standard(n[0], n[1]);
+      }
+      if (lift == null || bay == null) {
+        throw new UserInputException("a panel needs both --lift and --bay");
+      }
+      return null;
+    }
+
+    private static int[] pair(String option, String value) {
+      String[] parts = value.split(",", -1);
+      try {
+        if (parts.length == 2) {
+          int[] n = {Integer.parseInt(parts[0].trim()), Integer.parseInt(parts[1].trim())};
+          if (option.equals("--ledger") ? n[0] >= 0 && n[1] >= 1 : n[0] >= 1 && n[1] >= 0) {
+            return n;
+          }
+        }
+      } catch (NumberFormatException e) {
+        // falls through to the message below
+      }
+      throw new UserInputException(option + " " + value + ": give two whole numbers, "
+          + (option.equals("--ledger") ? "LEVEL (from 0) and BAY (from 1), e.g. 1,2"
+              : "LIFT (from 1) and LINE (from 0), e.g. 2,0"));
+    }
 
     @Option(names = "--state", required = true,
         description = "sound, damaged-effective, damaged-ineffective, missing, extra,"
@@ -273,9 +323,11 @@ final class InspectionCommands {
         member = braceOf(o.member);
       }
       PlaneRecord plane = plane(s, i, o.plane);
-      NewObservation n = new NewObservation(plane.id(), PanelRef.of(o.lift, o.bay),
+      FrameRef frame = o.frameMember();
+      NewObservation n = new NewObservation(plane.id(),
+          frame == null ? PanelRef.of(o.lift, o.bay) : null,
           PanelState.fromLabel(o.state), member, o.bow, o.gauge,
-          o.defect == null ? null : DefectType.fromLabel(o.defect), o.note, who);
+          o.defect == null ? null : DefectType.fromLabel(o.defect), o.note, who, frame);
       List<Path> photos = o.photos == null ? List.of() : o.photos;
       for (Path photo : photos) {
         outputs = outputs.withInput(photo);

@@ -7,10 +7,15 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.bracewalk.core.analysis.Freedom;
+import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.RepairBrace;
+import org.bracewalk.core.analysis.RepairMember;
 import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
@@ -21,10 +26,13 @@ import org.bracewalk.core.model.Support;
 import org.bracewalk.core.port.report.PlaneSection;
 
 /**
- * A plane's elevation drawn to scale as vector lines: the grid of standards and ledgers, every
- * panel's design member (thin dashes) with the as-found state over it (line style, symbol and
- * colour), the parts that can sway hatched and lettered, critical braces marked, the braces to fit
- * drawn in long dashes with their action numbers, dimensions in the site's units and a scale bar.
+ * A plane's elevation drawn to scale as vector lines: the grid of standards and ledgers (each
+ * frame member not there as designed in its state: damaged, beyond use, missing, left out by the
+ * design, there although left out, not inspected), every panel's design member (thin dashes) with
+ * the as-found state over it (line style, symbol and colour), the parts that can sway hatched and
+ * lettered, joints with no sideways restraint and loose member ends marked, critical braces and
+ * frame members marked, the members to fit drawn in long dashes with their action numbers,
+ * dimensions in the site's units and a scale bar.
  */
 final class ElevationDrawing {
   /** Points per metre of paper: 72 points per inch. */
@@ -58,11 +66,13 @@ final class ElevationDrawing {
    * Draws {@code plane} inside the box with lower-left corner (x, y).
    *
    * @param actionsAt the repair-plan action numbers that concern each panel
+   * @param frameActionsAt the action numbers that concern each frame member
    */
   void draw(
       PdfContentByte cb,
       PlaneSection plane,
       Map<PanelRef, List<Integer>> actionsAt,
+      Map<FrameRef, List<Integer>> frameActionsAt,
       float x,
       float y,
       float width,
@@ -124,6 +134,28 @@ final class ElevationDrawing {
         }
       }
     }
+    // where the frame is incomplete the engine names no blocks: hatch every panel with a corner
+    // that moves with a swaying part
+    List<Freedom> sways = FrameLooks.freedoms(plane, FreedomKind.SWAY);
+    boolean swayFromFreedoms = parts.stream().noneMatch(Parts.Part::sways) && !sways.isEmpty();
+    String[] liftLetters = new String[m + 1];
+    if (swayFromFreedoms) {
+      for (int k = 0; k < sways.size(); k++) {
+        Set<Joint> moving = new HashSet<>(sways.get(k).joints());
+        for (int i = 1; i <= m; i++) {
+          for (int j = 1; j <= n; j++) {
+            if (moving.contains(new Joint(i - 1, j - 1)) || moving.contains(new Joint(i - 1, j))
+                || moving.contains(new Joint(i, j - 1)) || moving.contains(new Joint(i, j))) {
+              Glyphs.hatch(cb, xs[j - 1], ys[i - 1], xs[j] - xs[j - 1], ys[i] - ys[i - 1],
+                  Palette.tint(k), k);
+              if (liftLetters[i] == null) {
+                liftLetters[i] = Parts.letter(k);
+              }
+            }
+          }
+        }
+      }
+    }
     PlaneDesign design = plane.design();
     // openings
     for (PanelRef p : design.openings()) {
@@ -143,21 +175,50 @@ final class ElevationDrawing {
       cb.stroke();
       cb.restoreState();
     }
-    // the grid: standards and ledgers
+    // the grid: standards and ledgers there as designed in plain runs, the others in their states
+    Map<FrameRef, FrameLooks.Look> looks = FrameLooks.of(plane);
     cb.saveState();
     cb.setColorStroke(Palette.GRID);
     cb.setLineWidth(0.9f * weight);
     cb.setLineDash(0f);
     for (int j = 0; j <= n; j++) {
-      cb.moveTo(xs[j], ys[0]);
-      cb.lineTo(xs[j], ys[m]);
+      int from = 0;
+      for (int i = 1; i <= m + 1; i++) {
+        if (i > m || looks.containsKey(FrameRef.standard(i, j))) {
+          if (i - 1 > from) {
+            cb.moveTo(xs[j], ys[from]);
+            cb.lineTo(xs[j], ys[i - 1]);
+          }
+          from = i;
+        }
+      }
     }
     for (int i = 0; i <= m; i++) {
-      cb.moveTo(xs[0], ys[i]);
-      cb.lineTo(xs[n], ys[i]);
+      int from = 0;
+      for (int j = 1; j <= n + 1; j++) {
+        if (j > n || looks.containsKey(FrameRef.ledger(i, j))) {
+          if (j - 1 > from) {
+            cb.moveTo(xs[from], ys[i]);
+            cb.lineTo(xs[j - 1], ys[i]);
+          }
+          from = j;
+        }
+      }
     }
     cb.stroke();
     cb.restoreState();
+    for (Map.Entry<FrameRef, FrameLooks.Look> e : looks.entrySet()) {
+      float[] seg = segment(e.getKey(), xs, ys);
+      cb.saveState();
+      Glyphs.stroke(cb, e.getValue().stroke, weight);
+      Glyphs.line(cb, seg[0], seg[1], seg[2], seg[3]);
+      cb.restoreState();
+      if (e.getValue() == FrameLooks.Look.OMITTED) {
+        Glyphs.endTicks(cb, seg[0], seg[1], seg[2], seg[3], r * 1.6f);
+      }
+      Glyphs.mark(cb, font, e.getValue().mark, (seg[0] + seg[2]) / 2, (seg[1] + seg[3]) / 2,
+          r * 0.8f);
+    }
     if (g.support() == Support.PINNED_BASE) {
       Glyphs.ground(cb, xs[0], xs[n], ys[0]);
     }
@@ -202,6 +263,53 @@ final class ElevationDrawing {
       }
     }
 
+    // frame members to fit, critical frame members, their action numbers
+    for (RepairMember rm : plane.analysis().repair().members()) {
+      float[] seg = segment(rm.member(), xs, ys);
+      float off = 1.8f * weight;
+      float ox2 = rm.member().isLedger() ? 0 : rm.member().second() == n ? -off : off;
+      float oy2 = !rm.member().isLedger() ? 0 : rm.member().first() == m ? -off : off;
+      cb.saveState();
+      Glyphs.stroke(cb, Glyphs.Stroke.REPAIR, weight);
+      Glyphs.line(cb, seg[0] + ox2, seg[1] + oy2, seg[2] + ox2, seg[3] + oy2);
+      cb.restoreState();
+    }
+    for (FrameRef f : state.criticalMembers()) {
+      float[] seg = segment(f, xs, ys);
+      float size = Math.max(2.2f, r * 0.8f);
+      float along = r * 1.8f;
+      float cx = (seg[0] + seg[2]) / 2 + (f.isLedger() ? along : 0);
+      float cy = (seg[1] + seg[3]) / 2 + (f.isLedger() ? 0 : along);
+      Glyphs.critical(cb, cx, cy, size);
+    }
+    for (Map.Entry<FrameRef, List<Integer>> e : frameActionsAt.entrySet()) {
+      if (e.getValue().isEmpty() || !e.getKey().within(g)) {
+        continue;
+      }
+      float[] seg = segment(e.getKey(), xs, ys);
+      String text = e.getValue().size() > 2 ? e.getValue().get(0) + "+" : Wording.ranges(e.getValue());
+      float lw = bold.getWidthPoint(text, labelSize) + labelSize * 0.6f;
+      float cx = (seg[0] + seg[2]) / 2 + (e.getKey().isLedger() ? -r * 1.4f - lw / 2 : lw / 2 + 2f);
+      float cy = (seg[1] + seg[3]) / 2
+          + (e.getKey().isLedger() ? labelSize * 0.8f + 1f : -r * 1.4f - labelSize * 0.6f);
+      Glyphs.label(cb, bold, text, cx, cy, labelSize, Palette.REPAIR);
+    }
+    // joints with no sideways restraint, loose member ends
+    for (Freedom f : FrameLooks.freedoms(plane, FreedomKind.LOST_RESTRAINT)) {
+      for (Joint j : f.joints()) {
+        if (j.level() <= m && j.line() <= n) {
+          Glyphs.lostRestraint(cb, xs[j.line()], ys[j.level()], r * 0.9f, FrameLooks.vertical(f));
+        }
+      }
+    }
+    for (Freedom f : FrameLooks.freedoms(plane, FreedomKind.LOOSE_END)) {
+      for (Joint j : f.joints()) {
+        if (j.level() <= m && j.line() <= n) {
+          Glyphs.looseEnd(cb, xs[j.line()], ys[j.level()], r * 1.1f);
+        }
+      }
+    }
+
     // labels: lifts on the left (with the letter of a swaying part), bays below
     float fs = Math.max(4.5f, Math.min(7f, minPanel * 0.35f));
     for (int i = 1; i <= m; i++) {
@@ -209,9 +317,9 @@ final class ElevationDrawing {
       Glyphs.text(cb, font, fs, Palette.GRID, PdfContentByte.ALIGN_RIGHT,
           w.format("elevation.lift", "n", i), ox - 3f, cy - fs * 0.35f);
       Parts.Part part = swayingPartOfLift(parts, i);
-      if (part != null) {
-        Glyphs.label(cb, bold, part.letter(), ox - 3f - fs * 2.6f - 4f, cy, fs,
-            Palette.LOST);
+      String letter = part != null ? part.letter() : liftLetters[i];
+      if (letter != null) {
+        Glyphs.label(cb, bold, letter, ox - 3f - fs * 2.6f - 4f, cy, fs, Palette.LOST);
       }
       String hText = w.length(g.liftHeights().get(i - 1));
       if (font.getWidthPoint(hText, fs) < RIGHT - 4 && ys[i] - ys[i - 1] > fs) {
@@ -241,10 +349,31 @@ final class ElevationDrawing {
             w.length(g.bayWidths().get(j - 1)), cx, oy - 8f - fs - dimSize);
       }
     }
+    // line numbers above the standards, so a frame member's words find their place
+    if (plane.showsFrame()) {
+      float ls = Math.max(4f, Math.min(6f, minPanel * 0.3f));
+      boolean fits = true;
+      for (int j = 1; j <= n; j++) {
+        fits &= xs[j] - xs[j - 1] > font.getWidthPoint(String.valueOf(n), ls) * 2.2f;
+      }
+      if (fits) {
+        for (int j = 0; j <= n; j++) {
+          Glyphs.text(cb, font, ls, Palette.GHOST, PdfContentByte.ALIGN_CENTER, String.valueOf(j),
+              xs[j], ys[m] + 2.5f);
+        }
+      }
+    }
     // overall size and a scale bar
     String overall = w.format("elevation.overall", "width", w.length(wm), "height", w.length(hm));
     Glyphs.text(cb, font, 6.5f, Palette.GRID, PdfContentByte.ALIGN_LEFT, overall, x, y + 1f);
     drawScaleBar(cb, s, x + width - 6f, y + 2f);
+  }
+
+  /** The end points (x0, y0, x1, y1) of a frame member on the drawing. */
+  static float[] segment(FrameRef f, float[] xs, float[] ys) {
+    return f.isLedger()
+        ? new float[] {xs[f.second() - 1], ys[f.first()], xs[f.second()], ys[f.first()]}
+        : new float[] {xs[f.second()], ys[f.first() - 1], xs[f.second()], ys[f.first()]};
   }
 
   private static Parts.Part swayingPartOfLift(List<Parts.Part> parts, int lift) {

@@ -23,7 +23,11 @@ final class Glyphs {
     /** Found, not in the design: solid violet. */
     EXTRA,
     /** A brace to fit: long dashes. */
-    REPAIR
+    REPAIR,
+    /** A frame member the design leaves out: thin grey dash-dot. */
+    OMITTED,
+    /** A frame member not inspected: thin grey, solid. */
+    UNSEEN
   }
 
   /** The symbol drawn at a panel's centre. */
@@ -48,6 +52,8 @@ final class Glyphs {
       case MISSING -> set(cb, Palette.LOST, 0.8f, new float[] {3.2f, 2.2f});
       case EXTRA -> set(cb, Palette.EXTRA, 1.5f * weight, null);
       case REPAIR -> set(cb, Palette.REPAIR, 1.6f * weight, new float[] {6f, 2.5f});
+      case OMITTED -> set(cb, Palette.GHOST, 0.5f, new float[] {4f, 1.5f, 0.8f, 1.5f});
+      case UNSEEN -> set(cb, Palette.GHOST, 0.5f, null);
     }
   }
 
@@ -119,6 +125,79 @@ final class Glyphs {
     cb.lineTo(cx + r * 0.95f, cy - r * 0.7f);
     cb.lineTo(cx - r * 0.95f, cy - r * 0.7f);
     cb.closePath();
+  }
+
+  /**
+   * A joint with no sideways restraint: a ring with a double arrow across it, horizontal when the
+   * members through it are vertical, else vertical.
+   */
+  static void lostRestraint(PdfContentByte cb, float cx, float cy, float r, boolean horizontal) {
+    cb.saveState();
+    cb.setLineDash(0f);
+    cb.setColorStroke(Palette.LOST);
+    cb.setColorFill(java.awt.Color.WHITE);
+    cb.setLineWidth(0.9f);
+    cb.circle(cx, cy, r);
+    cb.fillStroke();
+    float a = r * 2.2f;
+    float h = r * 0.7f;
+    cb.setColorFill(Palette.LOST);
+    cb.setLineWidth(0.8f);
+    if (horizontal) {
+      line(cb, cx - a, cy, cx + a, cy);
+      arrowHead(cb, cx + a, cy, 1, 0, h);
+      arrowHead(cb, cx - a, cy, -1, 0, h);
+    } else {
+      line(cb, cx, cy - a, cx, cy + a);
+      arrowHead(cb, cx, cy + a, 0, 1, h);
+      arrowHead(cb, cx, cy - a, 0, -1, h);
+    }
+    cb.restoreState();
+  }
+
+  private static void arrowHead(PdfContentByte cb, float x, float y, float ux, float uy, float h) {
+    cb.moveTo(x, y);
+    cb.lineTo(x - ux * h - uy * h * 0.6f, y - uy * h + ux * h * 0.6f);
+    cb.lineTo(x - ux * h + uy * h * 0.6f, y - uy * h - ux * h * 0.6f);
+    cb.closePath();
+    cb.fill();
+  }
+
+  /** A loose member end: an open diamond on the joint. */
+  static void looseEnd(PdfContentByte cb, float cx, float cy, float r) {
+    cb.saveState();
+    cb.setLineDash(0f);
+    cb.setColorStroke(Palette.LOST);
+    cb.setColorFill(java.awt.Color.WHITE);
+    cb.setLineWidth(1.1f);
+    cb.moveTo(cx, cy + r);
+    cb.lineTo(cx + r, cy);
+    cb.lineTo(cx, cy - r);
+    cb.lineTo(cx - r, cy);
+    cb.closePath();
+    cb.fillStroke();
+    cb.restoreState();
+  }
+
+  /** Short ticks across both ends of a member: a frame member the design leaves out. */
+  static void endTicks(PdfContentByte cb, float x0, float y0, float x1, float y1, float len) {
+    float dx = x1 - x0;
+    float dy = y1 - y0;
+    float l = (float) Math.hypot(dx, dy);
+    if (l <= 0) {
+      return;
+    }
+    float nx = -dy / l * len / 2;
+    float ny = dx / l * len / 2;
+    cb.saveState();
+    cb.setLineDash(0f);
+    cb.setColorStroke(Palette.GHOST);
+    cb.setLineWidth(0.6f);
+    float ix = dx / l * len * 0.4f;
+    float iy = dy / l * len * 0.4f;
+    line(cb, x0 + ix - nx, y0 + iy - ny, x0 + ix + nx, y0 + iy + ny);
+    line(cb, x1 - ix - nx, y1 - iy - ny, x1 - ix + nx, y1 - iy + ny);
+    cb.restoreState();
   }
 
   /** The critical-brace marker: a small filled black square. */

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import org.bracewalk.app.verdict.KeepOffZone;
 import org.bracewalk.app.verdict.Verdict;
+import org.bracewalk.core.analysis.FreedomKind;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.port.report.PlaneSection;
 
 /**
@@ -25,6 +27,31 @@ final class KeepOffLines {
       verdict(p).keepOffZone().ifPresent(z -> lines.add(line(p.name(), z, w)));
     }
     return lines;
+  }
+
+  /**
+   * The lines that follow the keep-off lines on page 1: per plane, the joints with no sideways
+   * restraint (an engineer's check before loading), then the loose member ends.
+   */
+  static List<String> restraint(List<PlaneSection> planes, Wording w) {
+    List<String> lines = new ArrayList<>();
+    for (PlaneSection p : planes) {
+      List<Joint> restraint = joints(p, FreedomKind.LOST_RESTRAINT);
+      if (!restraint.isEmpty()) {
+        lines.add(w.format("summary.alert.restraint", "plane", p.name(), "joints",
+            w.joints(restraint)));
+      }
+      List<Joint> loose = joints(p, FreedomKind.LOOSE_END);
+      if (!loose.isEmpty()) {
+        lines.add(w.format("summary.alert.loose", "plane", p.name(), "joints", w.joints(loose)));
+      }
+    }
+    return lines;
+  }
+
+  private static List<Joint> joints(PlaneSection p, FreedomKind kind) {
+    return FrameLooks.freedoms(p, kind).stream().flatMap(f -> f.joints().stream()).sorted()
+        .distinct().toList();
   }
 
   private static String line(String plane, KeepOffZone z, Wording w) {

@@ -9,29 +9,47 @@ final class Legend {
     "design", "sound", "damaged-effective", "damaged-ineffective", "missing", "extra",
     "not-inspected", "opening", "critical", "repair", "part", "tension"
   };
+  /** The frame entries, shown where a plane's frame is not whole or is named. */
+  private static final String[] FRAME_ENTRIES = {
+    "frame-damaged", "frame-ineffective", "frame-missing", "frame-omitted", "frame-extra",
+    "frame-not-inspected", "lost-restraint", "loose-end"
+  };
   private static final float ROW = 11f;
   private static final int COLUMNS = 2;
 
   private Legend() {}
 
-  static float height() {
-    return 12f + ROW * ((ENTRIES.length + COLUMNS - 1) / COLUMNS) + 2f;
+  static float height(boolean frame) {
+    return 12f + ROW * ((entries(frame).length + COLUMNS - 1) / COLUMNS) + 2f;
   }
 
-  /** Draws the key with its top-left corner at (x, top). */
+  private static String[] entries(boolean frame) {
+    if (!frame) {
+      return ENTRIES;
+    }
+    String[] all = java.util.Arrays.copyOf(ENTRIES, ENTRIES.length + FRAME_ENTRIES.length);
+    System.arraycopy(FRAME_ENTRIES, 0, all, ENTRIES.length, FRAME_ENTRIES.length);
+    return all;
+  }
+
+  /**
+   * Draws the key with its top-left corner at (x, top); with {@code frame}, the frame members'
+   * states and the marks of joints too.
+   */
   static void draw(PdfContentByte cb, Wording w, BaseFont font, BaseFont bold, float x, float top,
-      float width) {
+      float width, boolean frame) {
+    String[] entries = entries(frame);
     Glyphs.text(cb, bold, 7.5f, Palette.GRID, PdfContentByte.ALIGN_LEFT, w.text("legend.title"),
         x, top - 8f);
     float colW = width / COLUMNS;
-    for (int k = 0; k < ENTRIES.length; k++) {
+    for (int k = 0; k < entries.length; k++) {
       int row = k / COLUMNS;
       int col = k % COLUMNS;
       float sx = x + col * colW;
       float sy = top - 12f - row * ROW - ROW / 2;
-      sample(cb, font, bold, ENTRIES[k], sx, sy);
+      sample(cb, font, bold, entries[k], sx, sy);
       Glyphs.text(cb, font, 6.3f, Palette.GRID, PdfContentByte.ALIGN_LEFT,
-          w.text("legend." + ENTRIES[k]), sx + 30f, sy - 2.2f);
+          w.text("legend." + entries[k]), sx + 30f, sy - 2.2f);
     }
   }
 
@@ -79,9 +97,42 @@ final class Legend {
         ElevationDrawing.members(cb, org.bracewalk.core.model.Diagonal.RISING,
             org.bracewalk.core.model.MemberKind.TENSION_ONLY, x0, y0, x1, y1, 0f);
       }
+      case "frame-damaged" -> frame(cb, font, FrameLooks.Look.DAMAGED, x0, x1, cy);
+      case "frame-ineffective" -> frame(cb, font, FrameLooks.Look.INEFFECTIVE, x0, x1, cy);
+      case "frame-missing" -> frame(cb, font, FrameLooks.Look.MISSING, x0, x1, cy);
+      case "frame-omitted" -> frame(cb, font, FrameLooks.Look.OMITTED, x0, x1, cy);
+      case "frame-extra" -> frame(cb, font, FrameLooks.Look.EXTRA, x0, x1, cy);
+      case "frame-not-inspected" -> frame(cb, font, FrameLooks.Look.NOT_INSPECTED, x0, x1, cy);
+      case "lost-restraint" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.SOUND, 0.7f);
+        cb.setColorStroke(Palette.GRID);
+        Glyphs.line(cb, x0 + 13, y0 - 1, x0 + 13, y1 + 1);
+        Glyphs.lostRestraint(cb, x0 + 13, cy, 2.6f, true);
+      }
+      case "loose-end" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.SOUND, 0.7f);
+        cb.setColorStroke(Palette.GRID);
+        Glyphs.line(cb, x0 + 2, cy, x0 + 13, cy);
+        Glyphs.looseEnd(cb, x0 + 13, cy, 3.2f);
+      }
       default -> throw new IllegalArgumentException(entry);
     }
     cb.restoreState();
+  }
+
+  /** A horizontal frame member drawn in its look, as on the elevation. */
+  private static void frame(PdfContentByte cb, BaseFont font, FrameLooks.Look look, float x0,
+      float x1, float cy) {
+    cb.saveState();
+    Glyphs.stroke(cb, look.stroke, 1f);
+    Glyphs.line(cb, x0, cy, x1, cy);
+    cb.restoreState();
+    if (look == FrameLooks.Look.OMITTED) {
+      Glyphs.endTicks(cb, x0, cy, x1, cy, 5f);
+    }
+    if (look.mark != Glyphs.Mark.NONE) {
+      Glyphs.mark(cb, font, look.mark, (x0 + x1) / 2, cy, 2.8f);
+    }
   }
 
   /** A member in {@code stroke}, with {@code mark} at its middle (none for {@link Glyphs.Mark#NONE}). */

@@ -2,14 +2,16 @@ package org.bracewalk.report;
 
 import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfTemplate;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.core.port.report.RepairStep;
 import org.bracewalk.core.port.report.RepairStepKind;
 
 /**
- * A small elevation of a plane, to scale, with the panel of one action filled and ringed (or, to
- * take out of service, the whole lifts hatched), so a crew finds the place on the structure.
+ * A small elevation of a plane, to scale, with the panel of one action filled and ringed (a frame
+ * member drawn heavy and ringed; to take out of service, the whole lifts hatched), so a crew finds
+ * the place on the structure.
  */
 final class LocatorDrawing {
   private LocatorDrawing() {}
@@ -70,7 +72,20 @@ final class LocatorDrawing {
         t.stroke();
       }
     }
-    if (a.type() != RepairStepKind.TAKE_OUT_OF_SERVICE) {
+    if (a.isFrameMember()) {
+      FrameRef f = a.frameMember();
+      if (f.within(g)) {
+        float[] seg = ElevationDrawing.segment(f, xs, ys);
+        t.setColorStroke(Palette.REPAIR);
+        t.setLineWidth(2.6f);
+        Glyphs.line(t, seg[0], seg[1], seg[2], seg[3]);
+        float span = (float) Math.hypot(seg[2] - seg[0], seg[3] - seg[1]);
+        t.setColorStroke(Palette.LOST);
+        t.setLineWidth(1.2f);
+        t.circle((seg[0] + seg[2]) / 2, (seg[1] + seg[3]) / 2, span * 0.5f + 4f);
+        t.stroke();
+      }
+    } else if (a.type() != RepairStepKind.TAKE_OUT_OF_SERVICE) {
       int i = a.panel().lift();
       int j = a.panel().bay();
       if (i <= m && j <= n) {

@@ -39,12 +39,16 @@ final class Parts {
       if (b.fixed() || !lettered) {
         parts.add(new Part("", b, false, -1));
       } else {
-        String letter = k < 26 ? String.valueOf((char) ('A' + k)) : String.valueOf(k + 1);
-        parts.add(new Part(letter, b, true, k));
+        parts.add(new Part(letter(k), b, true, k));
         k++;
       }
     }
     return parts;
+  }
+
+  /** The letter of the {@code k}-th swaying part (from 0): A, B, ..., then numbers. */
+  static String letter(int k) {
+    return k < 26 ? String.valueOf((char) ('A' + k)) : String.valueOf(k + 1);
   }
 
   /** The part the mechanism sketch moves: the first that sways, or on a free plane the second. */

@@ -17,6 +17,7 @@ import java.io.OutputStream;
 import java.util.HashMap;
 import java.util.Map;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.port.RenderingException;
 import org.bracewalk.core.port.RepairOrderRenderer;
 import org.bracewalk.core.port.report.PlaneSection;
@@ -46,8 +47,10 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
     ReportHeader h = order.header();
     Wording w = new Wording(t, h);
     Map<String, PlaneGrid> grids = new HashMap<>();
+    Map<String, PlaneRole> roles = new HashMap<>();
     for (PlaneSection p : order.planes()) {
       grids.put(p.name(), p.design().grid());
+      roles.put(p.name(), p.role());
     }
     for (RepairStep a : order.actions()) {
       if (!grids.containsKey(a.plane())) {
@@ -84,6 +87,10 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
         doc.add(pdf.box(Palette.ALERT_FILL, Palette.LOST,
             new Paragraph(keepOff, pdf.boldFont(9.5f, Palette.LOST))));
       }
+      for (String restraint : KeepOffLines.restraint(order.planes(), w)) {
+        doc.add(pdf.box(Palette.ALERT_FILL, Palette.DAMAGED,
+            new Paragraph(restraint, pdf.boldFont(9f, Palette.DAMAGED))));
+      }
       if (order.actions().isEmpty()) {
         doc.add(pdf.para(w.text("order.none"), 10f));
       } else {
@@ -100,7 +107,7 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
           table.addCell(pdf.headCell(w.text("order.col." + k)));
         }
         for (RepairStep a : order.actions()) {
-          row(table, writer, pdf, w, a, grids.get(a.plane()));
+          row(table, writer, pdf, w, a, grids.get(a.plane()), roles.get(a.plane()));
         }
         doc.add(table);
       }
@@ -118,18 +125,23 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
   }
 
   private static void row(PdfPTable table, PdfWriter writer, Pdf pdf, Wording w, RepairStep a,
-      PlaneGrid grid) throws DocumentException {
+      PlaneGrid grid, PlaneRole role) throws DocumentException {
+    if (a.isFrameMember() && !a.frameMember().within(grid)) {
+      throw new RenderingException("repair order action " + a.number() + " names the "
+          + a.frameMember() + ", outside the " + grid.lifts() + " x " + grid.bays() + " plane '"
+          + a.plane() + "'");
+    }
     boolean urgent = a.priority() == RepairUrgency.ISOLATE
         || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY;
     Font f = urgent ? pdf.boldFont(8.5f, Palette.LOST) : pdf.font(8.5f);
     PdfPCell number = pdf.cell(String.valueOf(a.number()), pdf.boldFont(13f));
     number.setHorizontalAlignment(Element.ALIGN_CENTER);
     table.addCell(number);
-    table.addCell(pdf.cell(PdfReportRenderer.location(w, a), pdf.boldFont(8.5f, Palette.GRID)));
+    table.addCell(pdf.cell(PdfReportRenderer.location(w, a, role), pdf.boldFont(8.5f, Palette.GRID)));
     Phrase what = new Phrase(w.code("action", a.type().code()), pdf.boldFont(9.5f,
         urgent ? Palette.LOST : Palette.INK));
-    if (a.member() != null) {
-      what.add(new Phrase("\n" + w.member(a.member()), pdf.font(8.5f)));
+    if (a.member() != null || a.isFrameMember()) {
+      what.add(new Phrase("\n" + PdfReportRenderer.member(w, a, role), pdf.font(8.5f)));
     }
     what.add(new Phrase("\n" + PdfReportRenderer.priority(w, a), f));
     if (a.deviation()) {

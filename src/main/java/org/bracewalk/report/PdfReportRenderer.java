@@ -21,8 +21,12 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.bracewalk.core.analysis.AsBuiltAnalysis;
+import org.bracewalk.core.analysis.Freedom;
+import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.PlacedBrace;
 import org.bracewalk.core.analysis.StateAnalysis;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
@@ -111,9 +115,11 @@ public final class PdfReportRenderer implements ReportRenderer {
       doc.open();
       firstPage();
       Map<String, Map<PanelRef, List<Integer>>> actionsAt = actionsAt(r.actions());
+      Map<String, Map<FrameRef, List<Integer>>> frameActionsAt = frameActionsAt(r.actions());
       for (PlaneSection plane : r.planes()) {
         doc.newPage();
-        planePage(plane, actionsAt.getOrDefault(plane.name(), Map.of()));
+        planePage(plane, actionsAt.getOrDefault(plane.name(), Map.of()),
+            frameActionsAt.getOrDefault(plane.name(), Map.of()));
       }
       doc.newPage();
       findings();
@@ -149,7 +155,9 @@ public final class PdfReportRenderer implements ReportRenderer {
       List<String> depends = new ArrayList<>();
       for (PlaneSection p : r.planes()) {
         VerdictKind kind = KeepOffLines.verdict(p).kind();
-        if (kind.lost()) {
+        if (kind.lost() && kind != VerdictKind.LOST_RESTRAINT) {
+          // a plane whose only freedoms are joints without sideways restraint is named on its
+          // own line below (an engineer's check before loading), not as a collapse
           lost.add(p.name());
         } else if (kind == VerdictKind.DEPENDS_ON_UNSEEN || kind == VerdictKind.NOT_INSPECTED) {
           depends.add(p.name());
@@ -169,11 +177,16 @@ public final class PdfReportRenderer implements ReportRenderer {
       for (String keepOff : KeepOffLines.of(r.planes(), w)) {
         lines.add(new Paragraph(keepOff, pdf.boldFont(9.5f, Palette.LOST)));
       }
+      boolean frameLines = false;
+      for (String restraint : KeepOffLines.restraint(r.planes(), w)) {
+        lines.add(new Paragraph(restraint, pdf.boldFont(9f, Palette.DAMAGED)));
+        frameLines = true;
+      }
       if (lines.isEmpty()) {
         lines.add(new Paragraph(
             w.format("summary.alert.none", "total", r.planes().size()), pdf.boldFont(10f)));
       }
-      boolean bad = !lost.isEmpty() || !depends.isEmpty();
+      boolean bad = !lost.isEmpty() || !depends.isEmpty() || frameLines;
       doc.add(pdf.box(bad ? Palette.ALERT_FILL : Palette.OK_FILL, bad ? Palette.LOST : Palette.REPAIR,
           lines.toArray(new Element[0])));
     }
@@ -285,7 +298,10 @@ public final class PdfReportRenderer implements ReportRenderer {
         lines.add(w.format("particulars.action.order", "id", o.id(), "at", w.dateTime(o.createdAt()),
             "by", o.createdBy(), "note", o.note()).strip());
         for (RecordedOrder.Action a : o.actions()) {
-          String where = a.panel() == null
+          String where = a.frameMember() != null
+              ? w.format("particulars.action.frame", "plane", a.plane(), "member",
+                  w.frameMember(a.frameMember(), roleOf(a.plane())))
+              : a.panel() == null
               ? w.format("particulars.action.plane", "plane", a.plane())
               : w.format("repairs.location", "plane", a.plane(), "lift", a.panel().lift(), "bay",
                   a.panel().bay());
@@ -312,8 +328,13 @@ public final class PdfReportRenderer implements ReportRenderer {
 
     // ---- plane pages ------------------------------------------------------------------------
 
-    private void planePage(PlaneSection plane, Map<PanelRef, List<Integer>> actionsAt)
-        throws DocumentException {
+    private org.bracewalk.core.model.PlaneRole roleOf(String plane) {
+      return r.planes().stream().filter(p -> p.name().equals(plane)).findFirst()
+          .map(PlaneSection::role).orElse(org.bracewalk.core.model.PlaneRole.OTHER);
+    }
+
+    private void planePage(PlaneSection plane, Map<PanelRef, List<Integer>> actionsAt,
+        Map<FrameRef, List<Integer>> frameActionsAt) throws DocumentException {
       PlaneGrid g = plane.design().grid();
       StateAnalysis design = plane.analysis().design();
       StateAnalysis state = plane.analysis().analysedState();
@@ -370,13 +391,49 @@ public final class PdfReportRenderer implements ReportRenderer {
           doc.add(p);
         }
       }
+      if (parts.stream().noneMatch(Parts.Part::sways)) {
+        List<Freedom> sways = FrameLooks.freedoms(plane, FreedomKind.SWAY);
+        for (int k = 0; k < sways.size(); k++) {
+          Freedom f = sways.get(k);
+          Paragraph p = new Paragraph(w.format("plane.freedom.sway", "letter", Parts.letter(k),
+              "count", f.count(), "levels", listOrNone(f.joints().stream().map(Joint::level).toList()),
+              "lines", listOrNone(f.joints().stream().map(Joint::line).toList())),
+              pdf.boldFont(8.5f, Palette.LOST));
+          p.setIndentationLeft(8f);
+          doc.add(p);
+        }
+      }
+      List<Freedom> others = state.freedoms().stream()
+          .filter(f -> f.kind() != FreedomKind.SWAY).toList();
+      for (Freedom f : others) {
+        String key = f.kind() == FreedomKind.LOST_RESTRAINT ? "plane.freedom.lost-restraint"
+            : "plane.freedom.loose-end";
+        Paragraph p = new Paragraph(w.format(key, "joint", w.joints(f.joints()), "members",
+            w.freedomMembers(f, plane.role())), pdf.boldFont(8.5f, Palette.DAMAGED));
+        p.setIndentationLeft(8f);
+        doc.add(p);
+      }
+      if (others.stream().anyMatch(f -> f.kind() == FreedomKind.LOST_RESTRAINT)) {
+        doc.add(pdf.para(w.text("plane.freedom.model"), 7.5f));
+      }
       doc.add(pdf.para(state.criticalBraces().isEmpty() ? w.text("plane.critical.none")
           : w.format("plane.critical", "panels", w.panels(state.criticalBraces())), 8.5f));
+      if (!state.criticalMembers().isEmpty()) {
+        doc.add(pdf.para(w.format("plane.critical.members", "members",
+            w.frameMembers(state.criticalMembers(), plane.role())), 8.5f));
+      }
+      if (!plane.design().frameComplete()) {
+        doc.add(pdf.para(w.format("plane.frame.omitted", "members",
+            w.frameMembers(List.copyOf(plane.design().sortedOmittedFrame()), plane.role())), 8.5f));
+      }
       plane.analysis().asBuilt().ifPresent(ab -> {
         if (ab.unknownPanels() > 0) {
           add(pdf.para(w.format("plane.uninspected", "count", ab.unknownPanels(), "verdict",
               w.text(ab.rigidIfUnknownSound() ? "verdict.holds-shape" : "verdict.lost-rigidity")),
               8.5f));
+        }
+        if (ab.unknownFrameMembers() > 0) {
+          add(pdf.para(w.format("plane.frame.unknown", "count", ab.unknownFrameMembers()), 8.5f));
         }
         if (!ab.extraBraces().isEmpty()) {
           add(pdf.para(w.format("plane.extra", "panels",
@@ -389,19 +446,26 @@ public final class PdfReportRenderer implements ReportRenderer {
               .filter(a -> a.plane().equals(plane.name())
                   && a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY)
               .map(RepairStep::number).toList();
-          doc.add(pdf.para(w.format("plane.repair", "count", plane.analysis().repair().minimum(),
-              "actions", Wording.ranges(numbers)), 8.5f));
+          int members = plane.analysis().repair().members().size();
+          doc.add(pdf.para(members == 0
+              ? w.format("plane.repair", "count", plane.analysis().repair().minimum(),
+                  "actions", Wording.ranges(numbers))
+              : w.format("plane.repair.members", "count", plane.analysis().repair().minimum(),
+                  "members", members, "actions", Wording.ranges(numbers)), 8.5f));
         } else {
           doc.add(new Paragraph(w.text("plane.repair.impossible"), pdf.boldFont(8.5f, Palette.LOST)));
         }
-        if (moving != null && state.degreesOfFreedom() > 1) {
+        if ((moving != null || plane.sketch() != null) && state.degreesOfFreedom() > 1) {
           doc.add(pdf.para(w.format("mechanism.more", "n", state.degreesOfFreedom()), 8.5f));
         }
-        if (moving == null && state.oneWayOnly()) {
+        if (moving == null && plane.sketch() == null && state.oneWayOnly()) {
           doc.add(pdf.para(w.text("mechanism.one-way"), 8.5f));
         }
       }
-      drawings(plane, actionsAt, moving);
+      if (plane.showsFrame()) {
+        doc.add(pdf.para(w.text("plane.frame.naming"), 7.5f));
+      }
+      drawings(plane, actionsAt, frameActionsAt, moving);
     }
 
     private void add(Element e) {
@@ -413,13 +477,19 @@ public final class PdfReportRenderer implements ReportRenderer {
     }
 
     private void drawings(PlaneSection plane, Map<PanelRef, List<Integer>> actionsAt,
-        Parts.Part moving) throws DocumentException {
+        Map<FrameRef, List<Integer>> frameActionsAt, Parts.Part moving) throws DocumentException {
       float width = doc.right() - doc.left();
-      float mechMin = moving == null ? 0 : 190;
-      float legendH = Legend.height();
+      boolean sketch = moving != null || plane.sketch() != null;
+      float mechMin = sketch ? 190 : 0;
+      boolean frame = plane.showsFrame();
+      float legendH = Legend.height(frame);
       float top = writer.getVerticalPosition(true) - 6;
       float room = top - doc.bottom() - legendH - mechMin - 12;
-      if (room < 150) {
+      // a page of words (a frame's freedoms and members) leaves the drawing too little room: give
+      // it a page of its own rather than shrink it below what it would take there (to 260 points)
+      float wanted = Math.min(260f, ElevationDrawing.preferredHeight(plane.design().grid(), width,
+          doc.top() - doc.bottom() - legendH - mechMin - 12));
+      if (room < Math.max(150f, wanted)) {
         doc.newPage();
         writer.setPageEmpty(false);
         top = doc.top();
@@ -428,16 +498,23 @@ public final class PdfReportRenderer implements ReportRenderer {
       PdfContentByte cb = writer.getDirectContent();
       PlaneGrid g = plane.design().grid();
       float elevH = ElevationDrawing.preferredHeight(g, width,
-          moving == null ? room : Math.min(room, (top - doc.bottom() - legendH) * 0.58f));
+          !sketch ? room : Math.min(room, (top - doc.bottom() - legendH) * 0.58f));
       new ElevationDrawing(w, pdf.regular, pdf.bold)
-          .draw(cb, plane, actionsAt, doc.left(), top - elevH, width, elevH);
+          .draw(cb, plane, actionsAt, frameActionsAt, doc.left(), top - elevH, width, elevH);
       float legendTop = top - elevH - 6;
-      Legend.draw(cb, w, pdf.regular, pdf.bold, doc.left(), legendTop, width);
-      if (moving != null) {
+      Legend.draw(cb, w, pdf.regular, pdf.bold, doc.left(), legendTop, width, frame);
+      if (sketch) {
         float mechTop = legendTop - legendH - 6;
         float mechH = Math.min(mechTop - doc.bottom(), 300);
-        new MechanismDrawing(w, pdf.regular, pdf.bold)
-            .draw(cb, plane, moving, doc.left(), mechTop - mechH, width, mechH);
+        MechanismDrawing md = new MechanismDrawing(w, pdf.regular, pdf.bold);
+        if (plane.sketch() != null) {
+          List<Freedom> sways = FrameLooks.freedoms(plane, FreedomKind.SWAY);
+          int k = sways.indexOf(plane.sketch().freedom());
+          md.drawMotion(cb, plane, plane.sketch(), Parts.letter(Math.max(0, k)), doc.left(),
+              mechTop - mechH, width, mechH);
+        } else {
+          md.draw(cb, plane, moving, doc.left(), mechTop - mechH, width, mechH);
+        }
       }
     }
 
@@ -457,8 +534,12 @@ public final class PdfReportRenderer implements ReportRenderer {
       }
       Font f = pdf.font(7.5f);
       for (Finding fd : r.findings()) {
-        t.addCell(pdf.cell(w.format("findings.location", "plane", fd.plane(), "lift",
-            fd.panel().lift(), "bay", fd.panel().bay()), pdf.boldFont(7.5f, Palette.GRID)));
+        String where = fd.isFrameMember()
+            ? w.format("findings.location.frame", "plane", fd.plane(), "member",
+                w.frameMember(fd.frameMember(), roleOf(fd.plane())))
+            : w.format("findings.location", "plane", fd.plane(), "lift", fd.panel().lift(), "bay",
+                fd.panel().bay());
+        t.addCell(pdf.cell(where, pdf.boldFont(7.5f, Palette.GRID)));
         t.addCell(pdf.cell(w.code("state", fd.state().label()), f));
         t.addCell(pdf.cell(fd.defect().isEmpty() ? "" : w.code("defect", fd.defect()), f));
         if (fd.bowMm() != null && fd.bow() == null) {
@@ -528,9 +609,10 @@ public final class PdfReportRenderer implements ReportRenderer {
             || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY;
         Font f = urgent ? pdf.boldFont(8f, Palette.LOST) : pdf.font(8f);
         t.addCell(pdf.cell(String.valueOf(a.number()), pdf.boldFont(8f)));
-        t.addCell(pdf.cell(location(w, a), f));
+        org.bracewalk.core.model.PlaneRole role = roleOf(a.plane());
+        t.addCell(pdf.cell(location(w, a, role), f));
         t.addCell(pdf.cell(w.code("action", a.type().code()), f));
-        t.addCell(pdf.cell(w.member(a.member()), pdf.font(8f)));
+        t.addCell(pdf.cell(member(w, a, role), pdf.font(8f)));
         Phrase when = new Phrase(priority(w, a), f);
         if (a.deviation()) {
           when.add(new Phrase("\n" + w.text("repairs.deviation"), pdf.boldFont(7f, Palette.EXTRA)));
@@ -592,7 +674,19 @@ public final class PdfReportRenderer implements ReportRenderer {
     }
   }
 
-  static String location(Wording w, RepairStep a) {
+  /** What an action fits or mends: the diagonal, or the frame member's word (ledger, upright...). */
+  static String member(Wording w, RepairStep a, org.bracewalk.core.model.PlaneRole role) {
+    if (a.isFrameMember()) {
+      return w.text("frame." + a.frameMember().type().label() + "." + w.frameWords(role));
+    }
+    return w.member(a.member());
+  }
+
+  static String location(Wording w, RepairStep a, org.bracewalk.core.model.PlaneRole role) {
+    if (a.isFrameMember()) {
+      return w.format("repairs.location.frame", "plane", a.plane(), "member",
+          w.frameMember(a.frameMember(), role));
+    }
     if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE && a.lifts().size() == 1) {
       return w.format("repairs.location.lift", "plane", a.plane(), "lift", a.lifts().get(0));
     }
@@ -608,11 +702,24 @@ public final class PdfReportRenderer implements ReportRenderer {
     return w.format("priority." + a.priority().code(), "due", due);
   }
 
+  /** The action numbers that concern each frame member, per plane. */
+  static Map<String, Map<FrameRef, List<Integer>>> frameActionsAt(List<RepairStep> actions) {
+    Map<String, Map<FrameRef, List<Integer>>> out = new HashMap<>();
+    for (RepairStep a : actions) {
+      if (a.isFrameMember()) {
+        out.computeIfAbsent(a.plane(), k -> new HashMap<>())
+            .computeIfAbsent(a.frameMember(), k -> new ArrayList<>())
+            .add(a.number());
+      }
+    }
+    return out;
+  }
+
   /** The action numbers that concern each panel, per plane (taking out of service excluded). */
   static Map<String, Map<PanelRef, List<Integer>>> actionsAt(List<RepairStep> actions) {
     Map<String, Map<PanelRef, List<Integer>>> out = new HashMap<>();
     for (RepairStep a : actions) {
-      if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE) {
+      if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE || a.isFrameMember()) {
         continue;
       }
       out.computeIfAbsent(a.plane(), k -> new HashMap<>())

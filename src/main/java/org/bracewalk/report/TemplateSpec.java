@@ -1,6 +1,7 @@
 package org.bracewalk.report;
 
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.bracewalk.core.model.DefectType;
@@ -22,6 +23,12 @@ final class TemplateSpec {
 
   /** The structure kinds the documents know. */
   static final Set<String> KINDS = Set.of("scaffold", "racking", "other");
+
+  /**
+   * The vocabularies of frame members: scaffold (ledger, standard), racking (beam, upright) and a
+   * racking upright frame (horizontal, upright).
+   */
+  static final List<String> FRAME_WORDS = List.of("scaffold", "racking", "upright-frame");
 
   private static final Map<String, Set<String>> KEYS = build();
 
@@ -107,6 +114,8 @@ final class TemplateSpec {
     k.put("tolerance.at-least", Set.of("n"));
     k.put("summary.alert.keepoff", Set.of("plane", "lifts", "bays"));
     k.put("summary.alert.keepoff.beside", Set.of("plane", "lifts", "bays"));
+    k.put("summary.alert.restraint", Set.of("plane", "joints"));
+    k.put("summary.alert.loose", Set.of("plane", "joints"));
     for (VerdictKind v : VerdictKind.values()) {
       k.put("verdict." + v.code(), Set.of());
     }
@@ -128,8 +137,27 @@ final class TemplateSpec {
     k.put("plane.design.no-author", Set.of("number", "date"));
     k.put("plane.critical", Set.of("panels"));
     k.put("plane.critical.none", Set.of());
+    k.put("plane.critical.members", Set.of("members"));
+    k.put("plane.frame.naming", Set.of());
+    k.put("plane.frame.omitted", Set.of("members"));
+    k.put("plane.frame.unknown", Set.of("count"));
+    k.put("plane.freedom.sway", Set.of("letter", "count", "levels", "lines"));
+    k.put("plane.freedom.lost-restraint", Set.of("joint", "members"));
+    k.put("plane.freedom.loose-end", Set.of("joint", "members"));
+    k.put("plane.freedom.model", Set.of());
+    for (String type : new String[] {"ledger", "standard"}) {
+      for (String words : FRAME_WORDS) {
+        k.put("frame." + type + "." + words, Set.of());
+      }
+    }
+    k.put("frame.place.ledger", Set.of("member", "level", "bay"));
+    k.put("frame.place.standard", Set.of("member", "lift", "line"));
+    k.put("frame.joint", Set.of("level", "line"));
+    k.put("frame.diagonal", Set.of("panel"));
+    k.put("frame.and", Set.of("first", "second"));
     k.put("plane.uninspected", Set.of("count", "verdict"));
     k.put("plane.repair", Set.of("count", "actions"));
+    k.put("plane.repair.members", Set.of("count", "members", "actions"));
     k.put("plane.repair.impossible", Set.of());
     k.put("plane.extra", Set.of("panels"));
     k.put("list.none", Set.of());
@@ -144,11 +172,18 @@ final class TemplateSpec {
     k.put("mechanism.note", Set.of("angle"));
     k.put("mechanism.one-way", Set.of());
     k.put("mechanism.more", Set.of("n"));
+    k.put("mechanism.title.motion", Set.of("part"));
+    k.put("mechanism.title.motion.free", Set.of("part"));
+    k.put("mechanism.title.restraint", Set.of("joint"));
+    k.put("mechanism.title.loose", Set.of("joint"));
+    k.put("mechanism.note.motion", Set.of("percent"));
     k.put("legend.title", Set.of());
     for (String s :
         new String[] {
           "design", "sound", "damaged-effective", "damaged-ineffective", "missing", "extra",
-          "not-inspected", "opening", "critical", "repair", "part", "tension"
+          "not-inspected", "opening", "critical", "repair", "part", "tension", "frame-damaged",
+          "frame-ineffective", "frame-missing", "frame-omitted", "frame-extra",
+          "frame-not-inspected", "lost-restraint", "loose-end"
         }) {
       k.put("legend." + s, Set.of());
     }
@@ -162,6 +197,7 @@ final class TemplateSpec {
     k.put("findings.col.note", Set.of());
     k.put("findings.col.photos", Set.of());
     k.put("findings.location", Set.of("plane", "lift", "bay"));
+    k.put("findings.location.frame", Set.of("plane", "member"));
     k.put("findings.measurement", Set.of("bow", "gauge", "limit"));
     k.put("findings.measurement.plain", Set.of("bow", "gauge"));
     for (DefectType d : DefectType.values()) {
@@ -189,6 +225,7 @@ final class TemplateSpec {
     k.put("repairs.location", Set.of("plane", "lift", "bay"));
     k.put("repairs.location.lifts", Set.of("plane", "lifts"));
     k.put("repairs.location.lift", Set.of("plane", "lift"));
+    k.put("repairs.location.frame", Set.of("plane", "member"));
     k.put("repairs.deviation", Set.of());
     for (RepairStepKind a : RepairStepKind.values()) {
       k.put("action." + a.code(), Set.of());
@@ -202,6 +239,7 @@ final class TemplateSpec {
       }
     }
     k.put("member.none", Set.of());
+    k.put("particulars.action.frame", Set.of("plane", "member"));
     // sign-off and digests
     k.put("heading.signoff", Set.of());
     k.put("signoff.text", Set.of());

@@ -2,9 +2,14 @@ package org.bracewalk.report;
 
 import java.time.Instant;
 import java.time.LocalDate;
+import java.util.ArrayList;
 import java.util.List;
+import org.bracewalk.core.analysis.Freedom;
 import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.port.report.LengthUnits;
 import org.bracewalk.core.port.report.ReportHeader;
 
@@ -133,6 +138,71 @@ final class Wording {
       return t.text("member.none");
     }
     return t.text("member." + b.diagonal().name().toLowerCase(java.util.Locale.ROOT) + "." + b.kind().label());
+  }
+
+  /**
+   * The frame vocabulary of a plane: scaffold words (ledger, standard) unless the structure is
+   * racking (beam, upright; an upright frame's horizontals are horizontals).
+   */
+  String frameWords(PlaneRole role) {
+    if (!header.racking()) {
+      return "scaffold";
+    }
+    return role == PlaneRole.UPRIGHT_FRAME ? "upright-frame" : "racking";
+  }
+
+  /** "ledger at level 3, bay 2", "upright of lift 2 on line 1", in the plane's vocabulary. */
+  String frameMember(FrameRef f, PlaneRole role) {
+    String word = t.text("frame." + f.type().label() + "." + frameWords(role));
+    return f.isLedger()
+        ? t.format("frame.place.ledger", "member", word, "level", f.first(), "bay", f.second())
+        : t.format("frame.place.standard", "member", word, "lift", f.first(), "line", f.second());
+  }
+
+  /** Frame members in words, cut after a reasonable number with "and N more". */
+  String frameMembers(List<FrameRef> members, PlaneRole role) {
+    return cut(members.stream().map(f -> frameMember(f, role)).toList());
+  }
+
+  String joint(Joint j) {
+    return t.format("frame.joint", "level", j.level(), "line", j.line());
+  }
+
+  /** Joints in words ("level 1, line 0; level 2, line 3"), cut after a reasonable number. */
+  String joints(List<Joint> joints) {
+    if (joints.isEmpty()) {
+      return t.text("list.none");
+    }
+    List<String> words = joints.stream().map(this::joint).toList();
+    int shown = Math.min(words.size(), LIST_LIMIT);
+    String out = String.join("; ", words.subList(0, shown));
+    return words.size() > shown
+        ? out + "; " + t.format("list.and-more", "n", words.size() - shown) : out;
+  }
+
+  /** The members a freedom names (frame members, then diagonals), joined with "and". */
+  String freedomMembers(Freedom f, PlaneRole role) {
+    List<String> parts = new ArrayList<>();
+    f.members().forEach(m -> parts.add(frameMember(m, role)));
+    f.diagonals().forEach(p -> parts.add(t.format("frame.diagonal", "panel", panel(p))));
+    if (parts.isEmpty()) {
+      return t.text("list.none");
+    }
+    String out = parts.get(0);
+    for (int i = 1; i < parts.size(); i++) {
+      out = t.format("frame.and", "first", out, "second", parts.get(i));
+    }
+    return out;
+  }
+
+  private String cut(List<String> words) {
+    if (words.isEmpty()) {
+      return t.text("list.none");
+    }
+    int shown = Math.min(words.size(), LIST_LIMIT);
+    String out = String.join(", ", words.subList(0, shown));
+    return words.size() > shown
+        ? out + ", " + t.format("list.and-more", "n", words.size() - shown) : out;
   }
 
   /** A code's wording ({@code prefix.code}); a code the file lacks is an error naming the key. */

@@ -91,15 +91,15 @@ class InspectionScopeCommandsTest {
     assertThat(ok("inspection", "start", "--db", d, "--structure", "1", "--inspector",
         "Priya Danvers", "--position", "racking inspector", "--competent-person", "Priya Danvers",
         "--shift", "early", "--storage-safety-person", "Tom Hale", "--reason", "routine").out())
-        .contains("3");
-    ok("record", "--db", d, "--inspection", "3", "--plane", "frame 2", "--lift",
+        .contains("4");
+    ok("record", "--db", d, "--inspection", "4", "--plane", "frame 2", "--lift",
         "2", "--bay", "1", "--state", "missing");
-    ok("finalise", "--db", d, "--inspection", "3");
+    ok("finalise", "--db", d, "--inspection", "4");
     Path pdf = dir.resolve("inspection-3.pdf");
-    ok("report", "--db", d, "--inspection", "3", "--out", pdf.toString());
-    Run before = run("analyse", "--db", d, "--inspection", "3", "--format", "json");
-    Run beforeText = run("analyse", "--db", d, "--inspection", "3");
-    assertThat(before.out()).contains("\"inspection\": 3").doesNotContain("west return");
+    ok("report", "--db", d, "--inspection", "4", "--out", pdf.toString());
+    Run before = run("analyse", "--db", d, "--inspection", "4", "--format", "json");
+    Run beforeText = run("analyse", "--db", d, "--inspection", "4");
+    assertThat(before.out()).contains("\"inspection\": 4").doesNotContain("west return");
 
     // then the structure changes: a new plane, and a new design revision of frame 2
     Run plane = ok("plane", "create", "--db", d, "--structure", "1", "--name", "west return",
@@ -110,18 +110,18 @@ class InspectionScopeCommandsTest {
     assertThat(revision.out() + revision.err()).contains("2");
 
     // the finalised inspection is what it was, and its issued report verifies
-    assertThat(run("analyse", "--db", d, "--inspection", "3", "--format", "json"))
+    assertThat(run("analyse", "--db", d, "--inspection", "4", "--format", "json"))
         .isEqualTo(before);
-    assertThat(run("analyse", "--db", d, "--inspection", "3")).isEqualTo(beforeText);
+    assertThat(run("analyse", "--db", d, "--inspection", "4")).isEqualTo(beforeText);
     Run verified = run("verify-report", "--db", d, pdf.toString());
     assertThat(verified.code()).as(verified.out() + verified.err()).isZero();
-    assertThat(verified.out()).contains("the records of inspection 3 are as they were then")
+    assertThat(verified.out()).contains("the records of inspection 4 are as they were then")
         .doesNotContain("west return");
 
     // an inspection started now covers the new plane and the new revision
     ok("inspection", "start", "--db", d, "--structure", "1", "--inspector", "Priya Danvers",
         "--reason", "after-alteration");
-    assertThat(run("analyse", "--db", d, "--inspection", "4", "--format", "json").out())
+    assertThat(run("analyse", "--db", d, "--inspection", "5", "--format", "json").out())
         .contains("west return");
   }
 
@@ -130,17 +130,17 @@ class InspectionScopeCommandsTest {
     String d = db.toString();
     ok("inspection", "start", "--db", d, "--structure", "1", "--inspector", "Priya Danvers",
         "--reason", "routine");
-    Run before = run("analyse", "--db", d, "--inspection", "3", "--format", "json");
+    Run before = run("analyse", "--db", d, "--inspection", "4", "--format", "json");
     ok("import", "--db", d, "--plane", "2", "--design", revisedFrame2().toString());
     ok("plane", "create", "--db", d, "--structure", "1", "--name", "west return", "--design",
         "demo-site/maps/racking-frame-2.design.txt");
     // the walk goes on against the design it started with, over the planes it started with
-    assertThat(run("analyse", "--db", d, "--inspection", "3", "--format", "json"))
+    assertThat(run("analyse", "--db", d, "--inspection", "4", "--format", "json"))
         .isEqualTo(before);
     // and a mark on the new plane belongs to a new inspection, said so with the plane's name
-    Run refused = run("record", "--db", d, "--inspection", "3", "--plane",
+    Run refused = run("record", "--db", d, "--inspection", "4", "--plane",
         "west return", "--lift", "1", "--bay", "1", "--state", "sound");
     assertThat(refused.code()).as(refused.out() + refused.err()).isEqualTo(2);
-    assertThat(refused.err()).contains("west return").contains("inspection 3");
+    assertThat(refused.err()).contains("west return").contains("inspection 4");
   }
 }

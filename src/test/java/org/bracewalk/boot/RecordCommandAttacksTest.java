@@ -43,12 +43,12 @@ class RecordCommandAttacksTest {
 
   @BeforeEach
   void twoOpenInspectionsOfTheRackingRun() {
-    // the demo holds inspections 1 and 2 (finalised) and observations 1-65
+    // the demo holds inspections 1-3 (finalised) and observations 1-123
     assertThat(run("demo", "--db", db()).code()).isZero();
     assertThat(run("inspection", "start", "--db", db(), "--structure", "1", "--inspector",
-        "Priya Danvers").out()).contains("inspection 3 started");
-    assertThat(run("inspection", "start", "--db", db(), "--structure", "1", "--inspector",
         "Priya Danvers").out()).contains("inspection 4 started");
+    assertThat(run("inspection", "start", "--db", db(), "--structure", "1", "--inspector",
+        "Priya Danvers").out()).contains("inspection 5 started");
   }
 
   private Run record(String inspection, String... more) {
@@ -77,28 +77,28 @@ class RecordCommandAttacksTest {
 
   @Test
   void aCorrectionNamingAnObservationOfAnotherInspectionIsRefusedNamingBoth() throws Exception {
-    Run first = record("3", "--state", "missing");
-    assertThat(first.out()).contains("observation 66 recorded");
-    Run attack = record("4", "--state", "sound", "--supersedes", "66", "--reason", "misread");
+    Run first = record("4", "--state", "missing");
+    assertThat(first.out()).contains("observation 124 recorded");
+    Run attack = record("5", "--state", "sound", "--supersedes", "124", "--reason", "misread");
     assertThat(attack.code()).as(attack.err()).isEqualTo(2);
-    assertThat(attack.err()).contains("observation 66 is of inspection 3, not of inspection 4");
+    assertThat(attack.err()).contains("observation 124 is of inspection 4, not of inspection 5");
     assertThat(attack.out()).isEmpty();
-    assertThat(run("inspection", "show", "--db", db(), "--inspection", "3").out())
-        .contains("1 observations:");
     assertThat(run("inspection", "show", "--db", db(), "--inspection", "4").out())
+        .contains("1 observations:");
+    assertThat(run("inspection", "show", "--db", db(), "--inspection", "5").out())
         .contains("0 observations:");
     // in the right inspection the same correction is recorded there
-    Run fix = record("3", "--state", "sound", "--supersedes", "66", "--reason", "misread");
+    Run fix = record("4", "--state", "sound", "--supersedes", "124", "--reason", "misread");
     assertThat(fix.code()).as(fix.err()).isZero();
-    assertThat(fix.out()).contains("observation 67 recorded").contains("corrects observation 66");
-    assertThat(count("SELECT inspection_id FROM observations WHERE id = 67")).isEqualTo(3);
+    assertThat(fix.out()).contains("observation 125 recorded").contains("corrects observation 124");
+    assertThat(count("SELECT inspection_id FROM observations WHERE id = 125")).isEqualTo(4);
     // past the program: the database itself refuses a cross-inspection correction
     long before = observations();
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + db());
         Statement s = c.createStatement()) {
       assertThatThrownBy(() -> s.executeUpdate("INSERT INTO observations (inspection_id,"
           + " plane_id, lift, bay, state, recorded_at, supersedes_id, correction_reason)"
-          + " VALUES (4, 2, 1, 2, 'sound', '2025-03-06T10:00:00.000Z', 67, 'sneaked in')"))
+          + " VALUES (5, 2, 1, 2, 'sound', '2025-03-06T10:00:00.000Z', 125, 'sneaked in')"))
           .isInstanceOf(java.sql.SQLException.class);
     }
     assertThat(observations()).isEqualTo(before);
@@ -107,11 +107,11 @@ class RecordCommandAttacksTest {
   @Test
   void aMissingPhotoRecordsNothing() throws Exception {
     Path gone = dir.resolve("IMG_4410.jpg");
-    Run r = record("3", "--state", "missing", "--photo", gone.toString());
+    Run r = record("4", "--state", "missing", "--photo", gone.toString());
     assertThat(r.code()).as(r.err()).isEqualTo(2);
     assertThat(r.err()).contains("error: photo " + gone + ": no such file");
     assertThat(r.out()).isEmpty();
-    assertThat(observations()).isEqualTo(65);
+    assertThat(observations()).isEqualTo(123);
   }
 
   @Test
@@ -120,12 +120,12 @@ class RecordCommandAttacksTest {
     Path justOver = sparse("just-over.jpg", 20L * 1024 * 1024 + 1);
     Path huge = sparse("huge.jpg", 3L << 30);
     for (Path p : List.of(justOver, huge)) {
-      Run r = record("3", "--state", "missing", "--photo", p.toString());
+      Run r = record("4", "--state", "missing", "--photo", p.toString());
       assertThat(r.code()).as(r.err()).isEqualTo(2);
       assertThat(r.err()).contains("error: photo " + p + " holds " + Files.size(p) + " bytes")
           .contains("up to 20 MB");
     }
-    assertThat(observations()).isEqualTo(65);
+    assertThat(observations()).isEqualTo(123);
     assertThat(photos()).isEqualTo(1);
   }
 
@@ -148,13 +148,13 @@ class RecordCommandAttacksTest {
     Path good = png("good.png");
     for (Path p : List.of(text, heic)) {
       // a good photo beside it is not stored either: all or nothing
-      Run r = record("3", "--state", "missing", "--photo", good.toString(), "--photo",
+      Run r = record("4", "--state", "missing", "--photo", good.toString(), "--photo",
           p.toString());
       assertThat(r.code()).as(r.err()).isEqualTo(2);
       assertThat(r.err()).contains("error: photo " + p + " is not a JPEG or PNG picture");
       assertThat(r.out()).isEmpty();
     }
-    assertThat(observations()).isEqualTo(65);
+    assertThat(observations()).isEqualTo(123);
     assertThat(photos()).isEqualTo(1);
   }
 
@@ -166,18 +166,18 @@ class RecordCommandAttacksTest {
     // the media type comes from the bytes: a PNG named .jpg is kept as a PNG
     Path misnamed = dir.resolve("misnamed.jpg");
     Files.copy(png, misnamed);
-    Run r = record("3", "--state", "damaged-ineffective", "--defect", "bent", "--photo",
+    Run r = record("4", "--state", "damaged-ineffective", "--defect", "bent", "--photo",
         png.toString(), "--photo", jpeg.toString(), "--photo", misnamed.toString());
     assertThat(r.code()).as(r.err()).isZero();
-    assertThat(r.out()).contains("observation 66 recorded")
-        .contains("photo 2 attached to observation 66: bay1.png (" + Files.size(png)
+    assertThat(r.out()).contains("observation 124 recorded")
+        .contains("photo 2 attached to observation 124: bay1.png (" + Files.size(png)
             + " bytes, image/png)")
-        .contains("photo 3 attached to observation 66: bay1-close.jpg (" + Files.size(jpeg)
+        .contains("photo 3 attached to observation 124: bay1-close.jpg (" + Files.size(jpeg)
             + " bytes, image/jpeg)")
-        .contains("photo 4 attached to observation 66: misnamed.jpg (" + Files.size(png)
+        .contains("photo 4 attached to observation 124: misnamed.jpg (" + Files.size(png)
             + " bytes, image/png)");
-    assertThat(observations()).isEqualTo(66);
-    assertThat(count("SELECT count(*) FROM photos WHERE observation_id = 66")).isEqualTo(3);
+    assertThat(observations()).isEqualTo(124);
+    assertThat(count("SELECT count(*) FROM photos WHERE observation_id = 124")).isEqualTo(3);
   }
 
   @Test
@@ -185,21 +185,21 @@ class RecordCommandAttacksTest {
     Path csv = dir.resolve("walk.csv");
     Files.writeString(csv, "plane,lift,bay,state,supersedes_row,correction_reason\n"
         + "frame 2,1,1,missing,,\nframe 2,2,1,sound,,\nframe 2,1,1,sound,1,found it\n");
-    Run first = run("record", "--db", db(), "--inspection", "3", "--from", csv.toString());
+    Run first = run("record", "--db", db(), "--inspection", "4", "--from", csv.toString());
     assertThat(first.code()).as(first.err()).isZero();
-    assertThat(first.out()).contains("observation 68 recorded").contains("corrects observation 66");
-    assertThat(first.err()).contains("observations of " + csv + ": 3 recorded in inspection 3");
-    Run again = run("record", "--db", db(), "--inspection", "3", "--from", csv.toString());
+    assertThat(first.out()).contains("observation 126 recorded").contains("corrects observation 124");
+    assertThat(first.err()).contains("observations of " + csv + ": 3 recorded in inspection 4");
+    Run again = run("record", "--db", db(), "--inspection", "4", "--from", csv.toString());
     assertThat(again.code()).as(again.err()).isZero();
     assertThat(again.out()).isEmpty();
     assertThat(again.err()).contains(": 0 recorded, 3 already recorded by an earlier run");
-    assertThat(observations()).isEqualTo(68);
+    assertThat(observations()).isEqualTo(126);
     // the all-or-nothing import knows the rows too
-    Run imported = run("import", "--db", db(), "--inspection", "3", "--csv", csv.toString());
+    Run imported = run("import", "--db", db(), "--inspection", "4", "--csv", csv.toString());
     assertThat(imported.code()).as(imported.err()).isZero();
-    assertThat(imported.out()).contains("imported 0 observations into inspection 3 (3 rows"
+    assertThat(imported.out()).contains("imported 0 observations into inspection 4 (3 rows"
         + " already recorded by an earlier run)");
-    assertThat(observations()).isEqualTo(68);
+    assertThat(observations()).isEqualTo(126);
   }
 
   /** Through the command line: exit 2, and the error says what is recorded (here: nothing). */
@@ -210,7 +210,7 @@ class RecordCommandAttacksTest {
     try (Connection other = DriverManager.getConnection("jdbc:sqlite:" + db());
         Statement lock = other.createStatement()) {
       lock.execute("BEGIN IMMEDIATE");
-      Run r = run("record", "--db", db(), "--inspection", "3", "--from", csv.toString());
+      Run r = run("record", "--db", db(), "--inspection", "4", "--from", csv.toString());
       lock.execute("ROLLBACK");
       assertThat(r.code()).isEqualTo(2);
       assertThat(r.out()).isEmpty();
@@ -219,9 +219,9 @@ class RecordCommandAttacksTest {
           + " is recorded by this run; nothing after it; run the same command again to record the"
           + " rest");
     }
-    Run again = run("record", "--db", db(), "--inspection", "3", "--from", csv.toString());
+    Run again = run("record", "--db", db(), "--inspection", "4", "--from", csv.toString());
     assertThat(again.code()).as(again.err()).isZero();
-    assertThat(again.err()).contains(": 2 recorded in inspection 3");
+    assertThat(again.err()).contains(": 2 recorded in inspection 4");
   }
 
   private static BufferedImage image() {

@@ -73,7 +73,7 @@ class PdfReportRendererTest {
       }
     }
     assertThat(text).contains("Matters found that could give rise to a risk to health or safety")
-        .contains("North elevation: lost rigidity. Plan bracing L3: lost rigidity. Panels not found sound: 5")
+        .contains("North elevation: lost rigidity. Plan bracing L3: lost rigidity. Panels and frame members not found sound: 5")
         .contains("Action taken as a result")
         .contains("Repair order 4, raised 14 Mar 2025, 08:10 (GMT) by Ada Brennock. Lift 3 closed")
         .contains("- take out of service, North elevation, whole plane: barrier lift 3 and tag the"
@@ -145,7 +145,7 @@ class PdfReportRendererTest {
     assertThat(firstPlane).isPositive();
     assertThat(indexOf(pages, "Plane: " + ReportFixtures.FRAME)).isEqualTo(firstPlane + 1);
     assertThat(indexOf(pages, "Plane: " + ReportFixtures.PLAN)).isEqualTo(firstPlane + 2);
-    assertThat(indexOf(pages, "Findings: every panel not found sound")).isEqualTo(firstPlane + 3);
+    assertThat(indexOf(pages, "Findings: every panel and frame member not found sound")).isEqualTo(firstPlane + 3);
     try (PDDocument d = Loader.loadPDF(finalised)) {
       assertThat(d.getNumberOfPages()).isEqualTo(pages.size());
     }

@@ -22,11 +22,16 @@ import org.bracewalk.app.AppServices;
 import org.bracewalk.app.OutputFiles;
 import org.bracewalk.app.damage.BowLimits;
 import org.bracewalk.app.damage.RackMember;
+import org.bracewalk.core.analysis.BuiltFrame;
+import org.bracewalk.core.analysis.Freedom;
+import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.DesignRevision;
 import org.bracewalk.core.model.DisplayUnits;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.IssuedReport;
 import org.bracewalk.core.model.Observation;
@@ -34,6 +39,7 @@ import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.Photo;
+import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.RepairAction;
 import org.bracewalk.core.model.RepairOrder;
@@ -50,6 +56,7 @@ import org.bracewalk.core.port.report.DocumentStamp;
 import org.bracewalk.core.port.report.Finding;
 import org.bracewalk.core.port.report.FindingPhoto;
 import org.bracewalk.core.port.report.LengthUnits;
+import org.bracewalk.core.port.report.MotionSketch;
 import org.bracewalk.core.port.report.Particular;
 import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.RecordFingerprint;
@@ -534,20 +541,26 @@ public final class ReportService {
     Map<String, Map<PanelRef, BowAssessment>> bows = new HashMap<>();
     for (InspectionRecords.PlaneRecords p : r.planes()) {
       Map<PanelRef, Observation> latest = latest(p.observations());
+      Map<FrameRef, Observation> latestFrame = latestFrame(p.observations());
       Map<PanelRef, PanelFinding> panelFindings = new TreeMap<>();
       latest.forEach((panel, o) -> panelFindings.put(panel, o.finding()));
-      AsBuiltPlane asBuilt = AsBuiltPlane.fromFindings(p.design().design(), panelFindings);
-      PlaneAnalysis analysis = analyzer.analyse(p.design().design(), asBuilt);
+      Map<FrameRef, PanelState> frameFindings = new TreeMap<>();
+      latestFrame.forEach((member, o) -> frameFindings.put(member, o.state()));
+      PlaneDesign design = p.design().design();
+      AsBuiltPlane asBuilt = AsBuiltPlane.fromFindings(design, panelFindings, frameFindings);
+      PlaneAnalysis analysis = analyzer.analyse(design, asBuilt);
       String name = p.plane().name();
-      sections.add(new PlaneSection(name, p.design().design(), asBuilt, panelFindings, analysis,
+      sections.add(new PlaneSection(name, design, asBuilt, panelFindings, analysis,
           new PlaneSection.DesignRef(p.design().number(), p.design().date(), p.design().author()),
-          p.plane().role()));
-      for (Observation o : latest.values()) {
+          p.plane().role(), frameFindings, sketch(analysis, asBuilt)));
+      List<Observation> notSound = new ArrayList<>(latest.values());
+      notSound.addAll(latestFrame.values());
+      for (Observation o : notSound) {
         if (o.state() == PanelState.SOUND) {
           continue;
         }
         BowAssessment bow = null;
-        if (racking && o.bowMm() != null) {
+        if (racking && o.bowMm() != null && !o.isFrameMember()) {
           LocalDate day = o.recordedAt().atZone(zone).toLocalDate();
           bow = BowLimits.assess(RackMember.BRACING, o.bowMm(), o.gaugeLengthMm(), day);
           bows.computeIfAbsent(name, k -> new HashMap<>()).put(o.panel(), bow);
@@ -557,7 +570,7 @@ public final class ReportService {
         findings.add(new Finding(name, o.panel(), o.state(),
             o.defect() == null ? "" : o.defect().label(), o.bowMm(),
             o.gaugeLengthMm() == null ? null : o.gaugeLengthMm().doubleValue(), bow, o.note(),
-            o.recordedAt(), o.recordedBy(), photos));
+            o.recordedAt(), o.recordedBy(), photos, o.frameMember()));
       }
     }
     LocalDate day = inspection.startedAt().atZone(zone).toLocalDate();
@@ -571,7 +584,7 @@ public final class ReportService {
       for (RepairAction a : or.actions()) {
         actions.add(new RecordedOrder.Action(kind(a.action()),
             planeNames.getOrDefault(a.planeId(), "plane " + a.planeId()), a.panel(), a.brace(),
-            a.description(), a.dueDate(), a.doneAt(), a.doneBy()));
+            a.description(), a.dueDate(), a.doneAt(), a.doneBy(), a.frameMember()));
       }
       recorded.add(new RecordedOrder(or.order().id(), or.order().createdAt(),
           or.order().createdBy(), or.order().note(), actions));
@@ -593,21 +606,61 @@ public final class ReportService {
         RecordFingerprinter.fingerprint(r));
   }
 
-  /** The observation that counts per panel: the latest one no correction supersedes. */
+  /**
+   * The observation that counts per panel: the latest one no correction supersedes (observations
+   * of frame members are left out: see {@link #latestFrame}).
+   */
   static Map<PanelRef, Observation> latest(List<Observation> rows) {
+    Set<Long> superseded = superseded(rows);
+    Map<PanelRef, Observation> out = new TreeMap<>();
+    for (Observation o : rows) {
+      if (!o.isFrameMember() && !superseded.contains(o.id())) {
+        out.put(o.panel(), o);
+      }
+    }
+    return out;
+  }
+
+  /** The observation that counts per frame member: the latest one no correction supersedes. */
+  static Map<FrameRef, Observation> latestFrame(List<Observation> rows) {
+    Set<Long> superseded = superseded(rows);
+    Map<FrameRef, Observation> out = new TreeMap<>();
+    for (Observation o : rows) {
+      if (o.isFrameMember() && !superseded.contains(o.id())) {
+        out.put(o.frameMember(), o);
+      }
+    }
+    return out;
+  }
+
+  private static Set<Long> superseded(List<Observation> rows) {
     Set<Long> superseded = new HashSet<>();
     for (Observation o : rows) {
       if (o.supersedes() != null) {
         superseded.add(o.supersedes());
       }
     }
-    Map<PanelRef, Observation> out = new TreeMap<>();
-    for (Observation o : rows) {
-      if (!superseded.contains(o.id())) {
-        out.put(o.panel(), o);
-      }
+    return superseded;
+  }
+
+  /**
+   * The motion the report sketches where the analysed frame is incomplete: the engine's motion of
+   * the first swaying part, else of the first freedom of any kind; {@code null} when the frame is
+   * complete (the sketch then turns the engine's blocks: an exact finite motion that costs nothing
+   * more on the largest planes), when the state lists no freedom, or when the engine gives no
+   * motion.
+   */
+  MotionSketch sketch(PlaneAnalysis analysis, AsBuiltPlane asBuilt) {
+    StateAnalysis state = analysis.analysedState();
+    if (state.rigid() || state.frameComplete() || state.freedoms().isEmpty()) {
+      return null;
     }
-    return out;
+    Freedom shown = state.freedoms().stream().filter(f -> f.kind() == FreedomKind.SWAY)
+        .findFirst().orElse(state.freedoms().get(0));
+    Set<FrameRef> absent = new HashSet<>(asBuilt.absentFrame());
+    absent.addAll(asBuilt.unknownFrame());
+    BuiltFrame built = new BuiltFrame(asBuilt.grid(), asBuilt.members(), absent);
+    return analyzer.motion(built, shown).map(m -> new MotionSketch(shown, m)).orElse(null);
   }
 
   static String kindCode(StructureKind k) {

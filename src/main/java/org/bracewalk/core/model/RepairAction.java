@@ -5,7 +5,7 @@ import java.time.LocalDate;
 import java.util.Objects;
 
 /**
- * One action of a repair order, on one panel of one plane.
+ * One action of a repair order, on one panel or one frame member (ledger, standard) of one plane.
  *
  * @param id stored id; 0 when new
  * @param orderId the repair order
@@ -20,6 +20,9 @@ import java.util.Objects;
  * @param doneAt when it was done; {@code null} while outstanding
  * @param doneBy who did it (empty while outstanding)
  * @param verifiedByInspectionId the later inspection that confirmed it; {@code null} until then
+ * @param frameMember the ledger or standard the action is on (to replace or refit it); then {@code
+ *     panel} and {@code brace} are {@code null}. {@code null} for an action on a panel or the
+ *     whole plane
  */
 public record RepairAction(
     long id,
@@ -33,13 +36,32 @@ public record RepairAction(
     String assignee,
     Instant doneAt,
     String doneBy,
-    Long verifiedByInspectionId) {
+    Long verifiedByInspectionId,
+    FrameRef frameMember) {
+
+  /** An action on a panel, or on the whole plane when {@code panel} is null. */
+  public RepairAction(long id, long orderId, long planeId, PanelRef panel, RepairActionKind action,
+      Brace brace, String description, LocalDate dueDate, String assignee, Instant doneAt,
+      String doneBy, Long verifiedByInspectionId) {
+    this(id, orderId, planeId, panel, action, brace, description, dueDate, assignee, doneAt,
+        doneBy, verifiedByInspectionId, null);
+  }
 
   public RepairAction {
     Text.id(id, "repair action id");
     Text.ref(orderId, "repair order");
     Text.ref(planeId, "plane");
     Objects.requireNonNull(action, "action");
+    if (frameMember != null) {
+      if (panel != null || brace != null) {
+        throw new IllegalArgumentException(
+            "an action on the " + frameMember + " names no panel and no diagonal");
+      }
+      if (action == RepairActionKind.BRACE || action == RepairActionKind.TAKE_OUT_OF_SERVICE) {
+        throw new IllegalArgumentException("the " + frameMember + " can be repaired or replaced,"
+            + " not " + action.label() + " (take the whole plane out of service instead)");
+      }
+    }
     description = Text.optional(description);
     assignee = Text.optional(assignee);
     doneBy = Text.optional(doneBy);
@@ -61,6 +83,11 @@ public record RepairAction(
   public RepairAction withId(long newId) {
     return new RepairAction(
         newId, orderId, planeId, panel, action, brace, description, dueDate, assignee, doneAt,
-        doneBy, verifiedByInspectionId);
+        doneBy, verifiedByInspectionId, frameMember);
+  }
+
+  /** Whether this action is on a frame member. */
+  public boolean isFrameMember() {
+    return frameMember != null;
   }
 }

@@ -5,6 +5,7 @@ import java.time.LocalDate;
 import java.util.List;
 import java.util.Objects;
 import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 
 /**
@@ -37,6 +38,8 @@ public record RecordedOrder(
    * @param dueDate by when, or {@code null}
    * @param doneAt when done, or {@code null} while outstanding
    * @param doneBy who did it
+   * @param frameMember the frame member the action is on, or {@code null} (then {@code panel}
+   *     names the place, or the whole plane when it is null too)
    */
   public record Action(
       RepairStepKind kind,
@@ -46,7 +49,15 @@ public record RecordedOrder(
       String description,
       LocalDate dueDate,
       Instant doneAt,
-      String doneBy) {
+      String doneBy,
+      FrameRef frameMember) {
+
+    /** An action on a panel, or on the whole plane. */
+    public Action(RepairStepKind kind, String plane, PanelRef panel, Brace member,
+        String description, LocalDate dueDate, Instant doneAt, String doneBy) {
+      this(kind, plane, panel, member, description, dueDate, doneAt, doneBy, null);
+    }
+
     public Action {
       Objects.requireNonNull(kind, "kind");
       Objects.requireNonNull(plane, "plane");

@@ -2,8 +2,9 @@ package org.bracewalk.core.port.report;
 
 /**
  * What the crew does. The first four are the actions of 29 CFR 1926.451(f)(4) (repair, replace,
- * brace, or take out of service); {@link #INSPECT} is a panel nobody has looked at, which must be
- * looked at (and fitted if its member is missing) before the plane can be counted on.
+ * brace, or take out of service); {@link #INSPECT} is a panel or frame member nobody has looked at,
+ * which must be looked at (and fitted if it is missing) before the plane can be counted on; {@link
+ * #REFIT} puts back a design frame member found missing (one damaged beyond use is replaced).
  */
 public enum RepairStepKind {
   /** Put a damaged member back into a sound state. */
@@ -15,7 +16,9 @@ public enum RepairStepKind {
   /** Keep people and loads off the affected part until the actions that follow are done. */
   TAKE_OUT_OF_SERVICE("out-of-service"),
   /** Look at a panel not inspected; fit its design member if it is missing. */
-  INSPECT("inspect");
+  INSPECT("inspect"),
+  /** Fit back a design frame member (ledger, standard) that is missing. */
+  REFIT("refit");
 
   private final String code;
 
