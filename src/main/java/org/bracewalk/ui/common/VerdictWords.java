@@ -2,7 +2,14 @@ package org.bracewalk.ui.common;
 
 import org.bracewalk.app.verdict.Verdict;
 import org.bracewalk.app.verdict.VerdictKind;
+import java.util.ArrayList;
+import java.util.List;
+import org.bracewalk.core.analysis.Freedom;
+import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.StateAnalysis;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
+import org.bracewalk.core.model.PanelRef;
 
 /**
  * The one {@link Verdict} laid out for a screen: the headline is the verdict's own words, the
@@ -45,13 +52,18 @@ public record VerdictWords(
     String stillToInspect =
         unknown > 0 ? " " + unknown + plural(unknown, " panel", " panels") + " still to inspect." : "";
     if (kind.lost()) {
+      boolean jointsOnly = !state.freedoms().isEmpty() && state.freedomsOf(FreedomKind.SWAY) == 0;
       String detail = kind == VerdictKind.SWAYS_ONE_WAY
           ? "Tension-only members go slack one way, so the plane can lean that way."
           : verdict.degreesOfFreedom()
               + plural(verdict.degreesOfFreedom(), " independent motion", " independent motions")
-              + "; the lowest swaying lift carries every lift above it sideways.";
+              + (jointsOnly ? "." : "; the lowest swaying lift carries every lift above it sideways.")
+              + freedoms(state);
+      String what = state.frameComplete()
+          ? plural(repairCount, " brace", " braces")
+          : plural(repairCount, " member", " members") + " (braces, ledgers or standards)";
       String fix = repairCount > 0
-          ? "Competent person to act: fit the " + repairCount + plural(repairCount, " brace", " braces")
+          ? "Competent person to act: fit the " + repairCount + what
               + " shown under Findings, or take this part out of service."
           : "Competent person to act: take this part out of service until it is re-braced.";
       return new VerdictWords(kind, kind.headline(), detail,
@@ -72,6 +84,68 @@ public record VerdictWords(
     return new VerdictWords(kind, kind.headline(), tolerance + unseen,
         "Bracing check only: record any other defect and act on it as the inspection requires.",
         verdict, "");
+  }
+
+  /**
+   * The freedoms told apart by kind, in words an inspector reads at once ({@code
+   * shared/design/analysis.md}, "Frame members"): a part that sways, a joint nothing holds sideways
+   * (naming the members running straight through it), a loose end (naming the one member holding
+   * it). At most four are spelt out. Empty when the engine lists none (a complete frame: the
+   * swaying lifts are named by the keep-off zone).
+   */
+  static String freedoms(StateAnalysis s) {
+    List<String> out = new ArrayList<>();
+    for (Freedom f : s.freedoms()) {
+      switch (f.kind()) {
+        case SWAY -> {
+          if (!s.frameComplete()) {
+            int lowest = f.joints().stream().mapToInt(Joint::level).min().orElse(0);
+            out.add("A part sways: " + f.joints().size() + plural(f.joints().size(), " joint", " joints")
+                + " move together, the lowest at level " + lowest + ".");
+          }
+        }
+        case LOST_RESTRAINT -> {
+          for (Joint j : f.joints()) {
+            out.add("Nothing holds the " + j + " sideways: the " + members(f) + (runs(f) ? " run" : " runs")
+                + " straight through it, so its unbraced length grows; an engineer checks it before it is"
+                + " loaded (the pin-jointed model counts this as a freedom, the safe side).");
+          }
+        }
+        case LOOSE_END -> {
+          for (Joint j : f.joints()) {
+            out.add("Loose end at the " + j + ": held by the " + members(f) + " alone.");
+          }
+        }
+      }
+    }
+    if (out.isEmpty()) {
+      return "";
+    }
+    int shown = Math.min(4, out.size());
+    String more = out.size() > shown ? " And " + (out.size() - shown) + " more under Findings." : "";
+    return " " + String.join(" ", out.subList(0, shown)) + more;
+  }
+
+  private static boolean runs(Freedom f) {
+    return f.members().size() + f.diagonals().size() > 1;
+  }
+
+  /** "the standard of lift 1 on line 0 and the standard of lift 2 on line 0", diagonals by panel. */
+  private static String members(Freedom f) {
+    List<String> names = new ArrayList<>();
+    for (FrameRef m : f.members()) {
+      names.add(m.toString());
+    }
+    for (PanelRef p : f.diagonals()) {
+      names.add("diagonal in lift " + p.lift() + ", bay " + p.bay());
+    }
+    if (names.isEmpty()) {
+      return "no member";
+    }
+    if (names.size() == 1) {
+      return names.get(0);
+    }
+    return String.join(", ", names.subList(0, names.size() - 1)) + " and the " + names.get(names.size() - 1);
   }
 
   private static String plural(int n, String one, String many) {

@@ -25,6 +25,7 @@ import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
@@ -32,6 +33,7 @@ import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.ui.common.DialogService;
+import org.bracewalk.ui.common.PanelSide;
 import org.bracewalk.ui.common.PlanePicture;
 import org.bracewalk.ui.common.VerdictWords;
 
@@ -40,8 +42,9 @@ import org.bracewalk.ui.common.VerdictWords;
  * cursor and walk order ({@link WalkCursor}), the marks so far ({@link MarkedPanels}), the detail
  * fields ({@link MarkDetails}), the photos and camera folder ({@link PhotoAttachment}), the live
  * verdict and banner ({@link LiveVerdict}) and undo ({@link UndoSteps}). One command records a state
- * for the current panel, commits it through the {@link MarkRecorder}, re-analyses the plane and
- * moves on. Undo records a correction (the earlier state, or "not inspected"), never a deletion.
+ * for the current panel's diagonals, or for the side of it selected (a ledger above or below, a
+ * standard left or right, kept in {@link MarkedFrame}), commits it through the {@link
+ * MarkRecorder}, re-analyses the plane and moves on. Undo records a correction (the earlier state, or "not inspected"), never a deletion.
  * When the marks prove the plane has lost rigidity, {@link #alarmProperty()} says so in words that
  * name the lifts and bays to keep people and loads off.
  *
@@ -61,6 +64,8 @@ public final class WalkViewModel {
   private final DialogService dialogs;
 
   private final MarkedPanels marks;
+  private final MarkedFrame frame;
+  private FrameInWalkSetting frameSetting = FrameInWalkSetting.inMemory();
   private final WalkCursor cursor;
   private final MarkDetails details;
   private final PhotoAttachment photos;
@@ -116,8 +121,15 @@ public final class WalkViewModel {
     this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
     this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
     this.readOnly.set(readOnly);
-    this.marks = new MarkedPanels(design, existing);
-    this.cursor = new WalkCursor(design.grid(), marks::isMarked);
+    List<RecordedMark> onPanels = new java.util.ArrayList<>();
+    List<RecordedMark> onFrame = new java.util.ArrayList<>();
+    for (RecordedMark r : existing) {
+      (r.onFrame() ? onFrame : onPanels).add(r);
+    }
+    this.marks = new MarkedPanels(design, onPanels);
+    this.frame = new MarkedFrame(design, onFrame);
+    this.cursor = new WalkCursor(design.grid(),
+        st -> st.side() == null ? marks.isMarked(st.panel()) : frame.isMarked(st.member()));
     this.details = new MarkDetails(design, racking);
     this.photos = new PhotoAttachment(dialogs, clock);
     this.live = new LiveVerdict(design, title, Objects.requireNonNull(role, "role"), analyzer);
@@ -125,6 +137,17 @@ public final class WalkViewModel {
       if (!quietCursor) {
         refreshPicture();
       }
+    });
+    cursor.sideProperty().addListener((obs, a, b) -> {
+      if (!quietCursor) {
+        refreshPicture();
+      }
+    });
+    cursor.frameInWalkProperty().addListener((obs, a, b) -> {
+      frameSetting.set(b);
+      status.set(b ? "The walk order now takes in every ledger and standard (W: diagonals only)."
+          : "The walk order now walks the diagonals only; Shift+arrow still selects a ledger or standard (W: take them in).");
+      reanalyse();
     });
     reanalyse();
   }
@@ -139,6 +162,9 @@ public final class WalkViewModel {
     if (readOnly.get()) {
       error.set("This inspection is finalised and read-only. Start a new inspection to record changes.");
       return false;
+    }
+    if (cursor.stop().side() != null) {
+      return markMember(state, cursor.stop());
     }
     PanelRef p = cursor.get();
     List<String> bad = photos.dropUnusable();
@@ -181,6 +207,56 @@ public final class WalkViewModel {
     return true;
   }
 
+  /**
+   * Records {@code state} for the frame member at {@code at} with the details entered. In a walk that
+   * takes in the frame it moves on; otherwise the cursor goes back to the panel's diagonals.
+   */
+  private boolean markMember(PanelState state, WalkStop at) {
+    FrameRef f = at.member();
+    List<String> bad = photos.dropUnusable();
+    if (!bad.isEmpty()) {
+      error.set("Not recorded: taken off the mark: " + String.join("; ", bad)
+          + ". Press the key again to record without " + (bad.size() == 1 ? "it" : "them")
+          + ", or attach another (F, G).");
+      return false;
+    }
+    Mark m;
+    try {
+      m = details.buildMember(state, f, photos.photos());
+    } catch (IllegalArgumentException e) {
+      error.set(e.getMessage());
+      return false;
+    }
+    RecordedMark before = frame.latest(f);
+    RecordedMark made;
+    try {
+      made = before == null ? recorder.recordMember(f, at.panel(), m) : recorder.correct(before, m, REMARK_REASON);
+    } catch (RuntimeException e) {
+      error.set("Not recorded: the " + f + " could not be saved (" + e.getMessage()
+          + "). Nothing was changed; try the mark again.");
+      dialogs.showError("Mark not saved", error.get());
+      return false;
+    }
+    error.set("");
+    frame.put(f, made, m);
+    undo.made(new UndoSteps.Step(at.panel(), before, made));
+    details.clear();
+    photos.markMade();
+    status.set("Saved the " + f + ": " + describe(m) + " (record " + made.id() + ")");
+    quietCursor = true;
+    try {
+      if (cursor.frameInWalkProperty().get()) {
+        advance();
+      } else {
+        cursor.set(WalkStop.of(at.panel()));
+      }
+    } finally {
+      quietCursor = false;
+    }
+    reanalyse();
+    return true;
+  }
+
   /** Corrects the last mark of this session back to what the panel held before it. */
   public boolean undo() {
     if (readOnly.get()) {
@@ -193,23 +269,30 @@ public final class WalkViewModel {
       return false;
     }
     UndoSteps.Step step = newest.get();
-    RecordedMark current = marks.latest(step.panel());
+    FrameRef member = step.made().member();
+    RecordedMark current = member == null ? marks.latest(step.panel()) : frame.latest(member);
     Mark back = step.before() == null ? Mark.of(PanelState.NOT_INSPECTED) : step.before().mark();
+    String what = member == null ? step.panel().toString() : "the " + member;
     RecordedMark made;
     try {
       made = recorder.correct(current, back, UNDO_REASON);
     } catch (RuntimeException e) {
-      error.set("Undo not recorded for " + step.panel() + " (" + e.getMessage() + "). Nothing was changed.");
+      error.set("Undo not recorded for " + what + " (" + e.getMessage() + "). Nothing was changed.");
       dialogs.showError("Undo not saved", error.get());
       return false;
     }
     undo.undone();
-    marks.put(step.panel(), made, back);
+    if (member == null) {
+      marks.put(step.panel(), made, back);
+    } else {
+      frame.put(member, made, back);
+    }
     error.set("");
-    status.set("Undone " + step.panel() + ": now " + describe(back) + " (correction record " + made.id() + ")");
+    status.set("Undone " + what + ": now " + (member != null && step.before() == null ? "as designed (not marked)"
+        : describe(back)) + " (correction record " + made.id() + ")");
     quietCursor = true;
     try {
-      cursor.set(step.panel());
+      cursor.set(new WalkStop(step.panel(), member == null ? null : PanelSide.of(step.panel(), member)));
     } finally {
       quietCursor = false;
     }
@@ -232,9 +315,53 @@ public final class WalkViewModel {
     cursor.move(dLift, dBay);
   }
 
-  /** Puts the cursor on {@code p} (a click or tap). */
+  /** Puts the cursor on {@code p}'s diagonals (a click or tap). */
   public void select(PanelRef p) {
     cursor.select(p);
+  }
+
+  /**
+   * Selects a side of the current panel for the next mark: the ledger above or below, the standard
+   * on the left or right; the side already selected goes back to the panel's diagonals.
+   */
+  public void selectSide(PanelSide side) {
+    cursor.selectSide(Objects.requireNonNull(side, "side"));
+  }
+
+  /** Back to the current panel's diagonals. */
+  public void backToPanel() {
+    if (cursor.stop().side() != null) {
+      cursor.selectSide(cursor.stop().side());
+    }
+  }
+
+  /** Selects the frame member {@code f} (a click or tap on it). */
+  public void selectMember(FrameRef f) {
+    cursor.selectMember(f);
+  }
+
+  /** Takes every ledger and standard into the walk order, or walks the diagonals only. */
+  public void toggleFrameInWalk() {
+    cursor.frameInWalkProperty().set(!cursor.frameInWalkProperty().get());
+  }
+
+  /**
+   * Where the choice to walk the frame members is remembered (the app: the user's preferences; by
+   * default memory); the walk order takes the remembered choice at once.
+   */
+  public void useFrameInWalkSetting(FrameInWalkSetting setting) {
+    FrameInWalkSetting s = Objects.requireNonNull(setting, "setting");
+    boolean v = s.get();
+    frameSetting = s;
+    if (cursor.frameInWalkProperty().get() != v) {
+      quietCursor = true;
+      try {
+        cursor.frameInWalkProperty().set(v);
+      } finally {
+        quietCursor = false;
+      }
+      status.set("");
+    }
   }
 
   /** Puts the cursor on the first panel, in walk order, that has no mark yet. */
@@ -318,19 +445,31 @@ public final class WalkViewModel {
   }
 
   private void reanalyse() {
-    live.update(marks);
+    try {
+      live.update(marks, frame, cursor.frameInWalkProperty().get());
+    } catch (RuntimeException e) {
+      // the marks are saved; only the verdict shown is behind
+      error.set("The verdict could not be worked out again (" + e.getMessage()
+          + "); every mark is saved. Findings (Ctrl+4) works it out from the record.");
+    }
     refreshPicture();
+  }
+
+  /** The state of each frame member with a mark in force (withdrawn marks excluded). */
+  public Map<FrameRef, PanelState> frameFindings() {
+    return Map.copyOf(frame.states());
   }
 
   /** The engine's whole answer for the marks so far: verdicts, repair plan, restore list. */
   public PlaneAnalysis fullAnalysis() {
-    return analyzer.analyse(design, AsBuiltPlane.fromFindings(design, findings()));
+    return analyzer.analyse(design, AsBuiltPlane.fromFindings(design, findings(), frameFindings()));
   }
 
   private void refreshPicture() {
     StateAnalysis s = live.lastSeen();
     PanelRef c = cursor.get();
-    cursorText.set(describeCursor(c));
+    WalkStop at = cursor.stop();
+    cursorText.set(describeCursor(c, at));
     picture.set(
         new PlanePicture(
             design,
@@ -340,12 +479,26 @@ public final class WalkViewModel {
             s == null ? Set.of() : Set.copyOf(s.criticalBraces()),
             List.of(),
             Set.of(),
-            c));
+            c,
+            frame.states(),
+            at.member(),
+            s == null ? List.of() : s.freedoms()));
   }
 
-  private String describeCursor(PanelRef c) {
+  private String describeCursor(PanelRef c, WalkStop at) {
     if (c == null) {
       return "";
+    }
+    if (at.side() != null) {
+      FrameRef f = at.member();
+      String designed = design.hasFrameMember(f) ? "in the design" : "left out of the design";
+      RecordedMark r = frame.latest(f);
+      String found = r == null || r.mark().state() == PanelState.NOT_INSPECTED
+          ? "not marked: taken as designed" : "marked " + describe(r.mark());
+      int pos = cursor.position(at);
+      return "Lift " + c.lift() + ", bay " + c.bay() + ", " + at.side().words() + ": the " + f + " \u2014 "
+          + designed + "; " + found
+          + (pos > 0 ? " (" + pos + " of " + cursor.length() + " in walk order)" : " (Esc: back to the panel)");
     }
     Brace d = design.braceAt(c);
     String designed =
@@ -353,7 +506,7 @@ public final class WalkViewModel {
     RecordedMark r = marks.latest(c);
     String found = r == null || r.mark().state() == PanelState.NOT_INSPECTED ? "not marked yet" : "marked " + describe(r.mark());
     return "Lift " + c.lift() + ", bay " + c.bay() + " \u2014 " + designed + "; " + found
-        + " (" + cursor.position(c) + " of " + cursor.length() + " in walk order)";
+        + " (" + cursor.position(WalkStop.of(c)) + " of " + cursor.length() + " in walk order)";
   }
 
   private static String describe(Mark m) {
@@ -389,6 +542,26 @@ public final class WalkViewModel {
 
   public ObjectProperty<WalkOrder> orderProperty() {
     return cursor.orderProperty();
+  }
+
+  /** Whether the walk order takes in every ledger and standard (default: diagonals only). */
+  public BooleanProperty frameInWalkProperty() {
+    return cursor.frameInWalkProperty();
+  }
+
+  /** Every stop of the walk, in order. */
+  public List<WalkStop> stops() {
+    return cursor.stops();
+  }
+
+  /** The side of the current panel selected, or null for its diagonals. */
+  public ReadOnlyObjectProperty<PanelSide> sideProperty() {
+    return cursor.sideProperty();
+  }
+
+  /** The frame member selected, or null for the current panel's diagonals. */
+  public FrameRef selectedMember() {
+    return cursor.stop().member();
   }
 
   public ReadOnlyObjectProperty<PanelRef> cursorProperty() {
