@@ -166,7 +166,7 @@ public final class WalkBench {
   private static long[][] run(PlaneDesign design, int samples, MarkRecorder recorder, boolean flip) {
     WalkViewModel vm =
         new WalkViewModel(design, "bench plane", List.of(), recorder, PlaneAnalyzer.standard(), NO_DIALOGS, false, false,
-            Clock.systemUTC());
+            Clock.systemUTC(), Runnable::run, Runnable::run); // the write inside the keystroke, as measured before
     WalkView view = new WalkView(vm);
     Scene scene = new Scene(view, 1600, 900);
     Stylesheet.apply(scene);

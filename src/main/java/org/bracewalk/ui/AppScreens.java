@@ -177,7 +177,7 @@ public final class AppScreens implements ScreenFactory {
         new WalkViewModel(design.design(), st.name() + ", " + plane.name(), plane.role(),
             InspectionMarkRecorder.existing(services.inspections(), insp.id(), plane.id()),
             new InspectionMarkRecorder(services.inspections(), insp.id(), plane.id(), insp.inspectorName()),
-            analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised(), clock);
+            analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised(), clock, ui, background);
     vm.useCameraFolderSetting(cameraFolder);
     vm.useFrameInWalkSetting(frameInWalk);
     WalkView view = new WalkView(vm);
@@ -260,6 +260,7 @@ public final class AppScreens implements ScreenFactory {
     FindingsViewModel vm = new FindingsViewModel(services.sites(), services.inspections(), services.analysis(), analyzer, issuer, dialogs, ui, background, insp.id(), plane.id());
     FindingsView view = new FindingsView(vm,
         p -> navigator.open(ScreenId.FINDINGS, new Selection(plane.structureId(), p, insp.id())));
+    vm.load(); // on the background executor
     return focusedWithSelection(view, crumbs(plane, insp), view::focusPlane,
         new Selection(plane.structureId(), plane.id(), insp.id()));
   }

@@ -107,7 +107,7 @@ class KeepOffConsistencyTest {
             InspectionMarkRecorder.existing(services.inspections(), s.inspection(), s.planeId()),
             new InspectionMarkRecorder(services.inspections(), s.inspection(), s.planeId(), "nobody"),
             PlaneAnalyzer.standard(), new FakeDialogs(), racking.id() == plane.structureId(), true,
-            java.time.Clock.systemUTC());
+            java.time.Clock.systemUTC(), Runnable::run, Runnable::run);
         banners.add(walk.alarmProperty().get());
         assertThat(insp.id()).isEqualTo(s.inspection());
       }

@@ -75,6 +75,16 @@ class WalkRoundEndToEndFxTest {
     WaitForAsyncUtils.waitForFxEvents();
   }
 
+  /**
+   * Waits (explicitly, no sleep) until the background executor has run everything handed to it so
+   * far (the marks are written there, in order), then for the JavaFX thread to show the answers.
+   */
+  private void settle() throws Exception {
+    WaitForAsyncUtils.waitForFxEvents();
+    background.submit(() -> { }).get(30, TimeUnit.SECONDS);
+    WaitForAsyncUtils.waitForFxEvents();
+  }
+
   private static String text(FxRobot robot, String id) {
     return robot.lookup(id).queryAs(Labeled.class).getText();
   }
@@ -125,7 +135,7 @@ class WalkRoundEndToEndFxTest {
         case DAMAGED_INEFFECTIVE -> KeyCode.U;
         default -> throw new IllegalStateException();
       });
-      WaitForAsyncUtils.waitForFxEvents();
+      settle(); // the mark is written on the background executor; the banner follows the record
       boolean bannerUp = robot.lookup("#walk-alarm-banner").query().isVisible();
       // the verdict turns exactly when the last brace of lift 3 is marked
       assertThat(bannerUp).as("alarm after %s", order.get(k)).isEqualTo(k >= order.indexOf(lastHit));
@@ -137,6 +147,7 @@ class WalkRoundEndToEndFxTest {
 
     // findings: the proposed repair is one brace in lift 3
     ctrl(robot, KeyCode.DIGIT4);
+    settle(); // the findings are read on the background executor
     assertThat(window.currentScreen()).isEqualTo(ScreenId.FINDINGS);
     String repair = robot.lookup("#findings-repair").queryAs(javafx.scene.layout.VBox.class).getChildren().stream()
         .map(n -> ((Labeled) n).getText()).reduce("", String::concat);
@@ -145,6 +156,8 @@ class WalkRoundEndToEndFxTest {
     // finalise (the dialog answers yes), then issue the report
     dialogs.confirmAnswers.push(true);
     ctrl(robot, KeyCode.F);
+    settle(); // the gaps are read, the question asked, then the inspection finalised in the background
+    settle();
     assertThat(robot.lookup("#findings-finalised").query().isVisible()).isTrue();
     Path pdf = dir.resolve("report.pdf");
     dialogs.saveAnswers.push(Optional.of(pdf));
@@ -175,7 +188,7 @@ class WalkRoundEndToEndFxTest {
     // the walk-round is read-only now: a key records nothing
     ctrl(robot, KeyCode.DIGIT3);
     robot.type(KeyCode.M);
-    WaitForAsyncUtils.waitForFxEvents();
+    settle();
     assertThat(services.inspections().observations(inspectionId)).hasSize(order.size());
     assertThat(text(robot, "#walk-error")).contains("read-only");
   }

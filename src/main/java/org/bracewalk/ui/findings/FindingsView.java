@@ -31,11 +31,16 @@ public final class FindingsView extends BorderPane {
     Label title = Widgets.text(vm.titleProperty(), "screen-title");
     title.setMaxWidth(Label.USE_PREF_SIZE);
     ChoiceBox<FindingsViewModel.PlaneChoice> planes = new ChoiceBox<>(vm.planes());
-    for (FindingsViewModel.PlaneChoice c : vm.planes()) {
-      if (c.planeId() == vm.planeId()) {
-        planes.setValue(c);
+    Runnable current = () -> {
+      for (FindingsViewModel.PlaneChoice c : vm.planes()) {
+        if (c.planeId() == vm.planeId()) {
+          planes.setValue(c);
+        }
       }
-    }
+    };
+    current.run();
+    // the planes arrive once read on the background executor
+    vm.planes().addListener((javafx.collections.ListChangeListener<FindingsViewModel.PlaneChoice>) c -> current.run());
     planes.setOnAction(e -> {
       if (planes.getValue() != null && planes.getValue().planeId() != vm.planeId()) {
         openPlane.accept(planes.getValue().planeId());

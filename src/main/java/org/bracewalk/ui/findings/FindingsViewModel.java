@@ -44,7 +44,9 @@ import org.bracewalk.ui.common.VerdictWords;
 /**
  * One plane of an inspection after the walk-round: what was found, the least set of braces that
  * makes it rigid again, the restore-to-design list, and the inspection's documents and
- * finalising. Documents are made on the background executor; results come back on the UI one.
+ * finalising. Nothing of the database or files is touched on the UI thread: the findings are read
+ * ({@link #load()}), the gaps before finalising counted, the inspection finalised and documents
+ * made on the background executor; results come back on the UI one.
  */
 public final class FindingsViewModel {
   private final SiteService sites;
@@ -72,6 +74,9 @@ public final class FindingsViewModel {
   private final ReadOnlyBooleanWrapper busy = new ReadOnlyBooleanWrapper(this, "busy");
   private final ReadOnlyBooleanWrapper finalised = new ReadOnlyBooleanWrapper(this, "finalised");
   private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "");
+  private final ReadOnlyBooleanWrapper loading = new ReadOnlyBooleanWrapper(this, "loading");
+  /** True from the finalise key until the inspection is finalised or the question declined. */
+  private boolean finalising;
 
   /** A plane of the inspection, with its verdict, for switching between them. */
   public record PlaneChoice(long planeId, String name, VerdictKind verdict) {
@@ -102,16 +107,57 @@ public final class FindingsViewModel {
     this.background = Objects.requireNonNull(background, "background");
     this.inspectionId = inspectionId;
     this.planeId = planeId;
-    load();
   }
 
-  private void load() {
+  /**
+   * Reads the findings on the background executor and shows them through the UI one (call once
+   * the view is built; until then the screen shows nothing). A failure is shown in the error line.
+   */
+  public void load() {
+    loading.set(true);
+    background.execute(() -> {
+      Loaded read;
+      try {
+        read = read();
+      } catch (RuntimeException e) {
+        ui.execute(() -> {
+          loading.set(false);
+          error.set("The findings of inspection " + inspectionId + " could not be read (" + e.getMessage()
+              + "). Open the screen again (Ctrl+4).");
+        });
+        return;
+      }
+      ui.execute(() -> {
+        show(read);
+        loading.set(false);
+      });
+    });
+  }
+
+  /** What the screen shows, read and worked out off the UI thread. */
+  private record Loaded(boolean finalised, String title, List<PlaneChoice> planes, VerdictWords verdict,
+      PlanePicture picture, List<String> repairLines, List<String> restoreLines, List<String> findingLines,
+      String summary) {}
+
+  private void show(Loaded l) {
+    finalised.set(l.finalised());
+    title.set(l.title());
+    planes.setAll(l.planes());
+    verdict.set(l.verdict());
+    picture.set(l.picture());
+    repairLines.setAll(l.repairLines());
+    restoreLines.setAll(l.restoreLines());
+    findingLines.setAll(l.findingLines());
+    summary.set(l.summary());
+  }
+
+  /** Reads and works out everything the screen shows (on the background executor). */
+  private Loaded read() {
     Inspection inspection = inspections.inspection(inspectionId);
-    finalised.set(inspection.isFinalised());
     PlaneRecord plane = sites.plane(planeId);
-    title.set(plane.name() + " in inspection " + inspectionId + " (" + inspection.reason().label().replace('-', ' ')
-        + ", " + (inspection.isFinalised() ? "finalised" : "open") + ")");
-    planes.clear();
+    String titleWords = plane.name() + " in inspection " + inspectionId + " (" + inspection.reason().label().replace('-', ' ')
+        + ", " + (inspection.isFinalised() ? "finalised" : "open") + ")";
+    List<PlaneChoice> planes = new ArrayList<>();
     for (PlaneRecord p : inspections.planesOf(inspectionId)) {
       PlaneResult r = analysis.analysePlane(inspectionId, p.id());
       planes.add(new PlaneChoice(p.id(), p.name(), kind(r)));
@@ -141,11 +187,11 @@ public final class FindingsViewModel {
       seen = analyzer.analyseState(design.grid(), AsBuiltPlane.fromFindings(design, optimistic).members());
     }
     List<RepairBrace> repair = analysis.repair().braces();
-    verdict.set(VerdictWords.of(result.verdict(), ab.state(), repair.size()));
-    picture.set(new PlanePicture(design, findings, true, seen.blocks(), Set.copyOf(seen.criticalBraces()),
-        repair, Set.of(), null));
+    VerdictWords verdictWords = VerdictWords.of(result.verdict(), ab.state(), repair.size());
+    PlanePicture drawn = new PlanePicture(design, findings, true, seen.blocks(), Set.copyOf(seen.criticalBraces()),
+        repair, Set.of(), null);
 
-    repairLines.clear();
+    List<String> repairLines = new ArrayList<>();
     int n = 1;
     for (RepairBrace b : repair) {
       repairLines.add(n++ + ".  " + b.panel() + ": fit " + b.brace().token() + " (" + b.brace().kind().label() + ")"
@@ -157,7 +203,7 @@ public final class FindingsViewModel {
     if (!analysis.repair().possible()) {
       repairLines.add("No set of allowed panels makes this plane rigid: a licensed engineer must redesign it.");
     }
-    restoreLines.clear();
+    List<String> restoreLines = new ArrayList<>();
     for (RestoreItem r : analysis.repair().restoreToDesign()) {
       boolean unseen = ab.unknownPanels() > 0 && !findings.containsKey(r.panel())
           || findings.containsKey(r.panel()) && !findings.get(r.panel()).state().inspected();
@@ -168,7 +214,7 @@ public final class FindingsViewModel {
     if (restoreLines.isEmpty()) {
       restoreLines.add("Nothing: every design brace is there and effective.");
     }
-    findingLines.clear();
+    List<String> findingLines = new ArrayList<>();
     result.latest().forEach((p, o) -> {
       if (o.state() != PanelState.SOUND && o.state() != PanelState.NOT_INSPECTED) {
         StringBuilder sb = new StringBuilder(p + ": " + o.state().label());
@@ -194,9 +240,11 @@ public final class FindingsViewModel {
       findingLines.add("Every panel inspected was found sound.");
     }
     int marked = (int) result.latest().values().stream().filter(o -> o.state() != PanelState.NOT_INSPECTED).count();
-    summary.set(marked + " of " + design.grid().panelCount() + " panels marked; "
+    String summaryWords = marked + " of " + design.grid().panelCount() + " panels marked; "
         + ab.unknownPanels() + " not inspected (counted as missing in the repair set); design revision "
-        + result.design().number() + ".");
+        + result.design().number() + ".";
+    return new Loaded(inspection.isFinalised(), titleWords, planes, verdictWords, drawn, repairLines, restoreLines,
+        findingLines, summaryWords);
   }
 
   private static VerdictKind kind(PlaneResult r) {
@@ -258,39 +306,73 @@ public final class FindingsViewModel {
 
   // ---- finalise -------------------------------------------------------------------------------
 
-  /** Finalises the inspection after asking; from then on it is read-only. */
+  /**
+   * Finalises the inspection after asking; from then on it is read-only. The panels not inspected
+   * are counted, and the inspection finalised, on the background executor; the question is asked on
+   * the UI thread between. False when refused at once (already finalised, or finalising already).
+   */
   public boolean finaliseInspection() {
     if (finalised.get()) {
       error.set("Inspection " + inspectionId + " is already finalised.");
       return false;
     }
-    List<String> gaps = new ArrayList<>();
-    for (PlaneRecord p : inspections.planesOf(inspectionId)) {
-      long marked = inspections.latestObservations(inspectionId, p.id()).values().stream()
-          .filter(o -> o.state().inspected()).count();
-      int total = p.grid().panelCount();
-      if (marked < total) {
-        gaps.add(p.name() + ": " + (total - marked) + " of " + total + " panels not inspected");
-      }
+    if (finalising) {
+      error.set("Inspection " + inspectionId + " is being finalised; wait for it to finish.");
+      return false;
     }
+    finalising = true;
+    background.execute(() -> {
+      List<String> gaps = new ArrayList<>();
+      try {
+        for (PlaneRecord p : inspections.planesOf(inspectionId)) {
+          long marked = inspections.latestObservations(inspectionId, p.id()).values().stream()
+              .filter(o -> o.state().inspected()).count();
+          int total = p.grid().panelCount();
+          if (marked < total) {
+            gaps.add(p.name() + ": " + (total - marked) + " of " + total + " panels not inspected");
+          }
+        }
+      } catch (RuntimeException e) {
+        ui.execute(() -> notFinalised(e));
+        return;
+      }
+      ui.execute(() -> ask(gaps));
+    });
+    return true;
+  }
+
+  private void ask(List<String> gaps) {
     String warning = gaps.isEmpty() ? "" : "\n\nNot every panel was inspected:\n  " + String.join("\n  ", gaps)
         + "\nThe report will count those panels as missing.";
     boolean go = dialogs.confirm("Finalise inspection " + inspectionId + "?",
         "After finalising, nothing in this inspection can be changed: no mark, correction or photo."
             + " Later changes need a new inspection." + warning, "Finalise");
     if (!go) {
-      return false;
+      finalising = false;
+      return;
     }
-    try {
-      inspections.finalise(inspectionId);
-    } catch (RuntimeException e) {
-      error.set("Not finalised: " + e.getMessage());
-      dialogs.showError("Not finalised", error.get());
-      return false;
-    }
-    load();
-    status.set("Inspection " + inspectionId + " finalised: it is read-only now. Issue the report (R) for the record.");
-    return true;
+    background.execute(() -> {
+      Loaded read;
+      try {
+        inspections.finalise(inspectionId);
+        read = read();
+      } catch (RuntimeException e) {
+        ui.execute(() -> notFinalised(e));
+        return;
+      }
+      ui.execute(() -> {
+        finalising = false;
+        show(read);
+        error.set("");
+        status.set("Inspection " + inspectionId + " finalised: it is read-only now. Issue the report (R) for the record.");
+      });
+    });
+  }
+
+  private void notFinalised(RuntimeException e) {
+    finalising = false;
+    error.set("Not finalised: " + e.getMessage());
+    dialogs.showError("Not finalised", error.get());
   }
 
   // ---- properties -----------------------------------------------------------------------------
@@ -353,6 +435,11 @@ public final class FindingsViewModel {
 
   public ReadOnlyBooleanProperty finalisedProperty() {
     return finalised.getReadOnlyProperty();
+  }
+
+  /** True while the findings are being read. */
+  public ReadOnlyBooleanProperty loadingProperty() {
+    return loading.getReadOnlyProperty();
   }
 
   public ReadOnlyStringProperty titleProperty() {

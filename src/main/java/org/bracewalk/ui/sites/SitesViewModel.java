@@ -48,7 +48,10 @@ import org.bracewalk.app.verdict.VerdictKind;
 
 /**
  * The overview of every site, structure and plane in the database, the demo-site offer when it is
- * empty, and starting (or continuing) an inspection of the selected structure.
+ * empty, and starting (or continuing) an inspection of the selected structure. The database is read
+ * and written on the background executor only: the commands look up the structure or plane of the
+ * selected line in what the last read of the overview found, and every write reads the overview
+ * again.
  */
 public final class SitesViewModel {
   private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm");
@@ -65,6 +68,8 @@ public final class SitesViewModel {
   private final Executor background;
   /** True while a write runs on the background executor. */
   private boolean writing;
+  /** The last overview read (UI thread only): the commands look up structures and planes here. */
+  private Overview known = Overview.EMPTY;
   private final ReadOnlyBooleanWrapper loading = new ReadOnlyBooleanWrapper(this, "loading");
 
   private final ObservableList<OverviewRow> rows = FXCollections.observableArrayList();
@@ -123,7 +128,7 @@ public final class SitesViewModel {
   private void refresh(Runnable then) {
     loading.set(true);
     background.execute(() -> {
-      List<OverviewRow> out;
+      Overview out;
       try {
         out = readRows();
       } catch (RuntimeException e) {
@@ -142,8 +147,20 @@ public final class SitesViewModel {
     });
   }
 
-  private List<OverviewRow> readRows() {
+  /**
+   * What one read of the overview found: the rows, and the structures and planes behind them, so
+   * the commands look them up here rather than in the database on the UI thread.
+   */
+  private record Overview(List<OverviewRow> rows, Map<Long, Structure> structures, Map<Long, List<PlaneRecord>> planes,
+      Map<Long, PlaneRetirement> retired) {
+    static final Overview EMPTY = new Overview(List.of(), Map.of(), Map.of(), Map.of());
+  }
+
+  private Overview readRows() {
     List<OverviewRow> out = new ArrayList<>();
+    Map<Long, Structure> structuresRead = new HashMap<>();
+    Map<Long, List<PlaneRecord>> planesRead = new HashMap<>();
+    Map<Long, PlaneRetirement> retiredRead = new HashMap<>();
     for (Site site : sites.sites()) {
       out.add(new OverviewRow(OverviewRow.Level.SITE, site.name(), site.location(), null, "", "", "",
           OverviewRow.Due.NOT_APPLICABLE, "", 0, 0, 0, 0));
@@ -176,6 +193,10 @@ public final class SitesViewModel {
         VerdictKind worst = null;
         Map<Long, PlaneRetirement> retired = new HashMap<>();
         sites.retirements(st.id()).forEach(x -> retired.put(x.planeId(), x));
+        retiredRead.putAll(retired);
+        structuresRead.put(st.id(), st);
+        List<PlaneRecord> planesOfStructure = sites.planes(st.id());
+        planesRead.put(st.id(), planesOfStructure);
         Map<Long, Set<Long>> covered = new HashMap<>();
         for (Inspection i : insp) {
           Set<Long> ids = new HashSet<>();
@@ -185,7 +206,7 @@ public final class SitesViewModel {
         Set<Long> inLatest = latest.map(i -> covered.get(i.id())).orElse(Set.of());
         List<Inspection> newestFirst =
             insp.stream().sorted(Comparator.comparing(Inspection::startedAt).reversed()).toList();
-        for (PlaneRecord plane : sites.planes(st.id())) {
+        for (PlaneRecord plane : planesOfStructure) {
           VerdictKind v = VerdictKind.NOT_INSPECTED;
           String words;
           PlaneRetirement gone = retired.get(plane.id());
@@ -226,10 +247,12 @@ public final class SitesViewModel {
             open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
       }
     }
-    return out;
+    return new Overview(out, structuresRead, planesRead, retiredRead);
   }
 
-  private void show(List<OverviewRow> out) {
+  private void show(Overview read) {
+    known = read;
+    List<OverviewRow> out = read.rows();
     OverviewRow keep = selected.get();
     rows.setAll(out);
     empty.set(out.isEmpty());
@@ -376,7 +399,12 @@ public final class SitesViewModel {
       return false;
     }
     String name = strip(inspectorName.get());
-    boolean racking = sites.structure(r.structureId()).kind() == StructureKind.RACKING_RUN;
+    Structure structure = known.structures().get(r.structureId());
+    if (structure == null) {
+      error.set("The structure of the selected line is no longer in the overview: press F5 to read it again.");
+      return false;
+    }
+    boolean racking = structure.kind() == StructureKind.RACKING_RUN;
     // the report needs every one of these, and an inspection cannot be changed once started
     List<String> missing = new ArrayList<>();
     if (name.isEmpty()) {
@@ -464,8 +492,13 @@ public final class SitesViewModel {
       error.set("Select the plane to retire first.");
       return false;
     }
-    PlaneRecord plane = sites.plane(r.planeId());
-    if (sites.retirement(plane.id()).isPresent()) {
+    PlaneRecord plane = known.planes().getOrDefault(r.structureId(), List.of()).stream()
+        .filter(x -> x.id() == r.planeId()).findFirst().orElse(null);
+    if (plane == null) {
+      error.set("Plane '" + r.name() + "' is no longer in the overview: press F5 to read it again.");
+      return false;
+    }
+    if (known.retired().containsKey(plane.id())) {
       error.set("Plane '" + plane.name() + "' is already retired.");
       return false;
     }
@@ -501,7 +534,7 @@ public final class SitesViewModel {
   }
 
   private long firstPlane(long structureId) {
-    return sites.planes(structureId).stream().findFirst().map(PlaneRecord::id).orElse(0L);
+    return known.planes().getOrDefault(structureId, List.of()).stream().findFirst().map(PlaneRecord::id).orElse(0L);
   }
 
   /**
@@ -515,7 +548,11 @@ public final class SitesViewModel {
       error.set("Select the structure (or one of its planes) whose inspection interval to change.");
       return false;
     }
-    Structure st = sites.structure(r.structureId());
+    Structure st = known.structures().get(r.structureId());
+    if (st == null) {
+      error.set("The structure of the selected line is no longer in the overview: press F5 to read it again.");
+      return false;
+    }
     Optional<String> answer = dialogs.askText("Days between inspections",
         "Days between routine inspections of '" + st.name() + "' (" + SiteService.MIN_INTERVAL_DAYS + " to "
             + SiteService.MAX_INTERVAL_DAYS + "). The next inspection falls due this many days after the last"

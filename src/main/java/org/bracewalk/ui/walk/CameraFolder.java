@@ -100,7 +100,12 @@ public final class CameraFolder {
 
   /** A mark was made: photos count from now (by the clock), and from the folder's listing now. */
   public void markMade() {
-    since = clock.instant();
+    markMade(clock.instant());
+  }
+
+  /** A mark was made at {@code at} (read from the clock at the key press): photos count from then. */
+  public void markMade(Instant at) {
+    since = Objects.requireNonNull(at, "at");
     if (before != null) {
       before = currentListing();
     }

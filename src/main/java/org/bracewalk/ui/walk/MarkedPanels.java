@@ -14,7 +14,9 @@ import org.bracewalk.core.model.PlaneGrid;
 
 /**
  * What the plane holds so far: the latest mark of each panel, its finding, and the effective
- * members both ways the live verdict counts them. One job: the state of the marks.
+ * members both ways the live verdict counts them. One job: the state of the marks. The walk-round
+ * keeps two: the marks as shown (each at once, at the key press; a record id of 0 until stored)
+ * and the marks as stored (as the record confirms them), from which the live verdict is drawn.
  */
 final class MarkedPanels {
   private final PlaneDesign design;
@@ -58,6 +60,16 @@ final class MarkedPanels {
   void put(PanelRef p, RecordedMark made, Mark mark) {
     latest.put(p, made);
     updatePanel(p, mark.finding());
+  }
+
+  /** {@code p} holds what {@code r} holds, or nothing when {@code r} is null (a mark not stored is taken back). */
+  void reset(PanelRef p, RecordedMark r) {
+    if (r == null) {
+      latest.remove(p);
+      updatePanel(p, null);
+    } else {
+      put(p, r, r.mark());
+    }
   }
 
   /** The finding of each panel with a mark (withdrawn marks excluded), live. */

@@ -7,10 +7,16 @@ import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
 import org.bracewalk.core.model.PanelRef;
 
-/** The marks made in this walk-round, newest first, so undo can correct them. One job: undo. */
+/**
+ * The marks made in this walk-round, newest first, so undo can correct them. One job: undo. A step
+ * names its write by ticket ({@link MarkWrites}); the record ids stay on the write queue.
+ */
 final class UndoSteps {
-  /** One mark made in this session: the panel, what it held before (null: nothing), the mark made. */
-  record Step(PanelRef panel, RecordedMark before, RecordedMark made) {}
+  /**
+   * One mark made in this session: the panel, what it held before (null: nothing), the mark made,
+   * and the ticket of its write.
+   */
+  record Step(PanelRef panel, Mark before, Mark made, long ticket) {}
 
   private final Deque<Step> steps = new ArrayDeque<>();
   private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper(this, "canUndo");
@@ -28,6 +34,12 @@ final class UndoSteps {
   /** The newest step was corrected. */
   void undone() {
     steps.pop();
+    canUndo.set(!steps.isEmpty());
+  }
+
+  /** The write {@code ticket} never reached the record: there is nothing of it to undo. */
+  void forget(long ticket) {
+    steps.removeIf(s -> s.ticket() == ticket);
     canUndo.set(!steps.isEmpty());
   }
 

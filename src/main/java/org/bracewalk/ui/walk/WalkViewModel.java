@@ -2,8 +2,12 @@ package org.bracewalk.ui.walk;
 
 import java.nio.file.Path;
 import java.time.Clock;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.Executor;
+import java.util.function.LongFunction;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
@@ -41,10 +45,18 @@ import org.bracewalk.ui.common.VerdictWords;
  * The walk-round of one plane, for the view: a thin composition of pieces with one job each — the
  * cursor and walk order ({@link WalkCursor}), the marks so far ({@link MarkedPanels}), the detail
  * fields ({@link MarkDetails}), the photos and camera folder ({@link PhotoAttachment}), the live
- * verdict and banner ({@link LiveVerdict}) and undo ({@link UndoSteps}). One command records a state
- * for the current panel's diagonals, or for the side of it selected (a ledger above or below, a
- * standard left or right, kept in {@link MarkedFrame}), commits it through the {@link
- * MarkRecorder}, re-analyses the plane and moves on. Undo records a correction (the earlier state, or "not inspected"), never a deletion.
+ * verdict and banner ({@link LiveVerdict}), undo ({@link UndoSteps}) and the writes ({@link
+ * MarkWrites}). One command records a state for the current panel's diagonals, or for the side of
+ * it selected (a ledger above or below, a standard left or right: {@link MarkedFrame}), and moves on. Undo records a
+ * correction (the earlier state, or "not inspected"), never a deletion.
+ *
+ * <p>Recording: the screen shows a mark at once (the picture, the cursor, the status) and queues
+ * its write on the ordered write queue, off the JavaFX thread; there the photo files are checked
+ * and the mark is committed through the {@link MarkRecorder}, each correction naming the record
+ * before it. The live verdict, the banner and the progress follow what is stored: they are drawn
+ * again when the record confirms a write. A write that fails takes the panel back to what the
+ * record holds and says so in {@link #errorProperty()}, naming the panel and the mark, until that
+ * panel is marked again and stored (no window is opened: the walk goes on).
  * When the marks prove the plane has lost rigidity, {@link #alarmProperty()} says so in words that
  * name the lifts and bays to keep people and loads off.
  *
@@ -59,13 +71,27 @@ public final class WalkViewModel {
 
   private final PlaneDesign design;
   private final String title;
-  private final MarkRecorder recorder;
   private final PlaneAnalyzer analyzer;
-  private final DialogService dialogs;
 
+  /** The marks as shown: each at once, at the key press. */
   private final MarkedPanels marks;
+  /** The marks as stored: as the record confirms them; the live verdict is drawn from these. */
+  private final MarkedPanels stored;
+  /** The marks on frame members as shown. */
   private final MarkedFrame frame;
+  /** The marks on frame members as stored. */
+  private final MarkedFrame storedFrame;
   private FrameInWalkSetting frameSetting = FrameInWalkSetting.inMemory();
+  private final MarkWrites writes;
+  /** Writes queued and not yet answered, by panel (diagonals) or frame member. */
+  private final Map<Object, Integer> pending = new HashMap<>();
+  /** What the status says once a write is stored, by ticket (given the record id). */
+  private final Map<Long, LongFunction<String>> saidWhenStored = new HashMap<>();
+  /** The undo steps whose correction is queued, by ticket (put back if it fails). */
+  private final Map<Long, UndoSteps.Step> undoing = new HashMap<>();
+  /** The marks that did not reach the record, by panel or frame member, until it is stored again. */
+  private final Map<Object, String> unsaved = new LinkedHashMap<>();
+  private long newestTicket;
   private final WalkCursor cursor;
   private final MarkDetails details;
   private final PhotoAttachment photos;
@@ -89,6 +115,10 @@ public final class WalkViewModel {
    * @param racking true for storage racking (bow hints use the EN 15635 limits)
    * @param readOnly true when the inspection is finalised
    * @param clock when a mark is made (the camera folder's photos count from the previous mark)
+   * @param ui runs on the JavaFX thread ({@code FxExecutor}; tests: {@code Runnable::run})
+   * @param writes where the marks are written and the photo files and camera folder read, never
+   *     the JavaFX thread (the app: its background thread); its tasks are run one at a time, in
+   *     the order queued
    */
   public WalkViewModel(
       PlaneDesign design,
@@ -99,8 +129,10 @@ public final class WalkViewModel {
       DialogService dialogs,
       boolean racking,
       boolean readOnly,
-      Clock clock) {
-    this(design, title, PlaneRole.OTHER, existing, recorder, analyzer, dialogs, racking, readOnly, clock);
+      Clock clock,
+      Executor ui,
+      Executor writes) {
+    this(design, title, PlaneRole.OTHER, existing, recorder, analyzer, dialogs, racking, readOnly, clock, ui, writes);
   }
 
   /** As above, for a plane of the given role (its keep-off zone depends on it). */
@@ -114,12 +146,13 @@ public final class WalkViewModel {
       DialogService dialogs,
       boolean racking,
       boolean readOnly,
-      Clock clock) {
+      Clock clock,
+      Executor ui,
+      Executor writes) {
     this.design = Objects.requireNonNull(design, "design");
     this.title = title;
-    this.recorder = Objects.requireNonNull(recorder, "recorder");
     this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
-    this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
+    Objects.requireNonNull(dialogs, "dialogs");
     this.readOnly.set(readOnly);
     List<RecordedMark> onPanels = new java.util.ArrayList<>();
     List<RecordedMark> onFrame = new java.util.ArrayList<>();
@@ -127,11 +160,14 @@ public final class WalkViewModel {
       (r.onFrame() ? onFrame : onPanels).add(r);
     }
     this.marks = new MarkedPanels(design, onPanels);
+    this.stored = new MarkedPanels(design, onPanels);
     this.frame = new MarkedFrame(design, onFrame);
+    this.storedFrame = new MarkedFrame(design, onFrame);
+    this.writes = new MarkWrites(existing, recorder, ui, writes, new Outcome());
     this.cursor = new WalkCursor(design.grid(),
         st -> st.side() == null ? marks.isMarked(st.panel()) : frame.isMarked(st.member()));
     this.details = new MarkDetails(design, racking);
-    this.photos = new PhotoAttachment(dialogs, clock);
+    this.photos = new PhotoAttachment(dialogs, clock, ui, this.writes::onQueue);
     this.live = new LiveVerdict(design, title, Objects.requireNonNull(role, "role"), analyzer);
     cursor.cursorProperty().addListener((obs, a, b) -> {
       if (!quietCursor) {
@@ -154,7 +190,11 @@ public final class WalkViewModel {
 
   // ---- commands -------------------------------------------------------------------------------
 
-  /** Records {@code state} for the current panel with the details entered, then moves on. */
+  /**
+   * Shows {@code state} for the current panel with the details entered, queues its write, and moves
+   * on. True when the mark was taken (its write is queued; a failure comes back in {@link
+   * #errorProperty()}); false when it was refused here (read-only, a bad field), saying why.
+   */
   public boolean mark(PanelState state) {
     if (state == PanelState.NOT_INSPECTED) {
       throw new IllegalArgumentException("a mark records what was found; use undo to withdraw one");
@@ -167,13 +207,6 @@ public final class WalkViewModel {
       return markMember(state, cursor.stop());
     }
     PanelRef p = cursor.get();
-    List<String> bad = photos.dropUnusable();
-    if (!bad.isEmpty()) {
-      error.set("Not recorded: taken off the mark: " + String.join("; ", bad)
-          + ". Press the key again to record without " + (bad.size() == 1 ? "it" : "them")
-          + ", or attach another (F, G).");
-      return false;
-    }
     Mark m;
     try {
       m = details.build(state, p, photos.photos());
@@ -182,44 +215,36 @@ public final class WalkViewModel {
       return false;
     }
     RecordedMark before = marks.latest(p);
-    RecordedMark made;
-    try {
-      made = before == null ? recorder.record(p, m) : recorder.correct(before, m, REMARK_REASON);
-    } catch (RuntimeException e) {
-      error.set("Not recorded: " + p + " could not be saved (" + e.getMessage()
-          + "). Nothing was changed; try the mark again.");
-      dialogs.showError("Mark not saved", error.get());
-      return false;
-    }
-    error.set("");
-    marks.put(p, made, m);
-    undo.made(new UndoSteps.Step(p, before, made));
+    long ticket = writes.ticket();
+    newestTicket = ticket;
+    marks.put(p, new RecordedMark(0, p, m), m);
+    pending.merge(p, 1, Integer::sum);
+    undo.made(new UndoSteps.Step(p, before == null ? null : before.mark(), m, ticket));
     details.clear();
     photos.markMade();
-    status.set("Saved " + p + ": " + describe(m) + " (record " + made.id() + ")");
+    error.set(unsavedWords());
+    String after;
     quietCursor = true;
     try {
-      advance();
+      after = advance();
     } finally {
       quietCursor = false;
     }
-    reanalyse();
+    status.set("Marked " + p + ": " + describe(m) + after);
+    saidWhenStored.put(ticket, id -> "Saved " + p + ": " + describe(m) + " (record " + id + ")" + after);
+    refreshPicture();
+    writes.mark(ticket, p, m, REMARK_REASON);
     return true;
   }
 
   /**
-   * Records {@code state} for the frame member at {@code at} with the details entered. In a walk that
-   * takes in the frame it moves on; otherwise the cursor goes back to the panel's diagonals.
+   * Shows {@code state} for the frame member at {@code at} with the details entered and queues its
+   * write. In a walk that takes in the frame it moves on; otherwise the cursor goes back to the
+   * panel's diagonals.
    */
   private boolean markMember(PanelState state, WalkStop at) {
     FrameRef f = at.member();
-    List<String> bad = photos.dropUnusable();
-    if (!bad.isEmpty()) {
-      error.set("Not recorded: taken off the mark: " + String.join("; ", bad)
-          + ". Press the key again to record without " + (bad.size() == 1 ? "it" : "them")
-          + ", or attach another (F, G).");
-      return false;
-    }
+    PanelRef p = at.panel();
     Mark m;
     try {
       m = details.buildMember(state, f, photos.photos());
@@ -228,32 +253,30 @@ public final class WalkViewModel {
       return false;
     }
     RecordedMark before = frame.latest(f);
-    RecordedMark made;
-    try {
-      made = before == null ? recorder.recordMember(f, at.panel(), m) : recorder.correct(before, m, REMARK_REASON);
-    } catch (RuntimeException e) {
-      error.set("Not recorded: the " + f + " could not be saved (" + e.getMessage()
-          + "). Nothing was changed; try the mark again.");
-      dialogs.showError("Mark not saved", error.get());
-      return false;
-    }
-    error.set("");
-    frame.put(f, made, m);
-    undo.made(new UndoSteps.Step(at.panel(), before, made));
+    long ticket = writes.ticket();
+    newestTicket = ticket;
+    frame.put(f, new RecordedMark(0, p, m, f), m);
+    pending.merge(f, 1, Integer::sum);
+    undo.made(new UndoSteps.Step(p, before == null ? null : before.mark(), m, ticket, f));
     details.clear();
     photos.markMade();
-    status.set("Saved the " + f + ": " + describe(m) + " (record " + made.id() + ")");
+    error.set(unsavedWords());
+    String after = "";
     quietCursor = true;
     try {
       if (cursor.frameInWalkProperty().get()) {
-        advance();
+        after = advance();
       } else {
-        cursor.set(WalkStop.of(at.panel()));
+        cursor.set(WalkStop.of(p));
       }
     } finally {
       quietCursor = false;
     }
-    reanalyse();
+    String then = after;
+    status.set("Marked the " + f + ": " + describe(m) + then);
+    saidWhenStored.put(ticket, id -> "Saved the " + f + ": " + describe(m) + " (record " + id + ")" + then);
+    refreshPicture();
+    writes.mark(ticket, p, f, m, REMARK_REASON);
     return true;
   }
 
@@ -269,35 +292,126 @@ public final class WalkViewModel {
       return false;
     }
     UndoSteps.Step step = newest.get();
-    FrameRef member = step.made().member();
-    RecordedMark current = member == null ? marks.latest(step.panel()) : frame.latest(member);
-    Mark back = step.before() == null ? Mark.of(PanelState.NOT_INSPECTED) : step.before().mark();
-    String what = member == null ? step.panel().toString() : "the " + member;
-    RecordedMark made;
-    try {
-      made = recorder.correct(current, back, UNDO_REASON);
-    } catch (RuntimeException e) {
-      error.set("Undo not recorded for " + what + " (" + e.getMessage() + "). Nothing was changed.");
-      dialogs.showError("Undo not saved", error.get());
-      return false;
-    }
+    PanelRef p = step.panel();
+    FrameRef member = step.member();
+    Mark back = step.before() == null ? Mark.of(PanelState.NOT_INSPECTED) : step.before();
+    long ticket = writes.ticket();
+    newestTicket = ticket;
     undo.undone();
+    undoing.put(ticket, step);
     if (member == null) {
-      marks.put(step.panel(), made, back);
+      marks.put(p, new RecordedMark(0, p, back), back);
     } else {
-      frame.put(member, made, back);
+      frame.put(member, new RecordedMark(0, p, back, member), back);
     }
-    error.set("");
-    status.set("Undone " + what + ": now " + (member != null && step.before() == null ? "as designed (not marked)"
-        : describe(back)) + " (correction record " + made.id() + ")");
+    pending.merge(MarkWrites.key(p, member), 1, Integer::sum);
+    error.set(unsavedWords());
+    String what = member == null ? p.toString() : "the " + member;
+    String now = member != null && back.state() == PanelState.NOT_INSPECTED ? "as designed (no mark)" : describe(back);
+    status.set("Undone " + what + ": now " + now);
+    saidWhenStored.put(ticket, id -> "Undone " + what + ": now " + now + " (correction record " + id + ")");
     quietCursor = true;
     try {
-      cursor.set(new WalkStop(step.panel(), member == null ? null : PanelSide.of(step.panel(), member)));
+      cursor.set(new WalkStop(p, member == null ? null : PanelSide.of(p, member)));
     } finally {
       quietCursor = false;
     }
-    reanalyse();
+    refreshPicture();
+    writes.undo(ticket, step.ticket(), p, member, back, UNDO_REASON);
     return true;
+  }
+
+  /** What the write queue says, on the UI thread. */
+  private final class Outcome implements MarkWrites.Outcome {
+    @Override
+    public void stored(long ticket, RecordedMark made) {
+      PanelRef p = made.panel();
+      FrameRef f = made.member();
+      if (f == null) {
+        stored.put(p, made, made.mark());
+        if (answered(p)) {
+          marks.put(p, made, made.mark());
+        }
+      } else {
+        storedFrame.put(f, made, made.mark());
+        if (answered(f)) {
+          frame.put(f, made, made.mark());
+        }
+      }
+      undoing.remove(ticket);
+      unsaved.remove(MarkWrites.key(p, f));
+      error.set(unsavedWords());
+      LongFunction<String> said = saidWhenStored.remove(ticket);
+      if (said != null && ticket == newestTicket) {
+        status.set(said.apply(made.id()));
+      }
+      reanalyse();
+    }
+
+    @Override
+    public void refused(long ticket, PanelRef p, FrameRef f, Mark mark, String why) {
+      saidWhenStored.remove(ticket);
+      UndoSteps.Step undone = undoing.remove(ticket);
+      if (undone != null) {
+        undo.made(undone); // the mark stands in the record: it can still be undone
+      } else {
+        undo.forget(ticket);
+      }
+      Object key = MarkWrites.key(p, f);
+      RecordedMark holds;
+      if (f == null) {
+        if (answered(p)) {
+          marks.reset(p, stored.latest(p));
+        }
+        holds = stored.latest(p);
+      } else {
+        if (answered(f)) {
+          frame.reset(f, storedFrame.latest(f));
+        }
+        holds = storedFrame.latest(f);
+      }
+      String what = f == null ? p.toString() : "the " + f;
+      unsaved.put(key, "Not recorded: " + (undone != null ? "the undo of " : "") + what + " " + describe(mark)
+          + " (" + why + "). The " + (f == null ? "panel" : "member") + " shows what the record holds"
+          + (holds == null || holds.mark().state() == PanelState.NOT_INSPECTED ? " (no mark)" : " (" + describe(holds.mark()) + ")")
+          + ": mark it again.");
+      error.set(unsavedWords());
+      reanalyse();
+    }
+
+    @Override
+    public void passedOver(long ticket, PanelRef p, FrameRef f) {
+      saidWhenStored.remove(ticket);
+      undoing.remove(ticket);
+      if (f == null) {
+        if (answered(p)) {
+          marks.reset(p, stored.latest(p));
+        }
+      } else if (answered(f)) {
+        frame.reset(f, storedFrame.latest(f));
+      }
+      reanalyse();
+    }
+
+    /** One write on {@code p} (a panel or frame member) answered: true when none is left waiting. */
+    private boolean answered(Object p) {
+      int left = pending.merge(p, -1, Integer::sum);
+      if (left <= 0) {
+        pending.remove(p);
+        return true;
+      }
+      return false;
+    }
+  }
+
+  /** The marks not recorded, each naming its panel; empty when every write so far is stored. */
+  private String unsavedWords() {
+    return String.join(" ", unsaved.values());
+  }
+
+  /** True while some mark or undo is queued and not yet answered by the record. */
+  public boolean writing() {
+    return !pending.isEmpty();
   }
 
   /** Moves the cursor to the next panel in the walk order (stays on the last). */
@@ -354,12 +468,7 @@ public final class WalkViewModel {
     boolean v = s.get();
     frameSetting = s;
     if (cursor.frameInWalkProperty().get() != v) {
-      quietCursor = true;
-      try {
-        cursor.frameInWalkProperty().set(v);
-      } finally {
-        quietCursor = false;
-      }
+      cursor.frameInWalkProperty().set(v);
       status.set("");
     }
   }
@@ -389,13 +498,14 @@ public final class WalkViewModel {
    * since the walk-round opened); asks for the folder the first time, or when {@code choose}.
    */
   public void addCameraPhotos(boolean choose) {
-    PhotoAttachment.Said said = photos.addCameraPhotos(choose);
-    if (said.error() != null) {
-      error.set(said.error());
-    }
-    if (said.status() != null) {
-      status.set(said.status());
-    }
+    photos.addCameraPhotos(choose, said -> {
+      if (said.error() != null) {
+        error.set(said.error());
+      }
+      if (said.status() != null) {
+        status.set(said.status());
+      }
+    });
   }
 
   /** Takes the photos waiting for the next mark off it again (none is deleted from its folder). */
@@ -418,46 +528,48 @@ public final class WalkViewModel {
 
   // ---- state ----------------------------------------------------------------------------------
 
-  private void advance() {
+  /** Moves on in the walk order; at its end, what the status adds (else empty). */
+  private String advance() {
     if (cursor.next()) {
-      return;
+      return "";
     }
     // counted from the marks as they are now, this one included
     if (allMarked()) {
-      status.set(status.get() + ". Every panel is marked: see Findings (Ctrl+4).");
-    } else {
-      status.set(status.get() + ". End of the walk order; press Home for the first panel not yet marked.");
+      return ". Every panel is marked: see Findings (Ctrl+4).";
     }
+    return ". End of the walk order; press Home for the first panel not yet marked.";
   }
 
+  /** Counted from the marks as shown (this one included). */
   private boolean allMarked() {
     return marks.findingMap().size() == design.grid().panelCount();
   }
 
-  /** The finding of each panel with a mark (withdrawn marks excluded). */
+  /** The finding of each panel with a stored mark (withdrawn marks excluded): what the record holds. */
   public Map<PanelRef, PanelFinding> findings() {
-    return Map.copyOf(marks.findingMap());
+    return Map.copyOf(stored.findingMap());
   }
 
-  /** The effective members as the conservative verdict counts them (for tests). */
+  /** The effective members as the conservative verdict counts them, from the stored marks (for tests). */
   Map<PanelRef, Brace> conservativeMembers() {
-    return Map.copyOf(marks.conservativeMembers());
+    return Map.copyOf(stored.conservativeMembers());
   }
 
+  /** The live verdict drawn again from the stored marks, and the picture. */
   private void reanalyse() {
     try {
-      live.update(marks, frame, cursor.frameInWalkProperty().get());
+      live.update(stored, storedFrame, cursor.frameInWalkProperty().get());
     } catch (RuntimeException e) {
-      // the marks are saved; only the verdict shown is behind
+      // the marks are stored; only the verdict shown is behind
       error.set("The verdict could not be worked out again (" + e.getMessage()
           + "); every mark is saved. Findings (Ctrl+4) works it out from the record.");
     }
     refreshPicture();
   }
 
-  /** The state of each frame member with a mark in force (withdrawn marks excluded). */
+  /** The state of each frame member with a stored mark in force (withdrawn marks excluded). */
   public Map<FrameRef, PanelState> frameFindings() {
-    return Map.copyOf(frame.states());
+    return Map.copyOf(storedFrame.states());
   }
 
   /** The engine's whole answer for the marks so far: verdicts, repair plan, restore list. */

@@ -59,8 +59,22 @@ class FindingsViewModelTest {
     services.close();
   }
 
+  /** A view model whose findings are loaded (the load run off the caller's turn, as the app does). */
   private FindingsViewModel vm() {
-    return new FindingsViewModel(services.sites(), services.inspections(), services.analysis(), PlaneAnalyzer.standard(), issuer, dialogs, ui, background, walk.id(), facade.id());
+    FindingsViewModel vm = new FindingsViewModel(services.sites(), services.inspections(), services.analysis(),
+        PlaneAnalyzer.standard(), issuer, dialogs, ui, background, walk.id(), facade.id());
+    assertThat(queued).as("nothing read while constructing").isEmpty();
+    vm.load();
+    assertThat(vm.verdictProperty().get()).as("nothing read on the caller's turn").isNull();
+    runQueued();
+    return vm;
+  }
+
+  /** Runs the background work queued so far, and what it queues in turn. */
+  private void runQueued() {
+    while (!queued.isEmpty()) {
+      queued.remove(0).run();
+    }
   }
 
   @Test
@@ -114,12 +128,16 @@ class FindingsViewModelTest {
   void finalisingAsksNamesThePanelsNotInspectedAndMakesTheInspectionReadOnly() {
     FindingsViewModel vm = vm();
     dialogs.confirmAnswers.push(false);
-    assertThat(vm.finaliseInspection()).isFalse();
+    assertThat(vm.finaliseInspection()).isTrue();
+    assertThat(dialogs.asked).as("the gaps are counted off the caller's turn first").isEmpty();
+    runQueued();
     assertThat(services.inspections().inspection(walk.id()).isFinalised()).isFalse();
     assertThat(dialogs.asked.get(0)).contains("east end frame: 5 of 5 panels not inspected");
     dialogs.confirmAnswers.push(true);
     assertThat(vm.finaliseInspection()).isTrue();
+    runQueued();
     assertThat(vm.finalisedProperty().get()).isTrue();
+    assertThat(vm.statusProperty().get()).contains("finalised");
     assertThat(services.inspections().inspection(walk.id()).isFinalised()).isTrue();
     assertThat(vm.finaliseInspection()).isFalse();
   }

@@ -38,7 +38,7 @@ class WalkViewFxTest {
             PlaneGrid.uniform(2, 2, Support.PINNED_BASE),
             Map.of(PanelRef.of(1, 1), Brace.rigid(Diagonal.RISING), PanelRef.of(2, 2), Brace.rigid(Diagonal.FALLING)));
     vm = new WalkViewModel(design, "Key test", List.of(), recorder, PlaneAnalyzer.standard(), new FakeDialogs(), false, false,
-        java.time.Clock.systemUTC());
+        java.time.Clock.systemUTC(), Runnable::run, Runnable::run);
     WalkView view = new WalkView(vm);
     Scene scene = new Scene(view, 1280, 800);
     Stylesheet.apply(scene);

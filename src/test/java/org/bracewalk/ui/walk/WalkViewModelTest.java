@@ -32,7 +32,8 @@ class WalkViewModelTest {
 
   private WalkViewModel walk(List<RecordedMark> existing, boolean readOnly) {
     return new WalkViewModel(
-        design, "Test plane", existing, recorder, PlaneAnalyzer.standard(), dialogs, false, readOnly, java.time.Clock.systemUTC());
+        design, "Test plane", existing, recorder, PlaneAnalyzer.standard(), dialogs, false, readOnly, java.time.Clock.systemUTC(),
+        Runnable::run, Runnable::run);
   }
 
   private static void markAll(WalkViewModel vm, PanelState state, int times) {
@@ -119,15 +120,22 @@ class WalkViewModelTest {
     vm.clearPhotos();
     vm.addCameraPhotos(false);
     assertThat(vm.photos()).containsExactly(late.toAbsolutePath());
-    // a photo that is gone by the time of the mark: taken off, the mark refused once, saying why
+    // a photo that is gone by the time of the mark: checked where the mark is written, the mark
+    // not recorded, the panel named; marked again, it is recorded without the photo
     java.nio.file.Files.delete(late);
     int rows = recorder.rows.size();
-    assertThat(vm.mark(PanelState.SOUND)).isFalse();
-    assertThat(vm.errorProperty().get()).contains("IMG_0101.jpg").contains("no longer there");
+    PanelRef here = vm.cursor();
+    assertThat(vm.mark(PanelState.SOUND)).isTrue();
+    assertThat(vm.errorProperty().get()).contains("IMG_0101.jpg").contains("no longer there")
+        .contains(here.toString()).contains("mark it again");
     assertThat(vm.photos()).isEmpty();
     assertThat(recorder.rows).hasSize(rows);
+    assertThat(vm.findings()).doesNotContainKey(here);
+    assertThat(vm.pictureProperty().get().findings()).doesNotContainKey(here);
+    vm.select(here);
     assertThat(vm.mark(PanelState.SOUND)).isTrue();
     assertThat(recorder.rows).hasSize(rows + 1);
+    assertThat(vm.errorProperty().get()).isEmpty();
   }
 
   @Test
@@ -253,13 +261,135 @@ class WalkViewModelTest {
   }
 
   @Test
-  void aFailedCommitChangesNothingAndSaysSo() {
+  void aFailedCommitTakesThePanelBackAndSaysSoWithoutStoppingTheWalk() {
     WalkViewModel vm = walk(List.of(), false);
     recorder.failNext = true;
-    assertThat(vm.mark(PanelState.MISSING)).isFalse();
-    assertThat(vm.cursor()).isEqualTo(PanelRef.of(1, 1));
+    assertThat(vm.mark(PanelState.MISSING)).isTrue();
     assertThat(vm.findings()).isEmpty();
-    assertThat(dialogs.errors).singleElement().asString().contains("lift 1, bay 1").contains("disk full");
+    assertThat(vm.pictureProperty().get().findings()).isEmpty();
+    assertThat(vm.errorProperty().get()).contains("Not recorded").contains("lift 1, bay 1").contains("missing")
+        .contains("disk full");
+    assertThat(dialogs.errors).as("no window stops the walk").isEmpty();
+    assertThat(vm.canUndoProperty().get()).as("nothing stored to undo").isFalse();
+    // the next panel is recorded; the error stays until lift 1, bay 1 is marked again and stored
+    assertThat(vm.mark(PanelState.SOUND)).isTrue();
+    assertThat(recorder.rows).singleElement().extracting(MemoryRecorder.Row::panel).isNotEqualTo(PanelRef.of(1, 1));
+    assertThat(vm.errorProperty().get()).contains("lift 1, bay 1");
+    vm.select(PanelRef.of(1, 1));
+    vm.mark(PanelState.MISSING);
+    assertThat(vm.errorProperty().get()).isEmpty();
+    assertThat(recorder.rows).hasSize(2);
+  }
+
+  @Test
+  void theScreenShowsAMarkAtOnceAndTheVerdictFollowsTheRecord() {
+    HeldTasks queue = new HeldTasks();
+    WalkViewModel vm = new WalkViewModel(design, "Test plane", List.of(), recorder, PlaneAnalyzer.standard(), dialogs,
+        false, false, java.time.Clock.systemUTC(), Runnable::run, queue);
+    queue.runAll();
+    vm.select(PanelRef.of(2, 2));
+    assertThat(vm.mark(PanelState.MISSING)).isTrue();
+    // shown at once: the picture and the cursor; nothing written yet, the verdict unchanged
+    assertThat(vm.pictureProperty().get().findings()).containsKey(PanelRef.of(2, 2));
+    assertThat(vm.cursor()).isNotEqualTo(PanelRef.of(2, 2));
+    assertThat(recorder.rows).isEmpty();
+    assertThat(vm.writing()).isTrue();
+    assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.DEPENDS_ON_UNSEEN);
+    assertThat(vm.alarmProperty().get()).isEmpty();
+    queue.runAll();
+    assertThat(recorder.rows).hasSize(1);
+    assertThat(vm.writing()).isFalse();
+    assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.LOST);
+    assertThat(vm.statusProperty().get()).contains("Saved lift 2, bay 2").contains("(record 1)");
+  }
+
+  @Test
+  void marksAndUndosQueuedFasterThanTheyAreWrittenReachTheRecordInKeyOrderEachCorrectingTheOneBefore() {
+    HeldTasks queue = new HeldTasks();
+    WalkViewModel vm = new WalkViewModel(design, "Test plane", List.of(), recorder, PlaneAnalyzer.standard(), dialogs,
+        false, false, java.time.Clock.systemUTC(), Runnable::run, queue);
+    vm.select(PanelRef.of(1, 1));
+    vm.mark(PanelState.SOUND); // record 1
+    vm.select(PanelRef.of(1, 1));
+    vm.mark(PanelState.MISSING); // record 2 corrects 1
+    vm.undo(); // record 3 corrects 2, back to sound
+    vm.undo(); // record 4 corrects 3, back to not inspected
+    vm.mark(PanelState.DAMAGED_EFFECTIVE); // record 5 corrects 4
+    assertThat(recorder.rows).isEmpty();
+    queue.runAll();
+    assertThat(recorder.rows).extracting(MemoryRecorder.Row::supersedes).containsExactly(null, 1L, 2L, 3L, 4L);
+    assertThat(recorder.rows).extracting(r -> r.mark().state()).containsExactly(PanelState.SOUND,
+        PanelState.MISSING, PanelState.SOUND, PanelState.NOT_INSPECTED, PanelState.DAMAGED_EFFECTIVE);
+    assertThat(recorder.rows).extracting(MemoryRecorder.Row::reason).containsExactly(null,
+        WalkViewModel.REMARK_REASON, WalkViewModel.UNDO_REASON, WalkViewModel.UNDO_REASON, WalkViewModel.REMARK_REASON);
+    assertThat(vm.findings()).containsEntry(PanelRef.of(1, 1),
+        org.bracewalk.core.model.PanelFinding.of(PanelState.DAMAGED_EFFECTIVE));
+  }
+
+  @Test
+  void anUndoQueuedBehindAMarkThatFailsWritesNothing() {
+    HeldTasks queue = new HeldTasks();
+    WalkViewModel vm = new WalkViewModel(design, "Test plane", List.of(), recorder, PlaneAnalyzer.standard(), dialogs,
+        false, false, java.time.Clock.systemUTC(), Runnable::run, queue);
+    vm.mark(PanelState.SOUND);
+    vm.undo();
+    recorder.failNext = true;
+    queue.runAll();
+    assertThat(recorder.rows).isEmpty();
+    assertThat(vm.findings()).isEmpty();
+    assertThat(vm.pictureProperty().get().findings()).isEmpty();
+    assertThat(vm.errorProperty().get()).contains("lift 1, bay 1").contains("disk full");
+  }
+
+  @Test
+  void aFailedUndoLeavesTheMarkInPlaceAndUndoableAgain() {
+    WalkViewModel vm = walk(List.of(), false);
+    vm.select(PanelRef.of(2, 2));
+    vm.mark(PanelState.MISSING);
+    recorder.failNext = true;
+    assertThat(vm.undo()).isTrue();
+    assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.LOST);
+    assertThat(vm.pictureProperty().get().findings()).containsKey(PanelRef.of(2, 2));
+    assertThat(vm.errorProperty().get()).contains("undo").contains("lift 2, bay 2").contains("disk full");
+    assertThat(vm.canUndoProperty().get()).isTrue();
+    assertThat(vm.undo()).isTrue();
+    assertThat(recorder.rows).hasSize(2);
+    assertThat(recorder.rows.get(1).supersedes()).isEqualTo(1L);
+    assertThat(vm.verdict().kind()).isNotEqualTo(VerdictKind.LOST);
+  }
+
+  @Test
+  void thePhotoFilesAreCheckedWhereTheMarkIsWrittenNotAtTheKeyPress(@org.junit.jupiter.api.io.TempDir Path dir)
+      throws Exception {
+    HeldTasks queue = new HeldTasks();
+    WalkViewModel vm = new WalkViewModel(design, "Test plane", List.of(), recorder, PlaneAnalyzer.standard(), dialogs,
+        false, false, java.time.Clock.systemUTC(), Runnable::run, queue);
+    Path gone = dir.resolve("gone.jpg"); // never there: a check at the key press would refuse the mark
+    dialogs.photoAnswers.push(List.of(gone));
+    vm.addPhotos();
+    assertThat(vm.mark(PanelState.DAMAGED_EFFECTIVE)).isTrue();
+    assertThat(vm.errorProperty().get()).isEmpty();
+    queue.runAll();
+    assertThat(recorder.rows).isEmpty();
+    assertThat(vm.errorProperty().get()).contains("lift 1, bay 1").contains("gone.jpg").contains("no longer there");
+  }
+
+  @Test
+  void theCameraFolderIsReadOnTheWriteQueueNotOnTheCallersTurn(@org.junit.jupiter.api.io.TempDir Path dir)
+      throws Exception {
+    Path camera = java.nio.file.Files.createDirectories(dir.resolve("DCIM"));
+    HeldTasks queue = new HeldTasks();
+    WalkViewModel vm = new WalkViewModel(design, "Test plane", List.of(), recorder, PlaneAnalyzer.standard(), dialogs,
+        false, false, java.time.Clock.systemUTC(), Runnable::run, queue);
+    CameraFolder.Setting setting = CameraFolder.Setting.inMemory();
+    setting.set(camera);
+    vm.useCameraFolderSetting(setting);
+    queue.runAll();
+    Path taken = photo(camera, "IMG_0200.jpg", java.time.Instant.now().plusSeconds(1));
+    vm.addCameraPhotos(false);
+    assertThat(vm.photos()).as("nothing read yet").isEmpty();
+    queue.runAll();
+    assertThat(vm.photos()).containsExactly(taken.toAbsolutePath());
   }
 
   @Test

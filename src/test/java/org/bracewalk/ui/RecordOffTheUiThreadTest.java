@@ -1,0 +1,203 @@
+package org.bracewalk.ui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.lang.reflect.InvocationHandler;
+import java.lang.reflect.InvocationTargetException;
+import java.lang.reflect.Proxy;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.ConcurrentLinkedQueue;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.TimeUnit;
+import org.bracewalk.app.AppServices;
+import org.bracewalk.bench.DemoWalk;
+import org.bracewalk.core.analysis.PlaneAnalyzer;
+import org.bracewalk.core.model.Inspection;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.port.RecordStore;
+import org.bracewalk.store.Database;
+import org.bracewalk.ui.common.FakeDialogs;
+import org.bracewalk.ui.findings.FindingsViewModel;
+import org.bracewalk.ui.findings.ReportIssuer;
+import org.bracewalk.ui.history.HistoryViewModel;
+import org.bracewalk.ui.sites.OverviewRow;
+import org.bracewalk.ui.sites.SitesViewModel;
+import org.bracewalk.ui.walk.CameraFolder;
+import org.bracewalk.ui.walk.InspectionMarkRecorder;
+import org.bracewalk.ui.walk.WalkViewModel;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * No view model touches the record on the UI thread (issue 10, item 5), the running half: the test
+ * thread plays the JavaFX thread (the UI executor's tasks run on it, the dialogs answer on it), the
+ * background executor is a thread of its own, and the record is reached through a store that notes
+ * every call made on the UI thread. The Sites, Findings, History and walk-round view models are put
+ * through their commands; not one call may reach the store from the UI thread.
+ */
+class RecordOffTheUiThreadTest {
+  @TempDir Path dir;
+  private AppServices services;
+  private final ExecutorService background = Executors.newSingleThreadExecutor();
+  private final ConcurrentLinkedQueue<Runnable> uiTasks = new ConcurrentLinkedQueue<>();
+  private final java.util.concurrent.Executor ui = uiTasks::add;
+  private final FakeDialogs dialogs = new FakeDialogs();
+  private final List<String> onUiThread = new java.util.concurrent.CopyOnWriteArrayList<>();
+  private final List<String> opened = new ArrayList<>();
+  private Thread uiThread;
+  private volatile boolean armed;
+
+  @BeforeEach
+  void open() {
+    uiThread = Thread.currentThread();
+    RecordStore store = watched(RecordStore.class, Database.open(dir.resolve("test.db")));
+    services = AppServices.over(store, DemoDatabase.CLOCK, PlaneAnalyzer.standard());
+    services.demo().load();
+  }
+
+  @AfterEach
+  void close() throws Exception {
+    background.shutdown();
+    background.awaitTermination(30, TimeUnit.SECONDS);
+    services.close();
+  }
+
+  /** {@code target} behind a proxy that notes each call on the UI thread, and watches what it returns. */
+  private <T> T watched(Class<T> type, T target) {
+    InvocationHandler h = (proxy, m, args) -> {
+      if (armed && Thread.currentThread() == uiThread && m.getDeclaringClass() != Object.class
+          && !m.getName().equals("location") && !m.getName().equals("close")) {
+        onUiThread.add(type.getSimpleName() + "." + m.getName());
+      }
+      Object r;
+      try {
+        r = m.invoke(target, args);
+      } catch (InvocationTargetException e) {
+        throw e.getCause();
+      }
+      Class<?> rt = m.getReturnType();
+      if (r != null && rt.isInterface() && rt.getName().startsWith("org.bracewalk.core.port.")) {
+        @SuppressWarnings("unchecked")
+        Class<Object> cast = (Class<Object>) rt;
+        return watched(cast, r);
+      }
+      return r;
+    };
+    return type.cast(Proxy.newProxyInstance(type.getClassLoader(), new Class<?>[] {type}, h));
+  }
+
+  /** Lets the background thread and the UI tasks run until neither has anything left. */
+  private void settle() throws Exception {
+    do {
+      background.submit(() -> { }).get(60, TimeUnit.SECONDS);
+      Runnable r;
+      while ((r = uiTasks.poll()) != null) {
+        r.run();
+      }
+      background.submit(() -> { }).get(60, TimeUnit.SECONDS);
+    } while (!uiTasks.isEmpty());
+  }
+
+  private static OverviewRow row(SitesViewModel vm, String name) {
+    return vm.rows().stream().filter(r -> r.name().equals(name)).findFirst().orElseThrow();
+  }
+
+  @Test
+  void theSitesScreenStartsRetiresAndChangesTheIntervalWithoutTheRecordOnTheUiThread() throws Exception {
+    armed = true;
+    SitesViewModel vm = new SitesViewModel(services.sites(), services.inspections(), services.analysis(),
+        services.demo(), services.store().location(), DemoDatabase.CLOCK, dialogs,
+        (screen, sel) -> opened.add(screen + " " + sel), ui, background);
+    settle();
+    vm.selectedProperty().set(row(vm, "frame 2"));
+    dialogs.textAnswers.push(Optional.of("14"));
+    assertThat(vm.changeInterval()).isTrue();
+    settle();
+    assertThat(row(vm, "Aisle C racking run").interval()).isEqualTo("14 days");
+    vm.selectedProperty().set(row(vm, "spine"));
+    dialogs.textAnswers.add(Optional.of("dismantled"));
+    dialogs.confirmAnswers.add(true);
+    assertThat(vm.retirePlane()).isTrue();
+    settle();
+    assertThat(vm.selectionForOthers().hasPlane()).isTrue();
+    vm.selectedProperty().set(row(vm, "north facade"));
+    vm.inspectorNameProperty().set("Rowan Test");
+    vm.inspectorPositionProperty().set("Scaffold inspector");
+    vm.competentPersonProperty().set("Rowan Test");
+    vm.shiftProperty().set("day");
+    assertThat(vm.startInspection()).as(vm.errorProperty().get()).isTrue();
+    settle();
+    assertThat(opened).singleElement().asString().startsWith("WALK");
+    assertThat(vm.errorProperty().get()).isEmpty();
+    assertThat(onUiThread).isEmpty();
+  }
+
+  @Test
+  void theFindingsAndHistoryScreensReadAndFinaliseWithoutTheRecordOnTheUiThread() throws Exception {
+    PlaneRecord facade = DemoWalk.facade(services);
+    Inspection walk = DemoWalk.record(services, 50);
+    ReportIssuer none = new ReportIssuer() {
+      @Override
+      public String issueReport(long id, Path out, java.util.function.Consumer<Progress> progress) {
+        return "issued";
+      }
+
+      @Override
+      public String issueRepairOrder(long id, Path out, java.util.function.Consumer<Progress> progress) {
+        return "issued";
+      }
+    };
+    armed = true;
+    FindingsViewModel vm = new FindingsViewModel(services.sites(), services.inspections(), services.analysis(),
+        PlaneAnalyzer.standard(), none, dialogs, ui, background, walk.id(), facade.id());
+    vm.load();
+    settle();
+    assertThat(vm.repairLines()).isNotEmpty();
+    dialogs.confirmAnswers.push(true);
+    assertThat(vm.finaliseInspection()).isTrue();
+    settle();
+    assertThat(vm.finalisedProperty().get()).isTrue();
+    HistoryViewModel history = new HistoryViewModel(services.history(), services.sites(), ui, background, facade.id());
+    settle();
+    assertThat(history).isNotNull();
+    assertThat(onUiThread).isEmpty();
+  }
+
+  @Test
+  void theWalkRoundMarksUndoesAndReadsTheCameraFolderWithoutTheRecordOnTheUiThread() throws Exception {
+    PlaneRecord facade = DemoWalk.facade(services);
+    Inspection walk = DemoWalk.record(services, 3);
+    var existing = InspectionMarkRecorder.existing(services.inspections(), walk.id(), facade.id());
+    var design = services.inspections().designInForce(walk.id(), facade.id()).design();
+    Path camera = Files.createDirectories(dir.resolve("DCIM"));
+    armed = true;
+    WalkViewModel vm = new WalkViewModel(design, "facade", facade.role(), existing,
+        new InspectionMarkRecorder(services.inspections(), walk.id(), facade.id(), "Rowan Test"),
+        PlaneAnalyzer.standard(), dialogs, false, false, DemoDatabase.CLOCK, ui, background);
+    CameraFolder.Setting setting = CameraFolder.Setting.inMemory();
+    setting.set(camera);
+    vm.useCameraFolderSetting(setting);
+    settle();
+    vm.select(PanelRef.of(1, 1));
+    assertThat(vm.mark(PanelState.MISSING)).isTrue();
+    assertThat(vm.mark(PanelState.SOUND)).isTrue();
+    assertThat(vm.undo()).isTrue();
+    vm.addCameraPhotos(false);
+    settle();
+    assertThat(vm.errorProperty().get()).isEmpty();
+    assertThat(vm.writing()).isFalse();
+    armed = false; // the test reads the record itself from here
+    var latest = services.inspections().latestObservations(walk.id(), facade.id());
+    assertThat(latest.get(PanelRef.of(1, 1)).state()).isEqualTo(PanelState.MISSING);
+    assertThat(onUiThread).isEmpty();
+  }
+}
