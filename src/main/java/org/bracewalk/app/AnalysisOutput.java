@@ -88,9 +88,19 @@ public final class AnalysisOutput {
               + (o.note().isEmpty() ? "" : ": " + o.note()));
         }
       }
+      for (Observation o : p.latestFrame().values().stream()
+          .sorted(Comparator.comparing(Observation::frameMember)).toList()) {
+        if (o.state() != PanelState.SOUND || o.defect() != null) {
+          notes.add("  " + p.plane().name() + ", " + o.frameMember() + ": " + o.state().label()
+              + (o.defect() == null ? "" : ", " + o.defect().label())
+              + (o.bowMm() == null ? "" : ", bow " + o.bowMm() + " mm over " + o.gaugeLengthMm()
+                  + " mm")
+              + (o.note().isEmpty() ? "" : ": " + o.note()));
+        }
+      }
     }
     if (!notes.isEmpty()) {
-      out.append("Findings other than sound (latest per panel):\n");
+      out.append("Findings other than sound (latest per panel and frame member):\n");
       notes.forEach(n -> out.append(n).append('\n'));
     }
     for (PlaneResult p : a.planes()) {

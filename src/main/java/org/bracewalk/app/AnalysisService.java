@@ -8,6 +8,7 @@ import java.util.TreeMap;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelFinding;
@@ -16,7 +17,10 @@ import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 
-/** Analyses every plane of an inspection: as built (latest findings) against its design. */
+/**
+ * Analyses every plane of an inspection: as built (latest findings on panels and frame members)
+ * against its design.
+ */
 public final class AnalysisService {
   private final InspectionService inspections;
   private final SiteService sites;
@@ -53,7 +57,10 @@ public final class AnalysisService {
     Map<PanelRef, Observation> latest = InspectionService.latest(rows, plane.id());
     Map<PanelRef, PanelFinding> findings = new TreeMap<>();
     latest.forEach((p, o) -> findings.put(p, o.finding()));
-    AsBuiltPlane asBuilt = AsBuiltPlane.fromFindings(design.design(), findings);
-    return new PlaneResult(plane, design, latest, asBuilt, analyzer.analyse(design.design(), asBuilt));
+    Map<FrameRef, Observation> latestFrame = InspectionService.latestFrame(rows, plane.id());
+    AsBuiltPlane asBuilt = AsBuiltPlane.fromFindings(design.design(), findings,
+        InspectionService.frameFindings(latestFrame));
+    return new PlaneResult(plane, design, latest, asBuilt,
+        analyzer.analyse(design.design(), asBuilt), latestFrame);
   }
 }

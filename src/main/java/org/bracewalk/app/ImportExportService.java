@@ -40,6 +40,7 @@ import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.Support;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionStatus;
 import org.bracewalk.core.model.IssuedReport;
@@ -134,10 +135,19 @@ public final class ImportExportService {
         List<Long> ids = new ArrayList<>();
         for (ObservationData o : i.observations()) {
           Long supersedes = o.supersedes() == null ? null : ids.get(o.supersedes() - 1);
+          PlaneRecord plane = planes.get(o.plane());
+          if (o.frameMember() != null && o.state() == PanelState.EXTRA
+              && designIn(scope, plane) != null
+              && designIn(scope, plane).hasFrameMember(o.frameMember())) {
+            throw new UserInputException("inspection " + i.number() + ", observation "
+                + (ids.size() + 1) + " (plane \"" + o.plane() + "\"): the " + o.frameMember()
+                + " is in the design the inspection is checked against, so it cannot be extra"
+                + " (there although the design leaves it out); nothing was imported");
+          }
           Observation stored = store.observations().add(StoredText.observation(new Observation(0,
-              inspection.id(), planes.get(o.plane()).id(), o.panel(), o.state(), o.member(),
+              inspection.id(), plane.id(), o.panel(), o.state(), o.member(),
               o.bowMm(), o.gaugeLengthMm(), o.defect(), o.note(), o.recordedAt(), o.recordedBy(),
-              supersedes, o.correctionReason())));
+              supersedes, o.correctionReason(), o.frameMember())));
           ids.add(stored.id());
           for (PhotoData ph : o.photos()) {
             store.observations().addPhoto(StoredText.photo(new Photo(0, stored.id(), ph.fileName(),
@@ -180,6 +190,13 @@ public final class ImportExportService {
     verifications.forEach((action, number) ->
         store.repairs().markVerified(action, inspectionIds.get(number)));
     return new ImportedSite(site, structures, allPlanes, inspections, observations);
+  }
+
+  /** The design of a plane in an inspection's scope (design revision id by plane id). */
+  private PlaneDesign designIn(Map<Long, Long> scope, PlaneRecord plane) {
+    Long revision = scope.get(plane.id());
+    return revision == null ? null
+        : store.designs().find(revision).orElseThrow().design();
   }
 
   /**
@@ -299,7 +316,7 @@ public final class ImportExportService {
       observations.add(new ObservationData(planeNames.get(o.planeId()), o.panel(), o.state(),
           o.memberFound(), o.bowMm(), o.gaugeLengthMm(), o.defect(), o.note(), o.recordedAt(),
           o.recordedBy(), o.supersedes() == null ? null : position.get(o.supersedes()),
-          o.correctionReason(), photos));
+          o.correctionReason(), photos, o.frameMember()));
     }
     List<RepairOrderData> orders = new ArrayList<>();
     for (RepairOrder r : store.repairs().ordersOf(i.id())) {
@@ -347,7 +364,7 @@ public final class ImportExportService {
       rows.add(new ObservationCsv.Row(0, planeNames.get(o.planeId()), o.panel(), o.state(),
           o.memberFound(), o.bowMm(), o.gaugeLengthMm(), o.defect(), o.note(), o.recordedAt(),
           o.recordedBy(), o.supersedes() == null ? null : row.get(o.supersedes()),
-          o.correctionReason()));
+          o.correctionReason(), o.frameMember()));
     }
     return ObservationCsv.write(rows);
   }
@@ -363,10 +380,16 @@ public final class ImportExportService {
       throw new InspectionFinalisedException(inspectionId, "record observations from " + fileName);
     }
     Map<String, PlaneGrid> grids = new HashMap<>();
+    Map<String, Set<FrameRef>> omitted = new HashMap<>();
+    Map<Long, Long> scope = store.planes().scopeOf(inspectionId);
     for (PlaneRecord p : store.planes().ofInspection(inspectionId)) {
       grids.put(p.name(), p.grid());
+      PlaneDesign design = designIn(scope, p);
+      if (design != null) {
+        omitted.put(p.name(), design.omittedFrame());
+      }
     }
-    return ObservationCsv.read(fileName, text, grids);
+    return ObservationCsv.read(fileName, text, grids, omitted);
   }
 
   /**
@@ -440,7 +463,8 @@ public final class ImportExportService {
         o = store.inTransaction(() -> {
           Observation added = store.observations().add(StoredText.observation(new Observation(0,
               inspectionId, planeIds.get(r.plane()), r.panel(), r.state(), r.member(), r.bowMm(),
-              r.gaugeLengthMm(), r.defect(), r.note(), at, by, supersedes, r.correctionReason())));
+              r.gaugeLengthMm(), r.defect(), r.note(), at, by, supersedes, r.correctionReason(),
+              r.frameMember())));
           store.observations().addSource(inspectionId, source, r.line(), added.id());
           return added;
         });

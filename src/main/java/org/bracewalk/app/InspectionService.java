@@ -14,11 +14,13 @@ import java.util.Set;
 import java.util.TreeMap;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionStatus;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.Photo;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.PlaneRetirement;
@@ -28,8 +30,8 @@ import org.bracewalk.core.port.InspectionFinalisedException;
 import org.bracewalk.core.port.RecordStore;
 
 /**
- * Inspections: start one, record observations panel by panel (each committed when recorded, with
- * its photos), correct them (a new row of the same inspection naming the one it supersedes),
+ * Inspections: start one, record observations panel by panel or frame member by frame member (each
+ * committed when recorded, with its photos), correct them (a new row of the same inspection naming the one it supersedes),
  * finalise. Also the latest
  * findings per panel and the as-built plane they give.
  */
@@ -250,6 +252,26 @@ public final class InspectionService {
     return latest(observations(inspectionId), planeId);
   }
 
+  /**
+   * The observation that counts for each frame member of a plane: the latest one recorded for the
+   * member that no correction supersedes. Members with none are absent (taken as designed).
+   */
+  public Map<FrameRef, Observation> latestFrameObservations(long inspectionId, long planeId) {
+    return latestFrame(observations(inspectionId), planeId);
+  }
+
+  /** The latest state per frame member (see {@link #latestFrameObservations}). */
+  public Map<FrameRef, PanelState> latestFrameFindings(long inspectionId, long planeId) {
+    return frameFindings(latestFrameObservations(inspectionId, planeId));
+  }
+
+  /** The states of the given latest frame-member observations, by member. */
+  static Map<FrameRef, PanelState> frameFindings(Map<FrameRef, Observation> latest) {
+    Map<FrameRef, PanelState> out = new TreeMap<>();
+    latest.forEach((m, o) -> out.put(m, o.state()));
+    return out;
+  }
+
   /** The latest finding per panel (see {@link #latestObservations}). */
   public Map<PanelRef, PanelFinding> latestFindings(long inspectionId, long planeId) {
     Map<PanelRef, PanelFinding> out = new TreeMap<>();
@@ -288,7 +310,11 @@ public final class InspectionService {
   /** The plane as found in this inspection, against the design in force. */
   public AsBuiltPlane asBuilt(long inspectionId, long planeId) {
     DesignRevision design = designInForce(inspectionId, planeId);
-    return AsBuiltPlane.fromFindings(design.design(), latestFindings(inspectionId, planeId));
+    List<Observation> rows = observations(inspectionId);
+    Map<PanelRef, PanelFinding> findings = new TreeMap<>();
+    latest(rows, planeId).forEach((p, o) -> findings.put(p, o.finding()));
+    return AsBuiltPlane.fromFindings(design.design(), findings,
+        frameFindings(latestFrame(rows, planeId)));
   }
 
   /**
@@ -316,21 +342,41 @@ public final class InspectionService {
                     .plusDays(structure.inspectionIntervalDays()));
   }
 
-  /** The latest non-superseded observation per panel of one plane, from rows in id order. */
+  /**
+   * The latest non-superseded observation per panel of one plane, from rows in id order
+   * (observations of frame members are left out: see {@link #latestFrame}).
+   */
   static Map<PanelRef, Observation> latest(List<Observation> rows, long planeId) {
+    Set<Long> superseded = superseded(rows);
+    Map<PanelRef, Observation> out = new TreeMap<>();
+    for (Observation o : rows) {
+      if (o.planeId() == planeId && o.panel() != null && !superseded.contains(o.id())) {
+        out.put(o.panel(), o);
+      }
+    }
+    return out;
+  }
+
+  /** The latest non-superseded observation per frame member of one plane, from rows in id order. */
+  static Map<FrameRef, Observation> latestFrame(List<Observation> rows, long planeId) {
+    Set<Long> superseded = superseded(rows);
+    Map<FrameRef, Observation> out = new TreeMap<>();
+    for (Observation o : rows) {
+      if (o.planeId() == planeId && o.frameMember() != null && !superseded.contains(o.id())) {
+        out.put(o.frameMember(), o);
+      }
+    }
+    return out;
+  }
+
+  private static Set<Long> superseded(List<Observation> rows) {
     Set<Long> superseded = new HashSet<>();
     for (Observation o : rows) {
       if (o.supersedes() != null) {
         superseded.add(o.supersedes());
       }
     }
-    Map<PanelRef, Observation> out = new TreeMap<>();
-    for (Observation o : rows) {
-      if (o.planeId() == planeId && !superseded.contains(o.id())) {
-        out.put(o.panel(), o);
-      }
-    }
-    return out;
+    return superseded;
   }
 
   Observation toObservation(
@@ -359,7 +405,10 @@ public final class InspectionService {
           + " part of " + inspection.label() + ": the planes an inspection covers are fixed when"
           + " it starts, and this one was added after; record it in a new inspection");
     }
-    if (!plane.grid().contains(n.panel())) {
+    String what = n.panel() != null ? n.panel().toString() : n.frameMember().toString();
+    if (n.frameMember() != null) {
+      checkFrameMember(inspection, plane, n);
+    } else if (!plane.grid().contains(n.panel())) {
       throw new UserInputException(
           "panel "
               + n.panel()
@@ -375,10 +424,34 @@ public final class InspectionService {
       return StoredText.observation(new Observation(
           0, inspection.id(), plane.id(), n.panel(), n.state(), n.memberFound(), n.bowMm(),
           n.gaugeLengthMm(), n.defect(), n.note(), clock.instant(), n.recordedBy(), supersedes,
-          reason));
+          reason, n.frameMember()));
     } catch (IllegalArgumentException e) {
       throw new UserInputException(
-          "observation of plane '" + plane.name() + "', " + n.panel() + ": " + e.getMessage(), e);
+          "observation of plane '" + plane.name() + "', " + what + ": " + e.getMessage(), e);
+    }
+  }
+
+  /**
+   * A frame member must lie in the plane, name no diagonal found, and be recorded as extra only
+   * where the design in force leaves it out.
+   */
+  private void checkFrameMember(Inspection inspection, PlaneRecord plane, NewObservation n) {
+    FrameRef m = n.frameMember();
+    if (!m.within(plane.grid())) {
+      throw new UserInputException(m + " lies outside plane '" + plane.name() + "' ("
+          + plane.grid().lifts() + " lifts x " + plane.grid().bays() + " bays: levels 0 to "
+          + plane.grid().lifts() + ", lines 0 to " + plane.grid().bays() + ")");
+    }
+    if (n.memberFound() != null) {
+      throw new UserInputException("observation of plane '" + plane.name() + "', " + m
+          + ": a frame member names no diagonal found (the member found belongs to a panel's"
+          + " diagonals); record the diagonals of a panel separately");
+    }
+    if (n.state() == PanelState.EXTRA
+        && designInForce(inspection.id(), plane.id()).design().hasFrameMember(m)) {
+      throw new UserInputException("observation of plane '" + plane.name() + "', " + m
+          + ": the design has this member, so it cannot be extra (extra means there although"
+          + " the design leaves it out); record it sound, damaged or missing");
     }
   }
 

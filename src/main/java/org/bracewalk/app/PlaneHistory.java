@@ -7,9 +7,11 @@ import java.util.Objects;
 import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneRecord;
 
 /**
@@ -36,6 +38,9 @@ public record PlaneHistory(PlaneRecord plane, List<Entry> entries) {
    * @param changes the panels whose finding differs from the previous inspection's, by panel
    *     (empty for the first inspection)
    * @param summary the one verdict on the plane in this inspection ({@link Verdict})
+   * @param frameFindings the latest state per frame member recorded (others taken as designed)
+   * @param frameChanges the frame members whose recorded state differs from the previous
+   *     inspection's, in member order (empty for the first inspection)
    */
   public record Entry(
       Inspection inspection,
@@ -44,7 +49,16 @@ public record PlaneHistory(PlaneRecord plane, List<Entry> entries) {
       AsBuiltPlane asBuilt,
       StateAnalysis verdict,
       List<PanelChange> changes,
-      Verdict summary) {
+      Verdict summary,
+      Map<FrameRef, PanelState> frameFindings,
+      List<FrameChange> frameChanges) {
+
+    /** An entry with no frame member recorded. */
+    public Entry(Inspection inspection, DesignRevision design,
+        Map<PanelRef, PanelFinding> findings, AsBuiltPlane asBuilt, StateAnalysis verdict,
+        List<PanelChange> changes, Verdict summary) {
+      this(inspection, design, findings, asBuilt, verdict, changes, summary, Map.of(), List.of());
+    }
 
     public Entry {
       Objects.requireNonNull(summary, "summary");
@@ -54,6 +68,8 @@ public record PlaneHistory(PlaneRecord plane, List<Entry> entries) {
       Objects.requireNonNull(asBuilt, "asBuilt");
       Objects.requireNonNull(verdict, "verdict");
       changes = List.copyOf(changes);
+      frameFindings = Map.copyOf(frameFindings);
+      frameChanges = List.copyOf(frameChanges);
     }
   }
 }

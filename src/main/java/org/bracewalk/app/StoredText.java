@@ -75,7 +75,7 @@ public final class StoredText {
     return new Observation(o.id(), o.inspectionId(), o.planeId(), o.panel(), o.state(),
         o.memberFound(), o.bowMm(), o.gaugeLengthMm(), o.defect(), clean(o.note(), "note"),
         o.recordedAt(), clean(o.recordedBy(), "recorded by"), o.supersedes(),
-        clean(o.correctionReason(), "correction reason"));
+        clean(o.correctionReason(), "correction reason"), o.frameMember());
   }
 
   static Photo photo(Photo p) {

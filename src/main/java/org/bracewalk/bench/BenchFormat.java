@@ -69,6 +69,12 @@ public final class BenchFormat {
             plan.largeRepetitions(),
             plan.largeBaselineFrom(),
             plan.largeBaselineFrom()));
+    if (plan.frame() != null) {
+      sb.append(
+          "Frame damage: the same kind of planes with ledgers and standards missing as built (drawn at"
+              + " random; the design's\nframe complete); the walk-round and medium planes are also timed"
+              + " with the frame complete, for the ratios.\n\n");
+    }
     int nameWidth = "measurement".length();
     for (BenchResult r : report.results()) {
       nameWidth = Math.max(nameWidth, r.name().length());

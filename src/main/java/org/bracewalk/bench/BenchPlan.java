@@ -22,6 +22,7 @@ import java.util.List;
  *     compiled by then; the call mainly settles the heap)
  * @param minSampleNanos a sample repeats the work until this much time has passed, so that quick
  *     operations are timed over many calls
+ * @param frame the frame-damage cases, or {@code null} for none
  */
 public record BenchPlan(
     long seed,
@@ -34,7 +35,25 @@ public record BenchPlan(
     int largeRepetitions,
     int largeBaselineFrom,
     boolean largeWarmup,
-    long minSampleNanos) {
+    long minSampleNanos,
+    FrameBenchPlan frame) {
+
+  /** A plan without the frame-damage cases. */
+  public BenchPlan(
+      long seed,
+      double bracedShare,
+      List<Integer> fullSizes,
+      int verdictRepairSize,
+      List<Integer> baselineSizes,
+      long warmupNanos,
+      int repetitions,
+      int largeRepetitions,
+      int largeBaselineFrom,
+      boolean largeWarmup,
+      long minSampleNanos) {
+    this(seed, bracedShare, fullSizes, verdictRepairSize, baselineSizes, warmupNanos, repetitions,
+        largeRepetitions, largeBaselineFrom, largeWarmup, minSampleNanos, null);
+  }
 
   public BenchPlan {
     fullSizes = List.copyOf(fullSizes);
@@ -52,16 +71,18 @@ public record BenchPlan(
   /** Seed of the published figures. */
   public static final long SEED = 20_261_201L;
 
-  /** The full bench: engine 10 to 1000, baseline 10, 20, 30. */
+  /** The full bench: engine 10 to 1000, baseline 10, 20, 30, and the frame-damage cases. */
   public static BenchPlan standard() {
-    return new BenchPlan(SEED, 0.3, List.of(10, 20, 30, 100, 1000), 1000, List.of(10, 20, 30), 2_000_000_000L, 9, 3, 30, true, 20_000_000L);
+    return new BenchPlan(SEED, 0.3, List.of(10, 20, 30, 100, 1000), 1000, List.of(10, 20, 30), 2_000_000_000L, 9, 3, 30, true, 20_000_000L,
+        FrameBenchPlan.standard());
   }
 
   /**
    * {@code --quick}: the same without the 30 x 30 baseline, with fewer samples and no warm-up call
-   * for the large measurements; under a minute.
+   * for the large measurements, the frame-damage cases included; under a minute.
    */
   public static BenchPlan quick() {
-    return new BenchPlan(SEED, 0.3, List.of(10, 20, 100, 1000), 1000, List.of(10, 20), 500_000_000L, 5, 3, 20, false, 10_000_000L);
+    return new BenchPlan(SEED, 0.3, List.of(10, 20, 100, 1000), 1000, List.of(10, 20), 500_000_000L, 5, 3, 20, false, 10_000_000L,
+        FrameBenchPlan.standard());
   }
 }

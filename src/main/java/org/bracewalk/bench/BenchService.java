@@ -19,6 +19,7 @@ import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneGrid;
 
 /**
  * Runs the bench of a {@link BenchPlan}: warm-up samples first, then timed samples, medians
@@ -121,6 +122,10 @@ public final class BenchService {
     if (engineFull.containsKey(100) && engineFull.containsKey(1000)) {
       ratios.put("engineFull1000x1000OverFull100x100", engineFull.get(1000) / engineFull.get(100));
     }
+    planes.clear();
+    if (plan.frame() != null) {
+      agrees &= frameCases(plan, plan.frame(), progress, results, ratios);
+    }
     return new BenchReport(plan, results, ratios, agrees, processors, javaVersion);
   }
 
@@ -133,18 +138,7 @@ public final class BenchService {
     Set<PanelRef> openings = new HashSet<>(pair.design().openings());
     openings.removeAll(pair.asBuilt().members().keySet());
     PlaneDesign damaged = new PlaneDesign(pair.asBuilt().grid(), pair.asBuilt().members(), openings);
-    // Heap: from a collected heap (the input built), analyse once and collect again with the
-    // result held: what the result keeps. The pools' peaks bound the peak use, input included.
-    memory.gc();
-    long before = memory.getHeapMemoryUsage().getUsed();
-    List<MemoryPoolMXBean> heapPools = pools.stream().filter(p -> p.getType() == MemoryType.HEAP).toList();
-    heapPools.forEach(MemoryPoolMXBean::resetPeakUsage);
-    Object result = analyzer.analyse(damaged);
-    long peak = heapPools.stream().mapToLong(p -> p.getPeakUsage().getUsed()).sum();
-    memory.gc();
-    long after = memory.getHeapMemoryUsage().getUsed();
-    sink = result;
-    sink = null;
+    BenchResult heap = heap(() -> analyzer.analyse(damaged));
     BenchResult timed =
         time(
             name,
@@ -153,13 +147,129 @@ public final class BenchService {
             plan,
             (long) size * size,
             () -> analyzer.analyse(damaged));
+    return withHeap(timed, heap);
+  }
+
+  /**
+   * Heap use of one call of {@code work}: from a collected heap (the input built), run it once and
+   * collect again with the result held: what the result keeps. The pools' peaks bound the peak
+   * use, input included. Returned as a result with only the heap figures meaningful.
+   */
+  private BenchResult heap(Supplier<?> work) {
+    memory.gc();
+    long before = memory.getHeapMemoryUsage().getUsed();
+    List<MemoryPoolMXBean> heapPools = pools.stream().filter(p -> p.getType() == MemoryType.HEAP).toList();
+    heapPools.forEach(MemoryPoolMXBean::resetPeakUsage);
+    Object result = work.get();
+    long peak = heapPools.stream().mapToLong(p -> p.getPeakUsage().getUsed()).sum();
+    memory.gc();
+    long after = memory.getHeapMemoryUsage().getUsed();
+    sink = result;
+    sink = null;
     return new BenchResult(
-        timed.name(),
-        timed.description(),
-        timed.medianMs(),
-        timed.samples(),
+        "heap",
+        "",
+        0,
+        0,
         OptionalDouble.of(Math.max(0, after - before) / MB),
         heapPools.isEmpty() ? OptionalDouble.empty() : OptionalDouble.of(peak / MB));
+  }
+
+  private static BenchResult withHeap(BenchResult timed, BenchResult heap) {
+    return new BenchResult(
+        timed.name(), timed.description(), timed.medianMs(), timed.samples(), heap.retainedHeapMb(), heap.peakHeapMb());
+  }
+
+  /**
+   * The frame-damage cases (issue 11): the walk-round plane with frame members missing against the
+   * same plane with its frame complete; a square plane with a share of its frame missing, likewise;
+   * the rigidity-matrix rank on a plane with frame damage against the engine's full analysis of it
+   * (whose as-built degrees of freedom it must give); and the verdict and repair of a large plane
+   * with frame members missing, with its heap use. Returns whether the rank agreed with the engine.
+   */
+  private boolean frameCases(
+      BenchPlan plan, FrameBenchPlan f, Consumer<String> progress, List<BenchResult> results, Map<String, Double> ratios) {
+    String walkShape = f.walkLifts() + "x" + f.walkBays();
+    RandomPlanes.Pair walkWhole =
+        RandomPlanes.pair(f.walkLifts(), f.walkBays(), plan.bracedShare(), plan.seed() + 11L * f.walkBays() + f.walkLifts());
+    RandomPlanes.Pair walk = RandomPlanes.withFrameMissing(walkWhole, f.walkMissing(), plan.seed() + 1);
+    double walkComplete =
+        timeFull(plan, progress, results, "engine-full-" + walkShape + "-frame-complete",
+            "full analysis, " + f.walkLifts() + " lifts x " + f.walkBays() + " bays, frame complete (the baseline of the next)",
+            walkWhole);
+    double walkDamaged =
+        timeFull(plan, progress, results, "engine-full-" + walkShape + "-frame-" + f.walkMissing() + "-missing",
+            "full analysis, " + f.walkLifts() + " lifts x " + f.walkBays() + " bays, " + f.walkMissing()
+                + " frame members missing",
+            walk);
+    ratios.put("frameMissingOverComplete" + walkShape, walkDamaged / walkComplete);
+
+    int m = f.mediumSize();
+    String mediumShape = m + "x" + m;
+    long mediumMissing = Math.round(f.mediumShare() * FrameBenchPlan.frameMembers(m, m));
+    RandomPlanes.Pair mediumWhole = RandomPlanes.pair(m, m, plan.bracedShare(), plan.seed() + m);
+    RandomPlanes.Pair medium = RandomPlanes.withFrameMissing(mediumWhole, mediumMissing, plan.seed() + 2);
+    double mediumComplete =
+        timeFull(plan, progress, results, "engine-full-" + mediumShape + "-frame-complete",
+            "full analysis, " + mediumShape + ", frame complete (the baseline of the next)", mediumWhole);
+    double mediumDamaged =
+        timeFull(plan, progress, results, "engine-full-" + mediumShape + "-frame-" + mediumMissing + "-missing",
+            "full analysis, " + mediumShape + ", " + mediumMissing + " frame members missing", medium);
+    ratios.put("frameMissingOverComplete" + mediumShape, mediumDamaged / mediumComplete);
+
+    int b = f.baselineSize();
+    String baseShape = b + "x" + b;
+    long baseMissing = Math.round(f.baselineShare() * FrameBenchPlan.frameMembers(b, b));
+    RandomPlanes.Pair base =
+        RandomPlanes.withFrameMissing(RandomPlanes.pair(b, b, plan.bracedShare(), plan.seed() + b), baseMissing, plan.seed() + 3);
+    double engineBase =
+        timeFull(plan, progress, results, "engine-full-" + baseShape + "-frame-" + baseMissing + "-missing",
+            "full analysis, " + baseShape + ", " + baseMissing + " frame members missing", base);
+    AsBuiltPlane built = base.asBuilt();
+    int engineDof = analyzer.analyse(base.design(), built).asBuilt().orElseThrow().state().degreesOfFreedom();
+    int matrixDof = RigidityMatrixBaseline.freedoms(built.grid(), built.members(), built.absentFrame());
+    String rankName = "rigidity-matrix-rank-" + baseShape + "-frame-" + baseMissing + "-missing";
+    progress.accept(rankName);
+    BenchResult rank =
+        time(
+            rankName,
+            "rank of the rigidity matrix by dense SVD (EJML), as built, " + baseShape + ", " + baseMissing
+                + " frame members missing",
+            plan,
+            b >= plan.largeBaselineFrom() ? Long.MAX_VALUE : (long) b * b,
+            () -> RigidityMatrixBaseline.freedoms(built.grid(), built.members(), built.absentFrame()));
+    results.add(rank);
+    ratios.put("rigidityMatrixOverEngineFrame" + baseShape, rank.medianMs() / engineBase);
+
+    int l = f.largeSize();
+    String largeShape = l + "x" + l;
+    String largeName = "engine-verdict-repair-" + largeShape + "-frame-" + f.largeMissing() + "-missing";
+    progress.accept(largeName);
+    RandomPlanes.Pair large =
+        RandomPlanes.withFrameMissing(
+            RandomPlanes.pair(l, l, plan.bracedShare(), plan.seed() + l), f.largeMissing(), plan.seed() + 4);
+    BenchResult heap = heap(() -> analyzer.analyse(large.design(), large.asBuilt()));
+    BenchResult timed =
+        time(
+            largeName,
+            "verdict and repair (full analysis of design and as built), " + largeShape + ", " + f.largeMissing()
+                + " frame members missing",
+            plan,
+            (long) l * l,
+            () -> analyzer.analyse(large.design(), large.asBuilt()));
+    results.add(withHeap(timed, heap));
+    return engineDof == matrixDof;
+  }
+
+  /** Times the full analysis of a pair, adds the result, returns its median in ms. */
+  private double timeFull(
+      BenchPlan plan, Consumer<String> progress, List<BenchResult> results, String name, String description, RandomPlanes.Pair pair) {
+    progress.accept(name);
+    PlaneGrid grid = pair.design().grid();
+    BenchResult r =
+        time(name, description, plan, (long) grid.lifts() * grid.bays(), () -> analyzer.analyse(pair.design(), pair.asBuilt()));
+    results.add(r);
+    return r.medianMs();
   }
 
   /**

@@ -10,6 +10,7 @@ import java.util.Set;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
@@ -86,5 +87,34 @@ final class RandomPlanes {
       }
     }
     return new Pair(design, new AsBuiltPlane(grid, members, unknown));
+  }
+
+  /**
+   * The same pair with {@code missing} frame members (ledgers and standard segments, drawn
+   * uniformly, seeded) gone as built; the design keeps its whole frame.
+   */
+  static Pair withFrameMissing(Pair pair, long missing, long seed) {
+    PlaneGrid grid = pair.design().grid();
+    int lifts = grid.lifts();
+    int bays = grid.bays();
+    long ledgers = (long) (lifts + 1) * bays;
+    long total = FrameBenchPlan.frameMembers(lifts, bays);
+    if (missing > total) {
+      throw new IllegalArgumentException(
+          missing + " frame members missing, but a " + lifts + " x " + bays + " plane has " + total);
+    }
+    Random random = new Random(seed);
+    Set<FrameRef> absent = new HashSet<>();
+    while (absent.size() < missing) {
+      long k = (long) (random.nextDouble() * total);
+      if (k < ledgers) {
+        absent.add(FrameRef.ledger((int) (k / bays), (int) (k % bays) + 1));
+      } else {
+        long s = k - ledgers;
+        absent.add(FrameRef.standard((int) (s / (bays + 1)) + 1, (int) (s % (bays + 1))));
+      }
+    }
+    AsBuiltPlane b = pair.asBuilt();
+    return new Pair(pair.design(), new AsBuiltPlane(grid, b.members(), b.uninspected(), absent, Set.of()));
   }
 }

@@ -1,7 +1,9 @@
 package org.bracewalk.bench;
 
 import java.util.Map;
+import java.util.Set;
 import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
@@ -22,8 +24,17 @@ import org.ejml.interfaces.decomposition.SingularValueDecomposition_F64;
 final class RigidityMatrixBaseline {
   private RigidityMatrixBaseline() {}
 
-  /** Independent motions of the plane with the given (rigid) members. */
+  /** Independent motions of the plane with the given (rigid) members and its whole frame. */
   static int freedoms(PlaneGrid grid, Map<PanelRef, Brace> members) {
+    return freedoms(grid, members, Set.of());
+  }
+
+  /**
+   * Independent motions of the plane with the given (rigid) members and every frame member but
+   * those in {@code absentFrame}. A joint left with no member at all is left out of the count (its
+   * two columns are zero).
+   */
+  static int freedoms(PlaneGrid grid, Map<PanelRef, Brace> members, Set<FrameRef> absentFrame) {
     int m = grid.lifts();
     int n = grid.bays();
     boolean pinned = grid.support() == Support.PINNED_BASE;
@@ -43,9 +54,12 @@ final class RigidityMatrixBaseline {
     for (Brace b : members.values()) {
       rows += b.diagonal().memberCount();
     }
+    boolean[] carries = new boolean[(m + 1) * (n + 1)]; // whether a joint carries a member
     DMatrixRMaj a = new DMatrixRMaj(rows, 2 * joints);
     int[] row = {0};
     Bar bar = (i1, j1, i2, j2) -> {
+      carries[i1 * (n + 1) + j1] = true;
+      carries[i2 * (n + 1) + j2] = true;
       double dx = x[j1] - x[j2];
       double dy = y[i1] - y[i2];
       int r = row[0]++;
@@ -62,12 +76,16 @@ final class RigidityMatrixBaseline {
     };
     for (int i = firstLevel; i <= m; i++) {
       for (int j = 0; j < n; j++) {
-        bar.add(i, j, i, j + 1);
+        if (!absentFrame.contains(FrameRef.ledger(i, j + 1))) {
+          bar.add(i, j, i, j + 1);
+        }
       }
     }
     for (int i = 0; i < m; i++) {
       for (int j = 0; j <= n; j++) {
-        bar.add(i, j, i + 1, j);
+        if (!absentFrame.contains(FrameRef.standard(i + 1, j))) {
+          bar.add(i, j, i + 1, j);
+        }
       }
     }
     for (Map.Entry<PanelRef, Brace> e : members.entrySet()) {
@@ -86,7 +104,11 @@ final class RigidityMatrixBaseline {
       throw new IllegalStateException("the singular value decomposition did not converge");
     }
     int rank = SingularOps_DDRM.rank(svd);
-    return 2 * joints - (pinned ? 0 : 3) - rank;
+    int present = 0;
+    for (int v = firstLevel * (n + 1); v < carries.length; v++) {
+      present += carries[v] ? 1 : 0;
+    }
+    return 2 * present - (pinned ? 0 : 3) - rank;
   }
 
   @FunctionalInterface

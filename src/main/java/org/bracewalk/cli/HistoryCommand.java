@@ -5,9 +5,11 @@ import org.bracewalk.app.verdict.VerdictKind;
 import java.io.PrintWriter;
 import java.time.ZoneId;
 import org.bracewalk.app.AppServices;
+import org.bracewalk.app.FrameChange;
 import org.bracewalk.app.PanelChange;
 import org.bracewalk.app.PlaneHistory;
 import org.bracewalk.core.model.PanelFinding;
+import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.Structure;
 import picocli.CommandLine.Command;
@@ -16,7 +18,8 @@ import picocli.CommandLine.Option;
 /** {@code history --plane ID}: a plane across inspections and what changed each time. */
 @Command(name = "history", mixinStandardHelpOptions = true,
     description = "A plane across the inspections of its structure, oldest first: the verdict"
-        + " each time, and which panels changed since the previous inspection.")
+        + " each time, and which panels and frame members changed since the previous"
+        + " inspection.")
 final class HistoryCommand extends StoreCommand {
   @Option(names = "--plane", required = true, description = "The plane's id (see 'plane list').")
   long plane;
@@ -30,6 +33,11 @@ final class HistoryCommand extends StoreCommand {
       return "not inspected";
     }
     return f.state().label() + (f.memberFound() == null ? "" : " (" + f.memberFound().token() + ")");
+  }
+
+  /** A frame member's recorded state; one not recorded is taken as designed. */
+  static String frameState(PanelState s) {
+    return s == null ? "not recorded (as designed)" : s.label();
   }
 
   /** The one verdict's words ({@link Verdict}), with its keep-off zone when it has one. */
@@ -60,12 +68,16 @@ final class HistoryCommand extends StoreCommand {
           + e.design().number() + ": " + verdict(e.summary()) + "; " + inspected + " of "
           + p.grid().panelCount() + " panels inspected");
       if (previous != null) {
-        if (e.changes().isEmpty()) {
+        if (e.changes().isEmpty() && e.frameChanges().isEmpty()) {
           out.println("  no change since inspection " + previous);
         } else {
           out.println("  changed since inspection " + previous + ":");
           for (PanelChange c : e.changes()) {
             out.println("    " + c.panel() + ": " + finding(c.before()) + " -> " + finding(c.after()));
+          }
+          for (FrameChange c : e.frameChanges()) {
+            out.println("    " + c.member() + ": " + frameState(c.before()) + " -> "
+                + frameState(c.after()));
           }
         }
       }

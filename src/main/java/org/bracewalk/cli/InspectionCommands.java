@@ -165,7 +165,7 @@ final class InspectionCommands {
       out.println(rows.size() + " observations:");
       for (Observation o : rows) {
         out.println("  " + o.id() + "  " + Show.time(o.recordedAt(), zone) + "  "
-            + names.get(o.planeId()) + ", " + o.panel() + ": " + o.state().label()
+            + names.get(o.planeId()) + ", " + Show.where(o) + ": " + o.state().label()
             + (o.memberFound() == null ? "" : " (" + o.memberFound().token() + ")")
             + (o.bowMm() == null ? "" : ", bow " + o.bowMm() + " mm / " + o.gaugeLengthMm() + " mm")
             + (o.defect() == null ? "" : ", " + o.defect().label())

@@ -34,9 +34,14 @@ final class Show {
         + ", by " + i.inspectorName();
   }
 
+  /** What an observation is of: its panel, or its frame member. */
+  static String where(Observation o) {
+    return o.panel() != null ? o.panel().toString() : o.frameMember().toString();
+  }
+
   static String observation(Observation o, String planeName) {
     StringBuilder b = new StringBuilder("observation ").append(o.id()).append(" recorded: ")
-        .append(planeName).append(", ").append(o.panel()).append(", ").append(o.state().label());
+        .append(planeName).append(", ").append(where(o)).append(", ").append(o.state().label());
     if (o.memberFound() != null) {
       b.append(" (member ").append(o.memberFound().token()).append(')');
     }

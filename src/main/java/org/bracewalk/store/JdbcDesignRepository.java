@@ -14,6 +14,8 @@ import java.util.Optional;
 import java.util.Set;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.FrameMemberType;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneRecord;
@@ -22,19 +24,31 @@ import org.bracewalk.core.port.StoreException;
 
 /**
  * Design revisions in {@code design_revisions}; their braced panels and openings in {@code
- * design_panels}. The grid comes from the plane.
+ * design_panels}; the frame members it leaves out in {@code design_frame_omissions}. The grid comes
+ * from the plane.
  */
 final class JdbcDesignRepository implements DesignRepository {
   private static final String INSERT =
       """
       INSERT INTO design_revisions
-        (plane_id, number, author, design_date, approval_note, recorded_at, panel_count)
-      VALUES (?, ?, ?, ?, ?, ?, ?)
+        (plane_id, number, author, design_date, approval_note, recorded_at, panel_count,
+         omitted_frame_count)
+      VALUES (?, ?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String INSERT_PANEL =
       """
       INSERT INTO design_panels (revision_id, lift, bay, diagonal, member_kind, opening)
       VALUES (?, ?, ?, ?, ?, ?)
+      """;
+  private static final String INSERT_OMISSION =
+      """
+      INSERT INTO design_frame_omissions (revision_id, frame_type, frame_first, frame_second)
+      VALUES (?, ?, ?, ?)
+      """;
+  private static final String OMISSIONS =
+      """
+      SELECT frame_type, frame_first, frame_second FROM design_frame_omissions
+      WHERE revision_id = ?
       """;
   private static final String SELECT =
       """
@@ -94,6 +108,7 @@ final class JdbcDesignRepository implements DesignRepository {
                     // the rows stored below; the database takes no more panels for it after them
                     s.setInt(7, revision.design().sortedBraces().size()
                         + revision.design().sortedOpenings().size());
+                    s.setInt(8, revision.design().omittedFrame().size());
                     s.executeUpdate();
                     id = db.lastInsertId();
                   }
@@ -113,6 +128,16 @@ final class JdbcDesignRepository implements DesignRepository {
                       s.setInt(3, p.bay());
                       Columns.setBrace(s, 4, 5, null);
                       s.setInt(6, 1);
+                      s.addBatch();
+                    }
+                    s.executeBatch();
+                  }
+                  try (PreparedStatement s = c.prepareStatement(INSERT_OMISSION)) {
+                    for (FrameRef f : revision.design().sortedOmittedFrame()) {
+                      s.setLong(1, id);
+                      s.setString(2, f.type().label());
+                      s.setInt(3, f.first());
+                      s.setInt(4, f.second());
                       s.addBatch();
                     }
                     s.executeBatch();
@@ -196,10 +221,20 @@ final class JdbcDesignRepository implements DesignRepository {
         }
       }
     }
+    Set<FrameRef> omitted = new HashSet<>();
+    try (PreparedStatement s = c.prepareStatement(OMISSIONS)) {
+      s.setLong(1, id);
+      try (ResultSet r = s.executeQuery()) {
+        while (r.next()) {
+          omitted.add(new FrameRef(FrameMemberType.fromWord(r.getString("frame_type")),
+              r.getInt("frame_first"), r.getInt("frame_second")));
+        }
+      }
+    }
     PlaneRecord plane = db.planes().find(planeId).orElseThrow();
     return Optional.of(
         new DesignRevision(
             id, planeId, number, author, date, note, recordedAt,
-            new PlaneDesign(plane.grid(), braces, openings)));
+            new PlaneDesign(plane.grid(), braces, openings, omitted)));
   }
 }

@@ -10,6 +10,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.bracewalk.core.model.DefectType;
+import org.bracewalk.core.model.FrameMemberType;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
@@ -18,7 +20,8 @@ import org.bracewalk.core.port.ObservationRepository;
 import org.bracewalk.core.port.StoreException;
 
 /**
- * Observations in {@code observations}, photos (BLOBs) in {@code photos}. Both append-only: the
+ * Observations in {@code observations} (of one panel's diagonals: lift and bay; of one frame
+ * member: frame_type, frame_first, frame_second), photos (BLOBs) in {@code photos}. Both append-only: the
  * triggers refuse updates, deletes, and inserts into finalised inspections. Bows are kept in
  * tenths of a millimetre.
  */
@@ -31,14 +34,14 @@ final class JdbcObservationRepository implements ObservationRepository {
       INSERT INTO observations
         (inspection_id, plane_id, lift, bay, state, member_diagonal, member_kind, bow_tenth_mm,
          gauge_length_mm, defect, note, recorded_at, recorded_by, supersedes_id,
-         correction_reason)
-      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
+         correction_reason, frame_type, frame_first, frame_second)
+      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String SELECT =
       """
       SELECT id, inspection_id, plane_id, lift, bay, state, member_diagonal, member_kind,
              bow_tenth_mm, gauge_length_mm, defect, note, recorded_at, recorded_by,
-             supersedes_id, correction_reason
+             supersedes_id, correction_reason, frame_type, frame_first, frame_second
       FROM observations
       """;
   private static final String INSERT_PHOTO =
@@ -82,8 +85,9 @@ final class JdbcObservationRepository implements ObservationRepository {
           {
             s.setLong(1, o.inspectionId());
             s.setLong(2, o.planeId());
-            s.setInt(3, o.panel().lift());
-            s.setInt(4, o.panel().bay());
+            FrameRef member = o.frameMember();
+            Columns.setInt(s, 3, o.panel() == null ? null : o.panel().lift());
+            Columns.setInt(s, 4, o.panel() == null ? null : o.panel().bay());
             s.setString(5, o.state().label());
             Columns.setBrace(s, 6, 7, o.memberFound());
             Columns.setInt(s, 8, o.bowMm() == null ? null : tenths(o.bowMm()));
@@ -94,6 +98,9 @@ final class JdbcObservationRepository implements ObservationRepository {
             s.setString(13, o.recordedBy());
             Columns.setLong(s, 14, o.supersedes());
             s.setString(15, o.correctionReason());
+            s.setString(16, member == null ? null : member.type().label());
+            Columns.setInt(s, 17, member == null ? null : member.first());
+            Columns.setInt(s, 18, member == null ? null : member.second());
             try {
               s.executeUpdate();
             } catch (SQLException e) {
@@ -109,11 +116,11 @@ final class JdbcObservationRepository implements ObservationRepository {
             return new Observation(id, o.inspectionId(), o.planeId(), o.panel(), o.state(),
                 o.memberFound(), o.bowMm() == null ? null : tenths(o.bowMm()) / 10.0,
                 o.gaugeLengthMm(), o.defect(), o.note(), Columns.millis(o.recordedAt()),
-                o.recordedBy(), o.supersedes(), o.correctionReason());
+                o.recordedBy(), o.supersedes(), o.correctionReason(), o.frameMember());
           }
         },
         SqlErrors.Subject.of("observation of inspection " + o.inspectionId() + ", plane "
-            + o.planeId() + ", " + o.panel()
+            + o.planeId() + ", " + (o.panel() == null ? o.frameMember() : o.panel())
             + (o.supersedes() == null ? "" : ", correcting observation " + o.supersedes()),
             o.inspectionId()));
   }
@@ -151,11 +158,15 @@ final class JdbcObservationRepository implements ObservationRepository {
   private static Observation read(ResultSet r) throws SQLException {
     Integer bow = Columns.intOrNull(r, "bow_tenth_mm");
     String defect = r.getString("defect");
+    String frameType = r.getString("frame_type");
+    FrameRef member = frameType == null ? null
+        : new FrameRef(FrameMemberType.fromWord(frameType), r.getInt("frame_first"),
+            r.getInt("frame_second"));
     return new Observation(
         r.getLong("id"),
         r.getLong("inspection_id"),
         r.getLong("plane_id"),
-        PanelRef.of(r.getInt("lift"), r.getInt("bay")),
+        member == null ? PanelRef.of(r.getInt("lift"), r.getInt("bay")) : null,
         PanelState.fromLabel(r.getString("state")),
         Columns.brace(r, "member_diagonal", "member_kind"),
         bow == null ? null : bow / 10.0,
@@ -165,7 +176,8 @@ final class JdbcObservationRepository implements ObservationRepository {
         Columns.instant(r, "recorded_at"),
         r.getString("recorded_by"),
         Columns.longOrNull(r, "supersedes_id"),
-        r.getString("correction_reason"));
+        r.getString("correction_reason"),
+        member);
   }
 
   @Override

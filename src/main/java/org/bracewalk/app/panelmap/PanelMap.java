@@ -10,6 +10,7 @@ import java.util.Optional;
 import java.util.Set;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
@@ -26,6 +27,8 @@ import org.bracewalk.core.model.Support;
  * @param heights the header's lift heights in metres (lift 1, the bottom, first), or {@code null}
  * @param rows the grid lines, <b>lift 1 (the bottom, the last line in the text) first</b>
  * @param header where each header key stood
+ * @param frameLines the frame lines after the grid, in the order of the text (none: the frame is as
+ *     designed, or sound as built)
  */
 public record PanelMap(
     String source,
@@ -34,7 +37,32 @@ public record PanelMap(
     List<Double> widths,
     List<Double> heights,
     List<GridRow> rows,
-    Map<String, HeaderEntry> header) {
+    Map<String, HeaderEntry> header,
+    List<FrameLine> frameLines) {
+
+  /** A map without frame lines. */
+  public PanelMap(
+      String source,
+      MapKind kind,
+      Support support,
+      List<Double> widths,
+      List<Double> heights,
+      List<GridRow> rows,
+      Map<String, HeaderEntry> header) {
+    this(source, kind, support, widths, heights, rows, header, List.of());
+  }
+
+  /**
+   * One frame line: {@code ledger LEVEL BAY STATE} or {@code standard LIFT LINE STATE} (or the
+   * racking words {@code beam}, {@code upright}), with its text line and the column of its first
+   * word.
+   */
+  public record FrameLine(int line, int column, FrameRef member, FrameState state) {
+    public FrameLine {
+      Objects.requireNonNull(member, "member");
+      Objects.requireNonNull(state, "state");
+    }
+  }
 
   /** One grid line: the tokens of one lift, bay 1 first, with their 1-based columns. */
   public record GridRow(int line, List<PanelToken> tokens, List<Integer> columns) {
@@ -57,6 +85,7 @@ public record PanelMap(
     heights = heights == null ? null : List.copyOf(heights);
     rows = List.copyOf(rows);
     header = Map.copyOf(header);
+    frameLines = List.copyOf(frameLines);
     if (rows.isEmpty()) {
       throw new IllegalArgumentException("a panel map has at least one grid line");
     }
@@ -117,10 +146,20 @@ public record PanelMap(
         braces.put(p, t.brace());
       }
     }
-    return new PlaneDesign(grid, braces, openings);
+    Set<FrameRef> omitted = new HashSet<>();
+    for (FrameLine f : frameLines) {
+      if (f.state() == FrameState.NONE) {
+        omitted.add(f.member());
+      }
+    }
+    return new PlaneDesign(grid, braces, openings, omitted);
   }
 
-  /** This as-built map as an as-built state on {@code grid} (the design's grid). */
+  /**
+   * This as-built map as an as-built state on {@code grid} (the design's grid). A frame member not
+   * listed is sound (there, even where the design leaves it out); {@code missing} and {@code
+   * ineffective} members are absent, {@code ?} members not inspected.
+   */
   public AsBuiltPlane toAsBuilt(PlaneGrid grid) {
     requireKind(MapKind.AS_BUILT);
     requireFits(grid);
@@ -134,7 +173,16 @@ public record PanelMap(
         members.put(p, t.brace());
       }
     }
-    return new AsBuiltPlane(grid, members, unknown);
+    Set<FrameRef> absentFrame = new HashSet<>();
+    Set<FrameRef> unknownFrame = new HashSet<>();
+    for (FrameLine f : frameLines) {
+      if (f.state() == FrameState.UNKNOWN) {
+        unknownFrame.add(f.member());
+      } else if (!f.state().effective()) {
+        absentFrame.add(f.member());
+      }
+    }
+    return new AsBuiltPlane(grid, members, unknown, absentFrame, unknownFrame);
   }
 
   private List<PanelRef> panels() {

@@ -7,16 +7,21 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Pattern;
+import org.bracewalk.app.panelmap.PanelMap.FrameLine;
 import org.bracewalk.app.panelmap.PanelMap.GridRow;
 import org.bracewalk.app.panelmap.PanelMap.HeaderEntry;
 import org.bracewalk.app.text.TextInput;
 import org.bracewalk.app.text.TextInputException;
+import org.bracewalk.core.model.FrameMemberType;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Support;
 
 /**
  * Reads the panel-map format of {@code shared/design/check-contract.md}: optional {@code key:
  * value} header lines, then one line per lift, <b>top lift first</b>, one whitespace-separated
- * token per bay, bay 1 on the left; {@code #} starts a comment line, blank lines are skipped.
+ * token per bay, bay 1 on the left, then optional frame lines ({@code ledger LEVEL BAY STATE},
+ * {@code standard LIFT LINE STATE}, {@code beam} and {@code upright} for them); {@code #} starts a
+ * comment line, blank lines are skipped.
  * Lines end in LF, CRLF or a bare CR alike; other separators (VT, FF, NUL, U+2028, U+2029) are
  * refused where they stand ({@link TextInput}).
  *
@@ -96,6 +101,8 @@ public final class PanelMapParser {
         }
         if (looksLikeHeader(line)) {
           headerLine(number, line);
+        } else if (looksLikeFrameLine(line)) {
+          frameLine(number, line);
         } else {
           gridLine(number, line);
         }
@@ -116,7 +123,87 @@ public final class PanelMapParser {
           "heights", heights, heightWords, lifts, "lifts", "one height in metres per lift, bottom lift first");
       List<GridRow> bottomFirst = new ArrayList<>(rowsTopFirst);
       Collections.reverse(bottomFirst);
-      return new PanelMap(source, kind, support, widths, heights, bottomFirst, header);
+      return new PanelMap(source, kind, support, widths, heights, bottomFirst, header, frameLines);
+    }
+
+    private final List<FrameLine> frameLines = new ArrayList<>();
+    private final Map<FrameRef, FrameLine> frameSeen = new HashMap<>();
+
+    /**
+     * {@code ledger LEVEL BAY STATE} or {@code standard LIFT LINE STATE} ({@code beam}, {@code
+     * upright} for them): after the last grid row, inside the plane, each member once, a state of
+     * this kind of map.
+     */
+    private void frameLine(int number, String line) {
+      List<Word> words = words(line, 0);
+      Word first = words.get(0);
+      if (rowsTopFirst.isEmpty()) {
+        throw error(number, first.column(), "frame line before the grid: frame lines ("
+            + first.text() + " ...) come after the last grid row; move it below the grid");
+      }
+      FrameMemberType type = memberType(first.text());
+      if (type == null) {
+        throw error(number, first.column(), "unknown frame member '" + first.text() + "': a frame"
+            + " line starts with ledger or standard (beam or upright for racking), e.g. 'ledger 1 2 "
+            + (kind == MapKind.DESIGN ? "none" : "missing") + "'");
+      }
+      boolean ledger = type == FrameMemberType.LEDGER;
+      String shape = ledger ? "ledger LEVEL BAY STATE" : "standard LIFT LINE STATE";
+      if (words.size() < 4) {
+        Word last = words.get(words.size() - 1);
+        String missing = words.size() == 1 ? (ledger ? "LEVEL" : "LIFT")
+            : words.size() == 2 ? (ledger ? "BAY" : "LINE") : "STATE";
+        throw error(number, last.column() + last.text().length(), "too few fields: a frame line is '"
+            + shape + "' and " + missing + " is missing here; states: " + FrameState.choices(kind));
+      }
+      if (words.size() > 4) {
+        throw error(number, words.get(4).column(), "too many fields: a frame line is '" + shape
+            + "'; remove '" + words.get(4).text() + "' and what follows (a comment goes on its own"
+            + " line, starting with #)");
+      }
+      int lifts = rowsTopFirst.size();
+      int bays = rowsTopFirst.get(0).tokens().size();
+      int a = frameNumber(number, words.get(1), ledger ? "LEVEL" : "LIFT", ledger ? 0 : 1, lifts,
+          ledger ? "the levels are 0 (the base) to " + lifts + " (the top of lift " + lifts + ")"
+              : "the lifts are 1 (the bottom) to " + lifts);
+      int b = frameNumber(number, words.get(2), ledger ? "BAY" : "LINE", ledger ? 1 : 0, bays,
+          ledger ? "the bays are 1 (the left) to " + bays
+              : "the lines are 0 (the left end) to " + bays + " (the right side of bay " + bays + ")");
+      Word stateWord = words.get(3);
+      FrameState state = FrameState.fromText(stateWord.text());
+      if (state == null) {
+        throw error(number, stateWord.column(), "unknown state '" + stateWord.text() + "' of a "
+            + type.label() + ": in " + (kind == MapKind.DESIGN ? "a design" : "an as-built")
+            + " map use " + FrameState.choices(kind));
+      }
+      if (state.kind() != kind) {
+        throw error(number, stateWord.column(), kind == MapKind.DESIGN
+            ? "'" + stateWord.text() + "' is an as-built state: a design map says only which"
+                + " members the design leaves out, with 'none' (a member not listed is in the design)"
+            : "'" + stateWord.text() + "' is a design state: an as-built map records what is there,"
+                + " with " + FrameState.choices(kind) + " (a member not listed is sound)");
+      }
+      FrameRef member = new FrameRef(type, a, b);
+      FrameLine earlier = frameSeen.get(member);
+      if (earlier != null) {
+        throw error(number, first.column(), "the " + member + " is given twice (first on line "
+            + earlier.line() + "): keep one of the two lines");
+      }
+      FrameLine f = new FrameLine(number, first.column(), member, state);
+      frameSeen.put(member, f);
+      frameLines.add(f);
+    }
+
+    private int frameNumber(int number, Word w, String field, int low, int high, String range) {
+      if (!w.text().matches("[+-]?\\d{1,9}")) {
+        throw error(number, w.column(), field + " must be a whole number, got '" + w.text() + "': "
+            + range);
+      }
+      int v = Integer.parseInt(w.text());
+      if (v < low || v > high) {
+        throw error(number, w.column(), field + " " + v + " is outside the plane: " + range);
+      }
+      return v;
     }
 
     private void headerLine(int number, String line) {
@@ -238,6 +325,11 @@ public final class PanelMapParser {
 
     private void gridLine(int number, String line) {
       List<Word> words = words(line, 0);
+      if (!frameLines.isEmpty()) {
+        FrameLine f = frameLines.get(0);
+        throw error(f.line(), f.column(), "frame line between grid rows (the grid goes on at line "
+            + number + "): frame lines come after the last grid row; move it below the grid");
+      }
       List<PanelToken> tokens = new ArrayList<>(words.size());
       List<Integer> columns = new ArrayList<>(words.size());
       for (int k = 0; k < words.size(); k++) {
@@ -307,6 +399,32 @@ public final class PanelMapParser {
     private PanelMapException error(int line, int column, String problem) {
       return new PanelMapException(source, line, column, problem);
     }
+  }
+
+  /** The member word of a frame line, in any case, or {@code null}. */
+  private static FrameMemberType memberType(String word) {
+    String w = word.toLowerCase(Locale.ROOT);
+    for (FrameMemberType t : FrameMemberType.values()) {
+      if (t.label().equals(w) || t.rackingLabel().equals(w)) {
+        return t;
+      }
+    }
+    return null;
+  }
+
+  /**
+   * A frame line starts with a member word ({@code ledger}, {@code beam}, {@code standard}, {@code
+   * upright}), or with another word of letters followed by a whole number (a misspelt member word,
+   * told as such rather than as an unknown panel token).
+   */
+  private static boolean looksLikeFrameLine(String line) {
+    List<Word> words = words(line, 0);
+    String first = words.get(0).text();
+    if (memberType(first) != null) {
+      return true;
+    }
+    return first.length() > 1 && first.matches("[A-Za-z]+") && words.size() > 1
+        && words.get(1).text().matches("[+-]?\\d+");
   }
 
   /** A header line's first word holds the colon: {@code support: free}, {@code widths:2.4 2.4}. */

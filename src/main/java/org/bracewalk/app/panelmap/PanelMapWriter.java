@@ -3,8 +3,10 @@ package org.bracewalk.app.panelmap;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.TreeMap;
 import java.util.function.Function;
 import org.bracewalk.core.model.AsBuiltPlane;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
@@ -12,7 +14,10 @@ import org.bracewalk.core.model.PlaneGrid;
 /**
  * Writes designs and as-built states as panel maps, in the format {@link PanelMapParser} reads: an
  * optional comment, the full header (support, widths, heights), then the grid, top lift first, its
- * columns aligned. Parsing the text again gives back the same design or as-built state. Stateless.
+ * columns aligned, then one frame line per frame member that is not as designed or sound ({@code
+ * ledger LEVEL BAY none} in a design; {@code missing} or {@code ?} as built: a member damaged beyond
+ * use is written missing, as both count alike). Parsing the text again gives back the same design
+ * or as-built state. Stateless.
  */
 public final class PanelMapWriter {
 
@@ -26,10 +31,14 @@ public final class PanelMapWriter {
    * none).
    */
   public String write(PlaneDesign design, String comment) {
-    return render(
+    StringBuilder sb = render(
         design.grid(),
         comment,
         p -> design.isOpening(p) ? PanelToken.OPENING : PanelToken.of(design.braceAt(p)));
+    for (FrameRef f : design.sortedOmittedFrame()) {
+      frameLine(sb, f, FrameState.NONE);
+    }
+    return sb.toString();
   }
 
   /** An as-built map: members, {@code ?} for panels not inspected, {@code .} elsewhere. */
@@ -39,13 +48,25 @@ public final class PanelMapWriter {
 
   /** An as-built map headed by {@code comment}. */
   public String write(AsBuiltPlane asBuilt, String comment) {
-    return render(
+    StringBuilder sb = render(
         asBuilt.grid(),
         comment,
         p -> asBuilt.isUninspected(p) ? PanelToken.UNKNOWN : PanelToken.of(asBuilt.memberAt(p)));
+    TreeMap<FrameRef, FrameState> frame = new TreeMap<>();
+    asBuilt.absentFrame().forEach(f -> frame.put(f, FrameState.MISSING));
+    asBuilt.unknownFrame().forEach(f -> frame.put(f, FrameState.UNKNOWN));
+    frame.forEach((f, state) -> frameLine(sb, f, state));
+    return sb.toString();
   }
 
-  private static String render(PlaneGrid grid, String comment, Function<PanelRef, PanelToken> tokens) {
+  /** {@code ledger 1 2 missing}: the scaffold words, the spelling stored and exported. */
+  private static void frameLine(StringBuilder sb, FrameRef f, FrameState state) {
+    sb.append(f.type().label()).append(' ').append(f.first()).append(' ').append(f.second())
+        .append(' ').append(state.text()).append('\n');
+  }
+
+  private static StringBuilder render(
+      PlaneGrid grid, String comment, Function<PanelRef, PanelToken> tokens) {
     StringBuilder sb = new StringBuilder();
     if (comment != null && !comment.isEmpty()) {
       // line breaks of any kind start a comment line; other controls, which the reader refuses,
@@ -78,7 +99,7 @@ public final class PanelMapWriter {
       }
       sb.append(line).append('\n');
     }
-    return sb.toString();
+    return sb;
   }
 
   /** Shortest decimal that reads back as the same double: 2.4, 1, 0.73. */

@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.TreeMap;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DesignRevision;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelRef;
@@ -123,12 +124,22 @@ public final class RecordFingerprinter {
     for (PanelRef p : d.design().sortedOpenings()) {
       c.record("opening").field("lift", p.lift()).field("bay", p.bay());
     }
+    // added with frame members: present only where the design leaves a member out, so every
+    // earlier design (a complete frame) has the form it had
+    for (FrameRef f : d.design().sortedOmittedFrame()) {
+      c.record("omitted-frame-member").field("type", f.type().label())
+          .field("first", f.first()).field("second", f.second());
+    }
     return c;
   }
 
   static Canonical observations(List<Observation> rows) {
     Canonical c = new Canonical();
     for (Observation o : rows) {
+      if (o.frameMember() != null) {
+        frameObservation(c, o);
+        continue;
+      }
       c.record("observation")
           .field("id", o.id()).field("inspectionId", o.inspectionId()).field("planeId", o.planeId())
           .field("lift", o.panel().lift()).field("bay", o.panel().bay())
@@ -142,6 +153,24 @@ public final class RecordFingerprinter {
           .field("correctionReason", o.correctionReason());
     }
     return c;
+  }
+
+  /**
+   * An observation of a frame member (added with frame members: present only where one was
+   * recorded, so every earlier inspection's observations have the form they had).
+   */
+  private static void frameObservation(Canonical c, Observation o) {
+    FrameRef f = o.frameMember();
+    c.record("frame-observation")
+        .field("id", o.id()).field("inspectionId", o.inspectionId()).field("planeId", o.planeId())
+        .field("type", f.type().label()).field("first", f.first()).field("second", f.second())
+        .field("state", o.state().label())
+        .field("bowTenthsMm", o.bowMm() == null ? null : Math.round(o.bowMm() * 10))
+        .field("gaugeLengthMm", o.gaugeLengthMm())
+        .field("defect", o.defect() == null ? null : o.defect().label())
+        .field("note", o.note()).field("recordedAt", o.recordedAt())
+        .field("recordedBy", o.recordedBy()).field("supersedes", o.supersedes())
+        .field("correctionReason", o.correctionReason());
   }
 
   static Canonical photos(InspectionRecords.PlaneRecords p) {

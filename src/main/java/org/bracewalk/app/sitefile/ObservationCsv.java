@@ -15,6 +15,8 @@ import org.bracewalk.app.text.TextInput;
 import org.bracewalk.app.text.TextInputException;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
+import org.bracewalk.core.model.FrameMemberType;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
@@ -27,12 +29,17 @@ import org.bracewalk.core.model.PlaneGrid;
  *
  * <pre>
  * plane, lift, bay, state, member, bow_mm, gauge_length_mm, defect, note, recorded_at,
- * recorded_by, supersedes_row, correction_reason
+ * recorded_by, supersedes_row, correction_reason[, frame, level, line]
  * </pre>
  *
- * On reading, {@code plane lift bay state} are required, the others optional and in any order;
- * an unknown column is an error. {@code supersedes_row} is the 1-based data row (header not
- * counted) of an earlier row of the same file that this row corrects.
+ * The last three are written only when a row records a frame member: {@code frame} is {@code
+ * ledger} or {@code standard} ({@code beam} and {@code upright} are read too), a ledger is named
+ * by {@code level} (0..lifts) and {@code bay}, a standard by {@code lift} and {@code line}
+ * (0..bays); a row of a panel's diagonals leaves {@code frame}, {@code level} and {@code line}
+ * empty. On reading, {@code plane} and {@code state} are required, and {@code lift} and {@code
+ * bay} unless the file has a {@code frame} column; the others optional and in any order; an
+ * unknown column is an error. {@code supersedes_row} is the 1-based data row (header not counted)
+ * of an earlier row of the same file that this row corrects.
  */
 public final class ObservationCsv {
   /** The columns in the order written. */
@@ -40,7 +47,13 @@ public final class ObservationCsv {
       List.of("plane", "lift", "bay", "state", "member", "bow_mm", "gauge_length_mm", "defect",
           "note", "recorded_at", "recorded_by", "supersedes_row", "correction_reason");
 
-  private static final Set<String> REQUIRED = Set.of("plane", "lift", "bay", "state");
+  /** The columns naming a frame member, written after {@link #COLUMNS} when a row has one. */
+  public static final List<String> FRAME_COLUMNS = List.of("frame", "level", "line");
+
+  private static final List<String> ALL_COLUMNS = java.util.stream.Stream.concat(
+      COLUMNS.stream(), FRAME_COLUMNS.stream()).toList();
+
+  private static final Set<String> REQUIRED = Set.of("plane", "state");
 
   /**
    * The bounds of an observation CSV: 64 MiB (a 5,000-row file is about half a megabyte) and
@@ -71,16 +84,34 @@ public final class ObservationCsv {
       Instant recordedAt,
       String recordedBy,
       Integer supersedesRow,
-      String correctionReason) {}
+      String correctionReason,
+      FrameRef frameMember) {
+
+    /** A row of one panel's diagonals. */
+    public Row(int line, String plane, PanelRef panel, PanelState state, Brace member,
+        Double bowMm, Integer gaugeLengthMm, DefectType defect, String note, Instant recordedAt,
+        String recordedBy, Integer supersedesRow, String correctionReason) {
+      this(line, plane, panel, state, member, bowMm, gaugeLengthMm, defect, note, recordedAt,
+          recordedBy, supersedesRow, correctionReason, null);
+    }
+  }
 
   /** The CSV text of the rows, header first, each line ending in a line feed. */
   public static String write(List<Row> rows) {
-    StringBuilder b = new StringBuilder(String.join(",", COLUMNS)).append('\n');
+    boolean frame = rows.stream().anyMatch(r -> r.frameMember() != null);
+    StringBuilder b = new StringBuilder(String.join(",", frame ? ALL_COLUMNS : COLUMNS))
+        .append('\n');
     for (Row r : rows) {
       List<String> v = new ArrayList<>();
+      FrameRef f = r.frameMember();
       v.add(r.plane());
-      v.add(String.valueOf(r.panel().lift()));
-      v.add(String.valueOf(r.panel().bay()));
+      if (f == null) {
+        v.add(String.valueOf(r.panel().lift()));
+        v.add(String.valueOf(r.panel().bay()));
+      } else {
+        v.add(f.isLedger() ? "" : String.valueOf(f.first()));
+        v.add(f.isLedger() ? String.valueOf(f.second()) : "");
+      }
       v.add(r.state().label());
       v.add(r.member() == null ? "" : r.member().token());
       v.add(r.bowMm() == null ? "" : r.bowMm().toString());
@@ -91,6 +122,11 @@ public final class ObservationCsv {
       v.add(r.recordedBy());
       v.add(r.supersedesRow() == null ? "" : r.supersedesRow().toString());
       v.add(r.correctionReason());
+      if (frame) {
+        v.add(f == null ? "" : f.type().label());
+        v.add(f == null || !f.isLedger() ? "" : String.valueOf(f.first()));
+        v.add(f == null || f.isLedger() ? "" : String.valueOf(f.second()));
+      }
       for (int i = 0; i < v.size(); i++) {
         if (i > 0) {
           b.append(',');
@@ -120,6 +156,18 @@ public final class ObservationCsv {
    * @throws FileFormatException naming file, line and column of the first problem
    */
   public static List<Row> read(String fileName, String text, Map<String, PlaneGrid> planes) {
+    return read(fileName, text, planes, Map.of());
+  }
+
+  /**
+   * As {@link #read(String, String, Map)}, also refusing {@code extra} on a frame member the
+   * plane's design has.
+   *
+   * @param omittedFrame the frame members each plane's design in force leaves out, by plane name
+   *     (a plane not named leaves none out)
+   */
+  public static List<Row> read(String fileName, String text, Map<String, PlaneGrid> planes,
+      Map<String, Set<FrameRef>> omittedFrame) {
     List<Record> records = split(fileName, text);
     if (records.isEmpty()) {
       throw new FileFormatException(fileName, 1, "", "", "the file is empty; the first line names"
@@ -132,18 +180,21 @@ public final class ObservationCsv {
       if (i == 0 && name.startsWith("\uFEFF")) {
         name = name.substring(1);
       }
-      if (!COLUMNS.contains(name)) {
+      if (!ALL_COLUMNS.contains(name)) {
         throw new FileFormatException(fileName, header.line, "header", name,
-            "unknown column; the columns are " + String.join(", ", COLUMNS));
+            "unknown column; the columns are " + String.join(", ", ALL_COLUMNS));
       }
       if (index.put(name, i) != null) {
         throw new FileFormatException(fileName, header.line, "header", name, "column given twice");
       }
     }
     for (String r : COLUMNS) {
-      if (REQUIRED.contains(r) && !index.containsKey(r)) {
+      boolean required = REQUIRED.contains(r)
+          || (!index.containsKey("frame") && (r.equals("lift") || r.equals("bay")));
+      if (required && !index.containsKey(r)) {
         throw new FileFormatException(fileName, header.line, "header", r,
-            "required column missing; plane, lift, bay and state are required");
+            "required column missing; plane, lift, bay and state are required (lift and bay may"
+                + " be left out when a frame column names frame members)");
       }
     }
     List<Row> rows = new ArrayList<>();
@@ -157,13 +208,14 @@ public final class ObservationCsv {
         throw new FileFormatException(fileName, rec.line, "", "", rec.values.size()
             + " values for " + header.values.size() + " columns");
       }
-      rows.add(row(fileName, rec, rows.size() + 1, index, planes, corrected));
+      rows.add(row(fileName, rec, rows.size() + 1, index, planes, corrected, omittedFrame));
     }
     return rows;
   }
 
   private static Row row(String file, Record rec, int rowNumber, Map<String, Integer> index,
-      Map<String, PlaneGrid> planes, Set<Integer> corrected) {
+      Map<String, PlaneGrid> planes, Set<Integer> corrected,
+      Map<String, Set<FrameRef>> omittedFrame) {
     Cells c = new Cells(file, rec, index);
     String plane = c.text("plane");
     PlaneGrid grid = planes.get(plane);
@@ -174,10 +226,28 @@ public final class ObservationCsv {
       throw c.error("plane", "no plane named \"" + plane + "\" in the inspected structure; its"
           + " planes are " + String.join(", ", new java.util.TreeSet<>(planes.keySet())));
     }
-    int lift = c.integer("lift", 1, grid.lifts());
-    int bay = c.integer("bay", 1, grid.bays());
+    FrameRef frame = c.text("frame").isEmpty() ? null : frameMember(c, grid);
+    if (frame == null) {
+      for (String column : List.of("level", "line")) {
+        if (!c.text(column).isEmpty()) {
+          throw c.error(column, "a " + column + " names a frame member: give the frame column"
+              + " (ledger or standard) too, or lift and bay for a panel");
+        }
+      }
+    }
+    PanelRef panel = frame != null ? null
+        : PanelRef.of(c.integer("lift", 1, grid.lifts()), c.integer("bay", 1, grid.bays()));
     PanelState state = c.label("state", PanelState::fromLabel);
+    if (frame != null && state == PanelState.EXTRA
+        && !omittedFrame.getOrDefault(plane, Set.of()).contains(frame)) {
+      throw c.error("state", "the " + frame + " is in the design of plane \"" + plane
+          + "\", so it cannot be extra (there although the design leaves it out)");
+    }
     Brace member = null;
+    if (frame != null && !c.text("member").isEmpty()) {
+      throw c.error("member", "a frame member names no diagonal found (the member column is for"
+          + " a panel's diagonals)");
+    }
     if (!c.text("member").isEmpty()) {
       member = SiteFileReader.braceToken(c.text("member"));
       if (member == null) {
@@ -213,17 +283,42 @@ public final class ObservationCsv {
     Integer sup = supersedes;
     Brace m = member;
     String field = bow != null && gauge == null ? "gauge_length_mm"
-        : state == PanelState.EXTRA && member == null ? "member"
+        : state == PanelState.EXTRA && member == null && frame == null ? "member"
         : sup != null || !c.text("correction_reason").isEmpty() ? "correction_reason" : "state";
     try {
-      new Observation(0, 1, 1, PanelRef.of(lift, bay), state, m, bow, gauge, defect,
+      new Observation(0, 1, 1, panel, state, m, bow, gauge, defect,
           c.text("note"), Instant.EPOCH, c.text("recorded_by"), sup == null ? null : (long) sup,
-          c.text("correction_reason"));
+          c.text("correction_reason"), frame);
     } catch (IllegalArgumentException e) {
       throw c.error(field, e.getMessage());
     }
-    return new Row(rec.line, plane, PanelRef.of(lift, bay), state, member, bow, gauge, defect,
-        c.text("note"), at, c.text("recorded_by"), supersedes, c.text("correction_reason"));
+    return new Row(rec.line, plane, panel, state, member, bow, gauge, defect,
+        c.text("note"), at, c.text("recorded_by"), supersedes, c.text("correction_reason"), frame);
+  }
+
+  /**
+   * The frame member of a row: a ledger by level (0..lifts) and bay, a standard by lift and line
+   * (0..bays); the columns of the other kind stay empty.
+   */
+  private static FrameRef frameMember(Cells c, PlaneGrid grid) {
+    FrameMemberType type = c.label("frame", w -> {
+      try {
+        return FrameMemberType.fromWord(w.toLowerCase(Locale.ROOT));
+      } catch (IllegalArgumentException e) {
+        throw new IllegalArgumentException("unknown frame member \"" + w
+            + "\"; use ledger (beam) or standard (upright)", e);
+      }
+    });
+    boolean ledger = type == FrameMemberType.LEDGER;
+    for (String wrong : ledger ? List.of("lift", "line") : List.of("level", "bay")) {
+      if (!c.text(wrong).isEmpty()) {
+        throw c.error(wrong, ledger ? "a ledger is named by level and bay; leave " + wrong
+            + " empty" : "a standard is named by lift and line; leave " + wrong + " empty");
+      }
+    }
+    return ledger
+        ? FrameRef.ledger(c.integer("level", 0, grid.lifts()), c.integer("bay", 1, grid.bays()))
+        : FrameRef.standard(c.integer("lift", 1, grid.lifts()), c.integer("line", 0, grid.bays()));
   }
 
   /** One CSV record: its values and the line it starts on. */

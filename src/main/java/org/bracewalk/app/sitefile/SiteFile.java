@@ -6,6 +6,7 @@ import java.util.Arrays;
 import java.util.List;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.InspectionStatus;
 import org.bracewalk.core.model.PanelRef;
@@ -143,8 +144,9 @@ public record SiteFile(Site site, List<StructureData> structures) {
   }
 
   /**
-   * One observation; {@code supersedes} is the 1-based position of the corrected observation in
-   * the same inspection's list, or {@code null}.
+   * One observation, of one panel's diagonals ({@code panel}) or of one frame member ({@code
+   * frameMember}, {@code panel} null); {@code supersedes} is the 1-based position of the corrected
+   * observation in the same inspection's list, or {@code null}.
    */
   public record ObservationData(
       String plane,
@@ -159,7 +161,17 @@ public record SiteFile(Site site, List<StructureData> structures) {
       String recordedBy,
       Integer supersedes,
       String correctionReason,
-      List<PhotoData> photos) {
+      List<PhotoData> photos,
+      FrameRef frameMember) {
+
+    /** An observation of one panel's diagonals. */
+    public ObservationData(String plane, PanelRef panel, PanelState state, Brace member,
+        Double bowMm, Integer gaugeLengthMm, DefectType defect, String note, Instant recordedAt,
+        String recordedBy, Integer supersedes, String correctionReason, List<PhotoData> photos) {
+      this(plane, panel, state, member, bowMm, gaugeLengthMm, defect, note, recordedAt,
+          recordedBy, supersedes, correctionReason, photos, null);
+    }
+
     public ObservationData {
       photos = List.copyOf(photos);
     }

@@ -37,6 +37,8 @@ import org.bracewalk.app.sitefile.SiteFile.RetirementData;
 import org.bracewalk.app.sitefile.SiteFile.StructureData;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
+import org.bracewalk.core.model.FrameMemberType;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.DisplayUnits;
 import org.bracewalk.core.model.Inspection;
@@ -254,7 +256,7 @@ public final class SiteFileReader {
       throw n.error("designs", "plane \"" + name + "\" needs at least one design revision");
     }
     for (Obj d : designNodes) {
-      d.known("revision", "author", "date", "approvalNote", "recordedAt", "map");
+      d.known("revision", "author", "date", "approvalNote", "recordedAt", "map", "omittedFrame");
       int number = d.integer("revision", 1, Integer.MAX_VALUE);
       if (number != expected) {
         throw d.error("revision", "expected revision " + expected
@@ -264,6 +266,17 @@ public final class SiteFileReader {
       LocalDate date = d.date("date", true);
       Instant recordedAt = d.instant("recordedAt", true);
       PlaneDesign design = designMap(d, grid);
+      if (d.has("omittedFrame")) {
+        Set<FrameRef> omitted = new LinkedHashSet<>();
+        for (Obj m : d.objects("omittedFrame")) {
+          m.known("frame", "level", "bay", "lift", "line");
+          FrameRef f = frameMember(m, grid);
+          if (!omitted.add(f)) {
+            throw m.error("frame", "the " + f + " is left out twice; name each member once");
+          }
+        }
+        design = design.withOmittedFrame(omitted);
+      }
       designs.add(new DesignData(number, d.text("author"), date, d.text("approvalNote"),
           recordedAt, design));
     }
@@ -413,16 +426,26 @@ public final class SiteFileReader {
 
   private ObservationData observation(Obj n, int position, Instant started,
       Map<String, PlaneData> planes, List<ObservationData> earlier, Set<Integer> corrected) {
-    n.known("plane", "lift", "bay", "state", "member", "bowMm", "gaugeLengthMm", "defect",
-        "note", "recordedAt", "recordedBy", "supersedes", "correctionReason", "photos");
+    n.known("plane", "lift", "bay", "frame", "level", "line", "state", "member", "bowMm",
+        "gaugeLengthMm", "defect", "note", "recordedAt", "recordedBy", "supersedes",
+        "correctionReason", "photos");
     PlaneData plane = planeNamed(n, planes);
     if (plane.retired() != null && !plane.retired().at().isAfter(started)) {
       throw n.error("plane", "plane \"" + plane.name() + "\" was retired at "
           + instantText(plane.retired().at()) + ", before this inspection started ("
           + instantText(started) + "); it is not part of it");
     }
-    PanelRef panel = panel(n, plane);
+    FrameRef frameMember = n.has("frame") ? frameMember(n, plane.grid()) : null;
+    if (frameMember == null && (n.has("level") || n.has("line"))) {
+      throw n.error(n.has("level") ? "level" : "line", "a level or line names a frame member:"
+          + " give \"frame\" (ledger or standard) too, or lift and bay for a panel");
+    }
+    PanelRef panel = frameMember == null ? panel(n, plane) : null;
     PanelState state = n.label("state", PanelState::fromLabel);
+    if (frameMember != null && n.has("member")) {
+      throw n.error("member", "a frame member names no diagonal found (field member is for a"
+          + " panel's diagonals)");
+    }
     Brace member = n.has("member") ? brace(n, "member") : null;
     Double bow = n.has("bowMm") ? n.decimal("bowMm", 0, Observation.MAX_LENGTH_MM) : null;
     Integer gauge = n.has("gaugeLengthMm")
@@ -443,11 +466,11 @@ public final class SiteFileReader {
     }
     Integer sup = supersedes;
     String field = n.has("bowMm") && !n.has("gaugeLengthMm") ? "gaugeLengthMm"
-        : state == PanelState.EXTRA && member == null ? "member"
+        : state == PanelState.EXTRA && member == null && frameMember == null ? "member"
         : sup != null || n.has("correctionReason") ? "correctionReason" : "state";
     n.build(field, () -> new Observation(0, 1, 1, panel, state, member, bow, gauge, defect,
         n.text("note"), at, n.text("recordedBy"), sup == null ? null : (long) sup,
-        n.text("correctionReason")));
+        n.text("correctionReason"), frameMember));
     List<PhotoData> photos = new ArrayList<>();
     for (Obj p : n.objects("photos")) {
       p.known("fileName", "mediaType", "attachedAt", "data");
@@ -458,7 +481,8 @@ public final class SiteFileReader {
       photos.add(new PhotoData(checked.fileName(), checked.mediaType(), attached, data));
     }
     return new ObservationData(plane.name(), panel, state, member, bow, gauge, defect,
-        n.text("note"), at, n.text("recordedBy"), supersedes, n.text("correctionReason"), photos);
+        n.text("note"), at, n.text("recordedBy"), supersedes, n.text("correctionReason"), photos,
+        frameMember);
   }
 
   private RepairActionData action(Obj n, Map<String, PlaneData> planes, List<Pending> pending) {
@@ -491,6 +515,36 @@ public final class SiteFileReader {
           + String.join(", ", planes.keySet()));
     }
     return plane;
+  }
+
+  /**
+   * A frame member: {@code "frame": "ledger"} (or {@code "beam"}) with {@code level} 0..lifts and
+   * {@code bay} 1..bays, or {@code "frame": "standard"} (or {@code "upright"}) with {@code lift}
+   * 1..lifts and {@code line} 0..bays.
+   */
+  private FrameRef frameMember(Obj n, PlaneGrid grid) {
+    FrameMemberType type = n.label("frame", w -> {
+      try {
+        return FrameMemberType.fromWord(w);
+      } catch (IllegalArgumentException e) {
+        throw new IllegalArgumentException("unknown frame member \"" + w
+            + "\": use ledger (beam) or standard (upright)", e);
+      }
+    });
+    if (type == FrameMemberType.LEDGER) {
+      for (String wrong : List.of("lift", "line")) {
+        if (n.has(wrong)) {
+          throw n.error(wrong, "a ledger is named by level and bay, not " + wrong);
+        }
+      }
+      return FrameRef.ledger(n.integer("level", 0, grid.lifts()), n.integer("bay", 1, grid.bays()));
+    }
+    for (String wrong : List.of("level", "bay")) {
+      if (n.has(wrong)) {
+        throw n.error(wrong, "a standard is named by lift and line, not " + wrong);
+      }
+    }
+    return FrameRef.standard(n.integer("lift", 1, grid.lifts()), n.integer("line", 0, grid.bays()));
   }
 
   private PanelRef panel(Obj n, PlaneData plane) {

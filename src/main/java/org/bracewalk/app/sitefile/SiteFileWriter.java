@@ -17,6 +17,7 @@ import java.time.LocalDate;
 import java.util.List;
 import java.util.Set;
 import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Millimetres;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
@@ -42,7 +43,8 @@ public final class SiteFileWriter {
   private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
   /** Arrays whose elements are each written on one line. */
-  private static final Set<String> ONE_LINE_ELEMENTS = Set.of("observations", "actions", "issuedReports", "scope");
+  private static final Set<String> ONE_LINE_ELEMENTS = Set.of("observations", "actions", "issuedReports", "scope",
+      "omittedFrame");
 
   /** Arrays written on one line altogether. */
   private static final Set<String> ONE_LINE_ARRAYS = Set.of("bayWidthsMm", "liftHeightsMm");
@@ -131,6 +133,13 @@ public final class SiteFileWriter {
       dn.put("recordedAt", SiteFileReader.instantText(d.recordedAt()));
       ArrayNode map = dn.putArray("map");
       mapRows(d.design()).forEach(map::add);
+      if (!d.design().frameComplete()) {
+        // absent when the design leaves no frame member out, so older files read and write alike
+        ArrayNode omitted = dn.putArray("omittedFrame");
+        for (FrameRef f : d.design().sortedOmittedFrame()) {
+          putMember(omitted.addObject(), f);
+        }
+      }
     }
     if (p.retired() != null) {
       ObjectNode rn = n.putObject("retired");
@@ -212,8 +221,12 @@ public final class SiteFileWriter {
   private static ObjectNode observation(ObservationData o) {
     ObjectNode n = NODES.objectNode();
     n.put("plane", o.plane());
-    n.put("lift", o.panel().lift());
-    n.put("bay", o.panel().bay());
+    if (o.frameMember() != null) {
+      putMember(n, o.frameMember());
+    } else {
+      n.put("lift", o.panel().lift());
+      n.put("bay", o.panel().bay());
+    }
     n.put("state", o.state().label());
     if (o.member() != null) {
       n.put("member", o.member().token());
@@ -267,6 +280,21 @@ public final class SiteFileWriter {
       n.put("verifiedByInspection", a.verifiedByInspection());
     }
     return n;
+  }
+
+  /**
+   * A frame member as the check contract's JSON names one: {@code "frame": "ledger", "level",
+   * "bay"} or {@code "frame": "standard", "lift", "line"}.
+   */
+  static void putMember(ObjectNode n, FrameRef f) {
+    n.put("frame", f.type().label());
+    if (f.isLedger()) {
+      n.put("level", f.first());
+      n.put("bay", f.second());
+    } else {
+      n.put("lift", f.first());
+      n.put("line", f.second());
+    }
   }
 
   private static void putIfNotEmpty(ObjectNode n, String field, String value) {

@@ -4,10 +4,15 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.Set;
 import org.bracewalk.core.analysis.AsBuiltAnalysis;
 import org.bracewalk.core.analysis.Block;
+import org.bracewalk.core.analysis.Freedom;
+import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.analysis.StateAnalysis;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.Support;
@@ -19,16 +24,22 @@ import org.bracewalk.core.model.Support;
  * <p>Rules:
  *
  * <ul>
- *   <li>the kind is decided on the conservative state (panels not inspected counted as missing):
- *       rigid: holds its shape; not rigid but rigid with those panels as designed: depends on
- *       panels not inspected; otherwise sways one way only (no free motion with tension-only
- *       members taken as rigid) or lost rigidity;
+ *   <li>the kind is decided on the conservative state (panels and frame members not inspected
+ *       counted as missing): rigid: holds its shape; not rigid but rigid with those as designed:
+ *       depends on what is not inspected; otherwise sways one way only (no free motion with
+ *       tension-only members taken as rigid), lost sideways restraint (every freedom is a joint
+ *       where a member runs straight through unheld, see {@link
+ *       org.bracewalk.core.analysis.FreedomKind#LOST_RESTRAINT}), or lost rigidity (anything that
+ *       sways, and loose ends);
  *   <li>the keep-off zone, whenever the conservative state is not rigid (so for "depends on panels
  *       not inspected" it is the worst case: every such panel missing): on a pinned base, the
- *       lowest lift of a block not held by the base and every lift above it, since the lifts above
- *       are carried sideways ({@code shared/design/analysis.md}); on a free plane, or when the
- *       plane leans one way only (the engine names no block), every lift; always every bay; and
- *       for an upright frame the beam bays on both sides too.
+ *       lowest lift that can move and every lift above it, since the lifts above are carried
+ *       sideways ({@code shared/design/analysis.md}): where the frame is complete, the lowest lift
+ *       of a block not held by the base; where it is not (no blocks), the lowest level of a joint
+ *       of any freedom (a sway's moving joints, a joint without sideways restraint, a loose end),
+ *       lift 1 for a joint at the base; on a free plane, or when the plane leans one way only (the
+ *       engine names no block), every lift; always every bay; and for an upright frame the beam
+ *       bays on both sides too.
  * </ul>
  *
  * @param kind the verdict
@@ -36,18 +47,31 @@ import org.bracewalk.core.model.Support;
  * @param unknownPanels panels nobody has looked at
  * @param role the plane's role in its structure
  * @param keepOffZone where to keep people and loads off; absent when nothing need be kept off
+ * @param freedoms the conservative state's freedoms told apart by kind (empty where the engine
+ *     lists none); put them into words with {@link #freedomWords(Set)}
+ * @param unknownFrameMembers frame members nobody has looked at
  */
 public record Verdict(
     VerdictKind kind,
     int degreesOfFreedom,
     int unknownPanels,
     PlaneRole role,
-    Optional<KeepOffZone> keepOffZone) {
+    Optional<KeepOffZone> keepOffZone,
+    List<Freedom> freedoms,
+    int unknownFrameMembers) {
+
+  /** A verdict with no freedoms listed and every frame member inspected. */
+  public Verdict(
+      VerdictKind kind, int degreesOfFreedom, int unknownPanels, PlaneRole role,
+      Optional<KeepOffZone> keepOffZone) {
+    this(kind, degreesOfFreedom, unknownPanels, role, keepOffZone, List.of(), 0);
+  }
 
   public Verdict {
     Objects.requireNonNull(kind, "kind");
     Objects.requireNonNull(role, "role");
     Objects.requireNonNull(keepOffZone, "keepOffZone");
+    freedoms = List.copyOf(freedoms);
   }
 
   /** The verdict on the analysed state of a plane (as built when known, else as designed). */
@@ -63,7 +87,8 @@ public record Verdict(
   public static Verdict of(PlaneAnalysis analysis, PlaneRole role, boolean recorded) {
     Verdict v = classifyAnalysis(analysis, role);
     return recorded ? v
-        : new Verdict(VerdictKind.NOT_INSPECTED, v.degreesOfFreedom, v.unknownPanels, role, v.keepOffZone);
+        : new Verdict(VerdictKind.NOT_INSPECTED, v.degreesOfFreedom, v.unknownPanels, role, v.keepOffZone,
+            v.freedoms, v.unknownFrameMembers);
   }
 
   private static Verdict classifyAnalysis(PlaneAnalysis analysis, PlaneRole role) {
@@ -73,7 +98,18 @@ public record Verdict(
         role,
         analysis.analysedState(),
         ab.map(AsBuiltAnalysis::unknownPanels).orElse(0),
+        ab.map(AsBuiltAnalysis::unknownFrameMembers).orElse(0),
         ab.map(AsBuiltAnalysis::rigidIfUnknownSound).orElse(analysis.analysedState().rigid()));
+  }
+
+  /** As below, with every frame member inspected. */
+  public static Verdict classify(
+      PlaneGrid grid,
+      PlaneRole role,
+      StateAnalysis conservative,
+      int unknownPanels,
+      boolean rigidIfUnknownSound) {
+    return classify(grid, role, conservative, unknownPanels, 0, rigidIfUnknownSound);
   }
 
   /**
@@ -81,26 +117,56 @@ public record Verdict(
    *
    * @param conservative the state with panels not inspected counted as missing
    * @param unknownPanels how many panels nobody has looked at
-   * @param rigidIfUnknownSound whether the plane is rigid with those panels as designed
+   * @param unknownFrameMembers how many frame members nobody has looked at
+   * @param rigidIfUnknownSound whether the plane is rigid with those panels and members as designed
    */
   public static Verdict classify(
       PlaneGrid grid,
       PlaneRole role,
       StateAnalysis conservative,
       int unknownPanels,
+      int unknownFrameMembers,
       boolean rigidIfUnknownSound) {
     VerdictKind kind;
     if (conservative.rigid()) {
       kind = VerdictKind.HOLDS;
-    } else if (unknownPanels > 0 && rigidIfUnknownSound) {
+    } else if (unknownPanels + unknownFrameMembers > 0 && rigidIfUnknownSound) {
       kind = VerdictKind.DEPENDS_ON_UNSEEN;
     } else if (conservative.degreesOfFreedom() == 0) {
       kind = VerdictKind.SWAYS_ONE_WAY;
+    } else if (onlyLostRestraint(conservative)) {
+      kind = VerdictKind.LOST_RESTRAINT;
     } else {
       kind = VerdictKind.LOST;
     }
     return new Verdict(kind, conservative.degreesOfFreedom(), unknownPanels, role,
-        zone(grid, role, conservative));
+        zone(grid, role, conservative), conservative.freedoms(), unknownFrameMembers);
+  }
+
+  /** Every freedom is a joint without sideways restraint, and they account for all of them. */
+  private static boolean onlyLostRestraint(StateAnalysis s) {
+    return !s.freedoms().isEmpty()
+        && s.freedoms().stream().allMatch(f -> f.kind() == FreedomKind.LOST_RESTRAINT)
+        && s.freedomsOf(FreedomKind.LOST_RESTRAINT) == s.degreesOfFreedom();
+  }
+
+  /**
+   * The freedoms in words, one sentence each, in the plane's trade words ({@link Terms#of(PlaneRole)}):
+   * see {@link Wording#freedom(Freedom, Terms, Set)}.
+   *
+   * @param absent frame members not there as analysed (to name them beside a joint), or empty
+   */
+  public List<String> freedomWords(Set<FrameRef> absent) {
+    List<String> out = new ArrayList<>();
+    for (Freedom f : freedoms) {
+      out.add(Wording.freedom(f, Terms.of(role), absent));
+    }
+    return out;
+  }
+
+  /** Whether any freedom is a joint without sideways restraint (then say {@link Wording#LOST_RESTRAINT_NOTE}). */
+  public boolean anyLostRestraint() {
+    return freedoms.stream().anyMatch(f -> f.kind() == FreedomKind.LOST_RESTRAINT);
   }
 
   /** A plane nothing has been recorded for: no verdict yet, and no zone. */
@@ -127,9 +193,15 @@ public record Verdict(
 
   /**
    * The lowest lift that can sway: on a pinned base the lowest lift outside the block held by the
-   * base; 1 on a free plane, when it leans one way only, or when no block is held.
+   * base, or where the frame is incomplete (no blocks) the lowest level of a joint of any freedom
+   * (of a moving joint when no freedom is listed), at least 1; 1 on a free plane, when it leans one
+   * way only, or when no block is held and no joint is named.
    */
   public static int lowestSwayingLift(PlaneGrid grid, StateAnalysis s) {
+    if (grid.support() == Support.PINNED_BASE && !s.oneWayOnly()
+        && (!s.frameComplete() || s.blocks().isEmpty())) {
+      return lowestMovingLift(s);
+    }
     boolean anyFixed = s.blocks().stream().anyMatch(Block::fixed);
     if (grid.support() != Support.PINNED_BASE || !anyFixed || s.oneWayOnly()) {
       return 1;
@@ -143,6 +215,22 @@ public record Verdict(
       }
     }
     return lowest == Integer.MAX_VALUE ? 1 : lowest;
+  }
+
+  /** The lowest level of a joint of any freedom (else of a moving joint), at least 1. */
+  private static int lowestMovingLift(StateAnalysis s) {
+    int lowest = Integer.MAX_VALUE;
+    for (Freedom f : s.freedoms()) {
+      for (Joint j : f.joints()) {
+        lowest = Math.min(lowest, j.level());
+      }
+    }
+    if (lowest == Integer.MAX_VALUE) {
+      for (Joint j : s.movingJoints()) {
+        lowest = Math.min(lowest, j.level());
+      }
+    }
+    return lowest == Integer.MAX_VALUE ? 1 : Math.max(1, lowest);
   }
 
   /** {@code ▲ Lost rigidity}. */

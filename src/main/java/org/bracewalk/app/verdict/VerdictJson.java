@@ -8,13 +8,18 @@ import java.util.List;
 import org.bracewalk.app.json.PrettyJson;
 import org.bracewalk.core.analysis.AsBuiltAnalysis;
 import org.bracewalk.core.analysis.Block;
+import org.bracewalk.core.analysis.Freedom;
 import org.bracewalk.core.analysis.PlacedBrace;
 import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.analysis.RepairBrace;
+import org.bracewalk.core.analysis.RepairMember;
 import org.bracewalk.core.analysis.RepairPlan;
+import org.bracewalk.core.analysis.RestoreFrameItem;
 import org.bracewalk.core.analysis.RestoreItem;
 import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.PlaneRole;
@@ -30,8 +35,16 @@ import org.bracewalk.core.model.PlaneRole;
  *   <li>{@code keepOff} at the top when the analysed state is not rigid: {@link Cautions#keepOff};
  *   <li>{@code keepOffZone} beside it: {@code {"lifts": [...], "bays": [...], "offloadBeside":
  *       true|false}}, the {@link KeepOffZone} of the one {@link Verdict} (absent when nothing need
- *       be kept off).
+ *       be kept off);
+ *   <li>{@code freedoms} in {@code design} and {@code asBuilt}: the state's freedoms told apart by
+ *       kind, {@code {"kind": "sway"|"lost-restraint"|"loose-end", "count": N, "joints": [{"level",
+ *       "line"}...], "members": [frame members...], "diagonals": [{"lift", "bay"}...]}}; the counts
+ *       add up to {@code degreesOfFreedom}.
  * </ul>
+ *
+ * The contract's own frame-member fields ({@code criticalMembers}, {@code movingJoints}, {@code
+ * unknownFrameMembers}, {@code repair.members}, {@code repair.restoreFrame}) are always written,
+ * whether or not the maps had frame lines.
  *
  * Lists keep the engine's order (lift, then bay). Stateless; safe to share.
  */
@@ -77,7 +90,11 @@ public final class VerdictJson {
         state(analysis.design()), analysis.asBuilt().map(this::asBuilt), repair(analysis.repair()));
   }
 
-  /** One state: rigid, degreesOfFreedom, oneWayOnly, lossTolerance, criticalBraces, blocks. */
+  /**
+   * One state: rigid, degreesOfFreedom, oneWayOnly, lossTolerance, criticalBraces, criticalMembers,
+   * blocks ({@code []} where the frame is incomplete), movingJoints (pinned base; empty on a free
+   * plane) and freedoms.
+   */
   public ObjectNode state(StateAnalysis s) {
     ObjectNode o = NODES.objectNode();
     o.put("rigid", s.rigid());
@@ -98,14 +115,38 @@ public final class VerdictJson {
       numbers(block.putArray("bays"), b.bays());
       block.put("fixed", b.fixed());
     }
+    ArrayNode criticalMembers = o.putArray("criticalMembers");
+    for (FrameRef f : s.criticalMembers()) {
+      criticalMembers.add(frameMember(f));
+    }
+    ArrayNode moving = o.putArray("movingJoints");
+    for (Joint j : s.movingJoints()) {
+      moving.add(joint(j));
+    }
+    ArrayNode freedoms = o.putArray("freedoms");
+    for (Freedom f : s.freedoms()) {
+      ObjectNode item = freedoms.addObject();
+      item.put("kind", f.kind().label());
+      item.put("count", f.count());
+      ArrayNode joints = item.putArray("joints");
+      f.joints().forEach(j -> joints.add(joint(j)));
+      ArrayNode members = item.putArray("members");
+      f.members().forEach(m -> members.add(frameMember(m)));
+      ArrayNode diagonals = item.putArray("diagonals");
+      f.diagonals().forEach(p -> diagonals.add(panel(p)));
+    }
     return o;
   }
 
-  /** The as-built state: a state plus unknownPanels, rigidIfUnknownSound and extraBraces. */
+  /**
+   * The as-built state: a state plus unknownPanels, rigidIfUnknownSound, unknownFrameMembers and
+   * extraBraces.
+   */
   public ObjectNode asBuilt(AsBuiltAnalysis a) {
     ObjectNode o = state(a.state());
     o.put("unknownPanels", a.unknownPanels());
     o.put("rigidIfUnknownSound", a.rigidIfUnknownSound());
+    o.put("unknownFrameMembers", a.unknownFrameMembers());
     ArrayNode extra = o.putArray("extraBraces");
     for (PlacedBrace b : a.extraBraces()) {
       extra.add(member(panel(b.panel()), b.brace()));
@@ -113,7 +154,10 @@ public final class VerdictJson {
     return o;
   }
 
-  /** possible, minimum, braces and restoreToDesign. */
+  /**
+   * possible, minimum (braces and frame members together), braces, restoreToDesign, members and
+   * restoreFrame.
+   */
   public ObjectNode repair(RepairPlan r) {
     ObjectNode o = NODES.objectNode();
     o.put("possible", r.possible());
@@ -130,6 +174,39 @@ public final class VerdictJson {
       node.put("neededForRigidity", item.neededForRigidity());
       restore.add(node);
     }
+    ArrayNode members = o.putArray("members");
+    for (RepairMember m : r.members()) {
+      members.add(frameMember(m.member()).put("inDesign", m.inDesign()));
+    }
+    ArrayNode restoreFrame = o.putArray("restoreFrame");
+    for (RestoreFrameItem item : r.restoreFrame()) {
+      restoreFrame.add(frameMember(item.member()).put("neededForRigidity", item.neededForRigidity()));
+    }
+    return o;
+  }
+
+  /**
+   * {@code {"member": "ledger", "level": L, "bay": B}} or {@code {"member": "standard", "lift": I,
+   * "line": J}}: the contract's spelling (scaffold words whatever the plane).
+   */
+  public static ObjectNode frameMember(FrameRef f) {
+    ObjectNode o = NODES.objectNode();
+    o.put("member", f.type().label());
+    if (f.isLedger()) {
+      o.put("level", f.first());
+      o.put("bay", f.second());
+    } else {
+      o.put("lift", f.first());
+      o.put("line", f.second());
+    }
+    return o;
+  }
+
+  /** {@code {"level": L, "line": J}}. */
+  public static ObjectNode joint(Joint j) {
+    ObjectNode o = NODES.objectNode();
+    o.put("level", j.level());
+    o.put("line", j.line());
     return o;
   }
 

@@ -1,7 +1,7 @@
 package org.bracewalk.app.verdict;
 
 /**
- * The five verdicts a plane can have, each with its own code (the report template's key), words
+ * The six verdicts a plane can have, each with its own code (the report template's key), words
  * and symbol, so none depends on colour. Never "safe": holding its shape is a statement about
  * bracing continuity only.
  */
@@ -12,6 +12,14 @@ public enum VerdictKind {
   DEPENDS_ON_UNSEEN("depends-on-uninspected", "Depends on panels not inspected", "\u25D1"),
   /** No free motion with members taken as rigid, but tension-only members let it lean one way. */
   SWAYS_ONE_WAY("one-way", "Lost rigidity: sways one way only", "\u25B2"),
+  /**
+   * Its only freedoms are joints where a standard or ledger runs straight through with nothing
+   * holding it sideways ({@code shared/design/analysis.md}, "Frame members"): no part sways, but
+   * the member's unbraced length has grown; an engineer checks it before loading. Never "holds its
+   * shape": the pin-jointed model counts each such joint as a freedom.
+   */
+  LOST_RESTRAINT(
+      "lost-restraint", "Lost sideways restraint: an engineer checks it before loading", "\u25B3"),
   /** Not rigid whatever the panels not yet seen turn out to be. */
   LOST("lost-rigidity", "Lost rigidity", "\u25B2"),
   /** Nothing recorded for this plane yet. */
@@ -46,19 +54,27 @@ public enum VerdictKind {
     return symbol + " " + words;
   }
 
-  /** Lost rigidity, either way (the plane can move now). */
+  /**
+   * Something in the plane can move now in the pin-jointed model: lost rigidity either way, or a
+   * member without sideways restraint. Each has a keep-off zone and needs a competent person (and
+   * for lost restraint an engineer) before the part is loaded again.
+   */
   public boolean lost() {
-    return this == LOST || this == SWAYS_ONE_WAY;
+    return this == LOST || this == SWAYS_ONE_WAY || this == LOST_RESTRAINT;
   }
 
-  /** Worst first: lost, sways one way, depends on unseen panels, not inspected, holds. */
+  /**
+   * Worst first: lost, sways one way, lost sideways restraint, depends on unseen panels, not
+   * inspected, holds.
+   */
   public int severity() {
     return switch (this) {
       case HOLDS -> 0;
       case NOT_INSPECTED -> 1;
       case DEPENDS_ON_UNSEEN -> 2;
-      case SWAYS_ONE_WAY -> 3;
-      case LOST -> 4;
+      case LOST_RESTRAINT -> 3;
+      case SWAYS_ONE_WAY -> 4;
+      case LOST -> 5;
     };
   }
 

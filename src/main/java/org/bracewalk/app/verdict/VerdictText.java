@@ -9,14 +9,19 @@ import java.util.TreeSet;
 import java.util.function.Function;
 import org.bracewalk.core.analysis.AsBuiltAnalysis;
 import org.bracewalk.core.analysis.Block;
+import org.bracewalk.core.analysis.Freedom;
+import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.PlacedBrace;
 import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.analysis.RepairBrace;
+import org.bracewalk.core.analysis.RepairMember;
 import org.bracewalk.core.analysis.RepairPlan;
+import org.bracewalk.core.analysis.RestoreFrameItem;
 import org.bracewalk.core.analysis.RestoreItem;
 import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
@@ -70,6 +75,8 @@ public final class VerdictText {
       PlaneRole role) {
     Verdict verdict = Verdict.of(analysis, role);
     PlaneGrid grid = analysis.grid();
+    Terms terms = Terms.of(role);
+    FrameView frame = new FrameView(design, asBuilt, analysis, terms);
     StringBuilder out = new StringBuilder();
     out.append("Bracewalk check: ").append(title).append('\n');
     out.append("Verdict: ").append(verdict.headline()).append('\n');
@@ -83,25 +90,39 @@ public final class VerdictText {
         .append(supportNote)
         .append(")\n\n");
 
-    state(out, "As designed", analysis.design(), grid);
+    state(out, "As designed", analysis.design(), grid, frame, design.omittedFrame());
     if (analysis.asBuilt().isPresent()) {
       AsBuiltAnalysis a = analysis.asBuilt().get();
       out.append('\n');
-      state(out, "As built", a.state(), grid);
+      state(out, "As built", a.state(), grid, frame, frame.absentAsBuilt());
       uninspected(out, a, asBuilt);
+      if (frame.shown()) {
+        frameUninspected(out, a, asBuilt, terms);
+      }
       extras(out, a.extraBraces());
+      frame.takenAsThere(out);
     }
 
     out.append('\n');
-    elevation(out, design, asBuilt, analysis);
+    if (frame.shown()) {
+      frame.elevation(out);
+    } else {
+      elevation(out, design, asBuilt, analysis);
+    }
     out.append('\n');
-    repair(out, analysis, design, asBuilt);
+    repair(out, analysis, design, asBuilt, terms);
     if (analysis.asBuilt().isPresent()) {
       out.append('\n');
       restore(out, analysis.repair().restoreToDesign());
+      if (frame.shown()) {
+        restoreFrame(out, analysis.repair().restoreFrame(), terms);
+      }
     }
 
     out.append('\n');
+    if (verdict.anyLostRestraint()) {
+      wrap(out, Wording.LOST_RESTRAINT_NOTE, "");
+    }
     if (verdict.keepOffZone().isPresent()) {
       wrap(out, verdict.keepOff(), "");
     }
@@ -111,19 +132,50 @@ public final class VerdictText {
 
   // ---------------------------------------------------------------- states
 
-  private static void state(StringBuilder out, String name, StateAnalysis s, PlaneGrid grid) {
+  private static void state(
+      StringBuilder out, String name, StateAnalysis s, PlaneGrid grid, FrameView frame,
+      java.util.Set<FrameRef> absent) {
     out.append(name).append(": ").append(verdict(s)).append('\n');
     out.append("  Loss tolerance: ").append(lossTolerance(s)).append('\n');
     out.append("  Critical braces (losing any one of them alone adds a motion): ")
         .append(list(s.criticalBraces(), Wording::panel))
         .append('\n');
-    blocks(out, s, grid);
+    if (frame.shown()) {
+      out.append("  Critical frame members (losing any one of them alone adds a motion): ")
+          .append(list(s.criticalMembers(), f -> Wording.frameMember(f, frame.terms())))
+          .append('\n');
+    }
+    if (s.frameComplete() && !s.blocks().isEmpty()) {
+      blocks(out, s, grid);
+    } else if (!s.rigid() && grid.support() == Support.PINNED_BASE) {
+      out.append("  Joints that can move: ")
+          .append(list(s.movingJoints(), Wording::joint))
+          .append('\n');
+    }
+    if (!s.freedoms().isEmpty() && (frame.shown() || !s.frameComplete()
+        || s.freedoms().stream().anyMatch(f -> f.kind() != FreedomKind.SWAY))) {
+      out.append("  Freedoms, by kind:\n");
+      int shown = 0;
+      for (Freedom f : s.freedoms()) {
+        if (shown++ == LIST_LIMIT) {
+          out.append("    ... and ").append(s.freedoms().size() - LIST_LIMIT).append(" more (see --format json)\n");
+          break;
+        }
+        wrap(out, "- " + Wording.kind(f.kind()) + ": " + Wording.freedom(f, frame.terms(), absent), "    ");
+      }
+    }
   }
 
   /** The verdict in plain words. */
   static String verdict(StateAnalysis s) {
     if (s.rigid()) {
       return "holds its shape.";
+    }
+    int restraint = s.freedomsOf(FreedomKind.LOST_RESTRAINT);
+    if (s.degreesOfFreedom() > 0 && restraint == s.degreesOfFreedom()) {
+      return "no part sways, but "
+          + Wording.plural(restraint, "joint has", "joints have")
+          + " lost sideways restraint: an engineer checks the members there before loading.";
     }
     if (s.degreesOfFreedom() > 0) {
       return "has lost rigidity: "
@@ -404,10 +456,11 @@ public final class VerdictText {
   // ---------------------------------------------------------------- repair
 
   private static void repair(
-      StringBuilder out, PlaneAnalysis analysis, PlaneDesign design, Optional<AsBuiltPlane> asBuilt) {
+      StringBuilder out, PlaneAnalysis analysis, PlaneDesign design, Optional<AsBuiltPlane> asBuilt,
+      Terms terms) {
     RepairPlan plan = analysis.repair();
     StateAnalysis s = analysis.analysedState();
-    if (s.rigid() && plan.braces().isEmpty()) {
+    if (s.rigid() && plan.braces().isEmpty() && plan.members().isEmpty()) {
       out.append("Repair: none needed for rigidity: the ")
           .append(asBuilt.isPresent() ? "as-built state" : "design")
           .append(" holds its shape.\n");
@@ -419,9 +472,12 @@ public final class VerdictText {
           tension
               ? " (an irreducible set: with tension-only members it is not proven to be the least)"
               : " (the least number; design positions first)";
+      String what = plan.members().isEmpty()
+          ? (plan.minimum() == 1 ? "this brace" : "these " + plan.minimum() + " braces")
+          : plan.minimum() == 1 ? "this frame member" : "these " + plan.minimum() + " members";
       wrap(out,
           "Repair: fit "
-              + (plan.minimum() == 1 ? "this brace" : "these " + plan.minimum() + " braces")
+              + what
               + " to make the plane hold its shape"
               + set
               + ":",
@@ -448,6 +504,42 @@ public final class VerdictText {
         out.append(" - NOT IN THE DESIGN: a deviation that needs engineering approval before it is fitted\n");
       }
     }
+    for (RepairMember m : plan.members()) {
+      out.append("  ").append(Wording.frameMember(m.member(), terms))
+          .append(m.inDesign() ? ": refit (a design member)\n"
+              : ": NOT IN THE DESIGN: a deviation that needs engineering approval before it is fitted\n");
+    }
+  }
+
+  private static void restoreFrame(StringBuilder out, List<RestoreFrameItem> items, Terms terms) {
+    if (items.isEmpty()) {
+      out.append("Restore the frame to design: no design frame member is missing.\n");
+      return;
+    }
+    out.append("Restore the frame to design (design frame members missing, ineffective or not inspected"
+        + " as built):\n");
+    int shown = 0;
+    for (RestoreFrameItem r : items) {
+      if (shown++ == LIST_LIMIT) {
+        out.append("  ... and ").append(items.size() - LIST_LIMIT).append(" more (see --format json)\n");
+        break;
+      }
+      out.append("  ").append(Wording.frameMember(r.member(), terms))
+          .append(r.neededForRigidity() ? " - needed for rigidity\n" : " - restores redundancy only\n");
+    }
+  }
+
+  private static void frameUninspected(
+      StringBuilder out, AsBuiltAnalysis a, Optional<AsBuiltPlane> plane, Terms terms) {
+    if (a.unknownFrameMembers() == 0) {
+      out.append("  Frame members not inspected: none.\n");
+      return;
+    }
+    List<FrameRef> unknown = plane.map(p -> List.copyOf(new TreeSet<>(p.unknownFrame()))).orElse(List.of());
+    wrap(out, "Frame members not inspected: "
+        + Wording.plural(a.unknownFrameMembers(), "member", "members")
+        + (unknown.isEmpty() ? "" : " (" + list(unknown, f -> Wording.frameMember(f, terms)) + ")")
+        + ", counted as missing.", "  ");
   }
 
   private static boolean anyTension(PlaneDesign design, Optional<AsBuiltPlane> asBuilt, RepairPlan plan) {
@@ -479,7 +571,7 @@ public final class VerdictText {
 
   // ---------------------------------------------------------------- helpers
 
-  private static <T> String list(List<T> items, Function<T, String> show) {
+  static <T> String list(List<T> items, Function<T, String> show) {
     if (items.isEmpty()) {
       return "none";
     }
@@ -491,12 +583,12 @@ public final class VerdictText {
     return String.join(", ", parts) + more;
   }
 
-  private static String pad(String s, int width) {
+  static String pad(String s, int width) {
     return s.length() >= width ? s : s + " ".repeat(width - s.length());
   }
 
   /** Appends {@code text} wrapped at {@value #WRAP} columns, each line starting with {@code indent}. */
-  private static void wrap(StringBuilder out, String text, String indent) {
+  static void wrap(StringBuilder out, String text, String indent) {
     StringBuilder line = new StringBuilder(indent);
     for (String word : text.split(" ")) {
       if (line.length() > indent.length() && line.length() + 1 + word.length() > WRAP) {

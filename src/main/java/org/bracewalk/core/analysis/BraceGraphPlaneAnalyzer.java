@@ -101,13 +101,13 @@ final class BraceGraphPlaneAnalyzer implements PlaneAnalyzer {
     return new PlaneAnalysis(grid, designState, Optional.of(built), repair);
   }
 
-  private static boolean isRigid(BraceGraph g) {
+  static boolean isRigid(BraceGraph g) {
     return g.hasTension()
         ? ContractedStrongComponents.of(g).count() == 1
         : UnionFindBlocks.of(g, false).count() == 1;
   }
 
-  private static StateAnalysis analyse(BraceGraph g) {
+  static StateAnalysis analyse(BraceGraph g) {
     UnionFindBlocks uf = UnionFindBlocks.of(g, false);
     int dof = uf.count() - 1;
     boolean rigid = dof == 0 && (!g.hasTension() || ContractedStrongComponents.of(g).count() == 1);

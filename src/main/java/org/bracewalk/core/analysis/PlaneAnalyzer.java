@@ -38,6 +38,6 @@ public interface PlaneAnalyzer {
 
   /** The engine Bracewalk uses. */
   static PlaneAnalyzer standard() {
-    return new BraceGraphPlaneAnalyzer();
+    return new FramePlaneAnalyzer();
   }
 }

@@ -14,6 +14,7 @@ import net.jqwik.api.constraints.IntRange;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
@@ -50,6 +51,17 @@ class PanelMapWriterTest {
   }
 
   @Test
+  void writesFrameLinesAfterTheGridInScaffoldWordsLedgersFirst() {
+    PlaneGrid grid = PlaneGrid.uniform(1, 2, Support.PINNED_BASE);
+    PlaneDesign design = new PlaneDesign(grid, Map.of(), Set.of(),
+        Set.of(FrameRef.standard(1, 2), FrameRef.ledger(1, 2)));
+    assertThat(writer.write(design)).endsWith(". .\nledger 1 2 none\nstandard 1 2 none\n");
+    AsBuiltPlane built = new AsBuiltPlane(grid, Map.of(), Set.of(),
+        Set.of(FrameRef.standard(1, 0)), Set.of(FrameRef.ledger(0, 1)));
+    assertThat(writer.write(built)).endsWith(". .\nledger 0 1 ?\nstandard 1 0 missing\n");
+  }
+
+  @Test
   void writesUninspectedPanelsOfAnAsBuiltStateAsQuestionMarks() {
     PlaneGrid grid = PlaneGrid.uniform(1, 3, Support.PINNED_BASE);
     AsBuiltPlane built =
@@ -75,7 +87,7 @@ class PanelMapWriterTest {
         openings.add(p);
       }
     }
-    PlaneDesign design = new PlaneDesign(grid, braces, openings);
+    PlaneDesign design = new PlaneDesign(grid, braces, openings, randomFrame(grid, random));
 
     String text = writer.write(design, "seed " + seed);
     PanelMap map = parser.parse("round-trip.txt", text, MapKind.DESIGN);
@@ -100,7 +112,10 @@ class PanelMapWriterTest {
         unknown.add(p);
       }
     }
-    AsBuiltPlane built = new AsBuiltPlane(grid, members, unknown);
+    Set<FrameRef> absent = randomFrame(grid, random);
+    Set<FrameRef> unknownFrame = randomFrame(grid, random);
+    unknownFrame.removeAll(absent);
+    AsBuiltPlane built = new AsBuiltPlane(grid, members, unknown, absent, unknownFrame);
 
     PanelMap map = parser.parse("round-trip.txt", writer.write(built), MapKind.AS_BUILT);
 
@@ -118,6 +133,26 @@ class PanelMapWriterTest {
     }
     Support support = random.nextBoolean() ? Support.FREE : Support.PINNED_BASE;
     return new PlaneGrid(lifts, bays, widths, heights, support);
+  }
+
+  /** About one frame member in five, ledgers and standards, the plane's edges included. */
+  private static Set<FrameRef> randomFrame(PlaneGrid grid, java.util.Random random) {
+    Set<FrameRef> out = new HashSet<>();
+    for (int level = 0; level <= grid.lifts(); level++) {
+      for (int bay = 1; bay <= grid.bays(); bay++) {
+        if (random.nextInt(5) == 0) {
+          out.add(FrameRef.ledger(level, bay));
+        }
+      }
+    }
+    for (int lift = 1; lift <= grid.lifts(); lift++) {
+      for (int line = 0; line <= grid.bays(); line++) {
+        if (random.nextInt(5) == 0) {
+          out.add(FrameRef.standard(lift, line));
+        }
+      }
+    }
+    return out;
   }
 
   private static Brace randomBrace(java.util.Random random) {

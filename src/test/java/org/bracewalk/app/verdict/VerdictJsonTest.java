@@ -9,14 +9,20 @@ import java.util.List;
 import java.util.Optional;
 import org.bracewalk.core.analysis.AsBuiltAnalysis;
 import org.bracewalk.core.analysis.Block;
+import org.bracewalk.core.analysis.Freedom;
+import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.PlacedBrace;
 import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.analysis.RepairBrace;
+import org.bracewalk.core.analysis.RepairMember;
 import org.bracewalk.core.analysis.RepairPlan;
+import org.bracewalk.core.analysis.RestoreFrameItem;
 import org.bracewalk.core.analysis.RestoreItem;
 import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.Support;
@@ -43,7 +49,9 @@ class VerdictJsonTest {
     ObjectNode o = json.state(freeRigid(true));
 
     assertThat(o.properties().stream().map(e -> e.getKey()).toList())
-        .containsExactly("rigid", "degreesOfFreedom", "oneWayOnly", "lossTolerance", "criticalBraces", "blocks");
+        .containsExactly("rigid", "degreesOfFreedom", "oneWayOnly", "lossTolerance", "criticalBraces", "blocks",
+            // check-contract.md "Frame members", then the added freedoms
+            "criticalMembers", "movingJoints", "freedoms");
   }
 
   @Test
@@ -82,7 +90,49 @@ class VerdictJsonTest {
             "{\"possible\":true,\"minimum\":1,"
                 + "\"braces\":[{\"lift\":2,\"bay\":1,\"diagonal\":\"/\",\"kind\":\"rigid\",\"inDesign\":false}],"
                 + "\"restoreToDesign\":[{\"lift\":3,\"bay\":2,\"diagonal\":\"X\",\"kind\":\"tension-only\","
-                + "\"neededForRigidity\":false}]}");
+                + "\"neededForRigidity\":false}],\"members\":[],\"restoreFrame\":[]}");
+  }
+
+  /** check-contract.md, "Frame members": the spelling of members, joints and the repair's fields. */
+  @Test
+  void frameMembersJointsAndFreedomsHaveTheContractSpelling() {
+    StateAnalysis s = new StateAnalysis(false, 3, false, -1, true, List.of(PanelRef.of(1, 1)), List.of(),
+        List.of(FrameRef.ledger(1, 2), FrameRef.standard(2, 0)),
+        List.of(new Joint(1, 0), new Joint(2, 1)),
+        List.of(
+            new Freedom(FreedomKind.SWAY, 1, List.of(new Joint(2, 1)), List.of(), List.of()),
+            new Freedom(FreedomKind.LOST_RESTRAINT, 1, List.of(new Joint(1, 0)),
+                List.of(FrameRef.standard(1, 0), FrameRef.standard(2, 0)), List.of()),
+            new Freedom(FreedomKind.LOOSE_END, 1, List.of(new Joint(1, 3)), List.of(), List.of(PanelRef.of(1, 3)))),
+        false);
+
+    ObjectNode o = json.state(s);
+
+    assertThat(o.get("criticalMembers").toString()).isEqualTo(
+        "[{\"member\":\"ledger\",\"level\":1,\"bay\":2},{\"member\":\"standard\",\"lift\":2,\"line\":0}]");
+    assertThat(o.get("movingJoints").toString()).isEqualTo("[{\"level\":1,\"line\":0},{\"level\":2,\"line\":1}]");
+    assertThat(o.get("blocks").toString()).isEqualTo("[]");
+    assertThat(o.get("freedoms").toString()).isEqualTo("["
+        + "{\"kind\":\"sway\",\"count\":1,\"joints\":[{\"level\":2,\"line\":1}],\"members\":[],\"diagonals\":[]},"
+        + "{\"kind\":\"lost-restraint\",\"count\":1,\"joints\":[{\"level\":1,\"line\":0}],"
+        + "\"members\":[{\"member\":\"standard\",\"lift\":1,\"line\":0},{\"member\":\"standard\",\"lift\":2,\"line\":0}],"
+        + "\"diagonals\":[]},"
+        + "{\"kind\":\"loose-end\",\"count\":1,\"joints\":[{\"level\":1,\"line\":3}],\"members\":[],"
+        + "\"diagonals\":[{\"lift\":1,\"bay\":3}]}]");
+
+    RepairPlan plan = new RepairPlan(true, List.of(new RepairBrace(PanelRef.of(2, 1), Brace.rigid(Diagonal.RISING), true)),
+        List.of(), List.of(new RepairMember(FrameRef.ledger(1, 2), true)),
+        List.of(new RestoreFrameItem(FrameRef.ledger(1, 2), true), new RestoreFrameItem(FrameRef.standard(1, 1), false)));
+    ObjectNode r = json.repair(plan);
+    // minimum counts braces and members together
+    assertThat(r.get("minimum").asInt()).isEqualTo(2);
+    assertThat(r.get("members").toString()).isEqualTo("[{\"member\":\"ledger\",\"level\":1,\"bay\":2,\"inDesign\":true}]");
+    assertThat(r.get("restoreFrame").toString()).isEqualTo(
+        "[{\"member\":\"ledger\",\"level\":1,\"bay\":2,\"neededForRigidity\":true},"
+            + "{\"member\":\"standard\",\"lift\":1,\"line\":1,\"neededForRigidity\":false}]");
+
+    AsBuiltAnalysis a = new AsBuiltAnalysis(s, 0, false, List.of(), 4);
+    assertThat(json.asBuilt(a).get("unknownFrameMembers").asInt()).isEqualTo(4);
   }
 
   @Test

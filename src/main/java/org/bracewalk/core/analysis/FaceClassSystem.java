@@ -1,0 +1,248 @@
+package org.bracewalk.core.analysis;
+
+import java.util.Arrays;
+
+/**
+ * The first-order equations of a {@link FrameFramework} in angular-velocity form, reduced by
+ * union-find. Give every member an angular velocity w; joint velocities exist (up to translation)
+ * iff around every cycle the rotated member vectors sum to zero, and the bounded faces of the plane
+ * graph generate the cycles. So:
+ *
+ * <ul>
+ *   <li>an intact face (a panel with its four sides there and no diagonal, or a triangle of a
+ *       braced panel with its three sides there) forces opposite sides, or all three sides, to turn
+ *       together: union-find over members ("classes"; where the frame is complete this is the brace
+ *       graph);
+ *   <li>a member that is not there joins the faces on its two sides (union-find over faces); a
+ *       group of faces joined to the outside gives no equation, every other group that is not a
+ *       single intact face gives two linear rows over the classes (the sum of its faces' rows);
+ *   <li>fixed members (the pinned base's level-0 ledgers, and whatever the caller fixes) have
+ *       angular velocity 0: their classes drop out.
+ * </ul>
+ *
+ * The motions of the framework are then the null space of the rows over the free classes plus a
+ * translation per connected part that nothing holds. The union-find edges are kept so that a
+ * self-stress can be computed from them ({@link RandomSelfStress}).
+ */
+final class FaceClassSystem {
+  final FrameFramework fw;
+  /** Union-find over members plus one fixed node (id memberCount). */
+  private final int[] mParent;
+  final int fixedNode;
+  /** Union-find over faces plus the outside (id faceCount). */
+  private final int[] fParent;
+  private final int[] fSize;
+  final int outerNode;
+
+  /** Compact class of each member: -1 when not there or fixed. */
+  final int[] classOf;
+  int classCount;
+  /** Compact group of each face: -1 joined to the outside, -2 intact face, else its group. */
+  final int[] groupOf;
+  int groupCount;
+  /** Per group: x row then y row, sparse over classes. */
+  int[][] rowCols;
+  long[][] rowVals;
+
+  // union-find edges among members (for self-stresses): u, v, face, slot (0 or 1), tree?
+  int edgeCount;
+  int[] eu;
+  int[] ev;
+  int[] eface;
+  byte[] eslot;
+  boolean[] tree;
+
+  /**
+   * @param fixed members whose angular velocity is fixed at 0 (beside the pinned base's ledgers)
+   * @param joins pairs of members forced to turn together (flat array of pairs)
+   */
+  FaceClassSystem(FrameFramework fw, int[] fixed, int[] joins) {
+    this.fw = fw;
+    int m = fw.memberCount;
+    fixedNode = m;
+    mParent = new int[m + 1];
+    for (int i = 0; i <= m; i++) {
+      mParent[i] = i;
+    }
+    outerNode = fw.faceCount;
+    fParent = new int[fw.faceCount + 1];
+    fSize = new int[fw.faceCount + 1];
+    for (int i = 0; i <= fw.faceCount; i++) {
+      fParent[i] = i;
+      fSize[i] = 1;
+    }
+    // faces joined across members that are not there
+    for (int e = 0; e < m; e++) {
+      if (!fw.present[e]) {
+        unionFaces(faceNode(fw.faceL[e]), faceNode(fw.faceR[e]));
+      }
+    }
+    groupOf = new int[fw.faceCount];
+    int[] groupIndex = new int[fw.faceCount + 1];
+    Arrays.fill(groupIndex, -3);
+    for (int f = 0; f < fw.faceCount; f++) {
+      int r = findFace(f);
+      if (r == findFace(outerNode)) {
+        groupOf[f] = -1;
+      } else if (fSize[r] == 1) {
+        groupOf[f] = -2;
+      } else {
+        if (groupIndex[r] == -3) {
+          groupIndex[r] = groupCount++;
+        }
+        groupOf[f] = groupIndex[r];
+      }
+    }
+    // member classes: fixed members first (tree edges to the fixed node), then intact faces
+    int cap = 2 * fw.faceCount + m + 1;
+    eu = new int[cap];
+    ev = new int[cap];
+    eface = new int[cap];
+    eslot = new byte[cap];
+    tree = new boolean[cap];
+    for (int e = 0; e < m; e++) {
+      if (fw.ground[e]) {
+        edge(fixedNode, e, -1, (byte) 0);
+      }
+    }
+    for (int e : fixed) {
+      edge(fixedNode, e, -1, (byte) 0);
+    }
+    for (int f = 0; f < fw.faceCount; f++) {
+      if (groupOf[f] == -2) {
+        int a = fw.faceMembers[4 * f];
+        int b = fw.faceMembers[4 * f + 1];
+        int c = fw.faceMembers[4 * f + 2];
+        int d = fw.faceMembers[4 * f + 3];
+        edge(a, c, f, (byte) 0);
+        edge(b, d < 0 ? c : d, f, (byte) 1);
+      }
+    }
+    for (int i = 0; i + 1 < joins.length; i += 2) {
+      edge(joins[i], joins[i + 1], -1, (byte) 2);
+    }
+    classOf = new int[m];
+    int[] classIndex = new int[m + 1];
+    Arrays.fill(classIndex, -1);
+    int fixedRoot = findMember(fixedNode);
+    for (int e = 0; e < m; e++) {
+      int r = findMember(e);
+      if (!fw.present[e] || r == fixedRoot) {
+        classOf[e] = -1;
+        continue;
+      }
+      if (classIndex[r] < 0) {
+        classIndex[r] = classCount++;
+      }
+      classOf[e] = classIndex[r];
+    }
+    buildRows();
+  }
+
+  private int faceNode(int f) {
+    return f == FrameFramework.OUTER ? outerNode : f;
+  }
+
+  private void edge(int u, int v, int face, byte slot) {
+    int k = edgeCount++;
+    eu[k] = u;
+    ev[k] = v;
+    eface[k] = face;
+    eslot[k] = slot;
+    tree[k] = unionMembers(u, v);
+  }
+
+  int findMember(int x) {
+    while (mParent[x] != x) {
+      mParent[x] = mParent[mParent[x]];
+      x = mParent[x];
+    }
+    return x;
+  }
+
+  private boolean unionMembers(int a, int b) {
+    int ra = findMember(a);
+    int rb = findMember(b);
+    if (ra == rb) {
+      return false;
+    }
+    // keep the fixed node a root so that its class is easy to find
+    if (rb == fixedNode) {
+      mParent[ra] = rb;
+    } else {
+      mParent[rb] = ra;
+    }
+    return true;
+  }
+
+  private int findFace(int x) {
+    while (fParent[x] != x) {
+      fParent[x] = fParent[fParent[x]];
+      x = fParent[x];
+    }
+    return x;
+  }
+
+  private void unionFaces(int a, int b) {
+    int ra = findFace(a);
+    int rb = findFace(b);
+    if (ra == rb) {
+      return;
+    }
+    if (fSize[ra] < fSize[rb]) {
+      int t = ra;
+      ra = rb;
+      rb = t;
+    }
+    fParent[rb] = ra;
+    fSize[ra] += fSize[rb];
+  }
+
+  private void buildRows() {
+    // entries (group, class) -> coefficient, accumulated in per-group hash maps
+    java.util.List<java.util.Map<Integer, long[]>> rows = new java.util.ArrayList<>();
+    for (int g = 0; g < groupCount; g++) {
+      rows.add(new java.util.HashMap<>());
+    }
+    FrameFramework f = fw;
+    for (int e = 0; e < f.memberCount; e++) {
+      int c = classOf[e];
+      if (c < 0) {
+        continue;
+      }
+      for (int s = 0; s < 2; s++) {
+        int face = s == 0 ? f.faceL[e] : f.faceR[e];
+        if (face == FrameFramework.OUTER) {
+          continue;
+        }
+        int g = groupOf[face];
+        if (g < 0) {
+          continue;
+        }
+        long sign = s == 0 ? 1 : -1;
+        long[] acc = rows.get(g).computeIfAbsent(c, k -> new long[2]);
+        acc[0] += sign * f.dx[e];
+        acc[1] += sign * f.dy[e];
+      }
+    }
+    rowCols = new int[2 * groupCount][];
+    rowVals = new long[2 * groupCount][];
+    for (int g = 0; g < groupCount; g++) {
+      java.util.Map<Integer, long[]> r = rows.get(g);
+      int[] cols = new int[r.size()];
+      long[] xv = new long[r.size()];
+      long[] yv = new long[r.size()];
+      int k = 0;
+      for (java.util.Map.Entry<Integer, long[]> en : new java.util.TreeMap<>(r).entrySet()) {
+        cols[k] = en.getKey();
+        xv[k] = en.getValue()[0];
+        yv[k] = en.getValue()[1];
+        k++;
+      }
+      rowCols[2 * g] = cols;
+      rowVals[2 * g] = xv;
+      rowCols[2 * g + 1] = cols;
+      rowVals[2 * g + 1] = yv;
+    }
+  }
+}

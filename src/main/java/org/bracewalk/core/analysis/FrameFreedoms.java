@@ -1,0 +1,782 @@
+package org.bracewalk.core.analysis;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.SplittableRandom;
+import java.util.TreeSet;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
+import org.bracewalk.core.model.PanelRef;
+
+/**
+ * The degrees of freedom of a {@link FrameFramework}, told apart by kind, with the joints that move.
+ *
+ * <p>Exact reduction first (each step removes exactly one freedom, so the counts add up):
+ *
+ * <ol>
+ *   <li>a joint held by one member, whose other end stays held by at least two (or is on a pinned
+ *       base), is a loose end: strip it (one freedom: the joint swings about the other end);
+ *   <li>a joint with exactly two members in one straight line has lost its sideways restraint:
+ *       replace the two by one member end to end (one freedom: the joint moves across the line);
+ * </ol>
+ *
+ * repeated until neither applies. What is left sways: its freedoms come from the face equations of
+ * {@link FaceClassSystem} (the stripped members fixed, the merged pairs turning together), split
+ * into independent parts (classes linked by a row or by a part that nothing holds), each part's
+ * count its columns less its rank plus 2 per part that nothing holds. Ranks are taken modulo p; a
+ * deficiency on a part of at most {@value #EXACT_LIMIT} columns is confirmed by {@link ExactRank}
+ * (larger parts keep the modular rank, which can only overstate the freedoms: the cautious side).
+ * On a free plane the part holding the first joint is the reference (its rotation and translation
+ * are the plane's rigid motions).
+ *
+ * <p>The joints that move with a part come from one random motion of that part (mod p, joint
+ * velocities propagated along the members): a joint that moves in some motion of the part moves in
+ * a random one with probability at least 1 - 2/p.
+ */
+final class FrameFreedoms {
+  static final int EXACT_LIMIT = 400;
+
+  /** A swaying part: its classes, rows and the components that nothing holds. */
+  record Part(Freedom freedom, List<Integer> classes, List<Integer> rows, List<Integer> comps) {}
+
+  final FrameFramework fw;
+  final int dof;
+  final List<Freedom> freedoms;
+  final List<Joint> movingJoints;
+  final boolean exact;
+  // kept for motions
+  private final FaceClassSystem parts;
+  private final int[][] adj;
+  private final int[] compOf;
+  private final int components;
+  private final int anchorComp;
+  private final int anchorJoint;
+  private final List<Part> partList;
+  private final List<int[]> ownBars;
+  private final List<Freedom> own;
+
+  private FrameFreedoms(Builder b) {
+    this.fw = b.fw;
+    this.dof = b.dof;
+    this.freedoms = b.freedoms;
+    this.movingJoints = b.moving;
+    this.exact = b.exact;
+    this.parts = b.parts;
+    this.adj = b.adj;
+    this.compOf = b.compOf;
+    this.components = b.components;
+    this.anchorComp = b.anchorComp;
+    this.anchorJoint = b.anchorJoint;
+    this.partList = b.partList;
+    this.ownBars = b.ownBars;
+    this.own = b.own;
+  }
+
+  static FrameFreedoms of(FrameFramework fw, long seed) {
+    Builder b = new Builder(fw, new SplittableRandom(seed));
+    b.run();
+    return new FrameFreedoms(b);
+  }
+
+  /**
+   * A first-order motion showing {@code f} (one of {@link #freedoms}): for a swaying part an exact
+   * null vector of its equations (or, when its classes are held, a translation of a piece that
+   * nothing holds); for a loose end the member turning about its other end; for a joint without
+   * sideways restraint the joint moving across the line. Rounded to doubles only at the end, the
+   * largest velocity scaled to 1.
+   */
+  JointMotion motion(Freedom f) {
+    int i = freedoms.indexOf(f);
+    if (i < 0) {
+      throw new IllegalArgumentException("not a freedom of this state: " + f);
+    }
+    double[] w = new double[fw.memberCount];
+    double[] tx = new double[Math.max(1, components)];
+    double[] ty = new double[Math.max(1, components)];
+    if (i < partList.size()) {
+      Part part = partList.get(i);
+      Map<Integer, Integer> local = new HashMap<>();
+      for (int c : part.classes()) {
+        local.put(c, local.size());
+      }
+      long[][] dense = new long[part.rows().size()][part.classes().size()];
+      for (int r = 0; r < dense.length; r++) {
+        int row = part.rows().get(r);
+        for (int k = 0; k < parts.rowCols[row].length; k++) {
+          dense[r][local.get(parts.rowCols[row][k])] = parts.rowVals[row][k];
+        }
+      }
+      java.math.BigInteger[] x =
+          part.classes().isEmpty() ? null : ExactRank.nullVector(dense, part.classes().size());
+      if (x != null) {
+        int bits = 0;
+        for (java.math.BigInteger v : x) {
+          bits = Math.max(bits, v.bitLength());
+        }
+        int shift = Math.max(0, bits - 60);
+        for (int e = 0; e < fw.memberCount; e++) {
+          int c = parts.classOf[e];
+          Integer l = c >= 0 ? local.get(c) : null;
+          if (l != null) {
+            w[e] = x[l].shiftRight(shift).doubleValue();
+          }
+        }
+      } else {
+        tx[part.comps().get(0)] = 1;
+      }
+    } else {
+      int[] data = ownBars.get(i - partList.size());
+      int n1 = data[5];
+      if (f.kind() == FreedomKind.LOOSE_END) {
+        for (int k = 0; k < n1; k++) {
+          w[data[6 + k]] = 1;
+        }
+      } else {
+        int j = data[0];
+        int a = data[1];
+        int c = data[3];
+        double l1 = Math.abs(fw.x(j) - fw.x(a)) + Math.abs(fw.y(j) - fw.y(a));
+        double l2 = Math.abs(fw.x(c) - fw.x(j)) + Math.abs(fw.y(c) - fw.y(j));
+        for (int k = 6; k < data.length; k++) {
+          w[data[k]] = k < 6 + n1 ? l2 : -l1;
+        }
+      }
+    }
+    double[][] v = propagateDouble(w, tx, ty);
+    double max = 0;
+    for (int j = 0; j < fw.gridJoints; j++) {
+      max = Math.max(max, Math.hypot(v[0][j], v[1][j]));
+    }
+    double[] ox = new double[fw.gridJoints];
+    double[] oy = new double[fw.gridJoints];
+    for (int j = 0; j < fw.gridJoints; j++) {
+      ox[j] = max == 0 ? 0 : v[0][j] / max;
+      oy[j] = max == 0 ? 0 : v[1][j] / max;
+    }
+    return new JointMotion(fw.lifts, fw.bays, ox, oy);
+  }
+
+  private double[][] propagateDouble(double[] w, double[] tx, double[] ty) {
+    int n = fw.jointCount;
+    double[] vx = new double[n];
+    double[] vy = new double[n];
+    boolean[] seen = new boolean[n];
+    int[] queue = new int[n];
+    int[] start = adj[0];
+    int[] list = adj[1];
+    int len = 0;
+    if (fw.pinned) {
+      for (int line = 0; line <= fw.bays; line++) {
+        seen[line] = true;
+        queue[len++] = line;
+      }
+    } else if (anchorJoint >= 0) {
+      seen[anchorJoint] = true;
+      queue[len++] = anchorJoint;
+    }
+    int head = 0;
+    for (int root = -1; root < n; root++) {
+      if (root >= 0) {
+        if (seen[root] || start[root] == start[root + 1]) {
+          continue;
+        }
+        seen[root] = true;
+        int c = compOf[root];
+        if (c != anchorComp) {
+          vx[root] = tx[c];
+          vy[root] = ty[c];
+        }
+        queue[len++] = root;
+      }
+      while (head < len) {
+        int u = queue[head++];
+        for (int i = start[u]; i < start[u + 1]; i++) {
+          int e = list[i];
+          int v = fw.ja[e] == u ? fw.jb[e] : fw.ja[e];
+          if (seen[v]) {
+            continue;
+          }
+          seen[v] = true;
+          double jx = -w[e] * fw.dy[e];
+          double jy = w[e] * fw.dx[e];
+          double sign = fw.ja[e] == u ? 1 : -1;
+          vx[v] = vx[u] + sign * jx;
+          vy[v] = vy[u] + sign * jy;
+          queue[len++] = v;
+        }
+      }
+    }
+    return new double[][] {vx, vy};
+  }
+
+  /** Joint adjacency over the members that are there (CSR). */
+  static int[][] adjacency(FrameFramework fw) {
+    int n = fw.jointCount;
+    int[] start = new int[n + 1];
+    for (int e = 0; e < fw.memberCount; e++) {
+      if (fw.present[e]) {
+        start[fw.ja[e] + 1]++;
+        start[fw.jb[e] + 1]++;
+      }
+    }
+    for (int i = 0; i < n; i++) {
+      start[i + 1] += start[i];
+    }
+    int[] list = new int[start[n]];
+    int[] fill = Arrays.copyOf(start, n);
+    for (int e = 0; e < fw.memberCount; e++) {
+      if (fw.present[e]) {
+        list[fill[fw.ja[e]]++] = e;
+        list[fill[fw.jb[e]]++] = e;
+      }
+    }
+    return new int[][] {start, list};
+  }
+
+  /**
+   * Joint velocities mod p of the motion with angular velocity {@code w[e]} per member, joints of
+   * the anchored part at rest at the anchors, each other part's first joint moving by the given
+   * translation ({@code tx}, {@code ty} per component, may be null for 0).
+   */
+  static long[][] propagate(
+      FrameFramework fw, int[][] adj, long[] w, int[] compOf, int anchorComp, int anchorJoint,
+      long[] tx, long[] ty) {
+    int n = fw.jointCount;
+    long[] vx = new long[n];
+    long[] vy = new long[n];
+    boolean[] seen = new boolean[n];
+    int[] queue = new int[n];
+    int[] start = adj[0];
+    int[] list = adj[1];
+    int len = 0;
+    if (fw.pinned) {
+      for (int line = 0; line <= fw.bays; line++) {
+        seen[line] = true;
+        queue[len++] = line;
+      }
+    } else if (anchorJoint >= 0) {
+      seen[anchorJoint] = true;
+      queue[len++] = anchorJoint;
+    }
+    int head = 0;
+    for (int root = -1; root < n; root++) {
+      if (root >= 0) {
+        if (seen[root] || start[root] == start[root + 1]) {
+          continue;
+        }
+        seen[root] = true;
+        int c = compOf[root];
+        if (tx != null && c != anchorComp) {
+          vx[root] = tx[c];
+          vy[root] = ty[c];
+        }
+        queue[len++] = root;
+      }
+      while (head < len) {
+        int u = queue[head++];
+        for (int i = start[u]; i < start[u + 1]; i++) {
+          int e = list[i];
+          int v = fw.ja[e] == u ? fw.jb[e] : fw.ja[e];
+          if (seen[v]) {
+            continue;
+          }
+          seen[v] = true;
+          // v_b - v_a = w J d, J d = (-dy, dx)
+          long jx = ModularEchelon.mul(w[e], ModularEchelon.mod(-fw.dy[e]));
+          long jy = ModularEchelon.mul(w[e], ModularEchelon.mod(fw.dx[e]));
+          if (fw.ja[e] == u) {
+            vx[v] = ModularEchelon.add(vx[u], jx);
+            vy[v] = ModularEchelon.add(vy[u], jy);
+          } else {
+            vx[v] = ModularEchelon.sub(vx[u], jx);
+            vy[v] = ModularEchelon.sub(vy[u], jy);
+          }
+          queue[len++] = v;
+        }
+      }
+    }
+    return new long[][] {vx, vy};
+  }
+
+  /** Components of the joints through the members that are there (pinned: the base is one). */
+  static int[] components(FrameFramework fw, int[][] adj) {
+    int n = fw.jointCount;
+    int[] comp = new int[n];
+    Arrays.fill(comp, -1);
+    int[] queue = new int[n];
+    int count = 0;
+    for (int root = 0; root < n; root++) {
+      if (comp[root] >= 0 || (adj[0][root] == adj[0][root + 1] && !(fw.pinned && root <= fw.bays))) {
+        continue;
+      }
+      int len = 0;
+      int head = 0;
+      if (fw.pinned && root <= fw.bays) {
+        for (int line = 0; line <= fw.bays; line++) {
+          comp[line] = count;
+          queue[len++] = line;
+        }
+      } else {
+        comp[root] = count;
+        queue[len++] = root;
+      }
+      while (head < len) {
+        int u = queue[head++];
+        for (int i = adj[0][u]; i < adj[0][u + 1]; i++) {
+          int e = adj[1][i];
+          int v = fw.ja[e] == u ? fw.jb[e] : fw.ja[e];
+          if (comp[v] < 0) {
+            comp[v] = count;
+            queue[len++] = v;
+          }
+        }
+      }
+      count++;
+    }
+    return comp;
+  }
+
+  private static final class Builder {
+    final FrameFramework fw;
+    final SplittableRandom rnd;
+    int[][] adj;
+    int[] compOf;
+    int anchorComp = -1;
+    int anchorJoint = -1;
+    int dof;
+    boolean exact = true;
+    List<Freedom> freedoms = new ArrayList<>();
+    List<Part> partList = new ArrayList<>();
+    List<Joint> moving = new ArrayList<>();
+    FaceClassSystem parts;
+    int[] partOfClass;
+    int components;
+    List<int[]> ownBars = new ArrayList<>();
+    Map<Integer, int[]> constituents = new HashMap<>();
+
+    // bars: real members first, virtual (end to end) after
+    int barCount;
+    int[] barA;
+    int[] barB;
+    int[] endA; // real member at the A end
+    int[] endB;
+    int[] rep; // a real member of the bar (its class)
+    boolean[] alive;
+    int[] deg;
+    Map<Integer, List<Integer>> virtualAt = new HashMap<>();
+    boolean[] removed;
+    List<Integer> fixed = new ArrayList<>();
+    List<Integer> joins = new ArrayList<>();
+    List<Freedom> own = new ArrayList<>();
+
+    Builder(FrameFramework fw, SplittableRandom rnd) {
+      this.fw = fw;
+      this.rnd = rnd;
+    }
+
+    boolean anchored(int j) {
+      return fw.pinned && j <= fw.bays;
+    }
+
+    void run() {
+      adj = adjacency(fw);
+      compOf = components(fw, adj);
+      reduce();
+      for (int c : compOf) {
+        components = Math.max(components, c + 1);
+      }
+      if (fw.pinned) {
+        anchorComp = compOf[0];
+      } else {
+        for (int j = 0; j < fw.jointCount && anchorJoint < 0; j++) {
+          if (!removed[j] && compOf[j] >= 0) {
+            for (int bar : barsAt(j)) {
+              anchorJoint = j;
+              fixed.add(rep[bar]);
+              break;
+            }
+          }
+        }
+        anchorComp = anchorJoint < 0 ? -1 : compOf[anchorJoint];
+      }
+      if (!fw.pinned && anchorJoint < 0) {
+        // no member at all: nothing to move
+        parts = new FaceClassSystem(fw, toArray(fixed), toArray(joins));
+        partOfClass = new int[0];
+        dof = 0;
+        freedoms = List.of();
+        own = new ArrayList<>();
+        ownBars = new ArrayList<>();
+        return;
+      }
+      parts = new FaceClassSystem(fw, toArray(fixed), toArray(joins));
+      splitParts(components);
+      int total = 0;
+      TreeSet<Joint> movingSet = new TreeSet<>();
+      List<Freedom> sway = new ArrayList<>();
+      for (Part part : partList) {
+        Freedom f = part.freedom();
+        total += f.count();
+        sway.add(f);
+        movingSet.addAll(f.joints());
+      }
+      for (Freedom f : own) {
+        total += f.count();
+        movingSet.addAll(f.joints());
+      }
+      dof = total;
+      List<Freedom> all = new ArrayList<>(sway);
+      Integer[] idx = new Integer[own.size()];
+      for (int i = 0; i < idx.length; i++) {
+        idx[i] = i;
+      }
+      Arrays.sort(idx, (a, b) -> {
+        Freedom fa = own.get(a);
+        Freedom fb = own.get(b);
+        return fa.kind() != fb.kind()
+            ? fa.kind().compareTo(fb.kind())
+            : compareJoints(fa.joints(), fb.joints());
+      });
+      List<Freedom> ownSorted = new ArrayList<>();
+      List<int[]> barsSorted = new ArrayList<>();
+      for (int i : idx) {
+        ownSorted.add(own.get(i));
+        barsSorted.add(ownBars.get(i));
+      }
+      own = ownSorted;
+      ownBars = barsSorted;
+      all.addAll(ownSorted);
+      freedoms = all;
+      moving = fw.pinned ? new ArrayList<>(movingSet) : List.of();
+    }
+
+    private static int compareJoints(List<Joint> a, List<Joint> b) {
+      if (a.isEmpty() || b.isEmpty()) {
+        return Boolean.compare(a.isEmpty(), b.isEmpty());
+      }
+      return a.get(0).compareTo(b.get(0));
+    }
+
+    List<Integer> barsAt(int j) {
+      List<Integer> out = new ArrayList<>();
+      for (int i = adj[0][j]; i < adj[0][j + 1]; i++) {
+        int e = adj[1][i];
+        if (alive[e]) {
+          out.add(e);
+        }
+      }
+      List<Integer> v = virtualAt.get(j);
+      if (v != null) {
+        for (int bar : v) {
+          if (alive[bar]) {
+            out.add(bar);
+          }
+        }
+      }
+      return out;
+    }
+
+    void reduce() {
+      int m = fw.memberCount;
+      int cap = m + fw.jointCount + 1;
+      barA = new int[cap];
+      barB = new int[cap];
+      endA = new int[cap];
+      endB = new int[cap];
+      rep = new int[cap];
+      alive = new boolean[cap];
+      deg = new int[fw.jointCount];
+      removed = new boolean[fw.jointCount];
+      for (int e = 0; e < m; e++) {
+        barA[e] = fw.ja[e];
+        barB[e] = fw.jb[e];
+        endA[e] = e;
+        endB[e] = e;
+        rep[e] = e;
+        alive[e] = fw.present[e] && !fw.ground[e];
+        if (alive[e]) {
+          deg[fw.ja[e]]++;
+          deg[fw.jb[e]]++;
+        }
+      }
+      barCount = m;
+      int[] queue = new int[fw.jointCount];
+      boolean[] queued = new boolean[fw.jointCount];
+      int head = 0;
+      int tail = 0;
+      int n = fw.jointCount;
+      for (int j = 0; j < n; j++) {
+        if (!anchored(j) && deg[j] > 0 && deg[j] <= 2) {
+          queue[tail] = j;
+          tail = (tail + 1) % n;
+          queued[j] = true;
+        }
+      }
+      int pending = 0;
+      for (boolean q : queued) {
+        pending += q ? 1 : 0;
+      }
+      while (pending > 0) {
+        int j = queue[head];
+        head = (head + 1) % n;
+        queued[j] = false;
+        pending--;
+        if (removed[j] || anchored(j)) {
+          continue;
+        }
+        List<Integer> bars = barsAt(j);
+        int[] touched = null;
+        if (bars.size() == 1) {
+          int bar = bars.get(0);
+          int k = other(bar, j);
+          if (anchored(k) || deg[k] >= 2) {
+            alive[bar] = false;
+            deg[j]--;
+            deg[k]--;
+            removed[j] = true;
+            fixed.add(rep[bar]);
+            int member = barA[bar] == j ? endA[bar] : endB[bar];
+            addOwn(FreedomKind.LOOSE_END, j, new int[] {member}, new int[] {j, k, bar, -1, -1});
+            touched = new int[] {k};
+          }
+        } else if (bars.size() == 2) {
+          int b1 = bars.get(0);
+          int b2 = bars.get(1);
+          int a = other(b1, j);
+          int c = other(b2, j);
+          long ux = fw.x(a) - fw.x(j);
+          long uy = fw.y(a) - fw.y(j);
+          long vx = fw.x(c) - fw.x(j);
+          long vy = fw.y(c) - fw.y(j);
+          if (a != c && ux * vy - uy * vx == 0) {
+            alive[b1] = false;
+            alive[b2] = false;
+            removed[j] = true;
+            deg[j] = 0;
+            int nb = barCount++;
+            barA[nb] = a;
+            barB[nb] = c;
+            endA[nb] = barA[b1] == a ? endA[b1] : endB[b1];
+            endB[nb] = barA[b2] == c ? endA[b2] : endB[b2];
+            rep[nb] = rep[b1];
+            alive[nb] = true;
+            virtualAt.computeIfAbsent(a, x -> new ArrayList<>()).add(nb);
+            virtualAt.computeIfAbsent(c, x -> new ArrayList<>()).add(nb);
+            joins.add(rep[b1]);
+            joins.add(rep[b2]);
+            int m1 = barA[b1] == j ? endA[b1] : endB[b1];
+            int m2 = barA[b2] == j ? endA[b2] : endB[b2];
+            addOwn(FreedomKind.LOST_RESTRAINT, j, new int[] {m1, m2}, new int[] {j, a, b1, c, b2});
+            constituents.put(nb, concat(members(b1), members(b2)));
+            touched = new int[] {a, c};
+          }
+        }
+        if (touched != null) {
+          for (int k : touched) {
+            if (!anchored(k) && !removed[k] && !queued[k] && deg[k] <= 2) {
+              queue[tail] = k;
+              tail = (tail + 1) % n;
+              queued[k] = true;
+              pending++;
+            }
+          }
+        }
+      }
+    }
+
+    int other(int bar, int j) {
+      return barA[bar] == j ? barB[bar] : barA[bar];
+    }
+
+    int[] members(int bar) {
+      return bar < fw.memberCount ? new int[] {bar} : constituents.get(bar);
+    }
+
+    static int[] concat(int[] a, int[] b) {
+      int[] out = Arrays.copyOf(a, a.length + b.length);
+      System.arraycopy(b, 0, out, a.length, b.length);
+      return out;
+    }
+
+    void addOwn(FreedomKind kind, int j, int[] members, int[] bars) {
+      List<Joint> joints = fw.isGridJoint(j) ? List.of(fw.jointRef(j)) : List.of();
+      TreeSet<FrameRef> frame = new TreeSet<>();
+      TreeSet<PanelRef> diags = new TreeSet<>();
+      for (int e : members) {
+        if (fw.isFrame(e)) {
+          frame.add(fw.frameRef(e));
+        } else {
+          diags.add(fw.panelRef(fw.panel[e]));
+        }
+      }
+      Freedom f = new Freedom(kind, 1, joints, new ArrayList<>(frame), new ArrayList<>(diags));
+      own.add(f);
+      int[] withMembers = Arrays.copyOf(bars, bars.length);
+      ownBars.add(concat(withMembers, concat(new int[] {members(bars[2]).length},
+          concat(members(bars[2]), bars[4] >= 0 ? members(bars[4]) : new int[0]))));
+    }
+
+    void splitParts(int components) {
+      FaceClassSystem s = parts;
+      int classes = s.classCount;
+      // union-find over classes and components
+      int[] parent = new int[classes + components];
+      for (int i = 0; i < parent.length; i++) {
+        parent[i] = i;
+      }
+      int[] classComp = new int[classes];
+      Arrays.fill(classComp, -1);
+      for (int e = 0; e < fw.memberCount; e++) {
+        int c = s.classOf[e];
+        if (c >= 0 && classComp[c] < 0) {
+          classComp[c] = compOf[fw.ja[e]];
+        }
+      }
+      for (int c = 0; c < classes; c++) {
+        int comp = classComp[c];
+        if (comp >= 0 && comp != anchorComp) {
+          union(parent, c, classes + comp);
+        }
+      }
+      for (int r = 0; r < 2 * s.groupCount; r++) {
+        int[] cols = s.rowCols[r];
+        for (int k = 1; k < cols.length; k++) {
+          union(parent, cols[0], cols[k]);
+        }
+      }
+      // non-anchor components with no free class still form a part (translation)
+      Map<Integer, List<Integer>> classesOf = new HashMap<>();
+      Map<Integer, List<Integer>> compsOf = new HashMap<>();
+      List<Integer> roots = new ArrayList<>();
+      for (int c = 0; c < classes; c++) {
+        int r = find(parent, c);
+        if (!classesOf.containsKey(r)) {
+          classesOf.put(r, new ArrayList<>());
+          compsOf.put(r, new ArrayList<>());
+          roots.add(r);
+        }
+        classesOf.get(r).add(c);
+      }
+      boolean[] compSeen = new boolean[components];
+      for (int j = 0; j < fw.jointCount; j++) {
+        int comp = compOf[j];
+        if (comp < 0 || comp == anchorComp || compSeen[comp]) {
+          continue;
+        }
+        compSeen[comp] = true;
+        int r = find(parent, classes + comp);
+        if (!classesOf.containsKey(r)) {
+          classesOf.put(r, new ArrayList<>());
+          compsOf.put(r, new ArrayList<>());
+          roots.add(r);
+        }
+        compsOf.get(r).add(comp);
+      }
+      List<List<Integer>> rowsOf = new ArrayList<>();
+      Map<Integer, Integer> partIndex = new HashMap<>();
+      for (int i = 0; i < roots.size(); i++) {
+        partIndex.put(roots.get(i), i);
+        rowsOf.add(new ArrayList<>());
+      }
+      for (int r = 0; r < 2 * s.groupCount; r++) {
+        if (s.rowCols[r].length > 0) {
+          rowsOf.get(partIndex.get(find(parent, s.rowCols[r][0]))).add(r);
+        }
+      }
+      partOfClass = new int[classes];
+      for (int i = 0; i < roots.size(); i++) {
+        for (int c : classesOf.get(roots.get(i))) {
+          partOfClass[c] = i;
+        }
+      }
+      int[][] adjacency = adj;
+      for (int i = 0; i < roots.size(); i++) {
+        List<Integer> cls = classesOf.get(roots.get(i));
+        List<Integer> comps = compsOf.get(roots.get(i));
+        Map<Integer, Integer> local = new HashMap<>();
+        for (int c : cls) {
+          local.put(c, local.size());
+        }
+        ModularEchelon ech = new ModularEchelon(cls.size());
+        List<long[]> dense = new ArrayList<>();
+        for (int r : rowsOf.get(i)) {
+          int[] cols = s.rowCols[r];
+          int[] lc = new int[cols.length];
+          long[] row = new long[cls.size()];
+          for (int k = 0; k < cols.length; k++) {
+            lc[k] = local.get(cols[k]);
+            row[lc[k]] = s.rowVals[r][k];
+          }
+          ech.addRow(lc, s.rowVals[r]);
+          if (cls.size() <= EXACT_LIMIT) {
+            dense.add(row);
+          }
+        }
+        int rank = ech.rank();
+        if (rank < cls.size() && !rowsOf.get(i).isEmpty()) {
+          if (cls.size() <= EXACT_LIMIT) {
+            rank = ExactRank.rank(dense.toArray(new long[0][]), cls.size());
+          } else {
+            exact = false;
+          }
+        }
+        int count = cls.size() - rank + 2 * comps.size();
+        if (count <= 0) {
+          continue;
+        }
+        // joints moving with this part: one random motion of it
+        long[] x = ech.randomNullVector(rnd);
+        long[] w = new long[fw.memberCount];
+        for (int e = 0; e < fw.memberCount; e++) {
+          int c = s.classOf[e];
+          if (c >= 0 && partOfClass[c] == i) {
+            w[e] = x[local.get(c)];
+          }
+        }
+        long[] tx = new long[components];
+        long[] ty = new long[components];
+        for (int comp : comps) {
+          tx[comp] = ModularEchelon.random(rnd);
+          ty[comp] = ModularEchelon.random(rnd);
+        }
+        long[][] v = propagate(fw, adjacency, w, compOf, anchorComp, anchorJoint, tx, ty);
+        List<Joint> js = new ArrayList<>();
+        for (int j = 0; j < fw.gridJoints; j++) {
+          if (compOf[j] >= 0 && (v[0][j] != 0 || v[1][j] != 0)) {
+            js.add(fw.jointRef(j));
+          }
+        }
+        Freedom f = new Freedom(FreedomKind.SWAY, count, js, List.of(), List.of());
+        partList.add(new Part(f, cls, rowsOf.get(i), comps));
+      }
+      partList.sort((a, b) -> compareJoints(a.freedom().joints(), b.freedom().joints()));
+    }
+
+    private static int find(int[] p, int x) {
+      while (p[x] != x) {
+        p[x] = p[p[x]];
+        x = p[x];
+      }
+      return x;
+    }
+
+    private static void union(int[] p, int a, int b) {
+      int ra = find(p, a);
+      int rb = find(p, b);
+      if (ra != rb) {
+        p[rb] = ra;
+      }
+    }
+
+    private static int[] toArray(List<Integer> xs) {
+      int[] out = new int[xs.size()];
+      for (int i = 0; i < out.length; i++) {
+        out[i] = xs.get(i);
+      }
+      return out;
+    }
+  }
+}

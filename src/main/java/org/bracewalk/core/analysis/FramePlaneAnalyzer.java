@@ -1,0 +1,259 @@
+package org.bracewalk.core.analysis;
+
+import java.util.ArrayList;
+import java.util.BitSet;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import org.bracewalk.core.model.AsBuiltPlane;
+import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
+import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PlaneDesign;
+import org.bracewalk.core.model.PlaneGrid;
+
+/**
+ * The engine: the brace graph ({@link BraceGraphPlaneAnalyzer}) where the analysed frame is
+ * complete, the exact framework analysis ({@link FrameFramework}, {@link FaceClassSystem}, {@link
+ * FrameFreedoms}, {@link CriticalByStress}, {@link FrameRepairPlanner}) where a ledger or standard
+ * is not there. On a complete frame every brace-graph answer is kept as it is; the frame-member
+ * fields are added: critical frame members (from a random self-stress), and the freedoms and moving
+ * joints read off the blocks (a block that is not fixed is a part that sways).
+ */
+final class FramePlaneAnalyzer implements PlaneAnalyzer {
+  /** Seed of the random self-stresses and motions: answers are reproducible run to run. */
+  static final long SEED = 0x5EEDF00DL;
+
+  @Override
+  public StateAnalysis analyseState(PlaneGrid grid, Map<PanelRef, Brace> members) {
+    return analyseState(BuiltFrame.complete(grid, members));
+  }
+
+  @Override
+  public StateAnalysis analyseState(BuiltFrame state) {
+    PlaneGrid grid = state.grid();
+    byte[] codes = PanelCodes.encode(grid, state.braces());
+    return analyse(grid, codes, state.absentFrame());
+  }
+
+  @Override
+  public Optional<JointMotion> motion(BuiltFrame state, Freedom freedom) {
+    FrameFramework fw = FrameFramework.of(state.grid(), state.braces(), state.absentFrame());
+    FrameFreedoms ff = FrameFreedoms.of(fw, SEED);
+    if (ff.dof == 0) {
+      return Optional.empty();
+    }
+    return Optional.of(ff.motion(freedom));
+  }
+
+  @Override
+  public PlaneAnalysis analyse(PlaneDesign design) {
+    PlaneGrid grid = design.grid();
+    byte[] codes = PanelCodes.encode(grid, design.braces());
+    StateAnalysis state = analyse(grid, codes, design.omittedFrame());
+    BitSet openings = PanelCodes.mark(grid, design.openings());
+    RepairPlan repair;
+    if (design.frameComplete()) {
+      BraceGraph graph = BraceGraph.of(grid, codes);
+      repair = RepairPlanner.plan(grid, codes, openings, codes, graph, false);
+    } else {
+      repair =
+          FrameRepairPlanner.plan(
+              grid, codes, design.omittedFrame(), openings, codes, design.omittedFrame(),
+              Set.of(), false, state.degreesOfFreedom());
+    }
+    return new PlaneAnalysis(grid, state, Optional.empty(), repair);
+  }
+
+  @Override
+  public PlaneAnalysis analyse(PlaneDesign design, AsBuiltPlane asBuilt) {
+    PlaneGrid grid = design.grid();
+    PlaneGrid found = asBuilt.grid();
+    if (found.lifts() != grid.lifts() || found.bays() != grid.bays()) {
+      throw new IllegalArgumentException(
+          "the as-built state has "
+              + found.lifts()
+              + " lifts x "
+              + found.bays()
+              + " bays but the design has "
+              + grid.lifts()
+              + " x "
+              + grid.bays());
+    }
+    int n = grid.bays();
+    byte[] designCodes = PanelCodes.encode(grid, design.braces());
+    byte[] builtCodes = PanelCodes.encode(grid, asBuilt.members());
+    StateAnalysis designState = analyse(grid, designCodes, design.omittedFrame());
+    Set<FrameRef> notThere = new HashSet<>(asBuilt.absentFrame());
+    notThere.addAll(asBuilt.unknownFrame());
+    StateAnalysis builtState = analyse(grid, builtCodes, notThere);
+
+    boolean rigidIfSound = builtState.rigid();
+    if (!asBuilt.uninspected().isEmpty() || !asBuilt.unknownFrame().isEmpty()) {
+      byte[] optimistic = builtCodes.clone();
+      BitSet unknown = PanelCodes.mark(grid, asBuilt.uninspected());
+      for (int idx = unknown.nextSetBit(0); idx >= 0; idx = unknown.nextSetBit(idx + 1)) {
+        optimistic[idx] = designCodes[idx];
+      }
+      Set<FrameRef> absentIfSound = new HashSet<>(asBuilt.absentFrame());
+      for (FrameRef f : asBuilt.unknownFrame()) {
+        if (!design.hasFrameMember(f)) {
+          absentIfSound.add(f);
+        }
+      }
+      rigidIfSound =
+          absentIfSound.isEmpty()
+              ? BraceGraphPlaneAnalyzer.isRigid(BraceGraph.of(grid, optimistic))
+              : analyseIncomplete(grid, optimistic, absentIfSound, false).rigid();
+    }
+    List<PlacedBrace> extras = new ArrayList<>();
+    for (int idx = 0; idx < builtCodes.length; idx++) {
+      if (builtCodes[idx] != PanelCodes.NONE && builtCodes[idx] != designCodes[idx]) {
+        Brace extra =
+            PanelMatch.extra(PanelCodes.decode(designCodes[idx]), PanelCodes.decode(builtCodes[idx]));
+        if (extra != null) {
+          extras.add(new PlacedBrace(PanelCodes.panel(idx, n), extra));
+        }
+      }
+    }
+    AsBuiltAnalysis built =
+        new AsBuiltAnalysis(
+            builtState, asBuilt.uninspected().size(), rigidIfSound, extras,
+            asBuilt.unknownFrame().size());
+    BitSet openings = PanelCodes.mark(grid, design.openings());
+    RepairPlan repair;
+    if (notThere.isEmpty()) {
+      BraceGraph builtGraph = BraceGraph.of(grid, builtCodes);
+      repair = RepairPlanner.plan(grid, designCodes, openings, builtCodes, builtGraph, true);
+    } else {
+      repair =
+          FrameRepairPlanner.plan(
+              grid, designCodes, design.omittedFrame(), openings, builtCodes, notThere,
+              asBuilt.unknownFrame(), true, builtState.degreesOfFreedom());
+    }
+    return new PlaneAnalysis(grid, designState, Optional.of(built), repair);
+  }
+
+  /** The state with the frame members {@code absent} not there. */
+  static StateAnalysis analyse(PlaneGrid grid, byte[] codes, Set<FrameRef> absent) {
+    if (absent.isEmpty()) {
+      return analyseComplete(grid, codes);
+    }
+    return analyseIncomplete(grid, codes, absent, true);
+  }
+
+  private static StateAnalysis analyseComplete(PlaneGrid grid, byte[] codes) {
+    BraceGraph g = BraceGraph.of(grid, codes);
+    StateAnalysis s = BraceGraphPlaneAnalyzer.analyse(g);
+    FrameFramework fw = FrameFramework.of(grid, rigidityCodes(codes), allThere(grid));
+    CriticalByStress.Critical critical = CriticalByStress.of(fw, SEED);
+    List<Freedom> freedoms = new ArrayList<>();
+    boolean pinned = fw.pinned;
+    List<Block> moving = new ArrayList<>();
+    for (Block b : s.blocks()) {
+      if (!b.fixed()) {
+        moving.add(b);
+      }
+    }
+    if (!pinned && !moving.isEmpty()) {
+      // the reference: the block holding bay 1 (the plane's own rigid motions)
+      Block reference = null;
+      for (Block b : moving) {
+        if (b.containsBay(1)) {
+          reference = b;
+        }
+      }
+      moving.remove(reference);
+    }
+    int m = grid.lifts();
+    int n = grid.bays();
+    int lowest = Integer.MAX_VALUE;
+    for (Block b : moving) {
+      int minLift = b.lifts().isEmpty() ? Integer.MAX_VALUE : b.lifts().get(0);
+      int minBay = b.bays().isEmpty() ? Integer.MAX_VALUE : b.bays().get(0);
+      List<Joint> js = new ArrayList<>();
+      for (int level = 0; level <= m; level++) {
+        for (int line = 0; line <= n; line++) {
+          if (level >= minLift || line >= minBay) {
+            js.add(new Joint(level, line));
+          }
+        }
+      }
+      lowest = Math.min(lowest, minLift);
+      freedoms.add(new Freedom(FreedomKind.SWAY, 1, js, List.of(), List.of()));
+    }
+    freedoms.sort((a, b) -> a.joints().get(0).compareTo(b.joints().get(0)));
+    List<Joint> movingJoints = new ArrayList<>();
+    if (pinned && lowest <= m) {
+      for (int level = lowest; level <= m; level++) {
+        for (int line = 0; line <= n; line++) {
+          movingJoints.add(new Joint(level, line));
+        }
+      }
+    }
+    return new StateAnalysis(
+        s.rigid(), s.degreesOfFreedom(), s.oneWayOnly(), s.lossTolerance(), s.lossToleranceExact(),
+        s.criticalBraces(), s.blocks(), critical.members(), movingJoints, freedoms, true);
+  }
+
+  static StateAnalysis analyseIncomplete(
+      PlaneGrid grid, byte[] codes, Set<FrameRef> absent, boolean full) {
+    FrameFramework fw = FrameFramework.of(grid, rigidityCodes(codes), frameThere(grid, absent));
+    FrameFreedoms ff = FrameFreedoms.of(fw, SEED);
+    int dof = ff.dof;
+    boolean tension = false;
+    for (byte c : codes) {
+      tension |= c != PanelCodes.NONE && !PanelCodes.isRigid(c);
+    }
+    boolean rigid = dof == 0;
+    if (rigid && tension) {
+      rigid = TensionOnlyFrame.rigid(grid, codes, absent);
+    }
+    boolean oneWay = dof == 0 && !rigid;
+    if (!full) {
+      return new StateAnalysis(rigid, dof, oneWay, -1, true, List.of(), List.of(), List.of(),
+          List.of(), List.of(), false);
+    }
+    CriticalByStress.Critical critical = CriticalByStress.of(fw, SEED);
+    int tolerance = -1;
+    boolean exact = true;
+    if (rigid) {
+      if (!critical.braces().isEmpty()) {
+        tolerance = 0;
+      } else {
+        // no single brace is critical: at least one may go; more is not computed here
+        tolerance = 1;
+        exact = false;
+      }
+    }
+    return new StateAnalysis(
+        rigid, dof, oneWay, tolerance, exact, critical.braces(), List.of(), critical.members(),
+        ff.movingJoints, ff.freedoms, false);
+  }
+
+  /** Diagonal codes without the tension-only bit: every member as a bar. */
+  static byte[] rigidityCodes(byte[] codes) {
+    byte[] out = new byte[codes.length];
+    for (int i = 0; i < codes.length; i++) {
+      out[i] = (byte) (codes[i] & 3);
+    }
+    return out;
+  }
+
+  static boolean[] allThere(PlaneGrid grid) {
+    boolean[] there = new boolean[(grid.lifts() + 1) * grid.bays() + grid.lifts() * (grid.bays() + 1)];
+    java.util.Arrays.fill(there, true);
+    return there;
+  }
+
+  static boolean[] frameThere(PlaneGrid grid, Set<FrameRef> absent) {
+    boolean[] there = allThere(grid);
+    for (FrameRef f : absent) {
+      there[FrameFramework.frameId(grid.lifts(), grid.bays(), f)] = false;
+    }
+    return there;
+  }
+}

@@ -1,0 +1,212 @@
+package org.bracewalk.core.analysis;
+
+import java.util.Arrays;
+import java.util.SplittableRandom;
+
+/**
+ * Which members carry a self-stress, from one random self-stress modulo p = 2^61 - 1 (see {@link
+ * ModularEchelon}). A member is critical (its loss alone lowers the rank of the rigidity matrix)
+ * iff it carries no self-stress (a coloop of the row matroid; W. Whiteley, "Some matroids from
+ * discrete applied geometry", Contemp. Math. 197 (1996)).
+ *
+ * <p>A self-stress is a left null vector of the face equations of {@link FaceClassSystem}: a
+ * 2-vector y per face (0 outside the plane, one value per group of joined faces) with (y_left -
+ * y_right) . d_e = 0 for every member e; the stress of e is nonzero iff y_left differs from
+ * y_right (Maxwell's reciprocal figure). It is drawn at random: y on joined groups is a random left
+ * null vector of their rows; on intact faces, whose equations are the union-find edges, y follows
+ * from a flow on those edges: random on edges that closed a cycle, solved up the spanning forest on
+ * the others, the fixed members absorbing what is left. Linear time plus the small system.
+ *
+ * <p>With probability at least 1 - 1/p per member a member that carries some self-stress carries
+ * this one; an error can only call a member critical that is not (the cautious side).
+ */
+final class RandomSelfStress {
+  private RandomSelfStress() {}
+
+  /** For each member: true when it carries the random self-stress. */
+  static boolean[] stressed(FaceClassSystem sys, SplittableRandom rnd) {
+    FrameFramework fw = sys.fw;
+    int m = fw.memberCount;
+    // 1. random left null vector over the joined groups' rows: rows of M^T are the classes.
+    int g2 = 2 * sys.groupCount;
+    long[] z = new long[g2];
+    if (g2 > 0) {
+      int[][] byClassCols = new int[sys.classCount][];
+      long[][] byClassVals = new long[sys.classCount][];
+      int[] counts = new int[sys.classCount];
+      for (int r = 0; r < g2; r++) {
+        for (int c : sys.rowCols[r]) {
+          counts[c]++;
+        }
+      }
+      for (int c = 0; c < sys.classCount; c++) {
+        byClassCols[c] = new int[counts[c]];
+        byClassVals[c] = new long[counts[c]];
+      }
+      Arrays.fill(counts, 0);
+      for (int r = 0; r < g2; r++) {
+        int[] cols = sys.rowCols[r];
+        long[] vals = sys.rowVals[r];
+        for (int k = 0; k < cols.length; k++) {
+          int c = cols[k];
+          byClassCols[c][counts[c]] = r;
+          byClassVals[c][counts[c]] = vals[k];
+          counts[c]++;
+        }
+      }
+      ModularEchelon ech = new ModularEchelon(g2);
+      for (int c = 0; c < sys.classCount; c++) {
+        if (byClassCols[c].length > 0) {
+          ech.addRow(byClassCols[c], byClassVals[c]);
+        }
+      }
+      z = ech.randomNullVector(rnd);
+    }
+    // 2. residual per member from the joined groups
+    long[] res = new long[m + 1];
+    for (int e = 0; e < m; e++) {
+      // every member there has its equation, those turning with a fixed member too
+      if (!fw.present[e] || fw.ground[e]) {
+        continue;
+      }
+      for (int s = 0; s < 2; s++) {
+        int face = s == 0 ? fw.faceL[e] : fw.faceR[e];
+        if (face == FrameFramework.OUTER) {
+          continue;
+        }
+        int g = sys.groupOf[face];
+        if (g < 0) {
+          continue;
+        }
+        long v = ModularEchelon.add(
+            ModularEchelon.mul(z[2 * g], ModularEchelon.mod(fw.dx[e])),
+            ModularEchelon.mul(z[2 * g + 1], ModularEchelon.mod(fw.dy[e])));
+        res[e] = s == 0 ? ModularEchelon.add(res[e], v) : ModularEchelon.sub(res[e], v);
+      }
+    }
+    // 3. flows on the union-find edges: random on cycle edges, then solved up the forest
+    int ec = sys.edgeCount;
+    long[] flow = new long[ec];
+    for (int k = 0; k < ec; k++) {
+      if (!sys.tree[k] && sys.eface[k] >= 0) {
+        flow[k] = ModularEchelon.random(rnd);
+        res[sys.eu[k]] = ModularEchelon.add(res[sys.eu[k]], flow[k]);
+        res[sys.ev[k]] = ModularEchelon.sub(res[sys.ev[k]], flow[k]);
+      }
+    }
+    int n = m + 1;
+    int[] deg = new int[n + 1];
+    for (int k = 0; k < ec; k++) {
+      if (sys.tree[k]) {
+        deg[sys.eu[k] + 1]++;
+        deg[sys.ev[k] + 1]++;
+      }
+    }
+    for (int i = 0; i < n; i++) {
+      deg[i + 1] += deg[i];
+    }
+    int[] adj = new int[deg[n]];
+    int[] fill = Arrays.copyOf(deg, n);
+    for (int k = 0; k < ec; k++) {
+      if (sys.tree[k]) {
+        adj[fill[sys.eu[k]]++] = k;
+        adj[fill[sys.ev[k]]++] = k;
+      }
+    }
+    int[] parentEdge = new int[n];
+    Arrays.fill(parentEdge, -2);
+    int[] order = new int[n];
+    int len = 0;
+    // roots: the fixed node first, then any unvisited node
+    for (int pass = 0; pass < 2; pass++) {
+      for (int root = pass == 0 ? sys.fixedNode : 0; root < (pass == 0 ? sys.fixedNode + 1 : n);
+          root++) {
+        if (parentEdge[root] != -2) {
+          continue;
+        }
+        parentEdge[root] = -1;
+        int head = len;
+        order[len++] = root;
+        while (head < len) {
+          int u = order[head++];
+          for (int i = deg[u]; i < deg[u + 1]; i++) {
+            int k = adj[i];
+            int v = sys.eu[k] == u ? sys.ev[k] : sys.eu[k];
+            if (parentEdge[v] == -2) {
+              parentEdge[v] = k;
+              order[len++] = v;
+            }
+          }
+        }
+      }
+    }
+    for (int i = len - 1; i >= 0; i--) {
+      int child = order[i];
+      int k = parentEdge[child];
+      if (k < 0) {
+        continue;
+      }
+      boolean free = child == sys.fixedNode || sys.eface[k] < 0;
+      if (sys.eu[k] == child) {
+        // child gets +flow, other end -flow
+        flow[k] = free ? 0 : ModularEchelon.sub(0, res[child]);
+        res[child] = ModularEchelon.add(res[child], flow[k]);
+        res[sys.ev[k]] = ModularEchelon.sub(res[sys.ev[k]], flow[k]);
+      } else {
+        flow[k] = free ? 0 : res[child];
+        res[child] = ModularEchelon.sub(res[child], flow[k]);
+        res[sys.eu[k]] = ModularEchelon.add(res[sys.eu[k]], flow[k]);
+      }
+    }
+    // 4. y per intact face from the flows of its two edges: s_a . y = phi, s_b . y = psi
+    long[] phi = new long[fw.faceCount];
+    long[] psi = new long[fw.faceCount];
+    for (int k = 0; k < ec; k++) {
+      int f = sys.eface[k];
+      if (f >= 0) {
+        if (sys.eslot[k] == 0) {
+          phi[f] = flow[k];
+        } else {
+          psi[f] = flow[k];
+        }
+      }
+    }
+    long[] yx = new long[fw.faceCount];
+    long[] yy = new long[fw.faceCount];
+    for (int f = 0; f < fw.faceCount; f++) {
+      int g = sys.groupOf[f];
+      if (g >= 0) {
+        yx[f] = z[2 * g];
+        yy[f] = z[2 * g + 1];
+      } else if (g == -2) {
+        int a = fw.faceMembers[4 * f];
+        int b = fw.faceMembers[4 * f + 1];
+        long ax = ModularEchelon.mod(fw.side(f, a) * fw.dx[a]);
+        long ay = ModularEchelon.mod(fw.side(f, a) * fw.dy[a]);
+        long bx = ModularEchelon.mod(fw.side(f, b) * fw.dx[b]);
+        long by = ModularEchelon.mod(fw.side(f, b) * fw.dy[b]);
+        long det = ModularEchelon.sub(ModularEchelon.mul(ax, by), ModularEchelon.mul(ay, bx));
+        long inv = ModularEchelon.inverse(det);
+        // [ax ay; bx by] (x, y) = (phi, psi)
+        yx[f] = ModularEchelon.mul(inv,
+            ModularEchelon.sub(ModularEchelon.mul(by, phi[f]), ModularEchelon.mul(ay, psi[f])));
+        yy[f] = ModularEchelon.mul(inv,
+            ModularEchelon.sub(ModularEchelon.mul(ax, psi[f]), ModularEchelon.mul(bx, phi[f])));
+      }
+    }
+    boolean[] out = new boolean[m];
+    for (int e = 0; e < m; e++) {
+      if (!fw.present[e] || fw.ground[e]) {
+        continue;
+      }
+      int l = fw.faceL[e];
+      int r = fw.faceR[e];
+      long lx = l == FrameFramework.OUTER ? 0 : yx[l];
+      long ly = l == FrameFramework.OUTER ? 0 : yy[l];
+      long rx = r == FrameFramework.OUTER ? 0 : yx[r];
+      long ry = r == FrameFramework.OUTER ? 0 : yy[r];
+      out[e] = lx != rx || ly != ry;
+    }
+    return out;
+  }
+}
