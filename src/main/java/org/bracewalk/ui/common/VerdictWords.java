@@ -7,9 +7,11 @@ import java.util.List;
 import org.bracewalk.core.analysis.Freedom;
 import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.StateAnalysis;
+import java.util.Set;
+import org.bracewalk.app.verdict.Terms;
+import org.bracewalk.app.verdict.Wording;
 import org.bracewalk.core.model.FrameRef;
-import org.bracewalk.core.model.Joint;
-import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PlaneRole;
 
 /**
  * The one {@link Verdict} laid out for a screen: the headline is the verdict's own words, the
@@ -47,6 +49,14 @@ public record VerdictWords(
    * @param repairCount braces in the minimal repair set
    */
   public static VerdictWords of(Verdict verdict, StateAnalysis state, int repairCount) {
+    return of(verdict, state, repairCount, Set.of());
+  }
+
+  /**
+   * As above, naming at each joint that can move the frame members not there ({@code absent}:
+   * missing, beyond use, not inspected or left out of the design).
+   */
+  public static VerdictWords of(Verdict verdict, StateAnalysis state, int repairCount, Set<FrameRef> absent) {
     VerdictKind kind = verdict.kind();
     int unknown = verdict.unknownPanels();
     String stillToInspect =
@@ -58,7 +68,7 @@ public record VerdictWords(
           : verdict.degreesOfFreedom()
               + plural(verdict.degreesOfFreedom(), " independent motion", " independent motions")
               + (jointsOnly ? "." : "; the lowest swaying lift carries every lift above it sideways.")
-              + freedoms(state);
+              + freedoms(state, verdict.role(), absent);
       String what = state.frameComplete()
           ? plural(repairCount, " brace", " braces")
           : plural(repairCount, " member", " members") + " (braces, ledgers or standards)";
@@ -87,65 +97,25 @@ public record VerdictWords(
   }
 
   /**
-   * The freedoms told apart by kind, in words an inspector reads at once ({@code
-   * shared/design/analysis.md}, "Frame members"): a part that sways, a joint nothing holds sideways
-   * (naming the members running straight through it), a loose end (naming the one member holding
-   * it). At most four are spelt out. Empty when the engine lists none (a complete frame: the
-   * swaying lifts are named by the keep-off zone).
+   * The freedoms told apart by kind, in the one verdict's words ({@link Wording#freedom}): a part
+   * that sways, a member running unrestrained through a joint (naming it and the place), a loose end
+   * (naming the one member holding it), each with the frame members not there at that joint; the
+   * note on lost sideways restraint once when there is one. At most four are spelt out. Empty when
+   * the frame is complete (the swaying lifts are then named by the keep-off zone).
    */
-  static String freedoms(StateAnalysis s) {
+  static String freedoms(StateAnalysis s, PlaneRole role, Set<FrameRef> absent) {
+    if (s.frameComplete() || s.freedoms().isEmpty()) {
+      return "";
+    }
     List<String> out = new ArrayList<>();
     for (Freedom f : s.freedoms()) {
-      switch (f.kind()) {
-        case SWAY -> {
-          if (!s.frameComplete()) {
-            int lowest = f.joints().stream().mapToInt(Joint::level).min().orElse(0);
-            out.add("A part sways: " + f.joints().size() + plural(f.joints().size(), " joint", " joints")
-                + " move together, the lowest at level " + lowest + ".");
-          }
-        }
-        case LOST_RESTRAINT -> {
-          for (Joint j : f.joints()) {
-            out.add("Nothing holds the " + j + " sideways: the " + members(f) + (runs(f) ? " run" : " runs")
-                + " straight through it, so its unbraced length grows; an engineer checks it before it is"
-                + " loaded (the pin-jointed model counts this as a freedom, the safe side).");
-          }
-        }
-        case LOOSE_END -> {
-          for (Joint j : f.joints()) {
-            out.add("Loose end at the " + j + ": held by the " + members(f) + " alone.");
-          }
-        }
-      }
-    }
-    if (out.isEmpty()) {
-      return "";
+      String w = Wording.freedom(f, Terms.of(role), absent);
+      out.add(Character.toUpperCase(w.charAt(0)) + w.substring(1) + ".");
     }
     int shown = Math.min(4, out.size());
     String more = out.size() > shown ? " And " + (out.size() - shown) + " more under Findings." : "";
-    return " " + String.join(" ", out.subList(0, shown)) + more;
-  }
-
-  private static boolean runs(Freedom f) {
-    return f.members().size() + f.diagonals().size() > 1;
-  }
-
-  /** "the standard of lift 1 on line 0 and the standard of lift 2 on line 0", diagonals by panel. */
-  private static String members(Freedom f) {
-    List<String> names = new ArrayList<>();
-    for (FrameRef m : f.members()) {
-      names.add(m.toString());
-    }
-    for (PanelRef p : f.diagonals()) {
-      names.add("diagonal in lift " + p.lift() + ", bay " + p.bay());
-    }
-    if (names.isEmpty()) {
-      return "no member";
-    }
-    if (names.size() == 1) {
-      return names.get(0);
-    }
-    return String.join(", ", names.subList(0, names.size() - 1)) + " and the " + names.get(names.size() - 1);
+    String note = s.freedomsOf(FreedomKind.LOST_RESTRAINT) > 0 ? " " + Wording.LOST_RESTRAINT_NOTE : "";
+    return " " + String.join(" ", out.subList(0, shown)) + more + note;
   }
 
   private static String plural(int n, String one, String many) {

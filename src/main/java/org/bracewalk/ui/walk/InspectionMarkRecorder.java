@@ -63,12 +63,18 @@ public final class InspectionMarkRecorder implements MarkRecorder {
         planeId, null, m.state(), null, m.bowMm(), m.gaugeLengthMm(), m.defect(), m.note(), recordedBy, member);
   }
 
-  /** The marks already recorded for the plane in this inspection: the latest per panel. */
+  /**
+   * The marks already recorded for the plane in this inspection: the latest per panel, then the
+   * latest per frame member (each placed at a panel it borders, where the cursor goes on undo).
+   */
   public static List<RecordedMark> existing(InspectionService inspections, long inspectionId, long planeId) {
     List<RecordedMark> out = new ArrayList<>();
     inspections.latestObservations(inspectionId, planeId).forEach((p, o) -> out.add(
         new RecordedMark(o.id(), p,
             new Mark(o.state(), o.memberFound(), o.defect(), o.bowMm(), o.gaugeLengthMm(), o.note(), List.of()))));
+    inspections.latestFrameObservations(inspectionId, planeId).forEach((f, o) -> out.add(
+        new RecordedMark(o.id(), org.bracewalk.ui.common.PanelSide.place(f).panel(),
+            new Mark(o.state(), null, o.defect(), o.bowMm(), o.gaugeLengthMm(), o.note(), List.of()), f)));
     return out;
   }
 }

@@ -51,6 +51,16 @@ final class MarkedFrame {
     }
   }
 
+  /** {@code f} holds what {@code r} holds, or nothing when {@code r} is null (a mark not stored is taken back). */
+  void reset(FrameRef f, RecordedMark r) {
+    if (r == null) {
+      latest.remove(f);
+      states.remove(f);
+    } else {
+      put(f, r, r.mark());
+    }
+  }
+
   /** The state of each member with a mark in force, live. */
   Map<FrameRef, PanelState> states() {
     return states;
