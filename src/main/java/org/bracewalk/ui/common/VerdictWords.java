@@ -4,14 +4,11 @@ import org.bracewalk.app.verdict.Verdict;
 import org.bracewalk.app.verdict.VerdictKind;
 import java.util.ArrayList;
 import java.util.List;
-import org.bracewalk.core.analysis.Freedom;
 import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.StateAnalysis;
 import java.util.Set;
-import org.bracewalk.app.verdict.Terms;
 import org.bracewalk.app.verdict.Wording;
 import org.bracewalk.core.model.FrameRef;
-import org.bracewalk.core.model.PlaneRole;
 
 /**
  * The one {@link Verdict} laid out for a screen: the headline is the verdict's own words, the
@@ -68,14 +65,20 @@ public record VerdictWords(
           : verdict.degreesOfFreedom()
               + plural(verdict.degreesOfFreedom(), " independent motion", " independent motions")
               + (jointsOnly ? "." : "; the lowest swaying lift carries every lift above it sideways.")
-              + freedoms(state, verdict.role(), absent);
+              + freedoms(verdict, state, absent);
       String what = state.frameComplete()
           ? plural(repairCount, " brace", " braces")
           : plural(repairCount, " member", " members") + " (braces, ledgers or standards)";
-      String fix = repairCount > 0
-          ? "Competent person to act: fit the " + repairCount + what
-              + " shown under Findings, or take this part out of service."
-          : "Competent person to act: take this part out of service until it is re-braced.";
+      String fix;
+      if (kind == VerdictKind.LOST_RESTRAINT) {
+        fix = "Competent person to act: refit the " + (repairCount > 0 ? repairCount + what : "members")
+            + " shown under Findings, and have an engineer check the member before it is loaded.";
+      } else if (repairCount > 0) {
+        fix = "Competent person to act: fit the " + repairCount + what
+            + " shown under Findings, or take this part out of service.";
+      } else {
+        fix = "Competent person to act: take this part out of service until it is re-braced.";
+      }
       return new VerdictWords(kind, kind.headline(), detail,
           verdict.keepOff() + " " + fix + stillToInspect, verdict, fix);
     }
@@ -97,24 +100,23 @@ public record VerdictWords(
   }
 
   /**
-   * The freedoms told apart by kind, in the one verdict's words ({@link Wording#freedom}): a part
-   * that sways, a member running unrestrained through a joint (naming it and the place), a loose end
-   * (naming the one member holding it), each with the frame members not there at that joint; the
-   * note on lost sideways restraint once when there is one. At most four are spelt out. Empty when
-   * the frame is complete (the swaying lifts are then named by the keep-off zone).
+   * The freedoms told apart by kind, in the one verdict's words ({@link Verdict#freedomWords}): a
+   * part that sways, a member running unrestrained through a joint (naming it and the place), a
+   * loose end (naming the one member holding it), each with the frame members not there at that
+   * joint; the note on lost sideways restraint once when there is one. At most four are spelt out.
+   * Empty when the frame is complete (the swaying lifts are then named by the keep-off zone).
    */
-  static String freedoms(StateAnalysis s, PlaneRole role, Set<FrameRef> absent) {
-    if (s.frameComplete() || s.freedoms().isEmpty()) {
+  static String freedoms(Verdict verdict, StateAnalysis s, Set<FrameRef> absent) {
+    if (s.frameComplete() || verdict.freedoms().isEmpty()) {
       return "";
     }
     List<String> out = new ArrayList<>();
-    for (Freedom f : s.freedoms()) {
-      String w = Wording.freedom(f, Terms.of(role), absent);
+    for (String w : verdict.freedomWords(absent)) {
       out.add(Character.toUpperCase(w.charAt(0)) + w.substring(1) + ".");
     }
     int shown = Math.min(4, out.size());
     String more = out.size() > shown ? " And " + (out.size() - shown) + " more under Findings." : "";
-    String note = s.freedomsOf(FreedomKind.LOST_RESTRAINT) > 0 ? " " + Wording.LOST_RESTRAINT_NOTE : "";
+    String note = verdict.anyLostRestraint() ? " " + Wording.LOST_RESTRAINT_NOTE : "";
     return " " + String.join(" ", out.subList(0, shown)) + more + note;
   }
 

@@ -84,7 +84,7 @@ final class LiveVerdict {
     int lost = frame.lost();
     progressText.set(count + " of " + total + " panels" + frameText + (lost > 0 ? " (" + lost + " missing or beyond use)" : ""));
     int repairCount = seen.rigid() ? 0 : Math.max(1, seen.degreesOfFreedom());
-    Verdict one = Verdict.classify(design.grid(), role, conservative, unknown, seen.rigid());
+    Verdict one = Verdict.classify(design.grid(), role, conservative, unknownPanels, unknownFrame, seen.rigid());
     VerdictWords words = VerdictWords.of(one, conservative, repairCount, absentNow);
     verdict.set(words);
     alarm.set(words.alarm(title));
