@@ -83,6 +83,6 @@ public record BenchPlan(
    */
   public static BenchPlan quick() {
     return new BenchPlan(SEED, 0.3, List.of(10, 20, 100, 1000), 1000, List.of(10, 20), 500_000_000L, 5, 3, 20, false, 10_000_000L,
-        FrameBenchPlan.standard());
+        FrameBenchPlan.quick());
   }
 }

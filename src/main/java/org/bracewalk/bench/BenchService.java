@@ -230,14 +230,21 @@ public final class BenchService {
     int matrixDof = RigidityMatrixBaseline.freedoms(built.grid(), built.members(), built.absentFrame());
     String rankName = "rigidity-matrix-rank-" + baseShape + "-frame-" + baseMissing + "-missing";
     progress.accept(rankName);
+    double[] rankMs = new double[f.rankSamples()];
+    for (int i = 0; i < rankMs.length; i++) {
+      rankMs[i] =
+          sample(0, () -> RigidityMatrixBaseline.freedoms(built.grid(), built.members(), built.absentFrame())) / 1e6;
+    }
+    sink = null;
     BenchResult rank =
-        time(
+        new BenchResult(
             rankName,
             "rank of the rigidity matrix by dense SVD (EJML), as built, " + baseShape + ", " + baseMissing
                 + " frame members missing",
-            plan,
-            b >= plan.largeBaselineFrom() ? Long.MAX_VALUE : (long) b * b,
-            () -> RigidityMatrixBaseline.freedoms(built.grid(), built.members(), built.absentFrame()));
+            median(rankMs),
+            rankMs.length,
+            OptionalDouble.empty(),
+            OptionalDouble.empty());
     results.add(rank);
     ratios.put("rigidityMatrixOverEngineFrame" + baseShape, rank.medianMs() / engineBase);
 

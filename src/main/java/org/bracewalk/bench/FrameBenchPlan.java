@@ -13,6 +13,8 @@ package org.bracewalk.bench;
  * @param largeMissing frame members missing in it
  * @param baselineSize the square plane timed against the rigidity-matrix rank
  * @param baselineShare share of its frame members missing
+ * @param rankSamples timed calls of the rigidity-matrix rank on it (each takes seconds; no warm-up:
+ *     the engine side of the ratio is the quick one)
  */
 public record FrameBenchPlan(
     int walkLifts,
@@ -23,11 +25,15 @@ public record FrameBenchPlan(
     int largeSize,
     int largeMissing,
     int baselineSize,
-    double baselineShare) {
+    double baselineShare,
+    int rankSamples) {
 
   public FrameBenchPlan {
     if (walkLifts < 1 || walkBays < 1 || mediumSize < 1 || largeSize < 1 || baselineSize < 1) {
       throw new IllegalArgumentException("every frame bench plane needs at least one lift and bay");
+    }
+    if (rankSamples < 1) {
+      throw new IllegalArgumentException("at least one timed call of the rank");
     }
     if (walkMissing < 0 || largeMissing < 0 || !(mediumShare >= 0 && mediumShare <= 1)
         || !(baselineShare >= 0 && baselineShare <= 1)) {
@@ -41,7 +47,12 @@ public record FrameBenchPlan(
    * and 20 x 20 with 1 % missing against the rigidity-matrix rank (at least 1000 times faster).
    */
   public static FrameBenchPlan standard() {
-    return new FrameBenchPlan(20, 100, 20, 100, 0.01, 1000, 1000, 20, 0.01);
+    return new FrameBenchPlan(20, 100, 20, 100, 0.01, 1000, 1000, 20, 0.01, 3);
+  }
+
+  /** The same cases with one call of the rank (for {@code bench --quick}). */
+  public static FrameBenchPlan quick() {
+    return new FrameBenchPlan(20, 100, 20, 100, 0.01, 1000, 1000, 20, 0.01, 1);
   }
 
   /** Frame members of a {@code lifts} x {@code bays} plane: ledgers and standard segments. */

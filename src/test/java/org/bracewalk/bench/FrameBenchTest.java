@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
 
 /** The bench's frame-damage cases on tiny planes, and the baseline with frame members missing. */
 class FrameBenchTest {
-  private static final FrameBenchPlan TINY_FRAME = new FrameBenchPlan(3, 5, 2, 5, 0.05, 6, 3, 4, 0.05);
+  private static final FrameBenchPlan TINY_FRAME = new FrameBenchPlan(3, 5, 2, 5, 0.05, 6, 3, 4, 0.05, 2);
   private static final BenchPlan TINY =
       new BenchPlan(7, 0.3, List.of(3, 4), 4, List.of(3, 4), 0, 2, 1, 4, false, 0, TINY_FRAME);
 
@@ -41,6 +41,7 @@ class FrameBenchTest {
             "rigidity-matrix-rank-4x4-frame-2-missing",
             "engine-verdict-repair-6x6-frame-3-missing");
     assertThat(steps).hasSize(report.results().size());
+    assertThat(report.results().get(10).samples()).as("calls of the frame rank").isEqualTo(2);
     assertThat(report.ratios()).containsKeys(
         "frameMissingOverComplete3x5", "frameMissingOverComplete5x5", "rigidityMatrixOverEngineFrame4x4");
     BenchResult large = report.results().get(report.results().size() - 1);

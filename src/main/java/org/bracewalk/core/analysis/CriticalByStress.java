@@ -9,7 +9,7 @@ import org.bracewalk.core.model.PanelRef;
 
 /**
  * Critical frame members and critical braces of a {@link FrameFramework}: members whose loss alone
- * adds a freedom. Removing a member lowers the rank of the rigidity matrix iff it carries no
+ * adds a freedom (check-contract.md, "Frame members"). Removing a member lowers the rank of the rigidity matrix iff it carries no
  * self-stress ({@link RandomSelfStress}); the freedoms then grow by one unless the removal also
  * drops a joint from the framework (a joint held by that member alone, which takes its own
  * freedoms with it), so such a member is not critical. A diagonal of a cross is critical iff

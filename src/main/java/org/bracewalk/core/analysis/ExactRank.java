@@ -32,6 +32,23 @@ final class ExactRank {
         break;
       }
     }
+    return solve(r, columns, free);
+  }
+
+  /** A basis of the null space: one integer vector per free column (empty when independent). */
+  static BigInteger[][] nullBasis(long[][] rows, int columns) {
+    Reduced r = eliminate(toBig(rows, columns), columns);
+    BigInteger[][] out = new BigInteger[columns - r.rank][];
+    int k = 0;
+    for (int c = 0; c < columns; c++) {
+      if (!r.isPivot[c]) {
+        out[k++] = solve(r, columns, c);
+      }
+    }
+    return out;
+  }
+
+  private static BigInteger[] solve(Reduced r, int columns, int free) {
     // Back substitution with a common denominator: x_free = D, other free columns 0.
     BigInteger[] num = new BigInteger[columns];
     BigInteger[] den = new BigInteger[columns];

@@ -17,24 +17,27 @@ import org.bracewalk.core.model.PanelRef;
  * <p>Exact reduction first (each step removes exactly one freedom, so the counts add up):
  *
  * <ol>
- *   <li>a joint held by one member, whose other end stays held by at least two (or is on a pinned
- *       base), is a loose end: strip it (one freedom: the joint swings about the other end);
- *   <li>a joint with exactly two members in one straight line has lost its sideways restraint:
- *       replace the two by one member end to end (one freedom: the joint moves across the line);
+ *   <li>a joint (not held by a pinned base) whose members, two of them, run in one straight line
+ *       has lost its sideways restraint: the two become one member end to end (one freedom: the
+ *       joint moves across the line; the two members' angular velocities are tied);
+ *   <li>a joint held by one member is a loose end: the member is stripped (one freedom: the joint
+ *       swings about the other end; the member's angular velocity is fixed). A member loose at both
+ *       ends counts both ends as loose, and the piece keeps one freedom as a sway.
  * </ol>
  *
- * repeated until neither applies. What is left sways: its freedoms come from the face equations of
- * {@link FaceClassSystem} (the stripped members fixed, the merged pairs turning together), split
- * into independent parts (classes linked by a row or by a part that nothing holds), each part's
- * count its columns less its rank plus 2 per part that nothing holds. Ranks are taken modulo p; a
- * deficiency on a part of at most {@value #EXACT_LIMIT} columns is confirmed by {@link ExactRank}
- * (larger parts keep the modular rank, which can only overstate the freedoms: the cautious side).
- * On a free plane the part holding the first joint is the reference (its rotation and translation
- * are the plane's rigid motions).
+ * Both are read off the framework as it stands (not repeated on what is left). What is left sways:
+ * its freedoms come from the face equations of {@link FaceClassSystem}, split into parts (classes
+ * linked by a row, meeting at a joint, or in a piece that nothing holds), each part's count its
+ * columns less its rank plus 2 per piece that nothing holds. Ranks are taken modulo p; a deficiency
+ * on a part of at most {@value #EXACT_LIMIT} columns is confirmed by {@link ExactRank} (larger parts
+ * keep the modular rank, which can only overstate the freedoms: the cautious side). On a free plane
+ * the piece holding the first joint is the reference (its rotation and translation are the plane's
+ * rigid motions).
  *
  * <p>The joints that move with a part come from one random motion of that part (mod p, joint
  * velocities propagated along the members): a joint that moves in some motion of the part moves in
- * a random one with probability at least 1 - 2/p.
+ * a random one with probability at least 1 - 2/p. Cost: one propagation over the framework per
+ * part.
  */
 final class FrameFreedoms {
   static final int EXACT_LIMIT = 400;
@@ -145,7 +148,8 @@ final class FrameFreedoms {
         }
       }
     }
-    double[][] v = propagateDouble(w, tx, ty);
+    int firstRoot = i < partList.size() ? -1 : ownBars.get(i - partList.size())[1];
+    double[][] v = propagateDouble(w, tx, ty, firstRoot);
     double max = 0;
     for (int j = 0; j < fw.gridJoints; j++) {
       max = Math.max(max, Math.hypot(v[0][j], v[1][j]));
@@ -159,7 +163,7 @@ final class FrameFreedoms {
     return new JointMotion(fw.lifts, fw.bays, ox, oy);
   }
 
-  private double[][] propagateDouble(double[] w, double[] tx, double[] ty) {
+  private double[][] propagateDouble(double[] w, double[] tx, double[] ty, int firstRoot) {
     int n = fw.jointCount;
     double[] vx = new double[n];
     double[] vy = new double[n];
@@ -178,7 +182,9 @@ final class FrameFreedoms {
       queue[len++] = anchorJoint;
     }
     int head = 0;
-    for (int root = -1; root < n; root++) {
+    for (int r = -2; r < n; r++) {
+      // a freedom of a piece that nothing holds is drawn about the joint it turns on
+      int root = r == -2 ? firstRoot : r;
       if (root >= 0) {
         if (seen[root] || start[root] == start[root + 1]) {
           continue;
@@ -356,6 +362,8 @@ final class FrameFreedoms {
     int components;
     List<int[]> ownBars = new ArrayList<>();
     Map<Integer, int[]> constituents = new HashMap<>();
+    /** Components whose piece is a member loose at both ends: one freedom counted as loose. */
+    Map<Integer, Integer> lessOne = new HashMap<>();
 
     // bars: real members first, virtual (end to end) after
     int barCount;
@@ -403,13 +411,37 @@ final class FrameFreedoms {
         anchorComp = anchorJoint < 0 ? -1 : compOf[anchorJoint];
       }
       if (!fw.pinned && anchorJoint < 0) {
-        // no member at all: nothing to move
+        // a free plane of loose members only (single members and stars, all stripped): a forest,
+        // so its rank is its member count; freedoms 2V - 3 - E, shared out as loose ends first
         parts = new FaceClassSystem(fw, toArray(fixed), toArray(joins));
         partOfClass = new int[0];
-        dof = 0;
-        freedoms = List.of();
-        own = new ArrayList<>();
-        ownBars = new ArrayList<>();
+        int joints = 0;
+        int members = 0;
+        for (int j = 0; j < fw.jointCount; j++) {
+          joints += compOf[j] >= 0 ? 1 : 0;
+        }
+        for (int e = 0; e < fw.memberCount; e++) {
+          members += fw.present[e] ? 1 : 0;
+        }
+        dof = joints == 0 ? 0 : Math.max(0, 2 * joints - 3 - members);
+        while (own.size() > dof) {
+          own.remove(own.size() - 1);
+          ownBars.remove(ownBars.size() - 1);
+        }
+        List<Freedom> all = new ArrayList<>(own);
+        if (dof > own.size()) {
+          List<Joint> js = new ArrayList<>();
+          for (int j = 0; j < fw.gridJoints; j++) {
+            if (compOf[j] >= 0) {
+              js.add(fw.jointRef(j));
+            }
+          }
+          Freedom sway = new Freedom(FreedomKind.SWAY, dof - own.size(), js, List.of(), List.of());
+          all.add(0, sway);
+          partList.add(new Part(sway, List.of(), List.of(), List.of(compOf[fw.jointCount > 0
+              ? firstJoint() : 0])));
+        }
+        freedoms = all;
         return;
       }
       parts = new FaceClassSystem(fw, toArray(fixed), toArray(joins));
@@ -460,6 +492,15 @@ final class FrameFreedoms {
       return a.get(0).compareTo(b.get(0));
     }
 
+    int firstJoint() {
+      for (int j = 0; j < fw.jointCount; j++) {
+        if (compOf[j] >= 0) {
+          return j;
+        }
+      }
+      return 0;
+    }
+
     List<Integer> barsAt(int j) {
       List<Integer> out = new ArrayList<>();
       for (int i = adj[0][j]; i < adj[0][j + 1]; i++) {
@@ -503,86 +544,67 @@ final class FrameFreedoms {
         }
       }
       barCount = m;
-      int[] queue = new int[fw.jointCount];
-      boolean[] queued = new boolean[fw.jointCount];
-      int head = 0;
-      int tail = 0;
       int n = fw.jointCount;
+      int[] original = deg.clone();
+      // 1. joints whose two members run in one straight line: one member end to end
       for (int j = 0; j < n; j++) {
-        if (!anchored(j) && deg[j] > 0 && deg[j] <= 2) {
-          queue[tail] = j;
-          tail = (tail + 1) % n;
-          queued[j] = true;
-        }
-      }
-      int pending = 0;
-      for (boolean q : queued) {
-        pending += q ? 1 : 0;
-      }
-      while (pending > 0) {
-        int j = queue[head];
-        head = (head + 1) % n;
-        queued[j] = false;
-        pending--;
-        if (removed[j] || anchored(j)) {
+        if (anchored(j) || original[j] != 2) {
           continue;
         }
         List<Integer> bars = barsAt(j);
-        int[] touched = null;
-        if (bars.size() == 1) {
-          int bar = bars.get(0);
-          int k = other(bar, j);
-          if (anchored(k) || deg[k] >= 2) {
-            alive[bar] = false;
-            deg[j]--;
-            deg[k]--;
-            removed[j] = true;
-            fixed.add(rep[bar]);
-            int member = barA[bar] == j ? endA[bar] : endB[bar];
-            addOwn(FreedomKind.LOOSE_END, j, new int[] {member}, new int[] {j, k, bar, -1, -1});
-            touched = new int[] {k};
-          }
-        } else if (bars.size() == 2) {
-          int b1 = bars.get(0);
-          int b2 = bars.get(1);
-          int a = other(b1, j);
-          int c = other(b2, j);
-          long ux = fw.x(a) - fw.x(j);
-          long uy = fw.y(a) - fw.y(j);
-          long vx = fw.x(c) - fw.x(j);
-          long vy = fw.y(c) - fw.y(j);
-          if (a != c && ux * vy - uy * vx == 0) {
-            alive[b1] = false;
-            alive[b2] = false;
-            removed[j] = true;
-            deg[j] = 0;
-            int nb = barCount++;
-            barA[nb] = a;
-            barB[nb] = c;
-            endA[nb] = barA[b1] == a ? endA[b1] : endB[b1];
-            endB[nb] = barA[b2] == c ? endA[b2] : endB[b2];
-            rep[nb] = rep[b1];
-            alive[nb] = true;
-            virtualAt.computeIfAbsent(a, x -> new ArrayList<>()).add(nb);
-            virtualAt.computeIfAbsent(c, x -> new ArrayList<>()).add(nb);
-            joins.add(rep[b1]);
-            joins.add(rep[b2]);
-            int m1 = barA[b1] == j ? endA[b1] : endB[b1];
-            int m2 = barA[b2] == j ? endA[b2] : endB[b2];
-            addOwn(FreedomKind.LOST_RESTRAINT, j, new int[] {m1, m2}, new int[] {j, a, b1, c, b2});
-            constituents.put(nb, concat(members(b1), members(b2)));
-            touched = new int[] {a, c};
-          }
+        int b1 = bars.get(0);
+        int b2 = bars.get(1);
+        int a = other(b1, j);
+        int c = other(b2, j);
+        long ux = fw.x(a) - fw.x(j);
+        long uy = fw.y(a) - fw.y(j);
+        long vx = fw.x(c) - fw.x(j);
+        long vy = fw.y(c) - fw.y(j);
+        if (a == c || ux * vy - uy * vx != 0) {
+          continue;
         }
-        if (touched != null) {
-          for (int k : touched) {
-            if (!anchored(k) && !removed[k] && !queued[k] && deg[k] <= 2) {
-              queue[tail] = k;
-              tail = (tail + 1) % n;
-              queued[k] = true;
-              pending++;
-            }
-          }
+        alive[b1] = false;
+        alive[b2] = false;
+        removed[j] = true;
+        deg[j] = 0;
+        int nb = barCount++;
+        barA[nb] = a;
+        barB[nb] = c;
+        endA[nb] = barA[b1] == a ? endA[b1] : endB[b1];
+        endB[nb] = barA[b2] == c ? endA[b2] : endB[b2];
+        rep[nb] = rep[b1];
+        alive[nb] = true;
+        virtualAt.computeIfAbsent(a, x -> new ArrayList<>()).add(nb);
+        virtualAt.computeIfAbsent(c, x -> new ArrayList<>()).add(nb);
+        joins.add(rep[b1]);
+        joins.add(rep[b2]);
+        int m1 = barA[b1] == j ? endA[b1] : endB[b1];
+        int m2 = barA[b2] == j ? endA[b2] : endB[b2];
+        addOwn(FreedomKind.LOST_RESTRAINT, j, new int[] {m1, m2}, new int[] {j, a, b1, c, b2});
+        constituents.put(nb, concat(members(b1), members(b2)));
+      }
+      // 2. joints held by one member: strip the member (a member loose at both ends keeps one of
+      // its freedoms as the sway of its piece)
+      boolean[] done = new boolean[n];
+      for (int j = 0; j < n; j++) {
+        if (anchored(j) || original[j] != 1 || done[j]) {
+          continue;
+        }
+        int bar = barsAt(j).get(0);
+        int k = other(bar, j);
+        alive[bar] = false;
+        deg[j]--;
+        deg[k]--;
+        removed[j] = true;
+        done[j] = true;
+        fixed.add(rep[bar]);
+        addOwn(FreedomKind.LOOSE_END, j, new int[] {barA[bar] == j ? endA[bar] : endB[bar]},
+            new int[] {j, k, bar, -1, -1});
+        if (!anchored(k) && original[k] == 1) {
+          done[k] = true;
+          addOwn(FreedomKind.LOOSE_END, k, new int[] {barA[bar] == k ? endA[bar] : endB[bar]},
+              new int[] {k, j, bar, -1, -1});
+          lessOne.merge(compOf[k], 1, Integer::sum);
         }
       }
     }
@@ -645,6 +667,22 @@ final class FrameFreedoms {
         int[] cols = s.rowCols[r];
         for (int k = 1; k < cols.length; k++) {
           union(parent, cols[0], cols[k]);
+        }
+      }
+      // free classes meeting at a joint belong to one swaying part (a piece and what carries it)
+      int[] firstAt = new int[fw.jointCount];
+      Arrays.fill(firstAt, -1);
+      for (int e = 0; e < fw.memberCount; e++) {
+        int c = s.classOf[e];
+        if (c < 0) {
+          continue;
+        }
+        for (int end : new int[] {fw.ja[e], fw.jb[e]}) {
+          if (firstAt[end] < 0) {
+            firstAt[end] = c;
+          } else {
+            union(parent, firstAt[end], c);
+          }
         }
       }
       // non-anchor components with no free class still form a part (translation)
@@ -724,6 +762,9 @@ final class FrameFreedoms {
           }
         }
         int count = cls.size() - rank + 2 * comps.size();
+        for (int comp : comps) {
+          count -= lessOne.getOrDefault(comp, 0);
+        }
         if (count <= 0) {
           continue;
         }
@@ -753,6 +794,28 @@ final class FrameFreedoms {
         partList.add(new Part(f, cls, rowsOf.get(i), comps));
       }
       partList.sort((a, b) -> compareJoints(a.freedom().joints(), b.freedom().joints()));
+      // each moving joint listed under the last part that moves it: the lists partition them
+      Map<Joint, Integer> last = new HashMap<>();
+      for (int k = 0; k < partList.size(); k++) {
+        for (Joint j : partList.get(k).freedom().joints()) {
+          last.put(j, k);
+        }
+      }
+      for (int k = 0; k < partList.size(); k++) {
+        Part p = partList.get(k);
+        List<Joint> mine = new ArrayList<>();
+        for (Joint j : p.freedom().joints()) {
+          if (last.get(j) == k) {
+            mine.add(j);
+          }
+        }
+        if (mine.isEmpty()) {
+          // every joint it moves is listed under a later part: it keeps its own list
+          mine = p.freedom().joints();
+        }
+        Freedom f = new Freedom(FreedomKind.SWAY, p.freedom().count(), mine, List.of(), List.of());
+        partList.set(k, new Part(f, p.classes(), p.rows(), p.comps()));
+      }
     }
 
     private static int find(int[] p, int x) {

@@ -2,7 +2,6 @@ package org.bracewalk.core.analysis;
 
 import java.util.ArrayList;
 import java.util.BitSet;
-import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -13,7 +12,6 @@ import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.MemberKind;
-import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
 
 /**
@@ -157,17 +155,26 @@ final class FrameRepairPlanner {
     }
     members.sort((x, y) -> x.member().compareTo(y.member()));
     List<RepairBrace> braces = new ArrayList<>();
+    // one entry per diagonal member (a cross placed new is two items), design ones first
     Map<Integer, List<RepairBrace>> byPanel = new TreeMap<>();
     for (Map.Entry<Integer, boolean[]> e : designTaken.entrySet()) {
       Brace missing = designMissing.get(e.getKey());
-      byPanel.computeIfAbsent(e.getKey(), k -> new ArrayList<>())
-          .add(new RepairBrace(PanelCodes.panel(e.getKey(), n),
-              new Brace(Diagonal.of(e.getValue()[0], e.getValue()[1]), missing.kind()), true));
+      for (int way = 0; way < 2; way++) {
+        if (e.getValue()[way]) {
+          byPanel.computeIfAbsent(e.getKey(), k -> new ArrayList<>())
+              .add(new RepairBrace(PanelCodes.panel(e.getKey(), n),
+                  new Brace(way == 0 ? Diagonal.RISING : Diagonal.FALLING, missing.kind()), true));
+        }
+      }
     }
     for (Map.Entry<Integer, boolean[]> e : newTaken.entrySet()) {
-      byPanel.computeIfAbsent(e.getKey(), k -> new ArrayList<>())
-          .add(new RepairBrace(PanelCodes.panel(e.getKey(), n),
-              Brace.rigid(Diagonal.of(e.getValue()[0], e.getValue()[1])), false));
+      for (int way = 0; way < 2; way++) {
+        if (e.getValue()[way]) {
+          byPanel.computeIfAbsent(e.getKey(), k -> new ArrayList<>())
+              .add(new RepairBrace(PanelCodes.panel(e.getKey(), n),
+                  Brace.rigid(way == 0 ? Diagonal.RISING : Diagonal.FALLING), false));
+        }
+      }
     }
     for (List<RepairBrace> l : byPanel.values()) {
       braces.addAll(l);

@@ -8,15 +8,17 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Critical frame members and critical braces by removal and rank: for every member that is there
- * (ledger, standard, each half of a cross), remove it alone and compare the exact rank of the
- * rigidity matrix (L. Asimow, B. Roth, Trans. AMS 245 (1978)) with the full one; the member is
- * critical iff the rank drops (analysis.md, "Frame members": a coloop of the row matroid).
+ * (ledger, standard, each half of a cross), remove it alone and count the freedoms again from the
+ * exact rank of the rigidity matrix (L. Asimow, B. Roth, Trans. AMS 245 (1978)); the member is
+ * critical iff they grow (check-contract.md, "Frame members": its loss alone adds a freedom). That
+ * is a coloop of the row matroid (analysis.md) whose loss leaves no joint bare: a member that alone
+ * holds a joint carries no force, but losing it takes the joint and its freedom away.
  */
 class FrameCriticalMembersTest {
   private final PlaneAnalyzer engine = PlaneAnalyzer.standard();
 
   @Test
-  void criticalMembersAndBracesAreThoseWhoseRemovalAloneLowersTheRank() {
+  void criticalMembersAndBracesAreThoseWhoseRemovalAloneAddsAFreedom() {
     Random rnd = new Random(0xC217_0001L);
     int members = 0;
     int braces = 0;

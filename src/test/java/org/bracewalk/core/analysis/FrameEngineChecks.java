@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.TreeSet;
 import org.bracewalk.core.model.FrameRef;
@@ -59,52 +60,114 @@ final class FrameEngineChecks {
   }
 
   /**
-   * The kinds of freedom (Freedom's javadoc, analysis.md "Frame members"): one LOOSE_END per
-   * movable joint held by one member only, one LOST_RESTRAINT per movable joint whose members (two
-   * or more) all run in one straight line, each counting 1; with a pinned base, every joint a
-   * freedom names moves, and every moving joint is named by some freedom.
+   * The kinds of freedom (Freedom's javadoc, analysis.md "Frame members"), checked against the
+   * framework: a LOOSE_END or LOST_RESTRAINT counts 1 at one joint; a loose end names the one member
+   * holding it, present and ending there; a lost restraint names two or more members that are there
+   * and run in one straight line through the joint. Where the reading is beyond doubt (pinned base)
+   * it must be found: a joint held by one member whose other end stays put is a loose end, and a
+   * joint whose only members are two in one straight line, both other ends staying put, has lost
+   * its sideways restraint. With a pinned base every joint a freedom names moves, and every moving
+   * joint is named by some freedom.
    */
   static void assertKindsMatch(StateAnalysis a, BuiltFrame state) {
     String plane = FramePlanes.describe(state);
     FrameOracle oracle = FrameOracle.of(state);
+    Map<Integer, List<FrameOracle.Bar>> at = oracle.barsAtJoints();
     TreeSet<Joint> loose = new TreeSet<>();
     TreeSet<Joint> straight = new TreeSet<>();
     TreeSet<Joint> named = new TreeSet<>();
     for (Freedom f : a.freedoms()) {
+      String what = f + " in" + plane;
       named.addAll(f.joints());
-      if (f.kind() == FreedomKind.LOOSE_END || f.kind() == FreedomKind.LOST_RESTRAINT) {
-        assertThat(f.count()).as("count of " + f + " in" + plane).isEqualTo(1);
-        assertThat(f.joints()).as("joints of " + f + " in" + plane).hasSize(1);
-        (f.kind() == FreedomKind.LOOSE_END ? loose : straight).addAll(f.joints());
+      if (f.kind() == FreedomKind.SWAY) {
+        continue;
       }
+      assertThat(f.count()).as("count of " + what).isEqualTo(1);
+      assertThat(f.joints()).as("joints of " + what).hasSize(1);
+      Joint j = f.joints().get(0);
+      List<FrameOracle.Bar> listed = listedBars(oracle, state, f, what);
       if (f.kind() == FreedomKind.LOOSE_END) {
-        assertThat(f.members().size() + f.diagonals().size())
-            .as("the one member holding " + f + " in" + plane).isEqualTo(1);
-      }
-      if (f.kind() == FreedomKind.LOST_RESTRAINT) {
-        assertThat(f.members().size() + f.diagonals().size())
-            .as("the members running through " + f + " in" + plane).isGreaterThanOrEqualTo(2);
+        loose.add(j);
+        assertThat(listed).as("the one member holding the loose end " + what).hasSize(1);
+        FrameOracle.Bar b = listed.get(0);
+        assertThat(oracle.jointOf(b.a()).equals(j) || oracle.jointOf(b.b()).equals(j))
+            .as(b + " ends at the loose end " + what).isTrue();
+      } else {
+        straight.add(j);
+        assertThat(listed).as("the members running through " + what).hasSizeGreaterThanOrEqualTo(2);
+        for (FrameOracle.Bar b : listed) {
+          assertThat(oracle.onLine(b, oracle.joint(j)))
+              .as(b + " on one straight line through the joint of " + what).isTrue();
+        }
       }
     }
-    assertThat(loose).as("loose ends of" + plane).containsExactlyElementsOf(oracle.looseEnds());
-    assertThat(straight).as("joints without sideways restraint of" + plane)
-        .containsExactlyElementsOf(oracle.straightThroughJoints());
     if (oracle.pinned()) {
+      java.util.Set<Joint> moving = new java.util.HashSet<>(oracle.movingJoints());
+      for (Joint j : oracle.looseEnds()) {
+        FrameOracle.Bar b = at.get(oracle.joint(j)).get(0);
+        int other = b.a() == oracle.joint(j) ? b.b() : b.a();
+        if (!moving.contains(oracle.jointOf(other))) {
+          assertThat(loose).as("loose ends of" + plane).contains(j);
+        }
+      }
+      for (Joint j : oracle.straightThroughJoints()) {
+        boolean othersHeld = true;
+        for (FrameOracle.Bar b : at.get(oracle.joint(j))) {
+          int other = b.a() == oracle.joint(j) ? b.b() : b.a();
+          othersHeld &= !moving.contains(oracle.jointOf(other));
+        }
+        if (othersHeld) {
+          assertThat(straight).as("joints without sideways restraint of" + plane).contains(j);
+        }
+      }
       assertThat(named).as("joints named by the freedoms of" + plane)
           .containsExactlyElementsOf(a.movingJoints());
     }
   }
 
   /**
-   * Critical members and braces by removal and rank: a member is critical iff removing it alone
-   * lowers the exact rank (a coloop of the row matroid; analysis.md, "Frame members").
+   * The bars of the members a freedom names; for a named panel, its diagonal that is there and runs
+   * on a line through the freedom's joint.
+   */
+  private static List<FrameOracle.Bar> listedBars(FrameOracle o, BuiltFrame state, Freedom f, String what) {
+    int j = o.joint(f.joints().get(0));
+    List<FrameOracle.Bar> out = new ArrayList<>();
+    for (FrameRef m : f.members()) {
+      assertThat(state.absentFrame()).as(m + " named by " + what + " is there").doesNotContain(m);
+      out.add(o.frameBar(m));
+    }
+    for (PanelRef p : f.diagonals()) {
+      assertThat(state.braces()).as("a diagonal in " + p + " named by " + what).containsKey(p);
+      org.bracewalk.core.model.Brace b = state.braces().get(p);
+      List<FrameOracle.Bar> through = new ArrayList<>();
+      if (b.diagonal().hasRising() && o.onLine(o.diagonalBar(p, true, false), j)) {
+        through.add(o.diagonalBar(p, true, !b.isRigid()));
+      }
+      if (b.diagonal().hasFalling() && o.onLine(o.diagonalBar(p, false, false), j)) {
+        through.add(o.diagonalBar(p, false, !b.isRigid()));
+      }
+      assertThat(through).as("the diagonal in " + p + " named by " + what + " runs through its joint")
+          .isNotEmpty();
+      out.add(through.get(0));
+    }
+    return out;
+  }
+
+  /**
+   * Critical members and braces by removal and rank: a member is critical iff its loss alone adds
+   * a freedom (check-contract.md, "Frame members"), found by removing each member and taking the
+   * exact rank again. That is a coloop of the row matroid (analysis.md) that leaves no joint bare.
    */
   static void assertCriticalMatch(StateAnalysis a, BuiltFrame state) {
+    assertCriticalMatch(a, state, FrameOracle.of(state).criticalByRemoval());
+  }
+
+  /** The same with the critical bars given (say by the faster stress route). */
+  static void assertCriticalMatch(StateAnalysis a, BuiltFrame state, List<FrameOracle.Bar> critical) {
     String plane = FramePlanes.describe(state);
-    FrameOracle oracle = FrameOracle.of(state);
     TreeSet<FrameRef> members = new TreeSet<>();
     TreeSet<PanelRef> panels = new TreeSet<>();
-    for (FrameOracle.Bar b : oracle.coloops()) {
+    for (FrameOracle.Bar b : critical) {
       if (b.frame() != null) {
         members.add(b.frame());
       } else {

@@ -145,7 +145,7 @@ class FrameExamplesTest {
 
   // ---- the rigidity matrix, for seeded random planes ----
 
-  private record Oracle(int dof, Set<Joint> moving) {}
+  private record Oracle(int dof, int rank, Set<Joint> moving) {}
 
   /** Freedoms and moving joints from the rigidity matrix (EJML SVD, tolerance 1e-9 relative). */
   private static Oracle oracle(PlaneGrid grid, Map<PanelRef, Brace> braces, Set<FrameRef> absent) {
@@ -197,7 +197,7 @@ class FrameExamplesTest {
     }
     int cols = 2 * col.size();
     if (cols == 0) {
-      return new Oracle(0, Set.of());
+      return new Oracle(0, 0, Set.of());
     }
     DMatrixRMaj r = new DMatrixRMaj(Math.max(bars.size(), 1), cols);
     for (int i = 0; i < bars.size(); i++) {
@@ -246,7 +246,7 @@ class FrameExamplesTest {
         }
       }
     }
-    return new Oracle(dof, moving);
+    return new Oracle(dof, rank, moving);
   }
 
   @Test
@@ -316,6 +316,8 @@ class FrameExamplesTest {
     }
     Set<FrameRef> more = new HashSet<>(absent);
     more.add(f);
+    // check-contract.md, "Frame members": critical iff its loss alone adds a freedom (the
+    // rigidity matrix before and after, joints left bare dropped)
     int before = Math.max(0, oracle(grid, b, absent).dof());
     int after = Math.max(0, oracle(grid, b, more).dof());
     assertThat(s.criticalMembers().contains(f)).as(where + " member " + f).isEqualTo(after > before);

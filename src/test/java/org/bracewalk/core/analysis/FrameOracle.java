@@ -323,6 +323,41 @@ final class FrameOracle {
   }
 
   /**
+   * Critical members as the check contract defines them: those whose loss alone adds a freedom,
+   * found by removing each one and counting the freedoms again (joints left bare are left out).
+   */
+  List<Bar> criticalByRemoval() {
+    int before = freedoms();
+    List<Bar> out = new ArrayList<>();
+    for (int k = 0; k < bars.size(); k++) {
+      List<Bar> without = new ArrayList<>(bars);
+      without.remove(k);
+      if (withBars(without).freedoms() > before) {
+        out.add(bars.get(k));
+      }
+    }
+    return out;
+  }
+
+  /**
+   * The same by the stress route: a coloop ({@link #coloopsByStresses()}) adds a freedom when
+   * lost unless it leaves a movable joint bare (that joint's two columns go with it, and its own
+   * freedom: the count drops instead).
+   */
+  List<Bar> criticalByStresses() {
+    Map<Integer, List<Bar>> at = barsAtJoints();
+    List<Bar> out = new ArrayList<>();
+    for (Bar b : coloopsByStresses()) {
+      boolean leavesBare =
+          (movable(b.a()) && at.get(b.a()).size() == 1) || (movable(b.b()) && at.get(b.b()).size() == 1);
+      if (!leavesBare) {
+        out.add(b);
+      }
+    }
+    return out;
+  }
+
+  /**
    * Greedy basis extension (W. Whiteley, "Some matroids from discrete applied geometry", Contemp.
    * Math. 197 (1996): the rows form a linear matroid, so adding candidates in cost order whenever
    * they raise the rank gives a largest independent extension of least cost). Returns the chosen
@@ -372,6 +407,15 @@ final class FrameOracle {
       }
     });
     return out;
+  }
+
+  /** Whether the joint lies on the straight line of the bar (exact, integer coordinates). */
+  boolean onLine(Bar bar, int joint) {
+    long ux = x(bar.b()) - x(bar.a());
+    long uy = y(bar.b()) - y(bar.a());
+    long wx = x(joint) - x(bar.a());
+    long wy = y(joint) - y(bar.a());
+    return ux * wy - uy * wx == 0;
   }
 
   private boolean allCollinear(int v, List<Bar> list) {

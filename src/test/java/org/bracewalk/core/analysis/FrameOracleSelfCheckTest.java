@@ -117,6 +117,9 @@ class FrameOracleSelfCheckTest {
       List<FrameOracle.Bar> byRemoval = o.coloops();
       assertThat(o.coloopsByStresses()).as("coloops of" + FramePlanes.describe(state))
           .containsExactlyElementsOf(byRemoval);
+      // and the members whose loss adds a freedom: removal and recount against the stress route
+      assertThat(o.criticalByStresses()).as("critical members of" + FramePlanes.describe(state))
+          .containsExactlyElementsOf(o.criticalByRemoval());
       coloops += byRemoval.size();
     }
     assertThat(coloops).isGreaterThan(60);

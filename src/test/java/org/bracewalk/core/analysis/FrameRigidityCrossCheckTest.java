@@ -2,6 +2,7 @@ package org.bracewalk.core.analysis;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.util.List;
 import java.util.Map;
 import java.util.Random;
 import org.bracewalk.core.model.Brace;
@@ -33,7 +34,7 @@ class FrameRigidityCrossCheckTest {
     int withCrosses = 0;
     int withCables = 0;
     int pinnedMoving = 0;
-    for (int k = 0; k < 600; k++) {
+    for (int k = 0; k < 520; k++) {
       BuiltFrame state = FramePlanes.state(rnd, 8, support(k), 0.2);
       FrameEngineChecks.assertVerdictMatches(engine, state);
       FrameOracle o = FrameOracle.of(state);
@@ -44,9 +45,9 @@ class FrameRigidityCrossCheckTest {
       pinnedMoving += o.pinned() && !o.movingJoints().isEmpty() ? 1 : 0;
     }
     // the sample must hold both verdicts, complete and damaged frames, crosses and cables
-    assertThat(mechanisms).isBetween(150, 570);
-    assertThat(complete).isBetween(40, 120);
-    assertThat(withCrosses).isGreaterThan(300);
+    assertThat(mechanisms).isBetween(150, 500);
+    assertThat(complete).isBetween(40, 200);
+    assertThat(withCrosses).isGreaterThan(250);
     assertThat(withCables).isGreaterThan(200);
     assertThat(pinnedMoving).isGreaterThan(100);
   }
@@ -69,31 +70,19 @@ class FrameRigidityCrossCheckTest {
   }
 
   @Test
-  void criticalMembersAndBracesAreTheColoopsOfTheRigidityMatrix() {
-    // coloops by the self-stress route (FrameOracle.coloopsByStresses), which
-    // FrameOracleSelfCheckTest ties to removal and rank; FrameCriticalMembersTest removes each
-    // member literally on smaller planes
+  void criticalMembersAndBracesAreThoseWhoseLossAddsAFreedomInTheRigidityMatrix() {
+    // by the self-stress route (FrameOracle.criticalByStresses), which FrameOracleSelfCheckTest
+    // ties to removal and rank; FrameCriticalMembersTest removes each member literally on smaller
+    // planes
     Random rnd = new Random(0xF7A3_0003L);
     int critical = 0;
     for (int k = 0; k < 500; k++) {
       BuiltFrame state = FramePlanes.state(rnd, 8, support(k), 0.2);
       StateAnalysis a = engine.analyseState(state);
-      FrameOracle o = FrameOracle.of(state);
-      java.util.TreeSet<org.bracewalk.core.model.FrameRef> members = new java.util.TreeSet<>();
-      java.util.TreeSet<PanelRef> panels = new java.util.TreeSet<>();
-      for (FrameOracle.Bar b : o.coloopsByStresses()) {
-        if (b.frame() != null) {
-          members.add(b.frame());
-        } else {
-          panels.add(b.panel());
-        }
-      }
-      String plane = FramePlanes.describe(state);
-      assertThat(a.criticalMembers()).as("critical frame members of" + plane)
-          .containsExactlyElementsOf(members);
-      assertThat(a.criticalBraces()).as("critical braces of" + plane)
-          .containsExactlyElementsOf(panels);
-      critical += members.size();
+      List<FrameOracle.Bar> bars = FrameOracle.of(state).criticalByStresses();
+      FrameEngineChecks.assertCriticalMatch(a, state, bars);
+      int members = (int) bars.stream().filter(b -> b.frame() != null).count();
+      critical += members;
     }
     assertThat(critical).isGreaterThan(1000);
   }
@@ -112,7 +101,7 @@ class FrameRigidityCrossCheckTest {
             .isEmpty();
       }
     }
-    assertThat(motions).isGreaterThan(150);
+    assertThat(motions).isGreaterThan(120);
   }
 
   @Test
