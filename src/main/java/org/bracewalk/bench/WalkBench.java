@@ -101,8 +101,13 @@ public final class WalkBench {
       }
 
       @Override
+      public RecordedMark recordMember(org.bracewalk.core.model.FrameRef member, PanelRef panel, Mark mark) {
+        return new RecordedMark(ids.incrementAndGet(), panel, mark, member);
+      }
+
+      @Override
       public RecordedMark correct(RecordedMark earlier, Mark replacement, String reason) {
-        return new RecordedMark(ids.incrementAndGet(), earlier.panel(), replacement);
+        return new RecordedMark(ids.incrementAndGet(), earlier.panel(), replacement, earlier.member());
       }
     };
   }

@@ -49,6 +49,9 @@ public final class AppScreens implements ScreenFactory {
   /** The camera folder, remembered in the user's preferences between sessions. */
   private final org.bracewalk.ui.walk.CameraFolder.Setting cameraFolder =
       org.bracewalk.ui.walk.CameraFolder.Setting.userPreferences();
+  /** Whether the walk order takes in every ledger and standard, remembered beside the camera folder. */
+  private final org.bracewalk.ui.walk.FrameInWalkSetting frameInWalk =
+      org.bracewalk.ui.walk.FrameInWalkSetting.userPreferences();
   private final AppServices services;
   private final PlaneAnalyzer analyzer;
   private final Clock clock;
@@ -176,6 +179,7 @@ public final class AppScreens implements ScreenFactory {
             new InspectionMarkRecorder(services.inspections(), insp.id(), plane.id(), insp.inspectorName()),
             analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised(), clock, ui, background);
     vm.useCameraFolderSetting(cameraFolder);
+    vm.useFrameInWalkSetting(frameInWalk);
     WalkView view = new WalkView(vm);
     Selection here = new Selection(st.id(), plane.id(), insp.id());
     BorderPane wrap = new BorderPane(view);

@@ -8,9 +8,13 @@ import javafx.scene.control.Label;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import org.bracewalk.core.analysis.Block;
+import org.bracewalk.core.analysis.Freedom;
+import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.RepairBrace;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
@@ -43,12 +47,19 @@ public final class Legend extends FlowPane {
         add(designCross(), "cross (X)");
         add(opening(), "opening: never braced");
         add(repairSwatch(true), "suggested brace");
+        add(frame(FrameLook.OMITTED), "ledger or standard " + FrameLook.OMITTED.words());
+        add(selected(), "selected ledger or standard (Shift+arrow)");
       }
       case WALK, FINDINGS, HISTORY -> {
         for (PanelLook look : PanelLook.values()) {
           add(look(look), look.badge() + " = " + look.words());
         }
+        for (FrameLook look : FrameLook.values()) {
+          add(frame(look), "ledger or standard: " + look.words());
+        }
         add(shear(), "\u2194 shearing: can sway");
+        add(joint(FreedomKind.LOST_RESTRAINT), "joint with nothing holding it sideways");
+        add(joint(FreedomKind.LOOSE_END), "loose member end");
         add(critical(), "critical brace");
         if (which == Set_.FINDINGS) {
           add(repairSwatch(true), "repair: restore design brace");
@@ -58,6 +69,9 @@ public final class Legend extends FlowPane {
           add(changed(), "changed since previous");
         }
         add(opening(), "opening");
+        if (which == Set_.WALK) {
+          add(selected(), "selected ledger or standard (Shift+arrow)");
+        }
       }
     }
   }
@@ -136,5 +150,47 @@ public final class Legend extends FlowPane {
   private static Canvas changed() {
     PlaneDesign d = PlaneDesign.of(ONE, Map.of(P, Brace.rigid(Diagonal.RISING)));
     return draw(pic(d, Map.of(P, PanelFinding.of(PanelState.MISSING)), true, List.of(), Set.of(), List.of(), Set.of(P)));
+  }
+
+  /** The four sides of one empty panel in the frame style {@code look}. */
+  private static Canvas frame(FrameLook look) {
+    java.util.Set<FrameRef> sides = Set.of(FrameRef.ledger(0, 1), FrameRef.ledger(1, 1),
+        FrameRef.standard(1, 0), FrameRef.standard(1, 1));
+    PanelState state = switch (look) {
+      case AS_DESIGNED, OMITTED -> null;
+      case SOUND -> PanelState.SOUND;
+      case DAMAGED_EFFECTIVE -> PanelState.DAMAGED_EFFECTIVE;
+      case DAMAGED_INEFFECTIVE -> PanelState.DAMAGED_INEFFECTIVE;
+      case MISSING -> PanelState.MISSING;
+      case EXTRA -> PanelState.EXTRA;
+      case NOT_INSPECTED -> PanelState.NOT_REACHABLE;
+    };
+    boolean inDesign = look != FrameLook.OMITTED && look != FrameLook.EXTRA;
+    PlaneDesign d = new PlaneDesign(ONE, Map.of(), Set.of(), inDesign ? Set.of() : sides);
+    Map<FrameRef, PanelState> found = new java.util.HashMap<>();
+    if (state != null) {
+      for (FrameRef f : sides) {
+        found.put(f, state);
+      }
+    }
+    return draw(new PlanePicture(d, Map.of(), true, List.of(), Set.of(), List.of(), Set.of(), null, found, null,
+        List.of()));
+  }
+
+  /** A joint in the middle of a 2 x 2 plane marked as {@code kind}. */
+  private static Canvas joint(FreedomKind kind) {
+    PlaneGrid g = new PlaneGrid(2, 2, List.of(1.3, 1.3), List.of(1.0, 1.0), Support.FREE);
+    Joint j = new Joint(1, 1);
+    Freedom f = kind == FreedomKind.LOST_RESTRAINT
+        ? new Freedom(kind, 1, List.of(j), List.of(FrameRef.standard(1, 1), FrameRef.standard(2, 1)), List.of())
+        : new Freedom(kind, 1, List.of(j), List.of(FrameRef.ledger(1, 1)), List.of());
+    return draw(new PlanePicture(PlaneDesign.of(g, Map.of()), Map.of(), true, List.of(), Set.of(), List.of(),
+        Set.of(), null, Map.of(), null, List.of(f)));
+  }
+
+  /** One panel with its top ledger selected. */
+  private static Canvas selected() {
+    return draw(new PlanePicture(PlaneDesign.of(ONE, Map.of()), Map.of(), true, List.of(), Set.of(), List.of(),
+        Set.of(), P, Map.of(), FrameRef.ledger(1, 1), List.of()));
   }
 }

@@ -5,17 +5,24 @@ import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.scene.canvas.Canvas;
 import javafx.scene.layout.Region;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.PanelRef;
 
 /**
  * A resizable drawing of a plane. Redraws whenever its picture or size changes; a click or tap on a
- * panel is passed to {@link #setOnPanelPicked}. Takes keyboard focus, so a screen can route keys
- * to it.
+ * panel is passed to {@link #setOnPanelPicked}, one within {@link #FRAME_REACH} pixels of a ledger or
+ * standard to {@link #setOnFramePicked} when a screen has set it. Takes keyboard focus, so a screen
+ * can route keys to it.
  */
 public final class PlaneCanvas extends Region {
   private final Canvas canvas = new Canvas();
   private final ObjectProperty<PlanePicture> picture = new SimpleObjectProperty<>(this, "picture");
+  /** How near a ledger or standard line a click picks the member rather than the panel, in pixels. */
+  public static final double FRAME_REACH = 6;
+
   private Consumer<PanelRef> onPanelPicked = p -> {};
+  private Consumer<FrameRef> onFramePicked;
   private PlaneGeometry geometry;
   private PlanePicture painted;
   private long lastPaintNanos;
@@ -32,6 +39,11 @@ public final class PlaneCanvas extends Region {
         e -> {
           requestFocus();
           if (geometry != null) {
+            FrameRef f = onFramePicked == null ? null : geometry.frameAt(e.getX(), e.getY(), FRAME_REACH);
+            if (f != null) {
+              onFramePicked.accept(f);
+              return;
+            }
             PanelRef p = geometry.panelAt(e.getX(), e.getY());
             if (p != null) {
               onPanelPicked.accept(p);
@@ -46,6 +58,11 @@ public final class PlaneCanvas extends Region {
 
   public void setOnPanelPicked(Consumer<PanelRef> handler) {
     onPanelPicked = handler == null ? p -> {} : handler;
+  }
+
+  /** Clicks near a ledger or standard go here ({@code null}: every click picks a panel). */
+  public void setOnFramePicked(Consumer<FrameRef> handler) {
+    onFramePicked = handler;
   }
 
   /** The geometry of the last drawing, or {@code null} before the first. */
@@ -111,7 +128,11 @@ public final class PlaneCanvas extends Region {
         || !before.blocks().equals(after.blocks())
         || !before.critical().equals(after.critical())
         || !before.repair().equals(after.repair())
-        || !before.changed().equals(after.changed())) {
+        || !before.changed().equals(after.changed())
+        || !before.frameFindings().equals(after.frameFindings())
+        || !before.freedoms().equals(after.freedoms())
+        || before.selectedMember() != null
+        || after.selectedMember() != null) {
       return null;
     }
     java.util.Set<PanelRef> dirty = new java.util.HashSet<>();
@@ -135,6 +156,35 @@ public final class PlaneCanvas extends Region {
         }
       }
     }
-    return dirty.size() > 24 ? null : dirty;
+    if (dirty.size() > 24 || nearFrameDetail(after, dirty)) {
+      return null;
+    }
+    return dirty;
+  }
+
+  /**
+   * Whether a panel to repaint lies within two panels of a frame member drawn in a style of its
+   * own or of a marked joint: the partial repaint redraws the plain frame there, so those need a
+   * full redraw (they are few: most frame members are as designed).
+   */
+  private static boolean nearFrameDetail(PlanePicture pic, java.util.Set<PanelRef> dirty) {
+    java.util.List<Joint> joints = new java.util.ArrayList<>();
+    for (FrameRef f : pic.design().omittedFrame()) {
+      joints.add(f.start());
+    }
+    for (FrameRef f : pic.frameFindings().keySet()) {
+      joints.add(f.start());
+    }
+    for (var fr : pic.freedoms()) {
+      joints.addAll(fr.joints());
+    }
+    for (Joint j : joints) {
+      for (PanelRef p : dirty) {
+        if (Math.abs(p.lift() - j.level()) <= 3 && Math.abs(p.bay() - j.line()) <= 3) {
+          return true;
+        }
+      }
+    }
+    return false;
   }
 }

@@ -2,6 +2,8 @@ package org.bracewalk.ui.common;
 
 import java.util.List;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
 
@@ -152,5 +154,45 @@ public final class PlaneGeometry {
       lift++;
     }
     return new PanelRef(lift, bay);
+  }
+
+  /** The screen segment {@code {x1, y1, x2, y2}} of a frame member, from its start joint to its end. */
+  public double[] frame(FrameRef f) {
+    Joint a = f.start();
+    Joint b = f.end();
+    return new double[] {lineX[a.line()], levelY[a.level()], lineX[b.line()], levelY[b.level()]};
+  }
+
+  /**
+   * The frame member whose line passes within {@code reach} pixels of screen point ({@code x},
+   * {@code y}) between its joints, the nearest one; {@code null} when none is that close. A click
+   * this near a ledger or standard picks the member, not the panel.
+   */
+  public FrameRef frameAt(double x, double y, double reach) {
+    FrameRef best = null;
+    double bestD = reach;
+    for (int line = 0; line <= grid.bays(); line++) {
+      double d = Math.abs(x - lineX[line]);
+      if (d <= bestD) {
+        for (int lift = 1; lift <= grid.lifts(); lift++) {
+          if (y <= levelY[lift - 1] && y >= levelY[lift]) {
+            best = FrameRef.standard(lift, line);
+            bestD = d;
+          }
+        }
+      }
+    }
+    for (int level = 0; level <= grid.lifts(); level++) {
+      double d = Math.abs(y - levelY[level]);
+      if (d < bestD) {
+        for (int bay = 1; bay <= grid.bays(); bay++) {
+          if (x >= lineX[bay - 1] && x <= lineX[bay]) {
+            best = FrameRef.ledger(level, bay);
+            bestD = d;
+          }
+        }
+      }
+    }
+    return best;
   }
 }

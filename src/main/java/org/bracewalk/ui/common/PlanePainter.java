@@ -3,8 +3,12 @@ package org.bracewalk.ui.common;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import org.bracewalk.core.analysis.Freedom;
+import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.RepairBrace;
 import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
@@ -23,7 +27,9 @@ import javafx.scene.text.TextAlignment;
  * its colour: members by state (see {@link PanelLook}), shearing panels hatched, critical braces a
  * diamond, proposed braces a dash-dot line with a numbered ring (a square where the panel is not
  * in the design), openings an arch, changed panels a dashed frame, the cursor a double frame with
- * corner brackets.
+ * corner brackets. Frame members recorded or left out by the design are drawn in the style of
+ * their {@link FrameLook}; a joint without sideways restraint is a ring with a two-headed arrow, a
+ * loose end a filled triangle; the selected side of the current panel is boxed and pointed at.
  */
 public final class PlanePainter {
   static final Color FRAME = Color.web("#4a4a4a");
@@ -53,11 +59,12 @@ public final class PlanePainter {
     g.setFill(PAPER);
     g.fillRect(0, 0, w, h);
     g.setLineCap(StrokeLineCap.BUTT);
-    SwayRegion sway = SwayRegion.of(grid, pic.blocks());
+    SwayRegion sway = pic.sway();
     double smallest = smallestPanel(geo);
     boolean badges = smallest >= 18;
     hatchAll(g, geo, sway);
     paintFrame(g, geo);
+    frameMembers(g, geo, pic);
     // members first, gathered into one path per line style (a shape per line is what makes a
     // large plane slow in the software renderer), then what is drawn over them
     MemberLines lines = new MemberLines();
@@ -70,11 +77,12 @@ public final class PlanePainter {
       lines.stroke(g);
     }
     overlays(g, geo, pic, null, badges || smallest >= 12);
+    joints(g, geo, pic);
     if (labelled) {
       labels(g, geo, sway);
     }
     if (pic.cursor() != null && grid.contains(pic.cursor())) {
-      cursor(g, geo, pic.cursor());
+      cursor(g, geo, pic.cursor(), pic.selectedMember());
     }
     return geo;
   }
@@ -163,7 +171,7 @@ public final class PlanePainter {
     PlaneGrid grid = pic.grid();
     double smallest = smallestPanel(geo);
     boolean badges = smallest >= 18;
-    SwayRegion sway = SwayRegion.of(grid, pic.blocks());
+    SwayRegion sway = pic.sway();
     double edge = 6; // the cursor's brackets reach this far past the plane's edge
     for (PanelRef d : dirty) {
       if (!grid.contains(d)) {
@@ -196,7 +204,7 @@ public final class PlanePainter {
       }
       overlays(g, geo, pic, near, badges || smallest >= 12);
       if (pic.cursor() != null && near.contains(pic.cursor())) {
-        cursor(g, geo, pic.cursor());
+        cursor(g, geo, pic.cursor(), pic.selectedMember());
       }
     }
   }
@@ -351,6 +359,175 @@ public final class PlanePainter {
       }
       g.stroke();
     }
+  }
+
+  /**
+   * Frame members drawn in a style of their own (recorded, or left out by the design): each plain
+   * bar is wiped between its joints and the member drawn again in its {@link FrameLook}. Members
+   * drawn plain are left as {@link #paintFrame} drew them, so a plane with none costs nothing more.
+   */
+  private static void frameMembers(GraphicsContext g, PlaneGeometry geo, PlanePicture pic) {
+    java.util.Set<FrameRef> styled = new java.util.TreeSet<>(pic.design().omittedFrame());
+    if (pic.showFindings()) {
+      styled.addAll(pic.frameFindings().keySet());
+    }
+    for (FrameRef f : styled) {
+      FrameLook look = pic.frameLook(f);
+      if (!look.plain()) {
+        frameMember(g, geo.frame(f), look);
+      }
+    }
+  }
+
+  /** One frame member, segment {@code s} from joint to joint, in the style of {@code look}. */
+  static void frameMember(GraphicsContext g, double[] s, FrameLook look) {
+    boolean upright = s[0] == s[2];
+    // wipe the plain bar between the joints (the joints' own bars stay)
+    g.setFill(PAPER);
+    if (upright) {
+      g.fillRect(s[0] - 1, Math.min(s[1], s[3]) + 1, 2, Math.abs(s[3] - s[1]) - 2);
+    } else {
+      g.fillRect(Math.min(s[0], s[2]) + 1, s[1] - 1, Math.abs(s[2] - s[0]) - 2, 2);
+    }
+    Color c = Color.web(look.colour());
+    double len = Math.hypot(s[2] - s[0], s[3] - s[1]);
+    if (len < 2) {
+      return;
+    }
+    double ux = (s[2] - s[0]) / len;
+    double uy = (s[3] - s[1]) / len;
+    // the line stops short of the joints, so a broken style reads as this member's alone
+    double gap = Math.min(3, len * 0.1);
+    double[] line = {s[0] + ux * gap, s[1] + uy * gap, s[2] - ux * gap, s[3] - uy * gap};
+    g.setStroke(c);
+    g.setLineWidth(look.width());
+    double[] dashes = look.dashes();
+    if (dashes == null) {
+      g.setLineDashes();
+    } else {
+      g.setLineDashes(dashes);
+    }
+    if (look.doubled()) {
+      for (double[] d : doubled(new double[][] {line})) {
+        g.strokeLine(d[0], d[1], d[2], d[3]);
+      }
+    } else {
+      g.strokeLine(line[0], line[1], line[2], line[3]);
+    }
+    g.setLineDashes();
+    double mx = (s[0] + s[2]) / 2;
+    double my = (s[1] + s[3]) / 2;
+    double nx = -uy;
+    double ny = ux;
+    if (look.ticked()) {
+      // two strokes across, longer than a brace's: the bar is thick
+      g.setStroke(c);
+      g.setLineWidth(2.5);
+      for (double t : new double[] {0.4, 0.6}) {
+        double px = s[0] + (s[2] - s[0]) * t;
+        double py = s[1] + (s[3] - s[1]) * t;
+        g.strokeLine(px - nx * 9, py - ny * 9, px + nx * 9, py + ny * 9);
+      }
+    }
+    if (look.crossed()) {
+      double r = Math.min(6, len * 0.15);
+      g.setStroke(c);
+      g.setLineWidth(2.2);
+      g.strokeLine(mx - r, my - r, mx + r, my + r);
+      g.strokeLine(mx - r, my + r, mx + r, my - r);
+    }
+    if (look.ringed()) {
+      double r = Math.min(4.5, len * 0.12);
+      g.setFill(PAPER);
+      g.fillOval(mx - r, my - r, 2 * r, 2 * r);
+      g.setStroke(c);
+      g.setLineWidth(1.5);
+      g.strokeOval(mx - r, my - r, 2 * r, 2 * r);
+    }
+    if (look.endTicks()) {
+      double t = Math.min(8, len * 0.2);
+      g.setStroke(c);
+      g.setLineWidth(2.2);
+      for (double k : new double[] {gap + 1, len - gap - 1}) {
+        double px = s[0] + ux * k;
+        double py = s[1] + uy * k;
+        g.strokeLine(px - nx * t, py - ny * t, px + nx * t, py + ny * t);
+      }
+    }
+  }
+
+  /**
+   * The joints of the freedoms that are marked where they are: a joint with nothing holding it
+   * sideways (a ring with a two-headed arrow across the line running through it) and a loose end
+   * (a filled triangle).
+   */
+  private static void joints(GraphicsContext g, PlaneGeometry geo, PlanePicture pic) {
+    for (Freedom f : pic.freedoms()) {
+      if (f.kind() == FreedomKind.SWAY) {
+        continue;
+      }
+      for (Joint j : f.joints()) {
+        if (j.level() > geo.grid().lifts() || j.line() > geo.grid().bays()) {
+          continue;
+        }
+        double x = geo.lineX(j.line());
+        double y = geo.levelY(j.level());
+        if (f.kind() == FreedomKind.LOST_RESTRAINT) {
+          lostRestraint(g, x, y, arrowAcross(f));
+        } else {
+          looseEnd(g, x, y);
+        }
+      }
+    }
+  }
+
+  /** Which way the arrow of a lost restraint points: 'h' across standards, 'v' across ledgers. */
+  private static char arrowAcross(Freedom f) {
+    boolean standards = !f.members().isEmpty() && f.members().stream().noneMatch(FrameRef::isLedger);
+    boolean ledgers = !f.members().isEmpty() && f.members().stream().allMatch(FrameRef::isLedger);
+    return standards ? 'h' : ledgers ? 'v' : ' ';
+  }
+
+  /** A white ring with a heavy outline and, across it, a two-headed arrow: free to move sideways. */
+  static void lostRestraint(GraphicsContext g, double x, double y, char across) {
+    double r = 7;
+    g.setLineDashes();
+    g.setFill(Color.WHITE);
+    g.fillOval(x - r, y - r, 2 * r, 2 * r);
+    g.setStroke(Color.BLACK);
+    g.setLineWidth(2.4);
+    g.strokeOval(x - r, y - r, 2 * r, 2 * r);
+    if (across == ' ') {
+      g.setFill(Color.BLACK);
+      g.fillOval(x - 2, y - 2, 4, 4);
+      return;
+    }
+    double a = 15;
+    double dx = across == 'h' ? 1 : 0;
+    double dy = across == 'h' ? 0 : 1;
+    g.setLineWidth(2);
+    g.strokeLine(x - dx * a, y - dy * a, x + dx * a, y + dy * a);
+    g.setFill(Color.BLACK);
+    for (int sign : new int[] {-1, 1}) {
+      double tx = x + sign * dx * a;
+      double ty = y + sign * dy * a;
+      double bx = tx - sign * dx * 5;
+      double by = ty - sign * dy * 5;
+      g.fillPolygon(new double[] {tx, bx - dy * 4, bx + dy * 4}, new double[] {ty, by - dx * 4, by + dx * 4}, 3);
+    }
+  }
+
+  /** A filled triangle, point up, outlined in white: a member end held by nothing else. */
+  static void looseEnd(GraphicsContext g, double x, double y) {
+    double r = 8;
+    double[] xs = {x, x + r, x - r};
+    double[] ys = {y - r, y + r * 0.75, y + r * 0.75};
+    g.setLineDashes();
+    g.setFill(Color.BLACK);
+    g.fillPolygon(xs, ys, 3);
+    g.setStroke(Color.WHITE);
+    g.setLineWidth(1.4);
+    g.strokePolygon(xs, ys, 3);
   }
 
   /**
@@ -636,18 +813,33 @@ public final class PlanePainter {
     return s;
   }
 
-  private static void cursor(GraphicsContext g, PlaneGeometry geo, PanelRef p) {
+  /**
+   * The current panel: a double frame just inside its edges (so its ledgers and standards stay in
+   * sight) with corner brackets outside. With a side selected the frame is thin and dashed, and the
+   * side is boxed and pointed at from inside the panel by two solid triangles.
+   */
+  private static void cursor(GraphicsContext g, PlaneGeometry geo, PanelRef p, FrameRef selected) {
     double x = geo.left(p);
     double y = geo.top(p);
     double w = geo.panelWidth(p);
     double h = geo.panelHeight(p);
+    double in = Math.min(6, Math.min(w, h) * 0.12);
     g.setLineDashes();
-    g.setStroke(Color.WHITE);
-    g.setLineWidth(6);
-    g.strokeRect(x - 1, y - 1, w + 2, h + 2);
+    if (selected == null) {
+      g.setStroke(Color.WHITE);
+      g.setLineWidth(5);
+      g.strokeRect(x + in, y + in, w - 2 * in, h - 2 * in);
+      g.setStroke(CURSOR);
+      g.setLineWidth(2.5);
+      g.strokeRect(x + in, y + in, w - 2 * in, h - 2 * in);
+    } else {
+      g.setStroke(CURSOR);
+      g.setLineWidth(1.2);
+      g.setLineDashes(3, 3);
+      g.strokeRect(x + in, y + in, w - 2 * in, h - 2 * in);
+      g.setLineDashes();
+    }
     g.setStroke(CURSOR);
-    g.setLineWidth(3);
-    g.strokeRect(x - 1, y - 1, w + 2, h + 2);
     double c = Math.min(12, Math.min(w, h) * 0.4);
     g.setLineWidth(4);
     double x0 = x - 3;
@@ -662,5 +854,47 @@ public final class PlanePainter {
     g.strokeLine(x0, y1, x0, y1 - c);
     g.strokeLine(x1, y1, x1 - c, y1);
     g.strokeLine(x1, y1, x1, y1 - c);
+    if (selected != null && selected.within(geo.grid())) {
+      selectedSide(g, geo, p, selected);
+    }
+  }
+
+  /** A box around the selected side and two triangles pointing at it from inside the panel. */
+  private static void selectedSide(GraphicsContext g, PlaneGeometry geo, PanelRef p, FrameRef f) {
+    double[] s = geo.frame(f);
+    double box = 7;
+    double bx = Math.min(s[0], s[2]) - box;
+    double by = Math.min(s[1], s[3]) - box;
+    double bw = Math.abs(s[2] - s[0]) + 2 * box;
+    double bh = Math.abs(s[3] - s[1]) + 2 * box;
+    g.setLineDashes();
+    g.setStroke(Color.WHITE);
+    g.setLineWidth(5);
+    g.strokeRect(bx, by, bw, bh);
+    g.setStroke(CURSOR);
+    g.setLineWidth(2.5);
+    g.strokeRect(bx, by, bw, bh);
+    // triangles inside the panel, pointing at the side
+    double cx = (geo.left(p) + geo.right(p)) / 2;
+    double cy = (geo.top(p) + geo.bottom(p)) / 2;
+    double mx = (s[0] + s[2]) / 2;
+    double my = (s[1] + s[3]) / 2;
+    double dx = Math.signum(mx - cx);
+    double dy = Math.signum(my - cy);
+    double along = f.isLedger() ? (s[2] - s[0]) * 0.25 : (s[1] - s[3]) * 0.25;
+    double size = Math.max(5, Math.min(9, Math.min(geo.panelWidth(p), geo.panelHeight(p)) * 0.12));
+    g.setFill(CURSOR);
+    for (int k : new int[] {-1, 1}) {
+      double tx = f.isLedger() ? mx + k * along : mx - dx * (box + 2);
+      double ty = f.isLedger() ? my - dy * (box + 2) : my + k * along;
+      // the tip at (tx, ty), the base further into the panel
+      double bxx = tx - dx * size * 1.3;
+      double byy = ty - dy * size * 1.3;
+      if (f.isLedger()) {
+        g.fillPolygon(new double[] {tx, bxx - size, bxx + size}, new double[] {ty, byy, byy}, 3);
+      } else {
+        g.fillPolygon(new double[] {tx, bxx, bxx}, new double[] {ty, byy - size, byy + size}, 3);
+      }
+    }
   }
 }

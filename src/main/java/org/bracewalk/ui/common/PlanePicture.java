@@ -5,10 +5,15 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
 import org.bracewalk.core.analysis.Block;
+import org.bracewalk.core.analysis.Freedom;
+import org.bracewalk.core.analysis.FreedomKind;
 import org.bracewalk.core.analysis.RepairBrace;
 import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 
@@ -25,6 +30,12 @@ import org.bracewalk.core.model.PlaneGrid;
  * @param repair proposed braces, in the order they are numbered on the drawing
  * @param changed panels whose finding differs from the previous inspection
  * @param cursor the current panel, or {@code null}
+ * @param frameFindings the state recorded for each frame member looked at (ledgers and standards);
+ *     a member absent here has not been recorded and is drawn as designed
+ * @param selectedMember the side of the current panel selected for a mark (a ledger above or below,
+ *     a standard left or right), or {@code null} when the panel's diagonals are selected
+ * @param freedoms the analysed state's freedoms told apart by kind (joints without sideways
+ *     restraint and loose ends are marked at the joint; a swaying part is hatched), empty for none
  */
 public record PlanePicture(
     PlaneDesign design,
@@ -34,7 +45,23 @@ public record PlanePicture(
     Set<PanelRef> critical,
     List<RepairBrace> repair,
     Set<PanelRef> changed,
-    PanelRef cursor) {
+    PanelRef cursor,
+    Map<FrameRef, PanelState> frameFindings,
+    FrameRef selectedMember,
+    List<Freedom> freedoms) {
+
+  /** A picture without frame findings, selected member or freedoms. */
+  public PlanePicture(
+      PlaneDesign design,
+      Map<PanelRef, PanelFinding> findings,
+      boolean showFindings,
+      List<Block> blocks,
+      Set<PanelRef> critical,
+      List<RepairBrace> repair,
+      Set<PanelRef> changed,
+      PanelRef cursor) {
+    this(design, findings, showFindings, blocks, critical, repair, changed, cursor, Map.of(), null, List.of());
+  }
 
   public PlanePicture {
     Objects.requireNonNull(design, "design");
@@ -43,6 +70,25 @@ public record PlanePicture(
     critical = Set.copyOf(critical);
     repair = List.copyOf(repair);
     changed = Set.copyOf(changed);
+    frameFindings = Map.copyOf(frameFindings);
+    freedoms = List.copyOf(freedoms);
+  }
+
+  /** How the frame member {@code f} is drawn: its recorded state, else as the design has it. */
+  public FrameLook frameLook(FrameRef f) {
+    PanelState s = showFindings ? frameFindings.get(f) : null;
+    return FrameLook.of(s, design.hasFrameMember(f));
+  }
+
+  /** The joints to mark with {@code kind} (lost restraint or loose end), sorted. */
+  public List<Joint> jointsOf(FreedomKind kind) {
+    java.util.TreeSet<Joint> out = new java.util.TreeSet<>();
+    for (Freedom f : freedoms) {
+      if (f.kind() == kind) {
+        out.addAll(f.joints());
+      }
+    }
+    return List.copyOf(out);
   }
 
   /** The design alone, nothing found, nothing analysed. */
@@ -63,8 +109,14 @@ public record PlanePicture(
     return design.braceAt(p);
   }
 
-  /** The shearing panels of the blocks shown. */
+  /**
+   * The shearing panels: from the blocks shown where the frame is complete; where it is not (the
+   * engine names no blocks), every panel with a corner in a part that sways.
+   */
   public SwayRegion sway() {
-    return SwayRegion.of(grid(), blocks);
+    if (!blocks.isEmpty()) {
+      return SwayRegion.of(grid(), blocks);
+    }
+    return SwayRegion.ofJoints(grid(), jointsOf(FreedomKind.SWAY));
   }
 }

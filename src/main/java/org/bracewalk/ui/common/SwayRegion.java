@@ -30,6 +30,25 @@ public record SwayRegion(List<PanelRef> shearing) {
     return shearing.contains(p);
   }
 
+  /** Every panel with a corner among {@code moving} (the joints of a swaying part), lift-then-bay. */
+  public static SwayRegion ofJoints(PlaneGrid grid, List<org.bracewalk.core.model.Joint> moving) {
+    if (moving.isEmpty()) {
+      return new SwayRegion(List.of());
+    }
+    java.util.Set<org.bracewalk.core.model.Joint> set = new java.util.HashSet<>(moving);
+    List<PanelRef> out = new ArrayList<>();
+    for (int i = 1; i <= grid.lifts(); i++) {
+      for (int j = 1; j <= grid.bays(); j++) {
+        if (set.contains(new org.bracewalk.core.model.Joint(i, j)) || set.contains(new org.bracewalk.core.model.Joint(i, j - 1))
+            || set.contains(new org.bracewalk.core.model.Joint(i - 1, j))
+            || set.contains(new org.bracewalk.core.model.Joint(i - 1, j - 1))) {
+          out.add(new PanelRef(i, j));
+        }
+      }
+    }
+    return new SwayRegion(out);
+  }
+
   public static SwayRegion of(PlaneGrid grid, List<Block> blocks) {
     int m = grid.lifts();
     int n = grid.bays();

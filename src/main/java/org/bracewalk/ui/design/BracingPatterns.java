@@ -25,7 +25,7 @@ public final class BracingPatterns {
         put(d, braces, new PanelRef(lift, bay), brace);
       }
     }
-    return new PlaneDesign(d.grid(), braces, d.openings());
+    return new PlaneDesign(d.grid(), braces, d.openings(), d.omittedFrame());
   }
 
   /**
@@ -41,7 +41,7 @@ public final class BracingPatterns {
         put(d, braces, new PanelRef(lift, bay), new Brace(dir, kind));
       }
     }
-    return new PlaneDesign(d.grid(), braces, d.openings());
+    return new PlaneDesign(d.grid(), braces, d.openings(), d.omittedFrame());
   }
 
   /**
@@ -59,12 +59,12 @@ public final class BracingPatterns {
         put(d, braces, new PanelRef(lift, bay), b);
       }
     }
-    return new PlaneDesign(d.grid(), braces, d.openings());
+    return new PlaneDesign(d.grid(), braces, d.openings(), d.omittedFrame());
   }
 
   /** No braces at all; openings stay. */
   public static PlaneDesign clear(PlaneDesign d) {
-    return new PlaneDesign(d.grid(), Map.of(), d.openings());
+    return new PlaneDesign(d.grid(), Map.of(), d.openings(), d.omittedFrame());
   }
 
   private static void put(PlaneDesign d, Map<PanelRef, Brace> braces, PanelRef p, Brace b) {

@@ -27,6 +27,7 @@ import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.KeyHelp;
 import org.bracewalk.ui.common.Legend;
+import org.bracewalk.ui.common.PanelSide;
 import org.bracewalk.ui.common.PlaneCanvas;
 import org.bracewalk.app.verdict.VerdictKind;
 import org.bracewalk.app.verdict.Cautions;
@@ -52,12 +53,17 @@ public final class DesignView extends BorderPane {
 
     canvas.setId("design-canvas");
     canvas.pictureProperty().bind(vm.pictureProperty());
-    canvas.setOnPanelPicked(vm::cycle);
+    canvas.setOnPanelPicked(p -> {
+      vm.clearSide();
+      vm.cycle(p);
+    });
+    canvas.setOnFramePicked(vm::toggleMember);
     VBox.setVgrow(canvas, Priority.ALWAYS);
     Label cursor = Widgets.text(vm.cursorTextProperty());
     cursor.setStyle("-fx-font-weight: bold;");
     setCenter(new VBox(8, canvas, cursor, new Legend(Legend.Set_.DESIGN),
-        Widgets.hint("Click or tap a panel to cycle: none, /, \\, X, opening. Braces drawn dash-dot and numbered are the"
+        Widgets.hint("Click or tap a panel to cycle: none, /, \\, X, opening; click on a ledger or standard to leave it"
+            + " out of the design or put it back. Braces drawn dash-dot and numbered are the"
             + " least set that would make the design rigid (not part of it until you place them).")));
 
     ScrollPane side = new ScrollPane(side());
@@ -165,7 +171,16 @@ public final class DesignView extends BorderPane {
     ToggleButton kind = new ToggleButton("tension-only (T)");
     kind.setOnAction(e -> vm.toggleKind());
     vm.kindProperty().addListener((o, a, b) -> kind.setSelected(b == MemberKind.TENSION_ONLY));
-    VBox braceBox = Widgets.box("Current panel", braceRow, Widgets.row(6, none, opening, kind));
+    Button member = new Button("leave out / put back the selected side (Space)");
+    member.setId("design-frame-toggle");
+    member.setOnAction(e -> {
+      vm.toggleSelectedMember();
+      canvas.requestFocus();
+    });
+    member.disableProperty().bind(vm.sideProperty().isNull());
+    member.setWrapText(true);
+    VBox braceBox = Widgets.box("Current panel", braceRow, Widgets.row(6, none, opening, kind), member,
+        Widgets.hint("Shift+arrow selects the ledger above or below, the standard left or right; Esc the panel again."));
 
     Spinner<Integer> step = new Spinner<>(1, 50, vm.fillStepProperty().get());
     step.getValueFactory().valueProperty().addListener((o, a, b) -> vm.fillStepProperty().set(b));
@@ -238,11 +253,26 @@ public final class DesignView extends BorderPane {
       return;
     }
     boolean handled = true;
+    if (e.isShiftDown()) {
+      switch (e.getCode()) {
+        case UP -> vm.selectSide(PanelSide.LEDGER_ABOVE);
+        case DOWN -> vm.selectSide(PanelSide.LEDGER_BELOW);
+        case LEFT -> vm.selectSide(PanelSide.STANDARD_LEFT);
+        case RIGHT -> vm.selectSide(PanelSide.STANDARD_RIGHT);
+        default -> handled = false;
+      }
+      if (handled) {
+        e.consume();
+        return;
+      }
+      handled = true;
+    }
     switch (e.getCode()) {
       case UP -> vm.move(1, 0);
       case DOWN -> vm.move(-1, 0);
       case LEFT -> vm.move(0, -1);
       case RIGHT -> vm.move(0, 1);
+      case ESCAPE -> vm.clearSide();
       case SLASH -> {
         if (e.isShiftDown()) {
           handled = false;
@@ -255,7 +285,13 @@ public final class DesignView extends BorderPane {
       case PERIOD, DELETE -> vm.setBrace(null);
       case O -> vm.toggleOpening();
       case T -> vm.toggleKind();
-      case SPACE, ENTER -> vm.cycle(vm.cursor());
+      case SPACE, ENTER -> {
+        if (vm.sideProperty().get() != null) {
+          vm.toggleSelectedMember();
+        } else {
+          vm.cycle(vm.cursor());
+        }
+      }
       case K -> vm.fillEveryKthBay(Diagonal.RISING);
       case Z -> vm.fillZigZag();
       case A -> vm.fillEveryPanel();
@@ -270,6 +306,10 @@ public final class DesignView extends BorderPane {
     canvas.requestFocus();
   }
 
+  public PlaneCanvas canvas() {
+    return canvas;
+  }
+
   public static KeyHelp.Section keys() {
     return new KeyHelp.Section(
         "Design editor",
@@ -279,7 +319,8 @@ public final class DesignView extends BorderPane {
             KeyHelp.of(". or Delete", "no brace"),
             KeyHelp.of("O", "opening (never braced) / not an opening"),
             KeyHelp.of("T", "rigid / tension-only"),
-            KeyHelp.of("Space or Enter", "cycle the current panel (as a click does)"),
+            KeyHelp.of("Space or Enter", "cycle the current panel (as a click does); with a side selected, leave it out / put it back"),
+            KeyHelp.of("Shift+Arrows", "select the ledger above or below, the standard left or right (again or Esc: the panel)"),
             KeyHelp.of("K, Z, A", "fill: brace every k bays, zig-zag every k bays, every panel"),
             KeyHelp.of("Alt+ L A W H P", "lifts, bays, widths, heights, support fields; Enter applies"),
             KeyHelp.of("Ctrl+S", "save the design (asks first if it is not rigid)")));

@@ -29,6 +29,7 @@ import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
@@ -37,12 +38,13 @@ import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.PlaneLimits;
 import org.bracewalk.core.model.Support;
 import org.bracewalk.ui.common.DialogService;
+import org.bracewalk.ui.common.PanelSide;
 import org.bracewalk.ui.common.PlanePicture;
 import org.bracewalk.app.verdict.VerdictKind;
 
 /**
  * Edits one plane's design: grid size and dimensions, support, and the brace or opening of each
- * panel, with fill helpers. Every change re-analyses the design, so its verdict, loss tolerance and
+ * panel, the frame members (ledgers, standards) the design leaves out, with fill helpers. Every change re-analyses the design, so its verdict, loss tolerance and
  * the braces that would make it rigid are always current. Saving a design that does not hold its
  * shape asks first.
  */
@@ -60,6 +62,8 @@ public final class DesignViewModel {
   private final ReadOnlyObjectWrapper<PlaneDesign> design = new ReadOnlyObjectWrapper<>(this, "design");
   private final ReadOnlyObjectWrapper<PlanePicture> picture = new ReadOnlyObjectWrapper<>(this, "picture");
   private final ReadOnlyObjectWrapper<PanelRef> cursor = new ReadOnlyObjectWrapper<>(this, "cursor");
+  /** The side of the cursor's panel selected (a ledger or standard), or null: the panel itself. */
+  private final ReadOnlyObjectWrapper<PanelSide> side = new ReadOnlyObjectWrapper<>(this, "side");
   private final ReadOnlyObjectWrapper<VerdictKind> verdictKind = new ReadOnlyObjectWrapper<>(this, "verdictKind");
   private final ReadOnlyStringWrapper verdictText = new ReadOnlyStringWrapper(this, "verdictText");
   /** The verdict's sentence without its symbol, for the save warning. */
@@ -107,6 +111,7 @@ public final class DesignViewModel {
     load(initial);
     dirty.set(false);
     cursor.addListener((o, a, b) -> refreshPicture());
+    side.addListener((o, a, b) -> refreshPicture());
     showSuggestion.addListener((o, a, b) -> refreshPicture());
   }
 
@@ -184,8 +189,17 @@ public final class DesignViewModel {
             Set.copyOf(s.criticalBraces()),
             showSuggestion.get() ? lastAnalysis.repair().braces() : List.of(),
             Set.of(),
-            cursor.get()));
+            cursor.get(),
+            Map.of(),
+            selectedMember(),
+            s.freedoms()));
     cursorText.set(describe(cursor.get()));
+  }
+
+  /** The ledger or standard selected, or null when the panel itself is. */
+  public FrameRef selectedMember() {
+    PanelRef c = cursor.get();
+    return side.get() == null || c == null ? null : side.get().of(c);
   }
 
   private String describe(PanelRef p) {
@@ -196,7 +210,71 @@ public final class DesignViewModel {
     Brace b = d.braceAt(p);
     String what = d.isOpening(p) ? "opening" : b == null ? "no brace" : b.token() + " (" + b.kind().label() + ")";
     boolean critical = lastAnalysis.design().criticalBraces().contains(p);
-    return "Lift " + p.lift() + ", bay " + p.bay() + ": " + what + (critical ? ", critical" : "");
+    List<String> out = new ArrayList<>();
+    for (PanelSide ps : PanelSide.values()) {
+      if (!d.hasFrameMember(ps.of(p))) {
+        out.add(ps.words());
+      }
+    }
+    String frame = out.isEmpty() ? "" : "; left out: " + String.join(", ", out);
+    FrameRef m = selectedMember();
+    String selected = m == null ? ""
+        : " \u2014 selected: " + m + (d.hasFrameMember(m) ? " (in the design)" : " (left out of the design)")
+            + (lastAnalysis.design().criticalMembers().contains(m) ? ", critical" : "");
+    return "Lift " + p.lift() + ", bay " + p.bay() + ": " + what + (critical ? ", critical" : "") + frame + selected;
+  }
+
+  // ---- frame members --------------------------------------------------------------------------
+
+  /**
+   * Selects {@code s} of the current panel (a ledger or standard); selecting the side already
+   * selected goes back to the panel itself.
+   */
+  public void selectSide(PanelSide s) {
+    side.set(s == side.get() ? null : s);
+  }
+
+  /** Back to the panel itself (its diagonal). */
+  public void clearSide() {
+    side.set(null);
+  }
+
+  /** Leaves the selected ledger or standard out of the design, or puts it back; false when none is selected. */
+  public boolean toggleSelectedMember() {
+    FrameRef m = selectedMember();
+    if (m == null) {
+      error.set("No ledger or standard selected: Shift and an arrow key select one side of the current panel.");
+      return false;
+    }
+    toggleMember(m);
+    return true;
+  }
+
+  /**
+   * A click or tap on a ledger or standard: selects it (the cursor goes to a panel it borders) and
+   * leaves it out of the design, or puts it back.
+   */
+  public void toggleMember(FrameRef m) {
+    PlaneDesign d = design.get();
+    if (!m.within(d.grid())) {
+      return;
+    }
+    PanelRef c = cursor.get();
+    PanelSide here = c == null ? null : PanelSide.of(c, m);
+    if (here == null) {
+      PanelSide.Placed placed = PanelSide.place(m);
+      cursor.set(placed.panel());
+      here = placed.side();
+    }
+    side.set(here);
+    Set<FrameRef> omitted = new HashSet<>(d.omittedFrame());
+    boolean out = !omitted.remove(m);
+    if (out) {
+      omitted.add(m);
+    }
+    error.set("");
+    setDesign(d.withOmittedFrame(omitted));
+    status.set((out ? "Left out of the design: " : "Back in the design: ") + m + ".");
   }
 
   // ---- panel editing --------------------------------------------------------------------------
@@ -217,7 +295,7 @@ public final class DesignViewModel {
       braces.put(p, new Brace(diagonal, kind.get()));
     }
     error.set("");
-    setDesign(new PlaneDesign(d.grid(), braces, openings));
+    setDesign(new PlaneDesign(d.grid(), braces, openings, d.omittedFrame()));
   }
 
   /** Makes the cursor's panel an opening (its brace, if any, goes), or back to an empty panel. */
@@ -230,7 +308,7 @@ public final class DesignViewModel {
       openings.add(p);
       braces.remove(p);
     }
-    setDesign(new PlaneDesign(d.grid(), braces, openings));
+    setDesign(new PlaneDesign(d.grid(), braces, openings, d.omittedFrame()));
   }
 
   /** Switches the cursor's brace between rigid and tension-only; also the kind of new braces. */
@@ -282,7 +360,8 @@ public final class DesignViewModel {
   // ---- grid -----------------------------------------------------------------------------------
 
   /**
-   * Applies the lifts, bays, widths, heights and support fields. Braces outside the new grid go; a
+   * Applies the lifts, bays, widths, heights and support fields. Braces and left-out frame members
+   * outside the new grid go; a
    * width or height list of one value applies to every bay or lift; a shorter list is an error.
    * On any error nothing changes and the message names the field.
    */
@@ -319,10 +398,16 @@ public final class DesignViewModel {
           openings.add(p);
         }
       });
+      Set<FrameRef> omitted = new HashSet<>();
+      old.omittedFrame().forEach(f -> {
+        if (f.within(g)) {
+          omitted.add(f);
+        }
+      });
       widths.set(numbers(w));
       heights.set(numbers(h));
       error.set("");
-      setDesign(new PlaneDesign(g, braces, openings));
+      setDesign(new PlaneDesign(g, braces, openings, omitted));
       return true;
     } catch (IllegalArgumentException e) {
       error.set(e.getMessage());
@@ -506,6 +591,10 @@ public final class DesignViewModel {
 
   public PanelRef cursor() {
     return cursor.get();
+  }
+
+  public ReadOnlyObjectProperty<PanelSide> sideProperty() {
+    return side.getReadOnlyProperty();
   }
 
   public ReadOnlyObjectProperty<VerdictKind> verdictKindProperty() {

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Objects;
 import org.bracewalk.app.InspectionService;
 import org.bracewalk.app.NewObservation;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelRef;
 
@@ -36,10 +37,18 @@ public final class InspectionMarkRecorder implements MarkRecorder {
   }
 
   @Override
+  public RecordedMark recordMember(FrameRef member, PanelRef panel, Mark mark) {
+    Observation o = inspections.record(inspectionId, observation(member, mark), mark.photos()).observation();
+    return new RecordedMark(o.id(), panel, mark, member);
+  }
+
+  @Override
   public RecordedMark correct(RecordedMark earlier, Mark replacement, String reason) {
-    Observation o = inspections.correct(inspectionId, earlier.id(),
-        observation(earlier.panel(), replacement), reason, replacement.photos()).observation();
-    return new RecordedMark(o.id(), earlier.panel(), replacement);
+    NewObservation n = earlier.onFrame()
+        ? observation(earlier.member(), replacement)
+        : observation(earlier.panel(), replacement);
+    Observation o = inspections.correct(inspectionId, earlier.id(), n, reason, replacement.photos()).observation();
+    return new RecordedMark(o.id(), earlier.panel(), replacement, earlier.member());
   }
 
   private NewObservation observation(PanelRef panel, Mark m) {
@@ -48,12 +57,24 @@ public final class InspectionMarkRecorder implements MarkRecorder {
         m.note(), recordedBy);
   }
 
-  /** The marks already recorded for the plane in this inspection: the latest per panel. */
+  /** A frame member's observation: state, defect, bow, note; never a diagonal found. */
+  private NewObservation observation(FrameRef member, Mark m) {
+    return new NewObservation(
+        planeId, null, m.state(), null, m.bowMm(), m.gaugeLengthMm(), m.defect(), m.note(), recordedBy, member);
+  }
+
+  /**
+   * The marks already recorded for the plane in this inspection: the latest per panel, then the
+   * latest per frame member (each placed at a panel it borders, where the cursor goes on undo).
+   */
   public static List<RecordedMark> existing(InspectionService inspections, long inspectionId, long planeId) {
     List<RecordedMark> out = new ArrayList<>();
     inspections.latestObservations(inspectionId, planeId).forEach((p, o) -> out.add(
         new RecordedMark(o.id(), p,
             new Mark(o.state(), o.memberFound(), o.defect(), o.bowMm(), o.gaugeLengthMm(), o.note(), List.of()))));
+    inspections.latestFrameObservations(inspectionId, planeId).forEach((f, o) -> out.add(
+        new RecordedMark(o.id(), org.bracewalk.ui.common.PanelSide.place(f).panel(),
+            new Mark(o.state(), null, o.defect(), o.bowMm(), o.gaugeLengthMm(), o.note(), List.of()), f)));
     return out;
   }
 }

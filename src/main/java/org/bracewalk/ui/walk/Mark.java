@@ -9,7 +9,7 @@ import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelState;
 
 /**
- * What the inspector records for one panel.
+ * What the inspector records for one panel's diagonals or one frame member.
  *
  * @param state the state found
  * @param memberFound the member actually there when it differs from what the state implies (the
@@ -36,7 +36,8 @@ public record Mark(
     Objects.requireNonNull(state, "state");
     note = note == null ? "" : note.strip();
     photos = List.copyOf(photos);
-    new PanelFinding(state, memberFound); // the same rule: an extra member must be named
+    // a mark on a panel's diagonals names an extra member ({@link #finding()} holds that rule); a
+    // mark on a frame member names none, extra or not
     if (bowMm != null && gaugeLengthMm == null) {
       gaugeLengthMm = STANDARD_GAUGE_MM;
     }
@@ -46,6 +47,7 @@ public record Mark(
     return new Mark(state, null, null, null, null, "", List.of());
   }
 
+  /** The finding of a panel's diagonals; an extra member must be named. */
   public PanelFinding finding() {
     return new PanelFinding(state, memberFound);
   }

@@ -11,6 +11,7 @@ import javafx.beans.property.StringProperty;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
@@ -64,6 +65,35 @@ final class MarkDetails {
       state = PanelState.EXTRA;
     }
     return new Mark(state, seen, defect.get(), bow, bow == null ? null : Mark.STANDARD_GAUGE_MM, note.get(),
+        List.copyOf(photos));
+  }
+
+  /**
+   * The mark of {@code state} on the frame member {@code f} with the details entered and {@code
+   * photos}. A member the design leaves out found sound is recorded as there although not designed
+   * (extra).
+   *
+   * @throws IllegalArgumentException naming the member or field when the details do not make a mark
+   */
+  Mark buildMember(PanelState state, FrameRef f, List<Path> photos) {
+    Double bow = parseBow(bowMm.get());
+    if (memberSeen.get() != null) {
+      throw new IllegalArgumentException("Member seen (" + memberSeen.get().symbol() + ") names a panel's diagonal,"
+          + " not the " + f + ": press . to clear it, then mark again. Nothing was recorded.");
+    }
+    boolean designed = design.hasFrameMember(f);
+    if (state == PanelState.EXTRA && designed) {
+      throw new IllegalArgumentException("The " + f + " is in the design, so one there is not extra."
+          + " Mark it S (sound). Nothing was recorded.");
+    }
+    if (state == PanelState.MISSING && !designed) {
+      throw new IllegalArgumentException("The " + f + " is left out of the design, so it cannot be missing;"
+          + " mark E if one is there. Nothing was recorded.");
+    }
+    if (state == PanelState.SOUND && !designed) {
+      state = PanelState.EXTRA;
+    }
+    return new Mark(state, null, defect.get(), bow, bow == null ? null : Mark.STANDARD_GAUGE_MM, note.get(),
         List.copyOf(photos));
   }
 

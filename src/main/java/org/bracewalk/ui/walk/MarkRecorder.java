@@ -1,5 +1,6 @@
 package org.bracewalk.ui.walk;
 
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 
 /**
@@ -12,6 +13,12 @@ public interface MarkRecorder {
   /** Commits a first mark for {@code panel}. */
   RecordedMark record(PanelRef panel, Mark mark);
 
-  /** Commits a mark that supersedes {@code earlier}, saying why. */
+  /**
+   * Commits a first mark for the frame member {@code member}, marked from {@code panel} (a panel
+   * it borders). The mark names no diagonal found.
+   */
+  RecordedMark recordMember(FrameRef member, PanelRef panel, Mark mark);
+
+  /** Commits a mark that supersedes {@code earlier} (of a panel or of a frame member), saying why. */
   RecordedMark correct(RecordedMark earlier, Mark replacement, String reason);
 }

@@ -9,6 +9,7 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Executor;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 
 /**
@@ -17,7 +18,8 @@ import org.bracewalk.core.model.PanelRef;
  *
  * <p>A write takes a {@link #ticket()} and is queued with {@link #mark} or {@link #undo} on the UI
  * thread, and runs on the ordered queue ({@link InOrder}). The chain of record ids lives on that queue: the latest stored record of
- * each panel, so a second mark or an undo corrects exactly the record before it (a correction
+ * each panel's diagonals and of each frame member (a write names the member, else it is of the
+ * panel's diagonals), so a second mark or an undo corrects exactly the record before it (a correction
  * supersedes the previous observation), whatever the screen shows meanwhile. Before a mark is
  * written, its photo files are checked there (gone, empty, too large, not a JPEG or PNG); a mark
  * with a photo that cannot be kept is not written at all. The answer comes back through the UI
@@ -30,11 +32,14 @@ final class MarkWrites {
     /** Write {@code ticket} is in the record as {@code made}. */
     void stored(long ticket, RecordedMark made);
 
-    /** Write {@code ticket} of {@code mark} on {@code panel} is not in the record, because {@code why}. */
-    void refused(long ticket, PanelRef panel, Mark mark, String why);
+    /**
+     * Write {@code ticket} of {@code mark} on {@code panel} (on its frame member {@code member} when
+     * not null) is not in the record, because {@code why}.
+     */
+    void refused(long ticket, PanelRef panel, FrameRef member, Mark mark, String why);
 
     /** Undo {@code ticket} wrote nothing: the mark it undoes never reached the record. */
-    void passedOver(long ticket, PanelRef panel);
+    void passedOver(long ticket, PanelRef panel, FrameRef member);
   }
 
   private final MarkRecorder recorder;
@@ -44,8 +49,8 @@ final class MarkWrites {
   private long tickets;
 
   // ---- held on the queue only ----
-  /** The latest stored record of each panel. */
-  private final Map<PanelRef, RecordedMark> stored = new HashMap<>();
+  /** The latest stored record of each panel's diagonals (by panel) and of each frame member (by member). */
+  private final Map<Object, RecordedMark> stored = new HashMap<>();
   /** The marks that did not reach the record (an undo of one writes nothing). */
   private final Set<Long> refused = new HashSet<>();
 
@@ -61,7 +66,12 @@ final class MarkWrites {
     this.queue = new InOrder(Objects.requireNonNull(writes, "writes"));
     this.outcome = Objects.requireNonNull(outcome, "outcome");
     List<RecordedMark> copy = List.copyOf(existing);
-    queue.execute(() -> copy.forEach(r -> stored.put(r.panel(), r)));
+    queue.execute(() -> copy.forEach(r -> stored.put(key(r.panel(), r.member()), r)));
+  }
+
+  /** What a record is kept under: its frame member, else its panel. */
+  static Object key(PanelRef panel, FrameRef member) {
+    return member != null ? member : panel;
   }
 
   /** Runs {@code work} on the queue, after every write queued before it (file work of the walk-round). */
@@ -79,6 +89,11 @@ final class MarkWrites {
    * the panel's latest record saying {@code reason}.
    */
   void mark(long ticket, PanelRef panel, Mark mark, String reason) {
+    mark(ticket, panel, null, mark, reason);
+  }
+
+  /** As above, for the frame member {@code member} (marked from {@code panel}) when not null. */
+  void mark(long ticket, PanelRef panel, FrameRef member, Mark mark, String reason) {
     queue.execute(() -> {
       List<String> bad = new ArrayList<>();
       for (var photo : mark.photos()) {
@@ -88,10 +103,10 @@ final class MarkWrites {
       if (!bad.isEmpty()) {
         refused.add(ticket);
         String why = "a photo cannot be kept: " + String.join("; ", bad);
-        ui.execute(() -> outcome.refused(ticket, panel, mark, why));
+        ui.execute(() -> outcome.refused(ticket, panel, member, mark, why));
         return;
       }
-      write(ticket, panel, mark, reason);
+      write(ticket, panel, member, mark, reason);
     });
   }
 
@@ -99,28 +114,33 @@ final class MarkWrites {
    * Queues the undo of write {@code undone}: a correction of the panel's latest record back to
    * {@code back}. Nothing is written when {@code undone} never reached the record.
    */
-  void undo(long ticket, long undone, PanelRef panel, Mark back, String reason) {
+  void undo(long ticket, long undone, PanelRef panel, FrameRef member, Mark back, String reason) {
     queue.execute(() -> {
       if (refused.contains(undone)) {
-        ui.execute(() -> outcome.passedOver(ticket, panel));
+        ui.execute(() -> outcome.passedOver(ticket, panel, member));
         return;
       }
-      write(ticket, panel, back, reason);
+      write(ticket, panel, member, back, reason);
     });
   }
 
-  private void write(long ticket, PanelRef panel, Mark mark, String reason) {
-    RecordedMark before = stored.get(panel);
+  private void write(long ticket, PanelRef panel, FrameRef member, Mark mark, String reason) {
+    Object key = key(panel, member);
+    RecordedMark before = stored.get(key);
     RecordedMark made;
     try {
-      made = before == null ? recorder.record(panel, mark) : recorder.correct(before, mark, reason);
+      if (before != null) {
+        made = recorder.correct(before, mark, reason);
+      } else {
+        made = member == null ? recorder.record(panel, mark) : recorder.recordMember(member, panel, mark);
+      }
     } catch (RuntimeException e) {
       refused.add(ticket);
       String why = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
-      ui.execute(() -> outcome.refused(ticket, panel, mark, why));
+      ui.execute(() -> outcome.refused(ticket, panel, member, mark, why));
       return;
     }
-    stored.put(panel, made);
+    stored.put(key, made);
     ui.execute(() -> outcome.stored(ticket, made));
   }
 }

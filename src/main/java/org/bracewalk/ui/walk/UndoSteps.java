@@ -5,6 +5,7 @@ import java.util.Deque;
 import java.util.Optional;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 
 /**
@@ -14,9 +15,14 @@ import org.bracewalk.core.model.PanelRef;
 final class UndoSteps {
   /**
    * One mark made in this session: the panel, what it held before (null: nothing), the mark made,
-   * and the ticket of its write.
+   * the ticket of its write, and the frame member marked (null: the panel's diagonals).
    */
-  record Step(PanelRef panel, Mark before, Mark made, long ticket) {}
+  record Step(PanelRef panel, Mark before, Mark made, long ticket, FrameRef member) {
+    /** A mark on the panel's diagonals. */
+    Step(PanelRef panel, Mark before, Mark made, long ticket) {
+      this(panel, before, made, ticket, null);
+    }
+  }
 
   private final Deque<Step> steps = new ArrayDeque<>();
   private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper(this, "canUndo");

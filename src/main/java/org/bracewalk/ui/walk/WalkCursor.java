@@ -1,54 +1,88 @@
 package org.bracewalk.ui.walk;
 
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.function.Predicate;
+import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.ui.common.PanelSide;
 
-/** The walk order and the cursor that walks it. One job: where the inspector is. */
+/**
+ * The walk order and the cursor that walks it: the current panel and, when one is selected, the
+ * side of it (a ledger or standard). One job: where the inspector is. The walk order takes in the
+ * frame members or not ({@link #frameInWalkProperty()}); either way any side can be selected.
+ */
 final class WalkCursor {
   private final PlaneGrid grid;
-  private final Predicate<PanelRef> marked;
+  private final Predicate<WalkStop> marked;
   private final ObjectProperty<WalkOrder> order = new SimpleObjectProperty<>(this, "order");
+  private final BooleanProperty frameInWalk = new SimpleBooleanProperty(this, "frameInWalk", false);
   private final ReadOnlyObjectWrapper<PanelRef> cursor = new ReadOnlyObjectWrapper<>(this, "cursor");
-  private List<PanelRef> sequence;
+  private final ReadOnlyObjectWrapper<PanelSide> side = new ReadOnlyObjectWrapper<>(this, "side");
+  private List<WalkStop> sequence;
+  private Map<WalkStop, Integer> index;
 
   /**
    * @param grid the plane's grid
-   * @param marked true for a panel that already holds a mark (the cursor starts on the first that does not)
+   * @param marked true for a stop that already holds a mark (the cursor starts on the first that does not)
    */
-  WalkCursor(PlaneGrid grid, Predicate<PanelRef> marked) {
+  WalkCursor(PlaneGrid grid, Predicate<WalkStop> marked) {
     this.grid = grid;
     this.marked = marked;
     order.set(WalkOrder.BAYS_UP_AND_DOWN);
-    sequence = order.get().sequence(grid);
-    order.addListener((obs, a, b) -> sequence = b.sequence(grid));
-    cursor.set(firstUnmarked());
+    rebuild();
+    order.addListener((obs, a, b) -> rebuild());
+    frameInWalk.addListener((obs, a, b) -> rebuild());
+    set(firstUnmarked());
   }
 
-  /** Moves to the next panel in the walk order; false when already on the last. */
+  private void rebuild() {
+    sequence = order.get().stops(grid, frameInWalk.get());
+    index = new HashMap<>(sequence.size() * 2);
+    for (int i = 0; i < sequence.size(); i++) {
+      index.put(sequence.get(i), i);
+    }
+  }
+
+  /** Where the current stop is in the sequence; a side outside the walk counts as its panel's diagonals. */
+  private int here() {
+    Integer i = index.get(stop());
+    if (i == null) {
+      i = index.get(WalkStop.of(cursor.get()));
+    }
+    return i == null ? 0 : i;
+  }
+
+  /** Moves to the next stop in the walk order; false when already on the last. */
   boolean next() {
-    int i = sequence.indexOf(cursor.get());
+    int i = here();
     if (i < sequence.size() - 1) {
-      cursor.set(sequence.get(i + 1));
+      set(sequence.get(i + 1));
       return true;
     }
     return false;
   }
 
-  /** Moves to the previous panel in the walk order (stays on the first). */
+  /** Moves to the previous stop in the walk order (stays on the first). */
   void previous() {
-    int i = sequence.indexOf(cursor.get());
-    if (i > 0) {
-      cursor.set(sequence.get(i - 1));
+    int i = here();
+    WalkStop s = stop();
+    if (!index.containsKey(s)) {
+      set(sequence.get(i)); // off the walk: back to the panel's diagonals first
+    } else if (i > 0) {
+      set(sequence.get(i - 1));
     }
   }
 
-  /** Moves by whole panels: {@code dLift} up, {@code dBay} right, stopping at edges. */
+  /** Moves by whole panels: {@code dLift} up, {@code dBay} right, stopping at edges; the side selected stays. */
   void move(int dLift, int dBay) {
     PanelRef p = cursor.get();
     int lift = Math.max(1, Math.min(grid.lifts(), p.lift() + dLift));
@@ -56,18 +90,43 @@ final class WalkCursor {
     cursor.set(new PanelRef(lift, bay));
   }
 
-  /** Puts the cursor on {@code p} when it is in the grid. */
+  /** Puts the cursor on {@code p}'s diagonals when it is in the grid. */
   void select(PanelRef p) {
     if (grid.contains(p)) {
-      cursor.set(p);
+      set(WalkStop.of(p));
     }
   }
 
-  /** The first panel, in walk order, that has no mark yet (else the first panel). */
-  PanelRef firstUnmarked() {
-    for (PanelRef p : sequence) {
-      if (!marked.test(p)) {
-        return p;
+  /**
+   * Selects {@code s} of the current panel; selecting the side already selected goes back to the
+   * panel's diagonals.
+   */
+  void selectSide(PanelSide s) {
+    side.set(s == side.get() ? null : s);
+  }
+
+  /**
+   * Selects the frame member {@code f}: as a side of the current panel when it borders it, else
+   * of a panel it borders.
+   */
+  void selectMember(FrameRef f) {
+    if (!f.within(grid)) {
+      return;
+    }
+    PanelSide s = PanelSide.of(cursor.get(), f);
+    if (s != null) {
+      side.set(s);
+    } else {
+      PanelSide.Placed placed = PanelSide.place(f);
+      set(new WalkStop(placed.panel(), placed.side()));
+    }
+  }
+
+  /** The first stop, in walk order, that has no mark yet (else the first stop). */
+  WalkStop firstUnmarked() {
+    for (WalkStop s : sequence) {
+      if (!marked.test(s)) {
+        return s;
       }
     }
     return sequence.get(0);
@@ -79,12 +138,19 @@ final class WalkCursor {
     order.set(all[(order.get().ordinal() + 1) % all.length]);
   }
 
-  /** Where {@code c} is in the walk order, from 1. */
-  int position(PanelRef c) {
-    return sequence.indexOf(c) + 1;
+  /** Where {@code s} is in the walk order, from 1; 0 when the walk does not take it in. */
+  int position(WalkStop s) {
+    Integer i = index.get(s);
+    return i == null ? 0 : i + 1;
   }
 
+  /** The panels of the walk, in order (each once). */
   List<PanelRef> sequence() {
+    return order.get().sequence(grid);
+  }
+
+  /** Every stop of the walk, in order. */
+  List<WalkStop> stops() {
     return List.copyOf(sequence);
   }
 
@@ -96,15 +162,34 @@ final class WalkCursor {
     return order;
   }
 
+  BooleanProperty frameInWalkProperty() {
+    return frameInWalk;
+  }
+
   ReadOnlyObjectProperty<PanelRef> cursorProperty() {
     return cursor.getReadOnlyProperty();
+  }
+
+  ReadOnlyObjectProperty<PanelSide> sideProperty() {
+    return side.getReadOnlyProperty();
   }
 
   PanelRef get() {
     return cursor.get();
   }
 
+  /** The stop the cursor stands on. */
+  WalkStop stop() {
+    return new WalkStop(cursor.get(), side.get());
+  }
+
+  /** Puts the cursor on {@code s} (the side first, so a listener of the panel sees both). */
+  void set(WalkStop s) {
+    side.set(s.side());
+    cursor.set(s.panel());
+  }
+
   void set(PanelRef p) {
-    cursor.set(p);
+    set(WalkStop.of(p));
   }
 }

@@ -1,9 +1,13 @@
 package org.bracewalk.ui.walk;
 
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Set;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.ui.common.PanelSide;
 
 /** The orders in which the cursor walks a plane. */
 public enum WalkOrder {
@@ -50,6 +54,32 @@ public enum WalkOrder {
         for (int i = 1; i <= m; i++) {
           for (int j = 1; j <= n; j++) {
             out.add(new PanelRef(i, j));
+          }
+        }
+      }
+    }
+    return out;
+  }
+
+  /** The order in which the sides of a panel are walked: below, left, right, above. */
+  private static final List<PanelSide> SIDES = List.of(
+      PanelSide.LEDGER_BELOW, PanelSide.STANDARD_LEFT, PanelSide.STANDARD_RIGHT, PanelSide.LEDGER_ABOVE);
+
+  /**
+   * The stops of a walk in this order: each panel's diagonals, and with {@code frame} also every
+   * ledger and standard once, at the first panel it borders (below, left, right, above, after the
+   * panel's diagonals).
+   */
+  public List<WalkStop> stops(PlaneGrid grid, boolean frame) {
+    List<PanelRef> panels = sequence(grid);
+    List<WalkStop> out = new ArrayList<>(frame ? panels.size() * 3 + grid.lifts() + grid.bays() + 1 : panels.size());
+    Set<FrameRef> seen = new HashSet<>();
+    for (PanelRef p : panels) {
+      out.add(WalkStop.of(p));
+      if (frame) {
+        for (PanelSide s : SIDES) {
+          if (seen.add(s.of(p))) {
+            out.add(new WalkStop(p, s));
           }
         }
       }

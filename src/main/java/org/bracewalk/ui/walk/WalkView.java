@@ -29,6 +29,7 @@ import org.bracewalk.core.model.PanelState;
 import org.bracewalk.ui.common.KeyHelp;
 import org.bracewalk.ui.common.Legend;
 import org.bracewalk.ui.common.PanelLook;
+import org.bracewalk.ui.common.PanelSide;
 import org.bracewalk.ui.common.PlaneCanvas;
 import org.bracewalk.ui.common.SteadyBox;
 import org.bracewalk.ui.common.Widgets;
@@ -91,6 +92,7 @@ public final class WalkView extends BorderPane {
     canvas.setId("walk-canvas");
     canvas.pictureProperty().bind(vm.pictureProperty());
     canvas.setOnPanelPicked(vm::select);
+    canvas.setOnFramePicked(vm::selectMember);
     VBox.setVgrow(canvas, Priority.ALWAYS);
     Label cursorText = Widgets.text(vm.cursorTextProperty());
     cursorText.setId("walk-cursor");
@@ -199,7 +201,9 @@ public final class WalkView extends BorderPane {
       states.add(b, i % 2, i / 2);
     }
     VBox marks = Widgets.box("Mark the current panel (then it moves on)", states,
-        Widgets.hint("S or Space = sound. The mark is saved at once; Backspace or Ctrl+Z undoes the last one (kept as a correction)."));
+        Widgets.hint("S or Space = sound. The mark is saved at once; Backspace or Ctrl+Z undoes the last one (kept as a correction)."),
+        Widgets.hint("Shift+arrow selects a side of the panel (ledger above or below, standard left or right): the same"
+            + " keys then mark it. Esc goes back to the panel's diagonals."));
 
     ToggleGroup seen = new ToggleGroup();
     HBox seenRow = Widgets.row(6);
@@ -311,7 +315,12 @@ public final class WalkView extends BorderPane {
     order.valueProperty().bindBidirectional(vm.orderProperty());
     order.setFocusTraversable(false);
     order.setMaxWidth(Double.MAX_VALUE);
-    VBox orderBox = Widgets.box("Walk order (O changes it)", order);
+    javafx.scene.control.CheckBox frameInWalk = new javafx.scene.control.CheckBox("take in every ledger and standard (W)");
+    frameInWalk.setId("walk-frame-in-walk");
+    frameInWalk.selectedProperty().bindBidirectional(vm.frameInWalkProperty());
+    frameInWalk.setFocusTraversable(false);
+    frameInWalk.setWrapText(true);
+    VBox orderBox = Widgets.box("Walk order (O changes it)", order, frameInWalk);
     VBox side = new SteadyBox(10, marks, member, detailBox, orderBox, undo);
     side.getStyleClass().add("side");
     return side;
@@ -339,6 +348,20 @@ public final class WalkView extends BorderPane {
       return;
     }
     boolean handled = true;
+    if (e.isShiftDown()) {
+      switch (e.getCode()) {
+        case UP -> vm.selectSide(PanelSide.LEDGER_ABOVE);
+        case DOWN -> vm.selectSide(PanelSide.LEDGER_BELOW);
+        case LEFT -> vm.selectSide(PanelSide.STANDARD_LEFT);
+        case RIGHT -> vm.selectSide(PanelSide.STANDARD_RIGHT);
+        default -> handled = false;
+      }
+      if (handled) {
+        e.consume();
+        return;
+      }
+      handled = true;
+    }
     switch (e.getCode()) {
       case S, SPACE, DIGIT1, NUMPAD1 -> vm.mark(PanelState.SOUND);
       case D, DIGIT2, NUMPAD2 -> vm.mark(PanelState.DAMAGED_EFFECTIVE);
@@ -375,6 +398,8 @@ public final class WalkView extends BorderPane {
       case G -> vm.addCameraPhotos(e.isShiftDown());
       case K -> key.setExpanded(!key.isExpanded());
       case O -> vm.cycleOrder();
+      case W -> vm.toggleFrameInWalk();
+      case ESCAPE -> vm.backToPanel();
       default -> handled = false;
     }
     if (handled) {
@@ -404,9 +429,12 @@ public final class WalkView extends BorderPane {
             KeyHelp.of("R, 6", "not reachable (counts as not inspected)"),
             KeyHelp.of("Backspace, Ctrl+Z", "undo the last mark (recorded as a correction)"),
             KeyHelp.of("Arrows", "move the cursor one panel"),
+            KeyHelp.of("Shift+Arrows", "select the ledger above or below, the standard left or right: the state keys mark it"),
+            KeyHelp.of("Esc", "back to the panel's diagonals"),
             KeyHelp.of("N / B, PgDn / PgUp", "next / back in the walk order"),
             KeyHelp.of("Home", "first panel not yet marked"),
             KeyHelp.of("O", "change the walk order"),
+            KeyHelp.of("W", "walk every ledger and standard too / the diagonals only"),
             KeyHelp.of("/  \\  X  .", "member seen: rising, falling, cross, follows the state"),
             KeyHelp.of("T", "member seen is tension-only / rigid"),
             KeyHelp.of("Alt+ D B O", "defect, bow, note fields; Enter or Esc back to the plane"),

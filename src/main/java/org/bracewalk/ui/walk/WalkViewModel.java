@@ -29,6 +29,7 @@ import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.DefectType;
 import org.bracewalk.core.model.Diagonal;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.MemberKind;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
@@ -36,6 +37,7 @@ import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.ui.common.DialogService;
+import org.bracewalk.ui.common.PanelSide;
 import org.bracewalk.ui.common.PlanePicture;
 import org.bracewalk.ui.common.VerdictWords;
 
@@ -44,7 +46,8 @@ import org.bracewalk.ui.common.VerdictWords;
  * cursor and walk order ({@link WalkCursor}), the marks so far ({@link MarkedPanels}), the detail
  * fields ({@link MarkDetails}), the photos and camera folder ({@link PhotoAttachment}), the live
  * verdict and banner ({@link LiveVerdict}), undo ({@link UndoSteps}) and the writes ({@link
- * MarkWrites}). One command records a state for the current panel and moves on. Undo records a
+ * MarkWrites}). One command records a state for the current panel's diagonals, or for the side of
+ * it selected (a ledger above or below, a standard left or right: {@link MarkedFrame}), and moves on. Undo records a
  * correction (the earlier state, or "not inspected"), never a deletion.
  *
  * <p>Recording: the screen shows a mark at once (the picture, the cursor, the status) and queues
@@ -74,15 +77,20 @@ public final class WalkViewModel {
   private final MarkedPanels marks;
   /** The marks as stored: as the record confirms them; the live verdict is drawn from these. */
   private final MarkedPanels stored;
+  /** The marks on frame members as shown. */
+  private final MarkedFrame frame;
+  /** The marks on frame members as stored. */
+  private final MarkedFrame storedFrame;
+  private FrameInWalkSetting frameSetting = FrameInWalkSetting.inMemory();
   private final MarkWrites writes;
-  /** Writes queued and not yet answered, by panel. */
-  private final Map<PanelRef, Integer> pending = new HashMap<>();
+  /** Writes queued and not yet answered, by panel (diagonals) or frame member. */
+  private final Map<Object, Integer> pending = new HashMap<>();
   /** What the status says once a write is stored, by ticket (given the record id). */
   private final Map<Long, LongFunction<String>> saidWhenStored = new HashMap<>();
   /** The undo steps whose correction is queued, by ticket (put back if it fails). */
   private final Map<Long, UndoSteps.Step> undoing = new HashMap<>();
-  /** The marks that did not reach the record, by panel, until the panel is stored again. */
-  private final Map<PanelRef, String> unsaved = new LinkedHashMap<>();
+  /** The marks that did not reach the record, by panel or frame member, until it is stored again. */
+  private final Map<Object, String> unsaved = new LinkedHashMap<>();
   private long newestTicket;
   private final WalkCursor cursor;
   private final MarkDetails details;
@@ -146,10 +154,18 @@ public final class WalkViewModel {
     this.analyzer = Objects.requireNonNull(analyzer, "analyzer");
     Objects.requireNonNull(dialogs, "dialogs");
     this.readOnly.set(readOnly);
-    this.marks = new MarkedPanels(design, existing);
-    this.stored = new MarkedPanels(design, existing);
+    List<RecordedMark> onPanels = new java.util.ArrayList<>();
+    List<RecordedMark> onFrame = new java.util.ArrayList<>();
+    for (RecordedMark r : existing) {
+      (r.onFrame() ? onFrame : onPanels).add(r);
+    }
+    this.marks = new MarkedPanels(design, onPanels);
+    this.stored = new MarkedPanels(design, onPanels);
+    this.frame = new MarkedFrame(design, onFrame);
+    this.storedFrame = new MarkedFrame(design, onFrame);
     this.writes = new MarkWrites(existing, recorder, ui, writes, new Outcome());
-    this.cursor = new WalkCursor(design.grid(), marks::isMarked);
+    this.cursor = new WalkCursor(design.grid(),
+        st -> st.side() == null ? marks.isMarked(st.panel()) : frame.isMarked(st.member()));
     this.details = new MarkDetails(design, racking);
     this.photos = new PhotoAttachment(dialogs, clock, ui, this.writes::onQueue);
     this.live = new LiveVerdict(design, title, Objects.requireNonNull(role, "role"), analyzer);
@@ -157,6 +173,17 @@ public final class WalkViewModel {
       if (!quietCursor) {
         refreshPicture();
       }
+    });
+    cursor.sideProperty().addListener((obs, a, b) -> {
+      if (!quietCursor) {
+        refreshPicture();
+      }
+    });
+    cursor.frameInWalkProperty().addListener((obs, a, b) -> {
+      frameSetting.set(b);
+      status.set(b ? "The walk order now takes in every ledger and standard (W: diagonals only)."
+          : "The walk order now walks the diagonals only; Shift+arrow still selects a ledger or standard (W: take them in).");
+      reanalyse();
     });
     reanalyse();
   }
@@ -175,6 +202,9 @@ public final class WalkViewModel {
     if (readOnly.get()) {
       error.set("This inspection is finalised and read-only. Start a new inspection to record changes.");
       return false;
+    }
+    if (cursor.stop().side() != null) {
+      return markMember(state, cursor.stop());
     }
     PanelRef p = cursor.get();
     Mark m;
@@ -207,6 +237,49 @@ public final class WalkViewModel {
     return true;
   }
 
+  /**
+   * Shows {@code state} for the frame member at {@code at} with the details entered and queues its
+   * write. In a walk that takes in the frame it moves on; otherwise the cursor goes back to the
+   * panel's diagonals.
+   */
+  private boolean markMember(PanelState state, WalkStop at) {
+    FrameRef f = at.member();
+    PanelRef p = at.panel();
+    Mark m;
+    try {
+      m = details.buildMember(state, f, photos.photos());
+    } catch (IllegalArgumentException e) {
+      error.set(e.getMessage());
+      return false;
+    }
+    RecordedMark before = frame.latest(f);
+    long ticket = writes.ticket();
+    newestTicket = ticket;
+    frame.put(f, new RecordedMark(0, p, m, f), m);
+    pending.merge(f, 1, Integer::sum);
+    undo.made(new UndoSteps.Step(p, before == null ? null : before.mark(), m, ticket, f));
+    details.clear();
+    photos.markMade();
+    error.set(unsavedWords());
+    String after = "";
+    quietCursor = true;
+    try {
+      if (cursor.frameInWalkProperty().get()) {
+        after = advance();
+      } else {
+        cursor.set(WalkStop.of(p));
+      }
+    } finally {
+      quietCursor = false;
+    }
+    String then = after;
+    status.set("Marked the " + f + ": " + describe(m) + then);
+    saidWhenStored.put(ticket, id -> "Saved the " + f + ": " + describe(m) + " (record " + id + ")" + then);
+    refreshPicture();
+    writes.mark(ticket, p, f, m, REMARK_REASON);
+    return true;
+  }
+
   /** Corrects the last mark of this session back to what the panel held before it. */
   public boolean undo() {
     if (readOnly.get()) {
@@ -220,24 +293,31 @@ public final class WalkViewModel {
     }
     UndoSteps.Step step = newest.get();
     PanelRef p = step.panel();
+    FrameRef member = step.member();
     Mark back = step.before() == null ? Mark.of(PanelState.NOT_INSPECTED) : step.before();
     long ticket = writes.ticket();
     newestTicket = ticket;
     undo.undone();
     undoing.put(ticket, step);
-    marks.put(p, new RecordedMark(0, p, back), back);
-    pending.merge(p, 1, Integer::sum);
+    if (member == null) {
+      marks.put(p, new RecordedMark(0, p, back), back);
+    } else {
+      frame.put(member, new RecordedMark(0, p, back, member), back);
+    }
+    pending.merge(MarkWrites.key(p, member), 1, Integer::sum);
     error.set(unsavedWords());
-    status.set("Undone " + p + ": now " + describe(back));
-    saidWhenStored.put(ticket, id -> "Undone " + p + ": now " + describe(back) + " (correction record " + id + ")");
+    String what = member == null ? p.toString() : "the " + member;
+    String now = member != null && back.state() == PanelState.NOT_INSPECTED ? "as designed (no mark)" : describe(back);
+    status.set("Undone " + what + ": now " + now);
+    saidWhenStored.put(ticket, id -> "Undone " + what + ": now " + now + " (correction record " + id + ")");
     quietCursor = true;
     try {
-      cursor.set(p);
+      cursor.set(new WalkStop(p, member == null ? null : PanelSide.of(p, member)));
     } finally {
       quietCursor = false;
     }
     refreshPicture();
-    writes.undo(ticket, step.ticket(), p, back, UNDO_REASON);
+    writes.undo(ticket, step.ticket(), p, member, back, UNDO_REASON);
     return true;
   }
 
@@ -246,12 +326,20 @@ public final class WalkViewModel {
     @Override
     public void stored(long ticket, RecordedMark made) {
       PanelRef p = made.panel();
-      stored.put(p, made, made.mark());
-      if (answered(p)) {
-        marks.put(p, made, made.mark());
+      FrameRef f = made.member();
+      if (f == null) {
+        stored.put(p, made, made.mark());
+        if (answered(p)) {
+          marks.put(p, made, made.mark());
+        }
+      } else {
+        storedFrame.put(f, made, made.mark());
+        if (answered(f)) {
+          frame.put(f, made, made.mark());
+        }
       }
       undoing.remove(ticket);
-      unsaved.remove(p);
+      unsaved.remove(MarkWrites.key(p, f));
       error.set(unsavedWords());
       LongFunction<String> said = saidWhenStored.remove(ticket);
       if (said != null && ticket == newestTicket) {
@@ -261,7 +349,7 @@ public final class WalkViewModel {
     }
 
     @Override
-    public void refused(long ticket, PanelRef p, Mark mark, String why) {
+    public void refused(long ticket, PanelRef p, FrameRef f, Mark mark, String why) {
       saidWhenStored.remove(ticket);
       UndoSteps.Step undone = undoing.remove(ticket);
       if (undone != null) {
@@ -269,12 +357,22 @@ public final class WalkViewModel {
       } else {
         undo.forget(ticket);
       }
-      if (answered(p)) {
-        marks.reset(p, stored.latest(p));
+      Object key = MarkWrites.key(p, f);
+      RecordedMark holds;
+      if (f == null) {
+        if (answered(p)) {
+          marks.reset(p, stored.latest(p));
+        }
+        holds = stored.latest(p);
+      } else {
+        if (answered(f)) {
+          frame.reset(f, storedFrame.latest(f));
+        }
+        holds = storedFrame.latest(f);
       }
-      RecordedMark holds = stored.latest(p);
-      unsaved.put(p, "Not recorded: " + (undone != null ? "the undo of " : "") + p + " " + describe(mark)
-          + " (" + why + "). The panel shows what the record holds"
+      String what = f == null ? p.toString() : "the " + f;
+      unsaved.put(key, "Not recorded: " + (undone != null ? "the undo of " : "") + what + " " + describe(mark)
+          + " (" + why + "). The " + (f == null ? "panel" : "member") + " shows what the record holds"
           + (holds == null || holds.mark().state() == PanelState.NOT_INSPECTED ? " (no mark)" : " (" + describe(holds.mark()) + ")")
           + ": mark it again.");
       error.set(unsavedWords());
@@ -282,17 +380,21 @@ public final class WalkViewModel {
     }
 
     @Override
-    public void passedOver(long ticket, PanelRef p) {
+    public void passedOver(long ticket, PanelRef p, FrameRef f) {
       saidWhenStored.remove(ticket);
       undoing.remove(ticket);
-      if (answered(p)) {
-        marks.reset(p, stored.latest(p));
+      if (f == null) {
+        if (answered(p)) {
+          marks.reset(p, stored.latest(p));
+        }
+      } else if (answered(f)) {
+        frame.reset(f, storedFrame.latest(f));
       }
       reanalyse();
     }
 
-    /** One write on {@code p} answered: true when none is left waiting (the screen may take the record's). */
-    private boolean answered(PanelRef p) {
+    /** One write on {@code p} (a panel or frame member) answered: true when none is left waiting. */
+    private boolean answered(Object p) {
       int left = pending.merge(p, -1, Integer::sum);
       if (left <= 0) {
         pending.remove(p);
@@ -327,9 +429,48 @@ public final class WalkViewModel {
     cursor.move(dLift, dBay);
   }
 
-  /** Puts the cursor on {@code p} (a click or tap). */
+  /** Puts the cursor on {@code p}'s diagonals (a click or tap). */
   public void select(PanelRef p) {
     cursor.select(p);
+  }
+
+  /**
+   * Selects a side of the current panel for the next mark: the ledger above or below, the standard
+   * on the left or right; the side already selected goes back to the panel's diagonals.
+   */
+  public void selectSide(PanelSide side) {
+    cursor.selectSide(Objects.requireNonNull(side, "side"));
+  }
+
+  /** Back to the current panel's diagonals. */
+  public void backToPanel() {
+    if (cursor.stop().side() != null) {
+      cursor.selectSide(cursor.stop().side());
+    }
+  }
+
+  /** Selects the frame member {@code f} (a click or tap on it). */
+  public void selectMember(FrameRef f) {
+    cursor.selectMember(f);
+  }
+
+  /** Takes every ledger and standard into the walk order, or walks the diagonals only. */
+  public void toggleFrameInWalk() {
+    cursor.frameInWalkProperty().set(!cursor.frameInWalkProperty().get());
+  }
+
+  /**
+   * Where the choice to walk the frame members is remembered (the app: the user's preferences; by
+   * default memory); the walk order takes the remembered choice at once.
+   */
+  public void useFrameInWalkSetting(FrameInWalkSetting setting) {
+    FrameInWalkSetting s = Objects.requireNonNull(setting, "setting");
+    boolean v = s.get();
+    frameSetting = s;
+    if (cursor.frameInWalkProperty().get() != v) {
+      cursor.frameInWalkProperty().set(v);
+      status.set("");
+    }
   }
 
   /** Puts the cursor on the first panel, in walk order, that has no mark yet. */
@@ -416,19 +557,31 @@ public final class WalkViewModel {
 
   /** The live verdict drawn again from the stored marks, and the picture. */
   private void reanalyse() {
-    live.update(stored);
+    try {
+      live.update(stored, storedFrame, cursor.frameInWalkProperty().get());
+    } catch (RuntimeException e) {
+      // the marks are stored; only the verdict shown is behind
+      error.set("The verdict could not be worked out again (" + e.getMessage()
+          + "); every mark is saved. Findings (Ctrl+4) works it out from the record.");
+    }
     refreshPicture();
+  }
+
+  /** The state of each frame member with a stored mark in force (withdrawn marks excluded). */
+  public Map<FrameRef, PanelState> frameFindings() {
+    return Map.copyOf(storedFrame.states());
   }
 
   /** The engine's whole answer for the marks so far: verdicts, repair plan, restore list. */
   public PlaneAnalysis fullAnalysis() {
-    return analyzer.analyse(design, AsBuiltPlane.fromFindings(design, findings()));
+    return analyzer.analyse(design, AsBuiltPlane.fromFindings(design, findings(), frameFindings()));
   }
 
   private void refreshPicture() {
     StateAnalysis s = live.lastSeen();
     PanelRef c = cursor.get();
-    cursorText.set(describeCursor(c));
+    WalkStop at = cursor.stop();
+    cursorText.set(describeCursor(c, at));
     picture.set(
         new PlanePicture(
             design,
@@ -438,12 +591,26 @@ public final class WalkViewModel {
             s == null ? Set.of() : Set.copyOf(s.criticalBraces()),
             List.of(),
             Set.of(),
-            c));
+            c,
+            frame.states(),
+            at.member(),
+            s == null ? List.of() : s.freedoms()));
   }
 
-  private String describeCursor(PanelRef c) {
+  private String describeCursor(PanelRef c, WalkStop at) {
     if (c == null) {
       return "";
+    }
+    if (at.side() != null) {
+      FrameRef f = at.member();
+      String designed = design.hasFrameMember(f) ? "in the design" : "left out of the design";
+      RecordedMark r = frame.latest(f);
+      String found = r == null || r.mark().state() == PanelState.NOT_INSPECTED
+          ? "not marked: taken as designed" : "marked " + describe(r.mark());
+      int pos = cursor.position(at);
+      return "Lift " + c.lift() + ", bay " + c.bay() + ", " + at.side().words() + ": the " + f + " \u2014 "
+          + designed + "; " + found
+          + (pos > 0 ? " (" + pos + " of " + cursor.length() + " in walk order)" : " (Esc: back to the panel)");
     }
     Brace d = design.braceAt(c);
     String designed =
@@ -451,7 +618,7 @@ public final class WalkViewModel {
     RecordedMark r = marks.latest(c);
     String found = r == null || r.mark().state() == PanelState.NOT_INSPECTED ? "not marked yet" : "marked " + describe(r.mark());
     return "Lift " + c.lift() + ", bay " + c.bay() + " \u2014 " + designed + "; " + found
-        + " (" + cursor.position(c) + " of " + cursor.length() + " in walk order)";
+        + " (" + cursor.position(WalkStop.of(c)) + " of " + cursor.length() + " in walk order)";
   }
 
   private static String describe(Mark m) {
@@ -487,6 +654,26 @@ public final class WalkViewModel {
 
   public ObjectProperty<WalkOrder> orderProperty() {
     return cursor.orderProperty();
+  }
+
+  /** Whether the walk order takes in every ledger and standard (default: diagonals only). */
+  public BooleanProperty frameInWalkProperty() {
+    return cursor.frameInWalkProperty();
+  }
+
+  /** Every stop of the walk, in order. */
+  public List<WalkStop> stops() {
+    return cursor.stops();
+  }
+
+  /** The side of the current panel selected, or null for its diagonals. */
+  public ReadOnlyObjectProperty<PanelSide> sideProperty() {
+    return cursor.sideProperty();
+  }
+
+  /** The frame member selected, or null for the current panel's diagonals. */
+  public FrameRef selectedMember() {
+    return cursor.stop().member();
   }
 
   public ReadOnlyObjectProperty<PanelRef> cursorProperty() {
