@@ -791,6 +791,28 @@ final class FrameFreedoms {
         partList.add(new Part(f, cls, rowsOf.get(i), comps));
       }
       partList.sort((a, b) -> compareJoints(a.freedom().joints(), b.freedom().joints()));
+      // each moving joint listed under the last part that moves it: the lists partition them
+      Map<Joint, Integer> last = new HashMap<>();
+      for (int k = 0; k < partList.size(); k++) {
+        for (Joint j : partList.get(k).freedom().joints()) {
+          last.put(j, k);
+        }
+      }
+      for (int k = 0; k < partList.size(); k++) {
+        Part p = partList.get(k);
+        List<Joint> mine = new ArrayList<>();
+        for (Joint j : p.freedom().joints()) {
+          if (last.get(j) == k) {
+            mine.add(j);
+          }
+        }
+        if (mine.isEmpty()) {
+          // every joint it moves is listed under a later part: it keeps its own list
+          mine = p.freedom().joints();
+        }
+        Freedom f = new Freedom(FreedomKind.SWAY, p.freedom().count(), mine, List.of(), List.of());
+        partList.set(k, new Part(f, p.classes(), p.rows(), p.comps()));
+      }
     }
 
     private static int find(int[] p, int x) {

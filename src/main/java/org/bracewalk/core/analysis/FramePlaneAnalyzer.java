@@ -49,9 +49,11 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
       if (moving.isEmpty()) {
         return Optional.empty();
       }
-      for (Block b : moving) {
-        if (swayOf(b, grid).equals(freedom)) {
-          return Optional.of(blockMotion(grid, b));
+      List<Block> ordered = orderedBlocks(moving);
+      List<Freedom> sway = completeSway(grid, moving);
+      for (int i = 0; i < sway.size(); i++) {
+        if (sway.get(i).equals(freedom)) {
+          return Optional.of(blockMotion(grid, ordered.get(i)));
         }
       }
       throw new IllegalArgumentException("not a freedom of this state: " + freedom);
@@ -165,23 +167,14 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
     StateAnalysis s = BraceGraphPlaneAnalyzer.analyse(g);
     FrameFramework fw = FrameFramework.of(grid, rigidityCodes(codes), allThere(grid));
     CriticalByStress.Critical critical = CriticalByStress.of(fw, SEED);
-    List<Freedom> freedoms = new ArrayList<>();
     boolean pinned = fw.pinned;
-    int m = grid.lifts();
-    int n = grid.bays();
-    int lowest = Integer.MAX_VALUE;
-    for (Block b : swayingBlocks(s, pinned)) {
-      lowest = Math.min(lowest, b.lifts().isEmpty() ? Integer.MAX_VALUE : b.lifts().get(0));
-      freedoms.add(swayOf(b, grid));
-    }
-    freedoms.sort((a, b) -> a.joints().get(0).compareTo(b.joints().get(0)));
+    List<Freedom> freedoms = completeSway(grid, swayingBlocks(s, pinned));
     List<Joint> movingJoints = new ArrayList<>();
-    if (pinned && lowest <= m) {
-      for (int level = lowest; level <= m; level++) {
-        for (int line = 0; line <= n; line++) {
-          movingJoints.add(new Joint(level, line));
-        }
+    if (pinned) {
+      for (Freedom f : freedoms) {
+        movingJoints.addAll(f.joints());
       }
+      movingJoints.sort(null);
     }
     return new StateAnalysis(
         s.rigid(), s.degreesOfFreedom(), s.oneWayOnly(), s.lossTolerance(), s.lossToleranceExact(),
@@ -199,19 +192,66 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
     return moving;
   }
 
-  /** A block's sway: every joint at or above its lowest lift, or right of its first bay. */
-  private static Freedom swayOf(Block b, PlaneGrid grid) {
-    int minLift = b.lifts().isEmpty() ? Integer.MAX_VALUE : b.lifts().get(0);
-    int minBay = b.bays().isEmpty() ? Integer.MAX_VALUE : b.bays().get(0);
-    List<Joint> js = new ArrayList<>();
-    for (int level = 0; level <= grid.lifts(); level++) {
-      for (int line = 0; line <= grid.bays(); line++) {
-        if (level >= minLift || line >= minBay) {
-          js.add(new Joint(level, line));
+  private static int minLift(Block b) {
+    return b.lifts().isEmpty() ? Integer.MAX_VALUE : b.lifts().get(0);
+  }
+
+  private static int minBay(Block b) {
+    return b.bays().isEmpty() ? Integer.MAX_VALUE : b.bays().get(0);
+  }
+
+  /** Swaying blocks in the order of their first moving joint (level, then line). */
+  private static List<Block> orderedBlocks(List<Block> moving) {
+    List<Block> out = new ArrayList<>(moving);
+    out.sort(
+        (a, b) -> {
+          Joint ja = minBay(a) < Integer.MAX_VALUE ? new Joint(0, minBay(a)) : new Joint(minLift(a), 0);
+          Joint jb = minBay(b) < Integer.MAX_VALUE ? new Joint(0, minBay(b)) : new Joint(minLift(b), 0);
+          return ja.compareTo(jb);
+        });
+    return out;
+  }
+
+  /**
+   * One sway per block that sways (count 1). A block moves every joint at or above its lowest lift
+   * or right of its first bay; each moving joint is listed under the last block (in this order)
+   * that moves it, so the lists partition the moving joints (on a pinned base: each swaying lift
+   * with the storeys above it up to the next swaying lift).
+   */
+  private static List<Freedom> completeSway(PlaneGrid grid, List<Block> moving) {
+    List<Block> ordered = orderedBlocks(moving);
+    int m = grid.lifts();
+    int n = grid.bays();
+    int[] byLevel = new int[m + 1];
+    int[] byLine = new int[n + 1];
+    java.util.Arrays.fill(byLevel, -1);
+    java.util.Arrays.fill(byLine, -1);
+    for (int k = 0; k < ordered.size(); k++) {
+      Block b = ordered.get(k);
+      for (int i = Math.min(minLift(b), m + 1); i <= m; i++) {
+        byLevel[i] = Math.max(byLevel[i], k);
+      }
+      for (int j = Math.min(minBay(b), n + 1); j <= n; j++) {
+        byLine[j] = Math.max(byLine[j], k);
+      }
+    }
+    List<List<Joint>> lists = new ArrayList<>();
+    for (int k = 0; k < ordered.size(); k++) {
+      lists.add(new ArrayList<>());
+    }
+    for (int i = 0; i <= m; i++) {
+      for (int j = 0; j <= n; j++) {
+        int k = Math.max(byLevel[i], byLine[j]);
+        if (k >= 0) {
+          lists.get(k).add(new Joint(i, j));
         }
       }
     }
-    return new Freedom(FreedomKind.SWAY, 1, js, List.of(), List.of());
+    List<Freedom> out = new ArrayList<>();
+    for (List<Joint> js : lists) {
+      out.add(new Freedom(FreedomKind.SWAY, 1, js, List.of(), List.of()));
+    }
+    return out;
   }
 
   /**

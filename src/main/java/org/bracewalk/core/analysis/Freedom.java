@@ -12,7 +12,11 @@ import org.bracewalk.core.model.PanelRef;
  *
  * <ul>
  *   <li>{@link FreedomKind#SWAY}: one entry per part that sways ({@code count} its independent
- *       motions); {@code joints} the joints that move with it; {@code members} and {@code
+ *       motions); {@code joints} the joints that move with it, each moving joint listed under the
+ *       last part (in list order) that moves it, so that the parts' lists partition the moving
+ *       joints (on a pinned base: a swaying lift and the storeys above it up to the next part) and
+ *       a huge plane does not list a joint once per part below it; a part all of whose joints a
+ *       later part lists keeps its own full list; {@code members} and {@code
  *       diagonals} empty;
  *   <li>{@link FreedomKind#LOST_RESTRAINT}: one entry per such joint, {@code count} 1; {@code
  *       joints} that joint; {@code members} the frame members running straight through it (say the
