@@ -63,7 +63,7 @@ final class FrameFramework {
   int faceCount;
   /** Up to four members per face, anticlockwise; -1 pads a triangle. */
   int[] faceMembers;
-  /** Member id of the ledger/standard/diagonal codes per panel: bit 0 rising, bit 1 falling. */
+  /** The diagonals of each panel as analysed: bit 0 rising, bit 1 falling. */
   final byte[] diagonals;
 
   private FrameFramework(PlaneGrid grid) {

@@ -17,24 +17,27 @@ import org.bracewalk.core.model.PanelRef;
  * <p>Exact reduction first (each step removes exactly one freedom, so the counts add up):
  *
  * <ol>
- *   <li>a joint held by one member, whose other end stays held by at least two (or is on a pinned
- *       base), is a loose end: strip it (one freedom: the joint swings about the other end);
- *   <li>a joint with exactly two members in one straight line has lost its sideways restraint:
- *       replace the two by one member end to end (one freedom: the joint moves across the line);
+ *   <li>a joint (not held by a pinned base) whose members, two of them, run in one straight line
+ *       has lost its sideways restraint: the two become one member end to end (one freedom: the
+ *       joint moves across the line; the two members' angular velocities are tied);
+ *   <li>a joint held by one member is a loose end: the member is stripped (one freedom: the joint
+ *       swings about the other end; the member's angular velocity is fixed). A member loose at both
+ *       ends counts both ends as loose, and the piece keeps one freedom as a sway.
  * </ol>
  *
- * repeated until neither applies. What is left sways: its freedoms come from the face equations of
- * {@link FaceClassSystem} (the stripped members fixed, the merged pairs turning together), split
- * into independent parts (classes linked by a row or by a part that nothing holds), each part's
- * count its columns less its rank plus 2 per part that nothing holds. Ranks are taken modulo p; a
- * deficiency on a part of at most {@value #EXACT_LIMIT} columns is confirmed by {@link ExactRank}
- * (larger parts keep the modular rank, which can only overstate the freedoms: the cautious side).
- * On a free plane the part holding the first joint is the reference (its rotation and translation
- * are the plane's rigid motions).
+ * Both are read off the framework as it stands (not repeated on what is left). What is left sways:
+ * its freedoms come from the face equations of {@link FaceClassSystem}, split into parts (classes
+ * linked by a row, meeting at a joint, or in a piece that nothing holds), each part's count its
+ * columns less its rank plus 2 per piece that nothing holds. Ranks are taken modulo p; a deficiency
+ * on a part of at most {@value #EXACT_LIMIT} columns is confirmed by {@link ExactRank} (larger parts
+ * keep the modular rank, which can only overstate the freedoms: the cautious side). On a free plane
+ * the piece holding the first joint is the reference (its rotation and translation are the plane's
+ * rigid motions).
  *
  * <p>The joints that move with a part come from one random motion of that part (mod p, joint
  * velocities propagated along the members): a joint that moves in some motion of the part moves in
- * a random one with probability at least 1 - 2/p.
+ * a random one with probability at least 1 - 2/p. Cost: one propagation over the framework per
+ * part.
  */
 final class FrameFreedoms {
   static final int EXACT_LIMIT = 400;

@@ -2,7 +2,6 @@ package org.bracewalk.core.analysis;
 
 import java.util.ArrayList;
 import java.util.BitSet;
-import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -13,7 +12,6 @@ import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.MemberKind;
-import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneGrid;
 
 /**

@@ -91,7 +91,6 @@ final class ModularEchelon {
    */
   boolean addRow(int[] cols, long[] vals) {
     int[] c = cols.clone();
-    long[] v = new long[vals.length];
     Integer[] order = new Integer[c.length];
     for (int i = 0; i < c.length; i++) {
       order[i] = i;

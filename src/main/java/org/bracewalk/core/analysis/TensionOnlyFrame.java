@@ -48,7 +48,6 @@ final class TensionOnlyFrame {
   /** The exact test, or null when the plane is too large for it. */
   private static Boolean exactTest(PlaneGrid grid, byte[] codes, boolean[] there) {
     FrameFramework fw = FrameFramework.of(grid, new byte[codes.length], there);
-    int m = grid.lifts();
     int n = grid.bays();
     List<int[]> bars = new ArrayList<>();
     List<int[]> cables = new ArrayList<>();
