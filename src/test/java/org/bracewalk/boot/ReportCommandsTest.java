@@ -96,7 +96,9 @@ class ReportCommandsTest {
     Run r = run("repair-order", "--db", db.toString(), "--inspection", "2", "--out", pdf.toString(),
         "--csv", csv.toString());
     assertThat(r.code()).as(r.err()).isZero();
-    assertThat(r.out()).contains("wrote " + pdf + ": 3 actions")
+    // take frame 2 out of service; refit its bottom horizontal, replace its struck upright and
+    // the two diagonals (the demo's after-impact records)
+    assertThat(r.out()).contains("wrote " + pdf + ": 5 actions")
         .containsPattern("registered as issued \\(repair-order \\d+, SHA-256 [0-9a-f]{64}\\)")
         .containsPattern("registered as issued \\(repair-order-csv \\d+, SHA-256 [0-9a-f]{64}\\)");
     assertThat(Files.readString(csv)).startsWith("number,plane,lift,bay,lifts,action,member,kind,"
