@@ -73,6 +73,14 @@ final class JdbcRepairRepository implements RepairRepository {
 
   @Override
   public RepairAction addAction(RepairAction a) {
+    if (a.frameMember() != null) {
+      // repair_actions has no frame-member columns yet: refuse rather than store the action as
+      // one on the whole plane
+      throw new StoreException("action of repair order " + a.orderId() + " on the "
+          + a.frameMember() + ": a stored repair action names a panel or the whole plane; record"
+          + " the frame member in its description on an action of the whole plane; nothing was"
+          + " stored");
+    }
     return db.call(
         c -> {
           try (PreparedStatement s =

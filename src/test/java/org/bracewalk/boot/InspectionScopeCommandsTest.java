@@ -99,7 +99,7 @@ class InspectionScopeCommandsTest {
     ok("report", "--db", d, "--inspection", "4", "--out", pdf.toString());
     Run before = run("analyse", "--db", d, "--inspection", "4", "--format", "json");
     Run beforeText = run("analyse", "--db", d, "--inspection", "4");
-    assertThat(before.out()).contains("\"inspection\": 3").doesNotContain("west return");
+    assertThat(before.out()).contains("\"inspection\": 4").doesNotContain("west return");
 
     // then the structure changes: a new plane, and a new design revision of frame 2
     Run plane = ok("plane", "create", "--db", d, "--structure", "1", "--name", "west return",
