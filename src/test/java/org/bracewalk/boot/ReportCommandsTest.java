@@ -96,6 +96,8 @@ class ReportCommandsTest {
     Run r = run("repair-order", "--db", db.toString(), "--inspection", "2", "--out", pdf.toString(),
         "--csv", csv.toString());
     assertThat(r.code()).as(r.err()).isZero();
+    // take frame 2 out of service; refit its bottom horizontal, replace its struck upright and
+    // the two diagonals (the demo's after-impact records)
     assertThat(r.out()).contains("wrote " + pdf + ": 5 actions")
         .containsPattern("registered as issued \\(repair-order \\d+, SHA-256 [0-9a-f]{64}\\)")
         .containsPattern("registered as issued \\(repair-order-csv \\d+, SHA-256 [0-9a-f]{64}\\)");
