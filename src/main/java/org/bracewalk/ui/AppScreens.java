@@ -6,6 +6,8 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.concurrent.Executor;
+import java.util.function.Consumer;
+import java.util.function.Supplier;
 import javafx.beans.binding.Bindings;
 import javafx.geometry.Insets;
 import javafx.scene.Node;
@@ -40,11 +42,22 @@ import org.bracewalk.ui.history.HistoryView;
 import org.bracewalk.ui.history.HistoryViewModel;
 import org.bracewalk.ui.sites.SitesView;
 import org.bracewalk.ui.sites.SitesViewModel;
+import org.bracewalk.ui.walk.InOrder;
 import org.bracewalk.ui.walk.InspectionMarkRecorder;
+import org.bracewalk.ui.walk.RecordedMark;
 import org.bracewalk.ui.walk.WalkView;
 import org.bracewalk.ui.walk.WalkViewModel;
 
-/** Builds every screen over the application's services, each with fresh data from the database. */
+/**
+ * Builds every screen over the application's services, each with fresh data from the database.
+ *
+ * <p>A screen opens in two steps: what it shows is read from the record on {@link #records} (an
+ * ordered queue on the background executor, never the JavaFX thread) into a small value per
+ * screen ({@link Place}, {@link DesignRead}, {@link WalkRead}, {@link FindingsRead}); its nodes are
+ * then built from that value on the UI executor. The walk-round's marks are written through the
+ * same ordered queue, so a walk-round opened while marks are still queued reads its plane's stored
+ * records after they are written, never before.
+ */
 public final class AppScreens implements ScreenFactory {
   /** The camera folder, remembered in the user's preferences between sessions. */
   private final org.bracewalk.ui.walk.CameraFolder.Setting cameraFolder =
@@ -59,6 +72,11 @@ public final class AppScreens implements ScreenFactory {
   private final Executor ui;
   private final Executor background;
   private final ReportIssuer issuer;
+  /**
+   * Where screens read the record and walk-rounds write their marks: one at a time, in the order
+   * queued, on the background executor.
+   */
+  private final Executor records;
   private SitesViewModel preloaded;
 
   public AppScreens(
@@ -76,6 +94,7 @@ public final class AppScreens implements ScreenFactory {
     this.ui = Objects.requireNonNull(ui, "ui");
     this.background = Objects.requireNonNull(background, "background");
     this.issuer = Objects.requireNonNull(issuer, "issuer");
+    this.records = new InOrder(background);
   }
 
   /** The key help of every screen, in rail order. */
@@ -84,17 +103,128 @@ public final class AppScreens implements ScreenFactory {
   }
 
   @Override
-  public Screen build(ScreenId id, Selection selection, Navigator navigator) {
-    if (id != ScreenId.OVERVIEW && !selection.hasPlane()) {
-      return overview(navigator, selection);
+  public void open(ScreenId id, Selection selection, Navigator navigator, Consumer<Screen> shown,
+      Consumer<String> failed) {
+    if (id == ScreenId.OVERVIEW || !selection.hasPlane()) {
+      // the Sites view model reads its rows on the background executor itself
+      ui.execute(() -> shown.accept(overview(navigator, selection)));
+      return;
     }
-    return switch (id) {
-      case OVERVIEW -> overview(navigator, selection);
-      case DESIGN -> design(selection);
-      case WALK -> walk(selection, navigator);
-      case FINDINGS -> findings(selection, navigator);
-      case HISTORY -> history(selection);
-    };
+    records.execute(() -> {
+      Supplier<Screen> build;
+      try {
+        build = switch (id) {
+          case DESIGN -> {
+            DesignRead r = readDesign(selection);
+            yield () -> design(r);
+          }
+          case WALK -> {
+            WalkRead r = readWalk(selection);
+            yield () -> walk(r, selection, navigator);
+          }
+          case FINDINGS -> {
+            FindingsRead r = readFindings(selection);
+            yield () -> findings(r, selection, navigator);
+          }
+          case HISTORY -> {
+            Place r = place(selection.planeId());
+            yield () -> history(r);
+          }
+          case OVERVIEW -> throw new IllegalStateException("the Sites screen is built above");
+        };
+      } catch (CannotRead e) {
+        System.getLogger(AppScreens.class.getName()).log(System.Logger.Level.WARNING,
+            "opening " + id.title() + ": " + e.getMessage(), e.getCause());
+        String words = "Could not open " + id.title() + ": " + e.getMessage()
+            + ". The screen shown stays; open it again (Ctrl+" + id.digit() + ") to retry.";
+        ui.execute(() -> failed.accept(words));
+        return;
+      }
+      ui.execute(() -> shown.accept(build.get()));
+    });
+  }
+
+  /** What could not be read from the record, named for the person (the cause's words kept). */
+  private static final class CannotRead extends RuntimeException {
+    private static final long serialVersionUID = 1L;
+
+    CannotRead(String what, RuntimeException cause) {
+      super(what + " could not be read from the database (" + cause.getMessage() + ")", cause);
+    }
+  }
+
+  /** Reads {@code what} from the record (off the JavaFX thread), naming it if that fails. */
+  private static <T> T read(String what, Supplier<T> reading) {
+    try {
+      return reading.get();
+    } catch (CannotRead e) {
+      throw e;
+    } catch (RuntimeException e) {
+      throw new CannotRead(what, e);
+    }
+  }
+
+  /** Where a plane is: the plane, its structure and its site (for the header). */
+  private record Place(PlaneRecord plane, Structure structure, Site site) { }
+
+  /** What the design screen shows: the plane's current revision. */
+  private record DesignRead(Place place, DesignRevision revision) { }
+
+  /**
+   * What the findings screen needs before its view model reads the rest: the inspection (empty
+   * when none) and whether it covers the plane.
+   */
+  private record FindingsRead(Place place, Optional<Inspection> inspection, boolean covered) { }
+
+  /**
+   * What the walk-round starts from: the inspection (empty when none), whether it covers the plane,
+   * the design in force, the marks already stored for the plane and the planes it covers.
+   */
+  private record WalkRead(Place place, Optional<Inspection> inspection, boolean covered, DesignRevision design,
+      List<RecordedMark> existing, List<PlaneRecord> planes) { }
+
+  private Place place(long planeId) {
+    PlaneRecord plane = read("plane " + planeId, () -> services.sites().plane(planeId));
+    Structure st = read("the structure of plane '" + plane.name() + "'",
+        () -> services.sites().structure(plane.structureId()));
+    Site site = read("the site of structure '" + st.name() + "'", () -> services.sites().site(st.siteId()));
+    return new Place(plane, st, site);
+  }
+
+  private DesignRead readDesign(Selection s) {
+    Place p = place(s.planeId());
+    return new DesignRead(p, read("the current design of plane '" + p.plane().name() + "'",
+        () -> services.sites().currentDesign(p.plane().id())));
+  }
+
+  private FindingsRead readFindings(Selection s) {
+    Place p = place(s.planeId());
+    Optional<Inspection> found = read("the inspections of structure '" + p.structure().name() + "'",
+        () -> inspectionFor(s));
+    boolean covered = found.isPresent() && read("the planes of inspection " + found.get().id(),
+        () -> services.inspections().covers(found.get().id(), p.plane().id()));
+    return new FindingsRead(p, found, covered);
+  }
+
+  /** On the ordered queue: after every mark queued before it is written. */
+  private WalkRead readWalk(Selection s) {
+    FindingsRead f = readFindings(s);
+    if (!f.covered()) {
+      return new WalkRead(f.place(), f.inspection(), false, null, List.of(), List.of());
+    }
+    long inspection = f.inspection().orElseThrow().id();
+    long plane = f.place().plane().id();
+    String name = "'" + f.place().plane().name() + "'";
+    // the design fixed when the inspection started: a revision saved while it is open is for the
+    // next inspection, so the walk continues against the design it started with
+    DesignRevision design = read("the design in force for plane " + name + " in inspection " + inspection,
+        () -> services.inspections().designInForce(inspection, plane));
+    List<RecordedMark> existing = read("the marks already recorded for plane " + name + " in inspection " + inspection,
+        () -> InspectionMarkRecorder.existing(services.inspections(), inspection, plane));
+    // the planes the inspection covers (a plane retired before it started is not one of them)
+    List<PlaneRecord> planes = read("the planes of inspection " + inspection,
+        () -> services.inspections().planesOf(inspection));
+    return new WalkRead(f.place(), f.inspection(), true, design, existing, planes);
   }
 
   /**
@@ -121,22 +251,20 @@ public final class AppScreens implements ScreenFactory {
     return Screen.of(view, "Sites", view::focusTable, sel);
   }
 
-  private String crumbs(PlaneRecord plane, Inspection inspection) {
-    Structure st = services.sites().structure(plane.structureId());
-    Site site = services.sites().site(st.siteId());
-    return site.name() + "  \u203a  " + st.name() + "  \u203a  " + plane.name()
+  private static String crumbs(Place place, Inspection inspection) {
+    return place.site().name() + "  \u203a  " + place.structure().name() + "  \u203a  " + place.plane().name()
         + (inspection == null ? "" : "  \u00b7  inspection " + inspection.id()
             + (inspection.isFinalised() ? " (finalised)" : " (open)"));
   }
 
-  private Screen design(Selection s) {
-    PlaneRecord plane = services.sites().plane(s.planeId());
-    DesignRevision rev = services.sites().currentDesign(plane.id());
+  private Screen design(DesignRead r) {
+    PlaneRecord plane = r.place().plane();
+    DesignRevision rev = r.revision();
     DesignViewModel vm =
         new DesignViewModel(rev.design(), plane.name() + " (revision " + rev.number() + ")", analyzer,
             new PlaneDesignSaver(services.sites(), plane, clock, dialogs), dialogs, ui, background);
     DesignView view = new DesignView(vm);
-    return focused(view, crumbs(plane, null) + "  \u00b7  design", view::focusPlane);
+    return focused(view, crumbs(r.place(), null) + "  \u00b7  design", view::focusPlane);
   }
 
   /** The inspection a screen is about: the one selected, else the structure's open one, else its latest. */
@@ -152,9 +280,9 @@ public final class AppScreens implements ScreenFactory {
     return open.isPresent() ? open : all.stream().max(Comparator.comparing(Inspection::startedAt));
   }
 
-  private Screen walk(Selection s, Navigator navigator) {
-    PlaneRecord plane = services.sites().plane(s.planeId());
-    Optional<Inspection> found = inspectionFor(s);
+  private Screen walk(WalkRead r, Selection s, Navigator navigator) {
+    PlaneRecord plane = r.place().plane();
+    Optional<Inspection> found = r.inspection();
     if (found.isEmpty()) {
       Label l = Widgets.text("No inspection of this structure yet. On Sites (Ctrl+1), select it, fill in the"
           + " inspector and press Start; the walk-round opens here.");
@@ -163,41 +291,38 @@ public final class AppScreens implements ScreenFactory {
       back.setOnAction(e -> navigator.open(ScreenId.OVERVIEW, s));
       VBox box = new VBox(14, l, back);
       box.getStyleClass().add("empty-offer");
-      return focused(box, crumbs(plane, null), back::requestFocus);
+      return focused(box, crumbs(r.place(), null), back::requestFocus);
     }
     Inspection insp = found.get();
-    if (!services.inspections().covers(insp.id(), plane.id())) {
-      return notInScope(plane, insp, s, navigator);
+    if (!r.covered()) {
+      return notInScope(r.place(), insp, s, navigator);
     }
-    Structure st = services.sites().structure(plane.structureId());
-    // the design fixed when the inspection started: a revision saved while it is open is for the
-    // next inspection, so the walk continues against the design it started with
-    DesignRevision design = services.inspections().designInForce(insp.id(), plane.id());
+    Structure st = r.place().structure();
+    // the marks are written on the ordered queue the next walk-round reads its stored marks on
     WalkViewModel vm =
-        new WalkViewModel(design.design(), st.name() + ", " + plane.name(), plane.role(),
-            InspectionMarkRecorder.existing(services.inspections(), insp.id(), plane.id()),
+        new WalkViewModel(r.design().design(), st.name() + ", " + plane.name(), plane.role(), r.existing(),
             new InspectionMarkRecorder(services.inspections(), insp.id(), plane.id(), insp.inspectorName()),
-            analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised(), clock, ui, background);
+            analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised(), clock, ui, records);
     vm.useCameraFolderSetting(cameraFolder);
     vm.useFrameInWalkSetting(frameInWalk);
     WalkView view = new WalkView(vm);
     Selection here = new Selection(st.id(), plane.id(), insp.id());
     BorderPane wrap = new BorderPane(view);
-    wrap.setTop(planeBar(insp, st, plane, p -> navigator.open(ScreenId.WALK, new Selection(st.id(), p, insp.id()))));
+    wrap.setTop(planeBar(insp, r.planes(), plane, p -> navigator.open(ScreenId.WALK, new Selection(st.id(), p, insp.id()))));
     wrap.addEventFilter(KeyEvent.KEY_PRESSED, e -> {
       if (e.isControlDown() && e.getCode() == KeyCode.P) {
         ((ChoiceBox<?>) ((javafx.scene.layout.HBox) wrap.getTop()).lookup("#plane-choice")).show();
         e.consume();
       }
     });
-    return focusedWithSelection(wrap, crumbs(plane, insp), view::focusPlane, here);
+    return focusedWithSelection(wrap, crumbs(r.place(), insp), view::focusPlane, here);
   }
 
-  private Node planeBar(Inspection insp, Structure st, PlaneRecord current, java.util.function.LongConsumer open) {
+  private static Node planeBar(Inspection insp, List<PlaneRecord> planes, PlaneRecord current,
+      java.util.function.LongConsumer open) {
     ChoiceBox<PlaneRecord> choice = new ChoiceBox<>();
     choice.setId("plane-choice");
-    // the planes the inspection covers (a plane retired before it started is not one of them)
-    choice.getItems().addAll(insp == null ? services.sites().planes(st.id()) : services.inspections().planesOf(insp.id()));
+    choice.getItems().addAll(planes);
     choice.setConverter(new javafx.util.StringConverter<>() {
       @Override
       public String toString(PlaneRecord p) {
@@ -231,7 +356,8 @@ public final class AppScreens implements ScreenFactory {
    * The planes of an inspection are fixed when it starts: a plane added later is walked, and its
    * findings shown, in a later inspection.
    */
-  private Screen notInScope(PlaneRecord plane, Inspection insp, Selection s, Navigator navigator) {
+  private static Screen notInScope(Place place, Inspection insp, Selection s, Navigator navigator) {
+    PlaneRecord plane = place.plane();
     Label l = Widgets.text("Plane '" + plane.name() + "' is not part of inspection " + insp.id()
         + ": the planes an inspection covers are fixed when it starts, and this plane was added"
         + " after. To inspect it, start a new inspection on Sites (Ctrl+1).");
@@ -240,35 +366,35 @@ public final class AppScreens implements ScreenFactory {
     back.setOnAction(e -> navigator.open(ScreenId.OVERVIEW, s));
     VBox box = new VBox(14, l, back);
     box.getStyleClass().add("empty-offer");
-    return focused(box, crumbs(plane, insp), back::requestFocus);
+    return focused(box, crumbs(place, insp), back::requestFocus);
   }
 
-  private Screen findings(Selection s, Navigator navigator) {
-    PlaneRecord plane = services.sites().plane(s.planeId());
-    Optional<Inspection> found = inspectionFor(s);
+  private Screen findings(FindingsRead r, Selection s, Navigator navigator) {
+    PlaneRecord plane = r.place().plane();
+    Optional<Inspection> found = r.inspection();
     if (found.isEmpty()) {
       Label l = Widgets.text("No inspection of this structure yet: nothing to show. Start one on Sites (Ctrl+1).");
       l.getStyleClass().add("screen-title");
       VBox box = new VBox(l);
       box.getStyleClass().add("empty-offer");
-      return focused(box, crumbs(plane, null), box::requestFocus);
+      return focused(box, crumbs(r.place(), null), box::requestFocus);
     }
     Inspection insp = found.get();
-    if (!services.inspections().covers(insp.id(), plane.id())) {
-      return notInScope(plane, insp, s, navigator);
+    if (!r.covered()) {
+      return notInScope(r.place(), insp, s, navigator);
     }
     FindingsViewModel vm = new FindingsViewModel(services.sites(), services.inspections(), services.analysis(), analyzer, issuer, dialogs, ui, background, insp.id(), plane.id());
     FindingsView view = new FindingsView(vm,
         p -> navigator.open(ScreenId.FINDINGS, new Selection(plane.structureId(), p, insp.id())));
     vm.load(); // on the background executor
-    return focusedWithSelection(view, crumbs(plane, insp), view::focusPlane,
+    return focusedWithSelection(view, crumbs(r.place(), insp), view::focusPlane,
         new Selection(plane.structureId(), plane.id(), insp.id()));
   }
 
-  private Screen history(Selection s) {
-    PlaneRecord plane = services.sites().plane(s.planeId());
-    HistoryView view = new HistoryView(new HistoryViewModel(services.history(), services.sites(), ui, background, plane.id()));
-    return focused(view, crumbs(plane, null) + "  \u00b7  history", view::focusList);
+  private Screen history(Place place) {
+    HistoryView view = new HistoryView(
+        new HistoryViewModel(services.history(), services.sites(), ui, background, place.plane().id()));
+    return focused(view, crumbs(place, null) + "  \u00b7  history", view::focusList);
   }
 
   private static Screen focused(Node node, String crumbs, Runnable focus) {

@@ -89,11 +89,13 @@ public final class BracewalkApp {
     private ScreenFactory delegate;
 
     @Override
-    public Screen build(ScreenId id, Selection selection, Navigator navigator) {
+    public void open(ScreenId id, Selection selection, Navigator navigator,
+        java.util.function.Consumer<Screen> shown, java.util.function.Consumer<String> failed) {
       if (delegate == null) {
-        throw new IllegalStateException("the database is not open yet");
+        failed.accept("Could not open " + id.title() + ": the database is not open yet.");
+        return;
       }
-      return delegate.build(id, selection, navigator);
+      delegate.open(id, selection, navigator, shown, failed);
     }
   }
 

@@ -38,6 +38,12 @@ public final class MainWindow implements Navigator {
   private final Label crumbs = new Label();
   private final Map<ScreenId, ToggleButton> rail = new EnumMap<>(ScreenId.class);
   private final ToggleGroup railGroup = new ToggleGroup();
+  /** "Opening …" while a screen's record is read; empty otherwise. */
+  private final Label opening = new Label();
+  /** Why the last screen asked for could not be opened; empty otherwise. */
+  private final Label openError = new Label();
+  /** Counts the screens asked for: only the latest one asked for is shown. */
+  private long requests;
   private Screen current;
   private ScreenId currentId;
   private Selection selection = Selection.NONE;
@@ -86,7 +92,11 @@ public final class MainWindow implements Navigator {
 
     Label status = new Label(statusText);
     status.setId("status-line");
-    HBox statusBar = new HBox(status);
+    opening.setId("screen-opening");
+    openError.setId("screen-open-error");
+    openError.getStyleClass().add("error-text");
+    openError.setWrapText(true);
+    HBox statusBar = new HBox(16, status, opening, openError);
     statusBar.getStyleClass().add("status-bar");
     frame.setBottom(statusBar);
     root.getChildren().add(frame);
@@ -120,10 +130,37 @@ public final class MainWindow implements Navigator {
     }
   }
 
+  /**
+   * Opens screen {@code id}: the current screen stays, with "Opening …" in the status bar, while
+   * what the new one shows is read off the JavaFX thread; then the new screen is shown. When the
+   * record cannot be read the status bar says what could not be read, and the current screen
+   * stays. Call on the JavaFX thread.
+   */
   @Override
   public void open(ScreenId id, Selection newSelection) {
+    long request = ++requests;
+    opening.setText("Opening " + id.title() + " \u2026");
+    openError.setText("");
+    factory.open(id, newSelection, this, s -> {
+      if (request == requests) {
+        opening.setText("");
+        show(id, newSelection, s);
+      }
+    }, words -> {
+      if (request == requests) {
+        opening.setText("");
+        openError.setText(words);
+      }
+    });
+  }
+
+  /** Whether a screen asked for is still being read. */
+  public boolean isOpening() {
+    return !opening.getText().isEmpty();
+  }
+
+  private void show(ScreenId id, Selection newSelection, Screen s) {
     selection = newSelection;
-    Screen s = factory.build(id, newSelection, this);
     current = s;
     currentId = id;
     Node node = s.node();

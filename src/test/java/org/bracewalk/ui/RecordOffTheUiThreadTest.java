@@ -36,13 +36,18 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.testfx.api.FxToolkit;
+import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * No view model touches the record on the UI thread (issue 10, item 5), the running half: the test
  * thread plays the JavaFX thread (the UI executor's tasks run on it, the dialogs answer on it), the
  * background executor is a thread of its own, and the record is reached through a store that notes
  * every call made on the UI thread. The Sites, Findings, History and walk-round view models are put
- * through their commands; not one call may reach the store from the UI thread.
+ * through their commands; not one call may reach the store from the UI thread. Then every screen
+ * is opened through the navigator (the main window) on the real JavaFX thread, the walk-round also
+ * while a mark's write is still queued: again not one call on the JavaFX thread, and the walk-round
+ * reopened starts from the mark just written.
  */
 class RecordOffTheUiThreadTest {
   @TempDir Path dir;
@@ -53,7 +58,7 @@ class RecordOffTheUiThreadTest {
   private final FakeDialogs dialogs = new FakeDialogs();
   private final List<String> onUiThread = new java.util.concurrent.CopyOnWriteArrayList<>();
   private final List<String> opened = new ArrayList<>();
-  private Thread uiThread;
+  private volatile Thread uiThread;
   private volatile boolean armed;
 
   @BeforeEach
@@ -198,6 +203,94 @@ class RecordOffTheUiThreadTest {
     armed = false; // the test reads the record itself from here
     var latest = services.inspections().latestObservations(walk.id(), facade.id());
     assertThat(latest.get(PanelRef.of(1, 1)).state()).isEqualTo(PanelState.MISSING);
+    assertThat(onUiThread).isEmpty();
+  }
+
+  /** Runs what the background thread and the JavaFX thread have been handed until both are idle. */
+  private void settleFx() throws Exception {
+    for (int i = 0; i < 4; i++) {
+      background.submit(() -> { }).get(60, TimeUnit.SECONDS);
+      WaitForAsyncUtils.waitForFxEvents();
+    }
+  }
+
+  private static String progress(MainWindow window) {
+    return ((javafx.scene.control.Labeled) window.current().node().lookup("#walk-progress")).getText();
+  }
+
+  @Test
+  void everyScreenOpensThroughTheNavigatorWithoutTheRecordOnTheJavaFxThread() throws Exception {
+    FxToolkit.registerPrimaryStage();
+    PlaneRecord facade = DemoWalk.facade(services);
+    Inspection walk = DemoWalk.record(services, 3);
+    ReportIssuer none = new ReportIssuer() {
+      @Override
+      public String issueReport(long id, Path out, java.util.function.Consumer<Progress> progress) {
+        return "issued";
+      }
+
+      @Override
+      public String issueRepairOrder(long id, Path out, java.util.function.Consumer<Progress> progress) {
+        return "issued";
+      }
+    };
+    uiThread = WaitForAsyncUtils.asyncFx(Thread::currentThread).get(60, TimeUnit.SECONDS);
+    AppScreens screens = new AppScreens(services, PlaneAnalyzer.standard(), DemoDatabase.CLOCK, dialogs,
+        new org.bracewalk.ui.common.FxExecutor(), background, none);
+    MainWindow window = WaitForAsyncUtils.asyncFx(() -> new MainWindow(screens, AppScreens.screenKeys(), "test"))
+        .get(60, TimeUnit.SECONDS);
+    org.bracewalk.ui.common.Selection here =
+        new org.bracewalk.ui.common.Selection(facade.structureId(), facade.id(), walk.id());
+    armed = true;
+    for (org.bracewalk.ui.common.ScreenId id : org.bracewalk.ui.common.ScreenId.values()) {
+      WaitForAsyncUtils.asyncFx(() -> window.open(id, here)).get(60, TimeUnit.SECONDS);
+      settleFx();
+      assertThat(window.currentScreen()).isEqualTo(id);
+      assertThat(window.isOpening()).isFalse();
+      if (id != org.bracewalk.ui.common.ScreenId.OVERVIEW) {
+        assertThat(window.current().crumbs()).as(id.title()).contains(facade.name());
+      }
+    }
+    assertThat(onUiThread).as("record calls on the JavaFX thread while opening screens").isEmpty();
+
+    // a plane that is not in the record: the screen shown stays, and the status bar names the plane
+    org.bracewalk.ui.common.ScreenId before = window.currentScreen();
+    WaitForAsyncUtils.asyncFx(() -> window.open(org.bracewalk.ui.common.ScreenId.DESIGN,
+        new org.bracewalk.ui.common.Selection(facade.structureId(), 999_999, 0))).get(60, TimeUnit.SECONDS);
+    settleFx();
+    assertThat(window.currentScreen()).isEqualTo(before);
+    assertThat(window.isOpening()).isFalse();
+    assertThat(((javafx.scene.control.Labeled) window.root().lookup("#screen-open-error")).getText())
+        .startsWith("Could not open Design: plane 999999 could not be read from the database");
+
+    // the walk-round is open (3 of its panels marked); a mark's write is held behind a busy
+    // background thread while the walk-round is opened again: it must start from that mark
+    WaitForAsyncUtils.asyncFx(() -> window.open(org.bracewalk.ui.common.ScreenId.WALK, here)).get(60, TimeUnit.SECONDS);
+    settleFx();
+    assertThat(progress(window)).isEqualTo("3 of 50 panels");
+    java.util.concurrent.CountDownLatch gate = new java.util.concurrent.CountDownLatch(1);
+    background.execute(() -> {
+      try {
+        gate.await(60, TimeUnit.SECONDS);
+      } catch (InterruptedException e) {
+        Thread.currentThread().interrupt();
+      }
+    });
+    WaitForAsyncUtils.asyncFx(() -> {
+      javafx.scene.Node walkView = ((javafx.scene.layout.BorderPane) window.current().node()).getCenter();
+      javafx.event.Event.fireEvent(walkView, new javafx.scene.input.KeyEvent(javafx.scene.input.KeyEvent.KEY_PRESSED,
+          "m", "m", javafx.scene.input.KeyCode.M, false, false, false, false));
+      window.open(org.bracewalk.ui.common.ScreenId.WALK, here);
+    }).get(60, TimeUnit.SECONDS);
+    assertThat(WaitForAsyncUtils.asyncFx(window::isOpening).get(60, TimeUnit.SECONDS)).isTrue();
+    gate.countDown();
+    settleFx();
+    assertThat(window.isOpening()).isFalse();
+    armed = false; // the test reads the record itself from here
+    int stored = services.inspections().latestObservations(walk.id(), facade.id()).size();
+    assertThat(stored).isEqualTo(4);
+    assertThat(WaitForAsyncUtils.asyncFx(() -> progress(window)).get(60, TimeUnit.SECONDS))
+        .isEqualTo(stored + " of 50 panels");
     assertThat(onUiThread).isEmpty();
   }
 }

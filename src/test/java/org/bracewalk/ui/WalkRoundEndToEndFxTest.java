@@ -187,6 +187,8 @@ class WalkRoundEndToEndFxTest {
 
     // the walk-round is read-only now: a key records nothing
     ctrl(robot, KeyCode.DIGIT3);
+    settle(); // the walk-round's record is read on the background executor, then the screen shown
+    assertThat(window.currentScreen()).isEqualTo(ScreenId.WALK);
     robot.type(KeyCode.M);
     settle();
     assertThat(services.inspections().observations(inspectionId)).hasSize(order.size());

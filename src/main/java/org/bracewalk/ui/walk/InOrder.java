@@ -10,13 +10,17 @@ import java.util.concurrent.Executor;
  * one of these: each mark or undo needs the record id of the one before it on its panel, and that
  * chain is kept here, off the JavaFX thread, so the marks reach the record in key order. A task
  * handed in while another runs waits for it; one that throws does not stop those after it.
+ *
+ * <p>The app shares one across its screens ({@code ui.AppScreens}): every walk-round writes its
+ * marks through it, and every screen reads what it shows on it, so a screen opened while marks are
+ * still being written reads them after they are stored.
  */
-final class InOrder implements Executor {
+public final class InOrder implements Executor {
   private final Executor under;
   private final ArrayDeque<Runnable> tasks = new ArrayDeque<>();
   private boolean running;
 
-  InOrder(Executor under) {
+  public InOrder(Executor under) {
     this.under = Objects.requireNonNull(under, "under");
   }
 
