@@ -12,7 +12,6 @@ import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.analysis.RepairBrace;
 import org.bracewalk.core.analysis.StateAnalysis;
 import org.bracewalk.core.model.AsBuiltPlane;
-import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Joint;
 import org.bracewalk.core.model.PanelRef;
@@ -169,7 +168,7 @@ final class FrameView {
             flag = "+";
             token = repairs.get(p).brace().token();
           } else {
-            token = present(p);
+            token = VerdictText.present(p, design, asBuilt);
           }
           panels.append(' ').append(flag).append(VerdictText.pad(token, tokenWidth)).append(' ');
         }
@@ -216,22 +215,6 @@ final class FrameView {
       case UNKNOWN -> '?';
       case LEFT_OUT -> ':';
     };
-  }
-
-  private String present(PanelRef p) {
-    Brace member;
-    if (asBuilt.isPresent()) {
-      if (asBuilt.get().isUninspected(p)) {
-        return "?";
-      }
-      member = asBuilt.get().memberAt(p);
-    } else {
-      member = design.braceAt(p);
-    }
-    if (member != null) {
-      return member.token();
-    }
-    return design.isOpening(p) ? "o" : ".";
   }
 
   private static String center(String s, int width) {

@@ -435,8 +435,11 @@ public final class VerdictText {
     }
   }
 
-  /** The token for what is there: the as-built member (or ?), else the design's; o for openings. */
-  private static String present(PanelRef p, PlaneDesign design, Optional<AsBuiltPlane> asBuilt) {
+  /**
+   * The token for what is there: the as-built member (or ?), else the design's; o for openings.
+   * Also used by {@link FrameView}.
+   */
+  static String present(PanelRef p, PlaneDesign design, Optional<AsBuiltPlane> asBuilt) {
     Brace member;
     if (asBuilt.isPresent()) {
       if (asBuilt.get().isUninspected(p)) {

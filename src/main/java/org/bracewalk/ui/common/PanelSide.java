@@ -1,5 +1,6 @@
 package org.bracewalk.ui.common;
 
+import javafx.scene.input.KeyCode;
 import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 
@@ -57,6 +58,20 @@ public enum PanelSide {
       }
     }
     return null;
+  }
+
+  /**
+   * The side that Shift with arrow key {@code code} selects (up: the ledger above, down: below,
+   * left and right: the standards), or {@code null} when {@code code} is not an arrow key.
+   */
+  public static PanelSide ofArrow(KeyCode code) {
+    return switch (code) {
+      case UP -> LEDGER_ABOVE;
+      case DOWN -> LEDGER_BELOW;
+      case LEFT -> STANDARD_LEFT;
+      case RIGHT -> STANDARD_RIGHT;
+      default -> null;
+    };
   }
 
   /** A panel and one of its sides. */

@@ -252,21 +252,13 @@ public final class DesignView extends BorderPane {
     if (e.isAltDown() || e.isControlDown() || e.isMetaDown()) {
       return;
     }
-    boolean handled = true;
-    if (e.isShiftDown()) {
-      switch (e.getCode()) {
-        case UP -> vm.selectSide(PanelSide.LEDGER_ABOVE);
-        case DOWN -> vm.selectSide(PanelSide.LEDGER_BELOW);
-        case LEFT -> vm.selectSide(PanelSide.STANDARD_LEFT);
-        case RIGHT -> vm.selectSide(PanelSide.STANDARD_RIGHT);
-        default -> handled = false;
-      }
-      if (handled) {
-        e.consume();
-        return;
-      }
-      handled = true;
+    PanelSide side = e.isShiftDown() ? PanelSide.ofArrow(e.getCode()) : null;
+    if (side != null) {
+      vm.selectSide(side);
+      e.consume();
+      return;
     }
+    boolean handled = true;
     switch (e.getCode()) {
       case UP -> vm.move(1, 0);
       case DOWN -> vm.move(-1, 0);

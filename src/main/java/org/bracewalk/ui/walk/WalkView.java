@@ -347,21 +347,13 @@ public final class WalkView extends BorderPane {
       }
       return;
     }
-    boolean handled = true;
-    if (e.isShiftDown()) {
-      switch (e.getCode()) {
-        case UP -> vm.selectSide(PanelSide.LEDGER_ABOVE);
-        case DOWN -> vm.selectSide(PanelSide.LEDGER_BELOW);
-        case LEFT -> vm.selectSide(PanelSide.STANDARD_LEFT);
-        case RIGHT -> vm.selectSide(PanelSide.STANDARD_RIGHT);
-        default -> handled = false;
-      }
-      if (handled) {
-        e.consume();
-        return;
-      }
-      handled = true;
+    PanelSide side = e.isShiftDown() ? PanelSide.ofArrow(e.getCode()) : null;
+    if (side != null) {
+      vm.selectSide(side);
+      e.consume();
+      return;
     }
+    boolean handled = true;
     switch (e.getCode()) {
       case S, SPACE, DIGIT1, NUMPAD1 -> vm.mark(PanelState.SOUND);
       case D, DIGIT2, NUMPAD2 -> vm.mark(PanelState.DAMAGED_EFFECTIVE);
