@@ -165,20 +165,16 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
   private static StateAnalysis analyseComplete(PlaneGrid grid, byte[] codes) {
     BraceGraph g = BraceGraph.of(grid, codes);
     StateAnalysis s = BraceGraphPlaneAnalyzer.analyse(g);
-    FrameFramework fw = FrameFramework.of(grid, rigidityCodes(codes), allThere(grid));
-    CriticalByStress.Critical critical = CriticalByStress.of(fw, SEED);
-    boolean pinned = fw.pinned;
-    List<Freedom> freedoms = completeSway(grid, swayingBlocks(s, pinned));
+    List<FrameRef> critical = CompleteFrameStress.criticalMembers(grid, codes, SEED);
+    boolean pinned = grid.support() == org.bracewalk.core.model.Support.PINNED_BASE;
     List<Joint> movingJoints = new ArrayList<>();
-    if (pinned) {
-      for (Freedom f : freedoms) {
-        movingJoints.addAll(f.joints());
-      }
-      movingJoints.sort(null);
+    List<Freedom> freedoms = completeSway(grid, swayingBlocks(s, pinned), movingJoints);
+    if (!pinned) {
+      movingJoints = List.of();
     }
     return new StateAnalysis(
         s.rigid(), s.degreesOfFreedom(), s.oneWayOnly(), s.lossTolerance(), s.lossToleranceExact(),
-        s.criticalBraces(), s.blocks(), critical.members(), movingJoints, freedoms, true);
+        s.criticalBraces(), s.blocks(), critical, movingJoints, freedoms, true);
   }
 
   /** The blocks that sway: not fixed, and on a free plane not the one holding bay 1. */
@@ -219,6 +215,12 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
    * with the storeys above it up to the next swaying lift).
    */
   private static List<Freedom> completeSway(PlaneGrid grid, List<Block> moving) {
+    return completeSway(grid, moving, new ArrayList<>());
+  }
+
+  /** As above; also adds every moving joint, in joint order, to {@code allMoving}. */
+  private static List<Freedom> completeSway(
+      PlaneGrid grid, List<Block> moving, List<Joint> allMoving) {
     List<Block> ordered = orderedBlocks(moving);
     int m = grid.lifts();
     int n = grid.bays();
@@ -243,7 +245,9 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
       for (int j = 0; j <= n; j++) {
         int k = Math.max(byLevel[i], byLine[j]);
         if (k >= 0) {
-          lists.get(k).add(new Joint(i, j));
+          Joint joint = new Joint(i, j);
+          lists.get(k).add(joint);
+          allMoving.add(joint);
         }
       }
     }
