@@ -380,14 +380,12 @@ final class FrameRepairPlanner {
           POOL_BYTES / (16L * fw.gridJoints)));
       long[][] vx = new long[pool][];
       long[][] vy = new long[pool][];
+      long[] w = new long[fw.memberCount];
       for (int k = 0; k < pool; k++) {
         long[] x = ech.randomNullVector(rnd);
-        long[] w = new long[fw.memberCount];
         for (int e = 0; e < fw.memberCount; e++) {
           int c = sys.classOf[e];
-          if (c >= 0) {
-            w[e] = x[c];
-          }
+          w[e] = c >= 0 ? x[c] : 0;
         }
         long[] tx = new long[Math.max(1, components)];
         long[] ty = new long[Math.max(1, components)];
