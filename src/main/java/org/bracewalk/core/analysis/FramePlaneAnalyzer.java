@@ -293,6 +293,14 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
   static StateAnalysis analyseIncomplete(
       PlaneGrid grid, byte[] codes, Set<FrameRef> absent, boolean full) {
     FrameFramework fw = FrameFramework.of(grid, rigidityCodes(codes), frameThere(grid, absent));
+    if (!full) {
+      // the verdict alone: a full rank of the face rows modulo p proves rigidity; a deficiency
+      // modulo p is taken as a freedom (wrong with probability below 1/p, and only cautiously)
+      int dof = FrameRepairPlanner.Motion.of(fw, new java.util.SplittableRandom(SEED), 1).dof;
+      boolean rigid = dof == 0 && (!hasTension(codes) || TensionOnlyFrame.rigid(grid, codes, absent));
+      return new StateAnalysis(rigid, dof, dof == 0 && !rigid, -1, true, List.of(), List.of(),
+          List.of(), List.of(), List.of(), false);
+    }
     FrameFreedoms ff = FrameFreedoms.of(fw, SEED);
     int dof = ff.dof;
     boolean tension = false;
@@ -323,6 +331,15 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
     return new StateAnalysis(
         rigid, dof, oneWay, tolerance, exact, critical.braces(), List.of(), critical.members(),
         ff.movingJoints, ff.freedoms, false);
+  }
+
+  private static boolean hasTension(byte[] codes) {
+    for (byte c : codes) {
+      if (c != PanelCodes.NONE && !PanelCodes.isRigid(c)) {
+        return true;
+      }
+    }
+    return false;
   }
 
   /** Diagonal codes without the tension-only bit: every member as a bar. */
