@@ -165,20 +165,16 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
   private static StateAnalysis analyseComplete(PlaneGrid grid, byte[] codes) {
     BraceGraph g = BraceGraph.of(grid, codes);
     StateAnalysis s = BraceGraphPlaneAnalyzer.analyse(g);
-    FrameFramework fw = FrameFramework.of(grid, rigidityCodes(codes), allThere(grid));
-    CriticalByStress.Critical critical = CriticalByStress.of(fw, SEED);
-    boolean pinned = fw.pinned;
-    List<Freedom> freedoms = completeSway(grid, swayingBlocks(s, pinned));
+    List<FrameRef> critical = CompleteFrameStress.criticalMembers(grid, codes, SEED);
+    boolean pinned = grid.support() == org.bracewalk.core.model.Support.PINNED_BASE;
     List<Joint> movingJoints = new ArrayList<>();
-    if (pinned) {
-      for (Freedom f : freedoms) {
-        movingJoints.addAll(f.joints());
-      }
-      movingJoints.sort(null);
+    List<Freedom> freedoms = completeSway(grid, swayingBlocks(s, pinned), movingJoints);
+    if (!pinned) {
+      movingJoints = List.of();
     }
     return new StateAnalysis(
         s.rigid(), s.degreesOfFreedom(), s.oneWayOnly(), s.lossTolerance(), s.lossToleranceExact(),
-        s.criticalBraces(), s.blocks(), critical.members(), movingJoints, freedoms, true);
+        s.criticalBraces(), s.blocks(), critical, movingJoints, freedoms, true);
   }
 
   /** The blocks that sway: not fixed, and on a free plane not the one holding bay 1. */
@@ -219,6 +215,12 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
    * with the storeys above it up to the next swaying lift).
    */
   private static List<Freedom> completeSway(PlaneGrid grid, List<Block> moving) {
+    return completeSway(grid, moving, new ArrayList<>());
+  }
+
+  /** As above; also adds every moving joint, in joint order, to {@code allMoving}. */
+  private static List<Freedom> completeSway(
+      PlaneGrid grid, List<Block> moving, List<Joint> allMoving) {
     List<Block> ordered = orderedBlocks(moving);
     int m = grid.lifts();
     int n = grid.bays();
@@ -243,7 +245,9 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
       for (int j = 0; j <= n; j++) {
         int k = Math.max(byLevel[i], byLine[j]);
         if (k >= 0) {
-          lists.get(k).add(new Joint(i, j));
+          Joint joint = new Joint(i, j);
+          lists.get(k).add(joint);
+          allMoving.add(joint);
         }
       }
     }
@@ -289,6 +293,14 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
   static StateAnalysis analyseIncomplete(
       PlaneGrid grid, byte[] codes, Set<FrameRef> absent, boolean full) {
     FrameFramework fw = FrameFramework.of(grid, rigidityCodes(codes), frameThere(grid, absent));
+    if (!full) {
+      // the verdict alone: a full rank of the face rows modulo p proves rigidity; a deficiency
+      // modulo p is taken as a freedom (wrong with probability below 1/p, and only cautiously)
+      int dof = FrameRepairPlanner.Motion.of(fw, new java.util.SplittableRandom(SEED), 1).dof;
+      boolean rigid = dof == 0 && (!hasTension(codes) || TensionOnlyFrame.rigid(grid, codes, absent));
+      return new StateAnalysis(rigid, dof, dof == 0 && !rigid, -1, true, List.of(), List.of(),
+          List.of(), List.of(), List.of(), false);
+    }
     FrameFreedoms ff = FrameFreedoms.of(fw, SEED);
     int dof = ff.dof;
     boolean tension = false;
@@ -319,6 +331,15 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
     return new StateAnalysis(
         rigid, dof, oneWay, tolerance, exact, critical.braces(), List.of(), critical.members(),
         ff.movingJoints, ff.freedoms, false);
+  }
+
+  private static boolean hasTension(byte[] codes) {
+    for (byte c : codes) {
+      if (c != PanelCodes.NONE && !PanelCodes.isRigid(c)) {
+        return true;
+      }
+    }
+    return false;
   }
 
   /** Diagonal codes without the tension-only bit: every member as a bar. */

@@ -79,7 +79,8 @@ final class FrameRepairPlanner {
     boolean[] there = FramePlaneAnalyzer.frameThere(grid, notThere);
     List<Candidate> taken = new ArrayList<>();
     SplittableRandom rnd = new SplittableRandom(FramePlaneAnalyzer.SEED);
-    Motion motion = dof == 0 ? null : Motion.of(FrameFramework.of(grid, codes, there), rnd);
+    Motion motion =
+        dof == 0 ? null : Motion.of(FrameFramework.of(grid, codes, there), rnd, dof);
     boolean rigid = dof == 0 || motion.dof == 0;
     int designCount = candidates.size();
     int next = 0;
@@ -123,11 +124,7 @@ final class FrameRepairPlanner {
       }
       long ddx = ModularEchelon.mod(fw.x(b) - fw.x(a));
       long ddy = ModularEchelon.mod(fw.y(b) - fw.y(a));
-      long stretch =
-          ModularEchelon.add(
-              ModularEchelon.mul(ModularEchelon.sub(motion.vx[b], motion.vx[a]), ddx),
-              ModularEchelon.mul(ModularEchelon.sub(motion.vy[b], motion.vy[a]), ddy));
-      if (stretch == 0) {
+      if (motion.stretch(a, b, ddx, ddy) == 0) {
         continue;
       }
       taken.add(c);
@@ -136,8 +133,12 @@ final class FrameRepairPlanner {
       } else {
         codes[c.panel()] |= (byte) (1 << c.way());
       }
-      motion = Motion.of(FrameFramework.of(grid, codes, there), rnd);
+      motion.take();
       rigid = motion.dof == 0;
+      if (!rigid && motion.size == 0) {
+        motion = Motion.of(FrameFramework.of(grid, codes, there), rnd, motion.dof);
+        rigid = motion.dof == 0;
+      }
     }
     // tension-only members: the freedoms are gone, but a cable may still go slack; restore the
     // design's members left, then add rigid diagonals, until the exact test is met
@@ -257,23 +258,92 @@ final class FrameRepairPlanner {
     return out;
   }
 
-  /** One random first-order motion of a framework (mod p) and its freedoms (mod p). */
+  /**
+   * Random first-order motions of a framework (mod p), up to {@link #POOL_BYTES} bytes of joint
+   * velocities, and its freedoms (mod p). The motions drawn are uniform in the motion space; the
+   * current motions are kept as combinations of them (coefficients only). Taking a member that
+   * current motion 0 stretches (the pivot) keeps every other current motion in the smaller motion
+   * space of the framework with that member: each is reduced by the multiple of the pivot that
+   * cancels its stretch, a linear map onto that space, so they stay independent and uniform there;
+   * the pivot is dropped. The framework is rebuilt only when the current motions run out.
+   */
   static final class Motion {
+    static final long POOL_BYTES = 96L << 20;
     final FrameFramework fw;
-    final int dof;
-    final long[] vx;
-    final long[] vy;
+    int dof;
+    /** Current motions 0..size-1, as coefficients over the motions drawn. */
+    int size;
+    private final long[][] coef;
+    /** The motions drawn: velocities of the grid joints. */
+    private final long[][] vx;
+    private final long[][] vy;
     final boolean[] held;
+    private final long[] s;
 
-    private Motion(FrameFramework fw, int dof, long[] vx, long[] vy, boolean[] held) {
+    private Motion(FrameFramework fw, int dof, long[][] vx, long[][] vy, boolean[] held) {
       this.fw = fw;
       this.dof = dof;
+      this.size = vx.length;
       this.vx = vx;
       this.vy = vy;
       this.held = held;
+      coef = new long[size][size];
+      for (int k = 0; k < size; k++) {
+        coef[k][k] = 1;
+      }
+      s = new long[size];
     }
 
-    static Motion of(FrameFramework fw, SplittableRandom rnd) {
+    /** Stretches of the bar a-b under the motions drawn into {@code s}. */
+    private void drawnStretches(int a, int b, long ddx, long ddy) {
+      for (int l = 0; l < vx.length; l++) {
+        s[l] = ModularEchelon.add(
+            ModularEchelon.mul(ModularEchelon.sub(vx[l][b], vx[l][a]), ddx),
+            ModularEchelon.mul(ModularEchelon.sub(vy[l][b], vy[l][a]), ddy));
+      }
+    }
+
+    private long current(int k) {
+      long t = 0;
+      long[] c = coef[k];
+      for (int l = 0; l < c.length; l++) {
+        if (c[l] != 0 && s[l] != 0) {
+          t = ModularEchelon.add(t, ModularEchelon.mul(c[l], s[l]));
+        }
+      }
+      return t;
+    }
+
+    /**
+     * The first-order change of length (times the length) of a bar a-b under current motion 0;
+     * leaves that bar's stretches ready for {@link #take()}.
+     */
+    long stretch(int a, int b, long ddx, long ddy) {
+      drawnStretches(a, b, ddx, ddy);
+      return current(0);
+    }
+
+    /** The bar last given to {@link #stretch} is added; current motion 0 stretches it. */
+    void take() {
+      long inv = ModularEchelon.inverse(current(0));
+      long[] pivot = coef[0];
+      for (int k = 1; k < size; k++) {
+        long f = ModularEchelon.mul(current(k), inv);
+        long[] c = coef[k];
+        if (f != 0) {
+          for (int l = 0; l < c.length; l++) {
+            c[l] = ModularEchelon.sub(c[l], ModularEchelon.mul(f, pivot[l]));
+          }
+        }
+        coef[k - 1] = c;
+      }
+      size--;
+      coef[size] = pivot;
+      dof--;
+    }
+
+    /** {@code wanted} motions at most (fewer where the pool would exceed its bytes). */
+    static Motion of(FrameFramework fw, SplittableRandom rnd, int wanted) {
       int[][] adj = FrameFreedoms.adjacency(fw);
       int[] comp = FrameFreedoms.components(fw, adj);
       int anchorJoint = -1;
@@ -306,22 +376,28 @@ final class FrameRepairPlanner {
       if (anchorJoint < 0 && !fw.pinned) {
         dof = 0;
       }
-      long[] x = ech.randomNullVector(rnd);
+      int pool = (int) Math.max(1, Math.min(Math.min(wanted, Math.max(1, dof)),
+          POOL_BYTES / (16L * fw.gridJoints)));
+      long[][] vx = new long[pool][];
+      long[][] vy = new long[pool][];
       long[] w = new long[fw.memberCount];
-      for (int e = 0; e < fw.memberCount; e++) {
-        int c = sys.classOf[e];
-        if (c >= 0) {
-          w[e] = x[c];
+      for (int k = 0; k < pool; k++) {
+        long[] x = ech.randomNullVector(rnd);
+        for (int e = 0; e < fw.memberCount; e++) {
+          int c = sys.classOf[e];
+          w[e] = c >= 0 ? x[c] : 0;
         }
+        long[] tx = new long[Math.max(1, components)];
+        long[] ty = new long[Math.max(1, components)];
+        for (int c = 0; c < components; c++) {
+          tx[c] = ModularEchelon.random(rnd);
+          ty[c] = ModularEchelon.random(rnd);
+        }
+        long[][] v = FrameFreedoms.propagate(fw, adj, w, comp, anchorComp, anchorJoint, tx, ty);
+        vx[k] = java.util.Arrays.copyOf(v[0], fw.gridJoints);
+        vy[k] = java.util.Arrays.copyOf(v[1], fw.gridJoints);
       }
-      long[] tx = new long[Math.max(1, components)];
-      long[] ty = new long[Math.max(1, components)];
-      for (int c = 0; c < components; c++) {
-        tx[c] = ModularEchelon.random(rnd);
-        ty[c] = ModularEchelon.random(rnd);
-      }
-      long[][] v = FrameFreedoms.propagate(fw, adj, w, comp, anchorComp, anchorJoint, tx, ty);
-      return new Motion(fw, dof, v[0], v[1], held);
+      return new Motion(fw, dof, vx, vy, held);
     }
   }
 }

@@ -173,6 +173,7 @@ final class RandomSelfStress {
     }
     long[] yx = new long[fw.faceCount];
     long[] yy = new long[fw.faceCount];
+    long[] inverses = intactInverses(fw, sys);
     for (int f = 0; f < fw.faceCount; f++) {
       int g = sys.groupOf[f];
       if (g >= 0) {
@@ -185,8 +186,7 @@ final class RandomSelfStress {
         long ay = ModularEchelon.mod(fw.side(f, a) * fw.dy[a]);
         long bx = ModularEchelon.mod(fw.side(f, b) * fw.dx[b]);
         long by = ModularEchelon.mod(fw.side(f, b) * fw.dy[b]);
-        long det = ModularEchelon.sub(ModularEchelon.mul(ax, by), ModularEchelon.mul(ay, bx));
-        long inv = ModularEchelon.inverse(det);
+        long inv = inverses[f];
         // [ax ay; bx by] (x, y) = (phi, psi)
         yx[f] = ModularEchelon.mul(inv,
             ModularEchelon.sub(ModularEchelon.mul(by, phi[f]), ModularEchelon.mul(ay, psi[f])));
@@ -206,6 +206,41 @@ final class RandomSelfStress {
       long rx = r == FrameFramework.OUTER ? 0 : yx[r];
       long ry = r == FrameFramework.OUTER ? 0 : yy[r];
       out[e] = lx != rx || ly != ry;
+    }
+    return out;
+  }
+
+  /**
+   * For each intact face, the inverse of the determinant of its first two members' (signed)
+   * directions; all at once by batch inversion (one modular inverse, three products per face).
+   */
+  private static long[] intactInverses(FrameFramework fw, FaceClassSystem sys) {
+    long[] det = new long[fw.faceCount];
+    long[] prefix = new long[fw.faceCount + 1];
+    prefix[0] = 1;
+    for (int f = 0; f < fw.faceCount; f++) {
+      if (sys.groupOf[f] == -2) {
+        int a = fw.faceMembers[4 * f];
+        int b = fw.faceMembers[4 * f + 1];
+        long ax = ModularEchelon.mod(fw.side(f, a) * fw.dx[a]);
+        long ay = ModularEchelon.mod(fw.side(f, a) * fw.dy[a]);
+        long bx = ModularEchelon.mod(fw.side(f, b) * fw.dx[b]);
+        long by = ModularEchelon.mod(fw.side(f, b) * fw.dy[b]);
+        det[f] = ModularEchelon.sub(ModularEchelon.mul(ax, by), ModularEchelon.mul(ay, bx));
+        if (det[f] == 0) {
+          throw new ArithmeticException("no inverse of 0");
+        }
+      } else {
+        det[f] = 1;
+      }
+      prefix[f + 1] = ModularEchelon.mul(prefix[f], det[f]);
+    }
+    long inv = ModularEchelon.inverse(prefix[fw.faceCount]);
+    long[] out = new long[fw.faceCount];
+    for (int f = fw.faceCount - 1; f >= 0; f--) {
+      // inv is the inverse of det[0] ... det[f]
+      out[f] = ModularEchelon.mul(inv, prefix[f]);
+      inv = ModularEchelon.mul(inv, det[f]);
     }
     return out;
   }
