@@ -16,7 +16,7 @@ import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 
 /**
- * The engine: the brace graph ({@link BraceGraphPlaneAnalyzer}) where the analysed frame is
+ * The engine: the brace graph ({@link BraceGraphAnalysis}) where the analysed frame is
  * complete, the exact framework analysis ({@link FrameFramework}, {@link FaceClassSystem}, {@link
  * FrameFreedoms}, {@link CriticalByStress}, {@link FrameRepairPlanner}) where a ledger or standard
  * is not there. On a complete frame every brace-graph answer is kept as it is; the frame-member
@@ -44,7 +44,7 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
     if (state.frameComplete()) {
       PlaneGrid grid = state.grid();
       byte[] codes = PanelCodes.encode(grid, state.braces());
-      StateAnalysis s = BraceGraphPlaneAnalyzer.analyse(BraceGraph.of(grid, codes));
+      StateAnalysis s = BraceGraphAnalysis.analyse(BraceGraph.of(grid, codes));
       List<Block> moving = swayingBlocks(s, grid.support() == org.bracewalk.core.model.Support.PINNED_BASE);
       if (moving.isEmpty()) {
         return Optional.empty();
@@ -123,7 +123,7 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
       }
       rigidIfSound =
           absentIfSound.isEmpty()
-              ? BraceGraphPlaneAnalyzer.isRigid(BraceGraph.of(grid, optimistic))
+              ? BraceGraphAnalysis.isRigid(BraceGraph.of(grid, optimistic))
               : analyseIncomplete(grid, optimistic, absentIfSound, false).rigid();
     }
     List<PlacedBrace> extras = new ArrayList<>();
@@ -164,7 +164,7 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
 
   private static StateAnalysis analyseComplete(PlaneGrid grid, byte[] codes) {
     BraceGraph g = BraceGraph.of(grid, codes);
-    StateAnalysis s = BraceGraphPlaneAnalyzer.analyse(g);
+    StateAnalysis s = BraceGraphAnalysis.analyse(g);
     List<FrameRef> critical = CompleteFrameStress.criticalMembers(grid, codes, SEED);
     boolean pinned = grid.support() == org.bracewalk.core.model.Support.PINNED_BASE;
     List<Joint> movingJoints = new ArrayList<>();

@@ -136,7 +136,7 @@ class FrameExamplesTest {
     PlaneGrid grid = PlaneGrid.uniform(2, 2, Support.FREE);
     Map<PanelRef, Brace> b = braces(new PanelRef(1, 1), "/", new PanelRef(1, 2), "/");
     StateAnalysis complete = engine.analyseState(grid, b);
-    StateAnalysis old = BraceGraphPlaneAnalyzer.analyse(BraceGraph.of(grid, b));
+    StateAnalysis old = BraceGraphAnalysis.analyse(BraceGraph.of(grid, b));
     assertThat(complete.degreesOfFreedom()).isEqualTo(1).isEqualTo(old.degreesOfFreedom());
     assertThat(complete.blocks()).isEqualTo(old.blocks());
     assertThat(complete.criticalBraces()).isEqualTo(old.criticalBraces());
