@@ -95,7 +95,7 @@ public final class FindingsView extends BorderPane {
   private VBox side() {
     VBox verdict = Widgets.verdictBox(vm.verdictProperty());
     verdict.setId("findings-verdict");
-    VBox repair = Widgets.box("Least set of braces that makes it rigid (drawn dash-dot, numbered)", lines(vm.repairLines(), "findings-repair"),
+    VBox repair = Widgets.box("Least set that makes it rigid: frame members, then braces (drawn dash-dot, numbered)", lines(vm.repairLines(), "findings-repair"),
         Widgets.hint("Circle: the design's own position. Square: a new position, a deviation from the design."));
     VBox restore = Widgets.box("Restore to design", lines(vm.restoreLines(), "findings-restore"));
     VBox found = Widgets.box("Found", lines(vm.findingLines(), "findings-found"));
