@@ -200,7 +200,7 @@ public final class PlanePainter {
       return;
     }
     double len = Math.hypot(s[2] - s[0], s[3] - s[1]);
-    double rad = Math.max(6, Math.min(10, len * 0.1));
+    double rad = Math.max(6, Math.min(10, len * 0.18));
     double cx = (s[0] + s[2]) / 2 + (upright ? side * (off + rad + 3) : 0);
     double cy = (s[1] + s[3]) / 2 + (upright ? 0 : side * (off + rad + 3));
     g.setFill(Color.WHITE);
