@@ -193,6 +193,10 @@ public final class RecordFingerprinter {
           .field("createdAt", o.createdAt()).field("createdBy", o.createdBy())
           .field("note", o.note());
       for (RepairAction a : or.actions()) {
+        if (a.frameMember() != null) {
+          frameAction(c, a);
+          continue;
+        }
         c.record("action").field("id", a.id()).field("orderId", a.orderId())
             .field("planeId", a.planeId())
             .field("lift", a.panel() == null ? null : a.panel().lift())
@@ -205,5 +209,20 @@ public final class RecordFingerprinter {
       }
     }
     return c;
+  }
+
+  /**
+   * A repair action on a frame member (added with V10: present only where one was recorded, so
+   * every earlier order's actions have the form they had).
+   */
+  private static void frameAction(Canonical c, RepairAction a) {
+    FrameRef f = a.frameMember();
+    c.record("frame-action").field("id", a.id()).field("orderId", a.orderId())
+        .field("planeId", a.planeId())
+        .field("type", f.type().label()).field("first", f.first()).field("second", f.second())
+        .field("action", a.action().label())
+        .field("description", a.description()).field("dueDate", a.dueDate())
+        .field("assignee", a.assignee()).field("doneAt", a.doneAt())
+        .field("doneBy", a.doneBy()).field("verifiedBy", a.verifiedByInspectionId());
   }
 }

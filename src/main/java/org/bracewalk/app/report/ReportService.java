@@ -677,6 +677,7 @@ public final class ReportService {
       case REPLACE -> RepairStepKind.REPLACE;
       case BRACE -> RepairStepKind.BRACE;
       case TAKE_OUT_OF_SERVICE -> RepairStepKind.TAKE_OUT_OF_SERVICE;
+      case REFIT -> RepairStepKind.REFIT;
     };
   }
 }

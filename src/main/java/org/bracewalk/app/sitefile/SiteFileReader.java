@@ -486,11 +486,22 @@ public final class SiteFileReader {
   }
 
   private RepairActionData action(Obj n, Map<String, PlaneData> planes, List<Pending> pending) {
-    n.known("plane", "lift", "bay", "action", "brace", "description", "dueDate", "assignee",
-        "doneAt", "doneBy", "verifiedByInspection");
+    n.known("plane", "lift", "bay", "frame", "level", "line", "action", "brace", "description",
+        "dueDate", "assignee", "doneAt", "doneBy", "verifiedByInspection");
     PlaneData plane = planeNamed(n, planes);
-    PanelRef panel = n.has("lift") || n.has("bay") ? panel(n, plane) : null;
+    FrameRef frameMember = n.has("frame") ? frameMember(n, plane.grid()) : null;
+    if (frameMember == null && (n.has("level") || n.has("line"))) {
+      throw n.error(n.has("level") ? "level" : "line", "a level or line names a frame member:"
+          + " give \"frame\" (ledger or standard) too, lift and bay for a panel, or neither for"
+          + " the whole plane");
+    }
+    PanelRef panel = frameMember == null && (n.has("lift") || n.has("bay")) ? panel(n, plane)
+        : null;
     RepairActionKind kind = n.label("action", RepairActionKind::fromLabel);
+    if (frameMember != null && n.has("brace")) {
+      throw n.error("brace", "an action on a frame member fits no diagonal (field brace is for a"
+          + " panel)");
+    }
     Brace brace = n.has("brace") ? brace(n, "brace") : null;
     LocalDate due = n.date("dueDate", false);
     Instant done = n.instant("doneAt", false);
@@ -502,9 +513,10 @@ public final class SiteFileReader {
     Integer v = verified;
     n.build(done == null && (n.has("doneBy") || v != null) ? "doneAt" : "action",
         () -> new RepairAction(0, 1, 1, panel, kind, brace, n.text("description"), due,
-            n.text("assignee"), done, n.text("doneBy"), v == null ? null : (long) v));
+            n.text("assignee"), done, n.text("doneBy"), v == null ? null : (long) v,
+            frameMember));
     return new RepairActionData(plane.name(), panel, kind, brace, n.text("description"), due,
-        n.text("assignee"), done, n.text("doneBy"), verified);
+        n.text("assignee"), done, n.text("doneBy"), verified, frameMember);
   }
 
   private PlaneData planeNamed(Obj n, Map<String, PlaneData> planes) {

@@ -263,7 +263,9 @@ public final class SiteFileWriter {
   private static ObjectNode action(RepairActionData a) {
     ObjectNode n = NODES.objectNode();
     n.put("plane", a.plane());
-    if (a.panel() != null) {
+    if (a.frameMember() != null) {
+      putMember(n, a.frameMember());
+    } else if (a.panel() != null) {
       n.put("lift", a.panel().lift());
       n.put("bay", a.panel().bay());
     }
