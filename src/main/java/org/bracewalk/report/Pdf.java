@@ -1,5 +1,6 @@
 package org.bracewalk.report;
 
+import com.lowagie.text.DocumentException;
 import com.lowagie.text.Element;
 import com.lowagie.text.Font;
 import com.lowagie.text.Paragraph;
@@ -9,21 +10,101 @@ import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
 import java.awt.Color;
 import java.io.IOException;
+import java.io.InputStream;
+import java.util.EnumMap;
+import java.util.Map;
 import org.bracewalk.core.port.RenderingException;
 
-/** Fonts and the few table and paragraph shapes both documents use. */
+/**
+ * Fonts and the few table and paragraph shapes both documents use.
+ *
+ * <p>The fonts are DejaVu Sans, DejaVu Sans Bold and DejaVu Sans Mono (from the {@code
+ * jasperreports-fonts} jar on the class path), embedded as subsets with Identity-H encoding, so
+ * every name prints as recorded (Latin with any accents, Greek, Cyrillic) and the document
+ * carries only the glyphs it uses. The PDF standard fonts (Helvetica, Courier) show Windows-1252
+ * only. The font files are read once per run; each document gets its own font objects, so
+ * documents drawn at the same time share nothing that reads the files.
+ */
 final class Pdf {
+  /** Where the fonts lie on the class path. */
+  static final String FONT_FOLDER = "net/sf/jasperreports/fonts/dejavu/";
+
+  /** The three fonts the documents use, by the file name in {@link #FONT_FOLDER}. */
+  enum Face {
+    REGULAR("DejaVuSans.ttf"),
+    BOLD("DejaVuSans-Bold.ttf"),
+    MONO("DejaVuSansMono.ttf");
+
+    final String file;
+
+    Face(String file) {
+      this.file = file;
+    }
+  }
+
+  private static final Map<Face, byte[]> FILES = new EnumMap<>(Face.class);
+
   final BaseFont regular;
   final BaseFont bold;
   final BaseFont mono;
 
   Pdf() {
+    regular = create(Face.REGULAR);
+    bold = create(Face.BOLD);
+    mono = create(Face.MONO);
+  }
+
+  /** A new font object for one document: embedded, subset, Identity-H (Unicode). */
+  static BaseFont create(Face face) {
     try {
-      regular = BaseFont.createFont(BaseFont.HELVETICA, BaseFont.WINANSI, BaseFont.NOT_EMBEDDED);
-      bold = BaseFont.createFont(BaseFont.HELVETICA_BOLD, BaseFont.WINANSI, BaseFont.NOT_EMBEDDED);
-      mono = BaseFont.createFont(BaseFont.COURIER, BaseFont.WINANSI, BaseFont.NOT_EMBEDDED);
-    } catch (IOException e) {
-      throw new RenderingException("the PDF's standard fonts cannot be loaded: " + e.getMessage(), e);
+      BaseFont f = BaseFont.createFont(face.file, BaseFont.IDENTITY_H, BaseFont.EMBEDDED, false,
+          bytes(face), null);
+      f.setSubset(true);
+      return f;
+    } catch (IOException | DocumentException e) {
+      throw new RenderingException("the report font " + FONT_FOLDER + face.file
+          + " cannot be read: " + e.getMessage(), e);
+    }
+  }
+
+  /**
+   * Whether the documents' fonts (regular and bold) hold a glyph for {@code codePoint}; a
+   * character without one would print as an empty box or not at all.
+   */
+  static boolean shows(int codePoint) {
+    for (BaseFont f : Probes.FONTS) {
+      if (!f.charExists(codePoint)) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  /** Fonts asked only whether they hold a glyph (never drawn with): made once, when first asked. */
+  private static final class Probes {
+    static final BaseFont[] FONTS = {create(Face.REGULAR), create(Face.BOLD)};
+  }
+
+  /** The font file's bytes, read from the class path once per run. */
+  private static byte[] bytes(Face face) {
+    synchronized (FILES) {
+      byte[] b = FILES.get(face);
+      if (b == null) {
+        try (InputStream in = Pdf.class.getClassLoader()
+            .getResourceAsStream(FONT_FOLDER + face.file)) {
+          if (in == null) {
+            throw new RenderingException("the report font " + FONT_FOLDER + face.file
+                + " is not on the class path (it comes with net.sf.jasperreports:"
+                + "jasperreports-fonts; the program is incomplete)");
+          }
+          b = in.readAllBytes();
+        } catch (IOException e) {
+          throw new RenderingException("the report font " + FONT_FOLDER + face.file
+              + " cannot be read: " + e.getMessage(), e);
+        }
+        FILES.put(face, b);
+      }
+      return b;
     }
   }
 
