@@ -6,8 +6,9 @@
 -- nothing in their records says which rules apply, and a migration does not guess (their reports
 -- cite no regulation specifically and say so, and still ask for every particular, as before).
 --
--- The number V11 follows V10 of another change; files migrated here before V10 existed need
--- Flyway's out-of-order run for V10 (a new file is migrated in order).
+-- V11 follows V10 of another change, merged first. A file migrated to V11 while V10 did not
+-- exist yet (a development build of this branch alone) is refused once V10 appears: Flyway runs
+-- with outOfOrder off. New files and files at V9 or V10 migrate in order.
 
 ALTER TABLE sites ADD COLUMN jurisdiction TEXT NOT NULL DEFAULT 'other'
   CHECK (jurisdiction IN ('uk', 'us', 'eu', 'other'));
