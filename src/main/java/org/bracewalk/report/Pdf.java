@@ -1,11 +1,15 @@
 package org.bracewalk.report;
 
+import com.lowagie.text.Chunk;
 import com.lowagie.text.DocumentException;
 import com.lowagie.text.Element;
 import com.lowagie.text.Font;
 import com.lowagie.text.Paragraph;
 import com.lowagie.text.Phrase;
+import com.lowagie.text.SplitCharacter;
 import com.lowagie.text.pdf.BaseFont;
+import com.lowagie.text.pdf.DefaultSplitCharacter;
+import com.lowagie.text.pdf.PdfChunk;
 import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
 import java.awt.Color;
@@ -108,6 +112,35 @@ final class Pdf {
     }
   }
 
+  /**
+   * Lines break after a hyphen as usual, except inside a range of numbers, so "lifts 1-3" never
+   * ends a line with "1-" (DejaVu Sans is wider than the standard Helvetica, and narrow table
+   * columns broke there).
+   */
+  static final SplitCharacter KEEP_RANGES = new DefaultSplitCharacter() {
+    @Override
+    public boolean isSplitCharacter(int start, int current, int end, char[] cc, PdfChunk[] ck) {
+      if (getCurrentCharacter(current, cc, ck) == '-' && current > start && current + 1 < end
+          && Character.isDigit(getCurrentCharacter(current - 1, cc, ck))
+          && Character.isDigit(getCurrentCharacter(current + 1, cc, ck))) {
+        return false;
+      }
+      return super.isSplitCharacter(start, current, end, cc, ck);
+    }
+  };
+
+  /** Sets {@link #KEEP_RANGES} on every chunk of {@code phrase}, nested phrases included. */
+  static <P extends Phrase> P keepRanges(P phrase) {
+    for (Object e : phrase) {
+      if (e instanceof Chunk c) {
+        c.setSplitCharacter(KEEP_RANGES);
+      } else if (e instanceof Phrase inner) {
+        keepRanges(inner);
+      }
+    }
+    return phrase;
+  }
+
   Font font(float size) {
     return new Font(regular, size, Font.NORMAL, Palette.GRID);
   }
@@ -136,7 +169,7 @@ final class Pdf {
   }
 
   Paragraph para(String text, float size) {
-    Paragraph p = new Paragraph(text, font(size));
+    Paragraph p = keepRanges(new Paragraph(text, font(size)));
     p.setLeading(size * 1.3f);
     p.setSpacingAfter(size * 0.3f);
     return p;
@@ -155,7 +188,7 @@ final class Pdf {
   }
 
   PdfPCell cell(Phrase phrase) {
-    PdfPCell c = new PdfPCell(phrase);
+    PdfPCell c = new PdfPCell(keepRanges(phrase));
     c.setPadding(3f);
     c.setPaddingTop(2f);
     c.setBorderColor(new Color(0xbb, 0xbb, 0xbb));
