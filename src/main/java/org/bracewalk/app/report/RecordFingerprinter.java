@@ -19,6 +19,7 @@ import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.RepairAction;
 import org.bracewalk.core.model.RepairOrder;
+import org.bracewalk.core.model.Jurisdiction;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.port.report.RecordFingerprint;
@@ -72,10 +73,16 @@ public final class RecordFingerprinter {
   }
 
   static Canonical site(Site s) {
-    return new Canonical().record("site")
+    Canonical c = new Canonical().record("site")
         .field("id", s.id()).field("name", s.name()).field("clientName", s.clientName())
         .field("clientAddress", s.clientAddress()).field("location", s.location())
         .field("timeZone", s.timeZone().getId()).field("units", s.units().label());
+    // the report's citations and required particulars follow the jurisdiction; a site without
+    // one (every site stored before V11) keeps its canonical text, so earlier documents verify
+    if (s.jurisdiction() != Jurisdiction.OTHER) {
+      c.field("jurisdiction", s.jurisdiction().label());
+    }
+    return c;
   }
 
   static Canonical structure(Structure s) {

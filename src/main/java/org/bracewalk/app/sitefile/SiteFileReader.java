@@ -41,6 +41,7 @@ import org.bracewalk.core.model.FrameMemberType;
 import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.DisplayUnits;
+import org.bracewalk.core.model.Jurisdiction;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.InspectionStatus;
@@ -177,7 +178,8 @@ public final class SiteFileReader {
   private record Pending(Obj at, int number) {}
 
   private Site site(Obj n) {
-    n.known("name", "clientName", "clientAddress", "location", "timeZone", "units");
+    n.known("name", "clientName", "clientAddress", "location", "timeZone", "units",
+        "jurisdiction");
     String zone = n.requiredText("timeZone");
     ZoneId timeZone;
     try {
@@ -186,10 +188,12 @@ public final class SiteFileReader {
       throw n.error("timeZone", "unknown time zone \"" + zone + "\"; use a region such as Europe/London");
     }
     DisplayUnits units = n.label("units", DisplayUnits::fromLabel);
+    Jurisdiction jurisdiction = n.has("jurisdiction")
+        ? n.label("jurisdiction", Jurisdiction::fromLabel) : Jurisdiction.OTHER;
     return n.build(
         "name",
         () -> new Site(0, n.requiredText("name"), n.text("clientName"), n.text("clientAddress"),
-            n.text("location"), timeZone, units));
+            n.text("location"), timeZone, units, jurisdiction));
   }
 
   private StructureData structure(Obj n, Set<String> names, int[] inspectionNumber,
