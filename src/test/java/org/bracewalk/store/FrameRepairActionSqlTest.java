@@ -222,7 +222,9 @@ class FrameRepairActionSqlTest {
     String expected = before.replace("verified_by_inspection_id=2|\n",
             "verified_by_inspection_id=2|frame_type=null|frame_first=null|frame_second=null|\n")
         .replace("verified_by_inspection_id=null|\n",
-            "verified_by_inspection_id=null|frame_type=null|frame_first=null|frame_second=null|\n");
+            "verified_by_inspection_id=null|frame_type=null|frame_first=null|frame_second=null|\n")
+        // V11: a site stored before jurisdictions were recorded is "other"
+        .replace("display_units=metric|\n", "display_units=metric|jurisdiction=other|\n");
     assertThat(expected).isNotEqualTo(before);
     assertThat(FrameMemberSqlTest.everything(file)).isEqualTo(expected);
     assertThat(names(file, "index")).containsExactlyElementsOf(indexesBefore);
