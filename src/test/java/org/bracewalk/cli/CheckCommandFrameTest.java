@@ -113,7 +113,7 @@ class CheckCommandFrameTest {
     Run rack = run("check", map("d.txt", "/\n\\\n/\n").toString(), map("b.txt", "/\n\\\n/\nbeam 1 1 missing\n").toString(),
         "--role", "upright-frame");
     assertThat(rack.out().replaceAll("\\s+", " "))
-        .contains("upright on line 0 runs unrestrained through level 1 (beam at level 1, bay 1 not there)");
+        .contains("upright on line 0 runs unrestrained through level 1 (horizontal at level 1, bay 1 not there)");
   }
 
   /** Plane E: 2 lifts x 3 bays, lift 1 bay 1 / and lift 2 bay 3 /, ledger level 1 bay 1 missing: joint (1, 0) only. */

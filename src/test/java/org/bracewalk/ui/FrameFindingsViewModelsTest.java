@@ -98,7 +98,7 @@ class FrameFindingsViewModelsTest {
         .map(RepairMember::member).toList();
     assertThat(members).isNotEmpty();
     assertThat(pic.repairMembers()).isEqualTo(members);
-    Terms racking = Terms.RACKING;
+    Terms racking = Terms.RACKING_FRAME; // an upright frame: horizontals and uprights
     for (int k = 0; k < members.size(); k++) {
       FrameRef f = members.get(k);
       String action = f.equals(FrameRef.standard(1, 0)) ? "replace" : "refit";
@@ -107,7 +107,7 @@ class FrameFindingsViewModelsTest {
     }
     assertThat(vm.repairLines()).hasSize(r.analysis().repair().minimum());
     assertThat(vm.findingLines())
-        .anyMatch(s -> s.startsWith("beam at level 1, bay 1: missing, torn \u2014 bottom horizontal"))
+        .anyMatch(s -> s.startsWith("horizontal at level 1, bay 1: missing, torn \u2014 bottom horizontal"))
         .anyMatch(s -> s.startsWith("upright of lift 1 on line 0: damaged-ineffective, bent, bow 9.0"
             + " mm over 1000 mm"));
     List<String> freedomWords = r.verdict().freedomWords(Set.of(FrameRef.ledger(1, 1),
@@ -117,7 +117,7 @@ class FrameFindingsViewModelsTest {
     }
     assertThat(freedomWords).anyMatch(w -> w.startsWith("loose end at level 1, line 0"));
     assertThat(vm.restoreLines())
-        .contains("beam at level 1, bay 1: missing \u2014 needed for rigidity");
+        .contains("horizontal at level 1, bay 1: missing \u2014 needed for rigidity");
     assertThat(vm.summaryProperty().get()).contains("2 frame members marked");
     assertThat(vm.verdictProperty().get().advice()).contains("member");
   }
@@ -162,7 +162,7 @@ class FrameFindingsViewModelsTest {
     assertThat(pic.frameFindings()).containsEntry(FrameRef.ledger(1, 1), PanelState.MISSING);
     assertThat(joints(pic, FreedomKind.LOOSE_END)).contains(new Joint(1, 0));
     assertThat(vm.changes()).contains(
-        "beam at level 1, bay 1: not recorded (as designed) \u2192 missing",
+        "horizontal at level 1, bay 1: not recorded (as designed) \u2192 missing",
         "upright of lift 1 on line 0: not recorded (as designed) \u2192 damaged-ineffective");
     assertThat(vm.entries().get(1)).contains("(2 frame members)");
     vm.older();

@@ -6,24 +6,37 @@ import org.bracewalk.core.model.StructureKind;
 
 /**
  * Which trade's words name the frame members: a scaffold has ledgers and standards, racking has
- * beams and uprights (both trades' own words; {@link FrameMemberType}).
+ * beams and uprights, and an upright frame of racking has horizontals between its uprights (the
+ * trades' own words; {@link FrameMemberType}; the report's templates say the same,
+ * {@code frame.ledger.upright-frame}).
  */
 public enum Terms {
   SCAFFOLD,
-  RACKING;
+  RACKING,
+  /** A racking upright frame: horizontals and uprights. */
+  RACKING_FRAME;
 
   /** Racking words for an upright frame or a spine (racking planes), scaffold words otherwise. */
   public static Terms of(PlaneRole role) {
-    return role == PlaneRole.UPRIGHT_FRAME || role == PlaneRole.SPINE ? RACKING : SCAFFOLD;
+    if (role == PlaneRole.UPRIGHT_FRAME) {
+      return RACKING_FRAME;
+    }
+    return role == PlaneRole.SPINE ? RACKING : SCAFFOLD;
   }
 
   /** Racking words for any plane of a racking run, and for racking planes; scaffold words otherwise. */
   public static Terms of(StructureKind kind, PlaneRole role) {
-    return kind == StructureKind.RACKING_RUN ? RACKING : of(role);
+    if (kind == StructureKind.RACKING_RUN) {
+      return role == PlaneRole.UPRIGHT_FRAME ? RACKING_FRAME : RACKING;
+    }
+    return of(role);
   }
 
-  /** {@code ledger}/{@code beam}, {@code standard}/{@code upright}. */
+  /** {@code ledger}/{@code beam}/{@code horizontal}, {@code standard}/{@code upright}. */
   public String word(FrameMemberType type) {
-    return this == RACKING ? type.rackingLabel() : type.label();
+    if (this == RACKING_FRAME && type == FrameMemberType.LEDGER) {
+      return "horizontal";
+    }
+    return this == SCAFFOLD ? type.label() : type.rackingLabel();
   }
 }

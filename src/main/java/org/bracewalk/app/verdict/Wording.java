@@ -70,7 +70,7 @@ public final class Wording {
 
   /**
    * {@code ledger at level 1, bay 2}, {@code standard of lift 2 on line 3}; racking words {@code
-   * beam at level 1, bay 2}, {@code upright of lift 2 on line 3}.
+   * beam at level 1, bay 2} (an upright frame: {@code horizontal at ...}), {@code upright of lift 2 on line 3}.
    */
   public static String frameMember(FrameRef f, Terms terms) {
     String word = terms.word(f.type());

@@ -59,17 +59,22 @@ class VerdictFrameTest {
   }
 
   @Test
-  void aRackingPlaneSaysUprightAndBeam() {
+  void aRackingPlaneSaysUprightAndHorizontalOrBeam() {
     PlaneGrid grid = PlaneGrid.uniform(3, 1, Support.PINNED_BASE);
     Verdict v = Verdict.classify(grid, PlaneRole.UPRIGHT_FRAME, PLANE_A, 0, false);
     assertThat(v.freedomWords(Set.of(FrameRef.ledger(1, 1)))).containsExactly(
-        "upright on line 0 runs unrestrained through level 1 (beam at level 1, bay 1 not there):"
+        "upright on line 0 runs unrestrained through level 1 (horizontal at level 1, bay 1 not there):"
             + " its unbraced length grows; an engineer checks it before loading");
     // an upright frame still off-loads the beam bays beside it (common practice, as before)
     assertThat(v.keepOffZone().orElseThrow().offloadBeside()).isTrue();
     assertThat(Terms.of(StructureKind.RACKING_RUN, PlaneRole.OTHER)).isEqualTo(Terms.RACKING);
     assertThat(Terms.of(StructureKind.SCAFFOLD, PlaneRole.FACADE)).isEqualTo(Terms.SCAFFOLD);
     assertThat(Wording.frameMember(FrameRef.standard(2, 3), Terms.RACKING)).isEqualTo("upright of lift 2 on line 3");
+    // an upright frame's ledgers are its horizontals, a spine's (down-aisle) are beams; the report's
+    // templates say the same (frame.ledger.upright-frame) (common practice: the racking trade's words)
+    assertThat(Terms.of(StructureKind.RACKING_RUN, PlaneRole.UPRIGHT_FRAME)).isEqualTo(Terms.RACKING_FRAME);
+    assertThat(Wording.frameMember(FrameRef.ledger(1, 2), Terms.RACKING_FRAME)).isEqualTo("horizontal at level 1, bay 2");
+    assertThat(Wording.frameMember(FrameRef.ledger(1, 2), Terms.of(PlaneRole.SPINE))).isEqualTo("beam at level 1, bay 2");
   }
 
   /** analysis.md plane G: 1 lift x 3 bays, ledger level 1 bay 3 missing: joint (1, 3) is loose. */

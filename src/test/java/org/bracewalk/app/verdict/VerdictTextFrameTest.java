@@ -96,11 +96,11 @@ class VerdictTextFrameTest {
   }
 
   @Test
-  void racksSayBeamAndUpright() {
+  void uprightFramesSayHorizontalAndUpright() {
     String out = text.render("a.txt", "test", DESIGN, Optional.of(BUILT), planeA(), PlaneRole.UPRIGHT_FRAME)
         .replaceAll("\\s+", " ");
-    assertThat(out).contains("upright on line 0 runs unrestrained through level 1 (beam at level 1, bay 1 not there)")
-        .contains("beam at level 1, bay 1: refit");
+    assertThat(out).contains("upright on line 0 runs unrestrained through level 1 (horizontal at level 1, bay 1 not there)")
+        .contains("horizontal at level 1, bay 1: refit");
   }
 
   @Test
