@@ -219,19 +219,29 @@ public final class SitesView extends BorderPane {
     GridPane form = new GridPane();
     form.setHgap(8);
     form.setVgap(6);
-    form.addRow(0, mnemonic("_Inspector", inspector), inspector, mnemonic("_Reason", reason), reason);
-    form.addRow(1, mnemonic("_Position", position), position);
-    form.addRow(2, mnemonic("_Competent person", competent), competent, mnemonic("S_hift", shift), shift);
-    form.add(mnemonic("S_torage safety", storage), 0, 3);
-    form.add(storage, 1, 3, 3, 1);
+    // one field a row, in the order Tab takes them (the order of the children): who inspects,
+    // their position, the competent person, the shift, the racking's storage safety person, and
+    // why; the README's walk-round paragraph names the same order (SitesFormOrderFxTest)
+    int row = 0;
+    for (Node[] field : new Node[][] {
+        {mnemonic("_Inspector", inspector), inspector},
+        {mnemonic("_Position", position), position},
+        {mnemonic("_Competent person", competent), competent},
+        {mnemonic("S_hift", shift), shift},
+        {mnemonic("S_torage safety", storage), storage},
+        {mnemonic("_Reason", reason), reason}}) {
+      form.addRow(row++, field);
+    }
+    reason.setMaxWidth(Double.MAX_VALUE);
     GridPane.setHgrow(inspector, Priority.ALWAYS);
     Button start = wide("Start inspection now (Ctrl+Enter)", vm::startInspection);
     start.setId("start-inspection");
     VBox startBox = Widgets.box("New inspection of the selected structure", form, start,
         Widgets.hint("All fields go on the report and cannot be changed later (storage safety: racking only)."
-            + " Every mark you then make is saved the moment you make it."));
+            + " Start shows every value for a last look before the inspection begins; every mark you then"
+            + " make is saved the moment you make it."));
     form.getColumnConstraints().addAll(new javafx.scene.layout.ColumnConstraints(),
-        new javafx.scene.layout.ColumnConstraints(200, 300, Double.MAX_VALUE));
+        new javafx.scene.layout.ColumnConstraints(200, 360, Double.MAX_VALUE));
     javafx.scene.layout.HBox.setHgrow(open, Priority.ALWAYS);
     javafx.scene.layout.HBox.setHgrow(startBox, Priority.ALWAYS);
     open.setPrefWidth(420);
@@ -327,8 +337,8 @@ public final class SitesView extends BorderPane {
         List.of(
             KeyHelp.of("Up / Down", "choose a structure or plane"),
             KeyHelp.of("Enter", "open its walk-round (or, with no open inspection, go to the inspector field)"),
-            KeyHelp.of("Alt+I, Alt+P, Alt+R", "inspector, position, reason of a new inspection"),
-            KeyHelp.of("Ctrl+Enter", "start the inspection now"),
+            KeyHelp.of("Alt+ I P C H T R", "inspector, position, competent person, shift, storage safety, reason of a new inspection"),
+            KeyHelp.of("Ctrl+Enter", "start the inspection (after a last look at every value)"),
             KeyHelp.of("D", "days between routine inspections of the selected structure"),
             KeyHelp.of("L", "load the demo site (empty database only)"),
             KeyHelp.of("F5", "read the database again")));
