@@ -140,8 +140,11 @@ public final class SitesView extends BorderPane {
     Label head = new Label("This database holds no sites yet.");
     head.getStyleClass().add("screen-title");
     Label where = Widgets.text("Database: " + vm.databaseLocation());
-    Label offer = Widgets.text("Load the demo site to try Bracewalk: an invented depot with a facade scaffold and a"
-        + " racking run, each with two finished inspections. It goes into this database file.");
+    where.setMaxWidth(640);
+    Label offer = Widgets.text("Load the demo site to try Bracewalk: an invented depot with a racking run and a"
+        + " facade scaffold. The racking run has two finished inspections, a routine one and one after a forklift"
+        + " struck upright frame 2 (which lost rigidity); the scaffold has one finished routine inspection, which"
+        + " found a ledger of its west end bay taken out. It goes into this database file.");
     offer.setMaxWidth(640);
     Button load = new Button("Load the demo site (L)");
     load.setId("load-demo");

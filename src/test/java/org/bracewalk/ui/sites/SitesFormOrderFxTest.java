@@ -32,7 +32,7 @@ import org.testfx.util.WaitForAsyncUtils;
  */
 @ExtendWith(ApplicationExtension.class)
 class SitesFormOrderFxTest {
-  @TempDir static Path dir;
+  @TempDir Path dir;
   private AppServices services;
   private SitesView view;
 
@@ -85,5 +85,29 @@ class SitesFormOrderFxTest {
         "reason");
     String readme = Files.readString(Path.of("README.md")).replaceAll("\\s+", " ");
     assertThat(readme).contains("Tab goes " + String.join(" \u2192 ", order));
+  }
+
+  @Test
+  void theEmptyDatabaseOfferDescribesTheDemoAsItIs(FxRobot robot) {
+    // the demo as loaded: finished inspections per structure
+    long racking = 0;
+    long scaffold = 0;
+    for (var site : services.sites().sites()) {
+      for (var st : services.sites().structures(site.id())) {
+        long done = services.inspections().inspections(st.id()).stream()
+            .filter(org.bracewalk.core.model.Inspection::isFinalised).count();
+        if (st.kind() == org.bracewalk.core.model.StructureKind.RACKING_RUN) {
+          racking += done;
+        } else {
+          scaffold += done;
+        }
+      }
+    }
+    assertThat(racking).isEqualTo(2);
+    assertThat(scaffold).isEqualTo(1);
+    String offer = robot.lookup(n -> n instanceof Label l && l.getText().startsWith("Load the demo site to try"))
+        .queryAs(Label.class).getText();
+    assertThat(offer).contains("racking run has two finished inspections")
+        .contains("scaffold has one finished routine inspection");
   }
 }
