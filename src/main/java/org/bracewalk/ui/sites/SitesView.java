@@ -188,7 +188,7 @@ public final class SitesView extends BorderPane {
 
     inspector.setId("start-inspector");
     inspector.textProperty().bindBidirectional(vm.inspectorNameProperty());
-    inspector.setPromptText("name of the person inspecting");
+    inspector.setPromptText("full name");
     TextField position = new TextField();
     position.setId("start-position");
     position.textProperty().bindBidirectional(vm.inspectorPositionProperty());
@@ -209,7 +209,7 @@ public final class SitesView extends BorderPane {
     });
     TextField competent = new TextField();
     competent.textProperty().bindBidirectional(vm.competentPersonProperty());
-    competent.setPromptText("who is the competent person");
+    competent.setPromptText("full name");
     competent.setId("start-competent");
     TextField shift = new TextField();
     shift.textProperty().bindBidirectional(vm.shiftProperty());
@@ -218,22 +218,25 @@ public final class SitesView extends BorderPane {
     TextField storage = new TextField();
     storage.setId("start-storage");
     storage.textProperty().bindBidirectional(vm.storageSafetyPersonProperty());
-    storage.setPromptText("racking: person responsible for storage equipment safety");
+    storage.setPromptText("racking only");
     GridPane form = new GridPane();
     form.setHgap(8);
     form.setVgap(6);
-    // one field a row, in the order Tab takes them (the order of the children): who inspects,
-    // their position, the competent person, the shift, the racking's storage safety person, and
-    // why; the README's walk-round paragraph names the same order (SitesFormOrderFxTest)
-    int row = 0;
-    for (Node[] field : new Node[][] {
+    // two fields a row, read left to right and top to bottom in the order Tab takes them (the order
+    // of the children): who inspects, their position, the competent person, the shift, the racking's
+    // storage safety person, and why; the README's walk-round paragraph names the same order
+    // (SitesFormOrderFxTest)
+    Node[][] fields = {
         {mnemonic("_Inspector", inspector), inspector},
         {mnemonic("_Position", position), position},
         {mnemonic("_Competent person", competent), competent},
         {mnemonic("S_hift", shift), shift},
         {mnemonic("S_torage safety", storage), storage},
-        {mnemonic("_Reason", reason), reason}}) {
-      form.addRow(row++, field);
+        {mnemonic("_Reason", reason), reason}};
+    for (int i = 0; i < fields.length; i++) {
+      form.add(fields[i][0], (i % 2) * 2, i / 2);
+      form.add(fields[i][1], (i % 2) * 2 + 1, i / 2);
+      GridPane.setHgrow(fields[i][1], Priority.ALWAYS);
     }
     reason.setMaxWidth(Double.MAX_VALUE);
     GridPane.setHgrow(inspector, Priority.ALWAYS);
@@ -244,7 +247,9 @@ public final class SitesView extends BorderPane {
             + " Start shows every value for a last look before the inspection begins; every mark you then"
             + " make is saved the moment you make it."));
     form.getColumnConstraints().addAll(new javafx.scene.layout.ColumnConstraints(),
-        new javafx.scene.layout.ColumnConstraints(200, 360, Double.MAX_VALUE));
+        new javafx.scene.layout.ColumnConstraints(120, 200, Double.MAX_VALUE),
+        new javafx.scene.layout.ColumnConstraints(),
+        new javafx.scene.layout.ColumnConstraints(120, 200, Double.MAX_VALUE));
     javafx.scene.layout.HBox.setHgrow(open, Priority.ALWAYS);
     javafx.scene.layout.HBox.setHgrow(startBox, Priority.ALWAYS);
     open.setPrefWidth(420);
