@@ -29,6 +29,7 @@ import org.bracewalk.core.model.StructureKind;
 import org.bracewalk.ui.common.DialogService;
 import org.bracewalk.ui.common.KeyHelp;
 import org.bracewalk.ui.common.Navigator;
+import org.bracewalk.ui.common.RecordsChanged;
 import org.bracewalk.ui.common.ScreenId;
 import org.bracewalk.ui.common.Selection;
 import org.bracewalk.ui.common.Widgets;
@@ -78,6 +79,8 @@ public final class AppScreens implements ScreenFactory {
    */
   private final Executor records;
   private SitesViewModel preloaded;
+  /** The records-changed signal (the main window): told after a write another part may show. */
+  private RecordsChanged changes = RecordsChanged.NONE;
 
   public AppScreens(
       AppServices services,
@@ -95,6 +98,11 @@ public final class AppScreens implements ScreenFactory {
     this.background = Objects.requireNonNull(background, "background");
     this.issuer = Objects.requireNonNull(issuer, "issuer");
     this.records = new InOrder(background);
+  }
+
+  /** Where to send the records-changed signal (the main window passes it on to the screen shown). */
+  public void useRecordsChanged(RecordsChanged signal) {
+    this.changes = java.util.Objects.requireNonNull(signal, "signal");
   }
 
   /** The key help of every screen, in rail order. */
@@ -116,7 +124,7 @@ public final class AppScreens implements ScreenFactory {
         build = switch (id) {
           case DESIGN -> {
             DesignRead r = readDesign(selection);
-            yield () -> design(r);
+            yield () -> design(r, selection);
           }
           case WALK -> {
             WalkRead r = readWalk(selection);
@@ -248,7 +256,14 @@ public final class AppScreens implements ScreenFactory {
       view.selectPlane(selection.planeId());
     }
     var sel = Bindings.createObjectBinding(vm::selectionForOthers, vm.selectedProperty());
-    return Screen.of(view, "Sites", view::focusTable, sel);
+    LiveScreen screen = new LiveScreen(view, "Sites", view::focusTable, sel);
+    // a change another part made: the rows are read again
+    screen.reread = source -> {
+      if (source != vm) {
+        vm.refresh();
+      }
+    };
+    return screen;
   }
 
   private static String crumbs(Place place, Inspection inspection) {
@@ -257,14 +272,25 @@ public final class AppScreens implements ScreenFactory {
             + (inspection.isFinalised() ? " (finalised)" : " (open)"));
   }
 
-  private Screen design(DesignRead r) {
+  private Screen design(DesignRead r, Selection opened) {
     PlaneRecord plane = r.place().plane();
     DesignRevision rev = r.revision();
     DesignViewModel vm =
         new DesignViewModel(rev.design(), plane.name() + " (revision " + rev.number() + ")", analyzer,
-            new PlaneDesignSaver(services.sites(), plane, clock, dialogs), dialogs, ui, background);
+            new PlaneDesignSaver(services.sites(), plane, rev.number(), clock, dialogs), dialogs, ui, background);
     DesignView view = new DesignView(vm);
-    return focused(view, crumbs(r.place(), null) + "  \u00b7  design", view::focusPlane);
+    Place place = r.place();
+    // the header and the selection follow a save as a new plane: the editor then edits that plane
+    var crumbsNow = Bindings.createStringBinding(() -> place.site().name() + "  \u203a  " + place.structure().name()
+        + "  \u203a  " + vm.titleProperty().get() + "  \u00b7  design", vm.titleProperty());
+    var selectionNow = Bindings.createObjectBinding(() -> {
+      long now = vm.planeIdProperty().get();
+      return now == 0 || now == plane.id() ? opened : new Selection(plane.structureId(), now, 0);
+    }, vm.planeIdProperty());
+    LiveScreen screen = new LiveScreen(view, crumbsNow.get(), view::focusPlane, selectionNow);
+    screen.crumbs.bind(crumbsNow);
+    screen.mayLeave = vm::mayLeave;
+    return screen;
   }
 
   /** The inspection a screen is about: the one selected, else the structure's open one, else its latest. */
@@ -308,17 +334,52 @@ public final class AppScreens implements ScreenFactory {
     WalkView view = new WalkView(vm);
     Selection here = new Selection(st.id(), plane.id(), insp.id());
     BorderPane wrap = new BorderPane(view);
-    wrap.setTop(planeBar(insp, r.planes(), plane, p -> navigator.open(ScreenId.WALK, new Selection(st.id(), p, insp.id()))));
+    javafx.beans.property.StringProperty who = new javafx.beans.property.SimpleStringProperty(inspectionWords(insp));
+    wrap.setTop(planeBar(who, r.planes(), plane, p -> navigator.open(ScreenId.WALK, new Selection(st.id(), p, insp.id()))));
     wrap.addEventFilter(KeyEvent.KEY_PRESSED, e -> {
       if (e.isControlDown() && e.getCode() == KeyCode.P) {
         ((ChoiceBox<?>) ((javafx.scene.layout.HBox) wrap.getTop()).lookup("#plane-choice")).show();
         e.consume();
       }
     });
-    return focusedWithSelection(wrap, crumbs(r.place(), insp), view::focusPlane, here);
+    LiveScreen screen = new LiveScreen(wrap, crumbs(r.place(), insp), view::focusPlane,
+        new javafx.beans.property.SimpleObjectProperty<>(here));
+    // a change made elsewhere (the inspection finalised, say): the header and the bar read it again
+    screen.reread = source -> rereadInspection(insp.id(), r.place(), screen, who);
+    return screen;
   }
 
-  private static Node planeBar(Inspection insp, List<PlaneRecord> planes, PlaneRecord current,
+  /** How the walk-round's bar names the inspection: by whom, why, open or finalised. */
+  private static String inspectionWords(Inspection insp) {
+    return "Inspection " + insp.id() + " by " + insp.inspectorName() + " \u00b7 "
+        + insp.reason().label().replace('-', ' ') + (insp.isFinalised() ? " \u00b7 finalised (read-only)" : " \u00b7 open");
+  }
+
+  /**
+   * Reads inspection {@code id} again (on the ordered queue) and puts its state into the header
+   * and, when given, the walk-round's bar. A failed read leaves them as they are.
+   */
+  private void rereadInspection(long id, Place place, LiveScreen screen, javafx.beans.property.StringProperty who) {
+    records.execute(() -> {
+      Inspection now;
+      try {
+        now = services.inspections().inspection(id);
+      } catch (RuntimeException e) {
+        System.getLogger(AppScreens.class.getName()).log(System.Logger.Level.WARNING,
+            "reading inspection " + id + " again: " + e.getMessage(), e);
+        return;
+      }
+      ui.execute(() -> {
+        screen.crumbs.set(crumbs(place, now));
+        if (who != null) {
+          who.set(inspectionWords(now));
+        }
+      });
+    });
+  }
+
+  private static Node planeBar(javafx.beans.value.ObservableValue<String> inspection, List<PlaneRecord> planes,
+      PlaneRecord current,
       java.util.function.LongConsumer open) {
     ChoiceBox<PlaneRecord> choice = new ChoiceBox<>();
     choice.setId("plane-choice");
@@ -345,8 +406,9 @@ public final class AppScreens implements ScreenFactory {
       }
     });
     choice.setFocusTraversable(false);
-    Label who = new Label("Inspection " + insp.id() + " by " + insp.inspectorName() + " \u00b7 "
-        + insp.reason().label().replace('-', ' ') + (insp.isFinalised() ? " \u00b7 finalised (read-only)" : " \u00b7 open"));
+    Label who = new Label();
+    who.setId("walk-inspection");
+    who.textProperty().bind(inspection);
     var bar = Widgets.row(10, who, Widgets.grow(), new Label("Plane (Ctrl+P):"), choice);
     bar.setPadding(new Insets(12, 12, 0, 12));
     return bar;
@@ -387,8 +449,21 @@ public final class AppScreens implements ScreenFactory {
     FindingsView view = new FindingsView(vm,
         p -> navigator.open(ScreenId.FINDINGS, new Selection(plane.structureId(), p, insp.id())));
     vm.load(); // on the background executor
-    return focusedWithSelection(view, crumbs(r.place(), insp), view::focusPlane,
-        new Selection(plane.structureId(), plane.id(), insp.id()));
+    LiveScreen screen = new LiveScreen(view, crumbs(r.place(), insp), view::focusPlane,
+        new javafx.beans.property.SimpleObjectProperty<>(new Selection(plane.structureId(), plane.id(), insp.id())));
+    // finalising here is a change the header shows: the signal goes round the shell
+    vm.finalisedProperty().addListener((o, was, now) -> {
+      if (now && !was) {
+        changes.changed(vm);
+      }
+    });
+    screen.reread = source -> {
+      if (source != vm) {
+        vm.load(); // a change made elsewhere: the findings are read again
+      }
+      rereadInspection(insp.id(), r.place(), screen, null);
+    };
+    return screen;
   }
 
   private Screen history(Place place) {
@@ -405,4 +480,58 @@ public final class AppScreens implements ScreenFactory {
     return Screen.of(node, crumbs, focus, sel == null ? null : new javafx.beans.property.SimpleObjectProperty<>(sel));
   }
 
+  /**
+   * A screen whose header words can change, that may ask before it is left, and that reads again
+   * what it shows on the records-changed signal.
+   */
+  private static final class LiveScreen implements Screen {
+    private final Node node;
+    private final javafx.beans.property.StringProperty crumbs;
+    private final Runnable focus;
+    private final javafx.beans.value.ObservableValue<Selection> selection;
+    private java.util.function.BooleanSupplier mayLeave = () -> true;
+    private Consumer<Object> reread = source -> { };
+
+    LiveScreen(Node node, String crumbs, Runnable focus, javafx.beans.value.ObservableValue<Selection> selection) {
+      this.node = node;
+      this.crumbs = new javafx.beans.property.SimpleStringProperty(crumbs);
+      this.focus = focus;
+      this.selection = selection;
+    }
+
+    @Override
+    public Node node() {
+      return node;
+    }
+
+    @Override
+    public String crumbs() {
+      return crumbs.get();
+    }
+
+    @Override
+    public javafx.beans.value.ObservableValue<String> crumbsValue() {
+      return crumbs;
+    }
+
+    @Override
+    public void focus() {
+      focus.run();
+    }
+
+    @Override
+    public javafx.beans.value.ObservableValue<Selection> selection() {
+      return selection;
+    }
+
+    @Override
+    public boolean mayLeave() {
+      return mayLeave.getAsBoolean();
+    }
+
+    @Override
+    public void reread(Object source) {
+      reread.accept(source);
+    }
+  }
 }

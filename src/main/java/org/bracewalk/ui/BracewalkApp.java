@@ -48,6 +48,11 @@ public final class BracewalkApp {
         }
 
         @Override
+        public boolean confirmRisky(String title, String message, String riskyLabel, String safeLabel) {
+          return d().confirmRisky(title, message, riskyLabel, safeLabel);
+        }
+
+        @Override
         public void inform(String title, String message) {
           d().inform(title, message);
         }
@@ -144,6 +149,12 @@ public final class BracewalkApp {
     VBox box = new VBox(14, what, new ProgressIndicator());
     box.getStyleClass().add("empty-offer");
     window.showPlaceholder(new StackPane(warm, warmCanvas, box), "opening the database");
+    // closing the window asks the screen shown first (the design editor: unsaved changes)
+    stage.setOnCloseRequest(e -> {
+      if (!window.mayLeave()) {
+        e.consume();
+      }
+    });
     stage.show();
     return window;
   }
@@ -164,6 +175,7 @@ public final class BracewalkApp {
       return;
     }
     AppScreens s = new AppScreens(services, analyzer, clock, lateDialogs, new FxExecutor(), background, issuer);
+    s.useRecordsChanged(source -> window.changed(source));
     s.preloadOverview((id, sel) -> window.open(id, sel));
     screens.delegate = s;
   }

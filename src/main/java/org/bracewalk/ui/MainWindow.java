@@ -19,6 +19,7 @@ import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 import org.bracewalk.ui.common.KeyHelp;
 import org.bracewalk.ui.common.Navigator;
+import org.bracewalk.ui.common.RecordsChanged;
 import org.bracewalk.ui.common.ScreenId;
 import org.bracewalk.ui.common.Selection;
 import org.bracewalk.ui.common.Widgets;
@@ -26,8 +27,13 @@ import org.bracewalk.ui.common.Widgets;
 /**
  * The main window's content: a header with where you are, a rail of screens on the left (each
  * Ctrl+digit), the current screen, a status line, and the key help overlay (F1 or ?).
+ *
+ * <p>The header follows the screen's {@link Screen#crumbsValue()}; another screen opens only once
+ * the current one agrees ({@link Screen#mayLeave()}: the design editor asks about unsaved
+ * changes); and the records-changed signal ({@link RecordsChanged}) is passed on to the screen
+ * shown, which reads again what it shows.
  */
-public final class MainWindow implements Navigator {
+public final class MainWindow implements Navigator, RecordsChanged {
   static final int MIN_FONT = 12;
   static final int MAX_FONT = 26;
 
@@ -124,6 +130,7 @@ public final class MainWindow implements Navigator {
   /** Shows {@code node} in place of a screen (while the database opens); the rail is disabled. */
   public void showPlaceholder(Node node, String where) {
     frame.setCenter(node);
+    crumbs.textProperty().unbind();
     crumbs.setText(where);
     for (ToggleButton b : rail.values()) {
       b.setDisable(true);
@@ -138,6 +145,13 @@ public final class MainWindow implements Navigator {
    */
   @Override
   public void open(ScreenId id, Selection newSelection) {
+    if (current != null && !current.mayLeave()) {
+      // the person stays (unsaved changes): the rail shows the screen that stays
+      if (currentId != null) {
+        rail.get(currentId).setSelected(true);
+      }
+      return;
+    }
     long request = ++requests;
     opening.setText("Opening " + id.title() + " \u2026");
     openError.setText("");
@@ -154,6 +168,22 @@ public final class MainWindow implements Navigator {
     });
   }
 
+  /**
+   * The records-changed signal: the screen shown reads again what a change it did not make itself
+   * may have made stale (the header follows it). Call on the JavaFX thread.
+   */
+  @Override
+  public void changed(Object source) {
+    if (current != null) {
+      current.reread(source);
+    }
+  }
+
+  /** Whether the window may close now: the screen shown agrees (it may ask about unsaved changes). */
+  public boolean mayLeave() {
+    return current == null || current.mayLeave();
+  }
+
   /** Whether a screen asked for is still being read. */
   public boolean isOpening() {
     return !opening.getText().isEmpty();
@@ -166,7 +196,9 @@ public final class MainWindow implements Navigator {
     Node node = s.node();
     BorderPane.setMargin(node, new Insets(0));
     frame.setCenter(node);
-    crumbs.setText(s.crumbs());
+    forgetMnemonicsOfNodesGone();
+    crumbs.textProperty().unbind();
+    crumbs.textProperty().bind(s.crumbsValue());
     ToggleButton b = rail.get(id);
     b.setSelected(true);
     if (help != null) {
@@ -183,6 +215,26 @@ public final class MainWindow implements Navigator {
     }
     updateRail();
     s.focus();
+  }
+
+  /**
+   * The scene keeps the Alt+letter of a label after the label has left it (a screen replaced), and
+   * two labels with one letter make Alt+letter go round them: Alt+H in the design editor went to
+   * the Sites screen's gone "Shift" field and left the focus where it was. So the letters of nodes
+   * no longer in the scene are forgotten each time a screen is shown (MnemonicsFxTest).
+   */
+  private void forgetMnemonicsOfNodesGone() {
+    javafx.scene.Scene scene = root.getScene();
+    if (scene == null) {
+      return;
+    }
+    for (var it = scene.getMnemonics().entrySet().iterator(); it.hasNext();) {
+      var entry = it.next();
+      entry.getValue().removeIf(m -> m.getNode() == null || m.getNode().getScene() != scene);
+      if (entry.getValue().isEmpty()) {
+        it.remove();
+      }
+    }
   }
 
   private void updateRail() {

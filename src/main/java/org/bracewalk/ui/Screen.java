@@ -10,6 +10,29 @@ public interface Screen {
   /** "Site › Structure › Plane" for the header. */
   String crumbs();
 
+  /**
+   * The header's words as they change (a save as a new plane, an inspection finalised); by
+   * default the fixed {@link #crumbs()}.
+   */
+  default javafx.beans.value.ObservableValue<String> crumbsValue() {
+    return new javafx.beans.property.ReadOnlyStringWrapper(crumbs());
+  }
+
+  /**
+   * Asked before another screen opens or the window closes: false keeps this screen (say, the
+   * person chose to stay with unsaved changes). By default true.
+   */
+  default boolean mayLeave() {
+    return true;
+  }
+
+  /**
+   * The record has changed ({@code source} made the change: a view model, or the shell): read
+   * again what is shown. By default nothing (the screen shows nothing another write changes).
+   */
+  default void reread(Object source) {
+  }
+
   /** Puts keyboard focus where the screen's work starts. */
   void focus();
 

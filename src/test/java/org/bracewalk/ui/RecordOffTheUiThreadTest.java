@@ -139,6 +139,7 @@ class RecordOffTheUiThreadTest {
     vm.inspectorPositionProperty().set("Scaffold inspector");
     vm.competentPersonProperty().set("Rowan Test");
     vm.shiftProperty().set("day");
+    dialogs.confirmAnswers.add(true); // the last look: start
     assertThat(vm.startInspection()).as(vm.errorProperty().get()).isTrue();
     settle();
     assertThat(opened).singleElement().asString().startsWith("WALK");

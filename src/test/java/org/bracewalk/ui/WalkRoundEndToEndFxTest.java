@@ -109,12 +109,13 @@ class WalkRoundEndToEndFxTest {
     assertThat(text(robot, "#sites-selection")).contains("Plane 'north facade'");
     robot.type(KeyCode.ENTER); // no open inspection: to the inspector field
     robot.write("Rowan Test");
-    robot.type(KeyCode.TAB, KeyCode.TAB); // past the reason to the position
+    robot.type(KeyCode.TAB); // the position
     robot.write("Scaffold inspector, Test & Sons");
     robot.type(KeyCode.TAB);
     robot.write("Rowan Test");
     robot.type(KeyCode.TAB);
     robot.write("day shift");
+    dialogs.confirmAnswers.push(true); // the last look at every value: start
     ctrl(robot, KeyCode.ENTER);
     // the inspection is started on the background executor; the walk-round opens once it is
     WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> window.currentScreen() == ScreenId.WALK);

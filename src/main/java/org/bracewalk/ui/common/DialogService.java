@@ -13,6 +13,14 @@ public interface DialogService {
   /** Asks a yes/no question; true when the person chose {@code confirmLabel}. */
   boolean confirm(String title, String message, String confirmLabel);
 
+  /**
+   * Asks before something risky; true when the person chose {@code riskyLabel}. The safe choice,
+   * {@code safeLabel}, is the default: Enter or Esc choose it.
+   */
+  default boolean confirmRisky(String title, String message, String riskyLabel, String safeLabel) {
+    return confirm(title, message, riskyLabel);
+  }
+
   /** Tells the person something that needs no answer. */
   void inform(String title, String message);
 

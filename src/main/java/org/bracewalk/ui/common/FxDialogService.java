@@ -27,6 +27,21 @@ public final class FxDialogService implements DialogService {
     return a.showAndWait().filter(b -> b == yes).isPresent();
   }
 
+  /** The safe button is the default and has the focus; the risky one is neither. */
+  @Override
+  public boolean confirmRisky(String title, String message, String riskyLabel, String safeLabel) {
+    ButtonType risky = new ButtonType(riskyLabel, ButtonBar.ButtonData.OTHER);
+    ButtonType safe = new ButtonType(safeLabel, ButtonBar.ButtonData.CANCEL_CLOSE);
+    Alert a = new Alert(Alert.AlertType.WARNING, message, safe, risky);
+    prepare(a, title);
+    javafx.scene.control.Button safeButton = (javafx.scene.control.Button) a.getDialogPane().lookupButton(safe);
+    javafx.scene.control.Button riskyButton = (javafx.scene.control.Button) a.getDialogPane().lookupButton(risky);
+    riskyButton.setDefaultButton(false);
+    safeButton.setDefaultButton(true);
+    a.setOnShown(e -> safeButton.requestFocus());
+    return a.showAndWait().filter(b -> b == risky).isPresent();
+  }
+
   @Override
   public void inform(String title, String message) {
     Alert a = new Alert(Alert.AlertType.INFORMATION, message, ButtonType.OK);

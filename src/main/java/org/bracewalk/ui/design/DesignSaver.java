@@ -26,10 +26,25 @@ public interface DesignSaver {
    * background thread, which answers the saved revision's label. By default it only defers {@link
    * #save(PlaneDesign, String, String, PlaneRole)}.
    *
+   * @throws SaveDeclined when the person declined a question (nothing saved, nothing wrong)
    * @throws IllegalStateException (or another runtime exception) saying why nothing will be saved
    */
   default java.util.function.Supplier<String> prepare(PlaneDesign design, String author, String note, PlaneRole role) {
     return () -> save(design, author, note, role);
+  }
+
+  /**
+   * The plane being edited as the editor should name it (its name and current revision), read
+   * after each save: a design saved as a new plane goes on as an edit of that new plane. Null:
+   * the title given at the start stands.
+   */
+  default String title() {
+    return null;
+  }
+
+  /** The id of the plane being edited (after a save as a new plane, the new one); 0 when not stored. */
+  default long planeId() {
+    return 0;
   }
 
   /** The role of the plane being edited (the choice box starts there). */

@@ -42,7 +42,10 @@ public final class DesignView extends BorderPane {
     this.vm = vm;
     getStyleClass().add("screen");
     setId("design-screen");
-    Label title = new Label("Design: " + vm.title());
+    Label title = new Label();
+    title.setId("design-title");
+    // follows a save as a new plane: the editor then edits that plane
+    title.textProperty().bind(javafx.beans.binding.Bindings.concat("Design: ", vm.titleProperty()));
     title.getStyleClass().add("screen-title");
     Label dirty = new Label("unsaved changes");
     dirty.getStyleClass().add("error-text");
@@ -314,7 +317,7 @@ public final class DesignView extends BorderPane {
             KeyHelp.of("Space or Enter", "cycle the current panel (as a click does); with a side selected, leave it out / put it back"),
             KeyHelp.of("Shift+Arrows", "select the ledger above or below, the standard left or right (again or Esc: the panel)"),
             KeyHelp.of("K, Z, A", "fill: brace every k bays, zig-zag every k bays, every panel"),
-            KeyHelp.of("Alt+ L A W H P", "lifts, bays, widths, heights, support fields; Enter applies"),
+            KeyHelp.of("Alt+ L A W H P O", "lifts, bays, widths, heights, support, role fields; Enter applies"),
             KeyHelp.of("Ctrl+S", "save the design (asks first if it is not rigid)")));
   }
 }

@@ -55,7 +55,11 @@ public final class DesignViewModel {
   private final DialogService dialogs;
   private final Executor ui;
   private final Executor background;
-  private final String title;
+  /** The plane as named (and its revision): follows a save as a new plane. */
+  private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "");
+  /** The id of the plane edited (0 when the saver names none): follows a save as a new plane. */
+  private final javafx.beans.property.ReadOnlyLongWrapper planeId =
+      new javafx.beans.property.ReadOnlyLongWrapper(this, "planeId");
   /** True while a save runs on the background executor. */
   private boolean saving;
 
@@ -106,7 +110,8 @@ public final class DesignViewModel {
     this.saver = Objects.requireNonNull(saver, "saver");
     this.role = new SimpleObjectProperty<>(this, "role", saver.role());
     this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
-    this.title = title;
+    this.title.set(title == null ? "" : title);
+    this.planeId.set(saver.planeId());
     cursor.set(new PanelRef(1, 1));
     load(initial);
     dirty.set(false);
@@ -378,7 +383,7 @@ public final class DesignViewModel {
             + PlaneLimits.MAX_BAYS + " bays.");
       }
       // the one limit of a stored plane, before anything of that size is built
-      PlaneLimits.problem(title, m, n).ifPresent(problem -> {
+      PlaneLimits.problem(title.get(), m, n).ifPresent(problem -> {
         throw new IllegalArgumentException(
             (PlaneLimits.fieldOver(m, n).equals("lifts") ? "Lifts: " : "Bays: ") + problem + ".");
       });
@@ -506,15 +511,17 @@ public final class DesignViewModel {
     PlaneDesign d = design.get();
     String n = note.get() == null ? "" : note.get().strip();
     if (!lastAnalysis.design().rigid()) {
+      // the safe choice (not saving) is the default button: Enter does not store a design that sways
       boolean go =
-          dialogs.confirm(
+          dialogs.confirmRisky(
               "This design does not hold its shape",
-              (title == null ? "This plane" : title)
+              (title.get().isEmpty() ? "This plane" : title.get())
                   + " as designed can sway: "
                   + verdictSentence
                   + "\n\nA plane built to this design would need more bracing before it is used."
                   + " Save it anyway (for example, as a record of what is on site)?",
-              "Save anyway");
+              "Save anyway",
+              "Do not save");
       if (!go) {
         status.set("Not saved.");
         return false;
@@ -525,6 +532,10 @@ public final class DesignViewModel {
     try {
       work = saver.prepare(d, author.get() == null ? "" : author.get().strip(), n,
           role.get() == null ? saver.role() : role.get());
+    } catch (SaveDeclined e) {
+      error.set("");
+      status.set("Not saved: " + e.getMessage() + ".");
+      return false;
     } catch (RuntimeException e) {
       notSaved(e);
       return false;
@@ -541,6 +552,12 @@ public final class DesignViewModel {
           if (design.get().equals(d)) {
             dirty.set(false);
           }
+          // a save as a new plane: the editor now edits that plane, and says so
+          String now = saver.title();
+          if (now != null) {
+            title.set(now);
+          }
+          planeId.set(saver.planeId());
           status.set("Saved as " + rev + ".");
         });
       } catch (RuntimeException e) {
@@ -570,7 +587,35 @@ public final class DesignViewModel {
   }
 
   public String title() {
-    return title;
+    return title.get();
+  }
+
+  /** The plane as named, with its revision; follows a save as a new plane. */
+  public ReadOnlyStringProperty titleProperty() {
+    return title.getReadOnlyProperty();
+  }
+
+  /** The id of the plane edited (0 when not known); follows a save as a new plane. */
+  public javafx.beans.property.ReadOnlyLongProperty planeIdProperty() {
+    return planeId.getReadOnlyProperty();
+  }
+
+  /**
+   * Whether the editor may be left (another screen opened, the window closed): at once when
+   * nothing is unsaved; otherwise the person is asked, with staying as the default.
+   */
+  public boolean mayLeave() {
+    if (!dirty.get()) {
+      return true;
+    }
+    boolean leave = dialogs.confirmRisky("The design has unsaved changes",
+        "The changes to " + (title.get().isEmpty() ? "this design" : title.get()) + " are not saved. Leave"
+            + " without saving them (they are lost), or stay and save them (Ctrl+S)?",
+        "Leave without saving", "Stay");
+    if (!leave) {
+      status.set("Still here: save the design with Ctrl+S, or leave again to drop the changes.");
+    }
+    return leave;
   }
 
   public PlaneDesign design() {

@@ -17,18 +17,40 @@ import org.bracewalk.ui.common.DialogService;
  * Saves the editor's design through the site service. A stored plane's grid is fixed (its
  * inspections refer to its panels), so a design on the same grid becomes the plane's next revision
  * and a design on a changed grid becomes a new plane of the same structure, named by the person.
+ * After that the saver goes on with the new plane: the next save is its next revision.
  */
 public final class PlaneDesignSaver implements DesignSaver {
   private final SiteService sites;
-  private final PlaneRecord plane;
   private final Clock clock;
   private final DialogService dialogs;
+  /** The plane edited: set on the background thread by a save as a new plane, read on the UI thread. */
+  private volatile PlaneRecord plane;
+  /** Its latest revision's number, likewise. */
+  private volatile int revision;
 
   public PlaneDesignSaver(SiteService sites, PlaneRecord plane, Clock clock, DialogService dialogs) {
+    this(sites, plane, 0, clock, dialogs);
+  }
+
+  /** @param revision the number of the plane's revision the editor starts from (0: not known) */
+  public PlaneDesignSaver(SiteService sites, PlaneRecord plane, int revision, Clock clock, DialogService dialogs) {
     this.sites = Objects.requireNonNull(sites, "sites");
     this.plane = Objects.requireNonNull(plane, "plane");
+    this.revision = revision;
     this.clock = Objects.requireNonNull(clock, "clock");
     this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
+  }
+
+  @Override
+  public String title() {
+    PlaneRecord p = plane;
+    int r = revision;
+    return p.name() + (r > 0 ? " (revision " + r + ")" : "");
+  }
+
+  @Override
+  public long planeId() {
+    return plane.id();
   }
 
   @Override
@@ -50,7 +72,8 @@ public final class PlaneDesignSaver implements DesignSaver {
   @Override
   public Supplier<String> prepare(PlaneDesign design, String author, String note, PlaneRole role) {
     LocalDate today = LocalDate.now(clock);
-    if (Millimetres.round(design.grid()).equals(plane.grid())) {
+    PlaneRecord plane = this.plane;
+    if (Millimetres.round(design.grid()).equals(Millimetres.round(plane.grid()))) {
       if (role != plane.role()) {
         throw new IllegalStateException("plane '" + plane.name() + "' is stored as " + plane.role().words()
             + " and a stored plane's role is fixed: choose " + plane.role().words()
@@ -58,6 +81,7 @@ public final class PlaneDesignSaver implements DesignSaver {
       }
       return () -> {
         DesignRevision r = sites.addDesignRevision(plane.id(), author, today, note, design);
+        revision = r.number();
         return "revision " + r.number() + " of plane '" + plane.name() + "'";
       };
     }
@@ -69,13 +93,15 @@ public final class PlaneDesignSaver implements DesignSaver {
                 + " structure:",
             plane.name() + " (new grid)");
     if (name.isEmpty()) {
-      throw new IllegalStateException("not saved: no name given for the new plane");
+      throw new SaveDeclined("no name given for the new plane");
     }
     String chosen = name.get();
     return () -> {
       PlaneRecord p =
           sites.createPlane(new PlaneRecord(0, plane.structureId(), chosen, design.grid(), role), author, today,
               note, design);
+      this.plane = p;
+      revision = 1;
       return "new plane '" + p.name() + "', revision 1";
     };
   }

@@ -118,8 +118,12 @@ public final class FindingsView extends BorderPane {
     Label words = Widgets.text(vm.progressWordsProperty(), "hint");
     words.visibleProperty().bind(vm.progressWordsProperty().isNotEmpty());
     words.managedProperty().bind(words.visibleProperty());
-    VBox docs = Widgets.box("Documents", report, order, bar, words,
-        Widgets.hint("An open inspection gives a report marked DRAFT on every page; finalise it for the record."));
+    Label draft = Widgets.hint("An open inspection gives a report marked DRAFT on every page; finalise it for the record.");
+    draft.setId("findings-draft-hint");
+    // gone once the inspection is finalised (its documents are no longer drafts)
+    draft.visibleProperty().bind(vm.finalisedProperty().not());
+    draft.managedProperty().bind(draft.visibleProperty());
+    VBox docs = Widgets.box("Documents", report, order, bar, words, draft);
 
     Button finalise = wide("Finalise inspection (Ctrl+F)");
     finalise.setId("finalise");

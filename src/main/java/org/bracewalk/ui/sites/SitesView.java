@@ -140,8 +140,11 @@ public final class SitesView extends BorderPane {
     Label head = new Label("This database holds no sites yet.");
     head.getStyleClass().add("screen-title");
     Label where = Widgets.text("Database: " + vm.databaseLocation());
-    Label offer = Widgets.text("Load the demo site to try Bracewalk: an invented depot with a facade scaffold and a"
-        + " racking run, each with two finished inspections. It goes into this database file.");
+    where.setMaxWidth(640);
+    Label offer = Widgets.text("Load the demo site to try Bracewalk: an invented depot with a racking run and a"
+        + " facade scaffold. The racking run has two finished inspections, a routine one and one after a forklift"
+        + " struck upright frame 2 (which lost rigidity); the scaffold has one finished routine inspection, which"
+        + " found a ledger of its west end bay taken out. It goes into this database file.");
     offer.setMaxWidth(640);
     Button load = new Button("Load the demo site (L)");
     load.setId("load-demo");
@@ -185,7 +188,7 @@ public final class SitesView extends BorderPane {
 
     inspector.setId("start-inspector");
     inspector.textProperty().bindBidirectional(vm.inspectorNameProperty());
-    inspector.setPromptText("name of the person inspecting");
+    inspector.setPromptText("full name");
     TextField position = new TextField();
     position.setId("start-position");
     position.textProperty().bindBidirectional(vm.inspectorPositionProperty());
@@ -206,7 +209,7 @@ public final class SitesView extends BorderPane {
     });
     TextField competent = new TextField();
     competent.textProperty().bindBidirectional(vm.competentPersonProperty());
-    competent.setPromptText("who is the competent person");
+    competent.setPromptText("full name");
     competent.setId("start-competent");
     TextField shift = new TextField();
     shift.textProperty().bindBidirectional(vm.shiftProperty());
@@ -215,23 +218,38 @@ public final class SitesView extends BorderPane {
     TextField storage = new TextField();
     storage.setId("start-storage");
     storage.textProperty().bindBidirectional(vm.storageSafetyPersonProperty());
-    storage.setPromptText("racking: person responsible for storage equipment safety");
+    storage.setPromptText("racking only");
     GridPane form = new GridPane();
     form.setHgap(8);
     form.setVgap(6);
-    form.addRow(0, mnemonic("_Inspector", inspector), inspector, mnemonic("_Reason", reason), reason);
-    form.addRow(1, mnemonic("_Position", position), position);
-    form.addRow(2, mnemonic("_Competent person", competent), competent, mnemonic("S_hift", shift), shift);
-    form.add(mnemonic("S_torage safety", storage), 0, 3);
-    form.add(storage, 1, 3, 3, 1);
+    // two fields a row, read left to right and top to bottom in the order Tab takes them (the order
+    // of the children): who inspects, their position, the competent person, the shift, the racking's
+    // storage safety person, and why; the README's walk-round paragraph names the same order
+    // (SitesFormOrderFxTest)
+    Node[][] fields = {
+        {mnemonic("_Inspector", inspector), inspector},
+        {mnemonic("_Position", position), position},
+        {mnemonic("_Competent person", competent), competent},
+        {mnemonic("S_hift", shift), shift},
+        {mnemonic("S_torage safety", storage), storage},
+        {mnemonic("_Reason", reason), reason}};
+    for (int i = 0; i < fields.length; i++) {
+      form.add(fields[i][0], (i % 2) * 2, i / 2);
+      form.add(fields[i][1], (i % 2) * 2 + 1, i / 2);
+      GridPane.setHgrow(fields[i][1], Priority.ALWAYS);
+    }
+    reason.setMaxWidth(Double.MAX_VALUE);
     GridPane.setHgrow(inspector, Priority.ALWAYS);
     Button start = wide("Start inspection now (Ctrl+Enter)", vm::startInspection);
     start.setId("start-inspection");
     VBox startBox = Widgets.box("New inspection of the selected structure", form, start,
         Widgets.hint("All fields go on the report and cannot be changed later (storage safety: racking only)."
-            + " Every mark you then make is saved the moment you make it."));
+            + " Start shows every value for a last look before the inspection begins; every mark you then"
+            + " make is saved the moment you make it."));
     form.getColumnConstraints().addAll(new javafx.scene.layout.ColumnConstraints(),
-        new javafx.scene.layout.ColumnConstraints(200, 300, Double.MAX_VALUE));
+        new javafx.scene.layout.ColumnConstraints(120, 200, Double.MAX_VALUE),
+        new javafx.scene.layout.ColumnConstraints(),
+        new javafx.scene.layout.ColumnConstraints(120, 200, Double.MAX_VALUE));
     javafx.scene.layout.HBox.setHgrow(open, Priority.ALWAYS);
     javafx.scene.layout.HBox.setHgrow(startBox, Priority.ALWAYS);
     open.setPrefWidth(420);
@@ -327,8 +345,8 @@ public final class SitesView extends BorderPane {
         List.of(
             KeyHelp.of("Up / Down", "choose a structure or plane"),
             KeyHelp.of("Enter", "open its walk-round (or, with no open inspection, go to the inspector field)"),
-            KeyHelp.of("Alt+I, Alt+P, Alt+R", "inspector, position, reason of a new inspection"),
-            KeyHelp.of("Ctrl+Enter", "start the inspection now"),
+            KeyHelp.of("Alt+ I P C H T R", "inspector, position, competent person, shift, storage safety, reason of a new inspection"),
+            KeyHelp.of("Ctrl+Enter", "start the inspection (after a last look at every value)"),
             KeyHelp.of("D", "days between routine inspections of the selected structure"),
             KeyHelp.of("L", "load the demo site (empty database only)"),
             KeyHelp.of("F5", "read the database again")));

@@ -69,6 +69,8 @@ public final class SitesViewModel {
   private final Executor background;
   /** True while a write runs on the background executor. */
   private boolean writing;
+  /** The error naming the form's empty fields, as last shown (it follows the fields as they are filled). */
+  private String missingShown = "";
   /** The last overview read (UI thread only): the commands look up structures and planes here. */
   private Overview known = Overview.EMPTY;
   private final ReadOnlyBooleanWrapper loading = new ReadOnlyBooleanWrapper(this, "loading");
@@ -114,6 +116,10 @@ public final class SitesViewModel {
     this.dialogs = Objects.requireNonNull(dialogs, "dialogs");
     this.navigator = Objects.requireNonNull(navigator, "navigator");
     selected.addListener((o, a, b) -> describeSelection());
+    for (javafx.beans.Observable field : List.of(inspectorName, inspectorPosition, competentPerson, shift,
+        storageSafetyPerson, selected)) {
+      field.addListener(o -> recheckMissing());
+    }
     refresh();
   }
 
@@ -404,6 +410,10 @@ public final class SitesViewModel {
    * walk-round on the selected plane (the first plane when a structure line is selected).
    */
   public boolean startInspection() {
+    if (writing) {
+      status.set("Still saving; wait for it to finish.");
+      return false; // before the last look: one start at a time
+    }
     OverviewRow r = selected.get();
     if (r == null || r.structureId() == 0) {
       error.set("Select the structure (or one of its planes) to inspect first.");
@@ -417,8 +427,31 @@ public final class SitesViewModel {
     }
     boolean racking = structure.kind() == StructureKind.RACKING_RUN;
     // the report needs every one of these, and an inspection cannot be changed once started
+    List<String> missing = missingFields(racking);
+    if (!missing.isEmpty()) {
+      missingShown = missingWords(missing);
+      error.set(missingShown);
+      return false;
+    }
+    if (!dialogs.confirm("Start this inspection?", lastLook(r, structure, racking), "Start inspection")) {
+      status.set("Not started: nothing was recorded. Change what needs changing, then start again.");
+      return false;
+    }
+    NewInspection details = new NewInspection(name, strip(inspectorPosition.get()), strip(competentPerson.get()),
+        strip(shift.get()), racking ? strip(storageSafetyPerson.get()) : null, reason.get(), null, null);
+    return write("Starting the inspection", () -> {
+      Inspection started = inspections.start(r.structureId(), details);
+      List<PlaneRecord> covered = inspections.planesOf(started.id());
+      long plane = covered.stream().anyMatch(p -> p.id() == r.planeId()) ? r.planeId()
+          : covered.stream().findFirst().map(PlaneRecord::id).orElse(0L);
+      return new Selection(r.structureId(), plane, started.id());
+    }, opened -> navigator.open(ScreenId.WALK, opened), e -> "Not started: " + e.getMessage());
+  }
+
+  /** The form's fields the report needs that are still empty, by their labels. */
+  private List<String> missingFields(boolean racking) {
     List<String> missing = new ArrayList<>();
-    if (name.isEmpty()) {
+    if (strip(inspectorName.get()).isEmpty()) {
       missing.add("Inspector");
     }
     if (strip(inspectorPosition.get()).isEmpty()) {
@@ -433,28 +466,57 @@ public final class SitesViewModel {
     if (racking && strip(storageSafetyPerson.get()).isEmpty()) {
       missing.add("Storage safety person (racking)");
     }
-    if (!missing.isEmpty()) {
-      error.set(String.join(", ", missing) + (missing.size() == 1 ? ": empty." : ": empty.")
-          + " The report needs " + (missing.size() == 1 ? "it" : "each of them")
-          + ", and an inspection cannot be changed once started: fill "
-          + (missing.size() == 1 ? "it" : "them") + " in, then start.");
-      return false;
+    return missing;
+  }
+
+  private static String missingWords(List<String> missing) {
+    return String.join(", ", missing) + ": empty."
+        + " The report needs " + (missing.size() == 1 ? "it" : "each of them")
+        + ", and an inspection cannot be changed once started: fill "
+        + (missing.size() == 1 ? "it" : "them") + " in, then start.";
+  }
+
+  /**
+   * After a field of the form changes: the "empty" error, when shown, names only the fields still
+   * empty, and goes once none is.
+   */
+  private void recheckMissing() {
+    if (missingShown.isEmpty() || !missingShown.equals(error.get())) {
+      return; // another error, or none: left as it is
     }
-    if (r.openInspectionId() > 0
-        && !dialogs.confirm("An inspection is already open",
-            "Inspection " + r.openInspectionId() + " of this structure is still open. Start another one anyway?"
-                + " (The open one stays open until it is finalised.)", "Start another")) {
-      return false;
+    OverviewRow r = selected.get();
+    Structure structure = r == null ? null : known.structures().get(r.structureId());
+    List<String> missing = missingFields(structure != null && structure.kind() == StructureKind.RACKING_RUN);
+    missingShown = missing.isEmpty() ? "" : missingWords(missing);
+    error.set(missingShown);
+  }
+
+  /**
+   * Every value the new inspection will carry, for a last look before it starts: none of them can
+   * be changed once it has started.
+   */
+  private String lastLook(OverviewRow r, Structure structure, boolean racking) {
+    List<PlaneRecord> covered = known.planes().getOrDefault(structure.id(), List.of()).stream()
+        .filter(p -> !known.retired().containsKey(p.id())).toList();
+    StringBuilder out = new StringBuilder();
+    out.append("Structure: ").append(structure.name()).append(" (").append(kindWords(structure.kind()))
+        .append(")\n");
+    out.append("Planes: ").append(covered.isEmpty() ? "none"
+        : String.join(", ", covered.stream().map(PlaneRecord::name).toList())).append("\n");
+    out.append("Inspector: ").append(strip(inspectorName.get())).append("\n");
+    out.append("Position: ").append(strip(inspectorPosition.get())).append("\n");
+    out.append("Competent person: ").append(strip(competentPerson.get())).append("\n");
+    out.append("Shift: ").append(strip(shift.get())).append("\n");
+    if (racking) {
+      out.append("Storage safety: ").append(strip(storageSafetyPerson.get())).append("\n");
     }
-    NewInspection details = new NewInspection(name, strip(inspectorPosition.get()), strip(competentPerson.get()),
-        strip(shift.get()), racking ? strip(storageSafetyPerson.get()) : null, reason.get(), null, null);
-    return write("Starting the inspection", () -> {
-      Inspection started = inspections.start(r.structureId(), details);
-      List<PlaneRecord> covered = inspections.planesOf(started.id());
-      long plane = covered.stream().anyMatch(p -> p.id() == r.planeId()) ? r.planeId()
-          : covered.stream().findFirst().map(PlaneRecord::id).orElse(0L);
-      return new Selection(r.structureId(), plane, started.id());
-    }, opened -> navigator.open(ScreenId.WALK, opened), e -> "Not started: " + e.getMessage());
+    out.append("Reason: ").append(reason.get() == null ? "" : reason.get().label().replace('-', ' ')).append("\n\n");
+    if (r.openInspectionId() > 0) {
+      out.append("Inspection ").append(r.openInspectionId()).append(" of this structure is still open; it stays open"
+          + " until it is finalised.\n\n");
+    }
+    out.append("None of these can be changed once the inspection has started. Cancel goes back to the form.");
+    return out.toString();
   }
 
   /**

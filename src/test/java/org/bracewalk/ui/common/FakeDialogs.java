@@ -24,6 +24,13 @@ public final class FakeDialogs implements DialogService {
     return confirmAnswers.isEmpty() ? false : confirmAnswers.pop();
   }
 
+  /** Answered from {@link #confirmAnswers} too; the question names the default (safe) choice. */
+  @Override
+  public boolean confirmRisky(String title, String message, String riskyLabel, String safeLabel) {
+    asked.add(title + ": " + message + " [" + riskyLabel + " / default: " + safeLabel + "]");
+    return confirmAnswers.isEmpty() ? false : confirmAnswers.pop();
+  }
+
   @Override
   public void inform(String title, String message) {
     told.add(title + ": " + message);

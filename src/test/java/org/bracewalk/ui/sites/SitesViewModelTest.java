@@ -98,6 +98,7 @@ class SitesViewModelTest {
     vm.shiftProperty().set("day");
     long structure = row(vm, "north facade").structureId();
     int before = services.inspections().inspections(structure).size();
+    dialogs.confirmAnswers.add(true); // the last look: start
     assertThat(vm.startInspection()).isTrue();
     // nothing written on the calling (toolkit) thread, and a second press starts no second inspection
     assertThat(services.inspections().inspections(structure)).hasSize(before);
@@ -250,6 +251,7 @@ class SitesViewModelTest {
     // the demo's one inspection of the facade scaffold
     assertThat(services.inspections().inspections(row(vm, "north facade").structureId())).hasSize(1);
     vm.shiftProperty().set("day");
+    dialogs.confirmAnswers.add(true); // the last look: start
     assertThat(vm.startInspection()).isTrue();
     var started = services.inspections().inspections(row(vm, "north facade").structureId())
         .subList(1, 2);
@@ -281,6 +283,7 @@ class SitesViewModelTest {
     vm.competentPersonProperty().set("Priya Danvers");
     vm.shiftProperty().set("day");
     vm.storageSafetyPersonProperty().set("Sam Odell");
+    dialogs.confirmAnswers.add(true); // the last look: start
     assertThat(vm.startInspection()).as(vm.errorProperty().get()).isTrue();
     Inspection started = services.inspections().inspections(1).get(2);
     assertThat(services.inspections().planesOf(started.id())).extracting(PlaneRecord::name)
@@ -309,6 +312,59 @@ class SitesViewModelTest {
     assertThat(vm.retirePlane()).isFalse();
     assertThat(vm.errorProperty().get()).isEqualTo("Select the plane to retire first.");
     assertThat(services.sites().retirement(spine)).isEmpty();
+  }
+
+  // ---- the start form: a last look, and an error that follows the fields ----
+
+  @Test
+  void startShowsEveryValueForALastLookAndDecliningStartsNothing() {
+    services = DemoDatabase.withDemo(dir);
+    SitesViewModel vm = sitesOf(services);
+    vm.selectedProperty().set(row(vm, "frame 1"));
+    vm.inspectorNameProperty().set("Ada Quill");
+    vm.inspectorPositionProperty().set("Racking inspector, Quill Ltd");
+    vm.competentPersonProperty().set("Bo Lindqvist");
+    vm.shiftProperty().set("night");
+    vm.storageSafetyPersonProperty().set("Sam Odell");
+    vm.reasonProperty().set(org.bracewalk.core.model.InspectionReason.AFTER_IMPACT);
+    long structure = row(vm, "frame 1").structureId();
+    int before = services.inspections().inspections(structure).size();
+    dialogs.confirmAnswers.add(false);
+    assertThat(vm.startInspection()).isFalse();
+    String look = dialogs.asked.get(dialogs.asked.size() - 1);
+    assertThat(look).startsWith("Start this inspection?")
+        .contains("Structure: Aisle C racking run (racking run)")
+        .contains("frame 1").contains("spine")
+        .contains("Inspector: Ada Quill").contains("Position: Racking inspector, Quill Ltd")
+        .contains("Competent person: Bo Lindqvist").contains("Shift: night")
+        .contains("Storage safety: Sam Odell").contains("Reason: after impact")
+        .contains("None of these can be changed once the inspection has started");
+    assertThat(services.inspections().inspections(structure)).hasSize(before);
+    assertThat(opened).isEmpty();
+    assertThat(vm.statusProperty().get()).startsWith("Not started");
+    dialogs.confirmAnswers.add(true);
+    assertThat(vm.startInspection()).isTrue();
+    assertThat(services.inspections().inspections(structure)).hasSize(before + 1);
+  }
+
+  @Test
+  void theEmptyFieldsErrorFollowsTheFieldsAndGoesOnceTheyAreFilled() {
+    services = DemoDatabase.withDemo(dir);
+    SitesViewModel vm = sitesOf(services);
+    vm.selectedProperty().set(row(vm, "north facade"));
+    assertThat(vm.startInspection()).isFalse();
+    assertThat(vm.errorProperty().get()).startsWith("Inspector, Position, Competent person, Shift: empty.");
+    vm.inspectorNameProperty().set("Ada Quill");
+    vm.inspectorPositionProperty().set("Scaffold inspector");
+    assertThat(vm.errorProperty().get()).startsWith("Competent person, Shift: empty.");
+    vm.competentPersonProperty().set("Ada Quill");
+    vm.shiftProperty().set("day");
+    assertThat(vm.errorProperty().get()).isEmpty();
+    // another error is left alone by typing
+    vm.selectedProperty().set(null);
+    assertThat(vm.startInspection()).isFalse();
+    vm.shiftProperty().set("night");
+    assertThat(vm.errorProperty().get()).startsWith("Select the structure");
   }
 
   /** The plane named "spine" of structure 1 (the demo's racking run). */
