@@ -76,7 +76,16 @@ public final class MainWindow implements Navigator {
     daylightButton.setId("daylight");
     daylightButton.setFocusTraversable(false);
     daylightButton.setOnAction(e -> setDaylight(daylightButton.isSelected()));
-    HBox header = Widgets.row(16, mark, crumbs, Widgets.grow(), daylightButton, smaller, larger, helpButton);
+    // at any text size the header's words stay whole: the buttons and the word mark keep their
+    // width, the crumbs wrap onto a second line
+    for (javafx.scene.control.Labeled l : List.of(mark, daylightButton, smaller, larger, helpButton)) {
+      l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+    }
+    crumbs.setWrapText(true);
+    crumbs.setMinWidth(0);
+    HBox.setHgrow(crumbs, javafx.scene.layout.Priority.ALWAYS);
+    crumbs.setMaxWidth(Double.MAX_VALUE);
+    HBox header = Widgets.row(16, mark, crumbs, daylightButton, smaller, larger, helpButton);
     header.getStyleClass().add("header");
     frame.setTop(header);
 

@@ -17,7 +17,6 @@ import org.bracewalk.ui.common.ScreenId;
 import org.bracewalk.ui.sites.OverviewRow;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The "OVERDUE" of the Sites screen stays readable on a selected row, in the usual and the daylight
@@ -28,12 +27,11 @@ import org.junit.jupiter.api.io.TempDir;
  * 4.5:1 for text, and its definitions of "contrast ratio" and "relative luminance").
  */
 class OverdueContrastTest {
-  @TempDir static Path dir;
   private static ScreenRig rig;
 
   @BeforeAll
   static void demo() throws Exception {
-    rig = ScreenRig.open(dir, 10);
+    rig = ScreenRig.shared();
   }
 
   @org.junit.jupiter.api.AfterAll

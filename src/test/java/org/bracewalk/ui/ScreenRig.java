@@ -35,6 +35,25 @@ final class ScreenRig {
     this.facadeWalk = facadeWalk;
   }
 
+  /** Panels of the facade marked in the shared rig: it keeps its shape until the 48th (DemoWalk). */
+  static final int SHARED_MARKED = 44;
+  private static ScreenRig shared;
+
+  /**
+   * One rig for the window tests of a run (the demo database and its walk take a while to record),
+   * in a folder under {@code target/}: the facade's walk-round with {@value #SHARED_MARKED} panels
+   * marked. A test that marks more leaves it so for the tests after it.
+   */
+  static synchronized ScreenRig shared() throws Exception {
+    if (shared == null) {
+      Path dir = java.nio.file.Files.createDirectories(Path.of("target", "screen-rig"))
+          .resolve("run-" + System.nanoTime());
+      java.nio.file.Files.createDirectories(dir);
+      shared = open(dir, SHARED_MARKED);
+    }
+    return shared;
+  }
+
   /** The demo database in {@code dir}, with a walk-round of the facade {@code marked} panels in. */
   static ScreenRig open(Path dir, int marked) throws Exception {
     FxToolkit.registerPrimaryStage();
@@ -61,6 +80,14 @@ final class ScreenRig {
 
   /** A new main window in a scene of {@code width} x {@code height} with the app's stylesheet. */
   void window(double width, double height) throws Exception {
+    window(width, height, true);
+  }
+
+  /**
+   * As {@link #window(double, double)}; {@code shown} false leaves the scene out of a window (no
+   * focus, any size: the headless screen is 1280 x 800).
+   */
+  void window(double width, double height, boolean shown) throws Exception {
     fx(() -> {
       if (stage != null) {
         stage.close();
@@ -69,6 +96,10 @@ final class ScreenRig {
       scene = new Scene(window.root(), width, height);
       Stylesheet.apply(scene);
       // a window of its own, shown, so focus works as in the app
+      if (!shown) {
+        stage = null;
+        return null;
+      }
       stage = new javafx.stage.Stage();
       stage.setScene(scene);
       stage.show();

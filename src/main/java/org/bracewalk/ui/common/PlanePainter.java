@@ -56,8 +56,25 @@ public final class PlanePainter {
   public static PlaneGeometry paint(
       GraphicsContext g, PlanePicture pic, double w, double h, boolean labelled) {
     PlaneGrid grid = pic.grid();
-    PlaneGeometry geo =
-        labelled ? new PlaneGeometry(grid, w, h, 52, 30) : new PlaneGeometry(grid, w, h, 8, 8);
+    PlaneGeometry geo = labelled
+        ? new PlaneGeometry(grid, w, h, LEFT_MARGIN, MARGIN) : new PlaneGeometry(grid, w, h, 8, 8);
+    paint(g, pic, geo, w, h, labelled);
+    return geo;
+  }
+
+  /** Room left of the plane for the lift numbers, pixels. */
+  public static final double LEFT_MARGIN = 52;
+  /** Room on the other sides (the bay numbers below), pixels. */
+  public static final double MARGIN = 30;
+
+  /**
+   * Paints the picture into a box of {@code w} × {@code h} in the geometry {@code geo} (which may
+   * draw the plane larger than the box, scrolled: the lift and bay numbers then stay at the box's
+   * left and bottom edges).
+   */
+  public static void paint(
+      GraphicsContext g, PlanePicture pic, PlaneGeometry geo, double w, double h, boolean labelled) {
+    PlaneGrid grid = pic.grid();
     g.clearRect(0, 0, w, h); // a full clear also drops the canvas's queued commands
     g.setFill(PAPER);
     g.fillRect(0, 0, w, h);
@@ -81,13 +98,12 @@ public final class PlanePainter {
     }
     overlays(g, geo, pic, null, badges || smallest >= 12);
     joints(g, geo, pic);
-    if (labelled) {
-      labels(g, geo, sway);
-    }
     if (pic.cursor() != null && grid.contains(pic.cursor())) {
       cursor(g, geo, pic.cursor(), pic.selectedMember());
     }
-    return geo;
+    if (labelled) {
+      labels(g, geo, sway, w, h);
+    }
   }
 
   /** Which part of a panel to draw: everything, only its member lines, or all but them. */
@@ -210,6 +226,14 @@ public final class PlanePainter {
         cursor(g, geo, pic.cursor(), pic.selectedMember());
       }
     }
+  }
+
+  /**
+   * The lift and bay numbers again, over a partial repaint of a plane drawn larger than its box
+   * (whose numbers stand on strips over the drawing).
+   */
+  static void labelsOver(GraphicsContext g, PlaneGeometry geo, PlanePicture pic, double w, double h) {
+    labels(g, geo, pic.sway(), w, h);
   }
 
   /** The frame members (and ground) around one panel and its neighbours. */
@@ -782,8 +806,21 @@ public final class PlanePainter {
     }
   }
 
-  private static void labels(GraphicsContext g, PlaneGeometry geo, SwayRegion sway) {
+  private static void labels(GraphicsContext g, PlaneGeometry geo, SwayRegion sway, double w, double h) {
     PlaneGrid grid = geo.grid();
+    // a plane scrolled past the box's edge keeps its numbers in sight, on a strip of paper
+    double labelX = geo.lineX(0);
+    if (labelX < LEFT_MARGIN) {
+      labelX = LEFT_MARGIN;
+      g.setFill(PAPER);
+      g.fillRect(0, 0, LEFT_MARGIN - 2, h);
+    }
+    double labelY = geo.levelY(0);
+    if (labelY > h - MARGIN) {
+      labelY = h - MARGIN;
+      g.setFill(PAPER);
+      g.fillRect(0, labelY + 4, w, MARGIN);
+    }
     g.setFill(Color.web("#333333"));
     g.setFont(Font.font("DejaVu Sans", 12));
     g.setTextBaseline(VPos.CENTER);
@@ -803,7 +840,10 @@ public final class PlanePainter {
       double y = (geo.levelY(i) + geo.levelY(i - 1)) / 2;
       g.setFont(Font.font("DejaVu Sans", shearing ? FontWeight.BOLD : FontWeight.NORMAL, 12));
       g.setFill(shearing ? SWAY.darker() : Color.web("#333333"));
-      g.fillText((shearing ? "\u2194 " : "") + "L" + i, geo.lineX(0) - 6, y);
+      if (y < 0 || y > labelY) {
+        continue;
+      }
+      g.fillText((shearing ? "\u2194 " : "") + "L" + i, labelX - 6, y);
     }
     g.setFill(Color.web("#333333"));
     g.setFont(Font.font("DejaVu Sans", 12));
@@ -815,7 +855,10 @@ public final class PlanePainter {
         continue;
       }
       double x = (geo.lineX(j) + geo.lineX(j - 1)) / 2;
-      g.fillText(Integer.toString(j), x, geo.levelY(0) + 9);
+      if (x < labelX || x > w) {
+        continue;
+      }
+      g.fillText(Integer.toString(j), x, labelY + 9);
     }
   }
 
