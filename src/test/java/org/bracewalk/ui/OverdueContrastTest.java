@@ -130,6 +130,9 @@ class OverdueContrastTest {
       javax.imageio.ImageIO.write(javafx.embed.swing.SwingFXUtils.fromFXImage(img, null), "png",
           out.resolve("overdue-" + (daylight ? "daylight" : "usual") + (focused ? "-focused" : "-unfocused")
               + ".png").toFile());
+      org.bracewalk.bench.ScreenPicture.write(rig.window.root(), 1280, 800,
+          out.resolve("window-" + (daylight ? "daylight" : "usual") + (focused ? "-focused" : "-unfocused") + ".png"),
+          rig.services.outputs());
       System.out.printf("overdue %s %s: text #%06x on #%06x, %.2f:1%n", daylight ? "daylight" : "usual",
           focused ? "focused" : "not focused", text, background, best);
       return best;
