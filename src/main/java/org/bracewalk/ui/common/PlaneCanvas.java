@@ -18,9 +18,7 @@ import org.bracewalk.core.model.PanelRef;
  * <p>No panel is drawn smaller than {@link #MIN_PANEL} pixels either way (a target for a gloved
  * finger): where the box is too small for that, the plane is drawn larger and scrolls (scroll bars,
  * the mouse wheel or a swipe), and the view follows the cursor. The drawing's scale is the one
- * that fits the box, or that minimum. When only the box's height shrinks, by up to a third (an
- * alarm banner appears above the drawing), the drawing keeps its size and scrolls instead, so the
- * panels the inspector was looking at do not jump or shrink.
+ * that fits the box, or that minimum.
  */
 public final class PlaneCanvas extends Region {
   private final Canvas canvas = new Canvas();
@@ -35,11 +33,8 @@ public final class PlaneCanvas extends Region {
   /** The part of a drawing larger than the box that is in view: its offset, pixels. */
   private double scrollX;
   private double scrollY;
-  /** The box the scale was last fitted to: its width, and the tallest height at that width. */
-  private double steadyWidth = -1;
-  private double steadyHeight = -1;
-  /** The height the scale is fitted to now (at least the box's). */
-  private double fitHeight;
+  /** True while a click is handled: what was clicked is in view, so the view does not move. */
+  private boolean clicking;
 
   private Consumer<PanelRef> onPanelPicked = p -> {};
   private Consumer<FrameRef> onFramePicked;
@@ -80,17 +75,27 @@ public final class PlaneCanvas extends Region {
         e -> {
           requestFocus();
           if (geometry != null) {
-            FrameRef f = onFramePicked == null ? null : geometry.frameAt(e.getX(), e.getY(), FRAME_REACH);
-            if (f != null) {
-              onFramePicked.accept(f);
-              return;
-            }
-            PanelRef p = geometry.panelAt(e.getX(), e.getY());
-            if (p != null) {
-              onPanelPicked.accept(p);
+            clicking = true;
+            try {
+              picked(e.getX(), e.getY());
+            } finally {
+              clicking = false;
             }
           }
         });
+  }
+
+  /** A click or tap at (ex, ey): a frame member near it, else the panel under it. */
+  private void picked(double ex, double ey) {
+    FrameRef f = onFramePicked == null ? null : geometry.frameAt(ex, ey, FRAME_REACH);
+    if (f != null) {
+      onFramePicked.accept(f);
+      return;
+    }
+    PanelRef p = geometry.panelAt(ex, ey);
+    if (p != null) {
+      onPanelPicked.accept(p);
+    }
   }
 
   public ObjectProperty<PlanePicture> pictureProperty() {
@@ -124,11 +129,6 @@ public final class PlaneCanvas extends Region {
     boolean horizontal = false;
     boolean vertical = false;
     double bar = 16;
-    if (w != steadyWidth || h > steadyHeight || h < steadyHeight * 2 / 3) {
-      steadyWidth = w;
-      steadyHeight = h;
-    }
-    fitHeight = steadyHeight;
     if (pic != null) {
       // a scroll bar takes room from the other axis, which may call for the other bar too
       for (int k = 0; k < 2; k++) {
@@ -157,8 +157,7 @@ public final class PlaneCanvas extends Region {
   }
 
   private PlaneGeometry.Content content(PlanePicture pic, double w, double h) {
-    return PlaneGeometry.content(pic.grid(), w, h, fitHeight - (getHeight() - h), PlanePainter.LEFT_MARGIN,
-        PlanePainter.MARGIN, MIN_PANEL);
+    return PlaneGeometry.content(pic.grid(), w, h, PlanePainter.LEFT_MARGIN, PlanePainter.MARGIN, MIN_PANEL);
   }
 
   private void updateBars(PlanePicture pic) {
@@ -238,8 +237,8 @@ public final class PlaneCanvas extends Region {
   }
 
   private PlaneGeometry geometryFor(PlanePicture pic, double w, double h) {
-    return new PlaneGeometry(pic.grid(), w, h, fitHeight - (getHeight() - h), PlanePainter.LEFT_MARGIN,
-        PlanePainter.MARGIN, MIN_PANEL, scrollX, scrollY);
+    return new PlaneGeometry(pic.grid(), w, h, PlanePainter.LEFT_MARGIN, PlanePainter.MARGIN, MIN_PANEL,
+        scrollX, scrollY);
   }
 
   /** Draws the current picture now. */
@@ -260,7 +259,7 @@ public final class PlaneCanvas extends Region {
       updateBars(pic);
       requestLayout();
     }
-    if (follow(pic, pic.cursor())) {
+    if (!clicking && follow(pic, pic.cursor())) {
       painted = null;
     }
     java.util.Set<PanelRef> dirty = painted == null ? null : dirtyPanels(painted, pic);

@@ -54,16 +54,20 @@ public final class PlaneGeometry {
     double totalW = sum(grid.bayWidths());
     double totalH = sum(grid.liftHeights());
     double availW = Math.max(1, width - leftMargin - margin);
-    double availH = Math.max(1, height - 2 * margin);
     Content c = content(grid, width, height, fitHeight, leftMargin, margin, minPanel);
     this.scale = c.scale();
     // centred in the box where it fits (the spare room goes equally to both sides), else scrolled
     this.originX = c.width() <= width + 0.5
         ? leftMargin + (availW - totalW * scale) / 2
         : leftMargin - Math.max(0, Math.min(scrollX, c.width() - width));
-    this.baseY = c.height() <= height + 0.5
-        ? margin + (availH - totalH * scale) / 2 + totalH * scale
-        : margin + totalH * scale - Math.max(0, Math.min(scrollY, c.height() - height));
+    // laid out in a box fitHeight tall (the box the scale was fitted to), of which the view shows
+    // height pixels from scrollY down: so the drawing stays where it was while a shorter box
+    // cuts off its bottom (scrolled into view on demand)
+    double boxH = Math.max(height, fitHeight);
+    double drawnH = 2 * margin + totalH * scale;
+    double top = drawnH <= boxH + 0.5 ? (boxH - drawnH) / 2 : 0;
+    this.baseY = top + margin + totalH * scale
+        - (c.height() <= height + 0.5 ? 0 : Math.max(0, Math.min(scrollY, c.height() - height)));
     this.lineX = new double[grid.bays() + 1];
     this.levelY = new double[grid.lifts() + 1];
     // grid lines on whole pixels: crisp lines that a partial repaint redraws exactly (the
@@ -112,8 +116,10 @@ public final class PlaneGeometry {
     }
     // one pixel more than asked: lines fall on whole pixels, which may take half a pixel off
     double scale = minPanel <= 0 ? fit : Math.max(fit, (minPanel + 1) / smallest);
+    double boxH = Math.max(height, fitHeight);
+    double drawnH = 2 * margin + totalH * scale;
     return new Content(scale, Math.max(width, leftMargin + totalW * scale + margin),
-        Math.max(height, 2 * margin + totalH * scale));
+        Math.max(height, drawnH <= boxH + 0.5 ? (boxH + drawnH) / 2 : drawnH));
   }
 
   private static double sum(List<Double> xs) {
