@@ -163,17 +163,7 @@ final class ElevationDrawing {
       float py = ys[p.lift() - 1];
       float pw = xs[p.bay()] - px;
       float ph = ys[p.lift()] - py;
-      cb.saveState();
-      cb.setColorFill(Palette.OPENING);
-      cb.rectangle(px, py, pw, ph);
-      cb.fill();
-      cb.setColorStroke(Palette.GHOST);
-      cb.setLineWidth(0.6f);
-      cb.setLineDash(0f);
-      float inset = Math.min(pw, ph) * 0.18f;
-      cb.rectangle(px + inset, py, pw - 2 * inset, ph - inset);
-      cb.stroke();
-      cb.restoreState();
+      Glyphs.opening(cb, px, py, pw, ph);
     }
     // the grid: standards and ledgers there as designed in plain runs, the others in their states
     Map<FrameRef, FrameLooks.Look> looks = FrameLooks.of(plane);
@@ -226,8 +216,12 @@ final class ElevationDrawing {
     // members: design ghost, then as found
     Set<PanelRef> critical = new HashSet<>(state.criticalBraces());
     Map<PanelRef, Brace> repairs = new HashMap<>();
+    Set<PanelRef> newPositions = new HashSet<>();
     for (RepairBrace rb : plane.analysis().repair().braces()) {
       repairs.put(rb.panel(), rb.brace());
+      if (!rb.inDesign()) {
+        newPositions.add(rb.panel());
+      }
     }
     for (int i = 1; i <= m; i++) {
       for (int j = 1; j <= n; j++) {
@@ -257,8 +251,8 @@ final class ElevationDrawing {
         if (numbers != null && !numbers.isEmpty()) {
           String text = numbers.size() > 2 ? numbers.get(0) + "+" : Wording.ranges(numbers);
           float lw = bold.getWidthPoint(text, labelSize) + labelSize * 0.6f;
-          Glyphs.label(cb, bold, text, x1 - lw / 2 - 1.2f, y0 + labelSize * 0.75f + 1.2f, labelSize,
-              Palette.REPAIR);
+          Glyphs.repairNumber(cb, bold, text, x1 - lw / 2 - 1.2f, y0 + labelSize * 0.75f + 1.2f,
+              labelSize, !newPositions.contains(p));
         }
       }
     }
@@ -292,7 +286,7 @@ final class ElevationDrawing {
       float cx = (seg[0] + seg[2]) / 2 + (e.getKey().isLedger() ? -r * 1.4f - lw / 2 : lw / 2 + 2f);
       float cy = (seg[1] + seg[3]) / 2
           + (e.getKey().isLedger() ? labelSize * 0.8f + 1f : -r * 1.4f - labelSize * 0.6f);
-      Glyphs.label(cb, bold, text, cx, cy, labelSize, Palette.REPAIR);
+      Glyphs.repairNumber(cb, bold, text, cx, cy, labelSize, true);
     }
     // joints with no sideways restraint, loose member ends
     for (Freedom f : FrameLooks.freedoms(plane, FreedomKind.LOST_RESTRAINT)) {
@@ -319,7 +313,7 @@ final class ElevationDrawing {
       Parts.Part part = swayingPartOfLift(parts, i);
       String letter = part != null ? part.letter() : liftLetters[i];
       if (letter != null) {
-        Glyphs.label(cb, bold, letter, ox - 3f - fs * 2.6f - 4f, cy, fs, Palette.LOST);
+        Glyphs.partLetter(cb, bold, letter, ox - 3f - fs * 2.6f, cy, fs);
       }
       String hText = w.length(g.liftHeights().get(i - 1));
       if (font.getWidthPoint(hText, fs) < RIGHT - 4 && ys[i] - ys[i - 1] > fs) {
@@ -426,7 +420,7 @@ final class ElevationDrawing {
       cb.restoreState();
     }
     if (f == null || !f.state().inspected()) {
-      return Glyphs.Mark.QUESTION;
+      return Glyphs.Mark.NOT_SEEN;
     }
     PanelState st = f.state();
     Brace foundBrace = f.memberFound();
@@ -440,14 +434,14 @@ final class ElevationDrawing {
           members(cb, b.diagonal(), b.kind(), x0, y0, x1, y1, 0.04f);
           cb.restoreState();
         }
-        return st == PanelState.SOUND || b == null ? Glyphs.Mark.NONE : Glyphs.Mark.OPEN_TRIANGLE;
+        return st == PanelState.SOUND || b == null ? Glyphs.Mark.NONE : Glyphs.Mark.DAMAGED;
       }
       case EXTRA -> {
         cb.saveState();
         Glyphs.stroke(cb, Glyphs.Stroke.EXTRA, weight);
         members(cb, found, foundBrace.kind(), x0, y0, x1, y1, 0.04f);
         cb.restoreState();
-        return Glyphs.Mark.PLUS;
+        return Glyphs.Mark.EXTRA;
       }
       case DAMAGED_INEFFECTIVE, MISSING -> {
         if (found != null) {
@@ -464,10 +458,10 @@ final class ElevationDrawing {
           members(cb, lost, design.kind(), x0, y0, x1, y1, 0.04f);
           cb.restoreState();
         }
-        return st == PanelState.MISSING ? Glyphs.Mark.SLASHED_RING : Glyphs.Mark.FILLED_TRIANGLE;
+        return st == PanelState.MISSING ? Glyphs.Mark.MISSING : Glyphs.Mark.BEYOND_USE;
       }
       default -> {
-        return Glyphs.Mark.QUESTION;
+        return Glyphs.Mark.NOT_SEEN;
       }
     }
   }

@@ -18,17 +18,17 @@ final class FrameLooks {
   /** The drawn state of one frame member. */
   enum Look {
     /** Damaged, still counts. */
-    DAMAGED(Glyphs.Stroke.DAMAGED, Glyphs.Mark.OPEN_TRIANGLE),
+    DAMAGED(Glyphs.Stroke.DAMAGED, Glyphs.Mark.DAMAGED),
     /** Damaged beyond use: counts as missing. */
-    INEFFECTIVE(Glyphs.Stroke.INEFFECTIVE, Glyphs.Mark.FILLED_TRIANGLE),
+    INEFFECTIVE(Glyphs.Stroke.INEFFECTIVE, Glyphs.Mark.BEYOND_USE),
     /** A design member not there. */
-    MISSING(Glyphs.Stroke.MISSING, Glyphs.Mark.SLASHED_RING),
+    MISSING(Glyphs.Stroke.MISSING, Glyphs.Mark.MISSING),
     /** The design leaves it out. */
     OMITTED(Glyphs.Stroke.OMITTED, Glyphs.Mark.NONE),
     /** There although the design leaves it out. */
-    EXTRA(Glyphs.Stroke.EXTRA, Glyphs.Mark.PLUS),
+    EXTRA(Glyphs.Stroke.EXTRA, Glyphs.Mark.EXTRA),
     /** Recorded as not inspected or not reachable: counts as missing. */
-    NOT_INSPECTED(Glyphs.Stroke.UNSEEN, Glyphs.Mark.QUESTION);
+    NOT_INSPECTED(Glyphs.Stroke.UNSEEN, Glyphs.Mark.NOT_SEEN);
 
     final Glyphs.Stroke stroke;
     final Glyphs.Mark mark;

@@ -3,8 +3,12 @@ package org.bracewalk.report;
 import com.lowagie.text.pdf.BaseFont;
 import com.lowagie.text.pdf.PdfContentByte;
 import java.awt.Color;
+import org.bracewalk.core.symbol.Symbol;
 
-/** The small vector symbols and line styles shared by the elevation, the legend and the locator. */
+/**
+ * The small vector symbols and line styles shared by the elevation, the legend and the locator.
+ * Every symbol is one of {@link Symbol}, drawn in the shape the app draws it.
+ */
 final class Glyphs {
   private Glyphs() {}
 
@@ -30,14 +34,28 @@ final class Glyphs {
     UNSEEN
   }
 
-  /** The symbol drawn at a panel's centre. */
+  /**
+   * The state drawn at a member's middle: its letter in a rounded box ({@link
+   * Symbol#STATE_BADGE}), the same letter the app's badge and walk-round key use.
+   */
   enum Mark {
-    NONE,
-    OPEN_TRIANGLE,
-    FILLED_TRIANGLE,
-    SLASHED_RING,
-    PLUS,
-    QUESTION
+    NONE(null, null, false),
+    DAMAGED("D", Palette.DAMAGED, false),
+    BEYOND_USE("U", Palette.LOST, true),
+    MISSING("M", Palette.LOST, true),
+    EXTRA("E", Palette.EXTRA, false),
+    NOT_SEEN("?", Palette.GRID, false);
+
+    final String letter;
+    final Color colour;
+    /** Filled in its colour, the letter in white (a member that does not count). */
+    final boolean alarm;
+
+    Mark(String letter, Color colour, boolean alarm) {
+      this.letter = letter;
+      this.colour = colour;
+      this.alarm = alarm;
+    }
   }
 
   static void stroke(PdfContentByte cb, Stroke s, float weight) {
@@ -74,57 +92,28 @@ final class Glyphs {
     cb.stroke();
   }
 
-  /** Draws a mark of radius {@code r} centred on (cx, cy). */
+  /** Draws a mark of radius {@code r} centred on (cx, cy): the state's letter in a rounded box. */
   static void mark(PdfContentByte cb, BaseFont font, Mark m, float cx, float cy, float r) {
+    if (m == Mark.NONE) {
+      return;
+    }
+    float side = r * 2.2f;
+    float x = cx - side / 2;
+    float y = cy - side / 2;
     cb.saveState();
     cb.setLineDash(0f);
-    switch (m) {
-      case NONE -> {}
-      case OPEN_TRIANGLE -> {
-        cb.setColorStroke(Palette.DAMAGED);
-        cb.setColorFill(java.awt.Color.WHITE);
-        cb.setLineWidth(0.9f);
-        triangle(cb, cx, cy, r);
-        cb.fillStroke();
-      }
-      case FILLED_TRIANGLE -> {
-        cb.setColorFill(Palette.LOST);
-        cb.setColorStroke(Palette.LOST);
-        cb.setLineWidth(0.6f);
-        triangle(cb, cx, cy, r);
-        cb.fillStroke();
-      }
-      case SLASHED_RING -> {
-        cb.setColorStroke(Palette.LOST);
-        cb.setColorFill(java.awt.Color.WHITE);
-        cb.setLineWidth(0.9f);
-        cb.circle(cx, cy, r * 0.85f);
-        cb.fillStroke();
-        line(cb, cx - r * 0.85f, cy - r * 0.85f, cx + r * 0.85f, cy + r * 0.85f);
-      }
-      case PLUS -> {
-        cb.setColorStroke(Palette.EXTRA);
-        cb.setLineWidth(1.2f);
-        line(cb, cx - r, cy, cx + r, cy);
-        line(cb, cx, cy - r, cx, cy + r);
-      }
-      case QUESTION -> {
-        float size = r * 2.4f;
-        cb.setColorFill(Palette.GRID);
-        cb.beginText();
-        cb.setFontAndSize(font, size);
-        cb.showTextAligned(PdfContentByte.ALIGN_CENTER, "?", cx, cy - size * 0.35f, 0f);
-        cb.endText();
-      }
-    }
+    cb.setLineWidth(0.5f);
+    cb.setColorStroke(m.colour);
+    cb.setColorFill(m.alarm ? m.colour : java.awt.Color.WHITE);
+    cb.roundRectangle(x, y, side, side, side * 0.22f);
+    cb.fillStroke();
+    cb.setColorFill(m.alarm ? java.awt.Color.WHITE : m.colour);
+    float size = side * 0.78f;
+    cb.beginText();
+    cb.setFontAndSize(font, size);
+    cb.showTextAligned(PdfContentByte.ALIGN_CENTER, m.letter, cx, cy - size * 0.36f, 0f);
+    cb.endText();
     cb.restoreState();
-  }
-
-  private static void triangle(PdfContentByte cb, float cx, float cy, float r) {
-    cb.moveTo(cx, cy + r);
-    cb.lineTo(cx + r * 0.95f, cy - r * 0.7f);
-    cb.lineTo(cx - r * 0.95f, cy - r * 0.7f);
-    cb.closePath();
   }
 
   /**
@@ -163,18 +152,14 @@ final class Glyphs {
     cb.fill();
   }
 
-  /** A loose member end: an open diamond on the joint. */
+  /** A loose member end ({@link Symbol#LOOSE_END}): a filled dot on the joint, outlined in white. */
   static void looseEnd(PdfContentByte cb, float cx, float cy, float r) {
     cb.saveState();
     cb.setLineDash(0f);
-    cb.setColorStroke(Palette.LOST);
-    cb.setColorFill(java.awt.Color.WHITE);
-    cb.setLineWidth(1.1f);
-    cb.moveTo(cx, cy + r);
-    cb.lineTo(cx + r, cy);
-    cb.lineTo(cx, cy - r);
-    cb.lineTo(cx - r, cy);
-    cb.closePath();
+    cb.setColorFill(Palette.LOST);
+    cb.setColorStroke(java.awt.Color.WHITE);
+    cb.setLineWidth(0.6f);
+    cb.circle(cx, cy, r * 0.8f);
     cb.fillStroke();
     cb.restoreState();
   }
@@ -200,12 +185,103 @@ final class Glyphs {
     cb.restoreState();
   }
 
-  /** The critical-brace marker: a small filled black square. */
+  /**
+   * The critical-brace or critical-member marker ({@link Symbol#CRITICAL}): a filled black diamond
+   * outlined in white, {@code size} across, as in the app.
+   */
   static void critical(PdfContentByte cb, float cx, float cy, float size) {
+    float h = size * 0.7f;
     cb.saveState();
+    cb.setLineDash(0f);
     cb.setColorFill(java.awt.Color.BLACK);
-    cb.rectangle(cx - size / 2, cy - size / 2, size, size);
+    cb.setColorStroke(java.awt.Color.WHITE);
+    cb.setLineWidth(0.4f);
+    cb.moveTo(cx, cy + h);
+    cb.lineTo(cx + h, cy);
+    cb.lineTo(cx, cy - h);
+    cb.lineTo(cx - h, cy);
+    cb.closePath();
+    cb.fillStroke();
+    cb.restoreState();
+  }
+
+  /**
+   * A repair's number: in a ring where the design has the brace or member ({@link
+   * Symbol#REPAIR_IN_DESIGN}), in a square where it is a new position ({@link
+   * Symbol#REPAIR_NEW_POSITION}), as in the app.
+   */
+  static void repairNumber(PdfContentByte cb, BaseFont font, String text, float cx, float cy,
+      float size, boolean inDesign) {
+    if (!inDesign) {
+      label(cb, font, text, cx, cy, size, Palette.REPAIR);
+      return;
+    }
+    float w = font.getWidthPoint(text, size) + size * 0.6f;
+    float h = size * 1.25f;
+    cb.saveState();
+    cb.setLineDash(0f);
+    cb.setColorFill(java.awt.Color.WHITE);
+    cb.setColorStroke(Palette.REPAIR);
+    cb.setLineWidth(0.6f);
+    if (w <= h * 1.15f) {
+      cb.circle(cx, cy, h * 0.58f);
+    } else {
+      // a longer number ("2-4") in a ring stretched to a pill, still round at both ends
+      cb.roundRectangle(cx - w / 2, cy - h / 2, w, h, h / 2);
+    }
+    cb.fillStroke();
+    cb.setColorFill(Palette.REPAIR);
+    cb.beginText();
+    cb.setFontAndSize(font, size);
+    cb.showTextAligned(PdfContentByte.ALIGN_CENTER, text, cx, cy - size * 0.35f, 0f);
+    cb.endText();
+    cb.restoreState();
+  }
+
+  /**
+   * A swaying part's letter beside the lift numbers ({@link Symbol#SWAYING}): a two-headed arrow
+   * and the letter, in the colour of lost rigidity; its right end at {@code right}.
+   */
+  static void partLetter(PdfContentByte cb, BaseFont bold, String letter, float right, float cy,
+      float size) {
+    float lw = bold.getWidthPoint(letter, size);
+    float arrow = size * 1.1f;
+    float ax1 = right - lw - size * 0.3f;
+    float ax0 = ax1 - arrow;
+    cb.saveState();
+    cb.setLineDash(0f);
+    cb.setColorStroke(Palette.LOST);
+    cb.setColorFill(Palette.LOST);
+    cb.setLineWidth(0.6f);
+    line(cb, ax0 + size * 0.2f, cy, ax1 - size * 0.2f, cy);
+    arrowHead(cb, ax1, cy, 1, 0, size * 0.3f);
+    arrowHead(cb, ax0, cy, -1, 0, size * 0.3f);
+    cb.beginText();
+    cb.setFontAndSize(bold, size);
+    cb.showTextAligned(PdfContentByte.ALIGN_RIGHT, letter, right, cy - size * 0.35f, 0f);
+    cb.endText();
+    cb.restoreState();
+  }
+
+  /** An opening ({@link Symbol#OPENING}): a light tint and a dashed arch, as in the app. */
+  static void opening(PdfContentByte cb, float px, float py, float pw, float ph) {
+    cb.saveState();
+    cb.setColorFill(Palette.OPENING);
+    cb.rectangle(px, py, pw, ph);
     cb.fill();
+    cb.setColorStroke(Palette.GRID);
+    cb.setLineWidth(0.6f);
+    cb.setLineDash(new float[] {2f, 1.5f}, 0f);
+    float x0 = px + pw * 0.22f;
+    float x1 = px + pw - pw * 0.22f;
+    float rad = (x1 - x0) / 2;
+    float top = py + ph - ph * 0.18f;
+    float springing = Math.max(py, top - rad);
+    cb.moveTo(x0, py);
+    cb.lineTo(x0, springing);
+    cb.arc(x0, springing - rad, x1, springing + rad, 180f, -180f);
+    cb.lineTo(x1, py);
+    cb.stroke();
     cb.restoreState();
   }
 

@@ -7,7 +7,7 @@ import com.lowagie.text.pdf.PdfContentByte;
 final class Legend {
   private static final String[] ENTRIES = {
     "design", "sound", "damaged-effective", "damaged-ineffective", "missing", "extra",
-    "not-inspected", "opening", "critical", "repair", "part", "tension"
+    "not-inspected", "opening", "critical", "repair", "repair-new", "part", "tension"
   };
   /** The frame entries, shown where a plane's frame is not whole or is named. */
   private static final String[] FRAME_ENTRIES = {
@@ -63,34 +63,31 @@ final class Legend {
     switch (entry) {
       case "design" -> member(cb, font, Glyphs.Stroke.DESIGN, Glyphs.Mark.NONE, x0, y0, x1, y1, cy);
       case "sound" -> member(cb, font, Glyphs.Stroke.SOUND, Glyphs.Mark.NONE, x0, y0, x1, y1, cy);
-      case "damaged-effective" -> member(cb, font, Glyphs.Stroke.DAMAGED, Glyphs.Mark.OPEN_TRIANGLE, x0, y0, x1, y1, cy);
+      case "damaged-effective" -> member(cb, font, Glyphs.Stroke.DAMAGED, Glyphs.Mark.DAMAGED, x0, y0, x1, y1, cy);
       case "damaged-ineffective" ->
-          member(cb, font, Glyphs.Stroke.INEFFECTIVE, Glyphs.Mark.FILLED_TRIANGLE, x0, y0, x1, y1, cy);
-      case "missing" -> member(cb, font, Glyphs.Stroke.MISSING, Glyphs.Mark.SLASHED_RING, x0, y0, x1, y1, cy);
-      case "extra" -> member(cb, font, Glyphs.Stroke.EXTRA, Glyphs.Mark.PLUS, x0, y0, x1, y1, cy);
-      case "not-inspected" -> member(cb, font, Glyphs.Stroke.DESIGN, Glyphs.Mark.QUESTION, x0, y0, x1, y1, cy);
-      case "opening" -> {
-        cb.setColorFill(Palette.OPENING);
-        cb.rectangle(x0 + 5, y0, 16, 8);
-        cb.fill();
-        cb.setColorStroke(Palette.GHOST);
-        cb.setLineWidth(0.6f);
-        cb.rectangle(x0 + 8, y0, 10, 6.5f);
-        cb.stroke();
-      }
+          member(cb, font, Glyphs.Stroke.INEFFECTIVE, Glyphs.Mark.BEYOND_USE, x0, y0, x1, y1, cy);
+      case "missing" -> member(cb, font, Glyphs.Stroke.MISSING, Glyphs.Mark.MISSING, x0, y0, x1, y1, cy);
+      case "extra" -> member(cb, font, Glyphs.Stroke.EXTRA, Glyphs.Mark.EXTRA, x0, y0, x1, y1, cy);
+      case "not-inspected" -> member(cb, font, Glyphs.Stroke.DESIGN, Glyphs.Mark.NOT_SEEN, x0, y0, x1, y1, cy);
+      case "opening" -> Glyphs.opening(cb, x0 + 5, y0, 16, 8);
       case "critical" -> {
         Glyphs.stroke(cb, Glyphs.Stroke.SOUND, 1f);
         Glyphs.line(cb, x0, y0, x1, y1);
-        Glyphs.critical(cb, x0 + 4f, y1 - 1f, 3.5f);
+        Glyphs.critical(cb, x0 + 4f, y1 - 1f, 4.5f);
       }
       case "repair" -> {
         Glyphs.stroke(cb, Glyphs.Stroke.REPAIR, 1f);
         Glyphs.line(cb, x0, y0, x1, y1);
-        Glyphs.label(cb, bold, "3", x1 - 3f, y0 + 1.5f, 5.5f, Palette.REPAIR);
+        Glyphs.repairNumber(cb, bold, "3", x1 - 3f, y0 + 1.5f, 5.5f, true);
+      }
+      case "repair-new" -> {
+        Glyphs.stroke(cb, Glyphs.Stroke.REPAIR, 1f);
+        Glyphs.line(cb, x0, y0, x1, y1);
+        Glyphs.repairNumber(cb, bold, "4", x1 - 3f, y0 + 1.5f, 5.5f, false);
       }
       case "part" -> {
-        Glyphs.hatch(cb, x0 + 4, y0, 18, 8, Palette.tint(0), 0);
-        Glyphs.label(cb, bold, "B", x0 + 13, cy, 5.5f, Palette.LOST);
+        Glyphs.hatch(cb, x0 + 12, y0, 14, 8, Palette.tint(0), 0);
+        Glyphs.partLetter(cb, bold, "B", x0 + 11, cy, 5.5f);
       }
       case "tension" -> {
         Glyphs.stroke(cb, Glyphs.Stroke.SOUND, 1f);

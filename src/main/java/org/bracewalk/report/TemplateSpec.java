@@ -180,7 +180,8 @@ final class TemplateSpec {
     for (String s :
         new String[] {
           "design", "sound", "damaged-effective", "damaged-ineffective", "missing", "extra",
-          "not-inspected", "opening", "critical", "repair", "part", "tension", "frame-damaged",
+          "not-inspected", "opening", "critical", "repair", "repair-new", "part", "tension",
+          "frame-damaged",
           "frame-ineffective", "frame-missing", "frame-omitted", "frame-extra",
           "frame-not-inspected", "lost-restraint", "loose-end"
         }) {

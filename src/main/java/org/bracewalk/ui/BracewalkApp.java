@@ -129,6 +129,7 @@ public final class BracewalkApp {
     var bounds = javafx.stage.Screen.getPrimary().getVisualBounds();
     Scene scene = new Scene(window.root(), Math.min(1360, bounds.getWidth()), Math.min(860, bounds.getHeight()));
     Stylesheet.apply(scene);
+    window.useLookSetting(org.bracewalk.ui.common.LookSetting.userPreferences());
     stage.setTitle("Bracewalk \u2014 " + location);
     stage.setScene(scene);
     stage.setMinWidth(Math.min(1024, bounds.getWidth()));

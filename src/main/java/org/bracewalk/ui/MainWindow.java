@@ -18,6 +18,7 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 import org.bracewalk.ui.common.KeyHelp;
+import org.bracewalk.ui.common.LookSetting;
 import org.bracewalk.ui.common.Navigator;
 import org.bracewalk.ui.common.RecordsChanged;
 import org.bracewalk.ui.common.ScreenId;
@@ -55,6 +56,8 @@ public final class MainWindow implements Navigator, RecordsChanged {
   private Selection selection = Selection.NONE;
   private HelpOverlay help;
   private int fontSize = 15;
+  private LookSetting look = LookSetting.inMemory();
+  private final ToggleButton daylightButton = new ToggleButton("Daylight");
 
   public MainWindow(ScreenFactory factory, List<KeyHelp.Section> screenKeys, String statusText) {
     this.factory = factory;
@@ -76,7 +79,19 @@ public final class MainWindow implements Navigator, RecordsChanged {
     Button larger = new Button("A+");
     larger.setOnAction(e -> scaleText(1));
     larger.setFocusTraversable(false);
-    HBox header = Widgets.row(16, mark, crumbs, Widgets.grow(), smaller, larger, helpButton);
+    daylightButton.setId("daylight");
+    daylightButton.setFocusTraversable(false);
+    daylightButton.setOnAction(e -> setDaylight(daylightButton.isSelected()));
+    // at any text size the header's words stay whole: the buttons and the word mark keep their
+    // width, the crumbs wrap onto a second line
+    for (javafx.scene.control.Labeled l : List.of(mark, daylightButton, smaller, larger, helpButton)) {
+      l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+    }
+    crumbs.setWrapText(true);
+    crumbs.setMinWidth(0);
+    HBox.setHgrow(crumbs, javafx.scene.layout.Priority.ALWAYS);
+    crumbs.setMaxWidth(Double.MAX_VALUE);
+    HBox header = Widgets.row(16, mark, crumbs, daylightButton, smaller, larger, helpButton);
     header.getStyleClass().add("header");
     frame.setTop(header);
 
@@ -267,6 +282,11 @@ public final class MainWindow implements Navigator, RecordsChanged {
           return;
         }
       }
+      if (e.getCode() == KeyCode.L && !e.isShiftDown() && !e.isAltDown()) {
+        setDaylight(!daylight());
+        e.consume();
+        return;
+      }
       if (e.getCode() == KeyCode.EQUALS || e.getCode() == KeyCode.PLUS || e.getCode() == KeyCode.ADD) {
         scaleText(1);
         e.consume();
@@ -300,13 +320,44 @@ public final class MainWindow implements Navigator, RecordsChanged {
     }
   }
 
-  private void scaleText(int step) {
+  /** Makes all text {@code step} pixels larger (negative: smaller), as Ctrl+= and Ctrl+- do. */
+  public void scaleText(int step) {
     fontSize = Math.max(MIN_FONT, Math.min(MAX_FONT, fontSize + step));
     applyFont();
   }
 
   private void applyFont() {
     root.setStyle("-fx-font-size: " + fontSize + "px;");
+  }
+
+  /**
+   * Takes the daylight look from {@code setting} now, and keeps every later change of look there
+   * (the app passes the user's preferences; pictures and tests keep the default, in memory).
+   */
+  public void useLookSetting(LookSetting setting) {
+    look = setting;
+    applyLook(setting.daylight());
+  }
+
+  /** Whether the window shows the daylight look (high contrast for bright sun). */
+  public boolean daylight() {
+    return root.getStyleClass().contains(Stylesheet.DAYLIGHT);
+  }
+
+  /** Shows the daylight look (high contrast for bright sun) or the usual look, and remembers it. */
+  public void setDaylight(boolean on) {
+    applyLook(on);
+    look.setDaylight(on);
+  }
+
+  private void applyLook(boolean on) {
+    Stylesheet.daylight(root, on);
+    daylightButton.setSelected(on);
+  }
+
+  /** The body text size now, in pixels ({@value #MIN_FONT} to {@value #MAX_FONT}). */
+  public int fontSize() {
+    return fontSize;
   }
 
   /** Every key section, window keys first (for the README). */
@@ -321,6 +372,7 @@ public final class MainWindow implements Navigator, RecordsChanged {
             KeyHelp.of("F1 or ?", "this key help; Esc closes it"),
             KeyHelp.of("Ctrl+1 \u2026 Ctrl+5", "Sites, Design, Walk-round, Findings, History"),
             KeyHelp.of("Ctrl+= / Ctrl+\u2212", "larger / smaller text"),
+            KeyHelp.of("Ctrl+L", "daylight look (high contrast for bright sun) / the usual look; remembered"),
             KeyHelp.of("Tab / Shift+Tab", "next / previous field or button"),
             KeyHelp.of("Space or Enter", "press the focused button")));
   }

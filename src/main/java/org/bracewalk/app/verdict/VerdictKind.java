@@ -1,5 +1,7 @@
 package org.bracewalk.app.verdict;
 
+import org.bracewalk.core.symbol.Symbol;
+
 /**
  * The six verdicts a plane can have, each with its own code (the report template's key), words
  * and symbol, so none depends on colour. Never "safe": holding its shape is a statement about
@@ -7,11 +9,11 @@ package org.bracewalk.app.verdict;
  */
 public enum VerdictKind {
   /** Rigid even with every panel not inspected counted as missing. */
-  HOLDS("holds-shape", "Holds its shape", "\u25A0"),
+  HOLDS("holds-shape", "Holds its shape", Symbol.HOLDS_SHAPE),
   /** Not rigid with the panels not inspected counted as missing, rigid if they are as designed. */
-  DEPENDS_ON_UNSEEN("depends-on-uninspected", "Depends on panels not inspected", "\u25D1"),
+  DEPENDS_ON_UNSEEN("depends-on-uninspected", "Depends on panels not inspected", Symbol.DEPENDS_ON_UNSEEN),
   /** No free motion with members taken as rigid, but tension-only members let it lean one way. */
-  SWAYS_ONE_WAY("one-way", "Lost rigidity: sways one way only", "\u25B2"),
+  SWAYS_ONE_WAY("one-way", "Lost rigidity: sways one way only", Symbol.LOST_RIGIDITY),
   /**
    * Its only freedoms are joints where a standard or ledger runs straight through with nothing
    * holding it sideways ({@code shared/design/analysis.md}, "Frame members"): no part sways, but
@@ -19,20 +21,20 @@ public enum VerdictKind {
    * shape": the pin-jointed model counts each such joint as a freedom.
    */
   LOST_RESTRAINT(
-      "lost-restraint", "Lost sideways restraint: an engineer checks it before loading", "\u25B3"),
+      "lost-restraint", "Lost sideways restraint: an engineer checks it before loading", Symbol.LOST_RESTRAINT),
   /** Not rigid whatever the panels not yet seen turn out to be. */
-  LOST("lost-rigidity", "Lost rigidity", "\u25B2"),
+  LOST("lost-rigidity", "Lost rigidity", Symbol.LOST_RIGIDITY),
   /** Nothing recorded for this plane yet. */
-  NOT_INSPECTED("not-inspected", "Not yet inspected", "\u25CB");
+  NOT_INSPECTED("not-inspected", "Not yet inspected", Symbol.NOT_INSPECTED);
 
   private final String code;
   private final String words;
   private final String symbol;
 
-  VerdictKind(String code, String words, String symbol) {
+  VerdictKind(String code, String words, Symbol symbol) {
     this.code = code;
     this.words = words;
-    this.symbol = symbol;
+    this.symbol = symbol.glyph();
   }
 
   /** A stable code: the report template's key is {@code verdict.<code>}. */

@@ -4,8 +4,8 @@ import org.bracewalk.core.model.PanelState;
 
 /**
  * How a frame member (a ledger or a standard segment) is drawn, told apart without colour: by line
- * weight, dash pattern, a doubled line, two damage ticks, a cross at its middle, a small ring, or
- * short end ticks with only a faint line between them. A member nobody recorded is drawn as the
+ * weight, dash pattern, a doubled line, two damage ticks, the state's letter badge at its middle
+ * (as on a brace, and in the PDF), or short end ticks with only a faint line between them. A member nobody recorded is drawn as the
  * design has it: the plain frame bar, or the end ticks of a member the design leaves out.
  */
 public enum FrameLook {
@@ -17,13 +17,13 @@ public enum FrameLook {
   DAMAGED_EFFECTIVE("damaged, still effective", null, 4.5, "#1b1b1b"),
   /** Damaged beyond use: long dashes with two ticks across (counts as missing). */
   DAMAGED_INEFFECTIVE("damaged beyond use", new double[] {10, 5}, 3.0, "#b3261e"),
-  /** Missing: a dotted line with a cross at its middle. */
+  /** Missing: a dotted line with the badge M at its middle. */
   MISSING("missing", new double[] {2, 4}, 2.0, "#b3261e"),
   /** There although the design leaves it out: two thin parallel lines. */
   EXTRA("there, not in the design", null, 1.3, "#5b2a86"),
   /** Left out by the design: short ticks across both ends and a faint hairline between. */
   OMITTED("left out by the design", new double[] {1, 7}, 1.0, "#6b6b6b"),
-  /** Recorded not inspected or not reachable: dash-dot with a small ring at its middle. */
+  /** Recorded not inspected or not reachable: dash-dot with the badge ? at its middle. */
   NOT_INSPECTED("not inspected or not reachable", new double[] {8, 3, 1.5, 3}, 2.0, "#6b6b6b");
 
   private final String words;
@@ -65,14 +65,20 @@ public enum FrameLook {
     return this == DAMAGED_EFFECTIVE || this == DAMAGED_INEFFECTIVE;
   }
 
-  /** A cross at the middle (gone). */
-  public boolean crossed() {
-    return this == MISSING;
-  }
-
-  /** A small ring at the middle (nobody could look at it). */
-  public boolean ringed() {
-    return this == NOT_INSPECTED;
+  /**
+   * The state's letter drawn at the member's middle ({@link
+   * org.bracewalk.core.symbol.Symbol#STATE_BADGE}, the same letters as a brace's badge), or {@code
+   * null} where the line style alone tells it (as designed, sound, left out by the design).
+   */
+  public String badge() {
+    return switch (this) {
+      case DAMAGED_EFFECTIVE -> "D";
+      case DAMAGED_INEFFECTIVE -> "U";
+      case MISSING -> "M";
+      case EXTRA -> "E";
+      case NOT_INSPECTED -> "?";
+      case AS_DESIGNED, SOUND, OMITTED -> null;
+    };
   }
 
   /** Short strokes across both ends (left out by the design). */

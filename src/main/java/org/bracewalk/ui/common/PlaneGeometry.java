@@ -29,15 +29,45 @@ public final class PlaneGeometry {
    * real proportions of bays and lifts.
    */
   public PlaneGeometry(PlaneGrid grid, double width, double height, double leftMargin, double margin) {
+    this(grid, width, height, leftMargin, margin, 0, 0, 0);
+  }
+
+  /**
+   * Fits {@code grid} into the box as above, but never draws a panel smaller than {@code minPanel}
+   * pixels either way: where the box is too small for that, the plane is drawn larger than the box
+   * and shifted by ({@code scrollX}, {@code scrollY}) pixels, the part in view of a larger drawing
+   * (see {@link #content}). Along an axis where the drawing fits, it is centred and the scroll is
+   * ignored.
+   */
+  public PlaneGeometry(PlaneGrid grid, double width, double height, double leftMargin, double margin,
+      double minPanel, double scrollX, double scrollY) {
+    this(grid, width, height, height, leftMargin, margin, minPanel, scrollX, scrollY);
+  }
+
+  /**
+   * As above, with the scale fitted to a box {@code fitHeight} high rather than {@code height}
+   * (taller: the drawing keeps the size it had before something took room above it).
+   */
+  public PlaneGeometry(PlaneGrid grid, double width, double height, double fitHeight, double leftMargin,
+      double margin, double minPanel, double scrollX, double scrollY) {
     this.grid = grid;
     double totalW = sum(grid.bayWidths());
     double totalH = sum(grid.liftHeights());
     double availW = Math.max(1, width - leftMargin - margin);
-    double availH = Math.max(1, height - 2 * margin);
-    this.scale = Math.min(availW / totalW, availH / totalH);
-    // centred in the box: the spare room goes equally to both sides
-    this.originX = leftMargin + (availW - totalW * scale) / 2;
-    this.baseY = margin + (availH - totalH * scale) / 2 + totalH * scale;
+    Content c = content(grid, width, height, fitHeight, leftMargin, margin, minPanel);
+    this.scale = c.scale();
+    // centred in the box where it fits (the spare room goes equally to both sides), else scrolled
+    this.originX = c.width() <= width + 0.5
+        ? leftMargin + (availW - totalW * scale) / 2
+        : leftMargin - Math.max(0, Math.min(scrollX, c.width() - width));
+    // laid out in a box fitHeight tall (the box the scale was fitted to), of which the view shows
+    // height pixels from scrollY down: so the drawing stays where it was while a shorter box
+    // cuts off its bottom (scrolled into view on demand)
+    double boxH = Math.max(height, fitHeight);
+    double drawnH = 2 * margin + totalH * scale;
+    double top = drawnH <= boxH + 0.5 ? (boxH - drawnH) / 2 : 0;
+    this.baseY = top + margin + totalH * scale
+        - (c.height() <= height + 0.5 ? 0 : Math.max(0, Math.min(scrollY, c.height() - height)));
     this.lineX = new double[grid.bays() + 1];
     this.levelY = new double[grid.lifts() + 1];
     // grid lines on whole pixels: crisp lines that a partial repaint redraws exactly (the
@@ -54,6 +84,42 @@ public final class PlaneGeometry {
       y -= grid.liftHeights().get(i - 1) * scale;
       levelY[i] = Math.round(y);
     }
+  }
+
+  /**
+   * How large a plane is drawn: its scale (pixels per metre) and the size of the whole drawing,
+   * margins included, which is larger than the box where a panel would otherwise be drawn smaller
+   * than {@code minPanel} pixels.
+   */
+  public record Content(double scale, double width, double height) {}
+
+  /** The drawing of {@code grid} in a box of {@code width} × {@code height} (see the constructor). */
+  public static Content content(PlaneGrid grid, double width, double height, double leftMargin, double margin,
+      double minPanel) {
+    return content(grid, width, height, height, leftMargin, margin, minPanel);
+  }
+
+  /** As above, the scale fitted to a box {@code fitHeight} high (at least {@code height}). */
+  public static Content content(PlaneGrid grid, double width, double height, double fitHeight,
+      double leftMargin, double margin, double minPanel) {
+    double totalW = sum(grid.bayWidths());
+    double totalH = sum(grid.liftHeights());
+    double availW = Math.max(1, width - leftMargin - margin);
+    double availH = Math.max(1, Math.max(height, fitHeight) - 2 * margin);
+    double fit = Math.min(availW / totalW, availH / totalH);
+    double smallest = Double.MAX_VALUE;
+    for (double b : grid.bayWidths()) {
+      smallest = Math.min(smallest, b);
+    }
+    for (double l : grid.liftHeights()) {
+      smallest = Math.min(smallest, l);
+    }
+    // one pixel more than asked: lines fall on whole pixels, which may take half a pixel off
+    double scale = minPanel <= 0 ? fit : Math.max(fit, (minPanel + 1) / smallest);
+    double boxH = Math.max(height, fitHeight);
+    double drawnH = 2 * margin + totalH * scale;
+    return new Content(scale, Math.max(width, leftMargin + totalW * scale + margin),
+        Math.max(height, drawnH <= boxH + 0.5 ? (boxH + drawnH) / 2 : drawnH));
   }
 
   private static double sum(List<Double> xs) {

@@ -14,6 +14,7 @@ import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneGrid;
+import org.bracewalk.core.symbol.Symbol;
 import javafx.geometry.VPos;
 import javafx.scene.canvas.GraphicsContext;
 import javafx.scene.paint.Color;
@@ -24,12 +25,14 @@ import javafx.scene.text.TextAlignment;
 
 /**
  * Draws a {@link PlanePicture} on a canvas. Each element has its own line style or symbol besides
- * its colour: members by state (see {@link PanelLook}), shearing panels hatched, critical braces a
- * diamond, proposed braces a dash-dot line with a numbered ring (a square where the panel is not
- * in the design), openings an arch, changed panels a dashed frame, the cursor a double frame with
- * corner brackets. Frame members recorded or left out by the design are drawn in the style of
- * their {@link FrameLook}; a joint without sideways restraint is a ring with a two-headed arrow, a
- * loose end a filled triangle; the selected side of the current panel is boxed and pointed at.
+ * its colour, every symbol the one {@link Symbol} names (the PDF draws the same shapes): members
+ * by state (see {@link PanelLook}) with the state's letter badge, shearing panels hatched,
+ * critical braces a diamond, proposed braces a dash-dot line with a numbered ring (a square where
+ * the panel is not in the design), openings an arch, changed panels a dashed frame with a star,
+ * the cursor a double frame with corner brackets. Frame members recorded or left out by the design
+ * are drawn in the style of their {@link FrameLook}; a joint without sideways restraint is a ring
+ * with a two-headed arrow, a loose end a filled dot; the selected side of the current panel is
+ * boxed and pointed at.
  */
 public final class PlanePainter {
   static final Color FRAME = Color.web("#4a4a4a");
@@ -53,8 +56,25 @@ public final class PlanePainter {
   public static PlaneGeometry paint(
       GraphicsContext g, PlanePicture pic, double w, double h, boolean labelled) {
     PlaneGrid grid = pic.grid();
-    PlaneGeometry geo =
-        labelled ? new PlaneGeometry(grid, w, h, 52, 30) : new PlaneGeometry(grid, w, h, 8, 8);
+    PlaneGeometry geo = labelled
+        ? new PlaneGeometry(grid, w, h, LEFT_MARGIN, MARGIN) : new PlaneGeometry(grid, w, h, 8, 8);
+    paint(g, pic, geo, w, h, labelled);
+    return geo;
+  }
+
+  /** Room left of the plane for the lift numbers, pixels. */
+  public static final double LEFT_MARGIN = 52;
+  /** Room on the other sides (the bay numbers below), pixels. */
+  public static final double MARGIN = 30;
+
+  /**
+   * Paints the picture into a box of {@code w} × {@code h} in the geometry {@code geo} (which may
+   * draw the plane larger than the box, scrolled: the lift and bay numbers then stay at the box's
+   * left and bottom edges).
+   */
+  public static void paint(
+      GraphicsContext g, PlanePicture pic, PlaneGeometry geo, double w, double h, boolean labelled) {
+    PlaneGrid grid = pic.grid();
     g.clearRect(0, 0, w, h); // a full clear also drops the canvas's queued commands
     g.setFill(PAPER);
     g.fillRect(0, 0, w, h);
@@ -78,13 +98,12 @@ public final class PlanePainter {
     }
     overlays(g, geo, pic, null, badges || smallest >= 12);
     joints(g, geo, pic);
-    if (labelled) {
-      labels(g, geo, sway);
-    }
     if (pic.cursor() != null && grid.contains(pic.cursor())) {
       cursor(g, geo, pic.cursor(), pic.selectedMember());
     }
-    return geo;
+    if (labelled) {
+      labels(g, geo, sway, w, h);
+    }
   }
 
   /** Which part of a panel to draw: everything, only its member lines, or all but them. */
@@ -281,6 +300,14 @@ public final class PlanePainter {
         cursor(g, geo, pic.cursor(), pic.selectedMember());
       }
     }
+  }
+
+  /**
+   * The lift and bay numbers again, over a partial repaint of a plane drawn larger than its box
+   * (whose numbers stand on strips over the drawing).
+   */
+  static void labelsOver(GraphicsContext g, PlaneGeometry geo, PlanePicture pic, double w, double h) {
+    labels(g, geo, pic.sway(), w, h);
   }
 
   /** The frame members (and ground) around one panel and its neighbours. */
@@ -503,20 +530,12 @@ public final class PlanePainter {
         g.strokeLine(px - nx * 9, py - ny * 9, px + nx * 9, py + ny * 9);
       }
     }
-    if (look.crossed()) {
-      double r = Math.min(6, len * 0.15);
-      g.setStroke(c);
-      g.setLineWidth(2.2);
-      g.strokeLine(mx - r, my - r, mx + r, my + r);
-      g.strokeLine(mx - r, my + r, mx + r, my - r);
-    }
-    if (look.ringed()) {
-      double r = Math.min(4.5, len * 0.12);
-      g.setFill(PAPER);
-      g.fillOval(mx - r, my - r, 2 * r, 2 * r);
-      g.setStroke(c);
-      g.setLineWidth(1.5);
-      g.strokeOval(mx - r, my - r, 2 * r, 2 * r);
+    if (look.badge() != null && len >= 20) {
+      // the state's letter, as on a brace and in the PDF (beside the damage ticks)
+      double size = Math.min(15, len * 0.3);
+      double off = look.ticked() ? size * 0.9 + 6 : 0;
+      letterBadge(g, mx - size / 2 + ux * off, my - size / 2 + uy * off, size, look.badge(), c,
+          look == FrameLook.MISSING || look == FrameLook.DAMAGED_INEFFECTIVE);
     }
     if (look.endTicks()) {
       double t = Math.min(8, len * 0.2);
@@ -591,17 +610,15 @@ public final class PlanePainter {
     }
   }
 
-  /** A filled triangle, point up, outlined in white: a member end held by nothing else. */
+  /** {@link Symbol#LOOSE_END}: a filled dot outlined in white, a member end held by nothing else. */
   static void looseEnd(GraphicsContext g, double x, double y) {
-    double r = 8;
-    double[] xs = {x, x + r, x - r};
-    double[] ys = {y - r, y + r * 0.75, y + r * 0.75};
+    double r = 6.5;
     g.setLineDashes();
     g.setFill(Color.BLACK);
-    g.fillPolygon(xs, ys, 3);
+    g.fillOval(x - r, y - r, 2 * r, 2 * r);
     g.setStroke(Color.WHITE);
     g.setLineWidth(1.4);
-    g.strokePolygon(xs, ys, 3);
+    g.strokeOval(x - r, y - r, 2 * r, 2 * r);
   }
 
   /**
@@ -744,20 +761,27 @@ public final class PlanePainter {
 
   private static void badge(GraphicsContext g, PlaneGeometry geo, PanelRef p, PanelLook look) {
     double size = Math.min(16, Math.min(geo.panelWidth(p), geo.panelHeight(p)) * 0.34);
-    double x = geo.left(p) + 3;
-    double y = geo.top(p) + 3;
     boolean alarm = look == PanelLook.MISSING || look == PanelLook.DAMAGED_INEFFECTIVE;
+    letterBadge(g, geo.left(p) + 3, geo.top(p) + 3, size, look.badge(), colour(look), alarm);
+  }
+
+  /**
+   * {@link Symbol#STATE_BADGE}: a state's letter in a rounded box with its top-left corner at (x,
+   * y); an alarm state is filled in its colour with the letter in white.
+   */
+  static void letterBadge(GraphicsContext g, double x, double y, double size, String letter, Color colour,
+      boolean alarm) {
     g.setLineDashes();
-    g.setFill(alarm ? colour(look) : Color.WHITE);
+    g.setFill(alarm ? colour : Color.WHITE);
     g.fillRoundRect(x, y, size, size, 4, 4);
-    g.setStroke(colour(look));
+    g.setStroke(colour);
     g.setLineWidth(1);
     g.strokeRoundRect(x, y, size, size, 4, 4);
-    g.setFill(alarm ? Color.WHITE : colour(look));
+    g.setFill(alarm ? Color.WHITE : colour);
     g.setFont(Font.font("DejaVu Sans", FontWeight.BOLD, size * 0.72));
     g.setTextAlign(TextAlignment.CENTER);
     g.setTextBaseline(VPos.CENTER);
-    g.fillText(look.badge(), x + size / 2, y + size / 2 + 0.5);
+    g.fillText(letter, x + size / 2, y + size / 2 + 0.5);
   }
 
   private static void opening(GraphicsContext g, PlaneGeometry geo, PanelRef p) {
@@ -785,6 +809,11 @@ public final class PlanePainter {
     double cx = (geo.left(p) + geo.right(p)) / 2;
     double cy = (geo.top(p) + geo.bottom(p)) / 2;
     double r = Math.max(4, Math.min(8, Math.min(geo.panelWidth(p), geo.panelHeight(p)) * 0.14));
+    diamond(g, cx, cy, r);
+  }
+
+  /** {@link Symbol#CRITICAL}: a black diamond outlined in white. */
+  static void diamond(GraphicsContext g, double cx, double cy, double r) {
     double[] xs = {cx, cx + r, cx, cx - r};
     double[] ys = {cy - r, cy, cy + r, cy};
     g.setLineDashes();
@@ -837,12 +866,35 @@ public final class PlanePainter {
     double s = Math.min(10, geo.panelWidth(p) * 0.25);
     double x = geo.right(p) - 4 - s;
     double y = geo.top(p) + 4;
-    g.setFill(CHANGED);
-    g.fillPolygon(new double[] {x, x + s, x + s / 2}, new double[] {y + s, y + s, y}, 3);
+    star(g, x + s / 2, y + s / 2, s / 2 + 1);
   }
 
-  private static void labels(GraphicsContext g, PlaneGeometry geo, SwayRegion sway) {
+  /** {@link Symbol#CHANGED}: a six-spoked star (three crossing strokes). */
+  static void star(GraphicsContext g, double cx, double cy, double r) {
+    g.setLineDashes();
+    g.setStroke(CHANGED);
+    g.setLineWidth(2.2);
+    for (int k = 0; k < 3; k++) {
+      double a = Math.PI / 2 + k * Math.PI / 3;
+      g.strokeLine(cx - r * Math.cos(a), cy - r * Math.sin(a), cx + r * Math.cos(a), cy + r * Math.sin(a));
+    }
+  }
+
+  private static void labels(GraphicsContext g, PlaneGeometry geo, SwayRegion sway, double w, double h) {
     PlaneGrid grid = geo.grid();
+    // a plane scrolled past the box's edge keeps its numbers in sight, on a strip of paper
+    double labelX = geo.lineX(0);
+    if (labelX < LEFT_MARGIN) {
+      labelX = LEFT_MARGIN;
+      g.setFill(PAPER);
+      g.fillRect(0, 0, LEFT_MARGIN - 2, h);
+    }
+    double labelY = geo.levelY(0);
+    if (labelY > h - MARGIN) {
+      labelY = h - MARGIN;
+      g.setFill(PAPER);
+      g.fillRect(0, labelY + 4, w, MARGIN);
+    }
     g.setFill(Color.web("#333333"));
     g.setFont(Font.font("DejaVu Sans", 12));
     g.setTextBaseline(VPos.CENTER);
@@ -862,7 +914,10 @@ public final class PlanePainter {
       double y = (geo.levelY(i) + geo.levelY(i - 1)) / 2;
       g.setFont(Font.font("DejaVu Sans", shearing ? FontWeight.BOLD : FontWeight.NORMAL, 12));
       g.setFill(shearing ? SWAY.darker() : Color.web("#333333"));
-      g.fillText((shearing ? "\u2194 " : "") + "L" + i, geo.lineX(0) - 6, y);
+      if (y < 0 || y > labelY) {
+        continue;
+      }
+      g.fillText((shearing ? "\u2194 " : "") + "L" + i, labelX - 6, y);
     }
     g.setFill(Color.web("#333333"));
     g.setFont(Font.font("DejaVu Sans", 12));
@@ -874,7 +929,10 @@ public final class PlanePainter {
         continue;
       }
       double x = (geo.lineX(j) + geo.lineX(j - 1)) / 2;
-      g.fillText(Integer.toString(j), x, geo.levelY(0) + 9);
+      if (x < labelX || x > w) {
+        continue;
+      }
+      g.fillText(Integer.toString(j), x, labelY + 9);
     }
   }
 

@@ -59,7 +59,8 @@ public final class HistoryView extends BorderPane {
     fill.run();
     VBox side = new VBox(10,
         Widgets.box("Inspections, oldest first (Up / Down)", list),
-        Widgets.box("What changed since the previous inspection (dashed frame, \u25B2 corner)", changes));
+        Widgets.box("What changed since the previous inspection (dashed frame, "
+            + org.bracewalk.core.symbol.Symbol.CHANGED.glyph() + " in its corner)", changes));
     side.getStyleClass().add("side");
     side.setPrefWidth(400);
     setRight(side);

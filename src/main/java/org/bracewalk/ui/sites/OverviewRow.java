@@ -1,6 +1,7 @@
 package org.bracewalk.ui.sites;
 
 import org.bracewalk.app.verdict.VerdictKind;
+import org.bracewalk.core.symbol.Symbol;
 
 /**
  * One line of the overview: a site, a structure or a plane.
@@ -44,12 +45,12 @@ public record OverviewRow(
   /** How the next routine inspection stands; each has a word and a symbol, not only a colour. */
   public enum Due {
     NOT_APPLICABLE(""),
-    NEVER_INSPECTED("\u25CB never inspected"),
-    IN_TIME("\u2713 in time"),
-    DUE_TODAY("\u25B7 due today"),
-    OVERDUE("\u25B2 OVERDUE"),
+    NEVER_INSPECTED(Symbol.NOT_INSPECTED.glyph() + " never inspected"),
+    IN_TIME(Symbol.IN_TIME.glyph() + " in time"),
+    DUE_TODAY(Symbol.DUE_TODAY.glyph() + " due today"),
+    OVERDUE(Symbol.OVERDUE.glyph() + " OVERDUE"),
     /** The date is not past, but a plane has lost rigidity: never a tick beside that. */
-    LOST_RIGIDITY("\u25B2 lost rigidity: act and re-inspect now");
+    LOST_RIGIDITY(Symbol.LOST_RIGIDITY.glyph() + " lost rigidity: act and re-inspect now");
 
     private final String words;
 
