@@ -79,7 +79,12 @@ final class FrameFreedoms {
   }
 
   static FrameFreedoms of(FrameFramework fw, long seed) {
-    Builder b = new Builder(fw, new SplittableRandom(seed));
+    return of(FrameSystem.of(fw), seed);
+  }
+
+  /** The freedoms of a state whose shared equations are built already. */
+  static FrameFreedoms of(FrameSystem system, long seed) {
+    Builder b = new Builder(system, new SplittableRandom(seed));
     b.run();
     return new FrameFreedoms(b);
   }
@@ -347,6 +352,7 @@ final class FrameFreedoms {
 
   private static final class Builder {
     final FrameFramework fw;
+    final FrameSystem system;
     final SplittableRandom rnd;
     int[][] adj;
     int[] compOf;
@@ -380,8 +386,9 @@ final class FrameFreedoms {
     List<Integer> joins = new ArrayList<>();
     List<Freedom> own = new ArrayList<>();
 
-    Builder(FrameFramework fw, SplittableRandom rnd) {
-      this.fw = fw;
+    Builder(FrameSystem system, SplittableRandom rnd) {
+      this.fw = system.fw;
+      this.system = system;
       this.rnd = rnd;
     }
 
@@ -390,8 +397,8 @@ final class FrameFreedoms {
     }
 
     void run() {
-      adj = adjacency(fw);
-      compOf = components(fw, adj);
+      adj = system.adj;
+      compOf = system.comp;
       reduce();
       for (int c : compOf) {
         components = Math.max(components, c + 1);
@@ -413,7 +420,7 @@ final class FrameFreedoms {
       if (!fw.pinned && anchorJoint < 0) {
         // a free plane of loose members only (single members and stars, all stripped): a forest,
         // so its rank is its member count; freedoms 2V - 3 - E, shared out as loose ends first
-        parts = new FaceClassSystem(fw, toArray(fixed), toArray(joins));
+        parts = system.base.quotient(toArray(fixed), toArray(joins));
         partOfClass = new int[0];
         int joints = 0;
         int members = 0;
@@ -444,20 +451,30 @@ final class FrameFreedoms {
         freedoms = all;
         return;
       }
-      parts = new FaceClassSystem(fw, toArray(fixed), toArray(joins));
+      parts = system.base.quotient(toArray(fixed), toArray(joins));
       splitParts(components);
       int total = 0;
-      TreeSet<Joint> movingSet = new TreeSet<>();
+      boolean[] movingMark = new boolean[fw.gridJoints];
       List<Freedom> sway = new ArrayList<>();
       for (Part part : partList) {
         Freedom f = part.freedom();
         total += f.count();
         sway.add(f);
-        movingSet.addAll(f.joints());
+        for (Joint j : f.joints()) {
+          movingMark[fw.joint(j.level(), j.line())] = true;
+        }
       }
       for (Freedom f : own) {
         total += f.count();
-        movingSet.addAll(f.joints());
+        for (Joint j : f.joints()) {
+          movingMark[fw.joint(j.level(), j.line())] = true;
+        }
+      }
+      List<Joint> movingSet = new ArrayList<>();
+      for (int j = 0; j < fw.gridJoints; j++) {
+        if (movingMark[j]) {
+          movingSet.add(fw.jointRef(j));
+        }
       }
       dof = total;
       List<Freedom> all = new ArrayList<>(sway);
@@ -482,7 +499,7 @@ final class FrameFreedoms {
       ownBars = barsSorted;
       all.addAll(ownSorted);
       freedoms = all;
-      moving = fw.pinned ? new ArrayList<>(movingSet) : List.of();
+      moving = fw.pinned ? movingSet : List.of();
     }
 
     private static int compareJoints(List<Joint> a, List<Joint> b) {
@@ -677,28 +694,37 @@ final class FrameFreedoms {
         if (c < 0) {
           continue;
         }
-        for (int end : new int[] {fw.ja[e], fw.jb[e]}) {
-          if (firstAt[end] < 0) {
-            firstAt[end] = c;
-          } else {
-            union(parent, firstAt[end], c);
-          }
+        int a = fw.ja[e];
+        if (firstAt[a] < 0) {
+          firstAt[a] = c;
+        } else {
+          union(parent, firstAt[a], c);
+        }
+        int b = fw.jb[e];
+        if (firstAt[b] < 0) {
+          firstAt[b] = c;
+        } else {
+          union(parent, firstAt[b], c);
         }
       }
-      // non-anchor components with no free class still form a part (translation)
-      Map<Integer, List<Integer>> classesOf = new HashMap<>();
-      Map<Integer, List<Integer>> compsOf = new HashMap<>();
-      List<Integer> roots = new ArrayList<>();
+      // parts in order of their first class, then non-anchor components with no free class
+      // (translation) in order of their first joint
+      int[] partOfRoot = new int[classes + components];
+      Arrays.fill(partOfRoot, -1);
+      int partCount = 0;
+      partOfClass = new int[classes];
+      int[] classTotal = new int[classes + components + 1];
       for (int c = 0; c < classes; c++) {
         int r = find(parent, c);
-        if (!classesOf.containsKey(r)) {
-          classesOf.put(r, new ArrayList<>());
-          compsOf.put(r, new ArrayList<>());
-          roots.add(r);
+        if (partOfRoot[r] < 0) {
+          partOfRoot[r] = partCount++;
         }
-        classesOf.get(r).add(c);
+        partOfClass[c] = partOfRoot[r];
       }
       boolean[] compSeen = new boolean[components];
+      int[] compOrder = new int[components];
+      int[] partOfComp = new int[components];
+      int compCount = 0;
       for (int j = 0; j < fw.jointCount; j++) {
         int comp = compOf[j];
         if (comp < 0 || comp == anchorComp || compSeen[comp]) {
@@ -706,62 +732,71 @@ final class FrameFreedoms {
         }
         compSeen[comp] = true;
         int r = find(parent, classes + comp);
-        if (!classesOf.containsKey(r)) {
-          classesOf.put(r, new ArrayList<>());
-          compsOf.put(r, new ArrayList<>());
-          roots.add(r);
+        if (partOfRoot[r] < 0) {
+          partOfRoot[r] = partCount++;
         }
-        compsOf.get(r).add(comp);
+        partOfComp[comp] = partOfRoot[r];
+        compOrder[compCount++] = comp;
       }
+      // classes, components and rows of each part, each list in increasing order
+      int[] classStart = new int[partCount + 1];
+      int[] localIndex = new int[classes];
+      for (int c = 0; c < classes; c++) {
+        localIndex[c] = classStart[partOfClass[c] + 1]++;
+      }
+      for (int i = 0; i < partCount; i++) {
+        classStart[i + 1] += classStart[i];
+      }
+      int[] classList = new int[classes];
+      for (int c = 0; c < classes; c++) {
+        classList[classStart[partOfClass[c]] + localIndex[c]] = c;
+      }
+      List<List<Integer>> compsOf = new ArrayList<>();
       List<List<Integer>> rowsOf = new ArrayList<>();
-      Map<Integer, Integer> partIndex = new HashMap<>();
-      for (int i = 0; i < roots.size(); i++) {
-        partIndex.put(roots.get(i), i);
+      for (int i = 0; i < partCount; i++) {
+        compsOf.add(new ArrayList<>());
         rowsOf.add(new ArrayList<>());
+      }
+      for (int k = 0; k < compCount; k++) {
+        compsOf.get(partOfComp[compOrder[k]]).add(compOrder[k]);
       }
       for (int r = 0; r < 2 * s.groupCount; r++) {
         if (s.rowCols[r].length > 0) {
-          rowsOf.get(partIndex.get(find(parent, s.rowCols[r][0]))).add(r);
+          rowsOf.get(partOfClass[s.rowCols[r][0]]).add(r);
         }
       }
-      partOfClass = new int[classes];
-      for (int i = 0; i < roots.size(); i++) {
-        for (int c : classesOf.get(roots.get(i))) {
-          partOfClass[c] = i;
-        }
-      }
-      int[][] adjacency = adj;
-      for (int i = 0; i < roots.size(); i++) {
-        List<Integer> cls = classesOf.get(roots.get(i));
-        List<Integer> comps = compsOf.get(roots.get(i));
-        Map<Integer, Integer> local = new HashMap<>();
-        for (int c : cls) {
-          local.put(c, local.size());
-        }
-        ModularEchelon ech = new ModularEchelon(cls.size());
+      FrameSystem.SpanningForest forest = null;
+      long[] vx = null;
+      long[] vy = null;
+      for (int i = 0; i < partCount; i++) {
+        int size = classStart[i + 1] - classStart[i];
+        List<Integer> comps = compsOf.get(i);
+        ModularEchelon ech = new ModularEchelon(size);
         List<long[]> dense = new ArrayList<>();
         for (int r : rowsOf.get(i)) {
           int[] cols = s.rowCols[r];
           int[] lc = new int[cols.length];
-          long[] row = new long[cls.size()];
+          long[] row = size <= EXACT_LIMIT ? new long[size] : null;
           for (int k = 0; k < cols.length; k++) {
-            lc[k] = local.get(cols[k]);
-            row[lc[k]] = s.rowVals[r][k];
+            lc[k] = localIndex[cols[k]];
+            if (row != null) {
+              row[lc[k]] = s.rowVals[r][k];
+            }
           }
           ech.addRow(lc, s.rowVals[r]);
-          if (cls.size() <= EXACT_LIMIT) {
+          if (row != null) {
             dense.add(row);
           }
         }
         int rank = ech.rank();
-        if (rank < cls.size() && !rowsOf.get(i).isEmpty()) {
-          if (cls.size() <= EXACT_LIMIT) {
-            rank = ExactRank.rank(dense.toArray(new long[0][]), cls.size());
+        if (rank < size && !rowsOf.get(i).isEmpty()) {
+          if (size <= EXACT_LIMIT) {
+            rank = ExactRank.rank(dense.toArray(new long[0][]), size);
           } else {
             exact = false;
           }
         }
-        int count = cls.size() - rank + 2 * comps.size();
+        int count = size - rank + 2 * comps.size();
         for (int comp : comps) {
           count -= lessOne.getOrDefault(comp, 0);
         }
@@ -770,42 +805,50 @@ final class FrameFreedoms {
         }
         // joints moving with this part: one random motion of it
         long[] x = ech.randomNullVector(rnd);
-        long[] w = new long[fw.memberCount];
-        for (int e = 0; e < fw.memberCount; e++) {
-          int c = s.classOf[e];
-          if (c >= 0 && partOfClass[c] == i) {
-            w[e] = x[local.get(c)];
-          }
-        }
         long[] tx = new long[components];
         long[] ty = new long[components];
         for (int comp : comps) {
           tx[comp] = ModularEchelon.random(rnd);
           ty[comp] = ModularEchelon.random(rnd);
         }
-        long[][] v = propagate(fw, adjacency, w, compOf, anchorComp, anchorJoint, tx, ty);
+        if (forest == null) {
+          forest = system.forest(anchorJoint);
+          vx = new long[fw.jointCount];
+          vy = new long[fw.jointCount];
+        }
+        final int part = i;
+        final int[] cls = s.classOf;
+        final int[] partOf = partOfClass;
+        forest.sweep(fw, e -> {
+          int c = cls[e];
+          return c >= 0 && partOf[c] == part ? x[localIndex[c]] : 0;
+        }, compOf, anchorComp, tx, ty, vx, vy);
         List<Joint> js = new ArrayList<>();
         for (int j = 0; j < fw.gridJoints; j++) {
-          if (compOf[j] >= 0 && (v[0][j] != 0 || v[1][j] != 0)) {
+          if (compOf[j] >= 0 && (vx[j] != 0 || vy[j] != 0)) {
             js.add(fw.jointRef(j));
           }
         }
+        List<Integer> clsList = new ArrayList<>(size);
+        for (int k = classStart[i]; k < classStart[i + 1]; k++) {
+          clsList.add(classList[k]);
+        }
         Freedom f = new Freedom(FreedomKind.SWAY, count, js, List.of(), List.of());
-        partList.add(new Part(f, cls, rowsOf.get(i), comps));
+        partList.add(new Part(f, clsList, rowsOf.get(i), comps));
       }
       partList.sort((a, b) -> compareJoints(a.freedom().joints(), b.freedom().joints()));
       // each moving joint listed under the last part that moves it: the lists partition them
-      Map<Joint, Integer> last = new HashMap<>();
+      int[] last = new int[fw.gridJoints];
       for (int k = 0; k < partList.size(); k++) {
         for (Joint j : partList.get(k).freedom().joints()) {
-          last.put(j, k);
+          last[fw.joint(j.level(), j.line())] = k;
         }
       }
       for (int k = 0; k < partList.size(); k++) {
         Part p = partList.get(k);
         List<Joint> mine = new ArrayList<>();
         for (Joint j : p.freedom().joints()) {
-          if (last.get(j) == k) {
+          if (last[fw.joint(j.level(), j.line())] == k) {
             mine.add(j);
           }
         }
