@@ -42,6 +42,10 @@ import org.bracewalk.core.model.PanelRef;
 final class FrameFreedoms {
   static final int EXACT_LIMIT = 400;
 
+  /** A swaying part as found: its count, moving grid joints (increasing), classes, rows, pieces. */
+  private record Found(
+      int count, int[] joints, List<Integer> classes, List<Integer> rows, List<Integer> comps) {}
+
   /** A swaying part: its classes, rows and the components that nothing holds. */
   record Part(Freedom freedom, List<Integer> classes, List<Integer> rows, List<Integer> comps) {}
 
@@ -766,6 +770,8 @@ final class FrameFreedoms {
         }
       }
       FrameSystem.SpanningForest forest = null;
+      // per part found: count, moving joints (indices), classes, rows, components
+      List<Found> found = new ArrayList<>();
       long[] vx = null;
       long[] vy = null;
       for (int i = 0; i < partCount; i++) {
@@ -823,41 +829,58 @@ final class FrameFreedoms {
           int c = cls[e];
           return c >= 0 && partOf[c] == part ? x[localIndex[c]] : 0;
         }, compOf, anchorComp, tx, ty, vx, vy);
-        List<Joint> js = new ArrayList<>();
+        int movingCount = 0;
         for (int j = 0; j < fw.gridJoints; j++) {
           if (compOf[j] >= 0 && (vx[j] != 0 || vy[j] != 0)) {
-            js.add(fw.jointRef(j));
+            movingCount++;
+          }
+        }
+        int[] js = new int[movingCount];
+        movingCount = 0;
+        for (int j = 0; j < fw.gridJoints; j++) {
+          if (compOf[j] >= 0 && (vx[j] != 0 || vy[j] != 0)) {
+            js[movingCount++] = j;
           }
         }
         List<Integer> clsList = new ArrayList<>(size);
         for (int k = classStart[i]; k < classStart[i + 1]; k++) {
           clsList.add(classList[k]);
         }
-        Freedom f = new Freedom(FreedomKind.SWAY, count, js, List.of(), List.of());
-        partList.add(new Part(f, clsList, rowsOf.get(i), comps));
+        found.add(new Found(count, js, clsList, rowsOf.get(i), comps));
       }
-      partList.sort((a, b) -> compareJoints(a.freedom().joints(), b.freedom().joints()));
+      // parts in order of their first moving joint (a part moving none last), stable
+      found.sort((a, b) -> {
+        int[] ja = a.joints();
+        int[] jb = b.joints();
+        if (ja.length == 0 || jb.length == 0) {
+          return Boolean.compare(ja.length == 0, jb.length == 0);
+        }
+        return Integer.compare(ja[0], jb[0]);
+      });
       // each moving joint listed under the last part that moves it: the lists partition them
       int[] last = new int[fw.gridJoints];
-      for (int k = 0; k < partList.size(); k++) {
-        for (Joint j : partList.get(k).freedom().joints()) {
-          last[fw.joint(j.level(), j.line())] = k;
+      for (int k = 0; k < found.size(); k++) {
+        for (int j : found.get(k).joints()) {
+          last[j] = k;
         }
       }
-      for (int k = 0; k < partList.size(); k++) {
-        Part p = partList.get(k);
+      for (int k = 0; k < found.size(); k++) {
+        Found p = found.get(k);
+        int[] js = p.joints();
         List<Joint> mine = new ArrayList<>();
-        for (Joint j : p.freedom().joints()) {
-          if (last[fw.joint(j.level(), j.line())] == k) {
-            mine.add(j);
+        for (int j : js) {
+          if (last[j] == k) {
+            mine.add(fw.jointRef(j));
           }
         }
         if (mine.isEmpty()) {
           // every joint it moves is listed under a later part: it keeps its own list
-          mine = p.freedom().joints();
+          for (int j : js) {
+            mine.add(fw.jointRef(j));
+          }
         }
-        Freedom f = new Freedom(FreedomKind.SWAY, p.freedom().count(), mine, List.of(), List.of());
-        partList.set(k, new Part(f, p.classes(), p.rows(), p.comps()));
+        Freedom f = new Freedom(FreedomKind.SWAY, p.count(), mine, List.of(), List.of());
+        partList.add(new Part(f, p.classes(), p.rows(), p.comps()));
       }
     }
 
