@@ -36,8 +36,8 @@ import org.bracewalk.core.model.PanelRef;
  *
  * <p>The joints that move with a part come from one random motion of that part (mod p, joint
  * velocities propagated along the members): a joint that moves in some motion of the part moves in
- * a random one with probability at least 1 - 2/p. Cost: one propagation over the framework per
- * part.
+ * a random one with probability at least 1 - 2/p. Cost: one sweep per part down the state's
+ * spanning forest ({@link FrameSystem.SpanningForest}, built once per state).
  */
 final class FrameFreedoms {
   static final int EXACT_LIMIT = 400;
