@@ -458,26 +458,27 @@ final class FrameFreedoms {
       parts = system.base.quotient(toArray(fixed), toArray(joins));
       splitParts(components);
       int total = 0;
-      boolean[] movingMark = new boolean[fw.gridJoints];
+      // the moving joints in joint order, the freedoms' own joint objects shared
+      Joint[] movingAt = new Joint[fw.gridJoints];
       List<Freedom> sway = new ArrayList<>();
       for (Part part : partList) {
         Freedom f = part.freedom();
         total += f.count();
         sway.add(f);
         for (Joint j : f.joints()) {
-          movingMark[fw.joint(j.level(), j.line())] = true;
+          movingAt[fw.joint(j.level(), j.line())] = j;
         }
       }
       for (Freedom f : own) {
         total += f.count();
         for (Joint j : f.joints()) {
-          movingMark[fw.joint(j.level(), j.line())] = true;
+          movingAt[fw.joint(j.level(), j.line())] = j;
         }
       }
       List<Joint> movingSet = new ArrayList<>();
-      for (int j = 0; j < fw.gridJoints; j++) {
-        if (movingMark[j]) {
-          movingSet.add(fw.jointRef(j));
+      for (Joint j : movingAt) {
+        if (j != null) {
+          movingSet.add(j);
         }
       }
       dof = total;
@@ -717,7 +718,6 @@ final class FrameFreedoms {
       Arrays.fill(partOfRoot, -1);
       int partCount = 0;
       partOfClass = new int[classes];
-      int[] classTotal = new int[classes + components + 1];
       for (int c = 0; c < classes; c++) {
         int r = find(parent, c);
         if (partOfRoot[r] < 0) {
