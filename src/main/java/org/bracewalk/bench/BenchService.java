@@ -271,6 +271,12 @@ public final class BenchService {
             OptionalDouble.empty(),
             OptionalDouble.empty());
     results.add(withHeap(timed, heap));
+    // against the same call on a plane of that size with its frame complete, where the run timed one
+    for (BenchResult r : results) {
+      if (r.name().equals("engine-full-" + largeShape)) {
+        ratios.put("frameMissingOverComplete" + largeShape, timed.medianMs() / r.medianMs());
+      }
+    }
     return engineDof == matrixDof;
   }
 

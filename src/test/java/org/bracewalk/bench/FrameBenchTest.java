@@ -45,6 +45,8 @@ class FrameBenchTest {
     assertThat(report.results().get(11).samples()).as("calls of the large frame plane").isEqualTo(2);
     assertThat(report.ratios()).containsKeys(
         "frameMissingOverComplete3x5", "frameMissingOverComplete5x5", "rigidityMatrixOverEngineFrame4x4");
+    // the large frame plane (6 x 6) has no complete-frame run of its size in this plan: no ratio
+    assertThat(report.ratios()).doesNotContainKey("frameMissingOverComplete6x6");
     BenchResult large = report.results().get(report.results().size() - 1);
     assertThat(large.retainedHeapMb()).isPresent();
     assertThat(large.peakHeapMb()).isPresent();

@@ -21,7 +21,13 @@ final class CriticalByStress {
   private CriticalByStress() {}
 
   static Critical of(FrameFramework fw, long seed) {
-    FaceClassSystem sys = new FaceClassSystem(fw, new int[0], new int[0]);
+    return of(FrameSystem.of(fw), seed);
+  }
+
+  /** The same, on a state's shared equations. */
+  static Critical of(FrameSystem system, long seed) {
+    FrameFramework fw = system.fw;
+    FaceClassSystem sys = system.base;
     boolean[] stressed = RandomSelfStress.stressed(sys, new SplittableRandom(seed));
     int[] deg = new int[fw.jointCount];
     for (int e = 0; e < fw.memberCount; e++) {

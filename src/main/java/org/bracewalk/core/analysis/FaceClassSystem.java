@@ -139,6 +139,126 @@ final class FaceClassSystem {
     buildRows();
   }
 
+  /**
+   * This system with more members fixed and more pairs turning together: the same as {@code new
+   * FaceClassSystem(fw, fixed, joins)} built from scratch (same classes, numbered the same way, the
+   * same rows), derived from this one's classes instead of a second pass over the faces. The
+   * members fixed and joined must be there. Carries no union-find edges (not for {@link
+   * RandomSelfStress}).
+   */
+  FaceClassSystem quotient(int[] fixed, int[] joins) {
+    return new FaceClassSystem(this, fixed, joins);
+  }
+
+  private FaceClassSystem(FaceClassSystem base, int[] fixed, int[] joins) {
+    this.fw = base.fw;
+    this.mParent = null;
+    this.fixedNode = base.fixedNode;
+    this.fParent = null;
+    this.fSize = null;
+    this.outerNode = base.outerNode;
+    this.groupOf = base.groupOf;
+    this.groupCount = base.groupCount;
+    int k = base.classCount;
+    int[] parent = new int[k + 1];
+    for (int i = 0; i <= k; i++) {
+      parent[i] = i;
+    }
+    // node k is the fixed class; a member there with no class is in the fixed class already
+    for (int e : fixed) {
+      int c = base.classOf[e];
+      unionClasses(parent, c < 0 ? k : c, k);
+    }
+    for (int i = 0; i + 1 < joins.length; i += 2) {
+      int a = base.classOf[joins[i]];
+      int b = base.classOf[joins[i + 1]];
+      unionClasses(parent, a < 0 ? k : a, b < 0 ? k : b);
+    }
+    int fixedRoot = findClass(parent, k);
+    int[] newIndex = new int[k];
+    int[] rootIndex = new int[k + 1];
+    Arrays.fill(rootIndex, -1);
+    // numbered by first member, as the constructor numbers them
+    int m = fw.memberCount;
+    classOf = new int[m];
+    Arrays.fill(newIndex, -2);
+    for (int e = 0; e < m; e++) {
+      int c = base.classOf[e];
+      if (c < 0) {
+        classOf[e] = -1;
+        continue;
+      }
+      if (newIndex[c] == -2) {
+        int r = findClass(parent, c);
+        if (r == fixedRoot) {
+          newIndex[c] = -1;
+        } else {
+          if (rootIndex[r] < 0) {
+            rootIndex[r] = classCount++;
+          }
+          newIndex[c] = rootIndex[r];
+        }
+      }
+      classOf[e] = newIndex[c];
+    }
+    // rows: the base rows with their columns mapped, merged and sorted; a column is kept (even
+    // with a zero sum) iff some member of its class meets the group, as the constructor keeps it
+    rowCols = new int[2 * groupCount][];
+    rowVals = new long[2 * groupCount][];
+    for (int g = 0; g < groupCount; g++) {
+      int[] bc = base.rowCols[2 * g];
+      long[] bx = base.rowVals[2 * g];
+      long[] by = base.rowVals[2 * g + 1];
+      int len = 0;
+      long[] keyed = new long[bc.length];
+      for (int i = 0; i < bc.length; i++) {
+        int c = newIndex[bc[i]];
+        if (c >= 0) {
+          keyed[len++] = ((long) c << 32) | i;
+        }
+      }
+      Arrays.sort(keyed, 0, len);
+      int[] cols = new int[len];
+      long[] xv = new long[len];
+      long[] yv = new long[len];
+      int n = 0;
+      for (int t = 0; t < len; t++) {
+        int c = (int) (keyed[t] >>> 32);
+        int i = (int) keyed[t];
+        if (n > 0 && cols[n - 1] == c) {
+          xv[n - 1] += bx[i];
+          yv[n - 1] += by[i];
+        } else {
+          cols[n] = c;
+          xv[n] = bx[i];
+          yv[n] = by[i];
+          n++;
+        }
+      }
+      cols = Arrays.copyOf(cols, n);
+      rowCols[2 * g] = cols;
+      rowVals[2 * g] = Arrays.copyOf(xv, n);
+      rowCols[2 * g + 1] = cols;
+      rowVals[2 * g + 1] = Arrays.copyOf(yv, n);
+    }
+  }
+
+  private static int findClass(int[] p, int x) {
+    while (p[x] != x) {
+      p[x] = p[p[x]];
+      x = p[x];
+    }
+    return x;
+  }
+
+  private static void unionClasses(int[] p, int a, int b) {
+    int ra = findClass(p, a);
+    int rb = findClass(p, b);
+    if (ra != rb) {
+      p[ra] = rb;
+    }
+  }
+
   private int faceNode(int f) {
     return f == FrameFramework.OUTER ? outerNode : f;
   }

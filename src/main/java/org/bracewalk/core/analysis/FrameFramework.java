@@ -171,11 +171,15 @@ final class FrameFramework {
   }
 
   private int newMember(int a, int b, byte t) {
+    return newMember(a, b, t, x(b) - x(a), y(b) - y(a));
+  }
+
+  private int newMember(int a, int b, byte t, long ddx, long ddy) {
     int e = memberCount++;
     ja[e] = a;
     jb[e] = b;
-    dx[e] = x(b) - x(a);
-    dy[e] = y(b) - y(a);
+    dx[e] = ddx;
+    dy[e] = ddy;
     faceL[e] = OUTER;
     faceR[e] = OUTER;
     type[e] = t;
@@ -227,7 +231,7 @@ final class FrameFramework {
     faceMembers = new int[4 * faces];
     for (int level = 0; level <= lifts; level++) {
       for (int bay = 1; bay <= bays; bay++) {
-        int e = newMember(joint(level, bay - 1), joint(level, bay), LEDGER);
+        int e = newMember(joint(level, bay - 1), joint(level, bay), LEDGER, xs[bay] - xs[bay - 1], 0);
         present[e] = frameThere[e];
         if (pinned && level == 0) {
           present[e] = true;
@@ -237,7 +241,7 @@ final class FrameFramework {
     }
     for (int lift = 1; lift <= lifts; lift++) {
       for (int line = 0; line <= bays; line++) {
-        int e = newMember(joint(lift - 1, line), joint(lift, line), STANDARD);
+        int e = newMember(joint(lift - 1, line), joint(lift, line), STANDARD, 0, ys[lift] - ys[lift - 1]);
         present[e] = frameThere[e];
       }
     }

@@ -36,11 +36,15 @@ import org.bracewalk.core.model.PanelRef;
  *
  * <p>The joints that move with a part come from one random motion of that part (mod p, joint
  * velocities propagated along the members): a joint that moves in some motion of the part moves in
- * a random one with probability at least 1 - 2/p. Cost: one propagation over the framework per
- * part.
+ * a random one with probability at least 1 - 2/p. Cost: one sweep per part down the state's
+ * spanning forest ({@link FrameSystem.SpanningForest}, built once per state).
  */
 final class FrameFreedoms {
   static final int EXACT_LIMIT = 400;
+
+  /** A swaying part as found: its count, moving grid joints (increasing), classes, rows, pieces. */
+  private record Found(
+      int count, int[] joints, List<Integer> classes, List<Integer> rows, List<Integer> comps) {}
 
   /** A swaying part: its classes, rows and the components that nothing holds. */
   record Part(Freedom freedom, List<Integer> classes, List<Integer> rows, List<Integer> comps) {}
@@ -79,7 +83,12 @@ final class FrameFreedoms {
   }
 
   static FrameFreedoms of(FrameFramework fw, long seed) {
-    Builder b = new Builder(fw, new SplittableRandom(seed));
+    return of(FrameSystem.of(fw), seed);
+  }
+
+  /** The freedoms of a state whose shared equations are built already. */
+  static FrameFreedoms of(FrameSystem system, long seed) {
+    Builder b = new Builder(system, new SplittableRandom(seed));
     b.run();
     return new FrameFreedoms(b);
   }
@@ -347,6 +356,7 @@ final class FrameFreedoms {
 
   private static final class Builder {
     final FrameFramework fw;
+    final FrameSystem system;
     final SplittableRandom rnd;
     int[][] adj;
     int[] compOf;
@@ -380,8 +390,9 @@ final class FrameFreedoms {
     List<Integer> joins = new ArrayList<>();
     List<Freedom> own = new ArrayList<>();
 
-    Builder(FrameFramework fw, SplittableRandom rnd) {
-      this.fw = fw;
+    Builder(FrameSystem system, SplittableRandom rnd) {
+      this.fw = system.fw;
+      this.system = system;
       this.rnd = rnd;
     }
 
@@ -390,8 +401,8 @@ final class FrameFreedoms {
     }
 
     void run() {
-      adj = adjacency(fw);
-      compOf = components(fw, adj);
+      adj = system.adj;
+      compOf = system.comp;
       reduce();
       for (int c : compOf) {
         components = Math.max(components, c + 1);
@@ -413,7 +424,7 @@ final class FrameFreedoms {
       if (!fw.pinned && anchorJoint < 0) {
         // a free plane of loose members only (single members and stars, all stripped): a forest,
         // so its rank is its member count; freedoms 2V - 3 - E, shared out as loose ends first
-        parts = new FaceClassSystem(fw, toArray(fixed), toArray(joins));
+        parts = system.base.quotient(toArray(fixed), toArray(joins));
         partOfClass = new int[0];
         int joints = 0;
         int members = 0;
@@ -444,20 +455,31 @@ final class FrameFreedoms {
         freedoms = all;
         return;
       }
-      parts = new FaceClassSystem(fw, toArray(fixed), toArray(joins));
+      parts = system.base.quotient(toArray(fixed), toArray(joins));
       splitParts(components);
       int total = 0;
-      TreeSet<Joint> movingSet = new TreeSet<>();
+      // the moving joints in joint order, the freedoms' own joint objects shared
+      Joint[] movingAt = new Joint[fw.gridJoints];
       List<Freedom> sway = new ArrayList<>();
       for (Part part : partList) {
         Freedom f = part.freedom();
         total += f.count();
         sway.add(f);
-        movingSet.addAll(f.joints());
+        for (Joint j : f.joints()) {
+          movingAt[fw.joint(j.level(), j.line())] = j;
+        }
       }
       for (Freedom f : own) {
         total += f.count();
-        movingSet.addAll(f.joints());
+        for (Joint j : f.joints()) {
+          movingAt[fw.joint(j.level(), j.line())] = j;
+        }
+      }
+      List<Joint> movingSet = new ArrayList<>();
+      for (Joint j : movingAt) {
+        if (j != null) {
+          movingSet.add(j);
+        }
       }
       dof = total;
       List<Freedom> all = new ArrayList<>(sway);
@@ -482,7 +504,7 @@ final class FrameFreedoms {
       ownBars = barsSorted;
       all.addAll(ownSorted);
       freedoms = all;
-      moving = fw.pinned ? new ArrayList<>(movingSet) : List.of();
+      moving = fw.pinned ? movingSet : List.of();
     }
 
     private static int compareJoints(List<Joint> a, List<Joint> b) {
@@ -677,28 +699,36 @@ final class FrameFreedoms {
         if (c < 0) {
           continue;
         }
-        for (int end : new int[] {fw.ja[e], fw.jb[e]}) {
-          if (firstAt[end] < 0) {
-            firstAt[end] = c;
-          } else {
-            union(parent, firstAt[end], c);
-          }
+        int a = fw.ja[e];
+        if (firstAt[a] < 0) {
+          firstAt[a] = c;
+        } else {
+          union(parent, firstAt[a], c);
+        }
+        int b = fw.jb[e];
+        if (firstAt[b] < 0) {
+          firstAt[b] = c;
+        } else {
+          union(parent, firstAt[b], c);
         }
       }
-      // non-anchor components with no free class still form a part (translation)
-      Map<Integer, List<Integer>> classesOf = new HashMap<>();
-      Map<Integer, List<Integer>> compsOf = new HashMap<>();
-      List<Integer> roots = new ArrayList<>();
+      // parts in order of their first class, then non-anchor components with no free class
+      // (translation) in order of their first joint
+      int[] partOfRoot = new int[classes + components];
+      Arrays.fill(partOfRoot, -1);
+      int partCount = 0;
+      partOfClass = new int[classes];
       for (int c = 0; c < classes; c++) {
         int r = find(parent, c);
-        if (!classesOf.containsKey(r)) {
-          classesOf.put(r, new ArrayList<>());
-          compsOf.put(r, new ArrayList<>());
-          roots.add(r);
+        if (partOfRoot[r] < 0) {
+          partOfRoot[r] = partCount++;
         }
-        classesOf.get(r).add(c);
+        partOfClass[c] = partOfRoot[r];
       }
       boolean[] compSeen = new boolean[components];
+      int[] compOrder = new int[components];
+      int[] partOfComp = new int[components];
+      int compCount = 0;
       for (int j = 0; j < fw.jointCount; j++) {
         int comp = compOf[j];
         if (comp < 0 || comp == anchorComp || compSeen[comp]) {
@@ -706,62 +736,73 @@ final class FrameFreedoms {
         }
         compSeen[comp] = true;
         int r = find(parent, classes + comp);
-        if (!classesOf.containsKey(r)) {
-          classesOf.put(r, new ArrayList<>());
-          compsOf.put(r, new ArrayList<>());
-          roots.add(r);
+        if (partOfRoot[r] < 0) {
+          partOfRoot[r] = partCount++;
         }
-        compsOf.get(r).add(comp);
+        partOfComp[comp] = partOfRoot[r];
+        compOrder[compCount++] = comp;
       }
+      // classes, components and rows of each part, each list in increasing order
+      int[] classStart = new int[partCount + 1];
+      int[] localIndex = new int[classes];
+      for (int c = 0; c < classes; c++) {
+        localIndex[c] = classStart[partOfClass[c] + 1]++;
+      }
+      for (int i = 0; i < partCount; i++) {
+        classStart[i + 1] += classStart[i];
+      }
+      int[] classList = new int[classes];
+      for (int c = 0; c < classes; c++) {
+        classList[classStart[partOfClass[c]] + localIndex[c]] = c;
+      }
+      List<List<Integer>> compsOf = new ArrayList<>();
       List<List<Integer>> rowsOf = new ArrayList<>();
-      Map<Integer, Integer> partIndex = new HashMap<>();
-      for (int i = 0; i < roots.size(); i++) {
-        partIndex.put(roots.get(i), i);
+      for (int i = 0; i < partCount; i++) {
+        compsOf.add(new ArrayList<>());
         rowsOf.add(new ArrayList<>());
+      }
+      for (int k = 0; k < compCount; k++) {
+        compsOf.get(partOfComp[compOrder[k]]).add(compOrder[k]);
       }
       for (int r = 0; r < 2 * s.groupCount; r++) {
         if (s.rowCols[r].length > 0) {
-          rowsOf.get(partIndex.get(find(parent, s.rowCols[r][0]))).add(r);
+          rowsOf.get(partOfClass[s.rowCols[r][0]]).add(r);
         }
       }
-      partOfClass = new int[classes];
-      for (int i = 0; i < roots.size(); i++) {
-        for (int c : classesOf.get(roots.get(i))) {
-          partOfClass[c] = i;
-        }
-      }
-      int[][] adjacency = adj;
-      for (int i = 0; i < roots.size(); i++) {
-        List<Integer> cls = classesOf.get(roots.get(i));
-        List<Integer> comps = compsOf.get(roots.get(i));
-        Map<Integer, Integer> local = new HashMap<>();
-        for (int c : cls) {
-          local.put(c, local.size());
-        }
-        ModularEchelon ech = new ModularEchelon(cls.size());
+      FrameSystem.SpanningForest forest = null;
+      // per part found: count, moving joints (indices), classes, rows, components
+      List<Found> found = new ArrayList<>();
+      long[] vx = null;
+      long[] vy = null;
+      for (int i = 0; i < partCount; i++) {
+        int size = classStart[i + 1] - classStart[i];
+        List<Integer> comps = compsOf.get(i);
+        ModularEchelon ech = new ModularEchelon(size);
         List<long[]> dense = new ArrayList<>();
         for (int r : rowsOf.get(i)) {
           int[] cols = s.rowCols[r];
           int[] lc = new int[cols.length];
-          long[] row = new long[cls.size()];
+          long[] row = size <= EXACT_LIMIT ? new long[size] : null;
           for (int k = 0; k < cols.length; k++) {
-            lc[k] = local.get(cols[k]);
-            row[lc[k]] = s.rowVals[r][k];
+            lc[k] = localIndex[cols[k]];
+            if (row != null) {
+              row[lc[k]] = s.rowVals[r][k];
+            }
           }
           ech.addRow(lc, s.rowVals[r]);
-          if (cls.size() <= EXACT_LIMIT) {
+          if (row != null) {
             dense.add(row);
           }
         }
         int rank = ech.rank();
-        if (rank < cls.size() && !rowsOf.get(i).isEmpty()) {
-          if (cls.size() <= EXACT_LIMIT) {
-            rank = ExactRank.rank(dense.toArray(new long[0][]), cls.size());
+        if (rank < size && !rowsOf.get(i).isEmpty()) {
+          if (size <= EXACT_LIMIT) {
+            rank = ExactRank.rank(dense.toArray(new long[0][]), size);
           } else {
             exact = false;
           }
         }
-        int count = cls.size() - rank + 2 * comps.size();
+        int count = size - rank + 2 * comps.size();
         for (int comp : comps) {
           count -= lessOne.getOrDefault(comp, 0);
         }
@@ -770,51 +811,76 @@ final class FrameFreedoms {
         }
         // joints moving with this part: one random motion of it
         long[] x = ech.randomNullVector(rnd);
-        long[] w = new long[fw.memberCount];
-        for (int e = 0; e < fw.memberCount; e++) {
-          int c = s.classOf[e];
-          if (c >= 0 && partOfClass[c] == i) {
-            w[e] = x[local.get(c)];
-          }
-        }
         long[] tx = new long[components];
         long[] ty = new long[components];
         for (int comp : comps) {
           tx[comp] = ModularEchelon.random(rnd);
           ty[comp] = ModularEchelon.random(rnd);
         }
-        long[][] v = propagate(fw, adjacency, w, compOf, anchorComp, anchorJoint, tx, ty);
-        List<Joint> js = new ArrayList<>();
+        if (forest == null) {
+          forest = system.forest(anchorJoint);
+          vx = new long[fw.jointCount];
+          vy = new long[fw.jointCount];
+        }
+        final int part = i;
+        final int[] cls = s.classOf;
+        final int[] partOf = partOfClass;
+        forest.sweep(fw, e -> {
+          int c = cls[e];
+          return c >= 0 && partOf[c] == part ? x[localIndex[c]] : 0;
+        }, compOf, anchorComp, tx, ty, vx, vy);
+        int movingCount = 0;
         for (int j = 0; j < fw.gridJoints; j++) {
-          if (compOf[j] >= 0 && (v[0][j] != 0 || v[1][j] != 0)) {
-            js.add(fw.jointRef(j));
+          if (compOf[j] >= 0 && (vx[j] != 0 || vy[j] != 0)) {
+            movingCount++;
           }
         }
-        Freedom f = new Freedom(FreedomKind.SWAY, count, js, List.of(), List.of());
-        partList.add(new Part(f, cls, rowsOf.get(i), comps));
+        int[] js = new int[movingCount];
+        movingCount = 0;
+        for (int j = 0; j < fw.gridJoints; j++) {
+          if (compOf[j] >= 0 && (vx[j] != 0 || vy[j] != 0)) {
+            js[movingCount++] = j;
+          }
+        }
+        List<Integer> clsList = new ArrayList<>(size);
+        for (int k = classStart[i]; k < classStart[i + 1]; k++) {
+          clsList.add(classList[k]);
+        }
+        found.add(new Found(count, js, clsList, rowsOf.get(i), comps));
       }
-      partList.sort((a, b) -> compareJoints(a.freedom().joints(), b.freedom().joints()));
+      // parts in order of their first moving joint (a part moving none last), stable
+      found.sort((a, b) -> {
+        int[] ja = a.joints();
+        int[] jb = b.joints();
+        if (ja.length == 0 || jb.length == 0) {
+          return Boolean.compare(ja.length == 0, jb.length == 0);
+        }
+        return Integer.compare(ja[0], jb[0]);
+      });
       // each moving joint listed under the last part that moves it: the lists partition them
-      Map<Joint, Integer> last = new HashMap<>();
-      for (int k = 0; k < partList.size(); k++) {
-        for (Joint j : partList.get(k).freedom().joints()) {
-          last.put(j, k);
+      int[] last = new int[fw.gridJoints];
+      for (int k = 0; k < found.size(); k++) {
+        for (int j : found.get(k).joints()) {
+          last[j] = k;
         }
       }
-      for (int k = 0; k < partList.size(); k++) {
-        Part p = partList.get(k);
+      for (int k = 0; k < found.size(); k++) {
+        Found p = found.get(k);
+        int[] js = p.joints();
         List<Joint> mine = new ArrayList<>();
-        for (Joint j : p.freedom().joints()) {
-          if (last.get(j) == k) {
-            mine.add(j);
+        for (int j : js) {
+          if (last[j] == k) {
+            mine.add(fw.jointRef(j));
           }
         }
         if (mine.isEmpty()) {
           // every joint it moves is listed under a later part: it keeps its own list
-          mine = p.freedom().joints();
+          for (int j : js) {
+            mine.add(fw.jointRef(j));
+          }
         }
-        Freedom f = new Freedom(FreedomKind.SWAY, p.freedom().count(), mine, List.of(), List.of());
-        partList.set(k, new Part(f, p.classes(), p.rows(), p.comps()));
+        Freedom f = new Freedom(FreedomKind.SWAY, p.count(), mine, List.of(), List.of());
+        partList.add(new Part(f, p.classes(), p.rows(), p.comps()));
       }
     }
 

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.SplittableRandom;
 import org.bracewalk.core.model.AsBuiltPlane;
 import org.bracewalk.core.model.Brace;
 import org.bracewalk.core.model.FrameRef;
@@ -70,18 +71,23 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
   public PlaneAnalysis analyse(PlaneDesign design) {
     PlaneGrid grid = design.grid();
     byte[] codes = PanelCodes.encode(grid, design.braces());
-    StateAnalysis state = analyse(grid, codes, design.omittedFrame());
     BitSet openings = PanelCodes.mark(grid, design.openings());
-    RepairPlan repair;
     if (design.frameComplete()) {
+      StateAnalysis state = analyseComplete(grid, codes);
       BraceGraph graph = BraceGraph.of(grid, codes);
-      repair = RepairPlanner.plan(grid, codes, openings, codes, graph, false);
-    } else {
-      repair =
-          FrameRepairPlanner.plan(
-              grid, codes, design.omittedFrame(), openings, codes, design.omittedFrame(),
-              Set.of(), false, state.degreesOfFreedom());
+      RepairPlan repair = RepairPlanner.plan(grid, codes, openings, codes, graph, false);
+      return new PlaneAnalysis(grid, state, Optional.empty(), repair);
     }
+    FrameSystem system = systemOf(grid, codes, design.omittedFrame());
+    StateAnalysis state = analyseIncomplete(system, grid, codes, design.omittedFrame());
+    SplittableRandom rnd = new SplittableRandom(SEED);
+    int dof = state.degreesOfFreedom();
+    FrameRepairPlanner.Motion motion =
+        dof == 0 ? null : FrameRepairPlanner.Motion.of(system, rnd, dof);
+    RepairPlan repair =
+        FrameRepairPlanner.plan(
+            grid, codes, design.omittedFrame(), openings, codes, design.omittedFrame(), false, dof,
+            motion, rnd);
     return new PlaneAnalysis(grid, state, Optional.empty(), repair);
   }
 
@@ -106,7 +112,17 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
     StateAnalysis designState = analyse(grid, designCodes, design.omittedFrame());
     Set<FrameRef> notThere = new HashSet<>(asBuilt.absentFrame());
     notThere.addAll(asBuilt.unknownFrame());
-    StateAnalysis builtState = analyse(grid, builtCodes, notThere);
+    // where the frame is incomplete, one framework and one set of equations serve the state's
+    // analysis, "rigid if sound" and the repair; the repair's motions are drawn once
+    FrameSystem system = notThere.isEmpty() ? null : systemOf(grid, builtCodes, notThere);
+    StateAnalysis builtState =
+        system == null ? analyseComplete(grid, builtCodes)
+            : analyseIncomplete(system, grid, builtCodes, notThere);
+    SplittableRandom rnd = new SplittableRandom(SEED);
+    FrameRepairPlanner.Motion motion =
+        system == null || builtState.degreesOfFreedom() == 0
+            ? null
+            : FrameRepairPlanner.Motion.of(system, rnd, builtState.degreesOfFreedom());
 
     boolean rigidIfSound = builtState.rigid();
     if (!asBuilt.uninspected().isEmpty() || !asBuilt.unknownFrame().isEmpty()) {
@@ -121,10 +137,18 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
           absentIfSound.add(f);
         }
       }
-      rigidIfSound =
-          absentIfSound.isEmpty()
-              ? BraceGraphAnalysis.isRigid(BraceGraph.of(grid, optimistic))
-              : analyseIncomplete(grid, optimistic, absentIfSound, false).rigid();
+      if (absentIfSound.isEmpty()) {
+        rigidIfSound = BraceGraphAnalysis.isRigid(BraceGraph.of(grid, optimistic));
+      } else {
+        int dof = system == null ? -1 : freedomsIfSound(system, builtState, motion, builtCodes,
+            optimistic, notThere, absentIfSound);
+        rigidIfSound =
+            dof < 0
+                ? analyseIncomplete(grid, optimistic, absentIfSound, false).rigid()
+                : dof == 0
+                    && (!hasTension(optimistic)
+                        || TensionOnlyFrame.rigid(grid, optimistic, absentIfSound));
+      }
     }
     List<PlacedBrace> extras = new ArrayList<>();
     for (int idx = 0; idx < builtCodes.length; idx++) {
@@ -148,8 +172,8 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
     } else {
       repair =
           FrameRepairPlanner.plan(
-              grid, designCodes, design.omittedFrame(), openings, builtCodes, notThere,
-              asBuilt.unknownFrame(), true, builtState.degreesOfFreedom());
+              grid, designCodes, design.omittedFrame(), openings, builtCodes, notThere, true,
+              builtState.degreesOfFreedom(), motion, rnd);
     }
     return new PlaneAnalysis(grid, designState, Optional.of(built), repair);
   }
@@ -292,16 +316,88 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
 
   static StateAnalysis analyseIncomplete(
       PlaneGrid grid, byte[] codes, Set<FrameRef> absent, boolean full) {
-    FrameFramework fw = FrameFramework.of(grid, rigidityCodes(codes), frameThere(grid, absent));
+    FrameSystem system = systemOf(grid, codes, absent);
     if (!full) {
       // the verdict alone: a full rank of the face rows modulo p proves rigidity; a deficiency
       // modulo p is taken as a freedom (wrong with probability below 1/p, and only cautiously)
-      int dof = FrameRepairPlanner.Motion.of(fw, new java.util.SplittableRandom(SEED), 1).dof;
+      int dof = FrameRepairPlanner.Motion.freedoms(system);
       boolean rigid = dof == 0 && (!hasTension(codes) || TensionOnlyFrame.rigid(grid, codes, absent));
       return new StateAnalysis(rigid, dof, dof == 0 && !rigid, -1, true, List.of(), List.of(),
           List.of(), List.of(), List.of(), false);
     }
-    FrameFreedoms ff = FrameFreedoms.of(fw, SEED);
+    return analyseIncomplete(system, grid, codes, absent);
+  }
+
+  /** The framework and shared equations of a state (tension-only members as bars). */
+  static FrameSystem systemOf(PlaneGrid grid, byte[] codes, Set<FrameRef> absent) {
+    return FrameSystem.of(FrameFramework.of(grid, rigidityCodes(codes), frameThere(grid, absent)));
+  }
+
+  /**
+   * The freedoms modulo p of the state "if sound" ({@code optimistic} diagonals, {@code
+   * absentIfSound} frame members not there), from the analysed state's motions: each member it
+   * adds is taken iff a current motion stretches it (each taking proves one freedom fewer, so a
+   * count of 0 proves rigidity, as a full rank would; a member wrongly passed over, with
+   * probability below 1/p, leaves a freedom: the cautious side). -1 when this does not apply (a
+   * member removed, an added member with an end no member holds, or the motions run out), and the
+   * state is then analysed on its own.
+   */
+  private static int freedomsIfSound(
+      FrameSystem system, StateAnalysis built, FrameRepairPlanner.Motion motion, byte[] builtCodes,
+      byte[] optimistic, Set<FrameRef> notThere, Set<FrameRef> absentIfSound) {
+    FrameFramework fw = system.fw;
+    List<int[]> added = new ArrayList<>();
+    int n = fw.bays;
+    for (int idx = 0; idx < optimistic.length; idx++) {
+      int was = builtCodes[idx] & 3;
+      int now = optimistic[idx] & 3;
+      if ((was & ~now) != 0) {
+        return -1;
+      }
+      int lift = idx / n;
+      int bay = idx % n;
+      if ((now & ~was & 1) != 0) {
+        added.add(new int[] {fw.joint(lift, bay), fw.joint(lift + 1, bay + 1)});
+      }
+      if ((now & ~was & 2) != 0) {
+        added.add(new int[] {fw.joint(lift + 1, bay), fw.joint(lift, bay + 1)});
+      }
+    }
+    for (FrameRef f : notThere) {
+      if (!absentIfSound.contains(f)) {
+        int e = fw.frameId(f);
+        added.add(new int[] {fw.ja[e], fw.jb[e]});
+      }
+    }
+    for (int[] ab : added) {
+      if (system.comp[ab[0]] < 0 || system.comp[ab[1]] < 0) {
+        return -1;
+      }
+    }
+    if (built.degreesOfFreedom() == 0 || motion == null) {
+      return motion == null && built.degreesOfFreedom() > 0 ? -1 : 0;
+    }
+    FrameRepairPlanner.Motion m = motion.copy();
+    for (int[] ab : added) {
+      if (m.dof == 0) {
+        break;
+      }
+      if (m.size == 0) {
+        return -1;
+      }
+      long ddx = ModularEchelon.mod(fw.x(ab[1]) - fw.x(ab[0]));
+      long ddy = ModularEchelon.mod(fw.y(ab[1]) - fw.y(ab[0]));
+      if (m.stretch(ab[0], ab[1], ddx, ddy) != 0) {
+        m.take();
+      }
+    }
+    return m.dof;
+  }
+
+  /** The full analysis of a state whose frame is incomplete, on its shared equations. */
+  static StateAnalysis analyseIncomplete(
+      FrameSystem system, PlaneGrid grid, byte[] codes, Set<FrameRef> absent) {
+    FrameFreedoms ff = FrameFreedoms.of(system, SEED);
     int dof = ff.dof;
     boolean tension = false;
     for (byte c : codes) {
@@ -312,11 +408,7 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
       rigid = TensionOnlyFrame.rigid(grid, codes, absent);
     }
     boolean oneWay = dof == 0 && !rigid;
-    if (!full) {
-      return new StateAnalysis(rigid, dof, oneWay, -1, true, List.of(), List.of(), List.of(),
-          List.of(), List.of(), false);
-    }
-    CriticalByStress.Critical critical = CriticalByStress.of(fw, SEED);
+    CriticalByStress.Critical critical = CriticalByStress.of(system, SEED);
     int tolerance = -1;
     boolean exact = true;
     if (rigid) {

@@ -44,6 +44,33 @@ final class FrameRepairPlanner {
       Set<FrameRef> unknownFrame,
       boolean restoreList,
       int dof) {
+    SplittableRandom rnd = new SplittableRandom(FramePlaneAnalyzer.SEED);
+    Motion motion =
+        dof == 0
+            ? null
+            : Motion.of(
+                FrameFramework.of(grid, FramePlaneAnalyzer.rigidityCodes(analysed),
+                    FramePlaneAnalyzer.frameThere(grid, notThere)),
+                rnd, dof);
+    return plan(grid, design, omitted, openings, analysed, notThere, restoreList, dof, motion, rnd);
+  }
+
+  /**
+   * The same, starting from {@code start}: the motions of the analysed state drawn with {@code
+   * rnd} ({@link Motion#of(FrameSystem, SplittableRandom, int)}, null when {@code dof} is 0), which
+   * the plan then takes from.
+   */
+  static RepairPlan plan(
+      PlaneGrid grid,
+      byte[] design,
+      Set<FrameRef> omitted,
+      BitSet openings,
+      byte[] analysed,
+      Set<FrameRef> notThere,
+      boolean restoreList,
+      int dof,
+      Motion start,
+      SplittableRandom rnd) {
     int m = grid.lifts();
     int n = grid.bays();
     boolean pinned = grid.support() == org.bracewalk.core.model.Support.PINNED_BASE;
@@ -78,9 +105,7 @@ final class FrameRepairPlanner {
     byte[] codes = FramePlaneAnalyzer.rigidityCodes(analysed);
     boolean[] there = FramePlaneAnalyzer.frameThere(grid, notThere);
     List<Candidate> taken = new ArrayList<>();
-    SplittableRandom rnd = new SplittableRandom(FramePlaneAnalyzer.SEED);
-    Motion motion =
-        dof == 0 ? null : Motion.of(FrameFramework.of(grid, codes, there), rnd, dof);
+    Motion motion = start;
     boolean rigid = dof == 0 || motion.dof == 0;
     int designCount = candidates.size();
     int next = 0;
@@ -342,62 +367,101 @@ final class FrameRepairPlanner {
       dof--;
     }
 
+    /** A copy whose current motions can be taken from without changing this one's. */
+    Motion copy() {
+      Motion c = new Motion(fw, dof, vx, vy, held);
+      c.size = size;
+      for (int k = 0; k < coef.length; k++) {
+        c.coef[k] = coef[k].clone();
+      }
+      return c;
+    }
+
     /** {@code wanted} motions at most (fewer where the pool would exceed its bytes). */
     static Motion of(FrameFramework fw, SplittableRandom rnd, int wanted) {
-      int[][] adj = FrameFreedoms.adjacency(fw);
-      int[] comp = FrameFreedoms.components(fw, adj);
-      int anchorJoint = -1;
-      int anchorMember = -1;
-      if (!fw.pinned) {
-        for (int j = 0; j < fw.jointCount && anchorJoint < 0; j++) {
-          if (adj[0][j] < adj[0][j + 1]) {
-            anchorJoint = j;
-            anchorMember = adj[1][adj[0][j]];
-          }
-        }
-      }
-      int anchorComp = fw.pinned ? comp[0] : (anchorJoint < 0 ? -1 : comp[anchorJoint]);
-      boolean[] held = new boolean[fw.jointCount];
-      int components = 0;
-      for (int j = 0; j < fw.jointCount; j++) {
-        held[j] = comp[j] >= 0;
-        components = Math.max(components, comp[j] + 1);
-      }
-      FaceClassSystem sys =
-          new FaceClassSystem(fw, anchorMember < 0 ? new int[0] : new int[] {anchorMember},
-              new int[0]);
-      ModularEchelon ech = new ModularEchelon(sys.classCount);
-      for (int r = 0; r < 2 * sys.groupCount; r++) {
-        if (sys.rowCols[r].length > 0) {
-          ech.addRow(sys.rowCols[r], sys.rowVals[r]);
-        }
-      }
-      int dof = sys.classCount - ech.rank() + 2 * Math.max(0, components - (anchorComp < 0 ? 0 : 1));
-      if (anchorJoint < 0 && !fw.pinned) {
-        dof = 0;
-      }
+      return of(FrameSystem.of(fw), rnd, wanted);
+    }
+
+    /** The freedoms modulo p alone: no motion drawn (a full rank proves rigidity). */
+    static int freedoms(FrameSystem system) {
+      return new Setup(system).dof;
+    }
+
+    /** As {@link #of(FrameFramework, SplittableRandom, int)} on a state's shared equations. */
+    static Motion of(FrameSystem system, SplittableRandom rnd, int wanted) {
+      Setup st = new Setup(system);
+      FrameFramework fw = system.fw;
+      int dof = st.dof;
       int pool = (int) Math.max(1, Math.min(Math.min(wanted, Math.max(1, dof)),
           POOL_BYTES / (16L * fw.gridJoints)));
       long[][] vx = new long[pool][];
       long[][] vy = new long[pool][];
-      long[] w = new long[fw.memberCount];
+      int components = system.components;
+      FrameSystem.SpanningForest forest = system.forest(st.anchorJoint);
+      long[] sx = new long[fw.jointCount];
+      long[] sy = new long[fw.jointCount];
+      int[] classOf = st.sys.classOf;
       for (int k = 0; k < pool; k++) {
-        long[] x = ech.randomNullVector(rnd);
-        for (int e = 0; e < fw.memberCount; e++) {
-          int c = sys.classOf[e];
-          w[e] = c >= 0 ? x[c] : 0;
-        }
+        long[] x = st.ech.randomNullVector(rnd);
         long[] tx = new long[Math.max(1, components)];
         long[] ty = new long[Math.max(1, components)];
         for (int c = 0; c < components; c++) {
           tx[c] = ModularEchelon.random(rnd);
           ty[c] = ModularEchelon.random(rnd);
         }
-        long[][] v = FrameFreedoms.propagate(fw, adj, w, comp, anchorComp, anchorJoint, tx, ty);
-        vx[k] = java.util.Arrays.copyOf(v[0], fw.gridJoints);
-        vy[k] = java.util.Arrays.copyOf(v[1], fw.gridJoints);
+        forest.sweep(fw, e -> {
+          int c = classOf[e];
+          return c >= 0 ? x[c] : 0;
+        }, system.comp, st.anchorComp, tx, ty, sx, sy);
+        vx[k] = java.util.Arrays.copyOf(sx, fw.gridJoints);
+        vy[k] = java.util.Arrays.copyOf(sy, fw.gridJoints);
       }
-      return new Motion(fw, dof, vx, vy, held);
+      return new Motion(fw, dof, vx, vy, st.held);
+    }
+
+    /** The anchor, the equations with it fixed, their echelon form and the freedoms mod p. */
+    private static final class Setup {
+      final int anchorJoint;
+      final int anchorComp;
+      final boolean[] held;
+      final FaceClassSystem sys;
+      final ModularEchelon ech;
+      final int dof;
+
+      Setup(FrameSystem system) {
+        FrameFramework fw = system.fw;
+        int[][] adj = system.adj;
+        int[] comp = system.comp;
+        int joint = -1;
+        int anchorMember = -1;
+        if (!fw.pinned) {
+          for (int j = 0; j < fw.jointCount && joint < 0; j++) {
+            if (adj[0][j] < adj[0][j + 1]) {
+              joint = j;
+              anchorMember = adj[1][adj[0][j]];
+            }
+          }
+        }
+        anchorJoint = joint;
+        anchorComp = fw.pinned ? comp[0] : (joint < 0 ? -1 : comp[joint]);
+        held = new boolean[fw.jointCount];
+        for (int j = 0; j < fw.jointCount; j++) {
+          held[j] = comp[j] >= 0;
+        }
+        int components = system.components;
+        if (anchorMember < 0) {
+          sys = system.base;
+          ech = system.echelon();
+        } else {
+          sys = system.base.quotient(new int[] {anchorMember}, new int[0]);
+          ech = FrameSystem.echelonOf(sys);
+        }
+        int d = sys.classCount - ech.rank() + 2 * Math.max(0, components - (anchorComp < 0 ? 0 : 1));
+        if (joint < 0 && !fw.pinned) {
+          d = 0;
+        }
+        dof = d;
+      }
     }
   }
 }

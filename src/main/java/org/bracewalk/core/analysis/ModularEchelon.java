@@ -31,6 +31,13 @@ final class ModularEchelon {
   }
 
   static long mod(long x) {
+    // most values here are coordinates and sums of them, far below p: no division for those
+    if (x >= 0) {
+      return x < P ? x : x % P;
+    }
+    if (x > -P) {
+      return x + P;
+    }
     long r = x % P;
     return r < 0 ? r + P : r;
   }

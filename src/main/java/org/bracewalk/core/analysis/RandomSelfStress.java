@@ -39,9 +39,11 @@ final class RandomSelfStress {
           counts[c]++;
         }
       }
+      int[] noCols = new int[0];
+      long[] noVals = new long[0];
       for (int c = 0; c < sys.classCount; c++) {
-        byClassCols[c] = new int[counts[c]];
-        byClassVals[c] = new long[counts[c]];
+        byClassCols[c] = counts[c] == 0 ? noCols : new int[counts[c]];
+        byClassVals[c] = counts[c] == 0 ? noVals : new long[counts[c]];
       }
       Arrays.fill(counts, 0);
       for (int r = 0; r < g2; r++) {
@@ -94,68 +96,64 @@ final class RandomSelfStress {
         res[sys.ev[k]] = ModularEchelon.sub(res[sys.ev[k]], flow[k]);
       }
     }
+    // the forest's edges from the leaves in: each tree rooted at the fixed node, or at its lowest
+    // node; a leaf's one edge (the xor of its edges) carries what balances it, so each edge's flow
+    // is fixed by the side away from the root, in any leaf order
     int n = m + 1;
-    int[] deg = new int[n + 1];
+    int fixedRoot = sys.findMember(sys.fixedNode);
+    boolean[] root = new boolean[n];
+    int[] lowest = new int[n];
+    Arrays.fill(lowest, -1);
+    for (int x = 0; x < n; x++) {
+      int r = sys.findMember(x);
+      if (r == fixedRoot) {
+        root[x] = x == sys.fixedNode;
+      } else if (lowest[r] < 0) {
+        lowest[r] = x;
+        root[x] = true;
+      }
+    }
+    int[] tdeg = new int[n];
+    int[] xr = new int[n];
     for (int k = 0; k < ec; k++) {
       if (sys.tree[k]) {
-        deg[sys.eu[k] + 1]++;
-        deg[sys.ev[k] + 1]++;
+        tdeg[sys.eu[k]]++;
+        tdeg[sys.ev[k]]++;
+        xr[sys.eu[k]] ^= k;
+        xr[sys.ev[k]] ^= k;
       }
     }
-    for (int i = 0; i < n; i++) {
-      deg[i + 1] += deg[i];
-    }
-    int[] adj = new int[deg[n]];
-    int[] fill = Arrays.copyOf(deg, n);
-    for (int k = 0; k < ec; k++) {
-      if (sys.tree[k]) {
-        adj[fill[sys.eu[k]]++] = k;
-        adj[fill[sys.ev[k]]++] = k;
+    int[] stack = new int[n];
+    int sp = 0;
+    for (int x = 0; x < n; x++) {
+      if (tdeg[x] == 1 && !root[x]) {
+        stack[sp++] = x;
       }
     }
-    int[] parentEdge = new int[n];
-    Arrays.fill(parentEdge, -2);
-    int[] order = new int[n];
-    int len = 0;
-    // roots: the fixed node first, then any unvisited node
-    for (int pass = 0; pass < 2; pass++) {
-      for (int root = pass == 0 ? sys.fixedNode : 0; root < (pass == 0 ? sys.fixedNode + 1 : n);
-          root++) {
-        if (parentEdge[root] != -2) {
-          continue;
-        }
-        parentEdge[root] = -1;
-        int head = len;
-        order[len++] = root;
-        while (head < len) {
-          int u = order[head++];
-          for (int i = deg[u]; i < deg[u + 1]; i++) {
-            int k = adj[i];
-            int v = sys.eu[k] == u ? sys.ev[k] : sys.eu[k];
-            if (parentEdge[v] == -2) {
-              parentEdge[v] = k;
-              order[len++] = v;
-            }
-          }
-        }
-      }
-    }
-    for (int i = len - 1; i >= 0; i--) {
-      int child = order[i];
-      int k = parentEdge[child];
-      if (k < 0) {
+    while (sp > 0) {
+      int child = stack[--sp];
+      if (tdeg[child] != 1) {
         continue;
       }
-      boolean free = child == sys.fixedNode || sys.eface[k] < 0;
+      int k = xr[child];
+      boolean free = sys.eface[k] < 0;
+      int other;
       if (sys.eu[k] == child) {
         // child gets +flow, other end -flow
+        other = sys.ev[k];
         flow[k] = free ? 0 : ModularEchelon.sub(0, res[child]);
         res[child] = ModularEchelon.add(res[child], flow[k]);
-        res[sys.ev[k]] = ModularEchelon.sub(res[sys.ev[k]], flow[k]);
+        res[other] = ModularEchelon.sub(res[other], flow[k]);
       } else {
+        other = sys.eu[k];
         flow[k] = free ? 0 : res[child];
         res[child] = ModularEchelon.sub(res[child], flow[k]);
-        res[sys.eu[k]] = ModularEchelon.add(res[sys.eu[k]], flow[k]);
+        res[other] = ModularEchelon.add(res[other], flow[k]);
+      }
+      tdeg[child] = 0;
+      xr[other] ^= k;
+      if (--tdeg[other] == 1 && !root[other]) {
+        stack[sp++] = other;
       }
     }
     // 4. y per intact face from the flows of its two edges: s_a . y = phi, s_b . y = psi
