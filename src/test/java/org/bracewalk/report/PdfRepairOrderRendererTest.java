@@ -59,7 +59,10 @@ class PdfRepairOrderRendererTest {
     String text = PdfReportRendererTest.flat(String.join("\n", PdfReportRendererTest.pageTexts(pdf)));
     assertThat(text).contains("Keep people and loads off every part named here as out of service")
         .contains("reviewed by a licensed engineer");
-    assertThat(text.split("_______________ date", -1)).hasSize(ReportFixtures.actions().size() + 1);
+    assertThat(text.split("___________ date", -1)).hasSize(ReportFixtures.actions().size() + 1);
+    // the caution speaks of the repair order itself
+    assertThat(text).contains("This repair order comes from a check of bracing continuity")
+        .doesNotContain("this report");
   }
 
   @Test
@@ -70,11 +73,12 @@ class PdfRepairOrderRendererTest {
         for (COSName name : page.getResources().getXObjectNames()) {
           if (page.getResources().getXObject(name) instanceof PDFormXObject form) {
             String content = new String(form.getContentStream().toByteArray());
-            if (content.contains("Tj")) {
-              continue; // the page total of "page n of N"
+            if (!content.contains(" l")) {
+              continue; // the page total of "page n of N": text only
             }
             forms++;
-            assertThat(content).contains(" l").contains(" re");
+            // the grid, the marked place, and the lift and bay labels
+            assertThat(content).contains(" l").contains(" re").contains("Tj");
           }
         }
       }
