@@ -917,11 +917,9 @@ public final class PdfReportRenderer implements ReportRenderer {
       return w.format("repairs.location.beside", "plane", a.plane(), "lifts",
           w.numbered("lift", a.lifts(), 0));
     }
-    if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE && a.lifts().size() == 1) {
-      return w.format("repairs.location.lift", "plane", a.plane(), "lift", a.lifts().get(0));
-    }
     if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE) {
-      return w.format("repairs.location.lifts", "plane", a.plane(), "lifts", Wording.ranges(a.lifts()));
+      return w.format("repairs.location.lifts", "plane", a.plane(), "lifts",
+          w.numbered("lift", a.lifts(), 0));
     }
     return w.format("repairs.location", "plane", a.plane(), "lift", a.panel().lift(), "bay",
         a.panel().bay());

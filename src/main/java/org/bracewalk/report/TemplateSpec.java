@@ -261,7 +261,6 @@ final class TemplateSpec {
     k.put("repairs.col.when", Set.of());
     k.put("repairs.location", Set.of("plane", "lift", "bay"));
     k.put("repairs.location.lifts", Set.of("plane", "lifts"));
-    k.put("repairs.location.lift", Set.of("plane", "lift"));
     k.put("repairs.location.frame", Set.of("plane", "member"));
     k.put("repairs.location.beside", Set.of("plane", "lifts"));
     k.put("repairs.deviation", Set.of());

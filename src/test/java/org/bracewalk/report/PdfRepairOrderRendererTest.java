@@ -79,11 +79,28 @@ class PdfRepairOrderRendererTest {
             forms++;
             // the grid, the marked place, and the lift and bay labels
             assertThat(content).contains(" l").contains(" re").contains("Tj");
+            // large enough for a phone's photo of the page: at least 60 mm wide (170 points),
+            // every label at least 7 points (about 2.5 mm high)
+            assertThat(form.getBBox().getWidth()).isGreaterThanOrEqualTo(170f);
+            java.util.regex.Matcher tf = java.util.regex.Pattern
+                .compile("/\\S+ ([0-9.]+) Tf").matcher(content);
+            while (tf.find()) {
+              assertThat(Float.parseFloat(tf.group(1))).isGreaterThanOrEqualTo(7f);
+            }
           }
         }
       }
       assertThat(forms).isEqualTo(ReportFixtures.actions().size());
     }
+  }
+
+  @Test
+  void eachLocatorLabelsItsLiftsAndBaysWithTheMarkedOnesShown() throws IOException {
+    String text = PdfReportRendererTest.flat(String.join("\n", PdfReportRendererTest.pageTexts(pdf)));
+    // action 2 is in lift 3, bay 1 of the facade; action 5 in lift 5, bay 10; the plan bracing
+    // (3 bays) shows every bay
+    assertThat(text).contains("L3").contains("B1").contains("L5").contains("B10")
+        .contains("B2").contains("B3");
   }
 
   @Test

@@ -187,6 +187,30 @@ class ReportLayoutTest {
   }
 
   @Test
+  void actionNumbersSitAtMidHeightInsideTheirPanelAwayFromTheCorners() throws IOException {
+    List<Glyphs> all = strings(fixture);
+    int start = indexOf(all, "Plane: North elevation", 0);
+    int title = indexOf(all, "scale 1:", start);
+    // action 2 replaces the diagonal of lift 3, bay 1
+    Glyphs b1 = all.get(exact(all, "B1", title));
+    Glyphs b2 = all.get(exact(all, "B2", title));
+    Glyphs l3 = all.get(exact(all, "L3", title));
+    Glyphs l4 = all.get(exact(all, "L4", title));
+    float bay = b2.centreX() - b1.centreX();
+    float lift = l3.y() - l4.y();
+    float left = b1.centreX() - bay / 2;
+    Glyphs label = all.subList(title, all.size()).stream()
+        .filter(g -> g.text().equals("2") && g.x0() > left && g.x1() < left + bay
+            && Math.abs(g.y() - l3.y()) < lift / 2)
+        .findFirst().orElseThrow(() -> new AssertionError("no action label 2 in lift 3, bay 1"));
+    // at the panel's mid-height (the lift label's line, within 2 points) ...
+    assertThat(Math.abs(label.y() - l3.y())).isLessThan(2f);
+    // ... and clear of both side corners by a fifth of the bay
+    assertThat(label.x0() - left).isGreaterThan(bay * 0.1f);
+    assertThat(left + bay - label.x1()).isGreaterThan(bay * 0.2f);
+  }
+
+  @Test
   void alikePlanesShareOneScale() {
     // the run's struck and bent frames are alike (same role, grid and size): one scale
     ReportContent r = RackingRunFixture.report();
