@@ -24,7 +24,6 @@ import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.RepairStep;
 import org.bracewalk.core.port.report.RepairOrderContent;
 import org.bracewalk.app.verdict.Cautions;
-import org.bracewalk.core.port.report.RepairUrgency;
 import org.bracewalk.core.port.report.ReportHeader;
 
 /**
