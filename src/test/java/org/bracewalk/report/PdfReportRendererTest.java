@@ -188,8 +188,13 @@ class PdfReportRendererTest {
   void planePagesAreDrawnWithVectorOperatorsNotImages() throws IOException {
     List<String> pages = pageTexts(finalised);
     int facade = indexOf(pages, "Plane: " + ReportFixtures.FACADE);
+    // the drawing follows the words, on their page or (when they start low on a page) the next
+    int drawn = facade;
+    while (!flat(pages.get(drawn)).contains("Elevation, design and as found")) {
+      drawn++;
+    }
     try (PDDocument d = Loader.loadPDF(finalised)) {
-      PDPage page = d.getPage(facade);
+      PDPage page = d.getPage(drawn);
       List<String> ops = operators(page);
       // 11 standards + 6 ledgers, at least 9 design diagonals, the mechanism's members
       assertThat(ops.stream().filter("l"::equals).count()).isGreaterThan(60);
