@@ -36,7 +36,14 @@ import org.bracewalk.core.port.report.PlaneSection;
  */
 final class ElevationDrawing {
   /** Points per metre of paper: 72 points per inch. */
-  private static final double POINTS_PER_METRE = 72 / 0.0254;
+  static final double POINTS_PER_METRE = 72 / 0.0254;
+
+  /**
+   * The scales an elevation is drawn at, 1:n: the reduction scales of ISO 5455 (1:10, 1:20, 1:50,
+   * 1:100, 1:200 and on by tens: 1:500, 1:1000 ...), with 1:25, common in building drawings (from
+   * memory). The largest serve the longest racking runs and facades (up to 500 bays).
+   */
+  static final int[] SCALES = {10, 20, 25, 50, 100, 200, 500, 1000, 2000, 5000, 10000, 20000, 50000};
 
   private static final float LEFT = 30;
   private static final float RIGHT = 40;
@@ -53,13 +60,31 @@ final class ElevationDrawing {
     this.bold = bold;
   }
 
-  /** The least height the drawing needs to be legible in a box {@code width} wide. */
-  static float preferredHeight(PlaneGrid g, float width, float maxHeight) {
-    double wm = g.bayWidths().stream().mapToDouble(Double::doubleValue).sum();
-    double hm = g.liftHeights().stream().mapToDouble(Double::doubleValue).sum();
-    double s = (width - LEFT - RIGHT) / wm;
-    float h = (float) (hm * s) + TOP + BOTTOM;
-    return Math.min(maxHeight, Math.max(h, 120f));
+  /**
+   * The largest standard scale (the least n of 1:n in {@link #SCALES}) at which the plane fits a
+   * box {@code width} by {@code height} points with its labels; the smallest scale when none fits.
+   */
+  static int scaleFor(PlaneGrid g, float width, float height) {
+    for (int n : SCALES) {
+      double s = POINTS_PER_METRE / n;
+      if (widthOf(g) * s <= width - LEFT - RIGHT && heightOf(g) * s <= height - TOP - BOTTOM) {
+        return n;
+      }
+    }
+    return SCALES[SCALES.length - 1];
+  }
+
+  /** The height of the drawing's box at scale 1:{@code n}, labels included. */
+  static float heightAt(PlaneGrid g, int n) {
+    return (float) (heightOf(g) * POINTS_PER_METRE / n) + TOP + BOTTOM;
+  }
+
+  static double widthOf(PlaneGrid g) {
+    return g.bayWidths().stream().mapToDouble(Double::doubleValue).sum();
+  }
+
+  static double heightOf(PlaneGrid g) {
+    return g.liftHeights().stream().mapToDouble(Double::doubleValue).sum();
   }
 
   /**
@@ -67,6 +92,7 @@ final class ElevationDrawing {
    *
    * @param actionsAt the repair-plan action numbers that concern each panel
    * @param frameActionsAt the action numbers that concern each frame member
+   * @param scale the drawing is at 1:{@code scale} (see {@link #scaleFor}); the box must hold it
    */
   void draw(
       PdfContentByte cb,
@@ -76,13 +102,14 @@ final class ElevationDrawing {
       float x,
       float y,
       float width,
-      float height) {
+      float height,
+      int scale) {
     PlaneGrid g = plane.design().grid();
     int m = g.lifts();
     int n = g.bays();
     double wm = g.bayWidths().stream().mapToDouble(Double::doubleValue).sum();
     double hm = g.liftHeights().stream().mapToDouble(Double::doubleValue).sum();
-    float s = (float) Math.min((width - LEFT - RIGHT) / wm, (height - TOP - BOTTOM) / hm);
+    float s = (float) (POINTS_PER_METRE / scale);
     // centred across the box; lift labels and heights stay beside the grid
     float ox = x + LEFT + (float) Math.max(0, (width - LEFT - RIGHT - wm * s) / 2);
     float oy = y + BOTTOM;
@@ -115,10 +142,9 @@ final class ElevationDrawing {
     List<Parts.Part> parts = Parts.of(state);
 
     // title with the scale
-    long ratio = Math.round(POINTS_PER_METRE / s);
     Glyphs.text(
         cb, bold, 8f, Palette.GRID, PdfContentByte.ALIGN_LEFT,
-        w.format("elevation.title", "scale", ratio), x, y + height - 9f);
+        w.format("elevation.title", "scale", scale), x, y + height - 9f);
 
     // parts that can sway
     for (Parts.Part part : parts) {
@@ -249,10 +275,12 @@ final class ElevationDrawing {
         }
         List<Integer> numbers = actionsAt.get(p);
         if (numbers != null && !numbers.isEmpty()) {
+          // at mid-height, a fifth of the way in from the left side: clear of every corner, of
+          // the centre's symbol and of either diagonal (which pass a fifth of the way up or down)
           String text = numbers.size() > 2 ? numbers.get(0) + "+" : Wording.ranges(numbers);
           float lw = bold.getWidthPoint(text, labelSize) + labelSize * 0.6f;
-          Glyphs.repairNumber(cb, bold, text, x1 - lw / 2 - 1.2f, y0 + labelSize * 0.75f + 1.2f,
-              labelSize, !newPositions.contains(p));
+          float lx = x0 + Math.max(lw / 2 + 1.5f, (x1 - x0) * 0.22f);
+          Glyphs.repairNumber(cb, bold, text, lx, cy, labelSize, !newPositions.contains(p));
         }
       }
     }

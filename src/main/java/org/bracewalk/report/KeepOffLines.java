@@ -24,7 +24,7 @@ final class KeepOffLines {
   static List<String> of(List<PlaneSection> planes, Wording w) {
     List<String> lines = new ArrayList<>();
     for (PlaneSection p : planes) {
-      verdict(p).keepOffZone().ifPresent(z -> lines.add(line(p.name(), z, w)));
+      verdict(p).keepOffZone().ifPresent(z -> lines.add(line(p, z, w)));
     }
     return lines;
   }
@@ -54,8 +54,9 @@ final class KeepOffLines {
         .distinct().toList();
   }
 
-  private static String line(String plane, KeepOffZone z, Wording w) {
+  private static String line(PlaneSection p, KeepOffZone z, Wording w) {
     return w.format(z.offloadBeside() ? "summary.alert.keepoff.beside" : "summary.alert.keepoff",
-        "plane", plane, "lifts", z.liftsText(), "bays", z.baysText());
+        "plane", p.name(), "lifts", w.numbered("lift", z.lifts(), p.design().grid().lifts()),
+        "bays", w.numbered("bay", z.bays(), p.design().grid().bays()));
   }
 }

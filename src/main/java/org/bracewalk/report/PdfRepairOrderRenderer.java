@@ -24,13 +24,13 @@ import org.bracewalk.core.port.report.PlaneSection;
 import org.bracewalk.core.port.report.RepairStep;
 import org.bracewalk.core.port.report.RepairOrderContent;
 import org.bracewalk.app.verdict.Cautions;
-import org.bracewalk.core.port.report.RepairUrgency;
 import org.bracewalk.core.port.report.ReportHeader;
 
 /**
  * The crew's repair order as a PDF: the keep-off note first, then one row per action in working
- * order with where it is, what to fit, a locator sketch of the plane with the place marked, and
- * boxes for who did it and when.
+ * order with where it is, what to fit, a locator sketch of the plane with the place marked and its
+ * lifts and bays labelled, and boxes for who did it and when; the cautions last, worded for a
+ * repair order.
  */
 public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
   private final TemplateSource source;
@@ -94,14 +94,15 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
       if (order.actions().isEmpty()) {
         doc.add(pdf.para(w.text("order.none"), 10f));
       } else {
-        long rigidity = order.actions().stream()
-            .filter(a -> a.priority() == RepairUrgency.ISOLATE
-                || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY)
+        int count = order.actions().size();
+        long rigidity = order.actions().stream().filter(PdfReportRenderer::urgent)
             .mapToInt(RepairStep::number).max().orElse(0);
-        doc.add(pdf.para(rigidity == 0
-            ? w.format("order.intro.plain", "count", order.actions().size())
-            : w.format("order.intro", "count", order.actions().size(), "rigidity", rigidity), 9f));
-        PdfPTable table = pdf.table(6, 22, 34, 22, 16);
+        String intro = rigidity == 0 ? w.plural("order.intro.plain", count, "count", count)
+            : count == 1 ? w.text("order.intro.one")
+            : rigidity == count ? w.format("order.intro.all", "count", count)
+            : w.format("order.intro.many", "count", count, "rigidity", rigidity);
+        doc.add(pdf.para(intro, 9f));
+        PdfPTable table = pdf.table(6, 20, 26, 35, 13);
         table.setHeaderRows(1);
         for (String k : new String[] {"number", "where", "what", "locator", "done"}) {
           table.addCell(pdf.headCell(w.text("order.col." + k)));
@@ -112,10 +113,13 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
         doc.add(table);
       }
       Paragraph review = new Paragraph(Cautions.STANDING, pdf.boldFont(8f));
-      review.setSpacingBefore(6f);
+      review.setSpacingBefore(4f);
+      Paragraph lost = new Paragraph(w.text("caution.lost"), pdf.font(8f));
+      lost.setSpacingBefore(4f);
       doc.add(pdf.box(Palette.NOTE_FILL, Palette.GRID,
           new Paragraph(w.text("heading.cautions"), pdf.boldFont(9f)),
-          new Paragraph(w.text("caution.lost"), pdf.font(8f)),
+          new Paragraph(w.text("order.caution"), pdf.boldFont(8f)),
+          lost,
           review));
       doc.close();
     } catch (DocumentException e) {
@@ -131,8 +135,7 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
           + a.frameMember() + ", outside the " + grid.lifts() + " x " + grid.bays() + " plane '"
           + a.plane() + "'");
     }
-    boolean urgent = a.priority() == RepairUrgency.ISOLATE
-        || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY;
+    boolean urgent = PdfReportRenderer.urgent(a);
     Font f = urgent ? pdf.boldFont(8.5f, Palette.LOST) : pdf.font(8.5f);
     PdfPCell number = pdf.cell(String.valueOf(a.number()), pdf.boldFont(13f));
     number.setHorizontalAlignment(Element.ALIGN_CENTER);
@@ -148,17 +151,18 @@ public final class PdfRepairOrderRenderer implements RepairOrderRenderer {
       what.add(new Phrase("\n" + w.text("repairs.deviation"), pdf.boldFont(7.5f, Palette.EXTRA)));
     }
     table.addCell(pdf.cell(what));
-    float lw = 104f;
-    float lh = 58f;
-    Image locator = Image.getInstance(LocatorDrawing.draw(writer.getDirectContent(), grid, a, lw, lh));
+    float lw = 172f;
+    float lh = 100f;
+    Image locator = Image.getInstance(LocatorDrawing.draw(writer.getDirectContent(), w, pdf.regular,
+        pdf.bold, grid, a, lw, lh));
     PdfPCell loc = new PdfPCell(locator, false);
     loc.setPadding(3f);
     loc.setBorderColor(new java.awt.Color(0xbb, 0xbb, 0xbb));
     loc.setBorderWidth(0.5f);
     loc.setHorizontalAlignment(Element.ALIGN_CENTER);
     table.addCell(loc);
-    Phrase done = new Phrase(w.text("order.done-by") + "\n\n_______________\n"
-        + w.text("order.done-date") + "\n\n_______________", pdf.font(8f));
+    Phrase done = new Phrase(w.text("order.done-by") + "\n\n___________\n"
+        + w.text("order.done-date") + "\n\n___________", pdf.font(8f));
     table.addCell(pdf.cell(done));
   }
 }

@@ -49,11 +49,14 @@ import org.bracewalk.core.port.report.ReportHeader;
 import org.bracewalk.core.port.report.SectionDigest;
 
 /**
- * The inspection report as a PDF (OpenPDF). Page one: title, the alert naming any plane that lost
- * rigidity, the summary, the cautions and the particulars. Then one page per plane with its
- * elevation to scale and, where it lost rigidity, the mechanism sketch; the findings; the repair
- * plan; the cautions again, the sign-off and the record digests. Every page carries "page n of N"
- * and the record fingerprint, and DRAFT while the inspection is open.
+ * The inspection report as a PDF (OpenPDF). Page one: title, what to do where (per plane, where to
+ * keep people and loads off and the repairs), the alert naming any plane that lost rigidity, the
+ * summary, the cautions and the particulars. Then a section per plane with its elevation at a
+ * standard scale (alike planes at one scale) and, where it lost rigidity, the sketch of how it
+ * moves; sections share a page where they fit whole. The planes that hold their shape with nothing
+ * found go into one compact table of small elevations. Then the findings, the repair plan, the
+ * cautions again, the sign-off and, as an appendix, the record digests. Every page carries "page n
+ * of N" and the record fingerprint, and DRAFT while the inspection is open.
  */
 public final class PdfReportRenderer implements ReportRenderer {
   private final TemplateSource source;
@@ -113,25 +116,93 @@ public final class PdfReportRenderer implements ReportRenderer {
       writer.setPageEvent(furniture);
       furniture.describe(doc);
       doc.open();
-      firstPage();
+      List<PlaneSection> full = new ArrayList<>();
+      List<PlaneSection> compact = new ArrayList<>();
+      for (PlaneSection p : r.planes()) {
+        (compact(p) ? compact : full).add(p);
+      }
+      firstPage(full, compact);
       Map<String, Map<PanelRef, List<Integer>>> actionsAt = actionsAt(r.actions());
       Map<String, Map<FrameRef, List<Integer>>> frameActionsAt = frameActionsAt(r.actions());
-      for (PlaneSection plane : r.planes()) {
-        doc.newPage();
-        planePage(plane, actionsAt.getOrDefault(plane.name(), Map.of()),
+      float width = doc.right() - doc.left();
+      Map<String, PdfPTable> words = new HashMap<>();
+      Map<String, Integer> alone = new HashMap<>();
+      for (PlaneSection plane : full) {
+        PdfPTable t = planeWords(plane);
+        words.put(plane.name(), t);
+        alone.put(plane.name(), ElevationDrawing.scaleFor(plane.design().grid(), width,
+            drawingRoom(plane, wordsHeight(t))));
+      }
+      Map<String, Integer> scales = PlaneScales.common(full, alone);
+      for (PlaneSection plane : full) {
+        planeSection(plane, words.get(plane.name()), scales.get(plane.name()),
+            actionsAt.getOrDefault(plane.name(), Map.of()),
             frameActionsAt.getOrDefault(plane.name(), Map.of()));
       }
-      doc.newPage();
+      if (!compact.isEmpty()) {
+        compactTable(compact);
+      }
+      startSection(160f);
       findings();
+      startSection(120f);
       repairs();
+      startSection(230f);
       closing();
+      appendix();
       doc.close();
       return bytes.toByteArray();
     }
 
+    /**
+     * A plane that holds its shape as found, with nothing found on it and no action: it goes into
+     * the compact table instead of a section of its own.
+     */
+    private boolean compact(PlaneSection p) {
+      return KeepOffLines.verdict(p).kind() == VerdictKind.HOLDS && !p.showsFrame()
+          && r.findings().stream().noneMatch(f -> f.plane().equals(p.name()))
+          && r.actions().stream().noneMatch(a -> a.plane().equals(p.name()));
+    }
+
+    /** Starts a new page unless at least {@code room} points are left on this one. */
+    private void startSection(float room) {
+      if (writer.getVerticalPosition(true) - doc.bottom() < room) {
+        doc.newPage();
+      }
+    }
+
+    private float bodyHeight() {
+      return doc.top() - doc.bottom();
+    }
+
+    /** The height the mechanism sketch of {@code plane} takes, 0 when it has none. */
+    private float sketchHeight(PlaneSection plane, float elevationHeight) {
+      StateAnalysis state = plane.analysis().analysedState();
+      boolean sketch = plane.sketch() != null
+          || Parts.moving(state, plane.design().grid().support() == Support.FREE) != null;
+      return sketch ? Math.max(160f, Math.min(260f, elevationHeight * 0.85f)) : 0f;
+    }
+
+    /**
+     * The most room the elevation may take with the plane's words, key and sketch in three
+     * quarters of a page (so a section fits on any page less than a quarter used), and never less
+     * than 150 points.
+     */
+    private float drawingRoom(PlaneSection plane, float wordsHeight) {
+      float fixed = Legend.height(plane.showsFrame()) + 16f;
+      boolean sketch = sketchHeight(plane, 0f) > 0;
+      float budget = bodyHeight() * 0.75f - wordsHeight - fixed;
+      if (budget < 320f) {
+        // words that fill most of the budget: the drawing goes on a page of its own
+        budget = bodyHeight() - fixed;
+      }
+      float room = sketch ? Math.min(budget - 160f, budget / 1.85f) : budget;
+      return Math.max(150f, room);
+    }
+
     // ---- page one ---------------------------------------------------------------------------
 
-    private void firstPage() throws DocumentException {
+    private void firstPage(List<PlaneSection> full, List<PlaneSection> compact)
+        throws DocumentException {
       ReportHeader h = r.header();
       Paragraph title = new Paragraph(w.text("doc.report.title"), pdf.boldFont(17f));
       title.setSpacingAfter(2f);
@@ -144,10 +215,61 @@ public final class PdfReportRenderer implements ReportRenderer {
             new Paragraph(w.format("draft.banner", "inspection", h.inspectionId()),
                 pdf.boldFont(9f, Palette.DRAFT))));
       }
+      whatToDo(full, compact);
       alert();
-      summary();
+      summary(full, compact);
       cautions();
       particulars();
+    }
+
+    /**
+     * What to do where, before anything else: per plane with anything to keep off or to repair,
+     * or a verdict other than "holds its shape", where to keep people and loads off (for a racking
+     * upright frame the beam bays on both sides too) and how many repairs, which at once.
+     */
+    private void whatToDo(List<PlaneSection> full, List<PlaneSection> compact)
+        throws DocumentException {
+      List<PlaneSection> rows = new ArrayList<>();
+      for (PlaneSection p : full) {
+        boolean any = KeepOffLines.verdict(p).kind() != VerdictKind.HOLDS
+            || r.actions().stream().anyMatch(a -> a.plane().equals(p.name()));
+        if (any) {
+          rows.add(p);
+        }
+      }
+      if (rows.isEmpty()) {
+        return;
+      }
+      doc.add(pdf.heading(w.text("heading.todo"), 12f));
+      PdfPTable t = pdf.table(22, 20, 32, 26);
+      t.setHeaderRows(1);
+      t.addCell(pdf.headCell(w.text("todo.col.plane")));
+      t.addCell(pdf.headCell(w.text("summary.col.verdict")));
+      t.addCell(pdf.headCell(w.text("todo.col.keepoff")));
+      t.addCell(pdf.headCell(w.text("todo.col.repairs")));
+      for (PlaneSection p : rows) {
+        Verdict v = KeepOffLines.verdict(p);
+        PlaneGrid g = p.design().grid();
+        Font f = v.kind() == VerdictKind.HOLDS ? pdf.boldFont(8.5f)
+            : pdf.boldFont(8.5f, v.kind().lost() ? Palette.LOST : Palette.DAMAGED);
+        t.addCell(pdf.cell(p.name(), f));
+        t.addCell(pdf.cell(verdictWords(p), pdf.font(8f)));
+        String keepOff = v.keepOffZone().map(z -> w.format(
+            z.offloadBeside() ? "todo.keepoff.beside" : "todo.keepoff",
+            "lifts", w.numbered("lift", z.lifts(), g.lifts()),
+            "bays", w.numbered("bay", z.bays(), g.bays()))).orElse(w.text("todo.keepoff.none"));
+        t.addCell(pdf.cell(keepOff, v.keepOffZone().isPresent()
+            ? pdf.boldFont(8.5f, Palette.LOST) : pdf.font(8f)));
+        List<RepairStep> steps = r.actions().stream().filter(a -> a.plane().equals(p.name()))
+            .toList();
+        long urgent = steps.stream().filter(PdfReportRenderer::urgent).count();
+        t.addCell(pdf.cell(steps.isEmpty() ? w.text("todo.repairs.none")
+            : w.format("todo.repairs", "count", w.count("action", steps.size()),
+                "urgent", w.count("urgent", urgent),
+                "numbers", w.numbered("action", steps.stream().map(RepairStep::number).toList(), 0)),
+            urgent > 0 ? pdf.boldFont(8.5f) : pdf.font(8.5f)));
+      }
+      doc.add(t);
     }
 
     private void alert() throws DocumentException {
@@ -166,16 +288,14 @@ public final class PdfReportRenderer implements ReportRenderer {
       List<Element> lines = new ArrayList<>();
       if (!lost.isEmpty()) {
         lines.add(new Paragraph(
-            w.format("summary.alert.lost", "count", lost.size(), "total", r.planes().size(),
-                "planes", String.join(", ", lost)), pdf.boldFont(10.5f, Palette.LOST)));
+            w.format("summary.alert.lost", "count", lost.size(), "total",
+                w.count("plane", r.planes().size()), "planes", String.join(", ", lost)),
+            pdf.boldFont(10.5f, Palette.LOST)));
       }
       if (!depends.isEmpty()) {
         lines.add(new Paragraph(
             w.format("summary.alert.depends", "count", depends.size(), "planes",
                 String.join(", ", depends)), pdf.boldFont(9.5f, Palette.DAMAGED)));
-      }
-      for (String keepOff : KeepOffLines.of(r.planes(), w)) {
-        lines.add(new Paragraph(keepOff, pdf.boldFont(9.5f, Palette.LOST)));
       }
       boolean frameLines = false;
       for (String restraint : KeepOffLines.restraint(r.planes(), w)) {
@@ -191,30 +311,38 @@ public final class PdfReportRenderer implements ReportRenderer {
           lines.toArray(new Element[0])));
     }
 
-    private void summary() throws DocumentException {
+    private void summary(List<PlaneSection> full, List<PlaneSection> compact)
+        throws DocumentException {
       doc.add(pdf.heading(w.text("heading.summary"), 11f));
-      PdfPTable t = pdf.table(30, 26, 15, 17, 12);
-      t.setHeaderRows(1);
-      for (String k :
-          new String[] {"plane", "verdict", "dof", "tolerance", "uninspected"}) {
-        t.addCell(pdf.headCell(w.text("summary.col." + k)));
+      if (!full.isEmpty()) {
+        PdfPTable t = pdf.table(30, 26, 15, 17, 12);
+        t.setHeaderRows(1);
+        for (String k :
+            new String[] {"plane", "verdict", "dof", "tolerance", "uninspected"}) {
+          t.addCell(pdf.headCell(w.text("summary.col." + k)));
+        }
+        for (PlaneSection p : full) {
+          VerdictKind v = KeepOffLines.verdict(p).kind();
+          Font f = v == VerdictKind.HOLDS ? pdf.font(8f)
+              : pdf.boldFont(8f, v.lost() ? Palette.LOST : Palette.DAMAGED);
+          StateAnalysis design = p.analysis().design();
+          StateAnalysis asBuilt = p.analysis().analysedState();
+          t.addCell(pdf.cell(p.name(), f));
+          t.addCell(pdf.cell(verdictWords(p), f));
+          t.addCell(pdf.cell(w.format("summary.pair", "design", design.degreesOfFreedom(),
+              "asBuilt", asBuilt.degreesOfFreedom()), f));
+          t.addCell(pdf.cell(w.format("summary.pair", "design", tolerance(design),
+              "asBuilt", tolerance(asBuilt)), f));
+          int unknown = p.analysis().asBuilt().map(AsBuiltAnalysis::unknownPanels).orElse(0);
+          t.addCell(pdf.cell(String.valueOf(unknown), f));
+        }
+        doc.add(t);
       }
-      for (PlaneSection p : r.planes()) {
-        VerdictKind v = KeepOffLines.verdict(p).kind();
-        Font f = v == VerdictKind.HOLDS ? pdf.font(8f)
-            : pdf.boldFont(8f, v.lost() ? Palette.LOST : Palette.DAMAGED);
-        StateAnalysis design = p.analysis().design();
-        StateAnalysis asBuilt = p.analysis().analysedState();
-        t.addCell(pdf.cell(p.name(), f));
-        t.addCell(pdf.cell(verdictWords(p), f));
-        t.addCell(pdf.cell(w.format("summary.pair", "design", design.degreesOfFreedom(),
-            "asBuilt", asBuilt.degreesOfFreedom()), f));
-        t.addCell(pdf.cell(w.format("summary.pair", "design", tolerance(design),
-            "asBuilt", tolerance(asBuilt)), f));
-        int unknown = p.analysis().asBuilt().map(AsBuiltAnalysis::unknownPanels).orElse(0);
-        t.addCell(pdf.cell(String.valueOf(unknown), f));
+      if (!compact.isEmpty()) {
+        doc.add(pdf.para(full.isEmpty()
+            ? w.format("summary.alert.none", "total", compact.size())
+            : w.plural("summary.others", compact.size(), "n", compact.size()), 8.5f));
       }
-      doc.add(t);
       doc.add(pdf.para(w.text("summary.model"), 7.5f));
     }
 
@@ -324,27 +452,26 @@ public final class PdfReportRenderer implements ReportRenderer {
       if (r.actions().isEmpty()) {
         return w.text("particulars.further.none");
       }
-      long urgent = r.actions().stream()
-          .filter(a -> a.priority() == RepairUrgency.ISOLATE
-              || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY)
-          .count();
-      return w.format("particulars.further.plan", "count", r.actions().size(), "urgent", urgent);
+      long urgent = r.actions().stream().filter(PdfReportRenderer::urgent).count();
+      return w.format("particulars.further.plan", "actions", w.count("action", r.actions().size()),
+          "urgent", w.count("urgent", urgent));
     }
 
-    // ---- plane pages ------------------------------------------------------------------------
+    // ---- plane sections ---------------------------------------------------------------------
 
     private org.bracewalk.core.model.PlaneRole roleOf(String plane) {
       return r.planes().stream().filter(p -> p.name().equals(plane)).findFirst()
           .map(PlaneSection::role).orElse(org.bracewalk.core.model.PlaneRole.OTHER);
     }
 
-    private void planePage(PlaneSection plane, Map<PanelRef, List<Integer>> actionsAt,
-        Map<FrameRef, List<Integer>> frameActionsAt) throws DocumentException {
+    /** The words of a plane's section (heading to the naming note) as one borderless cell. */
+    private PdfPTable planeWords(PlaneSection plane) {
+      List<Element> out = new ArrayList<>();
       PlaneGrid g = plane.design().grid();
       StateAnalysis design = plane.analysis().design();
       StateAnalysis state = plane.analysis().analysedState();
       VerdictKind verdict = KeepOffLines.verdict(plane).kind();
-      doc.add(pdf.heading(w.format("heading.plane", "plane", plane.name()), 13f));
+      out.add(pdf.heading(w.format("heading.plane", "plane", plane.name()), 13f));
       Font verdictFont = verdict == VerdictKind.HOLDS ? pdf.boldFont(9.5f)
           : pdf.boldFont(9.5f, verdict.lost() ? Palette.LOST : Palette.DAMAGED);
       Paragraph v = new Paragraph(
@@ -352,60 +479,51 @@ public final class PdfReportRenderer implements ReportRenderer {
               "designDof", design.degreesOfFreedom(), "tolerance", tolerance(state),
               "designTolerance", tolerance(design)), verdictFont);
       v.setSpacingAfter(3f);
-      doc.add(v);
-      double wm = g.bayWidths().stream().mapToDouble(Double::doubleValue).sum();
-      double hm = g.liftHeights().stream().mapToDouble(Double::doubleValue).sum();
-      doc.add(pdf.para(w.format("plane.grid", "lifts", g.lifts(), "bays", g.bays(),
-          "width", w.length(wm), "height", w.length(hm),
+      out.add(v);
+      out.add(pdf.para(w.format("plane.grid", "lifts", g.lifts(), "bays", g.bays(),
+          "width", w.length(ElevationDrawing.widthOf(g)),
+          "height", w.length(ElevationDrawing.heightOf(g)),
           "support", w.code("support", g.support().label())), 8.5f));
       PlaneSection.DesignRef rev = plane.revision();
-      doc.add(pdf.para(rev.author().isBlank()
+      out.add(pdf.para(rev.author().isBlank()
           ? w.format("plane.design.no-author", "number", rev.number(), "date", w.date(rev.date()))
           : w.format("plane.design", "number", rev.number(), "date", w.date(rev.date()), "author",
               rev.author()), 8.5f));
       boolean free = g.support() == Support.FREE;
       List<Parts.Part> parts = Parts.of(state);
-      Parts.Part moving = Parts.moving(state, free);
       if (!state.rigid() && parts.size() > 1) {
         int lowest = Verdict.lowestSwayingLift(g, state);
         for (Parts.Part part : parts) {
-          String lifts = listOrNone(part.block().lifts());
-          String bays = listOrNone(part.block().bays());
+          String bays = w.numbered("bay", part.block().bays(), g.bays());
           if (part.held()) {
             // a lift above the lowest swaying lift keeps its shape but is carried sideways: never "held"
             List<Integer> held = part.block().lifts().stream().filter(i -> i < lowest).toList();
             List<Integer> carried = part.block().lifts().stream().filter(i -> i >= lowest).toList();
             if (!held.isEmpty() || carried.isEmpty()) {
-              Paragraph p = new Paragraph(w.format("plane.part.held", "lifts", listOrNone(held),
-                  "bays", bays), pdf.font(8.5f));
-              p.setIndentationLeft(8f);
-              doc.add(p);
+              out.add(indented(w.format("plane.part.held", "lifts",
+                  w.numbered("lift", held, g.lifts()), "bays", bays), pdf.font(8.5f)));
             }
             if (!carried.isEmpty()) {
-              Paragraph p = new Paragraph(w.format("plane.part.carried", "lifts",
-                  listOrNone(carried)), pdf.boldFont(8.5f, Palette.LOST));
-              p.setIndentationLeft(8f);
-              doc.add(p);
+              out.add(indented(w.format("plane.part.carried", "lifts",
+                  w.numbered("lift", carried, 0)), pdf.boldFont(8.5f, Palette.LOST)));
             }
             continue;
           }
-          Paragraph p = new Paragraph(w.format("plane.part", "letter", part.letter(), "state",
-                  w.text(free ? "plane.part.free" : "plane.part.sways"), "lifts", lifts, "bays", bays),
-                  pdf.boldFont(8.5f, Palette.LOST));
-          p.setIndentationLeft(8f);
-          doc.add(p);
+          out.add(indented(w.format("plane.part", "letter", part.letter(), "state",
+              w.text(free ? "plane.part.free" : "plane.part.sways"), "lifts",
+              w.numbered("lift", part.block().lifts(), g.lifts()), "bays", bays),
+              pdf.boldFont(8.5f, Palette.LOST)));
         }
       }
       if (parts.stream().noneMatch(Parts.Part::sways)) {
         List<Freedom> sways = FrameLooks.freedoms(plane, FreedomKind.SWAY);
         for (int k = 0; k < sways.size(); k++) {
           Freedom f = sways.get(k);
-          Paragraph p = new Paragraph(w.format("plane.freedom.sway", "letter", Parts.letter(k),
-              "count", f.count(), "levels", listOrNone(f.joints().stream().map(Joint::level).toList()),
-              "lines", listOrNone(f.joints().stream().map(Joint::line).toList())),
-              pdf.boldFont(8.5f, Palette.LOST));
-          p.setIndentationLeft(8f);
-          doc.add(p);
+          out.add(indented(w.format("plane.freedom.sway", "letter", Parts.letter(k),
+              "motions", w.count("motion", f.count()),
+              "levels", w.numbered("level", f.joints().stream().map(Joint::level).toList(), 0),
+              "lines", w.numbered("line", f.joints().stream().map(Joint::line).toList(), 0)),
+              pdf.boldFont(8.5f, Palette.LOST)));
         }
       }
       List<Freedom> others = state.freedoms().stream()
@@ -413,38 +531,39 @@ public final class PdfReportRenderer implements ReportRenderer {
       for (Freedom f : others) {
         String key = f.kind() == FreedomKind.LOST_RESTRAINT ? "plane.freedom.lost-restraint"
             : "plane.freedom.loose-end";
-        Paragraph p = new Paragraph(w.format(key, "joint", w.joints(f.joints()), "members",
-            w.freedomMembers(f, plane.role())), pdf.boldFont(8.5f, Palette.DAMAGED));
-        p.setIndentationLeft(8f);
-        doc.add(p);
+        out.add(indented(w.format(key, "joint", w.joints(f.joints()), "members",
+            w.freedomMembers(f, plane.role())), pdf.boldFont(8.5f, Palette.DAMAGED)));
       }
       if (others.stream().anyMatch(f -> f.kind() == FreedomKind.LOST_RESTRAINT)) {
-        doc.add(pdf.para(w.text("plane.freedom.model"), 7.5f));
+        out.add(pdf.para(w.text("plane.freedom.model"), 7.5f));
       }
-      doc.add(pdf.para(state.criticalBraces().isEmpty() ? w.text("plane.critical.none")
+      out.add(pdf.para(state.criticalBraces().isEmpty() ? w.text("plane.critical.none")
           : w.format("plane.critical", "panels", w.panels(state.criticalBraces())), 8.5f));
       if (!state.criticalMembers().isEmpty()) {
-        doc.add(pdf.para(w.format("plane.critical.members", "members",
+        out.add(pdf.para(w.format("plane.critical.members", "members",
             w.frameMembers(state.criticalMembers(), plane.role())), 8.5f));
       }
       if (!plane.design().frameComplete()) {
-        doc.add(pdf.para(w.format("plane.frame.omitted", "members",
+        out.add(pdf.para(w.format("plane.frame.omitted", "members",
             w.frameMembers(List.copyOf(plane.design().sortedOmittedFrame()), plane.role())), 8.5f));
       }
       plane.analysis().asBuilt().ifPresent(ab -> {
         if (ab.unknownPanels() > 0) {
-          add(pdf.para(w.format("plane.uninspected", "count", ab.unknownPanels(), "verdict",
+          out.add(pdf.para(w.format("plane.uninspected", "panels", w.count("panel", ab.unknownPanels()),
+              "verdict",
               w.text(ab.rigidIfUnknownSound() ? "verdict.holds-shape" : "verdict.lost-rigidity")),
               8.5f));
         }
         if (ab.unknownFrameMembers() > 0) {
-          add(pdf.para(w.format("plane.frame.unknown", "count", ab.unknownFrameMembers()), 8.5f));
+          out.add(pdf.para(w.format("plane.frame.unknown", "members",
+              w.count("frame-member", ab.unknownFrameMembers())), 8.5f));
         }
         if (!ab.extraBraces().isEmpty()) {
-          add(pdf.para(w.format("plane.extra", "panels",
+          out.add(pdf.para(w.format("plane.extra", "panels",
               w.panels(ab.extraBraces().stream().map(PlacedBrace::panel).toList())), 8.5f));
         }
       });
+      Parts.Part moving = Parts.moving(state, free);
       if (!state.rigid()) {
         if (plane.analysis().repair().possible()) {
           List<Integer> numbers = r.actions().stream()
@@ -452,75 +571,180 @@ public final class PdfReportRenderer implements ReportRenderer {
                   && a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY)
               .map(RepairStep::number).toList();
           int members = plane.analysis().repair().members().size();
-          doc.add(pdf.para(members == 0
-              ? w.format("plane.repair", "count", plane.analysis().repair().minimum(),
-                  "actions", Wording.ranges(numbers))
-              : w.format("plane.repair.members", "count", plane.analysis().repair().minimum(),
-                  "members", members, "actions", Wording.ranges(numbers)), 8.5f));
+          int count = plane.analysis().repair().minimum();
+          String repair = members == 0
+              ? w.plural("plane.repair", count, "count", count)
+              : w.plural("plane.repair.members", count, "count", count, "members",
+                  w.count("frame-member", members));
+          if (!numbers.isEmpty()) {
+            repair += " " + w.format("plane.repair.actions", "actions",
+                w.numbered("action", numbers, 0));
+          }
+          out.add(pdf.para(repair, 8.5f));
         } else {
-          doc.add(new Paragraph(w.text("plane.repair.impossible"), pdf.boldFont(8.5f, Palette.LOST)));
+          out.add(new Paragraph(w.text("plane.repair.impossible"), pdf.boldFont(8.5f, Palette.LOST)));
         }
         if ((moving != null || plane.sketch() != null) && state.degreesOfFreedom() > 1) {
-          doc.add(pdf.para(w.format("mechanism.more", "n", state.degreesOfFreedom()), 8.5f));
+          out.add(pdf.para(w.format("mechanism.more", "n", state.degreesOfFreedom()), 8.5f));
         }
         if (moving == null && plane.sketch() == null && state.oneWayOnly()) {
-          doc.add(pdf.para(w.text("mechanism.one-way"), 8.5f));
+          out.add(pdf.para(w.text("mechanism.one-way"), 8.5f));
         }
       }
       if (plane.showsFrame()) {
-        doc.add(pdf.para(w.text("plane.frame.naming"), 7.5f));
+        out.add(pdf.para(w.text("plane.frame.naming"), 7.5f));
       }
-      drawings(plane, actionsAt, frameActionsAt, moving);
+      PdfPTable t = new PdfPTable(1);
+      t.setTotalWidth(doc.right() - doc.left());
+      t.setLockedWidth(true);
+      t.setSpacingBefore(0f);
+      t.setSpacingAfter(4f);
+      PdfPCell c = new PdfPCell();
+      c.setBorder(com.lowagie.text.Rectangle.NO_BORDER);
+      c.setPadding(0f);
+      c.setPaddingBottom(2f);
+      for (Element e : out) {
+        c.addElement(e);
+      }
+      t.addCell(c);
+      return t;
     }
 
-    private void add(Element e) {
-      try {
-        doc.add(e);
-      } catch (DocumentException ex) {
-        throw new IllegalStateException(ex);
-      }
+    private static float wordsHeight(PdfPTable t) {
+      return t.calculateHeights(true) + 4f;
     }
 
-    private void drawings(PlaneSection plane, Map<PanelRef, List<Integer>> actionsAt,
-        Map<FrameRef, List<Integer>> frameActionsAt, Parts.Part moving) throws DocumentException {
+    private Paragraph indented(String text, Font f) {
+      Paragraph p = new Paragraph(text, f);
+      p.setIndentationLeft(8f);
+      return p;
+    }
+
+    /**
+     * One plane: its words, then its elevation at 1:{@code scale}, the key and the sketch of how it
+     * moves. The section starts a new page only when the rest of this page cannot hold it whole,
+     * so small planes share pages and no page is left nearly empty.
+     */
+    private void planeSection(PlaneSection plane, PdfPTable words, int scale,
+        Map<PanelRef, List<Integer>> actionsAt, Map<FrameRef, List<Integer>> frameActionsAt)
+        throws DocumentException {
+      PlaneGrid g = plane.design().grid();
       float width = doc.right() - doc.left();
-      boolean sketch = moving != null || plane.sketch() != null;
-      float mechMin = sketch ? 190 : 0;
       boolean frame = plane.showsFrame();
       float legendH = Legend.height(frame);
-      float top = writer.getVerticalPosition(true) - 6;
-      float room = top - doc.bottom() - legendH - mechMin - 12;
-      // a page of words (a frame's freedoms and members) leaves the drawing too little room: give
-      // it a page of its own rather than shrink it below what it would take there (to 260 points)
-      float wanted = Math.min(260f, ElevationDrawing.preferredHeight(plane.design().grid(), width,
-          doc.top() - doc.bottom() - legendH - mechMin - 12));
-      if (room < Math.max(150f, wanted)) {
+      float elevH = ElevationDrawing.heightAt(g, scale);
+      float mechH = sketchHeight(plane, elevH);
+      float drawing = elevH + 6 + legendH + (mechH > 0 ? mechH + 6 : 0) + 10;
+      float wordsH = wordsHeight(words);
+      float left = writer.getVerticalPosition(true) - doc.bottom();
+      // a page more than 40 per cent used starts the section afresh on the next; on a page less
+      // used the words start here (the drawing follows them whole, here or on the next page), so
+      // no page is left nearly empty
+      if (left < wordsH + drawing && left < bodyHeight() * 0.6f) {
+        doc.newPage();
+      }
+      doc.add(words);
+      float top = writer.getVerticalPosition(true) - 2;
+      if (top - doc.bottom() < drawing) {
+        // words that take most of a page: the drawing goes whole onto the next one
         doc.newPage();
         writer.setPageEmpty(false);
         top = doc.top();
-        room = top - doc.bottom() - legendH - mechMin - 12;
       }
       PdfContentByte cb = writer.getDirectContent();
-      PlaneGrid g = plane.design().grid();
-      float elevH = ElevationDrawing.preferredHeight(g, width,
-          !sketch ? room : Math.min(room, (top - doc.bottom() - legendH) * 0.58f));
       new ElevationDrawing(w, pdf.regular, pdf.bold)
-          .draw(cb, plane, actionsAt, frameActionsAt, doc.left(), top - elevH, width, elevH);
+          .draw(cb, plane, actionsAt, frameActionsAt, doc.left(), top - elevH, width, elevH, scale);
       float legendTop = top - elevH - 6;
       Legend.draw(cb, w, pdf.regular, pdf.bold, doc.left(), legendTop, width, frame);
-      if (sketch) {
-        float mechTop = legendTop - legendH - 6;
-        float mechH = Math.min(mechTop - doc.bottom(), 300);
+      float bottom = legendTop - legendH;
+      if (mechH > 0) {
+        float mechTop = bottom - 6;
         MechanismDrawing md = new MechanismDrawing(w, pdf.regular, pdf.bold);
+        StateAnalysis state = plane.analysis().analysedState();
         if (plane.sketch() != null) {
           List<Freedom> sways = FrameLooks.freedoms(plane, FreedomKind.SWAY);
           int k = sways.indexOf(plane.sketch().freedom());
           md.drawMotion(cb, plane, plane.sketch(), Parts.letter(Math.max(0, k)), doc.left(),
               mechTop - mechH, width, mechH);
         } else {
-          md.draw(cb, plane, moving, doc.left(), mechTop - mechH, width, mechH);
+          md.draw(cb, plane, Parts.moving(state, g.support() == Support.FREE), doc.left(),
+              mechTop - mechH, width, mechH);
+        }
+        bottom = mechTop - mechH;
+      }
+      // move the flow below what was drawn
+      Paragraph spacer = new Paragraph(" ", pdf.font(1f));
+      spacer.setSpacingBefore(Math.max(0f, writer.getVerticalPosition(true) - bottom));
+      spacer.setSpacingAfter(8f);
+      doc.add(spacer);
+    }
+
+    /**
+     * The planes that hold their shape with nothing found, in one table of cards, four to a row:
+     * a small elevation of each, every one at the same standard scale, its name, grid, size and
+     * numbers.
+     */
+    private void compactTable(List<PlaneSection> planes) throws DocumentException {
+      final int columns = 4;
+      float width = doc.right() - doc.left();
+      float pictureW = width / columns - 8;
+      float pictureH = 90f;
+      int scale = ElevationDrawing.SCALES[ElevationDrawing.SCALES.length - 1];
+      for (int n : ElevationDrawing.SCALES) {
+        boolean fits = true;
+        for (PlaneSection p : planes) {
+          PlaneGrid g = p.design().grid();
+          double s = ElevationDrawing.POINTS_PER_METRE / n;
+          fits &= ElevationDrawing.widthOf(g) * s <= pictureW - 4
+              && ElevationDrawing.heightOf(g) * s <= pictureH - 4;
+        }
+        if (fits) {
+          scale = n;
+          break;
         }
       }
+      startSection(200f);
+      doc.add(pdf.heading(w.text("heading.compact"), 12f));
+      doc.add(pdf.para(w.format("compact.intro", "scale", scale), 8.5f));
+      float tallest = 0;
+      for (PlaneSection p : planes) {
+        tallest = Math.max(tallest, (float) (ElevationDrawing.heightOf(p.design().grid())
+            * ElevationDrawing.POINTS_PER_METRE / scale) + 4);
+      }
+      PdfPTable t = pdf.table(1, 1, 1, 1);
+      PdfContentByte cb = writer.getDirectContent();
+      for (PlaneSection p : planes) {
+        PlaneGrid g = p.design().grid();
+        PdfPCell c = new PdfPCell();
+        c.setPadding(4f);
+        c.setBorderColor(new java.awt.Color(0xbb, 0xbb, 0xbb));
+        c.setBorderWidth(0.5f);
+        Image picture = Image.getInstance(
+            CompactElevation.draw(cb, p, scale, pictureW, Math.max(tallest, 12f)));
+        picture.setAlignment(Image.ALIGN_CENTER);
+        c.addElement(picture);
+        Paragraph name = new Paragraph(p.name(), pdf.boldFont(7.5f));
+        name.setSpacingBefore(2f);
+        c.addElement(name);
+        StateAnalysis design = p.analysis().design();
+        StateAnalysis state = p.analysis().analysedState();
+        Paragraph facts = new Paragraph(w.format("compact.grid", "lifts", w.count("lift", g.lifts()),
+            "bays", w.count("bay", g.bays()), "width", w.length(ElevationDrawing.widthOf(g)),
+            "height", w.length(ElevationDrawing.heightOf(g)),
+            "support", w.code("support", g.support().label())) + " "
+            + w.format("compact.numbers", "dof", state.degreesOfFreedom(),
+                "designDof", design.degreesOfFreedom(), "tolerance", tolerance(state),
+                "designTolerance", tolerance(design)), pdf.font(6.5f));
+        facts.setLeading(8f);
+        c.addElement(facts);
+        t.addCell(c);
+      }
+      for (int k = planes.size() % columns; k > 0 && k < columns; k++) {
+        PdfPCell empty = pdf.cell("", pdf.font(6f));
+        empty.setBorder(com.lowagie.text.Rectangle.NO_BORDER);
+        t.addCell(empty);
+      }
+      doc.add(t);
     }
 
     // ---- findings, repairs, closing ---------------------------------------------------------
@@ -610,9 +834,7 @@ public final class PdfReportRenderer implements ReportRenderer {
         t.addCell(pdf.headCell(w.text("repairs.col." + k)));
       }
       for (RepairStep a : r.actions()) {
-        boolean urgent = a.priority() == RepairUrgency.ISOLATE
-            || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY;
-        Font f = urgent ? pdf.boldFont(8f, Palette.LOST) : pdf.font(8f);
+        Font f = urgent(a) ? pdf.boldFont(8f, Palette.LOST) : pdf.font(8f);
         t.addCell(pdf.cell(String.valueOf(a.number()), pdf.boldFont(8f)));
         org.bracewalk.core.model.PlaneRole role = roleOf(a.plane());
         t.addCell(pdf.cell(location(w, a, role), f));
@@ -644,10 +866,11 @@ public final class PdfReportRenderer implements ReportRenderer {
       t.addCell(pdf.cell(w.text("signoff.date"), pdf.boldFont(8f, Palette.GRID)));
       t.addCell(pdf.cell("", pdf.font(9f)));
       doc.add(t);
+    }
 
-      if (writer.getVerticalPosition(true) - doc.bottom() < 60 + 12 * r.fingerprint().sections().size()) {
-        doc.newPage();
-      }
+    /** The appendix at the end: the record digests behind the fingerprint on every page. */
+    private void appendix() throws DocumentException {
+      startSection(90f);
       doc.add(pdf.heading(w.text("heading.digests"), 10f));
       doc.add(pdf.para(w.format("digests.intro", "scheme", r.fingerprint().scheme()), 7.5f));
       PdfPTable d = pdf.table(38, 62);
@@ -674,9 +897,12 @@ public final class PdfReportRenderer implements ReportRenderer {
           : w.format("tolerance.at-least", "n", s.lossTolerance());
     }
 
-    private String listOrNone(List<Integer> xs) {
-      return xs.isEmpty() ? w.text("list.none") : Wording.ranges(xs);
-    }
+  }
+
+  /** Whether an action is done at once: taking out of service, off-loading, or for rigidity. */
+  static boolean urgent(RepairStep a) {
+    return a.priority() == RepairUrgency.ISOLATE
+        || a.priority() == RepairUrgency.NEEDED_FOR_RIGIDITY;
   }
 
   /** What an action fits or mends: the diagonal, or the frame member's word (ledger, upright...). */
@@ -692,11 +918,13 @@ public final class PdfReportRenderer implements ReportRenderer {
       return w.format("repairs.location.frame", "plane", a.plane(), "member",
           w.frameMember(a.frameMember(), role));
     }
-    if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE && a.lifts().size() == 1) {
-      return w.format("repairs.location.lift", "plane", a.plane(), "lift", a.lifts().get(0));
+    if (a.type() == RepairStepKind.OFFLOAD_BESIDE) {
+      return w.format("repairs.location.beside", "plane", a.plane(), "lifts",
+          w.numbered("lift", a.lifts(), 0));
     }
     if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE) {
-      return w.format("repairs.location.lifts", "plane", a.plane(), "lifts", Wording.ranges(a.lifts()));
+      return w.format("repairs.location.lifts", "plane", a.plane(), "lifts",
+          w.numbered("lift", a.lifts(), 0));
     }
     return w.format("repairs.location", "plane", a.plane(), "lift", a.panel().lift(), "bay",
         a.panel().bay());
@@ -724,7 +952,7 @@ public final class PdfReportRenderer implements ReportRenderer {
   static Map<String, Map<PanelRef, List<Integer>>> actionsAt(List<RepairStep> actions) {
     Map<String, Map<PanelRef, List<Integer>>> out = new HashMap<>();
     for (RepairStep a : actions) {
-      if (a.type() == RepairStepKind.TAKE_OUT_OF_SERVICE || a.isFrameMember()) {
+      if (a.type().wholeLifts() || a.isFrameMember()) {
         continue;
       }
       out.computeIfAbsent(a.plane(), k -> new HashMap<>())

@@ -30,6 +30,10 @@ final class TemplateSpec {
    */
   static final List<String> FRAME_WORDS = List.of("scaffold", "racking", "upright-frame");
 
+  /** The nouns counted in plain English ({@code count.<noun>.one}, {@code .many}). */
+  static final List<String> COUNTED = List.of("action", "urgent", "plane", "motion", "panel",
+      "frame-member", "lift", "bay");
+
   private static final Map<String, Set<String>> KEYS = build();
 
   private TemplateSpec() {}
@@ -74,7 +78,7 @@ final class TemplateSpec {
     k.put("particulars.action.plane", Set.of("plane"));
     k.put("particulars.action.done", Set.of("at", "by"));
     k.put("particulars.action.outstanding", Set.of());
-    k.put("particulars.further.plan", Set.of("count", "urgent"));
+    k.put("particulars.further.plan", Set.of("actions", "urgent"));
     k.put("particulars.further.none", Set.of());
     for (Particular p : Particular.values()) {
       k.put("particular." + p.code(), Set.of());
@@ -108,6 +112,31 @@ final class TemplateSpec {
     k.put("summary.alert.lost", Set.of("count", "total", "planes"));
     k.put("summary.alert.depends", Set.of("count", "planes"));
     k.put("summary.alert.none", Set.of("total"));
+    // page 1: what to do where
+    k.put("heading.todo", Set.of());
+    k.put("todo.col.plane", Set.of());
+    k.put("todo.col.keepoff", Set.of());
+    k.put("todo.col.repairs", Set.of());
+    k.put("todo.keepoff", Set.of("lifts", "bays"));
+    k.put("todo.keepoff.beside", Set.of("lifts", "bays"));
+    k.put("todo.keepoff.none", Set.of());
+    k.put("todo.repairs", Set.of("count", "urgent", "numbers"));
+    k.put("todo.repairs.none", Set.of());
+    k.put("summary.others.one", Set.of("n"));
+    k.put("summary.others.many", Set.of("n"));
+    // numbers and counts in plain English
+    k.put("words.series", Set.of("first", "last"));
+    for (String noun : new String[] {"lift", "bay", "level", "line", "action"}) {
+      k.put("words." + noun + ".one", Set.of("n"));
+      k.put("words." + noun + ".many", Set.of("n"));
+    }
+    k.put("words.lift.every", Set.of());
+    k.put("words.bay.every", Set.of());
+    for (String noun : COUNTED) {
+      k.put("count." + noun + ".one", Set.of("n"));
+      k.put("count." + noun + ".many", Set.of("n"));
+    }
+    k.put("count.urgent.none", Set.of());
     k.put("summary.model", Set.of());
     k.put("tolerance.not-rigid", Set.of());
     k.put("tolerance.at-least", Set.of("n"));
@@ -139,8 +168,8 @@ final class TemplateSpec {
     k.put("plane.critical.members", Set.of("members"));
     k.put("plane.frame.naming", Set.of());
     k.put("plane.frame.omitted", Set.of("members"));
-    k.put("plane.frame.unknown", Set.of("count"));
-    k.put("plane.freedom.sway", Set.of("letter", "count", "levels", "lines"));
+    k.put("plane.frame.unknown", Set.of("members"));
+    k.put("plane.freedom.sway", Set.of("letter", "motions", "levels", "lines"));
     k.put("plane.freedom.lost-restraint", Set.of("joint", "members"));
     k.put("plane.freedom.loose-end", Set.of("joint", "members"));
     k.put("plane.freedom.model", Set.of());
@@ -154,9 +183,12 @@ final class TemplateSpec {
     k.put("frame.joint", Set.of("level", "line"));
     k.put("frame.diagonal", Set.of("panel"));
     k.put("frame.and", Set.of("first", "second"));
-    k.put("plane.uninspected", Set.of("count", "verdict"));
-    k.put("plane.repair", Set.of("count", "actions"));
-    k.put("plane.repair.members", Set.of("count", "members", "actions"));
+    k.put("plane.uninspected", Set.of("panels", "verdict"));
+    k.put("plane.repair.one", Set.of());
+    k.put("plane.repair.many", Set.of("count"));
+    k.put("plane.repair.members.one", Set.of("members"));
+    k.put("plane.repair.members.many", Set.of("count", "members"));
+    k.put("plane.repair.actions", Set.of("actions"));
     k.put("plane.repair.impossible", Set.of());
     k.put("plane.extra", Set.of("panels"));
     k.put("list.none", Set.of());
@@ -166,6 +198,11 @@ final class TemplateSpec {
     k.put("elevation.lift", Set.of("n"));
     k.put("elevation.bay", Set.of("n"));
     k.put("elevation.overall", Set.of("width", "height"));
+    // planes that hold their shape with nothing found: one compact table
+    k.put("heading.compact", Set.of());
+    k.put("compact.intro", Set.of("scale"));
+    k.put("compact.grid", Set.of("lifts", "bays", "width", "height", "support"));
+    k.put("compact.numbers", Set.of("dof", "designDof", "tolerance", "designTolerance"));
     k.put("mechanism.title", Set.of("part"));
     k.put("mechanism.title.free", Set.of("part"));
     k.put("mechanism.note", Set.of("angle"));
@@ -224,8 +261,8 @@ final class TemplateSpec {
     k.put("repairs.col.when", Set.of());
     k.put("repairs.location", Set.of("plane", "lift", "bay"));
     k.put("repairs.location.lifts", Set.of("plane", "lifts"));
-    k.put("repairs.location.lift", Set.of("plane", "lift"));
     k.put("repairs.location.frame", Set.of("plane", "member"));
+    k.put("repairs.location.beside", Set.of("plane", "lifts"));
     k.put("repairs.deviation", Set.of());
     for (RepairStepKind a : RepairStepKind.values()) {
       k.put("action." + a.code(), Set.of());
@@ -263,8 +300,12 @@ final class TemplateSpec {
     k.put("digests.intro", Set.of("scheme"));
     k.put("digests.fingerprint", Set.of());
     // repair order
-    k.put("order.intro", Set.of("count", "rigidity"));
-    k.put("order.intro.plain", Set.of("count"));
+    k.put("order.intro.one", Set.of());
+    k.put("order.intro.many", Set.of("count", "rigidity"));
+    k.put("order.intro.all", Set.of("count"));
+    k.put("order.intro.plain.one", Set.of());
+    k.put("order.intro.plain.many", Set.of("count"));
+    k.put("order.caution", Set.of());
     k.put("order.safety", Set.of());
     k.put("order.none", Set.of());
     k.put("order.col.number", Set.of());

@@ -133,6 +133,75 @@ final class Wording {
     return sb.toString();
   }
 
+  /**
+   * Numbers as plain English: runs of three or more as a range, the last joined with "and"
+   * ({@code 1, 3-5 and 8}; {@code 1 and 2}; {@code 4}); the joining word from the templates.
+   */
+  String series(List<Integer> numbers) {
+    List<Integer> sorted = numbers.stream().sorted().distinct().toList();
+    List<String> parts = new ArrayList<>();
+    int i = 0;
+    while (i < sorted.size()) {
+      int j = i;
+      while (j + 1 < sorted.size() && sorted.get(j + 1) == sorted.get(j) + 1) {
+        j++;
+      }
+      if (j - i >= 2) {
+        parts.add(sorted.get(i) + "-" + sorted.get(j));
+      } else {
+        for (int k = i; k <= j; k++) {
+          parts.add(String.valueOf(sorted.get(k)));
+        }
+      }
+      i = j + 1;
+    }
+    if (parts.isEmpty()) {
+      return t.text("list.none");
+    }
+    if (parts.size() == 1) {
+      return parts.get(0);
+    }
+    return t.format("words.series", "first", String.join(", ", parts.subList(0, parts.size() - 1)),
+        "last", parts.get(parts.size() - 1));
+  }
+
+  /**
+   * Lifts, bays, levels, lines or actions by number in plain English, singular or plural: {@code
+   * lift 3}, {@code lifts 3-5}, {@code action 2}; for lifts and bays {@code every lift} / {@code
+   * every bay} when the numbers are empty or are all {@code every} of them.
+   *
+   * @param noun {@code lift}, {@code bay}, {@code level}, {@code line} or {@code action}
+   * @param every how many there are in all (lifts or bays of the plane); 0 when not counted
+   */
+  String numbered(String noun, List<Integer> numbers, int every) {
+    List<Integer> sorted = numbers.stream().sorted().distinct().toList();
+    boolean all = every > 0 && (sorted.isEmpty()
+        || (sorted.size() == every && sorted.get(0) == 1 && sorted.get(every - 1) == every));
+    if (all) {
+      return t.text("words." + noun + ".every");
+    }
+    if (sorted.isEmpty()) {
+      return t.text("list.none");
+    }
+    return t.format("words." + noun + (sorted.size() == 1 ? ".one" : ".many"), "n", series(sorted));
+  }
+
+  /**
+   * A count with its noun, singular or plural ({@code 1 action}, {@code 5 actions}); where the
+   * templates have a {@code .none} form ({@code none is needed at once}) zero takes it.
+   */
+  String count(String noun, long n) {
+    if (n == 0 && t.has("count." + noun + ".none")) {
+      return t.text("count." + noun + ".none");
+    }
+    return t.format("count." + noun + (n == 1 ? ".one" : ".many"), "n", n);
+  }
+
+  /** The {@code .one} or {@code .many} form of {@code key} as {@code n} is 1 or not. */
+  String plural(String key, long n, Object... namesAndValues) {
+    return t.format(key + (n == 1 ? ".one" : ".many"), namesAndValues);
+  }
+
   String member(Brace b) {
     if (b == null) {
       return t.text("member.none");

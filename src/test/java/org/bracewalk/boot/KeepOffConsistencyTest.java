@@ -149,8 +149,13 @@ class KeepOffConsistencyTest {
       section = section.contains("=====") ? section.substring(0, section.indexOf("=====")) : section;
       assertThat(zoneIn(section, "")).as("analyse text").isEqualTo(expected);
       String onPlane = "plane " + s.plane() + ": ";
-      assertThat(zoneIn(reportPage1.get(k), onPlane)).as("report page 1").isEqualTo(expected);
-      assertThat(zoneIn(orderPage1.get(k), onPlane)).as("repair order").isEqualTo(expected);
+      int lifts = plane.get("lifts").asInt();
+      int bays = plane.get("bays").asInt();
+      // page 1 of the report: the plane's row of "what to do, and where" (plane, verdict, zone)
+      assertThat(zoneIn(reportPage1.get(k), Pattern.quote(s.plane() + " ") + ".*?", lifts, bays))
+          .as("report page 1").isEqualTo(expected);
+      assertThat(zoneIn(orderPage1.get(k), "Keep people and loads off " + Pattern.quote(onPlane),
+          lifts, bays)).as("repair order").isEqualTo(expected);
       assertThat(banners.get(k)).startsWith("\u25b2 LOST RIGIDITY \u2014 " + s.title());
       assertThat(zoneIn(banners.get(k), "")).as("walk-round banner").isEqualTo(expected);
     }
@@ -172,6 +177,31 @@ class KeepOffConsistencyTest {
   }
 
   private static final String LIST = "(\\d+(?:-\\d+)?(?:, \\d+(?:-\\d+)?)*)";
+  /** The documents' plain English: "lift 3", "lifts 1, 3 and 4", "every lift". */
+  private static final String WORDS = "\\d+(?:-\\d+)?(?:(?:, | and )\\d+(?:-\\d+)?)*";
+
+  /**
+   * The zone named in the documents' words after {@code lead} (a regular expression): {@code
+   * lifts 3-5, every bay}; "every" stands for all {@code lifts} or {@code bays} of the plane.
+   */
+  static Zone zoneIn(String text, String lead, int lifts, int bays) {
+    String flat = text.replaceAll("\\s+", " ");
+    Matcher m = Pattern.compile(lead + "(every lift|lifts? " + WORDS + "), (every bay|bays? "
+        + WORDS + ")").matcher(flat);
+    assertThat(m.find()).as("a keep-off zone after %s in: %s", lead, flat).isTrue();
+    return new Zone(words(m.group(1), lifts), words(m.group(2), bays));
+  }
+
+  private static List<Integer> words(String named, int all) {
+    if (named.startsWith("every")) {
+      List<Integer> out = new ArrayList<>();
+      for (int i = 1; i <= all; i++) {
+        out.add(i);
+      }
+      return out;
+    }
+    return expand(named.substring(named.indexOf(' ') + 1).replace(" and ", ", "));
+  }
 
   /** The zone named in {@code Keep people and loads off [prefix]lifts L, bays B}. */
   static Zone zoneIn(String text, String prefix) {

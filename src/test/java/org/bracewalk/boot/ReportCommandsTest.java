@@ -99,13 +99,15 @@ class ReportCommandsTest {
     Run r = run("repair-order", "--db", db.toString(), "--inspection", "2", "--out", pdf.toString(),
         "--csv", csv.toString());
     assertThat(r.code()).as(r.err()).isZero();
-    // take frame 2 out of service; refit its bottom horizontal, replace its struck upright and
-    // the two diagonals (the demo's after-impact records)
-    assertThat(r.out()).contains("wrote " + pdf + ": 5 actions")
+    // take frame 2 out of service and off-load the beam bays on both sides of it (a racking
+    // upright frame); refit its bottom horizontal, replace its struck upright and the two
+    // diagonals (the demo's after-impact records)
+    assertThat(r.out()).contains("wrote " + pdf + ": 6 actions")
         .containsPattern("registered as issued \\(repair-order \\d+, SHA-256 [0-9a-f]{64}\\)")
         .containsPattern("registered as issued \\(repair-order-csv \\d+, SHA-256 [0-9a-f]{64}\\)");
     assertThat(Files.readString(csv)).startsWith("number,plane,lift,bay,lifts,action,member,kind,"
-        + "urgency,due,deviation,done_by,done_date,level,line\r\n1,frame 2,1,1,1 2 3 4 5,out-of-service,");
+        + "urgency,due,deviation,done_by,done_date,level,line\r\n1,frame 2,1,1,1 2 3 4 5,out-of-service,")
+        .contains("\r\n2,frame 2,1,1,1 2 3 4 5,offload-beside,,,isolate,");
     Run v = run("verify-report", "--db", db.toString(), pdf.toString());
     assertThat(v.code()).isZero();
     assertThat(v.out()).contains("matches: " + pdf + " is the repair-order issued as order.pdf");

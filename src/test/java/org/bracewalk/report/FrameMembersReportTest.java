@@ -52,7 +52,9 @@ class FrameMembersReportTest {
   @Test
   void pageOneNamesTheJointWithoutSidewaysRestraintAfterTheKeepOffLine() throws IOException {
     String first = PdfReportRendererTest.flat(PdfReportRendererTest.pageTexts(scaffold).get(0));
-    int keepOff = first.indexOf("Keep people and loads off plane Return end R1");
+    // the keep-off zone comes first, in the table of what to do where
+    int keepOff = first.indexOf("Return end R1 lost sideways restraint: an engineer checks the"
+        + " member before loading every lift, every bay 2 actions, 2 at once: actions 1 and 2");
     int restraint = first.indexOf("Plane Return end R1: no sideways restraint at level 1, line 0."
         + " The members running through there have a longer unbraced length: an engineer checks"
         + " them before the plane is loaded.");
@@ -76,9 +78,9 @@ class FrameMembersReportTest {
             + " level 2, bay 1, ledger at level 3, bay 1, standard of lift 1 on line 0")
         .contains("How it can move: the joint at level 1, line 0 has no sideways restraint");
     String rack = text(racking);
-    assertThat(rack).contains("Part A sways (free motions: 2): the joints of levels 2-4, lines"
-        + " 0-1 move with it.")
-        .contains("Frame members recorded as not inspected: 1; they count as missing.")
+    assertThat(rack).contains("Part A sways (2 free motions): the joints at levels 2-4, lines"
+        + " 0 and 1 move with it.")
+        .contains("Recorded as not inspected: 1 frame member, counted as missing.")
         .contains("How it can move: part A sways, with the joints drawn moved");
   }
 
@@ -99,9 +101,11 @@ class FrameMembersReportTest {
     assertThat(text(scaffold)).contains("2 Return end R1, ledger at level 1, bay 1 refit ledger at once:"
         + " needed for rigidity");
     String rack = text(racking);
-    assertThat(rack).contains("2 Upright frame F4, upright of lift 2 on line 0 refit upright")
-        .contains("3 Upright frame F4, upright of lift 2 on line 1 replace upright")
-        .contains("4 Upright frame F4, horizontal at level 0, bay 1 inspect, fit if missing"
+    assertThat(rack).contains("2 Upright frame F4: the beam bays on both sides of it, lifts 1-4"
+            + " off-load the beam bays on both sides")
+        .contains("3 Upright frame F4, upright of lift 2 on line 0 refit upright")
+        .contains("4 Upright frame F4, upright of lift 2 on line 1 replace upright")
+        .contains("5 Upright frame F4, horizontal at level 0, bay 1 inspect, fit if missing"
             + " horizontal restores the design's redundancy");
   }
 
@@ -112,9 +116,11 @@ class FrameMembersReportTest {
         "1 Return end R1, lifts 1-3, every bay",
         "2 Return end R1, beam at level 1, bay 1 refit beam",
         "3 Upright frame F4, lifts 1-4, every bay",
-        "4 Upright frame F4, upright of lift 2 on line 0 refit upright",
-        "5 Upright frame F4, upright of lift 2 on line 1 replace upright",
-        "6 Upright frame F4, horizontal at level 0, bay 1 inspect, fit if missing horizontal");
+        "4 Upright frame F4: the beam bays on both sides of it, lifts 1-4 off-load the beam bays"
+            + " on both sides",
+        "5 Upright frame F4, upright of lift 2 on line 0 refit upright",
+        "6 Upright frame F4, upright of lift 2 on line 1 replace upright",
+        "7 Upright frame F4, horizontal at level 0, bay 1 inspect, fit if missing horizontal");
     int last = -1;
     for (String e : expected) {
       int at = text.indexOf(e);

@@ -59,7 +59,10 @@ class PdfRepairOrderRendererTest {
     String text = PdfReportRendererTest.flat(String.join("\n", PdfReportRendererTest.pageTexts(pdf)));
     assertThat(text).contains("Keep people and loads off every part named here as out of service")
         .contains("reviewed by a licensed engineer");
-    assertThat(text.split("_______________ date", -1)).hasSize(ReportFixtures.actions().size() + 1);
+    assertThat(text.split("___________ date", -1)).hasSize(ReportFixtures.actions().size() + 1);
+    // the caution speaks of the repair order itself
+    assertThat(text).contains("This repair order comes from a check of bracing continuity")
+        .doesNotContain("this report");
   }
 
   @Test
@@ -70,16 +73,34 @@ class PdfRepairOrderRendererTest {
         for (COSName name : page.getResources().getXObjectNames()) {
           if (page.getResources().getXObject(name) instanceof PDFormXObject form) {
             String content = new String(form.getContentStream().toByteArray());
-            if (content.contains("Tj")) {
-              continue; // the page total of "page n of N"
+            if (!content.contains(" l")) {
+              continue; // the page total of "page n of N": text only
             }
             forms++;
-            assertThat(content).contains(" l").contains(" re");
+            // the grid, the marked place, and the lift and bay labels
+            assertThat(content).contains(" l").contains(" re").contains("Tj");
+            // large enough for a phone's photo of the page: at least 60 mm wide (170 points),
+            // every label at least 7 points (about 2.5 mm high)
+            assertThat(form.getBBox().getWidth()).isGreaterThanOrEqualTo(170f);
+            java.util.regex.Matcher tf = java.util.regex.Pattern
+                .compile("/\\S+ ([0-9.]+) Tf").matcher(content);
+            while (tf.find()) {
+              assertThat(Float.parseFloat(tf.group(1))).isGreaterThanOrEqualTo(7f);
+            }
           }
         }
       }
       assertThat(forms).isEqualTo(ReportFixtures.actions().size());
     }
+  }
+
+  @Test
+  void eachLocatorLabelsItsLiftsAndBaysWithTheMarkedOnesShown() throws IOException {
+    String text = PdfReportRendererTest.flat(String.join("\n", PdfReportRendererTest.pageTexts(pdf)));
+    // action 2 is in lift 3, bay 1 of the facade; action 5 in lift 5, bay 10; the plan bracing
+    // (3 bays) shows every bay
+    assertThat(text).contains("L3").contains("B1").contains("L5").contains("B10")
+        .contains("B2").contains("B3");
   }
 
   @Test

@@ -435,11 +435,13 @@ final class ReportFixtures {
     return List.of(
         new RepairStep(1, UPRIGHT, PanelRef.of(1, 1), List.of(1, 2, 3, 4),
             RepairStepKind.TAKE_OUT_OF_SERVICE, null, RepairUrgency.ISOLATE, false, day),
-        new RepairStep(2, UPRIGHT, null, List.of(2), RepairStepKind.REFIT, null,
+        new RepairStep(2, UPRIGHT, PanelRef.of(1, 1), List.of(1, 2, 3, 4),
+            RepairStepKind.OFFLOAD_BESIDE, null, RepairUrgency.ISOLATE, false, day),
+        new RepairStep(3, UPRIGHT, null, List.of(2), RepairStepKind.REFIT, null,
             RepairUrgency.NEEDED_FOR_RIGIDITY, false, day, FrameRef.standard(2, 0)),
-        new RepairStep(3, UPRIGHT, null, List.of(2), RepairStepKind.REPLACE, null,
+        new RepairStep(4, UPRIGHT, null, List.of(2), RepairStepKind.REPLACE, null,
             RepairUrgency.NEEDED_FOR_RIGIDITY, false, day, FrameRef.standard(2, 1)),
-        new RepairStep(4, UPRIGHT, null, List.of(1), RepairStepKind.INSPECT, null,
+        new RepairStep(5, UPRIGHT, null, List.of(1), RepairStepKind.INSPECT, null,
             RepairUrgency.RESTORES_REDUNDANCY, false, null, FrameRef.ledger(0, 1)));
   }
 

@@ -27,8 +27,9 @@ import org.bracewalk.core.port.report.RepairUrgency;
  *
  * <ol>
  *   <li>take out of service: every plane that lost rigidity (on a pinned base from its lowest
- *       swaying lift to the top, since everything above moves with it; a free plane whole), and
- *       every racking member bowed beyond twice its limit;
+ *       swaying lift to the top, since everything above moves with it; a free plane whole), for a
+ *       racking upright frame followed by off-loading the beam bays on both sides of it (their
+ *       beams bear on it), and every racking member bowed beyond twice its limit;
  *   <li>the engine's minimal repair set of each plane (needed for rigidity: at once), frame members
  *       (ledgers, standards) before diagonals, since the diagonals are fixed to them;
  *   <li>the rest of the restore-to-design lists, frame members first (restores redundancy only);
@@ -68,6 +69,10 @@ public final class RepairSteps {
         List<Integer> lifts = verdict.keepOffZone().get().lifts();
         isolate.add(new Draft(name, new PanelRef(lifts.get(0), 1), lifts,
             RepairStepKind.TAKE_OUT_OF_SERVICE, null, RepairUrgency.ISOLATE, false, day));
+        if (verdict.keepOffZone().get().offloadBeside()) {
+          isolate.add(new Draft(name, new PanelRef(lifts.get(0), 1), lifts,
+              RepairStepKind.OFFLOAD_BESIDE, null, RepairUrgency.ISOLATE, false, day));
+        }
         planeIsolated = true;
       }
       if (!planeIsolated) {

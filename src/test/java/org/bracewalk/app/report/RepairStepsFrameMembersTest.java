@@ -111,30 +111,39 @@ class RepairStepsFrameMembersTest {
   @Test
   void frameMembersAreRefittedReplacedOrInspectedBeforeTheDiagonalsOfTheirPlane() {
     List<RepairStep> steps = RepairSteps.plan(List.of(exampleA(), exampleI()), Map.of(), DAY);
-    assertThat(steps).extracting(RepairStep::number).containsExactly(1, 2, 3, 4, 5, 6, 7);
+    assertThat(steps).extracting(RepairStep::number).containsExactly(1, 2, 3, 4, 5, 6, 7, 8);
     // isolate both planes first: no block is held where the frame is incomplete, so every lift
     assertThat(steps.get(0).type()).isEqualTo(RepairStepKind.TAKE_OUT_OF_SERVICE);
     assertThat(steps.get(0).lifts()).containsExactly(1, 2, 3);
     assertThat(steps.get(1).type()).isEqualTo(RepairStepKind.TAKE_OUT_OF_SERVICE);
     assertThat(steps.get(1).plane()).isEqualTo("upright frame");
+    // a racking upright frame that lost rigidity: the beam bays on both sides of it are
+    // off-loaded with it (common practice in racking inspection), over the same lifts
+    assertThat(steps.get(2).type()).isEqualTo(RepairStepKind.OFFLOAD_BESIDE);
+    assertThat(steps.get(2).plane()).isEqualTo("upright frame");
+    assertThat(steps.get(2).lifts()).isEqualTo(steps.get(1).lifts());
+    assertThat(steps.get(2).priority()).isEqualTo(RepairUrgency.ISOLATE);
+    // the scaffold's return end is not racking: nothing beside it to off-load
+    assertThat(steps).filteredOn(s -> s.plane().equals("return end"))
+        .noneMatch(s -> s.type() == RepairStepKind.OFFLOAD_BESIDE);
     // then, per plane, the frame before the diagonals fixed to it
-    RepairStep ledger = steps.get(2);
+    RepairStep ledger = steps.get(3);
     assertThat(ledger.frameMember()).isEqualTo(FrameRef.ledger(1, 1));
     assertThat(ledger.panel()).isNull();
     assertThat(ledger.type()).isEqualTo(RepairStepKind.REFIT);
     assertThat(ledger.priority()).isEqualTo(RepairUrgency.NEEDED_FOR_RIGIDITY);
     assertThat(ledger.dueDate()).isEqualTo(DAY);
     assertThat(ledger.lifts()).containsExactly(1, 2);
-    RepairStep diagonal = steps.get(3);
+    RepairStep diagonal = steps.get(4);
     assertThat(diagonal.panel()).isEqualTo(PanelRef.of(3, 1));
     assertThat(diagonal.type()).isEqualTo(RepairStepKind.REPLACE);
     // the upright frame: missing -> refit, beyond use -> replace
-    assertThat(steps.get(4).frameMember()).isEqualTo(FrameRef.standard(2, 0));
-    assertThat(steps.get(4).type()).isEqualTo(RepairStepKind.REFIT);
-    assertThat(steps.get(5).frameMember()).isEqualTo(FrameRef.standard(2, 1));
-    assertThat(steps.get(5).type()).isEqualTo(RepairStepKind.REPLACE);
+    assertThat(steps.get(5).frameMember()).isEqualTo(FrameRef.standard(2, 0));
+    assertThat(steps.get(5).type()).isEqualTo(RepairStepKind.REFIT);
+    assertThat(steps.get(6).frameMember()).isEqualTo(FrameRef.standard(2, 1));
+    assertThat(steps.get(6).type()).isEqualTo(RepairStepKind.REPLACE);
     // last, what restores the design only: the base ledger nobody could see is inspected
-    RepairStep base = steps.get(6);
+    RepairStep base = steps.get(7);
     assertThat(base.frameMember()).isEqualTo(FrameRef.ledger(0, 1));
     assertThat(base.type()).isEqualTo(RepairStepKind.INSPECT);
     assertThat(base.priority()).isEqualTo(RepairUrgency.RESTORES_REDUNDANCY);
@@ -152,11 +161,12 @@ class RepairStepsFrameMembersTest {
     for (String line : lines) {
       assertThat(line.split(",", -1)).hasSize(RepairOrderCsv.COLUMNS.size());
     }
-    assertThat(lines[3]).isEqualTo("3,return end,,1,1 2,refit,ledger,,rigidity,2025-03-14,false,,,1,");
-    assertThat(lines[4]).isEqualTo("4,return end,3,1,3,replace,/,rigid,rigidity,2025-03-14,false,,,,");
-    assertThat(lines[5]).isEqualTo("5,upright frame,2,,2,refit,standard,,rigidity,2025-03-14,false,,,,0");
-    assertThat(lines[6]).isEqualTo("6,upright frame,2,,2,replace,standard,,rigidity,2025-03-14,false,,,,1");
-    assertThat(lines[7]).isEqualTo("7,return end,,1,1,inspect,ledger,,redundancy,,false,,,0,");
+    assertThat(lines[3]).isEqualTo("3,upright frame,2,1,2 3 4,offload-beside,,,isolate,2025-03-14,false,,,,");
+    assertThat(lines[4]).isEqualTo("4,return end,,1,1 2,refit,ledger,,rigidity,2025-03-14,false,,,1,");
+    assertThat(lines[5]).isEqualTo("5,return end,3,1,3,replace,/,rigid,rigidity,2025-03-14,false,,,,");
+    assertThat(lines[6]).isEqualTo("6,upright frame,2,,2,refit,standard,,rigidity,2025-03-14,false,,,,0");
+    assertThat(lines[7]).isEqualTo("7,upright frame,2,,2,replace,standard,,rigidity,2025-03-14,false,,,,1");
+    assertThat(lines[8]).isEqualTo("8,return end,,1,1,inspect,ledger,,redundancy,,false,,,0,");
   }
 
   @Test

@@ -12,9 +12,11 @@ import org.bracewalk.core.model.PanelRef;
  *
  * @param number 1, 2, ... in working order
  * @param plane the plane's name
- * @param panel the panel (for {@link RepairStepKind#TAKE_OUT_OF_SERVICE} the lowest panel of the
- *     affected part); {@code null} for an action on a frame member
- * @param lifts for taking out of service: every lift of the affected part; else the panel's lift
+ * @param panel the panel (for {@link RepairStepKind#TAKE_OUT_OF_SERVICE} and {@link
+ *     RepairStepKind#OFFLOAD_BESIDE} the lowest panel of the affected part); {@code null} for an
+ *     action on a frame member
+ * @param lifts for taking out of service and off-loading beside: every lift of the affected part;
+ *     else the panel's lift
  * @param type what to do
  * @param member the member to fit or repair ({@code null} for taking out of service)
  * @param priority why and how soon
@@ -51,7 +53,7 @@ public record RepairStep(
       throw new IllegalArgumentException("action " + number + " is on one panel or on one frame"
           + " member, not " + (panel == null ? "neither" : "both"));
     }
-    if (frameMember != null && (member != null || type == RepairStepKind.TAKE_OUT_OF_SERVICE
+    if (frameMember != null && (member != null || type.wholeLifts()
         || type == RepairStepKind.BRACE)) {
       throw new IllegalArgumentException("action " + number + " on the " + frameMember
           + " fits no diagonal and is not " + type.code());
