@@ -60,7 +60,7 @@ public final class StartupBench {
     long[] ms = new long[1];
     long[] at = new long[1];
     PrintWriter err = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
-    GuiLauncher.run(Optional.of(Path.of(rest.get(0))), Map.of(GuiLauncher.TIMING_VARIABLE, "1"), err, (stage, sinceJvm) -> {
+    GuiLauncher.run(Optional.of(rest.get(0)), Map.of(GuiLauncher.TIMING_VARIABLE, "1"), err, (stage, sinceJvm) -> {
       ms[0] = sinceJvm;
       at[0] = System.currentTimeMillis();
       stage.close();

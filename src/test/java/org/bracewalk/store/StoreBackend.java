@@ -25,7 +25,7 @@ import org.junit.jupiter.api.Assumptions;
  * reported skipped, saying so; when the variable or {@code CI} is set and no server answers, it
  * fails: in CI a missing server is never a silent skip.
  */
-enum StoreBackend {
+public enum StoreBackend {
   SQLITE,
   POSTGRESQL;
 
@@ -42,7 +42,7 @@ enum StoreBackend {
    * A new, empty (migrated) database of this backend: a file in {@code dir}, or a new database on
    * the test server; its location as {@code --db} takes it.
    */
-  String freshLocation(Path dir) {
+  public String freshLocation(Path dir) {
     if (this == SQLITE) {
       return dir.resolve("b" + NEXT.incrementAndGet() + ".db").toString();
     }
@@ -57,6 +57,11 @@ enum StoreBackend {
       fail("cannot make a test database on " + admin + ": " + e.getMessage(), e);
     }
     return new ServerAddress(admin.host(), admin.port(), name, admin.sslmode()).toString();
+  }
+
+  /** The process environment the tests log in with ({@code PGUSER}, {@code PGPASSWORD}). */
+  public static Map<String, String> env() {
+    return ENV;
   }
 
   /** Opens a new, empty database of this backend. */
