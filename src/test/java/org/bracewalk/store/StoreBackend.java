@@ -19,7 +19,8 @@ import org.junit.jupiter.api.Assumptions;
  *
  * <p>PostgreSQL needs a server: {@value #URL_VARIABLE} names it ({@code
  * postgresql://HOST:PORT/DB}, a throwaway cluster: each test gets a new database there, copied from
- * a migrated template made once per run, and the databases are dropped when the run ends); the
+ * a migrated template made once per run; each is dropped a little later in the run, the last
+ * few and the template when it ends); the
  * login is {@code PGUSER} / {@code ~/.pgpass} / {@code PGPASSWORD}, a role that may create
  * databases and roles. {@code .ci/run} starts one. Without the variable a PostgreSQL test is
  * reported skipped, saying so; when the variable or {@code CI} is set and no server answers, it
@@ -49,6 +50,7 @@ public enum StoreBackend {
     ServerAddress admin = server();
     String name = RUN + "_" + NEXT.incrementAndGet();
     try (Connection c = connectTo(admin); Statement s = c.createStatement()) {
+      dropOlder(s);
       s.execute("CREATE DATABASE " + name + " TEMPLATE " + template(admin, s));
       synchronized (MADE) {
         MADE.add(name);
@@ -62,6 +64,24 @@ public enum StoreBackend {
   /** The process environment the tests log in with ({@code PGUSER}, {@code PGPASSWORD}). */
   public static Map<String, String> env() {
     return ENV;
+  }
+
+  /**
+   * A new database on the test server with nothing in it, not even the schema (for a test that
+   * migrates step by step); its address.
+   */
+  static String blankServerDatabase() {
+    ServerAddress admin = server();
+    String name = RUN + "_" + NEXT.incrementAndGet() + "_blank";
+    try (Connection c = connectTo(admin); Statement s = c.createStatement()) {
+      s.execute("CREATE DATABASE " + name);
+      synchronized (MADE) {
+        MADE.add(name);
+      }
+    } catch (SQLException e) {
+      fail("cannot make a test database on " + admin + ": " + e.getMessage(), e);
+    }
+    return new ServerAddress(admin.host(), admin.port(), name, admin.sslmode()).toString();
   }
 
   /** Opens a new, empty database of this backend. */
@@ -155,6 +175,27 @@ public enum StoreBackend {
       Runtime.getRuntime().addShutdownHook(new Thread(() -> dropAll(admin)));
     }
     return template;
+  }
+
+  /**
+   * Drops this run's test databases but the two made last (a test has closed its database by the
+   * time the next test makes one), so few are left for the end of the run: dropping dozens then
+   * outlasts the time surefire gives a test JVM to exit.
+   */
+  private static void dropOlder(Statement s) throws SQLException {
+    List<String> doomed = new ArrayList<>();
+    synchronized (MADE) {
+      for (String name : MADE) {
+        if (!name.endsWith("_template")) {
+          doomed.add(name);
+        }
+      }
+      doomed = doomed.subList(0, Math.max(0, doomed.size() - 2));
+      MADE.removeAll(doomed);
+    }
+    for (String name : doomed) {
+      s.execute("DROP DATABASE IF EXISTS " + name + " WITH (FORCE)");
+    }
   }
 
   private static void dropAll(ServerAddress admin) {
