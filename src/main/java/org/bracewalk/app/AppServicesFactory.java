@@ -17,6 +17,18 @@ public interface AppServicesFactory {
   AppServices open(Path database);
 
   /**
+   * Opens the services over a team server's database, given as {@code
+   * postgresql://HOST[:PORT]/DB} (credentials from {@code PGUSER}, {@code ~/.pgpass} or {@code
+   * PGPASSWORD}, never from the address). A factory that opens files only refuses it.
+   *
+   * @throws org.bracewalk.core.port.StoreException naming the server when it cannot be opened
+   */
+  default AppServices openServer(String address) {
+    throw new UserInputException("this program opens database files only, not the server "
+        + address);
+  }
+
+  /**
    * Deletes a Bracewalk database file with its companion files, to start it again ({@code demo
    * --replace}); nothing when there is no file. Any other file is refused and left as it was.
    *

@@ -45,12 +45,34 @@ public final class AppContext {
     return AppServices.over(Database.open(database), clock, analyzer);
   }
 
+  /**
+   * Opens a team server's database ({@code postgresql://HOST[:PORT]/DB}) and the services over
+   * it; {@code env} gives the server's login ({@code PGUSER}, {@code PGPASSWORD}, {@code
+   * PGSSLMODE}; the driver reads {@code ~/.pgpass} itself).
+   */
+  public AppServices openServer(String address, Map<String, String> env) {
+    return AppServices.over(Database.open(address, env), clock, analyzer);
+  }
+
   /** Opens services over a file, and deletes a Bracewalk file to start again. */
   public AppServicesFactory factory() {
+    return factory(Map.of());
+  }
+
+  /**
+   * As {@link #factory()}, opening team servers too, logging in with {@code env}'s {@code PGUSER}
+   * and {@code PGPASSWORD}.
+   */
+  public AppServicesFactory factory(Map<String, String> env) {
     return new AppServicesFactory() {
       @Override
       public AppServices open(Path database) {
         return AppContext.this.open(database);
+      }
+
+      @Override
+      public AppServices openServer(String address) {
+        return AppContext.this.openServer(address, env);
       }
 
       @Override
@@ -181,7 +203,7 @@ public final class AppContext {
 
   /** What the store commands need, with the environment given to the program. */
   public CliContext cliContext(Map<String, String> env) {
-    return new CliContext(factory(), env, System.getProperty("os.name", ""),
+    return new CliContext(factory(env), env, System.getProperty("os.name", ""),
         Path.of(System.getProperty("user.home", ".")), clock);
   }
 }

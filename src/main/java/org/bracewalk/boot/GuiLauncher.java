@@ -41,15 +41,15 @@ final class GuiLauncher {
    * The database option when {@code args} ask for the app: none at all, or only {@code --db FILE}
    * (or {@code --db=FILE}); empty when they are a command line.
    */
-  static Optional<Optional<Path>> appRequest(String[] args) {
+  static Optional<Optional<String>> appRequest(String[] args) {
     if (args.length == 0) {
       return Optional.of(Optional.empty());
     }
     if (args.length == 2 && args[0].equals("--db")) {
-      return Optional.of(Optional.of(Path.of(args[1])));
+      return Optional.of(Optional.of(args[1]));
     }
     if (args.length == 1 && args[0].startsWith("--db=") && args[0].length() > 5) {
-      return Optional.of(Optional.of(Path.of(args[0].substring(5))));
+      return Optional.of(Optional.of(args[0].substring(5)));
     }
     return Optional.empty();
   }
@@ -79,7 +79,7 @@ final class GuiLauncher {
   }
 
   /** Opens the app on the chosen database and returns the exit status once its window closes. */
-  static int run(Optional<Path> dbOption, Map<String, String> env, PrintWriter err) {
+  static int run(Optional<String> dbOption, Map<String, String> env, PrintWriter err) {
     return run(dbOption, env, err, null);
   }
 
@@ -88,18 +88,21 @@ final class GuiLauncher {
    * thread with the milliseconds since the JVM started, once the first frame of the window has been
    * drawn (the start-up benchmark closes the window there).
    */
-  static int run(Optional<Path> dbOption, Map<String, String> env, PrintWriter err,
+  static int run(Optional<String> dbOption, Map<String, String> env, PrintWriter err,
       java.util.function.BiConsumer<Stage, Long> ready) {
     AppContext context = AppContext.standard();
     CliContext cli = context.cliContext(env);
-    Path db = cli.database(dbOption.orElse(null));
+    String db = cli.location(dbOption.orElse(null));
     boolean timing = "1".equals(env.get(TIMING_VARIABLE));
     logInternalErrors(new ErrorLog(cli.logFolder()), err);
     // open the database while the toolkit starts: the two together decide the start-up time
     // the default data folder is made when missing; any other folder must exist (CliContext)
     CompletableFuture<AppServices> opening = CompletableFuture.supplyAsync(() -> {
-      cli.prepareFolder(db);
-      return context.open(db);
+      if (CliContext.isServer(db)) {
+        return context.openServer(db, env);
+      }
+      cli.prepareFolder(Path.of(db));
+      return context.open(Path.of(db));
     });
     CountDownLatch closed = new CountDownLatch(1);
     CompletableFuture<Void> started = new CompletableFuture<>();
@@ -126,7 +129,7 @@ final class GuiLauncher {
     Platform.runLater(() -> {
       stage[0] = new Stage();
       stage[0].setOnHidden(e -> closed.countDown());
-      app.showOpening(stage[0], new FxDialogService(stage[0]), db.toString());
+      app.showOpening(stage[0], new FxDialogService(stage[0]), CliContext.shown(db));
       mark(timing, err, "opening window shown");
     });
     AppServices services;
@@ -134,7 +137,8 @@ final class GuiLauncher {
       services = opening.join();
     } catch (RuntimeException e) {
       Throwable cause = e.getCause() == null ? e : e.getCause();
-      err.println("bracewalk: cannot open the database " + db + ": " + cause.getMessage());
+      err.println("bracewalk: cannot open the database " + CliContext.shown(db) + ": "
+          + cause.getMessage());
       err.println("Give another file with --db FILE, or set " + CliContext.DB_VARIABLE + ".");
       err.flush();
       Platform.exit();

@@ -4,7 +4,6 @@ package org.bracewalk.boot;
 import java.io.PrintWriter;
 import java.lang.management.ManagementFactory;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -60,7 +59,7 @@ public final class StartupBench {
     long[] ms = new long[1];
     long[] at = new long[1];
     PrintWriter err = new PrintWriter(System.err, true, StandardCharsets.UTF_8);
-    GuiLauncher.run(Optional.of(Path.of(rest.get(0))), Map.of(GuiLauncher.TIMING_VARIABLE, "1"), err, (stage, sinceJvm) -> {
+    GuiLauncher.run(Optional.of(rest.get(0)), Map.of(GuiLauncher.TIMING_VARIABLE, "1"), err, (stage, sinceJvm) -> {
       ms[0] = sinceJvm;
       at[0] = System.currentTimeMillis();
       stage.close();

@@ -54,6 +54,47 @@ public record CliContext(
     return defaultFolder().resolve("bracewalk.db").toAbsolutePath();
   }
 
+  /** The scheme of a team server's address (PostgreSQL's connection URI). */
+  public static final String SERVER_SCHEME = "postgresql://";
+
+  /** True when a database given as text is a team server's address rather than a file. */
+  public static boolean isServer(String location) {
+    return location != null
+        && location.regionMatches(true, 0, SERVER_SCHEME, 0, SERVER_SCHEME.length());
+  }
+
+  /**
+   * The database as it may be shown (screen, title, log): a server address's user name and
+   * password, if someone wrote them into it, hidden (the store then refuses the address).
+   */
+  public static String shown(String location) {
+    if (!isServer(location)) {
+      return location;
+    }
+    int slash = location.indexOf('/', SERVER_SCHEME.length());
+    String authority = slash < 0 ? location.substring(SERVER_SCHEME.length())
+        : location.substring(SERVER_SCHEME.length(), slash);
+    int at = authority.lastIndexOf('@');
+    return at < 0 ? location
+        : SERVER_SCHEME + "***" + location.substring(SERVER_SCHEME.length() + at);
+  }
+
+  /**
+   * The database as given: {@code --db} when given, else {@code $BRACEWALK_DB}, else the default
+   * file ({@link #database(Path)}); a team server's address ({@code postgresql://...}) is kept as
+   * it is, a file is made absolute.
+   */
+  public String location(String option) {
+    if (option != null && !option.isBlank()) {
+      return isServer(option) ? option : database(Path.of(option)).toString();
+    }
+    String fromEnv = env.get(DB_VARIABLE);
+    if (isServer(fromEnv)) {
+      return fromEnv.trim();
+    }
+    return database((Path) null).toString();
+  }
+
   /**
    * Makes sure the database's folder is there: the per-user default data folder is created when
    * missing; any other folder must exist already, so a mistyped {@code --db} or {@code

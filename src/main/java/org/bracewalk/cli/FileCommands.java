@@ -220,6 +220,15 @@ final class FileCommands {
     }
 
     @Override
+    void beforeOpenServer(String address) {
+      if (replace) {
+        throw new org.bracewalk.app.UserInputException("--replace deletes a database file; " + address + " is a"
+            + " server's database, which Bracewalk never deletes (its administrator drops and"
+            + " creates it: README, \"A team server: PostgreSQL\")");
+      }
+    }
+
+    @Override
     int run(AppServices s, PrintWriter out, PrintWriter err) {
       ImportedSite imported = s.demo().load();
       out.println("demo loaded");

@@ -31,11 +31,12 @@ abstract class StoreCommand implements Callable<Integer> {
 
   @Option(
       names = "--db",
-      paramLabel = "FILE",
+      paramLabel = "FILE|postgresql://HOST[:PORT]/DB",
       description =
-          "The database file (created when new). Default: $BRACEWALK_DB, else bracewalk.db in"
-              + " the per-user data folder.")
-  Path db;
+          "The database file (created when new), or a team server's database (login: PGUSER,"
+              + " ~/.pgpass or PGPASSWORD). Default: $BRACEWALK_DB, else bracewalk.db in the"
+              + " per-user data folder.")
+  String db;
 
   final CliContext context;
 
@@ -53,12 +54,18 @@ abstract class StoreCommand implements Callable<Integer> {
   public final Integer call() {
     PrintWriter out = spec.commandLine().getOut();
     PrintWriter err = spec.commandLine().getErr();
-    Path file = context.database(db);
-    err.println("database: " + file);
+    String where = context.location(db);
+    boolean server = CliContext.isServer(where);
+    Path file = server ? null : Path.of(where);
+    err.println("database: " + CliContext.shown(where));
     err.flush();
     try {
-      context.prepareFolder(file);
-      beforeOpen(file, err);
+      if (server) {
+        beforeOpenServer(where);
+      } else {
+        context.prepareFolder(file);
+        beforeOpen(file, err);
+      }
     } catch (RuntimeException e) {
       if (!Refusals.isRefusal(e)) {
         throw e;
@@ -66,7 +73,8 @@ abstract class StoreCommand implements Callable<Integer> {
       err.println("error: " + e.getMessage());
       return BAD_INPUT;
     }
-    try (AppServices services = context.services().open(file)) {
+    try (AppServices services = server ? context.services().openServer(where)
+        : context.services().open(file)) {
       outputs = services.outputs();
       return run(services, out, err);
     } catch (RuntimeException e) {
@@ -82,8 +90,11 @@ abstract class StoreCommand implements Callable<Integer> {
     }
   }
 
-  /** Runs before the database is opened; nothing by default. */
+  /** Runs before the database file is opened; nothing by default. */
   void beforeOpen(Path file, PrintWriter err) {}
+
+  /** Runs before a team server's database is opened; nothing by default. */
+  void beforeOpenServer(String address) {}
 
   /** The command's work; returns the exit status. */
   abstract int run(AppServices services, PrintWriter out, PrintWriter err);

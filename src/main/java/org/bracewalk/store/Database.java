@@ -12,6 +12,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Properties;
 import java.util.concurrent.locks.ReentrantLock;
 import java.util.logging.Level;
 import java.util.logging.Logger;
@@ -26,14 +27,17 @@ import org.bracewalk.core.port.SiteRepository;
 import org.bracewalk.core.port.StoreException;
 import org.bracewalk.core.port.StructureRepository;
 import org.flywaydb.core.Flyway;
+import javax.sql.DataSource;
 import org.flywaydb.core.api.FlywayException;
+import org.postgresql.ds.PGSimpleDataSource;
 import org.sqlite.SQLiteConfig;
 import org.sqlite.SQLiteDataSource;
 
 /**
- * One Bracewalk database file: opens it (creating it when new), brings its schema up to date with
- * the Flyway migrations packed as {@code classpath:db/migration}, and serves the repositories over
- * one connection.
+ * One Bracewalk database, a file or a team server: opens it (creating a file when new), brings its
+ * schema up to date with the Flyway migrations of its {@link Dialect} ({@code
+ * classpath:db/migration} for a file, {@code classpath:db/postgresql} for a PostgreSQL server,
+ * the same versions and rules), and serves the repositories over one connection.
  *
  * <p>Every connection (Flyway's too) runs with foreign keys on, the WAL journal, {@code
  * synchronous=FULL} (a commit is on disk before it returns: an acknowledged observation survives a
@@ -59,7 +63,11 @@ public final class Database implements RecordStore {
   /** How long a write waits for another program's write to finish. */
   static final int BUSY_TIMEOUT_MS = 10_000;
 
+  /** The database file; null for a server. */
   private final Path file;
+  /** The file, or the server's address (never with credentials), as messages name it. */
+  private final String location;
+  private final Dialect dialect;
   private final Connection connection;
   private final int busyTimeoutMs;
   private final ReentrantLock lock = new ReentrantLock();
@@ -76,8 +84,11 @@ public final class Database implements RecordStore {
   private final JdbcRepairRepository repairs = new JdbcRepairRepository(this);
   private final JdbcIssuedReportRepository issuedReports = new JdbcIssuedReportRepository(this);
 
-  private Database(Path file, Connection connection, int busyTimeoutMs) {
+  private Database(Path file, String location, Dialect dialect, Connection connection,
+      int busyTimeoutMs) {
     this.file = file;
+    this.location = location;
+    this.dialect = dialect;
     this.connection = connection;
     this.busyTimeoutMs = busyTimeoutMs;
   }
@@ -115,10 +126,62 @@ public final class Database implements RecordStore {
       if (kind != DatabaseFile.Kind.BRACEWALK) {
         DatabaseFile.mark(c);
       }
-      return new Database(absolute, c, busyTimeoutMs);
+      return new Database(absolute, absolute.toString(), Dialect.SQLITE, c, busyTimeoutMs);
     } catch (SQLException e) {
       throw SqlErrors.translate(e, absolute.toString(), busyTimeoutMs);
     }
+  }
+
+  /**
+   * Opens a database given as text: a team server ({@code postgresql://HOST[:PORT]/DB}, see
+   * {@link ServerAddress}) or a file path ({@link #open(Path)}).
+   *
+   * @param location the file or the server address
+   * @param env the process environment, for the server's {@code PGUSER}, {@code PGPASSWORD} and
+   *     {@code PGSSLMODE}
+   * @throws StoreException naming the file or server when it cannot be opened or migrated
+   */
+  public static Database open(String location, Map<String, String> env) {
+    if (ServerAddress.isServer(location)) {
+      return open(ServerAddress.parse(location, env), env, BUSY_TIMEOUT_MS);
+    }
+    return open(Path.of(location));
+  }
+
+  /**
+   * Opens a team server's database and migrates it when the role may (a working role on a
+   * migrated database needs no more than the documented grants: the schema is current, so
+   * Flyway is not run). Every connection waits at most {@code busyTimeoutMs} for a row another
+   * session holds ({@code lock_timeout}), then reports the server busy.
+   */
+  static Database open(ServerAddress server, Map<String, String> env, int busyTimeoutMs) {
+    String where = server.toString();
+    PGSimpleDataSource dataSource = serverDataSource(server, env);
+    migrate(dataSource, where, Dialect.POSTGRESQL);
+    try {
+      Connection c = dataSource.getConnection();
+      try (Statement s = c.createStatement()) {
+        s.execute("SET lock_timeout = " + busyTimeoutMs);
+      }
+      return new Database(null, where, Dialect.POSTGRESQL, c, busyTimeoutMs);
+    } catch (SQLException e) {
+      throw SqlErrors.translate(e, where, busyTimeoutMs);
+    }
+  }
+
+  static PGSimpleDataSource serverDataSource(ServerAddress server, Map<String, String> env) {
+    PGSimpleDataSource ds = new PGSimpleDataSource();
+    ds.setURL(server.jdbcUrl());
+    Properties p = server.properties(env);
+    for (String name : p.stringPropertyNames()) {
+      try {
+        ds.setProperty(name, p.getProperty(name));
+      } catch (SQLException e) {
+        throw new StoreException("the server " + server + ": " + e.getMessage(), e);
+      }
+    }
+    ds.setConnectTimeout(10);
+    return ds;
   }
 
   /**
@@ -196,9 +259,15 @@ public final class Database implements RecordStore {
    * Flyway's runs.
    */
   static boolean schemaIsCurrent(SQLiteDataSource dataSource) {
+    return schemaIsCurrent(dataSource, Dialect.SQLITE);
+  }
+
+  /** As {@link #schemaIsCurrent(SQLiteDataSource)}, for a database of either dialect. */
+  static boolean schemaIsCurrent(DataSource dataSource, Dialect dialect) {
     try (Connection c = dataSource.getConnection(); Statement s = c.createStatement()) {
-      try (ResultSet t = s.executeQuery(
-          "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'flyway_schema_history'")) {
+      try (ResultSet t = s.executeQuery(dialect == Dialect.SQLITE
+          ? "SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = 'flyway_schema_history'"
+          : "SELECT 1 WHERE to_regclass('flyway_schema_history') IS NOT NULL")) {
         if (!t.next()) {
           return false;
         }
@@ -208,7 +277,7 @@ public final class Database implements RecordStore {
           "SELECT script, success FROM flyway_schema_history WHERE version IS NOT NULL"
               + " ORDER BY installed_rank")) {
         while (r.next()) {
-          if (r.getInt(2) != 1) {
+          if (!r.getBoolean(2)) {
             return false;
           }
           applied.add(r.getString(1));
@@ -221,14 +290,18 @@ public final class Database implements RecordStore {
   }
 
   private static void migrate(SQLiteDataSource dataSource, Path file) {
-    if (schemaIsCurrent(dataSource)) {
+    migrate(dataSource, file.toString(), Dialect.SQLITE);
+  }
+
+  private static void migrate(DataSource dataSource, String file, Dialect dialect) {
+    if (schemaIsCurrent(dataSource, dialect)) {
       return;
     }
     FLYWAY_LOG.fine(() -> "migrating " + file);
     Flyway flyway =
         Flyway.configure(Database.class.getClassLoader())
             .dataSource(dataSource)
-            .locations("classpath:db/migration")
+            .locations(dialect.migrations())
             .load();
     try {
       flyway.migrate();
@@ -239,12 +312,18 @@ public final class Database implements RecordStore {
         Thread.sleep(200);
         flyway.migrate();
       } catch (FlywayException again) {
+        if (dialect == Dialect.POSTGRESQL && again.getCause() instanceof SQLException sql
+            && sql.getSQLState() != null && sql.getSQLState().startsWith("08")) {
+          throw SqlErrors.translate(sql, file);
+        }
         throw new StoreException(
             "cannot open "
                 + file
                 + " as a Bracewalk database: "
                 + rootMessage(again)
-                + " (is it a Bracewalk database file?)",
+                + (dialect == Dialect.SQLITE ? " (is it a Bracewalk database file?)"
+                    : " (a working role cannot migrate: run Bracewalk once as the migration role;"
+                        + " see README, \"A team server: PostgreSQL\")"),
             again);
       } catch (InterruptedException e) {
         Thread.currentThread().interrupt();
@@ -312,7 +391,7 @@ public final class Database implements RecordStore {
       requireOpen();
       return work.run(connection);
     } catch (SQLException e) {
-      throw SqlErrors.translate(e, file.toString(), subject, busyTimeoutMs);
+      throw SqlErrors.translate(e, location, subject, busyTimeoutMs);
     } finally {
       lock.unlock();
     }
@@ -339,7 +418,7 @@ public final class Database implements RecordStore {
           depth--;
         }
       }
-      execute("BEGIN IMMEDIATE", false);
+      execute(dialect.begin(), false);
       depth = 1;
       T result;
       try {
@@ -384,7 +463,7 @@ public final class Database implements RecordStore {
   }
 
   private StoreException translate(SQLException e) {
-    return SqlErrors.translate(e, file.toString(), busyTimeoutMs);
+    return SqlErrors.translate(e, location, busyTimeoutMs);
   }
 
   /**
@@ -402,12 +481,13 @@ public final class Database implements RecordStore {
   }
 
   /**
-   * The id SQLite gave the last row inserted on this connection. Asked through a kept statement:
+   * The id the database gave the last row inserted on this connection ({@link
+   * Dialect#lastInsertId}). Asked through a kept statement:
    * the driver's generated-keys path prepares a new query each time, which costs more than the
    * insert itself. Call only inside {@link #call}, right after the insert.
    */
   long lastInsertId() throws SQLException {
-    try (ResultSet r = prepared("SELECT last_insert_rowid()").executeQuery()) {
+    try (ResultSet r = prepared(dialect.lastInsertId()).executeQuery()) {
       if (!r.next()) {
         throw new SQLException("no id came back for the new row");
       }
@@ -422,27 +502,44 @@ public final class Database implements RecordStore {
 
   private void requireOpen() {
     if (closed) {
-      throw new StoreException("the database " + file + " is closed");
+      throw new StoreException("the database " + location + " is closed");
     }
   }
 
-  /** The database file. */
+  /** The database file; null when the database is a server's. */
   public Path file() {
     return file;
   }
 
   @Override
   public java.util.Optional<Path> databaseFile() {
-    return java.util.Optional.of(file);
+    return java.util.Optional.ofNullable(file);
   }
 
   @Override
   public String location() {
-    return file.toString();
+    return location;
   }
 
-  /** Runs {@code PRAGMA integrity_check} and returns its first line ({@code ok} when sound). */
+  /** True when this is a team server's database rather than a file. */
+  public boolean onServer() {
+    return dialect == Dialect.POSTGRESQL;
+  }
+
+  /** The SQL dialect of this store. */
+  Dialect dialect() {
+    return dialect;
+  }
+
+  /**
+   * Runs {@code PRAGMA integrity_check} and returns its first line ({@code ok} when sound). A
+   * server checks its own pages; there it is refused, naming the server.
+   */
   public String integrityCheck() {
+    if (dialect != Dialect.SQLITE) {
+      throw new StoreException("the integrity check reads a SQLite file; " + location
+          + " is a PostgreSQL server (its administrator checks it, e.g. with pg_amcheck)");
+    }
     return call(
         c -> {
           try (Statement s = c.createStatement()) {

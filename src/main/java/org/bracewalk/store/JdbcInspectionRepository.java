@@ -24,8 +24,8 @@ final class JdbcInspectionRepository implements InspectionRepository {
          competent_person, shift, storage_safety_person, reason, status,
          carried_out_for_name, carried_out_for_address, inspection_interval_days)
       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?,
-              CASE WHEN ?10 = 'finalised'
-                   THEN (SELECT inspection_interval_days FROM structures WHERE id = ?1) END)
+              CASE WHEN ? = 'finalised'
+                   THEN (SELECT inspection_interval_days FROM structures WHERE id = ?) END)
       """;
   private static final String SELECT =
       """
@@ -67,6 +67,9 @@ final class JdbcInspectionRepository implements InspectionRepository {
             s.setString(10, inspection.status().label());
             s.setString(11, inspection.carriedOutForName());
             s.setString(12, inspection.carriedOutForAddress());
+            // the status and structure again: plain positional parameters, as both stores take
+            s.setString(13, inspection.status().label());
+            s.setLong(14, inspection.structureId());
             s.executeUpdate();
             return find(db.lastInsertId()).orElseThrow();
           }

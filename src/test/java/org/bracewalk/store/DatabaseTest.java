@@ -28,7 +28,13 @@ import org.bracewalk.core.port.InspectionFinalisedException;
 import org.bracewalk.core.port.StoreException;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.EnumSource;
 
+/**
+ * The store's behaviour; the tests with a {@link StoreBackend} parameter run against both stores
+ * (a database file and a PostgreSQL server), the others are about the SQLite file itself.
+ */
 class DatabaseTest {
   @TempDir Path dir;
 
@@ -57,14 +63,15 @@ class DatabaseTest {
     }
   }
 
-  @Test
-  void reopeningAppliesNoMigrationTwiceAndKeepsTheRecords() {
-    Path file = dir.resolve("b.db");
+  @ParameterizedTest
+  @EnumSource(StoreBackend.class)
+  void reopeningAppliesNoMigrationTwiceAndKeepsTheRecords(StoreBackend backend) {
+    String location = backend.freshLocation(dir);
     long planeId;
-    try (Database db = Database.open(file)) {
+    try (Database db = StoreBackend.reopen(location)) {
       planeId = Fixtures.plane(Fixtures.Services.over(db)).id();
     }
-    try (Database db = Database.open(file)) {
+    try (Database db = StoreBackend.reopen(location)) {
       PlaneRecord plane = db.planes().find(planeId).orElseThrow();
       assertThat(plane.grid()).isEqualTo(Fixtures.threeByTwo().grid());
       assertThat(db.designs().latest(planeId).orElseThrow().design())
@@ -134,9 +141,10 @@ class DatabaseTest {
         .hasMessageContaining(file.toString());
   }
 
-  @Test
-  void recordsComeBackAsStored() {
-    try (Database db = Database.open(dir.resolve("b.db"))) {
+  @ParameterizedTest
+  @EnumSource(StoreBackend.class)
+  void recordsComeBackAsStored(StoreBackend backend) {
+    try (Database db = backend.open(dir)) {
       Fixtures.Services s = Fixtures.Services.over(db);
       PlaneRecord plane = Fixtures.plane(s);
       Inspection inspection =
@@ -158,10 +166,11 @@ class DatabaseTest {
     }
   }
 
-  @Test
-  void observationsCannotBeChangedOrDeletedEvenBySql() throws Exception {
-    Path file = dir.resolve("b.db");
-    try (Database db = Database.open(file)) {
+  @ParameterizedTest
+  @EnumSource(StoreBackend.class)
+  void observationsCannotBeChangedOrDeletedEvenBySql(StoreBackend backend) throws Exception {
+    String location = backend.freshLocation(dir);
+    try (Database db = StoreBackend.reopen(location)) {
       Fixtures.Services s = Fixtures.Services.over(db);
       PlaneRecord plane = Fixtures.plane(s);
       long inspection = s.inspections().start(plane.structureId(),
@@ -169,7 +178,7 @@ class DatabaseTest {
       s.inspections().recordObservation(inspection,
           NewObservation.of(plane.id(), PanelRef.of(1, 1), PanelState.SOUND, "M. Okafor"));
     }
-    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
+    try (Connection c = StoreBackend.connect(location);
         Statement st = c.createStatement()) {
       // the database's own message is literal text (it must parse in SQLite before 3.47)
       assertThatThrownBy(() -> st.executeUpdate("UPDATE observations SET state = 'missing'"))
@@ -179,13 +188,14 @@ class DatabaseTest {
     }
   }
 
-  @Test
-  void aFinalisedInspectionRefusesChangesInCodeAndInTheDatabase() throws Exception {
-    Path file = dir.resolve("b.db");
+  @ParameterizedTest
+  @EnumSource(StoreBackend.class)
+  void aFinalisedInspectionRefusesChangesInCodeAndInTheDatabase(StoreBackend backend) throws Exception {
+    String location = backend.freshLocation(dir);
     long inspection;
     long observation;
     long planeId;
-    try (Database db = Database.open(file)) {
+    try (Database db = StoreBackend.reopen(location)) {
       Fixtures.Services s = Fixtures.Services.over(db);
       PlaneRecord plane = Fixtures.plane(s);
       planeId = plane.id();
@@ -216,7 +226,7 @@ class DatabaseTest {
           .isInstanceOf(InspectionFinalisedException.class)
           .hasMessageContaining("inspection " + id);
     }
-    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
+    try (Connection c = StoreBackend.connect(location);
         Statement st = c.createStatement()) {
       assertThatThrownBy(() -> st.executeUpdate("UPDATE inspections SET inspector_name = 'X'"))
           .hasMessageContaining("the inspection is finalised and cannot be changed (update it)");
@@ -225,9 +235,10 @@ class DatabaseTest {
     }
   }
 
-  @Test
-  void foreignKeysRefuseAnObservationOfAnUnknownInspection() {
-    try (Database db = Database.open(dir.resolve("b.db"))) {
+  @ParameterizedTest
+  @EnumSource(StoreBackend.class)
+  void foreignKeysRefuseAnObservationOfAnUnknownInspection(StoreBackend backend) {
+    try (Database db = backend.open(dir)) {
       Fixtures.Services s = Fixtures.Services.over(db);
       PlaneRecord plane = Fixtures.plane(s);
       Observation orphan = new Observation(0, 99, plane.id(), PanelRef.of(1, 1), PanelState.SOUND,
@@ -237,9 +248,10 @@ class DatabaseTest {
     }
   }
 
-  @Test
-  void aFailedTransactionLeavesNothingBehind() {
-    try (Database db = Database.open(dir.resolve("b.db"))) {
+  @ParameterizedTest
+  @EnumSource(StoreBackend.class)
+  void aFailedTransactionLeavesNothingBehind(StoreBackend backend) {
+    try (Database db = backend.open(dir)) {
       Fixtures.Services s = Fixtures.Services.over(db);
       assertThatThrownBy(() -> db.inTransaction(() -> {
         s.sites().createSite(Fixtures.site());
@@ -282,9 +294,10 @@ class DatabaseTest {
     }
   }
 
-  @Test
-  void aSecondPlaneOfTheSameNameIsRefusedByName() {
-    try (Database db = Database.open(dir.resolve("b.db"))) {
+  @ParameterizedTest
+  @EnumSource(StoreBackend.class)
+  void aSecondPlaneOfTheSameNameIsRefusedByName(StoreBackend backend) {
+    try (Database db = backend.open(dir)) {
       Fixtures.Services s = Fixtures.Services.over(db);
       PlaneRecord plane = Fixtures.plane(s);
       assertThatThrownBy(() -> db.planes().add(new PlaneRecord(0, plane.structureId(), "spine",

@@ -23,17 +23,71 @@ import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneRecord;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.EnumSource;
 
 /**
  * Migration V9 (frame members) for any SQLite client: observations of frame members are as
  * append-only as those of diagonals and stay out of finalised inspections; a design revision's
  * frame members left out never change; values are checked by the schema. And a file of V8 keeps
- * every record, id and guard through the rebuild of observations, photos and sources.
+ * every record, id and guard through the rebuild of observations, photos and sources. The
+ * tests with a {@link StoreBackend} run against both stores (on PostgreSQL, V9 changes the
+ * columns in place).
  */
 class FrameMemberSqlTest {
   private static final String AT = "'2025-03-03T09:00:00.000Z'";
 
   @TempDir Path dir;
+
+  /** Runs each statement over plain JDBC, on either store (foreign keys on in a file). */
+  private static void run(String location, String... sql) throws SQLException {
+    try (Connection c = StoreBackend.connect(location); Statement st = c.createStatement()) {
+      for (String s : sql) {
+        st.executeUpdate(s);
+      }
+    }
+  }
+
+  /**
+   * As {@link #refused(Path, String, String)}, on either store; {@code because} is matched
+   * ignoring case (SQLite says "CHECK constraint failed", PostgreSQL "violates check
+   * constraint").
+   */
+  private static void refused(String location, String sql, String because) throws SQLException {
+    String before = everything(location);
+    assertThatThrownBy(() -> run(location, sql)).as(sql).isInstanceOf(SQLException.class)
+        .satisfies(e -> assertThat(e.getMessage()).containsIgnoringCase(because));
+    assertThat(everything(location)).as("nothing changed by " + sql).isEqualTo(before);
+  }
+
+  /** Every row of every table of either store, as text. */
+  static String everything(String location) throws SQLException {
+    if (!ServerAddress.isServer(location)) {
+      return everything(Path.of(location));
+    }
+    StringBuilder out = new StringBuilder();
+    try (Connection c = StoreBackend.connect(location); Statement st = c.createStatement()) {
+      for (String t : StoreBackend.tables(c, location)) {
+        if (t.equals("flyway_schema_history")) {
+          continue;
+        }
+        out.append('[').append(t).append("]\n");
+        try (ResultSet r = st.executeQuery("SELECT * FROM " + t + " ORDER BY 1, 2, 3")) {
+          ResultSetMetaData m = r.getMetaData();
+          while (r.next()) {
+            for (int i = 1; i <= m.getColumnCount(); i++) {
+              Object v = r.getObject(i);
+              out.append(m.getColumnName(i)).append('=')
+                  .append(v instanceof byte[] b ? Arrays.toString(b) : String.valueOf(v))
+                  .append('|');
+            }
+            out.append('\n');
+          }
+        }
+      }
+    }
+    return out.toString();
+  }
 
   /** Runs each statement over plain JDBC with foreign keys on. */
   private static void run(Path file, String... sql) throws SQLException {
@@ -104,15 +158,18 @@ class FrameMemberSqlTest {
         + "', " + first + ", " + second + ", '" + state + "', " + AT + ")";
   }
 
-  @Test
-  void frameObservationsAreAppendOnlyAndCheckedByTheSchema() throws Exception {
-    Path file = dir.resolve("b.db");
+  @ParameterizedTest
+  @EnumSource(StoreBackend.class)
+  void frameObservationsAreAppendOnlyAndCheckedByTheSchema(StoreBackend backend)
+      throws Exception {
+    String file = backend.freshLocation(dir);
+    boolean sqlite = backend == StoreBackend.SQLITE;
     long plane;
     long open;
     long finalised;
     long kept;
     long revision;
-    try (Database db = Database.open(file)) {
+    try (Database db = StoreBackend.reopen(file)) {
       Fixtures.Services s = Fixtures.Services.over(db);
       PlaneRecord p = Fixtures.plane(s); // 3 lifts x 2 bays
       plane = p.id();
@@ -132,13 +189,16 @@ class FrameMemberSqlTest {
     refused(file, "UPDATE observations SET frame_first = 1 WHERE id = " + kept,
         "observations are append-only");
     refused(file, "DELETE FROM observations WHERE id = " + kept, "observations are append-only");
-    refused(file, "INSERT OR REPLACE INTO observations (id, inspection_id, plane_id, frame_type,"
+    // PostgreSQL has no replace: there a plain insert over the taken id
+    refused(file, (sqlite ? "INSERT OR REPLACE" : "INSERT")
+        + " INTO observations (id, inspection_id, plane_id, frame_type,"
         + " frame_first, frame_second, state, recorded_at) VALUES (" + kept + ", " + open + ", "
         + plane + ", 'ledger', 0, 1, 'sound', " + AT + ")", "records are never overwritten");
     refused(file, frameObservation(finalised, plane, "ledger", 0, 2, "missing"),
         "the inspection is finalised");
     refused(file, "INSERT INTO photos (observation_id, file_name, media_type, data, attached_at)"
-        + " VALUES (" + kept + ", 'a.jpg', 'image/jpeg', x'ff', " + AT + ")",
+        + " VALUES (" + kept + ", 'a.jpg', 'image/jpeg', " + (sqlite ? "x'ff'" : "'\\xff'::bytea")
+        + ", " + AT + ")",
         "the inspection is finalised");
     // inside the plane: levels 0..3 and bays 1..2 for a ledger, lifts 1..3 and lines 0..2 for a
     // standard
@@ -168,11 +228,12 @@ class FrameMemberSqlTest {
     run(file, frameObservation(open, plane, "ledger", 3, 2, "missing"));
   }
 
-  @Test
-  void aRevisionsFrameMembersLeftOutNeverChange() throws Exception {
-    Path file = dir.resolve("d.db");
+  @ParameterizedTest
+  @EnumSource(StoreBackend.class)
+  void aRevisionsFrameMembersLeftOutNeverChange(StoreBackend backend) throws Exception {
+    String file = backend.freshLocation(dir);
     long revision;
-    try (Database db = Database.open(file)) {
+    try (Database db = StoreBackend.reopen(file)) {
       Fixtures.Services s = Fixtures.Services.over(db);
       PlaneRecord p = Fixtures.plane(s);
       revision = s.sites().addDesignRevision(p.id(), "D. Fenwick",
@@ -181,7 +242,8 @@ class FrameMemberSqlTest {
     }
     refused(file, "UPDATE design_frame_omissions SET frame_first = 1", "add a new revision");
     refused(file, "DELETE FROM design_frame_omissions", "add a new revision");
-    refused(file, "INSERT OR REPLACE INTO design_frame_omissions VALUES (" + revision
+    refused(file, (backend == StoreBackend.SQLITE ? "INSERT OR REPLACE" : "INSERT")
+        + " INTO design_frame_omissions VALUES (" + revision
         + ", 'ledger', 2, 1)", "add a new revision");
     refused(file, "UPDATE design_revisions SET omitted_frame_count = 2 WHERE id = " + revision,
         "add a new revision");
@@ -277,5 +339,55 @@ class FrameMemberSqlTest {
         "observations are append-only");
     refused(file, frameObservation(1, 1, "ledger", 0, 1, "missing"),
         "the inspection is finalised");
+  }
+
+  /**
+   * The same upgrade on a server: a database of V8 keeps every row and id through V9, which on
+   * PostgreSQL changes the observations' columns in place (no rebuild), and the guards hold.
+   */
+  @Test
+  void aV8ServerDatabaseKeepsEveryRecordAndGuardThroughV9() throws Exception {
+    String location = StoreBackend.blankServerDatabase();
+    ServerAddress server = ServerAddress.parse(location, StoreBackend.env());
+    org.flywaydb.core.Flyway.configure(Database.class.getClassLoader())
+        .dataSource(Database.serverDataSource(server, StoreBackend.env()))
+        .locations(Dialect.POSTGRESQL.migrations()).target("8").load().migrate();
+    for (String sql : V8_RECORDS) {
+      run(location, sql.replace("x'ffd8ff00'", "'\\xffd8ff00'::bytea"));
+    }
+    String before = everything(location);
+    try (Database db = StoreBackend.reopen(location)) {
+      assertThat(db.observations().ofInspection(1)).extracting(o -> o.id())
+          .containsExactly(7L, 9L, 12L);
+      assertThat(db.observations().photosOf(12)).extracting(ph -> ph.id()).containsExactly(5L);
+      assertThat(db.observations().recordedFrom(1, "c".repeat(64))).containsEntry(3, 9L);
+      assertThat(db.designs().find(1).orElseThrow().design().frameComplete()).isTrue();
+    }
+    String expected = before
+        .replace("correction_reason=|\n", "correction_reason=|frame_type=null|frame_first=null|"
+            + "frame_second=null|\n")
+        .replace("correction_reason=looked again|\n", "correction_reason=looked again|"
+            + "frame_type=null|frame_first=null|frame_second=null|\n")
+        .replace("panel_count=2|\n", "panel_count=2|omitted_frame_count=0|\n")
+        .replace("[design_panels]", "[design_frame_omissions]\n[design_panels]")
+        // V11: a site stored before jurisdictions were recorded is "other"
+        .replace("display_units=metric|\n", "display_units=metric|jurisdiction=other|\n");
+    assertThat(everything(location)).isEqualTo(expected);
+    refused(location, "DELETE FROM photos WHERE id = 5", "photos are kept as taken");
+    refused(location, "UPDATE observations SET note = 'x' WHERE id = 7",
+        "observations are append-only");
+    refused(location, frameObservation(1, 1, "ledger", 0, 1, "missing"),
+        "the inspection is finalised");
+    // V1's check that an extra names a diagonal gave way to V9's, which allows a frame member
+    List<String> extraChecks = new ArrayList<>();
+    try (Connection c = StoreBackend.connect(location); Statement st = c.createStatement();
+        ResultSet r = st.executeQuery("SELECT pg_get_constraintdef(oid) FROM pg_constraint"
+            + " WHERE conrelid = 'observations'::regclass AND contype = 'c'"
+            + " AND pg_get_constraintdef(oid) LIKE '%<> ''extra''%'")) {
+      while (r.next()) {
+        extraChecks.add(r.getString(1));
+      }
+    }
+    assertThat(extraChecks).singleElement().asString().contains("frame_type IS NOT NULL");
   }
 }

@@ -29,9 +29,13 @@ import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.RepairActionKind;
 import org.bracewalk.core.port.StoreException;
+import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.EnumSource;
 
 /**
  * Plain SQL, from any client, cannot change what a finalised inspection rests on: no update or
@@ -39,12 +43,21 @@ import org.junit.jupiter.api.io.TempDir;
  * REPLACE), which deletes the row it collides with without firing delete triggers (SQLite
  * documentation, "ON CONFLICT clause": "the delete triggers fire if and only if recursive
  * triggers are enabled"). And the file opens in the sqlite3 command line of SQLite 3.40.
+ *
+ * <p>Run against both stores ({@link StoreBackend}): on PostgreSQL the same rules are the
+ * server's PL/pgSQL triggers, with the same messages. PostgreSQL has no replace-style insert (an
+ * upsert's BEFORE INSERT triggers fire before its conflict check, PostgreSQL documentation,
+ * "Overview of Trigger Behavior"), so there the overwrite is a plain insert over a taken key.
  */
+@ParameterizedClass
+@EnumSource(StoreBackend.class)
 class RecordsNeverOverwrittenTest {
   private static final Path SQLITE3 = Path.of("/usr/bin/sqlite3");
   private static final String AT = "'2025-03-03T09:00:00.000Z'";
 
+  @Parameter StoreBackend backend;
   @TempDir Path dir;
+  private String location;
   private Path file;
   private long site;
   private long structure;
@@ -66,8 +79,9 @@ class RecordsNeverOverwrittenTest {
    */
   @BeforeEach
   void records() {
-    file = dir.resolve("b.db");
-    try (Database db = Database.open(file)) {
+    location = backend.freshLocation(dir);
+    file = backend == StoreBackend.SQLITE ? Path.of(location) : null;
+    try (Database db = StoreBackend.reopen(location)) {
       Fixtures.Services s = Fixtures.Services.over(db);
       PlaneRecord p = Fixtures.plane(s);
       plane = p.id();
@@ -100,16 +114,9 @@ class RecordsNeverOverwrittenTest {
   /** Every row of every table, as text: what "nothing changed" compares. */
   private String everything() throws SQLException {
     StringBuilder out = new StringBuilder();
-    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
+    try (Connection c = StoreBackend.connect(location);
         Statement st = c.createStatement()) {
-      List<String> tables = new ArrayList<>();
-      try (ResultSet r = st.executeQuery("SELECT name FROM sqlite_master WHERE type = 'table'"
-          + " AND name NOT LIKE 'sqlite_%' ORDER BY name")) {
-        while (r.next()) {
-          tables.add(r.getString(1));
-        }
-      }
-      for (String t : tables) {
+      for (String t : StoreBackend.tables(c, location)) {
         out.append('[').append(t).append("]\n");
         try (ResultSet r = st.executeQuery("SELECT * FROM " + t + " ORDER BY 1, 2, 3")) {
           ResultSetMetaData m = r.getMetaData();
@@ -130,21 +137,40 @@ class RecordsNeverOverwrittenTest {
   /** Runs {@code sql} over plain JDBC and expects the database to refuse it, changing nothing. */
   private void refused(String sql, String because) throws SQLException {
     String before = everything();
-    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
+    try (Connection c = StoreBackend.connect(location);
         Statement st = c.createStatement()) {
-      st.execute("PRAGMA foreign_keys = ON");
       assertThatThrownBy(() -> st.executeUpdate(sql)).as(sql)
           .isInstanceOf(SQLException.class).hasMessageContaining(because);
     }
     assertThat(everything()).as("nothing changed by " + sql).isEqualTo(before);
   }
 
+  /**
+   * An insert over a row that is there: SQLite's {@code INSERT OR REPLACE}; PostgreSQL has no
+   * replace, so a plain insert (its triggers refuse before the key's own check).
+   */
+  private String overwrite(String table) {
+    return (backend == StoreBackend.SQLITE ? "INSERT OR REPLACE INTO " : "INSERT INTO ")
+        + table + " ";
+  }
+
+  private boolean sqlite() {
+    return backend == StoreBackend.SQLITE;
+  }
+
+  private void onlyOnSqlite(String why) {
+    Assumptions.assumeTrue(sqlite(), "a check of the SQLite file itself (" + why
+        + "); the server's rules are checked by the other tests of this class");
+  }
+
   @Test
   void anObservationCannotBeMovedOutOfAFinalisedInspectionByAReplace() throws Exception {
     String row = "(id, inspection_id, plane_id, lift, bay, state, recorded_at) VALUES ("
         + finalisedObservation + ", " + open + ", " + plane + ", 1, 1, 'missing', " + AT + ")";
-    refused("INSERT OR REPLACE INTO observations " + row, "records are never overwritten");
-    refused("REPLACE INTO observations " + row, "records are never overwritten");
+    refused(overwrite("observations") + row, "records are never overwritten");
+    if (sqlite()) {
+      refused("REPLACE INTO observations " + row, "records are never overwritten");
+    }
     refused("INSERT INTO observations " + row
         + " ON CONFLICT (id) DO UPDATE SET inspection_id = excluded.inspection_id",
         "records are never overwritten");
@@ -152,7 +178,7 @@ class RecordsNeverOverwrittenTest {
 
   @Test
   void aCorrectionCannotBeReplacedByAnother() throws Exception {
-    refused("INSERT OR REPLACE INTO observations (inspection_id, plane_id, lift, bay, state,"
+    refused(overwrite("observations") + "(inspection_id, plane_id, lift, bay, state,"
         + " recorded_at, supersedes_id, correction_reason) VALUES (" + open + ", " + plane
         + ", 2, 1, 'sound', " + AT + ", " + openObservation + ", 'again')",
         "already corrected");
@@ -162,17 +188,17 @@ class RecordsNeverOverwrittenTest {
 
   @Test
   void aPhotoCannotBeMovedOutOfAFinalisedInspectionByAReplace() throws Exception {
-    refused("INSERT OR REPLACE INTO photos (id, observation_id, file_name, media_type, data,"
+    refused(overwrite("photos") + "(id, observation_id, file_name, media_type, data,"
         + " attached_at) VALUES (" + photo + ", " + openObservation + ", 'x.jpg', 'image/jpeg',"
-        + " x'01', " + AT + ")", "records are never overwritten");
+        + (sqlite() ? " x'01', " : " '\\x01'::bytea, ") + AT + ")", "records are never overwritten");
   }
 
   @Test
   void aFinalisedInspectionCannotBeReopenedByAReplaceOrByTakingItsId() throws Exception {
-    refused("INSERT OR REPLACE INTO inspections (id, structure_id, started_at, inspector_name,"
+    refused(overwrite("inspections") + "(id, structure_id, started_at, inspector_name,"
         + " reason, status) VALUES (" + finalised + ", " + structure + ", " + AT
         + ", 'X', 'routine', 'open')", "records are never overwritten");
-    refused("UPDATE OR REPLACE inspections SET id = " + finalised + " WHERE id = " + open,
+    refused((sqlite() ? "UPDATE OR REPLACE" : "UPDATE") + " inspections SET id = " + finalised + " WHERE id = " + open,
         "keeps its id");
     refused("UPDATE inspections SET status = 'open', finished_at = NULL WHERE id = " + finalised,
         "finalised and cannot be changed");
@@ -180,12 +206,12 @@ class RecordsNeverOverwrittenTest {
 
   @Test
   void theDesignInForceCannotBeEdited() throws Exception {
-    refused("INSERT OR REPLACE INTO design_panels (revision_id, lift, bay, diagonal, member_kind,"
+    refused(overwrite("design_panels") + "(revision_id, lift, bay, diagonal, member_kind,"
         + " opening) VALUES (" + revision + ", 1, 1, NULL, NULL, 1)", "add a new revision");
     // a panel with no row (no diagonal) given one afterwards
     refused("INSERT INTO design_panels (revision_id, lift, bay, diagonal, member_kind, opening)"
         + " VALUES (" + revision + ", 1, 2, 'X', 'rigid', 0)", "already has all its panels");
-    refused("INSERT OR REPLACE INTO design_revisions (plane_id, number, design_date, recorded_at,"
+    refused(overwrite("design_revisions") + "(plane_id, number, design_date, recorded_at,"
         + " panel_count) VALUES (" + plane + ", 1, '2025-01-01', " + AT + ", 0)",
         "never overwritten");
     // a new revision dated back to before the finalised inspection ended
@@ -200,11 +226,11 @@ class RecordsNeverOverwrittenTest {
 
   @Test
   void aPlaneAndItsGridCannotBeOverwritten() throws Exception {
-    refused("INSERT OR REPLACE INTO planes (structure_id, name, lifts, bays, support) VALUES ("
+    refused(overwrite("planes") + "(structure_id, name, lifts, bays, support) VALUES ("
         + structure + ", 'spine', 1, 1, 'free')", "never overwritten");
-    refused("INSERT OR REPLACE INTO plane_bay_widths (plane_id, bay, width_mm) VALUES (" + plane
+    refused(overwrite("plane_bay_widths") + "(plane_id, bay, width_mm) VALUES (" + plane
         + ", 1, 999)", "never overwritten");
-    refused("INSERT OR REPLACE INTO plane_lift_heights (plane_id, lift, height_mm) VALUES ("
+    refused(overwrite("plane_lift_heights") + "(plane_id, lift, height_mm) VALUES ("
         + plane + ", 1, 999)", "never overwritten");
   }
 
@@ -212,11 +238,11 @@ class RecordsNeverOverwrittenTest {
   void sitesAndStructuresAreNeverDeletedNorTheirParticularsChanged() throws Exception {
     refused("DELETE FROM sites", "site cannot be deleted");
     refused("UPDATE sites SET client_address = 'elsewhere'", "site cannot be changed");
-    refused("INSERT OR REPLACE INTO sites (id, name, time_zone, display_units) VALUES (" + site
+    refused(overwrite("sites") + "(id, name, time_zone, display_units) VALUES (" + site
         + ", 'X', 'UTC', 'metric')", "never overwritten");
     refused("DELETE FROM structures", "structure cannot be deleted");
     refused("UPDATE structures SET description = 'other'", "structure cannot be changed");
-    refused("INSERT OR REPLACE INTO structures (id, site_id, name, kind) VALUES (" + structure
+    refused(overwrite("structures") + "(id, site_id, name, kind) VALUES (" + structure
         + ", " + site + ", 'X', 'scaffold')", "never overwritten");
   }
 
@@ -224,13 +250,13 @@ class RecordsNeverOverwrittenTest {
   void repairOrdersNeverChangeAndAnActionIsDoneOnce() throws Exception {
     refused("DELETE FROM repair_orders", "repair order cannot be deleted");
     refused("UPDATE repair_orders SET note = 'nothing to do'", "repair order cannot be changed");
-    refused("INSERT OR REPLACE INTO repair_orders (id, inspection_id, created_at) VALUES ("
+    refused(overwrite("repair_orders") + "(id, inspection_id, created_at) VALUES ("
         + order + ", " + open + ", " + AT + ")", "never overwritten");
     refused("DELETE FROM repair_actions", "repair action cannot be deleted");
     refused("UPDATE repair_actions SET description = 'nothing'", "repair action cannot be changed");
     refused("UPDATE repair_actions SET done_at = NULL, done_by = ''", "each once");
     refused("UPDATE repair_actions SET done_by = 'someone else'", "each once");
-    refused("INSERT OR REPLACE INTO repair_actions (id, order_id, plane_id, action) VALUES ("
+    refused(overwrite("repair_actions") + "(id, order_id, plane_id, action) VALUES ("
         + action + ", " + order + ", " + plane + ", 'repair')", "never overwritten");
   }
 
@@ -245,7 +271,7 @@ class RecordsNeverOverwrittenTest {
 
   @Test
   void theStoreAddsTheIdsItKnowsToTheDatabasesLiteralMessage() {
-    try (Database db = Database.open(file)) {
+    try (Database db = StoreBackend.reopen(location)) {
       Observation outside = new Observation(0, open, plane, PanelRef.of(9, 1), PanelState.SOUND,
           null, null, null, null, null, java.time.Instant.now(), "", null, null);
       assertThatThrownBy(() -> db.observations().add(outside))
@@ -257,6 +283,10 @@ class RecordsNeverOverwrittenTest {
 
   @Test
   void everyTriggerMessageIsLiteralText() throws Exception {
+    if (!sqlite()) {
+      everyServerTriggerMessageIsLiteralText();
+      return;
+    }
     Pattern expression = Pattern.compile("RAISE\\s*\\(\\s*ABORT\\s*,\\s*'(?:[^']|'')*'\\s*\\|\\|",
         Pattern.CASE_INSENSITIVE);
     Pattern literal = Pattern.compile("RAISE\\s*\\(\\s*ABORT\\s*,\\s*'(?:[^']|'')*'\\s*\\)",
@@ -270,6 +300,22 @@ class RecordsNeverOverwrittenTest {
         String sql = r.getString(2);
         assertThat(expression.matcher(sql).find()).as(r.getString(1)).isFalse();
         assertThat(literal.matcher(sql).find()).as(r.getString(1)).isTrue();
+      }
+    }
+    assertThat(triggers).isGreaterThan(40);
+  }
+
+  /** The server's trigger functions raise literal text, as SQLite's triggers do. */
+  private void everyServerTriggerMessageIsLiteralText() throws Exception {
+    Pattern literal = Pattern.compile("RAISE EXCEPTION USING MESSAGE = '(?:[^']|'')*';");
+    int triggers = 0;
+    try (Connection c = StoreBackend.connect(location);
+        Statement st = c.createStatement();
+        ResultSet r = st.executeQuery("SELECT t.tgname, p.prosrc FROM pg_trigger t"
+            + " JOIN pg_proc p ON p.oid = t.tgfoid WHERE NOT t.tgisinternal")) {
+      while (r.next()) {
+        triggers++;
+        assertThat(literal.matcher(r.getString(2)).find()).as(r.getString(1)).isTrue();
       }
     }
     assertThat(triggers).isGreaterThan(40);
@@ -294,6 +340,7 @@ class RecordsNeverOverwrittenTest {
 
   @Test
   void theFileOpensInTheSqlite3CommandLine() throws Exception {
+    onlyOnSqlite("the file opens in the sqlite3 command line");
     Path copy = dir.resolve("copy.db");
     Files.copy(file, copy);
     Cli version = sqlite3(copy, "SELECT sqlite_version();");
@@ -305,6 +352,7 @@ class RecordsNeverOverwrittenTest {
 
   @Test
   void theFileOpensInPythonsSqlite3Module() throws Exception {
+    onlyOnSqlite("the file opens in Python's sqlite3 module");
     Path python = Path.of("/usr/bin/python3");
     assumeThat(Files.isExecutable(python)).as("python3 is not installed at " + python).isTrue();
     Path copy = dir.resolve("copy.db");
@@ -324,8 +372,10 @@ class RecordsNeverOverwrittenTest {
 
   @Test
   void anotherClientMeetsTheSameRefusal() throws Exception {
+    onlyOnSqlite("the sqlite3 command line meets the refusal; on the server every test here is"
+        + " another client's plain SQL");
     String before = everything();
-    Cli reopen = sqlite3(file, "INSERT OR REPLACE INTO inspections (id, structure_id, started_at,"
+    Cli reopen = sqlite3(file, overwrite("inspections") + "(id, structure_id, started_at,"
         + " inspector_name, reason, status) VALUES (" + finalised + ", " + structure + ", " + AT
         + ", 'X', 'routine', 'open');");
     assertThat(reopen.code()).isNotZero();
