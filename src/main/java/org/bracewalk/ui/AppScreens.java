@@ -305,6 +305,10 @@ public final class AppScreens implements ScreenFactory {
             analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised(), clock, ui, records);
     vm.useCameraFolderSetting(cameraFolder);
     vm.useFrameInWalkSetting(frameInWalk);
+    if (insp.reason() == org.bracewalk.core.model.InspectionReason.ROUTINE) {
+      // a routine walk visits the braced panels; A records the rest as designed, after asking
+      vm.startWith(org.bracewalk.ui.walk.WalkOrder.BRACED_BAYS_UP_AND_DOWN);
+    }
     WalkView view = new WalkView(vm);
     Selection here = new Selection(st.id(), plane.id(), insp.id());
     BorderPane wrap = new BorderPane(view);

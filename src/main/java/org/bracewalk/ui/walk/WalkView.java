@@ -320,7 +320,18 @@ public final class WalkView extends BorderPane {
     frameInWalk.selectedProperty().bindBidirectional(vm.frameInWalkProperty());
     frameInWalk.setFocusTraversable(false);
     frameInWalk.setWrapText(true);
-    VBox orderBox = Widgets.box("Walk order (O changes it)", order, frameInWalk);
+    Button rest = new Button("Record the rest as designed\u2026 (A)");
+    rest.setId("walk-rest");
+    rest.setOnAction(e -> {
+      vm.recordRestAsDesigned();
+      canvas.requestFocus();
+    });
+    rest.setFocusTraversable(false);
+    rest.setWrapText(true);
+    rest.disableProperty().bind(vm.readOnlyProperty());
+    VBox orderBox = Widgets.box("Walk order (O changes it)", order, frameInWalk, rest,
+        Widgets.hint("A routine walk visits the braced panels; A then records the panels not yet looked at"
+            + " as found as designed, after asking."));
     VBox side = new SteadyBox(10, marks, member, detailBox, orderBox, undo);
     side.getStyleClass().add("side");
     return side;
@@ -390,6 +401,7 @@ public final class WalkView extends BorderPane {
       case G -> vm.addCameraPhotos(e.isShiftDown());
       case K -> key.setExpanded(!key.isExpanded());
       case O -> vm.cycleOrder();
+      case A -> vm.recordRestAsDesigned();
       case W -> vm.toggleFrameInWalk();
       case ESCAPE -> vm.backToPanel();
       default -> handled = false;
@@ -425,7 +437,8 @@ public final class WalkView extends BorderPane {
             KeyHelp.of("Esc", "back to the panel's diagonals"),
             KeyHelp.of("N / B, PgDn / PgUp", "next / back in the walk order"),
             KeyHelp.of("Home", "first panel not yet marked"),
-            KeyHelp.of("O", "change the walk order"),
+            KeyHelp.of("O", "change the walk order (the braced panels only, or every panel)"),
+            KeyHelp.of("A", "record the panels not yet looked at as found as designed (asks first, naming how many)"),
             KeyHelp.of("W", "walk every ledger and standard too / the diagonals only"),
             KeyHelp.of("/  \\  X  .", "member seen: rising, falling, cross, follows the state"),
             KeyHelp.of("T", "member seen is tension-only / rigid"),
