@@ -9,10 +9,8 @@ import java.util.concurrent.Executor;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
 import javafx.beans.binding.Bindings;
-import javafx.geometry.Insets;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
-import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
@@ -181,7 +179,7 @@ public final class AppScreens implements ScreenFactory {
    * the design in force, the marks already stored for the plane and the planes it covers.
    */
   private record WalkRead(Place place, Optional<Inspection> inspection, boolean covered, DesignRevision design,
-      List<RecordedMark> existing, List<PlaneRecord> planes) { }
+      List<RecordedMark> existing, List<org.bracewalk.app.PlaneProgress> planes) { }
 
   private Place place(long planeId) {
     PlaneRecord plane = read("plane " + planeId, () -> services.sites().plane(planeId));
@@ -221,9 +219,10 @@ public final class AppScreens implements ScreenFactory {
         () -> services.inspections().designInForce(inspection, plane));
     List<RecordedMark> existing = read("the marks already recorded for plane " + name + " in inspection " + inspection,
         () -> InspectionMarkRecorder.existing(services.inspections(), inspection, plane));
-    // the planes the inspection covers (a plane retired before it started is not one of them)
-    List<PlaneRecord> planes = read("the planes of inspection " + inspection,
-        () -> services.inspections().planesOf(inspection));
+    // the planes the inspection covers (a plane retired before it started is not one of them),
+    // each with its progress and verdict for the plane chooser
+    List<org.bracewalk.app.PlaneProgress> planes = read("the planes of inspection " + inspection,
+        () -> services.analysis().progress(inspection));
     return new WalkRead(f.place(), f.inspection(), true, design, existing, planes);
   }
 
@@ -312,48 +311,16 @@ public final class AppScreens implements ScreenFactory {
     WalkView view = new WalkView(vm);
     Selection here = new Selection(st.id(), plane.id(), insp.id());
     BorderPane wrap = new BorderPane(view);
-    wrap.setTop(planeBar(insp, r.planes(), plane, p -> navigator.open(ScreenId.WALK, new Selection(st.id(), p, insp.id()))));
+    org.bracewalk.ui.walk.PlaneChooser chooser = new org.bracewalk.ui.walk.PlaneChooser(insp, r.planes(), plane.id(), vm,
+        p -> navigator.open(ScreenId.WALK, new Selection(st.id(), p, insp.id())));
+    wrap.setTop(chooser);
     wrap.addEventFilter(KeyEvent.KEY_PRESSED, e -> {
       if (e.isControlDown() && e.getCode() == KeyCode.P) {
-        ((ChoiceBox<?>) ((javafx.scene.layout.HBox) wrap.getTop()).lookup("#plane-choice")).show();
+        chooser.show();
         e.consume();
       }
     });
     return focusedWithSelection(wrap, crumbs(r.place(), insp), view::focusPlane, here);
-  }
-
-  private static Node planeBar(Inspection insp, List<PlaneRecord> planes, PlaneRecord current,
-      java.util.function.LongConsumer open) {
-    ChoiceBox<PlaneRecord> choice = new ChoiceBox<>();
-    choice.setId("plane-choice");
-    choice.getItems().addAll(planes);
-    choice.setConverter(new javafx.util.StringConverter<>() {
-      @Override
-      public String toString(PlaneRecord p) {
-        return p == null ? "" : p.name() + " (" + p.grid().lifts() + " \u00d7 " + p.grid().bays() + ")";
-      }
-
-      @Override
-      public PlaneRecord fromString(String t) {
-        return null;
-      }
-    });
-    for (PlaneRecord p : choice.getItems()) {
-      if (p.id() == current.id()) {
-        choice.setValue(p);
-      }
-    }
-    choice.setOnAction(e -> {
-      if (choice.getValue() != null && choice.getValue().id() != current.id()) {
-        open.accept(choice.getValue().id());
-      }
-    });
-    choice.setFocusTraversable(false);
-    Label who = new Label("Inspection " + insp.id() + " by " + insp.inspectorName() + " \u00b7 "
-        + insp.reason().label().replace('-', ' ') + (insp.isFinalised() ? " \u00b7 finalised (read-only)" : " \u00b7 open"));
-    var bar = Widgets.row(10, who, Widgets.grow(), new Label("Plane (Ctrl+P):"), choice);
-    bar.setPadding(new Insets(12, 12, 0, 12));
-    return bar;
   }
 
   /**

@@ -132,7 +132,7 @@ class FindingsViewModelTest {
     assertThat(dialogs.asked).as("the gaps are counted off the caller's turn first").isEmpty();
     runQueued();
     assertThat(services.inspections().inspection(walk.id()).isFinalised()).isFalse();
-    assertThat(dialogs.asked.get(0)).contains("east end frame: 5 of 5 panels not inspected");
+    assertThat(dialogs.asked.get(0)).contains("plane 'east end frame': 5 of 5 panels nobody has looked at");
     dialogs.confirmAnswers.push(true);
     assertThat(vm.finaliseInspection()).isTrue();
     runQueued();
