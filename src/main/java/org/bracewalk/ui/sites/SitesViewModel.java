@@ -230,8 +230,9 @@ public final class SitesViewModel {
             words += " (added after inspection " + latest.get().id() + " started)";
           }
           org.bracewalk.app.PlaneProgress pp = openProgress.get(plane.id());
-          if (pp != null) {
-            words += " \u00b7 #" + open.get().id() + ": " + pp.countWords() + " looked at";
+          if (pp != null && !words.contains("open #" + open.get().id() + ":")) {
+            // a plane of the open inspection nobody has marked yet: say so, so it is not missed
+            words += " \u00b7 open #" + open.get().id() + ": " + pp.countWords() + " looked at";
           }
           if (gone != null) {
             words += " \u00b7 retired " + WHEN.format(gone.retiredAt().atZone(site.timeZone())) + ": "

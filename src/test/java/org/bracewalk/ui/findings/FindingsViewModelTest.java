@@ -91,6 +91,9 @@ class FindingsViewModelTest {
     assertThat(vm.restoreLines()).filteredOn(s -> s.contains("needed for rigidity")).hasSize(1);
     assertThat(vm.findingLines()).anyMatch(s -> s.startsWith("lift 3, bay 6: damaged-ineffective"));
     assertThat(vm.planes()).extracting(FindingsViewModel.PlaneChoice::name).contains("north facade", "east end frame");
+    // each with its progress and verdict where it is chosen (issue 12, item 5)
+    assertThat(vm.planes()).extracting(Object::toString).anyMatch(t -> t.contains("east end frame \u2014 0 of 5 panels \u2014 "
+        + VerdictKind.NOT_INSPECTED.words()));
   }
 
   @Test
