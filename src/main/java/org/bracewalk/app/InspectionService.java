@@ -315,13 +315,21 @@ public final class InspectionService {
             + ". Nothing was recorded; confirm again");
       }
       List<Observation> out = new ArrayList<>();
+      Observation checked = null; // the plane's checks (open, in scope, not retired) once, not per panel
       for (PanelRef p : rest) {
-        NewObservation n = new NewObservation(planeId, p, PanelState.SOUND, null, null, null, null,
-            REST_AS_DESIGNED_NOTE, recordedBy);
         Observation withdrawn = latest.get(p);
         Long supersedes = withdrawn == null ? null : withdrawn.id();
-        out.add(store.observations().add(toObservation(inspection, n, supersedes,
-            supersedes == null ? null : REST_AS_DESIGNED_REASON)));
+        String reason = supersedes == null ? null : REST_AS_DESIGNED_REASON;
+        Observation o;
+        if (checked == null) {
+          o = toObservation(inspection, new NewObservation(planeId, p, PanelState.SOUND, null, null, null,
+              null, REST_AS_DESIGNED_NOTE, recordedBy), supersedes, reason);
+          checked = o;
+        } else {
+          o = new Observation(0, inspection.id(), planeId, p, PanelState.SOUND, null, null, null, null,
+              checked.note(), clock.instant(), checked.recordedBy(), supersedes, reason, null);
+        }
+        out.add(store.observations().add(o));
       }
       return out;
     });

@@ -52,10 +52,15 @@ class WalkFieldsInViewFxTest {
   private Stage stage;
   private MainWindow window;
   private Selection walk;
+  private AppScreens screens;
 
   @Start
-  void start(Stage stage) throws Exception {
+  void start(Stage stage) {
     this.stage = stage;
+  }
+
+  /** The demo database and the main window, made here: loading the demo may outlast the toolkit's setup time. */
+  private void prepare() throws Exception {
     services = DemoDatabase.withDemo(Files.createTempDirectory(dir, "fields"));
     Structure st = DemoWalk.scaffold(services);
     PlaneRecord facade = DemoWalk.facade(services);
@@ -65,16 +70,20 @@ class WalkFieldsInViewFxTest {
     Executor now = Runnable::run;
     AppScreens screens = new AppScreens(services, PlaneAnalyzer.standard(), DemoDatabase.CLOCK, new FakeDialogs(),
         now, now, new ServiceReportIssuer(AppContext.standard().reportFactory(Map.of()).over(services), services.outputs()));
-    window = new MainWindow(screens, AppScreens.screenKeys(), "test");
+    this.screens = screens;
   }
 
   @AfterEach
   void close() {
-    services.close();
+    if (services != null) {
+      services.close();
+    }
   }
 
-  private void show(FxRobot robot, double width, double height) {
+  private void show(FxRobot robot, double width, double height) throws Exception {
+    prepare();
     robot.interact(() -> {
+      window = new MainWindow(screens, AppScreens.screenKeys(), "test");
       Scene scene = new Scene(window.root(), width, height);
       Stylesheet.apply(scene);
       stage.setScene(scene);

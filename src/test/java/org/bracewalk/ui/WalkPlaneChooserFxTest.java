@@ -46,8 +46,15 @@ class WalkPlaneChooserFxTest {
   private AppServices services;
   private MainWindow window;
 
+  private Stage stage;
+
   @Start
-  void start(Stage stage) throws Exception {
+  void start(Stage stage) {
+    this.stage = stage;
+  }
+
+  /** The demo database and the main window, made here: loading the demo may outlast the toolkit's setup time. */
+  private void open(FxRobot robot) throws Exception {
     services = DemoDatabase.withDemo(Files.createTempDirectory(dir, "chooser"));
     Structure st = DemoWalk.scaffold(services);
     PlaneRecord facade = DemoWalk.facade(services);
@@ -56,17 +63,22 @@ class WalkPlaneChooserFxTest {
     Executor now = Runnable::run;
     AppScreens screens = new AppScreens(services, PlaneAnalyzer.standard(), DemoDatabase.CLOCK, new FakeDialogs(),
         now, now, new ServiceReportIssuer(AppContext.standard().reportFactory(Map.of()).over(services), services.outputs()));
-    window = new MainWindow(screens, AppScreens.screenKeys(), "test");
-    Scene scene = new Scene(window.root(), 1280, 800);
-    Stylesheet.apply(scene);
-    stage.setScene(scene);
-    stage.show();
-    window.open(ScreenId.WALK, new Selection(st.id(), facade.id(), insp.id()));
+    Selection walk = new Selection(st.id(), facade.id(), insp.id());
+    robot.interact(() -> {
+      window = new MainWindow(screens, AppScreens.screenKeys(), "test");
+      Scene scene = new Scene(window.root(), 1280, 800);
+      Stylesheet.apply(scene);
+      stage.setScene(scene);
+      stage.show();
+      window.open(ScreenId.WALK, walk);
+    });
   }
 
   @AfterEach
   void close() {
-    services.close();
+    if (services != null) {
+      services.close();
+    }
   }
 
   @SuppressWarnings("unchecked")
@@ -76,7 +88,8 @@ class WalkPlaneChooserFxTest {
   }
 
   @Test
-  void everyPlaneShowsItsProgressAndVerdictAndTheWalkedOneFollowsTheMarks(FxRobot robot) {
+  void everyPlaneShowsItsProgressAndVerdictAndTheWalkedOneFollowsTheMarks(FxRobot robot) throws Exception {
+    open(robot);
     WaitForAsyncUtils.waitForFxEvents();
     assertThat(window.currentScreen()).isEqualTo(ScreenId.WALK);
     assertThat(lines(robot)).containsExactly(

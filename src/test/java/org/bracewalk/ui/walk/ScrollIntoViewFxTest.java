@@ -44,8 +44,15 @@ class ScrollIntoViewFxTest {
   private final ExecutorService background = Executors.newSingleThreadExecutor();
   private AppServices services;
 
+  private Stage stage;
+
   @Start
-  void start(Stage stage) throws Exception {
+  void start(Stage stage) {
+    this.stage = stage;
+  }
+
+  /** The demo database and the walk-round, made here: loading the demo may outlast the toolkit's setup time. */
+  private void open(FxRobot robot) throws Exception {
     services = DemoDatabase.withDemo(Files.createTempDirectory(dir, "scroll"));
     Structure st = DemoWalk.scaffold(services);
     PlaneRecord facade = DemoWalk.facade(services);
@@ -55,19 +62,23 @@ class ScrollIntoViewFxTest {
         facade.name(), facade.role(), java.util.List.of(),
         new InspectionMarkRecorder(services.inspections(), insp.id(), facade.id(), "Rowan Test"),
         PlaneAnalyzer.standard(), new FakeDialogs(), false, false, DemoDatabase.CLOCK, new FxExecutor(), background);
-    WalkView view = new WalkView(vm);
-    Scene scene = new Scene(view, 1280, 800);
-    Stylesheet.apply(scene);
-    stage.setScene(scene);
-    stage.show();
-    view.focusPlane();
+    robot.interact(() -> {
+      WalkView view = new WalkView(vm);
+      Scene scene = new Scene(view, 1280, 800);
+      Stylesheet.apply(scene);
+      stage.setScene(scene);
+      stage.show();
+      view.focusPlane();
+    });
   }
 
   @AfterEach
   void close() throws Exception {
     background.shutdown();
     background.awaitTermination(30, TimeUnit.SECONDS);
-    services.close();
+    if (services != null) {
+      services.close();
+    }
   }
 
   private static ScrollPane sidePanel(Node n) {
@@ -92,7 +103,8 @@ class ScrollIntoViewFxTest {
   }
 
   @Test
-  void theFocusedControlIsScrolledIntoTheSidePanelsView(FxRobot robot) {
+  void theFocusedControlIsScrolledIntoTheSidePanelsView(FxRobot robot) throws Exception {
+    open(robot);
     Node last = robot.lookup("#walk-frame-in-walk").query();
     Node first = robot.lookup("#mark-sound").query();
     assertThat(against(last)).as("the panel is taller than its room: the last control starts below it").isPositive();

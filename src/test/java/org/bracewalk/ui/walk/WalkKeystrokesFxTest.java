@@ -52,8 +52,18 @@ class WalkKeystrokesFxTest {
   private PlaneRecord facade;
   private long inspectionId;
 
+  private Stage stage;
+
   @Start
-  void start(Stage stage) throws Exception {
+  void start(Stage stage) {
+    this.stage = stage;
+  }
+
+  /**
+   * The demo database and the walk-round, made here rather than in {@code @Start}: loading the
+   * demo on a busy machine may outlast the toolkit's setup time.
+   */
+  private void open(FxRobot robot) throws Exception {
     services = DemoDatabase.withDemo(Files.createTempDirectory(dir, "walk"));
     Structure st = DemoWalk.scaffold(services);
     facade = DemoWalk.facade(services);
@@ -65,19 +75,23 @@ class WalkKeystrokesFxTest {
         InspectionMarkRecorder.existing(services.inspections(), insp.id(), facade.id()),
         new InspectionMarkRecorder(services.inspections(), insp.id(), facade.id(), "Rowan Test"),
         PlaneAnalyzer.standard(), dialogs, false, false, DemoDatabase.CLOCK, new FxExecutor(), background);
-    WalkView view = new WalkView(vm);
-    Scene scene = new Scene(view, 1280, 800);
-    Stylesheet.apply(scene);
-    stage.setScene(scene);
-    stage.show();
-    view.focusPlane();
+    robot.interact(() -> {
+      WalkView view = new WalkView(vm);
+      Scene scene = new Scene(view, 1280, 800);
+      Stylesheet.apply(scene);
+      stage.setScene(scene);
+      stage.show();
+      view.focusPlane();
+    });
   }
 
   @AfterEach
   void close() throws Exception {
     background.shutdown();
     background.awaitTermination(30, TimeUnit.SECONDS);
-    services.close();
+    if (services != null) {
+      services.close();
+    }
   }
 
   private void settle() throws Exception {
@@ -121,6 +135,7 @@ class WalkKeystrokesFxTest {
 
   @Test
   void aRoutineWalkByTheBracedPanelsTakesTheKeystrokesTheReadmeStates(FxRobot robot) throws Exception {
+    open(robot);
     robot.interact(() -> vm.startWith(WalkOrder.BRACED_BAYS_UP_AND_DOWN));
     int keys = walk(robot);
     assertThat(dialogs.asked).singleElement().asString()
@@ -130,6 +145,7 @@ class WalkKeystrokesFxTest {
 
   @Test
   void aRoutineWalkBayByBayTakesTheKeystrokesTheReadmeStates(FxRobot robot) throws Exception {
+    open(robot);
     robot.interact(() -> vm.startWith(WalkOrder.BAYS_UP_AND_DOWN));
     int keys = walk(robot);
     assertThat(dialogs.asked).isEmpty();
