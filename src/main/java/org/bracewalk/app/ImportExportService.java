@@ -165,7 +165,8 @@ public final class ImportExportService {
           for (RepairActionData a : r.actions()) {
             RepairAction action = store.repairs().addAction(StoredText.action(new RepairAction(0,
                 order.id(), planes.get(a.plane()).id(), a.panel(), a.action(), a.brace(),
-                a.description(), a.dueDate(), a.assignee(), a.doneAt(), a.doneBy(), null)));
+                a.description(), a.dueDate(), a.assignee(), a.doneAt(), a.doneBy(), null,
+                a.frameMember())));
             if (a.verifiedByInspection() != null) {
               verifications.put(action.id(), a.verifiedByInspection());
             }
@@ -333,7 +334,7 @@ public final class ImportExportService {
         }
         actions.add(new RepairActionData(planeNames.get(a.planeId()), a.panel(), a.action(),
             a.brace(), a.description(), a.dueDate(), a.assignee(), a.doneAt(), a.doneBy(),
-            verified));
+            verified, a.frameMember()));
       }
       orders.add(new RepairOrderData(r.createdAt(), r.createdBy(), r.note(), actions));
     }

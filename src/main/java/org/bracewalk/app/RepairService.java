@@ -4,13 +4,17 @@ import java.time.Clock;
 import java.time.LocalDate;
 import java.util.List;
 import java.util.Objects;
+import org.bracewalk.app.verdict.Terms;
+import org.bracewalk.app.verdict.Wording;
 import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.RepairAction;
 import org.bracewalk.core.model.RepairActionKind;
 import org.bracewalk.core.model.RepairOrder;
+import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.port.RecordStore;
 
 /**
@@ -40,6 +44,61 @@ public final class RepairService {
    */
   public RepairAction addAction(long orderId, long planeId, PanelRef panel, RepairActionKind action,
       Brace brace, String description, LocalDate dueDate, String assignee) {
+    PlaneRecord plane = coveredPlane(orderId, planeId);
+    if (panel != null && !plane.grid().contains(panel)) {
+      throw new UserInputException("panel " + panel + " lies outside plane '" + plane.name() + "'");
+    }
+    if (action == RepairActionKind.REFIT) {
+      throw new UserInputException("refit puts back a frame member (ledger or standard), not a"
+          + (panel == null ? " whole plane" : " diagonal of panel " + panel) + ": name the frame"
+          + " member, or replace or brace the panel");
+    }
+    return store.repairs().addAction(StoredText.action(new RepairAction(0, orderId, planeId,
+        panel, action, brace, description, dueDate, assignee, null, "", null)));
+  }
+
+  /**
+   * Adds an action on a frame member (a ledger or standard; racking: a beam, frame horizontal or
+   * upright segment) of a plane the inspection covers: {@code refit} a design member found missing,
+   * {@code replace} one damaged beyond use, or {@code repair} one. The member must lie in the plane
+   * and be in the design in force for the inspection (a member the design leaves out is never
+   * refitted, as the check contract's repair never uses one).
+   */
+  public RepairAction addFrameAction(long orderId, long planeId, FrameRef member,
+      RepairActionKind action, String description, LocalDate dueDate, String assignee) {
+    Objects.requireNonNull(member, "member");
+    Objects.requireNonNull(action, "action");
+    PlaneRecord plane = coveredPlane(orderId, planeId);
+    Terms terms = Terms.of(structureOf(plane).kind(), plane.role());
+    String named = Wording.frameMember(member, terms);
+    if (!member.within(plane.grid())) {
+      throw new UserInputException("the " + named + " lies outside plane '" + plane.name() + "' ("
+          + plane.grid().lifts() + " lifts x " + plane.grid().bays() + " bays)");
+    }
+    if (action != RepairActionKind.REFIT && action != RepairActionKind.REPLACE
+        && action != RepairActionKind.REPAIR) {
+      throw new UserInputException("the " + named + " of plane '" + plane.name() + "' can be"
+          + " refitted, replaced or repaired, not given the action " + action.label()
+          + " (take the whole plane out of service instead)");
+    }
+    long inspectionId = order(orderId).inspectionId();
+    Long revision = store.planes().scopeOf(inspectionId).get(planeId);
+    if (revision != null) {
+      store.designs().find(revision).ifPresent(d -> {
+        if (!d.design().hasFrameMember(member)) {
+          throw new UserInputException("the " + named + " of plane '" + plane.name() + "' is left"
+              + " out by design revision " + d.number() + ", which inspection " + inspectionId
+              + " was checked against: a repair never fits a member the design leaves out (ask"
+              + " the designer for a new revision first)");
+        }
+      });
+    }
+    return store.repairs().addAction(StoredText.action(new RepairAction(0, orderId, planeId,
+        null, action, null, description, dueDate, assignee, null, "", null, member)));
+  }
+
+  /** The plane of an order's inspection, refused unless that inspection covers it. */
+  private PlaneRecord coveredPlane(long orderId, long planeId) {
     RepairOrder order = order(orderId);
     Inspection inspection = inspection(order.inspectionId());
     PlaneRecord plane = store.planes().find(planeId)
@@ -53,11 +112,12 @@ public final class RepairService {
           + " inspection " + inspection.id() + ": it was added or retired outside the planes that"
           + " inspection covers; raise the repair from an inspection that covers it");
     }
-    if (panel != null && !plane.grid().contains(panel)) {
-      throw new UserInputException("panel " + panel + " lies outside plane '" + plane.name() + "'");
-    }
-    return store.repairs().addAction(StoredText.action(new RepairAction(0, orderId, planeId,
-        panel, action, brace, description, dueDate, assignee, null, "", null)));
+    return plane;
+  }
+
+  private Structure structureOf(PlaneRecord plane) {
+    return store.structures().find(plane.structureId())
+        .orElseThrow(() -> new NotFoundException("structure " + plane.structureId()));
   }
 
   /** Records that an action was done now, by {@code doneBy}. */

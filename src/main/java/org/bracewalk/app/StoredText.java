@@ -43,7 +43,7 @@ public final class StoredText {
   static Site site(Site s) {
     return new Site(s.id(), clean(s.name(), "site name"), clean(s.clientName(), "client name"),
         clean(s.clientAddress(), "client address"), clean(s.location(), "site location"),
-        s.timeZone(), s.units());
+        s.timeZone(), s.units(), s.jurisdiction());
   }
 
   static Structure structure(Structure s) {

@@ -12,6 +12,7 @@ import org.bracewalk.app.AppServices;
 import org.bracewalk.app.SiteService;
 import org.bracewalk.app.panelmap.PanelMapParser;
 import org.bracewalk.core.model.DisplayUnits;
+import org.bracewalk.core.model.Jurisdiction;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.PlaneRole;
@@ -51,6 +52,12 @@ final class SiteCommands {
         description = "metric or imperial (default ${DEFAULT-VALUE}).")
     String units;
 
+    @Option(names = "--jurisdiction", defaultValue = "other",
+        description = "Whose rules the site stands under: uk, us, eu or other (default"
+            + " ${DEFAULT-VALUE}). Reports cite that jurisdiction's regulations only and ask for"
+            + " the particulars they require; fixed once the site is created.")
+    String jurisdiction;
+
     SiteCreate(CliContext context) {
       super(context);
     }
@@ -64,9 +71,20 @@ final class SiteCommands {
         throw new IllegalArgumentException("--time-zone: unknown zone '" + zone
             + "'; use a region such as Europe/London");
       }
+      Jurisdiction j;
+      try {
+        j = Jurisdiction.fromLabel(jurisdiction);
+      } catch (IllegalArgumentException e) {
+        throw new IllegalArgumentException("--jurisdiction: " + e.getMessage());
+      }
       Site site = s.sites().createSite(new Site(0, name, client, clientAddress, location, z,
-          DisplayUnits.fromLabel(units)));
-      out.println("site " + site.id() + " created: " + site.name());
+          DisplayUnits.fromLabel(units), j));
+      out.println("site " + site.id() + " created: " + site.name() + " (jurisdiction "
+          + j.label() + ")");
+      if (j == Jurisdiction.OTHER) {
+        err.println("note: no jurisdiction given (--jurisdiction uk, us or eu): its reports cite"
+            + " no regulation specifically and ask for every particular");
+      }
       return 0;
     }
   }
@@ -87,7 +105,8 @@ final class SiteCommands {
         out.println("site " + site.id() + ": " + site.name()
             + (site.clientName().isEmpty() ? "" : ", for " + site.clientName())
             + (site.location().isEmpty() ? "" : ", at " + site.location())
-            + " (" + site.timeZone().getId() + ", " + site.units().label() + ")");
+            + " (" + site.timeZone().getId() + ", " + site.units().label() + ", jurisdiction "
+            + site.jurisdiction().label() + ")");
       }
       return 0;
     }

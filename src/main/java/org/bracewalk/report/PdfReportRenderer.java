@@ -73,7 +73,7 @@ public final class PdfReportRenderer implements ReportRenderer {
     Templates t = Templates.load(source, language);
     ReportHeader header = report.header();
     Wording w = new Wording(t, header);
-    List<Particular> missing = report.particulars().missing(header.racking());
+    List<Particular> missing = report.particulars().missing(header.requiredParticulars());
     if (!missing.isEmpty()) {
       throw new RenderingException(
           "the report needs every particular; missing: "
@@ -253,12 +253,17 @@ public final class PdfReportRenderer implements ReportRenderer {
           : h.designReference());
       rows.put(w.text("label.status"), w.text(h.finalised() ? "status.finalised" : "status.open"));
       rows.put(w.text("label.units"), w.code("units", h.units().code()));
+      rows.put(w.text("label.jurisdiction"), w.code("jurisdiction", h.jurisdiction().label()));
       for (Map.Entry<String, String> e : rows.entrySet()) {
         t.addCell(pdf.cell(e.getKey(), pdf.boldFont(8f, Palette.GRID)));
         t.addCell(pdf.cell(e.getValue(), pdf.font(8f)));
       }
+      List<Particular> required = h.requiredParticulars();
       for (Particular p : Particular.values()) {
-        if (p.source() == Particular.Source.RECORDED_FOR_RACKING && !h.racking()) {
+        // the particulars the site's rules ask for, the drawn ones, and any other given
+        String given = r.particulars().text(p);
+        if (p.source() != Particular.Source.DRAWN && !required.contains(p)
+            && (given == null || given.isBlank())) {
           continue;
         }
         String value = switch (p) {
@@ -272,7 +277,7 @@ public final class PdfReportRenderer implements ReportRenderer {
         t.addCell(pdf.cell(value, pdf.font(8f)));
       }
       doc.add(t);
-      doc.add(pdf.para(w.text("particulars.source"), 7f));
+      doc.add(pdf.para(Citations.particulars(w, h), 7f));
     }
 
     private String riskMatters() {
@@ -567,7 +572,7 @@ public final class PdfReportRenderer implements ReportRenderer {
       }
       doc.add(t);
       if (r.findings().stream().anyMatch(fd -> fd.bow() != null)) {
-        doc.add(pdf.para(w.text("findings.source"), 7f));
+        doc.add(pdf.para(Citations.bowLimits(w, r.header()), 7f));
       }
     }
 
@@ -598,7 +603,7 @@ public final class PdfReportRenderer implements ReportRenderer {
         doc.add(pdf.para(w.text("repairs.none"), 9f));
         return;
       }
-      doc.add(pdf.para(w.text("repairs.intro"), 8.5f));
+      doc.add(pdf.para(Citations.repairs(w, r.header()), 8.5f));
       PdfPTable t = pdf.table(6, 27, 15, 22, 30);
       t.setHeaderRows(1);
       for (String k : new String[] {"number", "location", "action", "member", "when"}) {

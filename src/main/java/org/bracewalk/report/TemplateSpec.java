@@ -65,7 +65,6 @@ final class TemplateSpec {
     k.put("footer.issued", Set.of("issued", "inspection"));
     // particulars
     k.put("heading.particulars", Set.of());
-    k.put("particulars.source", Set.of());
     k.put("particulars.risk.plane", Set.of("plane", "verdict"));
     k.put("particulars.risk.findings", Set.of("count"));
     k.put("particulars.risk.none", Set.of());
@@ -240,6 +239,18 @@ final class TemplateSpec {
     }
     k.put("member.none", Set.of());
     k.put("particulars.action.frame", Set.of("plane", "member"));
+    // regulations cited, by the site's jurisdiction (Citations)
+    k.put("label.jurisdiction", Set.of());
+    for (String j : List.of("uk", "us", "eu", "other")) {
+      k.put("jurisdiction." + j, Set.of());
+    }
+    for (String c : List.of("uk.scaffold", "uk.racking", "us.scaffold", "eu.racking",
+        "unrecorded")) {
+      k.put("cite.particulars." + c, Set.of());
+    }
+    k.put("cite.particulars.none", Set.of("jurisdiction", "kind"));
+    k.put("cite.repairs.us.scaffold", Set.of());
+    k.put("findings.source.elsewhere", Set.of());
     // sign-off and digests
     k.put("heading.signoff", Set.of());
     k.put("signoff.text", Set.of());

@@ -2,8 +2,6 @@ package org.bracewalk.report;
 
 import java.io.IOException;
 import java.io.StringReader;
-import java.nio.charset.Charset;
-import java.nio.charset.CharsetEncoder;
 import java.text.DecimalFormat;
 import java.text.DecimalFormatSymbols;
 import java.time.Instant;
@@ -33,9 +31,6 @@ import org.bracewalk.core.port.RenderingException;
  * as Java properties in UTF-8.
  */
 final class Templates {
-  /** PDF's standard fonts show WinAnsi (Windows-1252) characters only. */
-  private static final Charset WIN_ANSI = Charset.forName("windows-1252");
-
   private final String file;
   private final Map<String, String> values;
   private final Locale locale;
@@ -94,7 +89,6 @@ final class Templates {
   private static void check(String file, Map<String, String> values) {
     Set<String> missing = new TreeSet<>();
     List<String> faults = new ArrayList<>();
-    CharsetEncoder encoder = WIN_ANSI.newEncoder();
     for (Map.Entry<String, Set<String>> e : TemplateSpec.keys().entrySet()) {
       String key = e.getKey();
       String value = values.get(key);
@@ -115,13 +109,13 @@ final class Templates {
       } catch (IllegalArgumentException bad) {
         faults.add("key '" + key + "' " + bad.getMessage());
       }
-      for (int i = encoder.canEncode(value) ? value.length() : 0; i < value.length(); ) {
+      for (int i = 0; i < value.length(); ) {
         int cp = value.codePointAt(i);
-        if (cp >= ' ' && !encoder.canEncode(new String(Character.toChars(cp)))) {
+        if (cp >= ' ' && !Pdf.shows(cp)) {
           faults.add(
               String.format(
                   Locale.ROOT,
-                  "key '%s' uses character U+%04X, which the report font cannot show",
+                  "key '%s' uses character U+%04X, which the report font (DejaVu Sans) cannot show",
                   key,
                   cp));
           break;

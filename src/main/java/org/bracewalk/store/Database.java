@@ -182,7 +182,9 @@ public final class Database implements RecordStore {
           "V6__plane_limits_and_retirements.sql",
           "V7__inspection_scope.sql",
           "V8__plane_role.sql",
-          "V9__frame_members.sql");
+          "V9__frame_members.sql",
+          "V10__frame_member_repairs.sql",
+          "V11__site_jurisdiction.sql");
 
   /**
    * True when the file's schema history shows exactly the packed scripts, in order, all applied

@@ -8,6 +8,8 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.bracewalk.core.model.FrameMemberType;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.RepairAction;
 import org.bracewalk.core.model.RepairActionKind;
@@ -15,7 +17,11 @@ import org.bracewalk.core.model.RepairOrder;
 import org.bracewalk.core.port.RepairRepository;
 import org.bracewalk.core.port.StoreException;
 
-/** Repair orders in {@code repair_orders}, their actions in {@code repair_actions}. */
+/**
+ * Repair orders in {@code repair_orders}, their actions in {@code repair_actions} (on a panel:
+ * lift and bay; on a frame member: frame_type, frame_first, frame_second, as V10 stores them; on
+ * the whole plane: neither).
+ */
 final class JdbcRepairRepository implements RepairRepository {
   private static final String INSERT_ORDER =
       """
@@ -29,13 +35,15 @@ final class JdbcRepairRepository implements RepairRepository {
       """
       INSERT INTO repair_actions
         (order_id, plane_id, lift, bay, action, brace_diagonal, brace_kind, description,
-         due_date, assignee, done_at, done_by, verified_by_inspection_id)
-      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
+         due_date, assignee, done_at, done_by, verified_by_inspection_id, frame_type, frame_first,
+         frame_second)
+      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String SELECT_ACTION =
       """
       SELECT id, order_id, plane_id, lift, bay, action, brace_diagonal, brace_kind, description,
-             due_date, assignee, done_at, done_by, verified_by_inspection_id
+             due_date, assignee, done_at, done_by, verified_by_inspection_id, frame_type,
+             frame_first, frame_second
       FROM repair_actions
       """;
   private static final String MARK_DONE =
@@ -73,14 +81,7 @@ final class JdbcRepairRepository implements RepairRepository {
 
   @Override
   public RepairAction addAction(RepairAction a) {
-    if (a.frameMember() != null) {
-      // repair_actions has no frame-member columns yet: refuse rather than store the action as
-      // one on the whole plane
-      throw new StoreException("action of repair order " + a.orderId() + " on the "
-          + a.frameMember() + ": a stored repair action names a panel or the whole plane; record"
-          + " the frame member in its description on an action of the whole plane; nothing was"
-          + " stored");
-    }
+    FrameRef member = a.frameMember();
     return db.call(
         c -> {
           try (PreparedStatement s =
@@ -97,6 +98,9 @@ final class JdbcRepairRepository implements RepairRepository {
             s.setString(11, Columns.text(a.doneAt()));
             s.setString(12, a.doneBy());
             Columns.setLong(s, 13, a.verifiedByInspectionId());
+            s.setString(14, member == null ? null : member.type().label());
+            Columns.setInt(s, 15, member == null ? null : member.first());
+            Columns.setInt(s, 16, member == null ? null : member.second());
             s.executeUpdate();
             return findAction(db.lastInsertId()).orElseThrow();
           }
@@ -203,6 +207,10 @@ final class JdbcRepairRepository implements RepairRepository {
   private static RepairAction read(ResultSet r) throws SQLException {
     Integer lift = Columns.intOrNull(r, "lift");
     Integer bay = Columns.intOrNull(r, "bay");
+    String frameType = r.getString("frame_type");
+    FrameRef member = frameType == null ? null
+        : new FrameRef(FrameMemberType.fromWord(frameType), r.getInt("frame_first"),
+            r.getInt("frame_second"));
     return new RepairAction(
         r.getLong("id"),
         r.getLong("order_id"),
@@ -215,6 +223,7 @@ final class JdbcRepairRepository implements RepairRepository {
         r.getString("assignee"),
         Columns.instant(r, "done_at"),
         r.getString("done_by"),
-        Columns.longOrNull(r, "verified_by_inspection_id"));
+        Columns.longOrNull(r, "verified_by_inspection_id"),
+        member);
   }
 }

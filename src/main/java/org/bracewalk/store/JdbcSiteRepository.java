@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.bracewalk.core.model.DisplayUnits;
+import org.bracewalk.core.model.Jurisdiction;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.port.SiteRepository;
 
@@ -16,12 +17,13 @@ import org.bracewalk.core.port.SiteRepository;
 final class JdbcSiteRepository implements SiteRepository {
   private static final String INSERT =
       """
-      INSERT INTO sites (name, client_name, client_address, location, time_zone, display_units)
-      VALUES (?, ?, ?, ?, ?, ?)
+      INSERT INTO sites (name, client_name, client_address, location, time_zone, display_units,
+        jurisdiction)
+      VALUES (?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String SELECT =
       """
-      SELECT id, name, client_name, client_address, location, time_zone, display_units
+      SELECT id, name, client_name, client_address, location, time_zone, display_units, jurisdiction
       FROM sites
       """;
 
@@ -42,6 +44,7 @@ final class JdbcSiteRepository implements SiteRepository {
             s.setString(4, site.location());
             s.setString(5, site.timeZone().getId());
             s.setString(6, site.units().label());
+            s.setString(7, site.jurisdiction().label());
             s.executeUpdate();
             return site.withId(db.lastInsertId());
           }
@@ -86,6 +89,7 @@ final class JdbcSiteRepository implements SiteRepository {
         r.getString("client_address"),
         r.getString("location"),
         ZoneId.of(r.getString("time_zone")),
-        DisplayUnits.fromLabel(r.getString("display_units")));
+        DisplayUnits.fromLabel(r.getString("display_units")),
+        Jurisdiction.fromLabel(r.getString("jurisdiction")));
   }
 }

@@ -3,19 +3,22 @@ package org.bracewalk.boot;
 import org.bracewalk.boot.Commands.Run;
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.contentstream.operator.Operator;
 import org.apache.pdfbox.cos.COSArray;
 import org.apache.pdfbox.cos.COSBase;
 import org.apache.pdfbox.cos.COSName;
@@ -26,6 +29,7 @@ import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.common.PDStream;
+import org.apache.pdfbox.pdmodel.font.PDFont;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.junit.jupiter.api.BeforeEach;
@@ -72,27 +76,61 @@ class ForgedDocumentsTest {
   /**
    * Rewrites every text operand (Tj, TJ, ', ") of every page that contains {@code from}, as an
    * editor would, keeping the document information (the stamp) as it is. OpenPDF compresses
-   * content streams, so the edit goes through PDFBox's content-stream parser and writer.
+   * content streams, so the edit goes through PDFBox's content-stream parser and writer. The
+   * documents' fonts are embedded subsets with Identity-H encoding, so an operand holds glyph
+   * codes: it is read through the font's ToUnicode map and the new text written with the codes
+   * the same font uses elsewhere in the document (as a forger with a PDF editor would).
    */
   static byte[] replaceText(byte[] pdf, String from, String to) throws IOException {
     try (PDDocument d = Loader.loadPDF(pdf)) {
-      int replaced = 0;
+      // the code of every character each font shows anywhere in the document
+      Map<COSBase, Map<String, byte[]>> codes = new HashMap<>();
+      List<List<Object>> pages = new ArrayList<>();
+      List<Map<Integer, PDFont>> fontAt = new ArrayList<>();
       for (PDPage page : d.getPages()) {
-        PDFStreamParser parser = new PDFStreamParser(page);
-        List<Object> tokens = new ArrayList<>(parser.parse());
-        boolean changed = false;
+        List<Object> tokens = new ArrayList<>(new PDFStreamParser(page).parse());
+        Map<Integer, PDFont> fonts = new HashMap<>();
+        PDFont font = null;
         for (int i = 0; i < tokens.size(); i++) {
-          if (tokens.get(i) instanceof COSString s && edited(s, from, to) != null) {
-            tokens.set(i, edited(s, from, to));
-            changed = true;
-            replaced++;
-          } else if (tokens.get(i) instanceof COSArray a) {
+          Object t = tokens.get(i);
+          if (t instanceof Operator op && op.getName().equals("Tf") && i >= 2
+              && tokens.get(i - 2) instanceof COSName name) {
+            font = page.getResources().getFont(name);
+          } else if (font != null && (t instanceof COSString || t instanceof COSArray)) {
+            fonts.put(i, font);
+            for (COSString str : strings(t)) {
+              decode(font, str, codes.computeIfAbsent(font.getCOSObject(), k -> new HashMap<>()));
+            }
+          }
+        }
+        pages.add(tokens);
+        fontAt.add(fonts);
+      }
+      int replaced = 0;
+      int n = 0;
+      for (PDPage page : d.getPages()) {
+        List<Object> tokens = pages.get(n);
+        Map<Integer, PDFont> fonts = fontAt.get(n++);
+        boolean changed = false;
+        for (Map.Entry<Integer, PDFont> e : fonts.entrySet()) {
+          Object t = tokens.get(e.getKey());
+          Map<String, byte[]> known = codes.get(e.getValue().getCOSObject());
+          if (t instanceof COSString str) {
+            COSString edited = edited(e.getValue(), str, from, to, known);
+            if (edited != null) {
+              tokens.set(e.getKey(), edited);
+              changed = true;
+              replaced++;
+            }
+          } else if (t instanceof COSArray a) {
             for (int j = 0; j < a.size(); j++) {
-              COSBase b = a.get(j);
-              if (b instanceof COSString s && edited(s, from, to) != null) {
-                a.set(j, edited(s, from, to));
-                changed = true;
-                replaced++;
+              if (a.get(j) instanceof COSString str) {
+                COSString edited = edited(e.getValue(), str, from, to, known);
+                if (edited != null) {
+                  a.set(j, edited);
+                  changed = true;
+                  replaced++;
+                }
               }
             }
           }
@@ -112,10 +150,56 @@ class ForgedDocumentsTest {
     }
   }
 
-  private static COSString edited(COSString s, String from, String to) {
-    String text = new String(s.getBytes(), StandardCharsets.ISO_8859_1);
-    return text.contains(from)
-        ? new COSString(text.replace(from, to).getBytes(StandardCharsets.ISO_8859_1)) : null;
+  private static List<COSString> strings(Object token) {
+    List<COSString> out = new ArrayList<>();
+    if (token instanceof COSString s) {
+      out.add(s);
+    } else if (token instanceof COSArray a) {
+      for (COSBase b : a) {
+        if (b instanceof COSString s) {
+          out.add(s);
+        }
+      }
+    }
+    return out;
+  }
+
+  /** The operand's text through the font's ToUnicode map; notes each character's code bytes. */
+  private static String decode(PDFont font, COSString s, Map<String, byte[]> codes)
+      throws IOException {
+    StringBuilder text = new StringBuilder();
+    byte[] bytes = s.getBytes();
+    ByteArrayInputStream in = new ByteArrayInputStream(bytes);
+    int at = 0;
+    while (in.available() > 0) {
+      int code = font.readCode(in);
+      int next = bytes.length - in.available();
+      String u = font.toUnicode(code);
+      if (u != null) {
+        text.append(u);
+        codes.putIfAbsent(u, Arrays.copyOfRange(bytes, at, next));
+      }
+      at = next;
+    }
+    return text.toString();
+  }
+
+  private static COSString edited(PDFont font, COSString s, String from, String to,
+      Map<String, byte[]> codes) throws IOException {
+    String text = decode(font, s, new HashMap<>());
+    if (!text.contains(from)) {
+      return null;
+    }
+    ByteArrayOutputStream out = new ByteArrayOutputStream();
+    String changed = text.replace(from, to);
+    for (int i = 0; i < changed.length(); ) {
+      String c = new String(Character.toChars(changed.codePointAt(i)));
+      byte[] code = codes.get(c);
+      assertThat(code).as("a code for '%s' in font %s", c, font.getName()).isNotNull();
+      out.write(code);
+      i += c.length();
+    }
+    return new COSString(out.toByteArray());
   }
 
   /** Copies the Bracewalk entries of one document's information into another's. */

@@ -218,6 +218,23 @@ class StoreCommandLineTest {
   }
 
   @Test
+  void aSiteIsCreatedUnderAJurisdictionAndListedWithIt() {
+    Run us = run("site", "create", "--db", db(), "--name", "Quarry Lane", "--time-zone",
+        "America/Chicago", "--units", "imperial", "--jurisdiction", "us");
+    assertThat(us.code()).as(us.err()).isZero();
+    assertThat(us.out()).contains("site 1 created: Quarry Lane (jurisdiction us)");
+    Run none = run("site", "create", "--db", db(), "--name", "Elsewhere");
+    assertThat(none.err()).contains("note: no jurisdiction given");
+    assertThat(run("site", "list", "--db", db()).out())
+        .contains("site 1: Quarry Lane (America/Chicago, imperial, jurisdiction us)")
+        .contains("site 2: Elsewhere (UTC, metric, jurisdiction other)");
+    Run bad = run("site", "create", "--db", db(), "--name", "X", "--jurisdiction", "gb");
+    assertThat(bad.code()).isEqualTo(2);
+    assertThat(bad.err()).contains("--jurisdiction: unknown jurisdiction 'gb': use uk, us, eu or"
+        + " other");
+  }
+
+  @Test
   void analyseBothDemoInspectionsOneHoldsTheOtherLosesFrame2() throws Exception {
     run("demo", "--db", db());
     Run routine = run("analyse", "--db", db(), "--inspection", "1");

@@ -71,9 +71,19 @@ class TemplatesTest {
 
   @Test
   void aCharacterTheFontCannotShowIsRefused() throws IOException {
-    TemplateSource src = folderWith(replaceLine(packedText(), "damage.monitor", "damage.monitor=\u2264 limit"));
+    // U+4E2D (a CJK ideograph): DejaVu Sans has no CJK glyphs (its coverage table, dejavu-fonts.github.io)
+    TemplateSource src = folderWith(replaceLine(packedText(), "damage.monitor", "damage.monitor=\u4e2d limit"));
     assertThatThrownBy(() -> Templates.load(src, "en"))
-        .hasMessageContaining("key 'damage.monitor' uses character U+2264");
+        .hasMessageContaining("key 'damage.monitor' uses character U+4E2D, which the report font (DejaVu Sans) cannot show");
+  }
+
+  @Test
+  void polishRomanianGreekCyrillicAndTheLessOrEqualSignAreFine() throws IOException {
+    String title = "Raport \u0141\u00f3d\u017a, \u0218tefan, \u0391\u03b8\u03ae\u03bd\u03b1,"
+        + " \u041c\u043e\u0441\u043a\u0432\u0430 \u2264 1 m";
+    Templates t = Templates.load(
+        folderWith(replaceLine(packedText(), "doc.report.title", "doc.report.title=" + title)), "en");
+    assertThat(t.text("doc.report.title")).isEqualTo(title);
   }
 
   @Test

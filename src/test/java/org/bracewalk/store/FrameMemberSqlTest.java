@@ -245,7 +245,9 @@ class FrameMemberSqlTest {
         .replace("correction_reason=looked again|\n", "correction_reason=looked again|"
             + "frame_type=null|frame_first=null|frame_second=null|\n")
         .replace("panel_count=2|\n", "panel_count=2|omitted_frame_count=0|\n")
-        .replace("[design_panels]", "[design_frame_omissions]\n[design_panels]");
+        .replace("[design_panels]", "[design_frame_omissions]\n[design_panels]")
+        // V11: a site stored before jurisdictions were recorded is "other"
+        .replace("display_units=metric|\n", "display_units=metric|jurisdiction=other|\n");
     assertThat(after).isEqualTo(expected);
     assertThat(names(file, "index")).containsAll(indexesBefore);
     assertThat(names(file, "trigger")).containsAll(triggersBefore).contains(

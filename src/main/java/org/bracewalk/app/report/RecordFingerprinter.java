@@ -19,6 +19,7 @@ import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.RepairAction;
 import org.bracewalk.core.model.RepairOrder;
+import org.bracewalk.core.model.Jurisdiction;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.port.report.RecordFingerprint;
@@ -72,10 +73,16 @@ public final class RecordFingerprinter {
   }
 
   static Canonical site(Site s) {
-    return new Canonical().record("site")
+    Canonical c = new Canonical().record("site")
         .field("id", s.id()).field("name", s.name()).field("clientName", s.clientName())
         .field("clientAddress", s.clientAddress()).field("location", s.location())
         .field("timeZone", s.timeZone().getId()).field("units", s.units().label());
+    // the report's citations and required particulars follow the jurisdiction; a site without
+    // one (every site stored before V11) keeps its canonical text, so earlier documents verify
+    if (s.jurisdiction() != Jurisdiction.OTHER) {
+      c.field("jurisdiction", s.jurisdiction().label());
+    }
+    return c;
   }
 
   static Canonical structure(Structure s) {
@@ -193,6 +200,10 @@ public final class RecordFingerprinter {
           .field("createdAt", o.createdAt()).field("createdBy", o.createdBy())
           .field("note", o.note());
       for (RepairAction a : or.actions()) {
+        if (a.frameMember() != null) {
+          frameAction(c, a);
+          continue;
+        }
         c.record("action").field("id", a.id()).field("orderId", a.orderId())
             .field("planeId", a.planeId())
             .field("lift", a.panel() == null ? null : a.panel().lift())
@@ -205,5 +216,20 @@ public final class RecordFingerprinter {
       }
     }
     return c;
+  }
+
+  /**
+   * A repair action on a frame member (added with V10: present only where one was recorded, so
+   * every earlier order's actions have the form they had).
+   */
+  private static void frameAction(Canonical c, RepairAction a) {
+    FrameRef f = a.frameMember();
+    c.record("frame-action").field("id", a.id()).field("orderId", a.orderId())
+        .field("planeId", a.planeId())
+        .field("type", f.type().label()).field("first", f.first()).field("second", f.second())
+        .field("action", a.action().label())
+        .field("description", a.description()).field("dueDate", a.dueDate())
+        .field("assignee", a.assignee()).field("doneAt", a.doneAt())
+        .field("doneBy", a.doneBy()).field("verifiedBy", a.verifiedByInspectionId());
   }
 }

@@ -160,9 +160,11 @@ public final class ReportService {
 
   /** {@link #reportPdf(long)} from content already gathered. */
   public byte[] reportPdf(ReportContent content) {
-    List<Particular> missing = content.particulars().missing(content.header().racking());
+    List<Particular> missing =
+        content.particulars().missing(content.header().requiredParticulars());
     if (!missing.isEmpty()) {
-      throw new MissingParticularsException(Long.parseLong(content.header().inspectionId()), missing);
+      throw new MissingParticularsException(Long.parseLong(content.header().inspectionId()), missing,
+          content.header().jurisdiction());
     }
     ByteArrayOutputStream out = new ByteArrayOutputStream(128 * 1024);
     try {
@@ -601,7 +603,7 @@ public final class ReportService {
         structure.name(), kindCode(structure.kind()), inspection.reason().label(),
         structure.designReference(), inspection.isFinalised(), zone,
         site.units() == DisplayUnits.IMPERIAL ? LengthUnits.IMPERIAL : LengthUnits.METRIC,
-        clock.instant());
+        clock.instant(), site.jurisdiction());
     return new ReportContent(header, particulars, sections, findings, steps,
         RecordFingerprinter.fingerprint(r));
   }
@@ -677,6 +679,7 @@ public final class ReportService {
       case REPLACE -> RepairStepKind.REPLACE;
       case BRACE -> RepairStepKind.BRACE;
       case TAKE_OUT_OF_SERVICE -> RepairStepKind.TAKE_OUT_OF_SERVICE;
+      case REFIT -> RepairStepKind.REFIT;
     };
   }
 }

@@ -217,7 +217,8 @@ public record SiteFile(Site site, List<StructureData> structures) {
   }
 
   /**
-   * One repair action; {@code panel} is {@code null} for the whole plane; {@code
+   * One repair action; {@code panel} is {@code null} for the whole plane or a frame member;
+   * {@code frameMember} names the ledger or standard the action is on, or is {@code null}; {@code
    * verifiedByInspection} is an inspection number of this file, or {@code null}.
    */
   public record RepairActionData(
@@ -230,7 +231,17 @@ public record SiteFile(Site site, List<StructureData> structures) {
       String assignee,
       Instant doneAt,
       String doneBy,
-      Integer verifiedByInspection) {}
+      Integer verifiedByInspection,
+      FrameRef frameMember) {
+
+    /** An action on a panel, or on the whole plane when {@code panel} is null. */
+    public RepairActionData(String plane, PanelRef panel, RepairActionKind action, Brace brace,
+        String description, LocalDate dueDate, String assignee, Instant doneAt, String doneBy,
+        Integer verifiedByInspection) {
+      this(plane, panel, action, brace, description, dueDate, assignee, doneAt, doneBy,
+          verifiedByInspection, null);
+    }
+  }
 
   /** A report issued for an inspection. */
   public record IssuedReportData(String fileName, String fingerprint, Instant issuedAt) {}

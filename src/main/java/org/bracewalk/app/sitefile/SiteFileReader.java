@@ -41,6 +41,7 @@ import org.bracewalk.core.model.FrameMemberType;
 import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.Diagonal;
 import org.bracewalk.core.model.DisplayUnits;
+import org.bracewalk.core.model.Jurisdiction;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.InspectionStatus;
@@ -177,7 +178,8 @@ public final class SiteFileReader {
   private record Pending(Obj at, int number) {}
 
   private Site site(Obj n) {
-    n.known("name", "clientName", "clientAddress", "location", "timeZone", "units");
+    n.known("name", "clientName", "clientAddress", "location", "timeZone", "units",
+        "jurisdiction");
     String zone = n.requiredText("timeZone");
     ZoneId timeZone;
     try {
@@ -186,10 +188,12 @@ public final class SiteFileReader {
       throw n.error("timeZone", "unknown time zone \"" + zone + "\"; use a region such as Europe/London");
     }
     DisplayUnits units = n.label("units", DisplayUnits::fromLabel);
+    Jurisdiction jurisdiction = n.has("jurisdiction")
+        ? n.label("jurisdiction", Jurisdiction::fromLabel) : Jurisdiction.OTHER;
     return n.build(
         "name",
         () -> new Site(0, n.requiredText("name"), n.text("clientName"), n.text("clientAddress"),
-            n.text("location"), timeZone, units));
+            n.text("location"), timeZone, units, jurisdiction));
   }
 
   private StructureData structure(Obj n, Set<String> names, int[] inspectionNumber,
@@ -486,11 +490,22 @@ public final class SiteFileReader {
   }
 
   private RepairActionData action(Obj n, Map<String, PlaneData> planes, List<Pending> pending) {
-    n.known("plane", "lift", "bay", "action", "brace", "description", "dueDate", "assignee",
-        "doneAt", "doneBy", "verifiedByInspection");
+    n.known("plane", "lift", "bay", "frame", "level", "line", "action", "brace", "description",
+        "dueDate", "assignee", "doneAt", "doneBy", "verifiedByInspection");
     PlaneData plane = planeNamed(n, planes);
-    PanelRef panel = n.has("lift") || n.has("bay") ? panel(n, plane) : null;
+    FrameRef frameMember = n.has("frame") ? frameMember(n, plane.grid()) : null;
+    if (frameMember == null && (n.has("level") || n.has("line"))) {
+      throw n.error(n.has("level") ? "level" : "line", "a level or line names a frame member:"
+          + " give \"frame\" (ledger or standard) too, lift and bay for a panel, or neither for"
+          + " the whole plane");
+    }
+    PanelRef panel = frameMember == null && (n.has("lift") || n.has("bay")) ? panel(n, plane)
+        : null;
     RepairActionKind kind = n.label("action", RepairActionKind::fromLabel);
+    if (frameMember != null && n.has("brace")) {
+      throw n.error("brace", "an action on a frame member fits no diagonal (field brace is for a"
+          + " panel)");
+    }
     Brace brace = n.has("brace") ? brace(n, "brace") : null;
     LocalDate due = n.date("dueDate", false);
     Instant done = n.instant("doneAt", false);
@@ -502,9 +517,10 @@ public final class SiteFileReader {
     Integer v = verified;
     n.build(done == null && (n.has("doneBy") || v != null) ? "doneAt" : "action",
         () -> new RepairAction(0, 1, 1, panel, kind, brace, n.text("description"), due,
-            n.text("assignee"), done, n.text("doneBy"), v == null ? null : (long) v));
+            n.text("assignee"), done, n.text("doneBy"), v == null ? null : (long) v,
+            frameMember));
     return new RepairActionData(plane.name(), panel, kind, brace, n.text("description"), due,
-        n.text("assignee"), done, n.text("doneBy"), verified);
+        n.text("assignee"), done, n.text("doneBy"), verified, frameMember);
   }
 
   private PlaneData planeNamed(Obj n, Map<String, PlaneData> planes) {

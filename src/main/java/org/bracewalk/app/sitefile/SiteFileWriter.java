@@ -23,6 +23,7 @@ import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.core.model.PlaneRole;
+import org.bracewalk.core.model.Jurisdiction;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.app.sitefile.SiteFile.DesignData;
 import org.bracewalk.app.sitefile.SiteFile.InspectionData;
@@ -88,6 +89,10 @@ public final class SiteFileWriter {
     n.put("location", site.location());
     n.put("timeZone", site.timeZone().getId());
     n.put("units", site.units().label());
+    if (site.jurisdiction() != Jurisdiction.OTHER) {
+      // written only when recorded, so a file of a site without one reads and writes as before
+      n.put("jurisdiction", site.jurisdiction().label());
+    }
     return n;
   }
 
@@ -263,7 +268,9 @@ public final class SiteFileWriter {
   private static ObjectNode action(RepairActionData a) {
     ObjectNode n = NODES.objectNode();
     n.put("plane", a.plane());
-    if (a.panel() != null) {
+    if (a.frameMember() != null) {
+      putMember(n, a.frameMember());
+    } else if (a.panel() != null) {
       n.put("lift", a.panel().lift());
       n.put("bay", a.panel().bay());
     }

@@ -12,7 +12,7 @@ import java.util.Objects;
  * @param planeId the plane
  * @param panel the panel; {@code null} when the action concerns the whole plane (say, taking it
  *     out of service)
- * @param action repair, replace, brace or take out of service
+ * @param action repair, replace, brace or take out of service; refit only on a frame member
  * @param brace the member to fit, when the action fits one; else {@code null}
  * @param description what to do, in words
  * @param dueDate by when; {@code null} when at once
@@ -58,9 +58,13 @@ public record RepairAction(
             "an action on the " + frameMember + " names no panel and no diagonal");
       }
       if (action == RepairActionKind.BRACE || action == RepairActionKind.TAKE_OUT_OF_SERVICE) {
-        throw new IllegalArgumentException("the " + frameMember + " can be repaired or replaced,"
-            + " not " + action.label() + " (take the whole plane out of service instead)");
+        throw new IllegalArgumentException("the " + frameMember + " can be repaired, replaced"
+            + " or refitted, not " + action.label() + " (take the whole plane out of service"
+            + " instead)");
       }
+    } else if (action == RepairActionKind.REFIT) {
+      throw new IllegalArgumentException("refit puts back a frame member (a ledger or standard):"
+          + " name one; fit a diagonal with replace or brace");
     }
     description = Text.optional(description);
     assignee = Text.optional(assignee);

@@ -13,6 +13,8 @@ import java.util.Objects;
  * @param location where the equipment stands (report item 2)
  * @param timeZone the zone times are shown in; they are stored as UTC instants
  * @param units how lengths are shown
+ * @param jurisdiction whose regulations the report cites and whose particulars it requires;
+ *     fixed when the site is created, like every field of a site
  */
 public record Site(
     long id,
@@ -21,7 +23,8 @@ public record Site(
     String clientAddress,
     String location,
     ZoneId timeZone,
-    DisplayUnits units) {
+    DisplayUnits units,
+    Jurisdiction jurisdiction) {
 
   public Site {
     Text.id(id, "site id");
@@ -31,10 +34,18 @@ public record Site(
     location = Text.optional(location);
     Objects.requireNonNull(timeZone, "time zone");
     Objects.requireNonNull(units, "display units");
+    Objects.requireNonNull(jurisdiction, "jurisdiction");
+  }
+
+  /** A site whose jurisdiction is not recorded ({@link Jurisdiction#OTHER}). */
+  public Site(long id, String name, String clientName, String clientAddress, String location,
+      ZoneId timeZone, DisplayUnits units) {
+    this(id, name, clientName, clientAddress, location, timeZone, units, Jurisdiction.OTHER);
   }
 
   /** The same site with the given stored id. */
   public Site withId(long newId) {
-    return new Site(newId, name, clientName, clientAddress, location, timeZone, units);
+    return new Site(newId, name, clientName, clientAddress, location, timeZone, units,
+        jurisdiction);
   }
 }

@@ -131,6 +131,10 @@ public final class PlaneCanvas extends Region {
         || !before.changed().equals(after.changed())
         || !before.frameFindings().equals(after.frameFindings())
         || !before.freedoms().equals(after.freedoms())
+        || !before.repairMembers().equals(after.repairMembers())
+        || !before.changedMembers().equals(after.changedMembers())
+        || !after.repairMembers().isEmpty()
+        || !after.changedMembers().isEmpty()
         || before.selectedMember() != null
         || after.selectedMember() != null) {
       return null;

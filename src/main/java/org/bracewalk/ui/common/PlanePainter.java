@@ -146,7 +146,14 @@ public final class PlanePainter {
         diamond(g, geo, p);
       }
     }
+    // frame members of the repair first (as the repair order lists them), then the braces
     int n = 1;
+    for (FrameRef f : pic.repairMembers()) {
+      if (only == null) {
+        repairMember(g, geo, f, n, repairLabels);
+      }
+      n++;
+    }
     for (RepairBrace r : pic.repair()) {
       if (only == null || only.contains(r.panel())) {
         repair(g, geo, r, n, repairLabels);
@@ -158,6 +165,73 @@ public final class PlanePainter {
         changed(g, geo, p);
       }
     }
+    if (only == null) {
+      for (FrameRef f : pic.changedMembers()) {
+        changedMember(g, geo, f);
+      }
+    }
+  }
+
+  /**
+   * A frame member of the proposed repair: dash-dot beside it in the repair's colour (the member's
+   * own look, say missing, stays visible) and its number in a circle (a design member) on the
+   * panel side of its middle.
+   */
+  private static void repairMember(GraphicsContext g, PlaneGeometry geo, FrameRef f, int number,
+      boolean label) {
+    double[] s = geo.frame(f);
+    boolean upright = !f.isLedger();
+    // towards the inside of the plane: a ledger's panel above it (below it at the top), a
+    // standard's panel to its right (to its left on the last line)
+    double side = upright
+        ? (f.second() < geo.grid().bays() ? 1 : -1)
+        : (f.first() < geo.grid().lifts() ? -1 : 1);
+    double off = 5;
+    g.setStroke(REPAIR);
+    g.setLineWidth(3);
+    g.setLineDashes(12, 4, 2, 4);
+    if (upright) {
+      g.strokeLine(s[0] + side * off, s[1] - 4, s[2] + side * off, s[3] + 4);
+    } else {
+      g.strokeLine(s[0] + 4, s[1] + side * off, s[2] - 4, s[3] + side * off);
+    }
+    g.setLineDashes();
+    if (!label) {
+      return;
+    }
+    double len = Math.hypot(s[2] - s[0], s[3] - s[1]);
+    double rad = Math.max(6, Math.min(10, len * 0.18));
+    double cx = (s[0] + s[2]) / 2 + (upright ? side * (off + rad + 3) : 0);
+    double cy = (s[1] + s[3]) / 2 + (upright ? 0 : side * (off + rad + 3));
+    g.setFill(Color.WHITE);
+    g.setStroke(REPAIR);
+    g.setLineWidth(2);
+    g.fillOval(cx - rad, cy - rad, 2 * rad, 2 * rad);
+    g.strokeOval(cx - rad, cy - rad, 2 * rad, 2 * rad);
+    g.setFill(REPAIR);
+    g.setFont(Font.font("DejaVu Sans", FontWeight.BOLD, rad * 1.1));
+    g.setTextAlign(TextAlignment.CENTER);
+    g.setTextBaseline(VPos.CENTER);
+    g.fillText(Integer.toString(number), cx, cy + 0.5);
+  }
+
+  /** A frame member whose state changed since the previous inspection: a dashed box around it. */
+  private static void changedMember(GraphicsContext g, PlaneGeometry geo, FrameRef f) {
+    double[] s = geo.frame(f);
+    double pad = 7;
+    double x0 = Math.min(s[0], s[2]);
+    double x1 = Math.max(s[0], s[2]);
+    double y0 = Math.min(s[1], s[3]);
+    double y1 = Math.max(s[1], s[3]);
+    g.setStroke(CHANGED);
+    g.setLineWidth(2.5);
+    g.setLineDashes(5, 3);
+    if (f.isLedger()) {
+      g.strokeRect(x0 + 6, y0 - pad, x1 - x0 - 12, 2 * pad);
+    } else {
+      g.strokeRect(x0 - pad, y0 + 6, 2 * pad, y1 - y0 - 12);
+    }
+    g.setLineDashes();
   }
 
   /**

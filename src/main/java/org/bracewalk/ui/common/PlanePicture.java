@@ -36,6 +36,10 @@ import org.bracewalk.core.model.PlaneGrid;
  *     a standard left or right), or {@code null} when the panel's diagonals are selected
  * @param freedoms the analysed state's freedoms told apart by kind (joints without sideways
  *     restraint and loose ends are marked at the joint; a swaying part is hatched), empty for none
+ * @param repairMembers frame members of the proposed repair (design members to refit or replace),
+ *     numbered on the drawing before the braces of {@code repair}, as the repair order lists the
+ *     frame first
+ * @param changedMembers frame members whose recorded state differs from the previous inspection
  */
 public record PlanePicture(
     PlaneDesign design,
@@ -48,7 +52,9 @@ public record PlanePicture(
     PanelRef cursor,
     Map<FrameRef, PanelState> frameFindings,
     FrameRef selectedMember,
-    List<Freedom> freedoms) {
+    List<Freedom> freedoms,
+    List<FrameRef> repairMembers,
+    Set<FrameRef> changedMembers) {
 
   /** A picture without frame findings, selected member or freedoms. */
   public PlanePicture(
@@ -63,6 +69,23 @@ public record PlanePicture(
     this(design, findings, showFindings, blocks, critical, repair, changed, cursor, Map.of(), null, List.of());
   }
 
+  /** A picture with frame findings and freedoms, no frame member in the repair or changed. */
+  public PlanePicture(
+      PlaneDesign design,
+      Map<PanelRef, PanelFinding> findings,
+      boolean showFindings,
+      List<Block> blocks,
+      Set<PanelRef> critical,
+      List<RepairBrace> repair,
+      Set<PanelRef> changed,
+      PanelRef cursor,
+      Map<FrameRef, PanelState> frameFindings,
+      FrameRef selectedMember,
+      List<Freedom> freedoms) {
+    this(design, findings, showFindings, blocks, critical, repair, changed, cursor, frameFindings,
+        selectedMember, freedoms, List.of(), Set.of());
+  }
+
   public PlanePicture {
     Objects.requireNonNull(design, "design");
     findings = Map.copyOf(findings);
@@ -72,6 +95,8 @@ public record PlanePicture(
     changed = Set.copyOf(changed);
     frameFindings = Map.copyOf(frameFindings);
     freedoms = List.copyOf(freedoms);
+    repairMembers = List.copyOf(repairMembers);
+    changedMembers = Set.copyOf(changedMembers);
   }
 
   /** How the frame member {@code f} is drawn: its recorded state, else as the design has it. */

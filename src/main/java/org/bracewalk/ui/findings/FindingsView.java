@@ -54,7 +54,9 @@ public final class FindingsView extends BorderPane {
     canvas.pictureProperty().bind(vm.pictureProperty());
     VBox.setVgrow(canvas, Priority.ALWAYS);
     Label summary = Widgets.text(vm.summaryProperty());
-    setCenter(new VBox(8, canvas, summary, new Legend(Legend.Set_.FINDINGS)));
+    // the legend scrolls in a strip of its own, so the drawing keeps the room it needs to show
+    // frame members, joints and repair numbers at a size a person can read
+    setCenter(new VBox(8, canvas, summary, legendStrip(new Legend(Legend.Set_.FINDINGS))));
 
     ScrollPane side = new ScrollPane(side());
     side.setFitToWidth(true);
@@ -95,7 +97,7 @@ public final class FindingsView extends BorderPane {
   private VBox side() {
     VBox verdict = Widgets.verdictBox(vm.verdictProperty());
     verdict.setId("findings-verdict");
-    VBox repair = Widgets.box("Least set of braces that makes it rigid (drawn dash-dot, numbered)", lines(vm.repairLines(), "findings-repair"),
+    VBox repair = Widgets.box("Least set that makes it rigid: frame members, then braces (drawn dash-dot, numbered)", lines(vm.repairLines(), "findings-repair"),
         Widgets.hint("Circle: the design's own position. Square: a new position, a deviation from the design."));
     VBox restore = Widgets.box("Restore to design", lines(vm.restoreLines(), "findings-restore"));
     VBox found = Widgets.box("Found", lines(vm.findingLines(), "findings-found"));
@@ -168,5 +170,16 @@ public final class FindingsView extends BorderPane {
             KeyHelp.of("O", "issue the repair order (PDF and CSV)"),
             KeyHelp.of("P", "choose another plane of the inspection"),
             KeyHelp.of("Ctrl+F", "finalise the inspection (asks first; then read-only)")));
+  }
+
+  /** The legend in a strip of at most about three rows that scrolls when it needs more. */
+  private static javafx.scene.control.ScrollPane legendStrip(Legend legend) {
+    javafx.scene.control.ScrollPane strip = new javafx.scene.control.ScrollPane(legend);
+    strip.setFitToWidth(true);
+    strip.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
+    strip.setPrefViewportHeight(150);
+    strip.setMinViewportHeight(60);
+    VBox.setVgrow(strip, Priority.NEVER);
+    return strip;
   }
 }

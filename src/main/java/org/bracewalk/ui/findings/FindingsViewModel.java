@@ -22,7 +22,17 @@ import org.bracewalk.app.AnalysisService;
 import org.bracewalk.app.InspectionService;
 import org.bracewalk.app.SiteService;
 import org.bracewalk.app.PlaneResult;
+import java.util.TreeMap;
+import java.util.TreeSet;
+import org.bracewalk.app.verdict.Terms;
+import org.bracewalk.app.verdict.Wording;
 import org.bracewalk.core.analysis.AsBuiltAnalysis;
+import org.bracewalk.core.analysis.BuiltFrame;
+import org.bracewalk.core.analysis.RepairMember;
+import org.bracewalk.core.analysis.RestoreFrameItem;
+import org.bracewalk.core.model.Brace;
+import org.bracewalk.core.model.FrameRef;
+import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.analysis.PlacedBrace;
 import org.bracewalk.core.analysis.PlaneAnalysis;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
@@ -165,6 +175,13 @@ public final class FindingsViewModel {
     PlaneDesign design = result.design().design();
     PlaneAnalysis analysis = result.analysis();
     AsBuiltAnalysis ab = analysis.asBuilt().orElseThrow();
+    Terms terms = Terms.of(sites.structure(plane.structureId()).kind(), plane.role());
+    AsBuiltPlane built = result.asBuilt();
+    Map<FrameRef, PanelState> frameFound = new TreeMap<>();
+    result.latestFrame().forEach((f, o) -> frameFound.put(f, o.state()));
+    // frame members not there as analysed (missing, beyond use, not inspected, left out)
+    Set<FrameRef> absent = new TreeSet<>(built.absentFrame());
+    absent.addAll(built.unknownFrame());
     Map<PanelRef, PanelFinding> findings = new java.util.HashMap<>();
     result.latest().forEach((p, o) -> {
       if (o.state() != PanelState.NOT_INSPECTED) {
@@ -172,7 +189,8 @@ public final class FindingsViewModel {
       }
     });
     StateAnalysis seen = ab.state();
-    if (ab.unknownPanels() > 0) {
+    if (ab.unknownPanels() > 0 || !built.unknownFrame().isEmpty()) {
+      // drawn as found where seen: what was not inspected (panel or frame member) as designed
       Map<PanelRef, PanelFinding> optimistic = new java.util.HashMap<>(findings);
       for (int i = 1; i <= design.grid().lifts(); i++) {
         for (int j = 1; j <= design.grid().bays(); j++) {
@@ -183,20 +201,30 @@ public final class FindingsViewModel {
           }
         }
       }
-      seen = analyzer.analyseState(design.grid(), AsBuiltPlane.fromFindings(design, optimistic).members());
+      Map<PanelRef, Brace> members = AsBuiltPlane.fromFindings(design, optimistic).members();
+      seen = built.absentFrame().isEmpty()
+          ? analyzer.analyseState(design.grid(), members)
+          : analyzer.analyseState(new BuiltFrame(design.grid(), members, built.absentFrame()));
     }
     List<RepairBrace> repair = analysis.repair().braces();
-    VerdictWords verdictWords = VerdictWords.of(result.verdict(), ab.state(), repair.size());
+    List<FrameRef> repairMembers = analysis.repair().members().stream()
+        .map(RepairMember::member).toList();
+    VerdictWords verdictWords = VerdictWords.of(result.verdict(), ab.state(),
+        analysis.repair().minimum(), absent);
     PlanePicture drawn = new PlanePicture(design, findings, true, seen.blocks(), Set.copyOf(seen.criticalBraces()),
-        repair, Set.of(), null);
+        repair, Set.of(), null, frameFound, null, seen.freedoms(), repairMembers, Set.of());
 
     List<String> repairLines = new ArrayList<>();
     int n = 1;
+    for (FrameRef f : repairMembers) {
+      repairLines.add(n++ + ".  " + Wording.frameMember(f, terms) + ": "
+          + frameAction(frameFound.get(f)) + " \u2014 restores the design");
+    }
     for (RepairBrace b : repair) {
       repairLines.add(n++ + ".  " + b.panel() + ": fit " + b.brace().token() + " (" + b.brace().kind().label() + ")"
           + (b.inDesign() ? " \u2014 restores the design" : " \u2014 NEW POSITION: needs a licensed engineer's approval"));
     }
-    if (repair.isEmpty()) {
+    if (repair.isEmpty() && repairMembers.isEmpty()) {
       repairLines.add(ab.state().rigid() ? "None needed: the plane holds its shape as found." : "");
     }
     if (!analysis.repair().possible()) {
@@ -210,11 +238,18 @@ public final class FindingsViewModel {
           + (r.neededForRigidity() ? "needed for rigidity" : "restores redundancy only")
           + (unseen ? " (not inspected yet: inspect first)" : ""));
     }
+    for (RestoreFrameItem r : analysis.repair().restoreFrame()) {
+      PanelState s = frameFound.get(r.member());
+      restoreLines.add(Wording.frameMember(r.member(), terms) + ": "
+          + (s == null ? "not there" : s.label()) + " \u2014 "
+          + (r.neededForRigidity() ? "needed for rigidity" : "restores redundancy only")
+          + (s != null && !s.inspected() ? " (not inspected yet: inspect first)" : ""));
+    }
     if (restoreLines.isEmpty()) {
-      restoreLines.add("Nothing: every design brace is there and effective.");
+      restoreLines.add("Nothing: every design brace and frame member is there and effective.");
     }
     List<String> findingLines = new ArrayList<>();
-    result.latest().forEach((p, o) -> {
+    new TreeMap<>(result.latest()).forEach((p, o) -> {
       if (o.state() != PanelState.SOUND && o.state() != PanelState.NOT_INSPECTED) {
         StringBuilder sb = new StringBuilder(p + ": " + o.state().label());
         if (o.memberFound() != null) {
@@ -235,15 +270,57 @@ public final class FindingsViewModel {
     for (PlacedBrace e : ab.extraBraces()) {
       findingLines.add(e.panel() + ": extra " + e.brace().token() + " (not in the design; counts)");
     }
+    new TreeMap<>(result.latestFrame()).forEach((f, o) -> {
+      if (o.state() != PanelState.SOUND && o.state() != PanelState.NOT_INSPECTED) {
+        findingLines.add(frameFindingLine(Wording.frameMember(f, terms), o));
+      }
+    });
+    for (String w : result.verdict().freedomWords(absent)) {
+      findingLines.add("Can move: " + w + ".");
+    }
+    if (result.verdict().anyLostRestraint()) {
+      findingLines.add(Wording.LOST_RESTRAINT_NOTE);
+    }
     if (findingLines.isEmpty()) {
       findingLines.add("Every panel inspected was found sound.");
     }
     int marked = (int) result.latest().values().stream().filter(o -> o.state() != PanelState.NOT_INSPECTED).count();
+    long frameMarked = result.latestFrame().values().stream()
+        .filter(o -> o.state() != PanelState.NOT_INSPECTED).count();
     String summaryWords = marked + " of " + design.grid().panelCount() + " panels marked; "
-        + ab.unknownPanels() + " not inspected (counted as missing in the repair set); design revision "
-        + result.design().number() + ".";
+        + ab.unknownPanels() + " not inspected (counted as missing in the repair set); "
+        + (frameMarked == 0 ? "" : frameMarked + (frameMarked == 1 ? " frame member" : " frame members")
+            + " marked (the others taken as designed); ")
+        + "design revision " + result.design().number() + ".";
     return new Loaded(inspection.isFinalised(), titleWords, planes, verdictWords, drawn, repairLines, restoreLines,
         findingLines, summaryWords);
+  }
+
+  /**
+   * What is done to a design frame member of the repair, as the repair order says: inspected
+   * (and fitted if missing) when nobody has looked at it, replaced when damaged beyond use, else
+   * refitted.
+   */
+  static String frameAction(PanelState recorded) {
+    if (recorded != null && !recorded.inspected()) {
+      return "inspect, fit if missing";
+    }
+    return recorded == PanelState.DAMAGED_INEFFECTIVE ? "replace" : "refit";
+  }
+
+  /** A frame finding as the found list words it: member, state, defect, bow, note. */
+  private static String frameFindingLine(String member, Observation o) {
+    StringBuilder sb = new StringBuilder(member + ": " + o.state().label());
+    if (o.defect() != null) {
+      sb.append(", ").append(o.defect().label());
+    }
+    if (o.bowMm() != null) {
+      sb.append(", bow ").append(o.bowMm()).append(" mm over ").append(o.gaugeLengthMm()).append(" mm");
+    }
+    if (!o.note().isEmpty()) {
+      sb.append(" \u2014 ").append(o.note());
+    }
+    return sb.toString();
   }
 
   // ---- documents ------------------------------------------------------------------------------

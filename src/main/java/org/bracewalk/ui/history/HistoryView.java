@@ -36,7 +36,8 @@ public final class HistoryView extends BorderPane {
     VBox.setVgrow(canvas, Priority.ALWAYS);
     Label heading = Widgets.text(vm.headingProperty());
     heading.setStyle("-fx-font-weight: bold;");
-    setCenter(new VBox(8, heading, canvas, new Legend(Legend.Set_.HISTORY)));
+    // the legend scrolls in a strip of its own, so the drawing keeps the room it needs
+    setCenter(new VBox(8, heading, canvas, legendStrip(new Legend(Legend.Set_.HISTORY))));
 
     list.setId("history-list");
     list.setItems(vm.entries());
@@ -84,5 +85,16 @@ public final class HistoryView extends BorderPane {
     return new KeyHelp.Section(
         "History",
         List.of(KeyHelp.of("Up / Down", "older / newer inspection of the plane")));
+  }
+
+  /** The legend in a strip of at most about three rows that scrolls when it needs more. */
+  private static javafx.scene.control.ScrollPane legendStrip(Legend legend) {
+    javafx.scene.control.ScrollPane strip = new javafx.scene.control.ScrollPane(legend);
+    strip.setFitToWidth(true);
+    strip.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
+    strip.setPrefViewportHeight(150);
+    strip.setMinViewportHeight(60);
+    VBox.setVgrow(strip, Priority.NEVER);
+    return strip;
   }
 }

@@ -19,6 +19,10 @@ import org.bracewalk.app.HistoryService;
 import org.bracewalk.app.PanelChange;
 import org.bracewalk.app.PlaneHistory;
 import org.bracewalk.app.SiteService;
+import org.bracewalk.app.FrameChange;
+import org.bracewalk.app.verdict.Terms;
+import org.bracewalk.app.verdict.Wording;
+import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelFinding;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
@@ -32,6 +36,8 @@ public final class HistoryViewModel {
   /** Null until read. */
   private PlaneHistory history;
   private ZoneId zone;
+  /** The trade's words for the plane's frame members (ledger, beam...). */
+  private Terms terms = Terms.SCAFFOLD;
   private final ReadOnlyStringWrapper planeName = new ReadOnlyStringWrapper(this, "planeName", "");
   private final ObservableList<String> entries = FXCollections.observableArrayList();
   private final ObservableList<String> changes = FXCollections.observableArrayList();
@@ -59,16 +65,21 @@ public final class HistoryViewModel {
     background.execute(() -> {
       PlaneHistory read;
       ZoneId tz;
+      Terms words;
       try {
         read = histories.history(planeId);
         var structure = sites.structure(read.plane().structureId());
         tz = sites.site(structure.siteId()).timeZone();
+        words = Terms.of(structure.kind(), read.plane().role());
       } catch (RuntimeException e) {
         ui.execute(() -> heading.set("The history of plane " + planeId + " could not be read from the database ("
             + e.getMessage() + "). Open History again (Ctrl+5) to retry."));
         return;
       }
-      ui.execute(() -> loaded(read, tz));
+      ui.execute(() -> {
+        terms = words;
+        loaded(read, tz);
+      });
     });
   }
 
@@ -83,8 +94,7 @@ public final class HistoryViewModel {
           + "  " + e.inspection().reason().label().replace('-', ' ')
           + (e.inspection().isFinalised() ? "" : " (open)")
           + "\n" + k.symbol() + " " + k.words() + " \u00b7 "
-          + (entries.isEmpty() ? "first inspection"
-              : e.changes().size() + (e.changes().size() == 1 ? " change" : " changes")));
+          + (entries.isEmpty() ? "first inspection" : changeCount(e)));
       if (line.length() > 0) {
         line.append("  \u2192  ");
       }
@@ -95,6 +105,14 @@ public final class HistoryViewModel {
     if (history.entries().isEmpty()) {
       heading.set(read.plane().name() + ": not inspected yet.");
     }
+  }
+
+  /** "3 changes", "1 change", with frame members counted: "2 changes (1 frame member)". */
+  static String changeCount(PlaneHistory.Entry e) {
+    int all = e.changes().size() + e.frameChanges().size();
+    int frame = e.frameChanges().size();
+    return all + (all == 1 ? " change" : " changes")
+        + (frame == 0 ? "" : " (" + frame + (frame == 1 ? " frame member)" : " frame members)"));
   }
 
   static VerdictKind kind(PlaneHistory.Entry e) {
@@ -112,8 +130,17 @@ public final class HistoryViewModel {
       changed.add(c.panel());
       changes.add(c.panel() + ": " + words(c.before()) + " \u2192 " + words(c.after()));
     }
+    Set<FrameRef> changedMembers = new HashSet<>();
+    if (i > 0) {
+      for (FrameChange c : e.frameChanges()) {
+        changedMembers.add(c.member());
+        changes.add(Wording.frameMember(c.member(), terms) + ": " + words(c.before()) + " \u2192 "
+            + words(c.after()));
+      }
+    }
     if (changes.isEmpty()) {
-      changes.add(i == 0 ? "The first inspection of this plane: nothing to compare with." : "No panel changed.");
+      changes.add(i == 0 ? "The first inspection of this plane: nothing to compare with."
+          : "No panel or frame member changed.");
     }
     java.util.Map<PanelRef, PanelFinding> shown = new java.util.HashMap<>();
     e.findings().forEach((p, f) -> {
@@ -122,11 +149,17 @@ public final class HistoryViewModel {
       }
     });
     picture.set(new PlanePicture(e.design().design(), shown, true, e.verdict().blocks(),
-        Set.copyOf(e.verdict().criticalBraces()), List.of(), changed, null));
+        Set.copyOf(e.verdict().criticalBraces()), List.of(), changed, null, e.frameFindings(), null,
+        e.verdict().freedoms(), List.of(), changedMembers));
     VerdictKind k = kind(e);
     heading.set(history.plane().name() + " in inspection " + e.inspection().id() + " ("
         + WHEN.format(e.inspection().startedAt().atZone(zone)) + ", " + e.inspection().inspectorName() + "): "
         + k.symbol() + " " + k.words());
+  }
+
+  /** A frame member's recorded state; not recorded means taken as designed. */
+  private static String words(PanelState s) {
+    return s == null ? "not recorded (as designed)" : s.label();
   }
 
   private static String words(PanelFinding f) {

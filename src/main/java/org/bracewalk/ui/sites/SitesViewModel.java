@@ -37,6 +37,7 @@ import java.util.function.Supplier;
 import java.util.Map;
 import java.util.HashSet;
 import java.util.HashMap;
+import org.bracewalk.core.model.Jurisdiction;
 import org.bracewalk.core.model.Site;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.model.StructureKind;
@@ -156,13 +157,23 @@ public final class SitesViewModel {
     static final Overview EMPTY = new Overview(List.of(), Map.of(), Map.of(), Map.of());
   }
 
+  /**
+   * A site line's second column: where it is, and whose rules its reports cite (fixed when the
+   * site is created, with {@code site create --jurisdiction} or in a site file).
+   */
+  static String siteWords(Site site) {
+    String rules = site.jurisdiction() == Jurisdiction.OTHER
+        ? "rules: no jurisdiction recorded" : "rules: " + site.jurisdiction().title();
+    return site.location().isEmpty() ? rules : site.location() + " \u00b7 " + rules;
+  }
+
   private Overview readRows() {
     List<OverviewRow> out = new ArrayList<>();
     Map<Long, Structure> structuresRead = new HashMap<>();
     Map<Long, List<PlaneRecord>> planesRead = new HashMap<>();
     Map<Long, PlaneRetirement> retiredRead = new HashMap<>();
     for (Site site : sites.sites()) {
-      out.add(new OverviewRow(OverviewRow.Level.SITE, site.name(), site.location(), null, "", "", "",
+      out.add(new OverviewRow(OverviewRow.Level.SITE, site.name(), siteWords(site), null, "", "", "",
           OverviewRow.Due.NOT_APPLICABLE, "", 0, 0, 0, 0));
       LocalDate today = LocalDate.now(clock.withZone(site.timeZone()));
       for (Structure st : sites.structures(site.id())) {

@@ -37,7 +37,10 @@ class HistoryViewModelTest {
     assertThat(vm.timelineProperty().get()).isEqualTo("\u25A0 #1  \u2192  \u25B2 #2");
     var changed = vm.pictureProperty().get().changed();
     assertThat(changed).isNotEmpty();
-    assertThat(vm.changes()).hasSize(changed.size()).allMatch(s -> s.contains("\u2192"));
+    // one line per panel and per frame member that changed
+    assertThat(vm.changes())
+        .hasSize(changed.size() + vm.pictureProperty().get().changedMembers().size())
+        .allMatch(s -> s.contains("\u2192"));
     vm.older();
     assertThat(vm.pictureProperty().get().changed()).isEmpty();
     assertThat(vm.changes()).containsExactly("The first inspection of this plane: nothing to compare with.");

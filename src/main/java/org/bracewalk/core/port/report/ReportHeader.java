@@ -2,7 +2,10 @@ package org.bracewalk.core.port.report;
 
 import java.time.Instant;
 import java.time.ZoneId;
+import java.util.List;
 import java.util.Objects;
+import java.util.Set;
+import org.bracewalk.core.model.Jurisdiction;
 
 /**
  * Who and what a document is about, and how to show it.
@@ -17,6 +20,8 @@ import java.util.Objects;
  * @param zone the site's time zone, for every date and time shown
  * @param units the site's display units
  * @param issuedAt when this document was made
+ * @param jurisdiction the site's jurisdiction: the report cites its regulations only and asks
+ *     for the particulars they require ({@link SiteRules})
  */
 public record ReportHeader(
     String inspectionId,
@@ -28,7 +33,8 @@ public record ReportHeader(
     boolean finalised,
     ZoneId zone,
     LengthUnits units,
-    Instant issuedAt) {
+    Instant issuedAt,
+    Jurisdiction jurisdiction) {
   public ReportHeader {
     Objects.requireNonNull(inspectionId, "inspectionId");
     Objects.requireNonNull(siteName, "siteName");
@@ -39,6 +45,25 @@ public record ReportHeader(
     Objects.requireNonNull(zone, "zone");
     Objects.requireNonNull(units, "units");
     Objects.requireNonNull(issuedAt, "issuedAt");
+    Objects.requireNonNull(jurisdiction, "jurisdiction");
+  }
+
+  /** A header of a site with no jurisdiction recorded ({@link Jurisdiction#OTHER}). */
+  public ReportHeader(String inspectionId, String siteName, String structureName,
+      String structureKind, String reason, String designReference, boolean finalised, ZoneId zone,
+      LengthUnits units, Instant issuedAt) {
+    this(inspectionId, siteName, structureName, structureKind, reason, designReference, finalised,
+        zone, units, issuedAt, Jurisdiction.OTHER);
+  }
+
+  /** The particulars a report of this header must carry ({@link SiteRules#required}). */
+  public List<Particular> requiredParticulars() {
+    return SiteRules.required(jurisdiction, structureKind);
+  }
+
+  /** What the report cites ({@link SiteRules#cited}). */
+  public Set<SiteRules.Source> cited() {
+    return SiteRules.cited(jurisdiction, structureKind);
   }
 
   /** An open inspection's documents carry a DRAFT mark on every page. */

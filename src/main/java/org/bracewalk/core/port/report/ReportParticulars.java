@@ -56,9 +56,23 @@ public record ReportParticulars(
    *     required too)
    */
   public List<Particular> missing(boolean racking) {
+    List<Particular> all = new ArrayList<>();
+    for (Particular p : Particular.values()) {
+      if (p.recordedFor(racking)) {
+        all.add(p);
+      }
+    }
+    return missing(all);
+  }
+
+  /**
+   * Every particular of {@code required} that is empty, in the order of {@link Particular} (see
+   * {@link SiteRules#required}).
+   */
+  public List<Particular> missing(List<Particular> required) {
     List<Particular> out = new ArrayList<>();
     for (Particular p : Particular.values()) {
-      if (!p.recordedFor(racking)) {
+      if (!required.contains(p) || p.source() == Particular.Source.DRAWN) {
         continue;
       }
       String v = text(p);
