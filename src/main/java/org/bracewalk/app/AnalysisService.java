@@ -45,6 +45,32 @@ public final class AnalysisService {
     return new InspectionAnalysis(site, structure, inspection, results);
   }
 
+  /**
+   * Every plane the inspection covers, by id, with how many of its panels have been looked at and
+   * its verdict on the records so far (read in one pass over the observations).
+   */
+  public List<PlaneProgress> progress(long inspectionId) {
+    Inspection inspection = inspections.inspection(inspectionId);
+    List<Observation> rows = inspections.observations(inspectionId);
+    List<PlaneProgress> out = new ArrayList<>();
+    for (PlaneRecord plane : inspections.planesOf(inspectionId)) {
+      PlaneResult r = analysePlane(inspection, plane, rows);
+      int lookedAt = 0;
+      int notReachable = 0;
+      for (Observation o : r.latest().values()) {
+        if (o.state() != org.bracewalk.core.model.PanelState.NOT_INSPECTED) {
+          lookedAt++;
+        }
+        if (o.state() == org.bracewalk.core.model.PanelState.NOT_REACHABLE) {
+          notReachable++;
+        }
+      }
+      out.add(new PlaneProgress(plane, lookedAt, notReachable, plane.grid().panelCount(),
+          r.verdict().kind()));
+    }
+    return out;
+  }
+
   /** One plane of an inspection, analysed. */
   public PlaneResult analysePlane(long inspectionId, long planeId) {
     Inspection inspection = inspections.inspection(inspectionId);

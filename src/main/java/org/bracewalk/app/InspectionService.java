@@ -244,6 +244,97 @@ public final class InspectionService {
     return store.observations().ofInspection(inspectionId);
   }
 
+  /** Why a panel recorded by {@link #recordRestAsDesigned} that had a withdrawn mark is corrected. */
+  public static final String REST_AS_DESIGNED_REASON =
+      "recorded as found as designed with the rest of the plane, after the inspector confirmed it";
+
+  /** The note each record of {@link #recordRestAsDesigned} carries, so the record says how it was made. */
+  public static final String REST_AS_DESIGNED_NOTE =
+      "found as designed: recorded with the rest of the plane in one confirmed step";
+
+  /**
+   * The panels of a plane nobody has looked at in this inspection, lift then bay: those with no
+   * observation in force, or whose latest observation withdrew a mark ("not inspected"). A panel
+   * marked "not reachable" was looked for, so it is not one of them.
+   */
+  public List<PanelRef> notLookedAt(long inspectionId, long planeId) {
+    return notLookedAt(designInForce(inspectionId, planeId).design().grid(),
+        latestObservations(inspectionId, planeId));
+  }
+
+  private static List<PanelRef> notLookedAt(org.bracewalk.core.model.PlaneGrid grid,
+      Map<PanelRef, Observation> latest) {
+    List<PanelRef> out = new ArrayList<>();
+    for (int lift = 1; lift <= grid.lifts(); lift++) {
+      for (int bay = 1; bay <= grid.bays(); bay++) {
+        PanelRef p = new PanelRef(lift, bay);
+        Observation o = latest.get(p);
+        if (o == null || o.state() == PanelState.NOT_INSPECTED) {
+          out.add(p);
+        }
+      }
+    }
+    return out;
+  }
+
+  /**
+   * Records every panel of a plane nobody has looked at yet ({@link #notLookedAt}) as found as
+   * designed, in one transaction: one ordinary observation per panel, state {@code sound} with no
+   * member named, which the records read as "as the design has it" (the design's brace there and
+   * sound; an unbraced panel or an opening with no member). A panel whose mark was withdrawn gets
+   * a correction of that record. Frame members need no records: one not recorded is taken as
+   * designed. The person confirms the panels first, so the call names them: when the panels not
+   * yet looked at are not exactly {@code expected} (another mark came in between), nothing is
+   * recorded and the difference is named.
+   *
+   * @return the observations recorded, lift then bay
+   * @throws UserInputException when the panels differ from {@code expected} or the plane is not
+   *     in the inspection
+   * @throws InspectionFinalisedException when the inspection is finalised
+   */
+  public List<Observation> recordRestAsDesigned(long inspectionId, long planeId,
+      List<PanelRef> expected, String recordedBy) {
+    Objects.requireNonNull(expected, "expected");
+    return store.inTransaction(() -> {
+      Inspection inspection = inspection(inspectionId);
+      requireOpen(inspection, "record the rest of a plane as designed");
+      PlaneRecord plane = plane(planeId);
+      DesignRevision design = designInForce(inspectionId, planeId);
+      Map<PanelRef, Observation> latest = latestObservations(inspectionId, planeId);
+      List<PanelRef> rest = notLookedAt(design.design().grid(), latest);
+      Set<PanelRef> confirmed = new HashSet<>(expected);
+      if (!confirmed.equals(new HashSet<>(rest)) || expected.size() != rest.size()) {
+        List<PanelRef> notNamed = new ArrayList<>(rest);
+        notNamed.removeAll(confirmed);
+        List<PanelRef> lookedAt = new ArrayList<>(expected);
+        lookedAt.removeAll(rest);
+        throw new UserInputException("plane '" + plane.name() + "' in " + inspection.label()
+            + ": " + rest.size() + " panels are not yet looked at, but " + expected.size()
+            + " were confirmed" + (notNamed.isEmpty() ? "" : "; not confirmed: " + notNamed)
+            + (lookedAt.isEmpty() ? "" : "; already looked at: " + lookedAt)
+            + ". Nothing was recorded; confirm again");
+      }
+      List<Observation> out = new ArrayList<>();
+      Observation checked = null; // the plane's checks (open, in scope, not retired) once, not per panel
+      for (PanelRef p : rest) {
+        Observation withdrawn = latest.get(p);
+        Long supersedes = withdrawn == null ? null : withdrawn.id();
+        String reason = supersedes == null ? null : REST_AS_DESIGNED_REASON;
+        Observation o;
+        if (checked == null) {
+          o = toObservation(inspection, new NewObservation(planeId, p, PanelState.SOUND, null, null, null,
+              null, REST_AS_DESIGNED_NOTE, recordedBy), supersedes, reason);
+          checked = o;
+        } else {
+          o = new Observation(0, inspection.id(), planeId, p, PanelState.SOUND, null, null, null, null,
+              checked.note(), clock.instant(), checked.recordedBy(), supersedes, reason, null);
+        }
+        out.add(store.observations().add(o));
+      }
+      return out;
+    });
+  }
+
   /**
    * The observation that counts for each panel of a plane: the latest one recorded for the panel
    * that no correction supersedes. Panels with none are absent (not inspected).

@@ -109,6 +109,12 @@ public final class WalkBench {
       public RecordedMark correct(RecordedMark earlier, Mark replacement, String reason) {
         return new RecordedMark(ids.incrementAndGet(), earlier.panel(), replacement, earlier.member());
       }
+
+      @Override
+      public java.util.List<RecordedMark> recordRestAsDesigned(java.util.List<PanelRef> panels) {
+        return panels.stream().map(p -> new RecordedMark(ids.incrementAndGet(), p, Mark.of(
+            org.bracewalk.core.model.PanelState.SOUND))).toList();
+      }
     };
   }
 

@@ -9,10 +9,8 @@ import java.util.concurrent.Executor;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
 import javafx.beans.binding.Bindings;
-import javafx.geometry.Insets;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
-import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
@@ -189,7 +187,7 @@ public final class AppScreens implements ScreenFactory {
    * the design in force, the marks already stored for the plane and the planes it covers.
    */
   private record WalkRead(Place place, Optional<Inspection> inspection, boolean covered, DesignRevision design,
-      List<RecordedMark> existing, List<PlaneRecord> planes) { }
+      List<RecordedMark> existing, List<org.bracewalk.app.PlaneProgress> planes) { }
 
   private Place place(long planeId) {
     PlaneRecord plane = read("plane " + planeId, () -> services.sites().plane(planeId));
@@ -229,9 +227,10 @@ public final class AppScreens implements ScreenFactory {
         () -> services.inspections().designInForce(inspection, plane));
     List<RecordedMark> existing = read("the marks already recorded for plane " + name + " in inspection " + inspection,
         () -> InspectionMarkRecorder.existing(services.inspections(), inspection, plane));
-    // the planes the inspection covers (a plane retired before it started is not one of them)
-    List<PlaneRecord> planes = read("the planes of inspection " + inspection,
-        () -> services.inspections().planesOf(inspection));
+    // the planes the inspection covers (a plane retired before it started is not one of them),
+    // each with its progress and verdict for the plane chooser
+    List<org.bracewalk.app.PlaneProgress> planes = read("the planes of inspection " + inspection,
+        () -> services.analysis().progress(inspection));
     return new WalkRead(f.place(), f.inspection(), true, design, existing, planes);
   }
 
@@ -331,35 +330,34 @@ public final class AppScreens implements ScreenFactory {
             analyzer, dialogs, st.kind() == StructureKind.RACKING_RUN, insp.isFinalised(), clock, ui, records);
     vm.useCameraFolderSetting(cameraFolder);
     vm.useFrameInWalkSetting(frameInWalk);
+    if (insp.reason() == org.bracewalk.core.model.InspectionReason.ROUTINE) {
+      // a routine walk visits the braced panels; A records the rest as designed, after asking
+      vm.startWith(org.bracewalk.ui.walk.WalkOrder.BRACED_BAYS_UP_AND_DOWN);
+    }
     WalkView view = new WalkView(vm);
     Selection here = new Selection(st.id(), plane.id(), insp.id());
     BorderPane wrap = new BorderPane(view);
-    javafx.beans.property.StringProperty who = new javafx.beans.property.SimpleStringProperty(inspectionWords(insp));
-    wrap.setTop(planeBar(who, r.planes(), plane, p -> navigator.open(ScreenId.WALK, new Selection(st.id(), p, insp.id()))));
+    org.bracewalk.ui.walk.PlaneChooser chooser = new org.bracewalk.ui.walk.PlaneChooser(insp, r.planes(), plane.id(), vm,
+        p -> navigator.open(ScreenId.WALK, new Selection(st.id(), p, insp.id())));
+    wrap.setTop(chooser);
     wrap.addEventFilter(KeyEvent.KEY_PRESSED, e -> {
       if (e.isControlDown() && e.getCode() == KeyCode.P) {
-        ((ChoiceBox<?>) ((javafx.scene.layout.HBox) wrap.getTop()).lookup("#plane-choice")).show();
+        chooser.show();
         e.consume();
       }
     });
     LiveScreen screen = new LiveScreen(wrap, crumbs(r.place(), insp), view::focusPlane,
         new javafx.beans.property.SimpleObjectProperty<>(here));
     // a change made elsewhere (the inspection finalised, say): the header and the bar read it again
-    screen.reread = source -> rereadInspection(insp.id(), r.place(), screen, who);
+    screen.reread = source -> rereadInspection(insp.id(), r.place(), screen, chooser);
     return screen;
-  }
-
-  /** How the walk-round's bar names the inspection: by whom, why, open or finalised. */
-  private static String inspectionWords(Inspection insp) {
-    return "Inspection " + insp.id() + " by " + insp.inspectorName() + " \u00b7 "
-        + insp.reason().label().replace('-', ' ') + (insp.isFinalised() ? " \u00b7 finalised (read-only)" : " \u00b7 open");
   }
 
   /**
    * Reads inspection {@code id} again (on the ordered queue) and puts its state into the header
    * and, when given, the walk-round's bar. A failed read leaves them as they are.
    */
-  private void rereadInspection(long id, Place place, LiveScreen screen, javafx.beans.property.StringProperty who) {
+  private void rereadInspection(long id, Place place, LiveScreen screen, org.bracewalk.ui.walk.PlaneChooser who) {
     records.execute(() -> {
       Inspection now;
       try {
@@ -372,46 +370,10 @@ public final class AppScreens implements ScreenFactory {
       ui.execute(() -> {
         screen.crumbs.set(crumbs(place, now));
         if (who != null) {
-          who.set(inspectionWords(now));
+          who.inspectionChanged(now);
         }
       });
     });
-  }
-
-  private static Node planeBar(javafx.beans.value.ObservableValue<String> inspection, List<PlaneRecord> planes,
-      PlaneRecord current,
-      java.util.function.LongConsumer open) {
-    ChoiceBox<PlaneRecord> choice = new ChoiceBox<>();
-    choice.setId("plane-choice");
-    choice.getItems().addAll(planes);
-    choice.setConverter(new javafx.util.StringConverter<>() {
-      @Override
-      public String toString(PlaneRecord p) {
-        return p == null ? "" : p.name() + " (" + p.grid().lifts() + " \u00d7 " + p.grid().bays() + ")";
-      }
-
-      @Override
-      public PlaneRecord fromString(String t) {
-        return null;
-      }
-    });
-    for (PlaneRecord p : choice.getItems()) {
-      if (p.id() == current.id()) {
-        choice.setValue(p);
-      }
-    }
-    choice.setOnAction(e -> {
-      if (choice.getValue() != null && choice.getValue().id() != current.id()) {
-        open.accept(choice.getValue().id());
-      }
-    });
-    choice.setFocusTraversable(false);
-    Label who = new Label();
-    who.setId("walk-inspection");
-    who.textProperty().bind(inspection);
-    var bar = Widgets.row(10, who, Widgets.grow(), new Label("Plane (Ctrl+P):"), choice);
-    bar.setPadding(new Insets(12, 12, 0, 12));
-    return bar;
   }
 
   /**

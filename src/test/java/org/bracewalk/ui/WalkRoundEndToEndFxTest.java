@@ -124,6 +124,10 @@ class WalkRoundEndToEndFxTest {
     long inspectionId = window.selection().inspectionId();
     assertThat(inspectionId).isPositive();
 
+    // a routine inspection starts on the braced panels only; O: every panel, bay by bay
+    assertThat(text(robot, "#walk-cursor")).contains("1 of 15 in walk order");
+    robot.type(KeyCode.O);
+    WaitForAsyncUtils.waitForFxEvents();
     // walk the facade bay by bay; lift 3 was hit
     PlaneRecord facade = DemoWalk.facade(services);
     List<PanelRef> order = WalkOrder.BAYS_UP_AND_DOWN.sequence(facade.grid());

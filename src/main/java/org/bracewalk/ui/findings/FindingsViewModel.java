@@ -88,11 +88,11 @@ public final class FindingsViewModel {
   /** True from the finalise key until the inspection is finalised or the question declined. */
   private boolean finalising;
 
-  /** A plane of the inspection, with its verdict, for switching between them. */
-  public record PlaneChoice(long planeId, String name, VerdictKind verdict) {
+  /** A plane of the inspection, with its progress ("15 of 50 panels") and verdict, for switching between them. */
+  public record PlaneChoice(long planeId, String name, VerdictKind verdict, String progress) {
     @Override
     public String toString() {
-      return verdict.symbol() + " " + name + " \u2014 " + verdict.words();
+      return verdict.symbol() + " " + name + " \u2014 " + progress + " \u2014 " + verdict.words();
     }
   }
 
@@ -168,9 +168,8 @@ public final class FindingsViewModel {
     String titleWords = plane.name() + " in inspection " + inspectionId + " (" + inspection.reason().label().replace('-', ' ')
         + ", " + (inspection.isFinalised() ? "finalised" : "open") + ")";
     List<PlaneChoice> planes = new ArrayList<>();
-    for (PlaneRecord p : inspections.planesOf(inspectionId)) {
-      PlaneResult r = analysis.analysePlane(inspectionId, p.id());
-      planes.add(new PlaneChoice(p.id(), p.name(), kind(r)));
+    for (org.bracewalk.app.PlaneProgress p : analysis.progress(inspectionId)) {
+      planes.add(new PlaneChoice(p.plane().id(), p.plane().name(), p.verdict(), p.countWords()));
     }
     PlaneResult result = analysis.analysePlane(inspectionId, planeId);
     PlaneDesign design = result.design().design();
@@ -297,10 +296,6 @@ public final class FindingsViewModel {
         findingLines, summaryWords);
   }
 
-  private static VerdictKind kind(PlaneResult r) {
-    return r.verdict().kind();
-  }
-
   /**
    * What is done to a design frame member of the repair, as the repair order says: inspected
    * (and fitted if missing) when nobody has looked at it, replaced when damaged beyond use, else
@@ -399,16 +394,10 @@ public final class FindingsViewModel {
     }
     finalising = true;
     background.execute(() -> {
-      List<String> gaps = new ArrayList<>();
+      String gaps;
       try {
-        for (PlaneRecord p : inspections.planesOf(inspectionId)) {
-          long marked = inspections.latestObservations(inspectionId, p.id()).values().stream()
-              .filter(o -> o.state().inspected()).count();
-          int total = p.grid().panelCount();
-          if (marked < total) {
-            gaps.add(p.name() + ": " + (total - marked) + " of " + total + " panels not inspected");
-          }
-        }
+        // the facts (each plane with panels nobody has looked at, named) come from the use case
+        gaps = org.bracewalk.app.PlaneProgress.finaliseWarning(analysis.progress(inspectionId));
       } catch (RuntimeException e) {
         ui.execute(() -> notFinalised(e));
         return;
@@ -418,9 +407,8 @@ public final class FindingsViewModel {
     return true;
   }
 
-  private void ask(List<String> gaps) {
-    String warning = gaps.isEmpty() ? "" : "\n\nNot every panel was inspected:\n  " + String.join("\n  ", gaps)
-        + "\nThe report will count those panels as missing.";
+  private void ask(String gaps) {
+    String warning = gaps.isEmpty() ? "" : "\n\n" + gaps;
     boolean go = dialogs.confirm("Finalise inspection " + inspectionId + "?",
         "After finalising, nothing in this inspection can be changed: no mark, correction or photo."
             + " Later changes need a new inspection." + warning, "Finalise");

@@ -223,6 +223,9 @@ public final class SitesViewModel {
         Set<Long> inLatest = latest.map(i -> covered.get(i.id())).orElse(Set.of());
         List<Inspection> newestFirst =
             insp.stream().sorted(Comparator.comparing(Inspection::startedAt).reversed()).toList();
+        // how far the open inspection has got with each of its planes, so a second plane is not missed
+        Map<Long, org.bracewalk.app.PlaneProgress> openProgress = new HashMap<>();
+        open.ifPresent(i -> analysis.progress(i.id()).forEach(pp -> openProgress.put(pp.plane().id(), pp)));
         for (PlaneRecord plane : planesOfStructure) {
           VerdictKind v = VerdictKind.NOT_INSPECTED;
           String words;
@@ -242,6 +245,11 @@ public final class SitesViewModel {
           if (latest.isPresent() && !inLatest.contains(plane.id())) {
             // added after the latest inspection started: not part of it (its scope is fixed)
             words += " (added after inspection " + latest.get().id() + " started)";
+          }
+          org.bracewalk.app.PlaneProgress pp = openProgress.get(plane.id());
+          if (pp != null && !words.contains("open #" + open.get().id() + ":")) {
+            // a plane of the open inspection nobody has marked yet: say so, so it is not missed
+            words += " \u00b7 open #" + open.get().id() + ": " + pp.countWords() + " looked at";
           }
           if (gone != null) {
             words += " \u00b7 retired " + WHEN.format(gone.retiredAt().atZone(site.timeZone())) + ": "

@@ -51,6 +51,21 @@ public final class InspectionMarkRecorder implements MarkRecorder {
     return new RecordedMark(o.id(), earlier.panel(), replacement, earlier.member());
   }
 
+  @Override
+  public List<RecordedMark> recordRestAsDesigned(List<PanelRef> panels) {
+    List<RecordedMark> out = new ArrayList<>();
+    for (Observation o : inspections.recordRestAsDesigned(inspectionId, planeId, panels, recordedBy)) {
+      out.add(new RecordedMark(o.id(), o.panel(), restAsDesigned()));
+    }
+    return out;
+  }
+
+  /** The mark each panel recorded as found as designed holds (as {@link InspectionService#recordRestAsDesigned} records it). */
+  static Mark restAsDesigned() {
+    return new Mark(org.bracewalk.core.model.PanelState.SOUND, null, null, null, null,
+        InspectionService.REST_AS_DESIGNED_NOTE, List.of());
+  }
+
   private NewObservation observation(PanelRef panel, Mark m) {
     return new NewObservation(
         planeId, panel, m.state(), m.memberFound(), m.bowMm(), m.gaugeLengthMm(), m.defect(),

@@ -1,5 +1,6 @@
 package org.bracewalk.ui.walk;
 
+import java.util.List;
 import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 
@@ -21,4 +22,11 @@ public interface MarkRecorder {
 
   /** Commits a mark that supersedes {@code earlier} (of a panel or of a frame member), saying why. */
   RecordedMark correct(RecordedMark earlier, Mark replacement, String reason);
+
+  /**
+   * Commits, all or nothing, every panel of {@code panels} as found as designed: the panels nobody
+   * has looked at, as the inspector confirmed them (refused, recording nothing, when the record
+   * holds others). Returns the records, one per panel, in the order given.
+   */
+  List<RecordedMark> recordRestAsDesigned(List<PanelRef> panels);
 }

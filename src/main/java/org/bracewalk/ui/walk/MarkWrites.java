@@ -40,6 +40,12 @@ final class MarkWrites {
 
     /** Undo {@code ticket} wrote nothing: the mark it undoes never reached the record. */
     void passedOver(long ticket, PanelRef panel, FrameRef member);
+
+    /** Write {@code ticket}, the rest of the panels as designed, is in the record as {@code made}. */
+    void storedRest(long ticket, List<RecordedMark> made);
+
+    /** Write {@code ticket}, {@code panels} as designed, recorded nothing, because {@code why}. */
+    void refusedRest(long ticket, List<PanelRef> panels, String why);
   }
 
   private final MarkRecorder recorder;
@@ -121,6 +127,27 @@ final class MarkWrites {
         return;
       }
       write(ticket, panel, member, back, reason);
+    });
+  }
+
+  /**
+   * Queues write {@code ticket}: {@code panels} (those nobody has looked at, as confirmed) recorded
+   * as found as designed, all or nothing, after every write queued before it.
+   */
+  void rest(long ticket, List<PanelRef> panels) {
+    List<PanelRef> copy = List.copyOf(panels);
+    queue.execute(() -> {
+      List<RecordedMark> made;
+      try {
+        made = recorder.recordRestAsDesigned(copy);
+      } catch (RuntimeException e) {
+        refused.add(ticket);
+        String why = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+        ui.execute(() -> outcome.refusedRest(ticket, copy, why));
+        return;
+      }
+      made.forEach(r -> stored.put(key(r.panel(), null), r));
+      ui.execute(() -> outcome.storedRest(ticket, made));
     });
   }
 

@@ -12,6 +12,7 @@ import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
+import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneGrid;
 import org.bracewalk.ui.common.PanelSide;
 
@@ -21,6 +22,7 @@ import org.bracewalk.ui.common.PanelSide;
  * frame members or not ({@link #frameInWalkProperty()}); either way any side can be selected.
  */
 final class WalkCursor {
+  private final PlaneDesign design;
   private final PlaneGrid grid;
   private final Predicate<WalkStop> marked;
   private final ObjectProperty<WalkOrder> order = new SimpleObjectProperty<>(this, "order");
@@ -29,13 +31,16 @@ final class WalkCursor {
   private final ReadOnlyObjectWrapper<PanelSide> side = new ReadOnlyObjectWrapper<>(this, "side");
   private List<WalkStop> sequence;
   private Map<WalkStop, Integer> index;
+  /** Each panel's place in the order of every panel the walk follows. */
+  private Map<PanelRef, Integer> fullIndex;
 
   /**
-   * @param grid the plane's grid
+   * @param design the plane's design (a braced order visits the panels it braces)
    * @param marked true for a stop that already holds a mark (the cursor starts on the first that does not)
    */
-  WalkCursor(PlaneGrid grid, Predicate<WalkStop> marked) {
-    this.grid = grid;
+  WalkCursor(PlaneDesign design, Predicate<WalkStop> marked) {
+    this.design = design;
+    this.grid = design.grid();
     this.marked = marked;
     order.set(WalkOrder.BAYS_UP_AND_DOWN);
     rebuild();
@@ -45,40 +50,66 @@ final class WalkCursor {
   }
 
   private void rebuild() {
-    sequence = order.get().stops(grid, frameInWalk.get());
+    sequence = order.get().stops(design, frameInWalk.get());
     index = new HashMap<>(sequence.size() * 2);
     for (int i = 0; i < sequence.size(); i++) {
       index.put(sequence.get(i), i);
     }
+    List<PanelRef> all = order.get().everyPanel().sequence(grid);
+    fullIndex = new HashMap<>(all.size() * 2);
+    for (int i = 0; i < all.size(); i++) {
+      fullIndex.put(all.get(i), i);
+    }
   }
 
-  /** Where the current stop is in the sequence; a side outside the walk counts as its panel's diagonals. */
-  private int here() {
-    Integer i = index.get(stop());
-    if (i == null) {
-      i = index.get(WalkStop.of(cursor.get()));
-    }
-    return i == null ? 0 : i;
+  /**
+   * Where a stop stands in the order of every panel this walk follows: its panel's place there,
+   * then the diagonals before the sides. Orders stops the walk leaves out among those it takes in.
+   */
+  private int rank(WalkStop s) {
+    Integer i = fullIndex.get(s.panel());
+    return (i == null ? 0 : i) * 5 + (s.side() == null ? 0 : 1 + s.side().ordinal());
   }
 
   /** Moves to the next stop in the walk order; false when already on the last. */
   boolean next() {
-    int i = here();
-    if (i < sequence.size() - 1) {
-      set(sequence.get(i + 1));
-      return true;
+    Integer i = index.get(stop());
+    if (i != null) {
+      if (i < sequence.size() - 1) {
+        set(sequence.get(i + 1));
+        return true;
+      }
+      return false;
+    }
+    // off the walk (a panel a braced order leaves out, a side): the next stop after it
+    int here = rank(stop());
+    for (WalkStop s : sequence) {
+      if (rank(s) > here) {
+        set(s);
+        return true;
+      }
     }
     return false;
   }
 
   /** Moves to the previous stop in the walk order (stays on the first). */
   void previous() {
-    int i = here();
-    WalkStop s = stop();
-    if (!index.containsKey(s)) {
-      set(sequence.get(i)); // off the walk: back to the panel's diagonals first
-    } else if (i > 0) {
-      set(sequence.get(i - 1));
+    Integer i = index.get(stop());
+    if (i != null) {
+      if (i > 0) {
+        set(sequence.get(i - 1));
+      }
+      return;
+    }
+    int here = rank(stop());
+    WalkStop before = null;
+    for (WalkStop s : sequence) {
+      if (rank(s) < here) {
+        before = s;
+      }
+    }
+    if (before != null) {
+      set(before);
     }
   }
 
@@ -122,14 +153,22 @@ final class WalkCursor {
     }
   }
 
-  /** The first stop, in walk order, that has no mark yet (else the first stop). */
+  /**
+   * The first stop, in walk order, that has no mark yet; else the first panel of the grid with
+   * none (a braced order leaves some out); else the first stop.
+   */
   WalkStop firstUnmarked() {
     for (WalkStop s : sequence) {
       if (!marked.test(s)) {
         return s;
       }
     }
-    return sequence.get(0);
+    for (PanelRef p : order.get().everyPanel().sequence(grid)) {
+      if (!marked.test(WalkStop.of(p))) {
+        return WalkStop.of(p);
+      }
+    }
+    return sequence.isEmpty() ? WalkStop.of(new PanelRef(1, 1)) : sequence.get(0);
   }
 
   /** Cycles the walk order. */
@@ -146,7 +185,7 @@ final class WalkCursor {
 
   /** The panels of the walk, in order (each once). */
   List<PanelRef> sequence() {
-    return order.get().sequence(grid);
+    return order.get().sequence(design);
   }
 
   /** Every stop of the walk, in order. */

@@ -18,7 +18,11 @@ import javafx.scene.control.ToggleButton;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.SimpleBooleanProperty;
 import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
@@ -47,6 +51,33 @@ public final class WalkView extends BorderPane {
 
   /** Window heights below this start with the key folded. */
   static final double ROOM_FOR_KEY = 840;
+  /**
+   * Window heights below this show the detail fields (defect, bow, note, photos) as one compact
+   * strip under the drawing, opened when a field is asked for (Alt+D, Alt+B, Alt+O) or holds
+   * something for the next mark, instead of in the side panel below the fold.
+   */
+  static final double ROOM_FOR_DETAILS = 900;
+
+  /** The scrolled side panel with the mark buttons and the other controls. */
+  private ScrollPane controls;
+  private final BooleanProperty compact = new SimpleBooleanProperty(this, "compact");
+  /** The strip was asked for (Alt+D, Alt+B, Alt+O) and not yet left. */
+  private boolean stripWanted;
+  private final FlowPane strip = new FlowPane(12, 6);
+  private GridPane details;
+  private VBox detailBox;
+  private ComboBox<DefectType> defect;
+  private TextField bow;
+  private TextField note;
+  private Label defectLabel;
+  private Label bowLabel;
+  private Label noteLabel;
+  private HBox photoRow;
+  private Button photos;
+  private Button camera;
+  private HBox countRow;
+  private Label bowHint;
+  private Label detailHint;
 
   /** The state keys, in button order; digits 1 to 6 do the same. */
   static final List<PanelState> STATES =
@@ -123,7 +154,13 @@ public final class WalkView extends BorderPane {
         now.heightProperty().addListener(once);
       }
     });
-    VBox centre = new VBox(8, banner, canvas, cursorText, key);
+    strip.setId("walk-detail-strip");
+    strip.getStyleClass().add("detail-strip");
+    strip.setAlignment(Pos.CENTER_LEFT);
+    strip.prefWrapLengthProperty().bind(canvas.widthProperty());
+    strip.setVisible(false);
+    strip.managedProperty().bind(strip.visibleProperty());
+    VBox centre = new VBox(8, banner, canvas, strip, cursorText, key);
     setCenter(centre);
 
     // The verdict stands above the scrolled controls, outside the scroll pane: its words change
@@ -135,6 +172,7 @@ public final class WalkView extends BorderPane {
     readOnly.visibleProperty().bind(vm.readOnlyProperty());
     readOnly.managedProperty().bind(readOnly.visibleProperty());
     ScrollPane side = new ScrollPane(sidePanel());
+    controls = side;
     side.setFitToWidth(true);
     side.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
     side.setPrefViewportWidth(400);
@@ -175,6 +213,148 @@ public final class WalkView extends BorderPane {
     setBottom(bottom);
 
     addEventHandler(KeyEvent.KEY_PRESSED, this::onKey);
+    addEventFilter(KeyEvent.KEY_PRESSED, this::onDetailKey);
+
+    // a short window: the detail fields as a strip under the drawing; any focused control in the
+    // side panel is scrolled into view
+    sceneProperty().addListener((o, was, now) -> {
+      if (now != null) {
+        compact.set(now.getHeight() > 0 && now.getHeight() < ROOM_FOR_DETAILS);
+        now.heightProperty().addListener((v, a, h) -> compact.set(h.doubleValue() > 0 && h.doubleValue() < ROOM_FOR_DETAILS));
+        now.focusOwnerProperty().addListener((v, a, f) -> {
+          if (f != canvas && f != null && !within(f, strip)) {
+            stripWanted = false;
+          }
+          if (f == canvas) {
+            stripWanted = false;
+          }
+          updateStrip();
+          if (f != null && within(f, controls.getContent())) {
+            scrollIntoView(controls, f);
+          }
+        });
+      }
+    });
+    compact.addListener((o, a, b) -> placeDetails(b));
+    Runnable update = this::updateStrip;
+    vm.defectProperty().addListener((o, a, b) -> update.run());
+    vm.bowMmProperty().addListener((o, a, b) -> update.run());
+    vm.noteProperty().addListener((o, a, b) -> update.run());
+    vm.photos().addListener((javafx.collections.ListChangeListener<java.nio.file.Path>) c -> update.run());
+  }
+
+  /** Alt+D, Alt+B, Alt+O: the defect, bow or note field, opened and in view whatever the window's size. */
+  private void onDetailKey(KeyEvent e) {
+    if (!e.isAltDown() || e.isControlDown() || e.isMetaDown()) {
+      return;
+    }
+    Node field = switch (e.getCode()) {
+      case D -> defect;
+      case B -> bow;
+      case O -> note;
+      default -> null;
+    };
+    if (field == null) {
+      return;
+    }
+    stripWanted = compact.get();
+    updateStrip();
+    field.requestFocus();
+    e.consume();
+  }
+
+  /** Whether the detail strip shows: on a short window, when asked for, focused or holding something. */
+  private void updateStrip() {
+    boolean pending = vm.defectProperty().get() != null || !vm.bowMmProperty().get().isEmpty()
+        || !vm.noteProperty().get().isEmpty() || !vm.photos().isEmpty();
+    Node focus = getScene() == null ? null : getScene().getFocusOwner();
+    strip.setVisible(compact.get() && (stripWanted || pending || (focus != null && within(focus, strip))));
+  }
+
+  /** Puts the detail fields in the compact strip under the drawing, or back in the side panel. */
+  private void placeDetails(boolean inStrip) {
+    if (inStrip) {
+      details.getChildren().clear();
+      detailBox.setVisible(false);
+      defect.setMaxWidth(Region.USE_PREF_SIZE);
+      defect.setPrefWidth(150);
+      bow.setPrefColumnCount(6);
+      note.setPrefColumnCount(10);
+      photos.setText("Photos (F)");
+      camera.setText("Camera (G)");
+      // the photo count and the bow's damage level only when they say something
+      countRow.visibleProperty().bind(Bindings.isNotEmpty(vm.photos()));
+      countRow.managedProperty().bind(countRow.visibleProperty());
+      bowHint.visibleProperty().bind(bowHint.textProperty().isNotEmpty());
+      bowHint.managedProperty().bind(bowHint.visibleProperty());
+      strip.getChildren().setAll(
+          Widgets.row(6, defectLabel, defect), Widgets.row(6, bowLabel, bow), Widgets.row(6, noteLabel, note),
+          photoRow, countRow, bowHint);
+    } else {
+      strip.getChildren().clear();
+      defect.setMaxWidth(Double.MAX_VALUE);
+      defect.setPrefWidth(Region.USE_COMPUTED_SIZE);
+      bow.setPrefColumnCount(TextField.DEFAULT_PREF_COLUMN_COUNT);
+      note.setPrefColumnCount(TextField.DEFAULT_PREF_COLUMN_COUNT);
+      photos.setText("Add photos\u2026 (F)");
+      camera.setText("From camera folder (G)");
+      for (Node n : List.of(countRow, bowHint)) {
+        n.visibleProperty().unbind();
+        n.managedProperty().unbind();
+        n.setVisible(true);
+        n.setManaged(true);
+      }
+      fillDetails();
+      detailBox.setVisible(true);
+    }
+    updateStrip();
+  }
+
+  private void fillDetails() {
+    details.getChildren().clear();
+    details.addRow(0, defectLabel, defect);
+    details.addRow(1, bowLabel, bow);
+    details.addRow(2, noteLabel, note);
+    details.add(photoRow, 0, 3, 2, 1);
+    details.add(countRow, 0, 4, 2, 1);
+    details.add(detailHint, 0, 5, 2, 1);
+    if (!detailBox.getChildren().contains(bowHint)) {
+      detailBox.getChildren().add(bowHint);
+    }
+  }
+
+  private static boolean within(Node n, Node ancestor) {
+    for (Node p = n; p != null; p = p.getParent()) {
+      if (p == ancestor) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  /** Scrolls {@code pane} the least so that {@code n} (inside its content) lies in its viewport. */
+  static void scrollIntoView(ScrollPane pane, Node n) {
+    Node content = pane.getContent();
+    pane.applyCss();
+    pane.layout();
+    javafx.geometry.Bounds b = content.sceneToLocal(n.localToScene(n.getBoundsInLocal()));
+    double contentHeight = content.getLayoutBounds().getHeight();
+    double view = pane.getViewportBounds().getHeight();
+    double room = contentHeight - view;
+    if (room <= 0 || b == null) {
+      return;
+    }
+    double top = room * (pane.getVvalue() - pane.getVmin()) / (pane.getVmax() - pane.getVmin());
+    double margin = 8;
+    if (b.getMinY() - margin < top) {
+      top = b.getMinY() - margin;
+    } else if (b.getMaxY() + margin > top + view) {
+      top = b.getMaxY() + margin - view;
+    } else {
+      return;
+    }
+    double f = Math.max(0, Math.min(1, top / room));
+    pane.setVvalue(pane.getVmin() + f * (pane.getVmax() - pane.getVmin()));
   }
 
   private VBox sidePanel() {
@@ -240,7 +420,7 @@ public final class WalkView extends BorderPane {
     VBox member = Widgets.box("Member seen (keys / \\ X, . follows state)", seenRow, tension,
         Widgets.hint("Only when it differs: the extra member, or the half of a cross still there."));
 
-    ComboBox<DefectType> defect = new ComboBox<>();
+    defect = new ComboBox<>();
     defect.getItems().add(null);
     defect.getItems().addAll(DefectType.values());
     defect.valueProperty().bindBidirectional(vm.defectProperty());
@@ -257,27 +437,27 @@ public final class WalkView extends BorderPane {
       }
     });
     defect.setMaxWidth(Double.MAX_VALUE);
-    TextField bow = new TextField();
+    bow = new TextField();
     bow.setId("walk-bow");
     bow.setPromptText("mm over 1 m");
     bow.textProperty().bindBidirectional(vm.bowMmProperty());
-    TextField note = new TextField();
+    note = new TextField();
     note.setId("walk-note");
     note.setPromptText("what, where");
     note.textProperty().bindBidirectional(vm.noteProperty());
-    Button photos = new Button("Add photos\u2026 (F)");
+    photos = new Button("Add photos\u2026 (F)");
     photos.setId("walk-photos");
     photos.setOnAction(e -> vm.addPhotos());
     photos.setFocusTraversable(false);
     Label photoCount = new Label();
     photoCount.textProperty().bind(Bindings.size(vm.photos()).asString("%d attached to the next mark"));
-    GridPane details = new GridPane();
+    details = new GridPane();
     details.setHgap(8);
     details.setVgap(6);
-    details.addRow(0, Widgets.mnemonic("_Defect", defect), defect);
-    details.addRow(1, Widgets.mnemonic("_Bow mm", bow), bow);
-    details.addRow(2, Widgets.mnemonic("N_ote", note), note);
-    Button camera = new Button("From camera folder (G)");
+    defectLabel = Widgets.mnemonic("_Defect", defect);
+    bowLabel = Widgets.mnemonic("_Bow mm", bow);
+    noteLabel = Widgets.mnemonic("N_ote", note);
+    camera = new Button("From camera folder (G)");
     camera.setId("walk-camera");
     camera.setOnAction(e -> {
       vm.addCameraPhotos(false);
@@ -295,14 +475,16 @@ public final class WalkView extends BorderPane {
     clear.setFocusTraversable(false);
     clear.disableProperty().bind(Bindings.isEmpty(vm.photos()));
     clear.setMinWidth(Button.USE_PREF_SIZE);
-    details.add(Widgets.row(8, photos, camera), 0, 3, 2, 1);
-    details.add(Widgets.row(8, photoCount, clear), 0, 4, 2, 1);
-    details.add(Widgets.hint("G takes the pictures the camera saved in its folder since the last mark;"
-        + " Shift+G chooses the folder."), 0, 5, 2, 1);
+    photoRow = Widgets.row(8, photos, camera);
+    countRow = Widgets.row(8, photoCount, clear);
+    detailHint = Widgets.hint("G takes the pictures the camera saved in its folder since the last mark;"
+        + " Shift+G chooses the folder.");
     GridPane.setHgrow(defect, Priority.ALWAYS);
     GridPane.setHgrow(note, Priority.ALWAYS);
-    Label bowHint = Widgets.text(vm.bowHintProperty(), "hint");
-    VBox detailBox = Widgets.box("Details for the next mark (Alt+D, Alt+B, Alt+O; Enter returns)", details, bowHint);
+    bowHint = Widgets.text(vm.bowHintProperty(), "hint");
+    detailBox = Widgets.box("Details for the next mark (Alt+D, Alt+B, Alt+O; Enter returns)", details, bowHint);
+    detailBox.managedProperty().bind(detailBox.visibleProperty());
+    fillDetails();
 
     Button undo = new Button("Undo last mark (Backspace)");
     undo.setId("walk-undo");
@@ -320,7 +502,18 @@ public final class WalkView extends BorderPane {
     frameInWalk.selectedProperty().bindBidirectional(vm.frameInWalkProperty());
     frameInWalk.setFocusTraversable(false);
     frameInWalk.setWrapText(true);
-    VBox orderBox = Widgets.box("Walk order (O changes it)", order, frameInWalk);
+    Button rest = new Button("Record the rest as designed\u2026 (A)");
+    rest.setId("walk-rest");
+    rest.setOnAction(e -> {
+      vm.recordRestAsDesigned();
+      canvas.requestFocus();
+    });
+    rest.setFocusTraversable(false);
+    rest.setWrapText(true);
+    rest.disableProperty().bind(vm.readOnlyProperty());
+    VBox orderBox = Widgets.box("Walk order (O changes it)", order, frameInWalk, rest,
+        Widgets.hint("A routine walk visits the braced panels; A then records the panels not yet looked at"
+            + " as found as designed, after asking."));
     VBox side = new SteadyBox(10, marks, member, detailBox, orderBox, undo);
     side.getStyleClass().add("side");
     return side;
@@ -390,6 +583,7 @@ public final class WalkView extends BorderPane {
       case G -> vm.addCameraPhotos(e.isShiftDown());
       case K -> key.setExpanded(!key.isExpanded());
       case O -> vm.cycleOrder();
+      case A -> vm.recordRestAsDesigned();
       case W -> vm.toggleFrameInWalk();
       case ESCAPE -> vm.backToPanel();
       default -> handled = false;
@@ -425,7 +619,8 @@ public final class WalkView extends BorderPane {
             KeyHelp.of("Esc", "back to the panel's diagonals"),
             KeyHelp.of("N / B, PgDn / PgUp", "next / back in the walk order"),
             KeyHelp.of("Home", "first panel not yet marked"),
-            KeyHelp.of("O", "change the walk order"),
+            KeyHelp.of("O", "change the walk order (the braced panels only, or every panel)"),
+            KeyHelp.of("A", "record the panels not yet looked at as found as designed (asks first, naming how many)"),
             KeyHelp.of("W", "walk every ledger and standard too / the diagonals only"),
             KeyHelp.of("/  \\  X  .", "member seen: rising, falling, cross, follows the state"),
             KeyHelp.of("T", "member seen is tension-only / rigid"),

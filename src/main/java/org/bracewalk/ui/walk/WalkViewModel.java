@@ -72,6 +72,7 @@ public final class WalkViewModel {
   private final PlaneDesign design;
   private final String title;
   private final PlaneAnalyzer analyzer;
+  private final DialogService dialogs;
 
   /** The marks as shown: each at once, at the key press. */
   private final MarkedPanels marks;
@@ -164,7 +165,8 @@ public final class WalkViewModel {
     this.frame = new MarkedFrame(design, onFrame);
     this.storedFrame = new MarkedFrame(design, onFrame);
     this.writes = new MarkWrites(existing, recorder, ui, writes, new Outcome());
-    this.cursor = new WalkCursor(design.grid(),
+    this.dialogs = dialogs;
+    this.cursor = new WalkCursor(design,
         st -> st.side() == null ? marks.isMarked(st.panel()) : frame.isMarked(st.member()));
     this.details = new MarkDetails(design, racking);
     this.photos = new PhotoAttachment(dialogs, clock, ui, this.writes::onQueue);
@@ -179,6 +181,7 @@ public final class WalkViewModel {
         refreshPicture();
       }
     });
+    cursor.orderProperty().addListener((obs, a, b) -> refreshPicture()); // "n of N in walk order"
     cursor.frameInWalkProperty().addListener((obs, a, b) -> {
       frameSetting.set(b);
       status.set(b ? "The walk order now takes in every ledger and standard (W: diagonals only)."
@@ -321,6 +324,77 @@ public final class WalkViewModel {
     return true;
   }
 
+  /**
+   * The panels nobody has looked at yet, as shown (no mark, or a mark undone), lift then bay:
+   * what {@link #recordRestAsDesigned()} would record.
+   */
+  public List<PanelRef> notLookedAt() {
+    List<PanelRef> out = new java.util.ArrayList<>();
+    for (int lift = 1; lift <= design.grid().lifts(); lift++) {
+      for (int bay = 1; bay <= design.grid().bays(); bay++) {
+        PanelRef p = new PanelRef(lift, bay);
+        if (!marks.isMarked(p)) {
+          out.add(p);
+        }
+      }
+    }
+    return out;
+  }
+
+  /**
+   * After asking, records every panel nobody has looked at yet as found as designed, in one step
+   * (one record per panel, all in one transaction, through the use case): for a routine inspection,
+   * once the braced panels are walked. The question names how many panels it covers; nothing is
+   * recorded unless the person confirms. Frame members not marked are taken as designed already.
+   * Each panel recorded can be marked again (a correction); Backspace undoes single marks only.
+   * True when the write was queued.
+   */
+  public boolean recordRestAsDesigned() {
+    if (readOnly.get()) {
+      error.set("This inspection is finalised and read-only. Start a new inspection to record changes.");
+      return false;
+    }
+    List<PanelRef> rest = notLookedAt();
+    if (rest.isEmpty()) {
+      status.set("Every panel of this plane has been looked at: nothing to record as designed.");
+      return false;
+    }
+    int n = rest.size();
+    String panels = n == 1 ? "panel" : "panels";
+    boolean go = dialogs.confirm("Record the rest as designed?",
+        "Record the " + n + " " + panels + " not yet looked at as found as designed?\n\n"
+            + "Each is recorded as seen and as the design has it: a designed brace there and sound,"
+            + " an unbraced panel or opening with nothing in it. Only confirm when you have looked"
+            + " at them. A panel found otherwise can be marked again afterwards (kept as a correction).",
+        "Record " + n + " " + panels);
+    if (!go) {
+      status.set("Nothing recorded: the " + n + " " + panels + " not yet looked at stay not inspected.");
+      return false;
+    }
+    long ticket = writes.ticket();
+    newestTicket = ticket;
+    Mark m = InspectionMarkRecorder.restAsDesigned();
+    for (PanelRef p : rest) {
+      marks.put(p, new RecordedMark(0, p, m), m);
+      pending.merge(p, 1, Integer::sum);
+    }
+    status.set("Recording the " + n + " " + panels + " not yet looked at as found as designed\u2026");
+    saidWhenStored.put(ticket, id -> "Recorded the " + n + " " + panels
+        + " not yet looked at as found as designed. Every panel is marked: see Findings (Ctrl+4).");
+    refreshPicture();
+    writes.rest(ticket, rest);
+    return true;
+  }
+
+  /**
+   * Starts the walk in {@code order} (the app: the braced panels only for a routine inspection),
+   * on its first stop not yet marked.
+   */
+  public void startWith(WalkOrder order) {
+    cursor.orderProperty().set(Objects.requireNonNull(order, "order"));
+    cursor.set(cursor.firstUnmarked());
+  }
+
   /** What the write queue says, on the UI thread. */
   private final class Outcome implements MarkWrites.Outcome {
     @Override
@@ -390,6 +464,38 @@ public final class WalkViewModel {
       } else if (answered(f)) {
         frame.reset(f, storedFrame.latest(f));
       }
+      reanalyse();
+    }
+
+    @Override
+    public void storedRest(long ticket, List<RecordedMark> made) {
+      unsaved.remove("rest");
+      for (RecordedMark r : made) {
+        stored.put(r.panel(), r, r.mark());
+        unsaved.remove(r.panel());
+        if (answered(r.panel())) {
+          marks.put(r.panel(), r, r.mark());
+        }
+      }
+      error.set(unsavedWords());
+      LongFunction<String> said = saidWhenStored.remove(ticket);
+      if (said != null && ticket == newestTicket) {
+        status.set(said.apply(0));
+      }
+      reanalyse();
+    }
+
+    @Override
+    public void refusedRest(long ticket, List<PanelRef> panels, String why) {
+      saidWhenStored.remove(ticket);
+      for (PanelRef p : panels) {
+        if (answered(p)) {
+          marks.reset(p, stored.latest(p));
+        }
+      }
+      unsaved.put("rest", "Not recorded: the " + panels.size() + " panels as found as designed (" + why
+          + "). They show what the record holds: press A to ask again.");
+      error.set(unsavedWords());
       reanalyse();
     }
 
@@ -537,6 +643,11 @@ public final class WalkViewModel {
     if (allMarked()) {
       return ". Every panel is marked: see Findings (Ctrl+4).";
     }
+    if (cursor.orderProperty().get().bracedOnly()) {
+      int rest = notLookedAt().size();
+      return ". End of the braced panels: A records the " + rest + (rest == 1 ? " panel" : " panels")
+          + " not yet looked at as found as designed (asks first); Home goes to the first of them.";
+    }
     return ". End of the walk order; press Home for the first panel not yet marked.";
   }
 
@@ -617,8 +728,10 @@ public final class WalkViewModel {
         design.isOpening(c) ? "opening" : d == null ? "no brace in the design" : "design: " + d.token() + " " + d.kind().label();
     RecordedMark r = marks.latest(c);
     String found = r == null || r.mark().state() == PanelState.NOT_INSPECTED ? "not marked yet" : "marked " + describe(r.mark());
+    int pos = cursor.position(WalkStop.of(c));
     return "Lift " + c.lift() + ", bay " + c.bay() + " \u2014 " + designed + "; " + found
-        + " (" + cursor.position(WalkStop.of(c)) + " of " + cursor.length() + " in walk order)";
+        + (pos > 0 ? " (" + pos + " of " + cursor.length() + " in walk order)"
+            : " (not in this walk order: " + cursor.orderProperty().get().words().toLowerCase(java.util.Locale.ROOT) + ")");
   }
 
   private static String describe(Mark m) {

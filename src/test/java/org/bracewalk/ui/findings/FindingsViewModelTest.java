@@ -91,6 +91,9 @@ class FindingsViewModelTest {
     assertThat(vm.restoreLines()).filteredOn(s -> s.contains("needed for rigidity")).hasSize(1);
     assertThat(vm.findingLines()).anyMatch(s -> s.startsWith("lift 3, bay 6: damaged-ineffective"));
     assertThat(vm.planes()).extracting(FindingsViewModel.PlaneChoice::name).contains("north facade", "east end frame");
+    // each with its progress and verdict where it is chosen (issue 12, item 5)
+    assertThat(vm.planes()).extracting(Object::toString).anyMatch(t -> t.contains("east end frame \u2014 0 of 5 panels \u2014 "
+        + VerdictKind.NOT_INSPECTED.words()));
   }
 
   @Test
@@ -132,7 +135,7 @@ class FindingsViewModelTest {
     assertThat(dialogs.asked).as("the gaps are counted off the caller's turn first").isEmpty();
     runQueued();
     assertThat(services.inspections().inspection(walk.id()).isFinalised()).isFalse();
-    assertThat(dialogs.asked.get(0)).contains("east end frame: 5 of 5 panels not inspected");
+    assertThat(dialogs.asked.get(0)).contains("plane 'east end frame': 5 of 5 panels nobody has looked at");
     dialogs.confirmAnswers.push(true);
     assertThat(vm.finaliseInspection()).isTrue();
     runQueued();

@@ -191,6 +191,9 @@ class SitesViewModelTest {
     DemoWalk.record(services, 20);
     SitesViewModel vm = sitesOf(services);
     assertThat(row(vm, "north facade").verdictText()).contains("open #4: 20 of 50 marked");
+    // the second plane of the open inspection, not yet walked, says so (issue 12, item 5)
+    assertThat(row(vm, "east end frame").verdictText()).contains("open #4: 0 of 5 panels looked at")
+        .doesNotContain("marked");
     // the finalised inspection's lost restraint stays until a later one has shown otherwise
     assertThat(row(vm, "north facade").verdict()).isEqualTo(VerdictKind.LOST_RESTRAINT);
   }

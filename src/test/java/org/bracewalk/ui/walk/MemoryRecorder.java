@@ -28,6 +28,19 @@ final class MemoryRecorder implements MarkRecorder {
     return add(earlier.panel(), replacement, earlier.id(), reason, earlier.member());
   }
 
+  @Override
+  public List<RecordedMark> recordRestAsDesigned(List<PanelRef> panels) {
+    if (failNext) {
+      failNext = false;
+      throw new IllegalStateException("disk full");
+    }
+    List<RecordedMark> out = new ArrayList<>();
+    for (PanelRef p : panels) {
+      out.add(add(p, InspectionMarkRecorder.restAsDesigned(), null, null, null));
+    }
+    return out;
+  }
+
   private RecordedMark add(PanelRef panel, Mark mark, Long supersedes, String reason, FrameRef member) {
     if (failNext) {
       failNext = false;

