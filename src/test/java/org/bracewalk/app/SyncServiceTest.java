@@ -269,6 +269,37 @@ class SyncServiceTest {
   }
 
   @Test
+  void aRevisionRecordedBeforeAFieldInspectionEndedIsStoredAsOfTheSyncWithANote()
+      throws Exception {
+    sync(fieldA);
+    Structure st = structureNamed(fieldA, "scaffold");
+    PlaneRecord plane = fieldA.sites().planes(st.id()).get(0);
+    long serverPlane = server.store().identities().idOf(Kind.PLANE,
+        fieldA.store().identities().uuidOf(Kind.PLANE, plane.id())).orElseThrow();
+    DesignRevision current = server.sites().currentDesign(serverPlane);
+    // the office revises the design; the field, not yet knowing, finishes an inspection after
+    DesignRevision office = server.sites().addDesignRevision(serverPlane, "Office Engineer",
+        LocalDate.of(2025, 3, 21), "", current.design());
+    Inspection done = inspectOffline(fieldA, "scaffold", "Ada Field", 2, false);
+    assertThat(done.finishedAt()).isAfter(office.recordedAt());
+
+    SyncService.Summary s = sync(fieldA);
+    assertThat(s.conflicts()).singleElement().satisfies(c -> assertThat(c.message())
+        .contains("was recorded before an inspection finalised in the field file ended"));
+    assertThat(s.pushedInspections()).isEqualTo(1);
+    DesignRevision pulled = fieldA.store().designs().ofPlane(plane.id()).stream()
+        .filter(d -> d.number() == office.number()).findFirst().orElseThrow();
+    assertThat(pulled.recordedAt()).isAfter(done.finishedAt());
+    assertThat(pulled.approvalNote()).contains("recorded in the server at " + office.recordedAt());
+    assertThat(fieldA.store().identities().uuidOf(Kind.DESIGN_REVISION, pulled.id()))
+        .isEqualTo(server.store().identities().uuidOf(Kind.DESIGN_REVISION, office.id()));
+    // the field inspection was checked against the design in force when it started, as before
+    assertThat(fieldA.inspections().designInForce(done.id(), plane.id()).number())
+        .isEqualTo(current.number());
+    assertThat(sync(fieldA).conflicts()).isEmpty();
+  }
+
+  @Test
   void anInspectionTheServerHoldsDifferentlyIsRefusedNamingBothIds() throws Exception {
     sync(fieldA);
     Inspection mine = inspectOffline(fieldA, "scaffold", "Ada Field", 2, false);
