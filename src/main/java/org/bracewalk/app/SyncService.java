@@ -49,6 +49,10 @@ import org.bracewalk.core.port.StoreException;
  * field file until they are finalised.
  */
 public final class SyncService {
+  /** The store's refusal of a revision dated at or before a finalised inspection's finish. */
+  private static final String DATED =
+      "design revision recorded as of a finalised inspection's finish";
+
   private final Clock clock;
 
   public SyncService(Clock clock) {
@@ -233,6 +237,9 @@ public final class SyncService {
         try {
           adopt(from, to, Kind.DESIGN_REVISION, d.id(), () -> to.designs().add(copy));
         } catch (StoreException e) {
+          if (!e.getMessage().contains(DATED)) {
+            throw e;
+          }
           // a finalised inspection here ended after the revision was recorded there: the rules
           // of the record keep it from changing what that inspection was checked against
           String asOfNow = joined(note, "recorded in " + fromName + " at " + d.recordedAt()

@@ -354,5 +354,7 @@ class SyncServiceTest {
     Verification onField = reports(fieldA).verify(Files.readAllBytes(fromServer));
     assertThat(onField.outcome()).as("%s", onField.differences())
         .isEqualTo(Verification.Outcome.MATCH);
+    assertThat(onField.notes()).anySatisfy(n -> assertThat(n)
+        .contains("where the inspection is " + serverId).contains("it is " + mine.id()));
   }
 }

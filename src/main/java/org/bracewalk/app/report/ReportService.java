@@ -403,6 +403,7 @@ public final class ReportService {
     // the second canonical form names the inspection by its global identity: the document may
     // have been issued from another copy of the records (a field file, the team server), where
     // the inspection has another local id
+    List<String> earlyNotes = new ArrayList<>();
     Optional<String> uuid = inspectionUuid(stamp);
     if (uuid.isPresent()) {
       Optional<Long> local = services.store().identities().idOf(Kind.INSPECTION, uuid.get());
@@ -413,11 +414,16 @@ public final class ReportService {
                 + where + " (sync the field file that holds it first)"),
             Optional.empty(), List.of());
       }
+      if (local.get() != stamped) {
+        earlyNotes.add("issued from another copy of the records (a field file or the team"
+            + " server), where the inspection is " + stamped + "; in " + where + " it is "
+            + local.get() + " (global identity " + uuid.get() + ")");
+      }
       stamped = local.get();
     }
     final long id = stamped;
     List<String> differences = new ArrayList<>();
-    List<String> notes = new ArrayList<>();
+    List<String> notes = new ArrayList<>(earlyNotes);
 
     // (a) the bytes are those of a copy this database issued
     Optional<IssuedReport> copy = copies.stream()
