@@ -149,8 +149,9 @@ final class SiteCommands {
   }
 
   @Command(name = "interval", mixinStandardHelpOptions = true,
-      description = "Set the days between routine inspections of a structure (WAHR 2005 reg. 12:"
-          + " at most 7 for a scaffold platform in Great Britain; follow the local rules).")
+      description = "Set the days between routine inspections of a structure. Where the rules of"
+          + " its site's jurisdiction ask for more frequent inspections, a note names them (or,"
+          + " where Bracewalk holds none, the local codes) on standard error.")
   static final class StructureInterval extends StoreCommand {
     @Option(names = "--structure", required = true, description = "The structure's id.")
     long structure;
@@ -168,10 +169,7 @@ final class SiteCommands {
       out.println("structure " + st.id() + " (" + st.name() + "): routine inspection every "
           + st.inspectionIntervalDays() + (st.inspectionIntervalDays() == 1 ? " day" : " days")
           + s.inspections().nextInspectionDue(st.id()).map(d -> "; next due " + d).orElse("; not inspected yet"));
-      if (st.kind() == StructureKind.SCAFFOLD && days > 7) {
-        err.println("note: more than the 7 days WAHR 2005 reg. 12 allows between inspections of a scaffold"
-            + " platform in Great Britain; keep it only where the local rules allow it.");
-      }
+      s.sites().intervalNote(st.id(), days).ifPresent(n -> err.println("note: " + n.text()));
       return 0;
     }
   }
