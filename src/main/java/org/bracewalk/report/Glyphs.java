@@ -122,7 +122,7 @@ final class Glyphs {
       // nobody has looked: a ring of short dashes, a little larger than the boxes
       cb.setLineWidth(0.6f);
       cb.setLineDash(new float[] {side * 0.16f, side * 0.12f}, 0f);
-      cb.circle(cx, cy, side * 0.58f);
+      cb.circle(cx, cy, side * 0.54f);
     } else {
       cb.roundRectangle(x, y, side, side, side * 0.22f);
     }
