@@ -34,8 +34,12 @@ final class Legend {
 
   private Legend() {}
 
-  /** One entry's place: its left edge and row, and the room it takes. */
-  record Place(String entry, String words, float x, int row, float textWidth) {
+  /**
+   * One entry's place: its left edge and row, the size of its words and the room they take (the
+   * size is {@link #TEXT_SIZE} unless the words would not fit a row of their own, as a long
+   * translation might: then smaller, to fit).
+   */
+  record Place(String entry, String words, float x, int row, float size, float textWidth) {
     /** The right end of its words. */
     float right() {
       return x + SAMPLE + textWidth;
@@ -61,7 +65,8 @@ final class Legend {
   /**
    * Where each entry goes, relative to the key's left edge: in order, each starting on a cell
    * boundary and taking whole cells, on a new row when the rest of the row cannot hold it. An
-   * entry wider than the whole width (none is) would still start a row of its own.
+   * entry wider than the whole width (none of the English ones is) gets a row of its own and
+   * words set smaller to fit it.
    */
   static List<Place> layout(Wording w, BaseFont font, float width, boolean frame) {
     float cell = width / CELLS;
@@ -70,13 +75,18 @@ final class Legend {
     int used = 0;
     for (String e : entries(frame)) {
       String words = w.text("legend." + e);
-      float text = font.getWidthPoint(words, TEXT_SIZE);
+      float size = TEXT_SIZE;
+      float text = font.getWidthPoint(words, size);
+      if (SAMPLE + text > width) {
+        size = TEXT_SIZE * (width - SAMPLE) / text;
+        text = font.getWidthPoint(words, size);
+      }
       int cells = Math.max(1, (int) Math.ceil((SAMPLE + text + GAP) / cell));
       if (used > 0 && used + cells > CELLS) {
         row++;
         used = 0;
       }
-      out.add(new Place(e, words, used * cell, row, text));
+      out.add(new Place(e, words, used * cell, row, size, text));
       used += cells;
     }
     return List.copyOf(out);
@@ -94,7 +104,7 @@ final class Legend {
       float sx = x + p.x();
       float sy = top - TITLE - p.row() * ROW - ROW / 2;
       sample(cb, font, bold, p.entry(), sx, sy);
-      Glyphs.text(cb, font, TEXT_SIZE, Palette.GRID, PdfContentByte.ALIGN_LEFT, p.words(),
+      Glyphs.text(cb, font, p.size(), Palette.GRID, PdfContentByte.ALIGN_LEFT, p.words(),
           sx + SAMPLE, sy - 2.2f);
     }
   }

@@ -80,6 +80,31 @@ class LegendLayoutTest {
   }
 
   @Test
+  void wordsTooLongForARowAreSetSmallerToFitIt(@TempDir Path templates) throws IOException {
+    // a translation may word an entry longer than the whole width: it gets a row of its own
+    String text = java.nio.file.Files.readString(Path.of("templates", "report.en.properties"));
+    String longer = "to fit where the design has it" + ", and so on".repeat(30);
+    text = text.replaceFirst("(?m)^legend\\.repair=.*$", "legend.repair=" + longer);
+    java.nio.file.Files.writeString(templates.resolve("report.en.properties"), text);
+    Wording w = new Wording(Templates.load(TemplateSource.folder(templates), "en"),
+        ReportFixtures.header(true, org.bracewalk.core.port.report.LengthUnits.METRIC, "scaffold"));
+    float width = RIGHT - LEFT;
+    List<Legend.Place> places = Legend.layout(w, new Pdf().regular, width, false);
+    Legend.Place repair = places.stream().filter(p -> p.entry().equals("repair")).findFirst()
+        .orElseThrow();
+    assertThat(repair.words()).isEqualTo(longer);
+    assertThat(repair.size()).isLessThan(Legend.TEXT_SIZE);
+    assertThat(repair.x()).isZero();
+    assertThat(repair.right()).isLessThanOrEqualTo(width + 0.01f);
+    int k = places.indexOf(repair);
+    assertThat(places.get(k - 1).row()).isLessThan(repair.row());
+    assertThat(places.get(k + 1).row()).isGreaterThan(repair.row());
+    for (Legend.Place p : places) {
+      assertThat(p.right()).as(p.entry()).isLessThanOrEqualTo(width + 0.01f);
+    }
+  }
+
+  @Test
   void theKeyOfEveryElevationOfTheDemoLiesInsideThePageMargins() throws IOException {
     var clock = new Fixtures.SteppingClock(Instant.parse("2025-03-06T09:00:00Z"));
     services = AppServices.over(Database.open(dir.resolve("demo.db")), clock,
