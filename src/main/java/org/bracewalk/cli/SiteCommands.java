@@ -132,7 +132,8 @@ final class SiteCommands {
     String designRef;
 
     @Option(names = "--interval-days", defaultValue = "7",
-        description = "Days between routine inspections (default ${DEFAULT-VALUE}).")
+        description = "Days between routine inspections (default ${DEFAULT-VALUE}); a note names"
+            + " the rules of the site's jurisdiction where they ask for more often.")
     int interval;
 
     StructureCreate(CliContext context) {
@@ -144,6 +145,9 @@ final class SiteCommands {
       Structure st = s.sites().createStructure(new Structure(0, site, name,
           StructureKind.fromLabel(kind), description, designRef, interval));
       out.println("structure " + st.id() + " created: " + st.name() + " (" + st.kind().label() + ")");
+      // what the rules of the site's jurisdiction say against the interval, as for 'interval'
+      s.sites().intervalNote(st.id(), st.inspectionIntervalDays())
+          .ifPresent(n -> err.println("note: " + n.text()));
       return 0;
     }
   }
