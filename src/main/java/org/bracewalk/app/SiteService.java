@@ -85,6 +85,16 @@ public final class SiteService {
   }
 
   /**
+   * What the rules of the structure's site say against {@code days} between its routine
+   * inspections, citing only the site's own jurisdiction ({@link IntervalRules}); empty when
+   * nothing. Front ends ask for a confirmation, or print it, before or after setting the days.
+   */
+  public Optional<IntervalRules.Note> intervalNote(long structureId, int days) {
+    Structure st = structure(structureId);
+    return IntervalRules.note(site(st.siteId()).jurisdiction(), st.kind(), st.name(), days);
+  }
+
+  /**
    * Stores a new plane of an existing structure with its first design revision, in one
    * transaction. Widths and heights are rounded to whole millimetres; the design's grid must then
    * be the plane's.

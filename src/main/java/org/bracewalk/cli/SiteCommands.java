@@ -132,7 +132,8 @@ final class SiteCommands {
     String designRef;
 
     @Option(names = "--interval-days", defaultValue = "7",
-        description = "Days between routine inspections (default ${DEFAULT-VALUE}).")
+        description = "Days between routine inspections (default ${DEFAULT-VALUE}); a note names"
+            + " the rules of the site's jurisdiction where they ask for more often.")
     int interval;
 
     StructureCreate(CliContext context) {
@@ -144,13 +145,17 @@ final class SiteCommands {
       Structure st = s.sites().createStructure(new Structure(0, site, name,
           StructureKind.fromLabel(kind), description, designRef, interval));
       out.println("structure " + st.id() + " created: " + st.name() + " (" + st.kind().label() + ")");
+      // what the rules of the site's jurisdiction say against the interval, as for 'interval'
+      s.sites().intervalNote(st.id(), st.inspectionIntervalDays())
+          .ifPresent(n -> err.println("note: " + n.text()));
       return 0;
     }
   }
 
   @Command(name = "interval", mixinStandardHelpOptions = true,
-      description = "Set the days between routine inspections of a structure (WAHR 2005 reg. 12:"
-          + " at most 7 for a scaffold platform in Great Britain; follow the local rules).")
+      description = "Set the days between routine inspections of a structure. Where the rules of"
+          + " its site's jurisdiction ask for more frequent inspections, a note names them (or,"
+          + " where Bracewalk holds none, the local codes) on standard error.")
   static final class StructureInterval extends StoreCommand {
     @Option(names = "--structure", required = true, description = "The structure's id.")
     long structure;
@@ -168,10 +173,7 @@ final class SiteCommands {
       out.println("structure " + st.id() + " (" + st.name() + "): routine inspection every "
           + st.inspectionIntervalDays() + (st.inspectionIntervalDays() == 1 ? " day" : " days")
           + s.inspections().nextInspectionDue(st.id()).map(d -> "; next due " + d).orElse("; not inspected yet"));
-      if (st.kind() == StructureKind.SCAFFOLD && days > 7) {
-        err.println("note: more than the 7 days WAHR 2005 reg. 12 allows between inspections of a scaffold"
-            + " platform in Great Britain; keep it only where the local rules allow it.");
-      }
+      s.sites().intervalNote(st.id(), days).ifPresent(n -> err.println("note: " + n.text()));
       return 0;
     }
   }

@@ -435,6 +435,11 @@ final class ElevationDrawing {
     Glyphs.text(cb, font, 6.5f, Palette.GRID, PdfContentByte.ALIGN_LEFT, label, barRight + 3f, y + 0.5f);
   }
 
+  /** The mark one panel of {@code design} found as {@code f} gets (drawn into {@code cb}). */
+  static Glyphs.Mark panelMark(PdfContentByte cb, PlaneDesign design, PanelRef p, PanelFinding f) {
+    return drawPanel(cb, design.braceAt(p), f, 0f, 0f, 20f, 20f, 1f);
+  }
+
   /**
    * Draws one panel's design member and its state as found; returns the symbol for its centre.
    */
@@ -448,7 +453,8 @@ final class ElevationDrawing {
       cb.restoreState();
     }
     if (f == null || !f.state().inspected()) {
-      return Glyphs.Mark.NOT_SEEN;
+      return f != null && f.state() == PanelState.NOT_REACHABLE
+          ? Glyphs.Mark.NOT_REACHABLE : Glyphs.Mark.NOT_SEEN;
     }
     PanelState st = f.state();
     Brace foundBrace = f.memberFound();

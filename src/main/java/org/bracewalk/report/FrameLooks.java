@@ -27,8 +27,10 @@ final class FrameLooks {
     OMITTED(Glyphs.Stroke.OMITTED, Glyphs.Mark.NONE),
     /** There although the design leaves it out. */
     EXTRA(Glyphs.Stroke.EXTRA, Glyphs.Mark.EXTRA),
-    /** Recorded as not inspected or not reachable: counts as missing. */
-    NOT_INSPECTED(Glyphs.Stroke.UNSEEN, Glyphs.Mark.NOT_SEEN);
+    /** Recorded as not inspected, or nothing recorded where the map asks: counts as missing. */
+    NOT_INSPECTED(Glyphs.Stroke.UNSEEN, Glyphs.Mark.NOT_SEEN),
+    /** Looked for but not reachable: counts as not inspected. */
+    NOT_REACHABLE(Glyphs.Stroke.UNSEEN, Glyphs.Mark.NOT_REACHABLE);
 
     final Glyphs.Stroke stroke;
     final Glyphs.Mark mark;
@@ -58,7 +60,8 @@ final class FrameLooks {
         case DAMAGED_EFFECTIVE -> Look.DAMAGED;
         case DAMAGED_INEFFECTIVE -> Look.INEFFECTIVE;
         case MISSING -> Look.MISSING;
-        case NOT_INSPECTED, NOT_REACHABLE -> Look.NOT_INSPECTED;
+        case NOT_INSPECTED -> Look.NOT_INSPECTED;
+        case NOT_REACHABLE -> Look.NOT_REACHABLE;
       };
       if (look != null) {
         out.put(e.getKey(), look);

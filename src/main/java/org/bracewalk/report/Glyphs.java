@@ -35,26 +35,36 @@ final class Glyphs {
   }
 
   /**
-   * The state drawn at a member's middle: its letter in a rounded box ({@link
-   * Symbol#STATE_BADGE}), the same letter the app's badge and walk-round key use.
+   * The state drawn at a member's middle: the walk-round key's letter in a rounded box, the same
+   * mark the app draws (filled in its colour where the member no longer counts), or a question
+   * mark in a dashed ring where nobody has looked. Each is one {@link Symbol}.
    */
   enum Mark {
     NONE(null, null, false),
-    DAMAGED("D", Palette.DAMAGED, false),
-    BEYOND_USE("U", Palette.LOST, true),
-    MISSING("M", Palette.LOST, true),
-    EXTRA("E", Palette.EXTRA, false),
-    NOT_SEEN("?", Palette.GRID, false);
+    DAMAGED(Symbol.STATE_DAMAGED, Palette.DAMAGED, false),
+    BEYOND_USE(Symbol.STATE_BEYOND_USE, Palette.LOST, true),
+    MISSING(Symbol.STATE_MISSING, Palette.LOST, true),
+    EXTRA(Symbol.STATE_EXTRA, Palette.EXTRA, false),
+    NOT_REACHABLE(Symbol.STATE_NOT_REACHABLE, Palette.GRID, false),
+    NOT_SEEN(Symbol.STATE_NOT_INSPECTED, Palette.GRID, false);
 
+    /** The symbol drawn; {@code null} for none. */
+    final Symbol symbol;
     final String letter;
     final Color colour;
     /** Filled in its colour, the letter in white (a member that does not count). */
     final boolean alarm;
 
-    Mark(String letter, Color colour, boolean alarm) {
-      this.letter = letter;
+    Mark(Symbol symbol, Color colour, boolean alarm) {
+      this.symbol = symbol;
+      this.letter = symbol == null ? null : symbol.glyph().substring(1, symbol.glyph().length() - 1);
       this.colour = colour;
       this.alarm = alarm;
+    }
+
+    /** A question mark in a dashed ring, not a letter in a box. */
+    boolean ring() {
+      return this == NOT_SEEN;
     }
   }
 
@@ -92,7 +102,10 @@ final class Glyphs {
     cb.stroke();
   }
 
-  /** Draws a mark of radius {@code r} centred on (cx, cy): the state's letter in a rounded box. */
+  /**
+   * Draws a mark of radius {@code r} centred on (cx, cy): the state's letter in a rounded box, or
+   * the question mark in a dashed ring.
+   */
   static void mark(PdfContentByte cb, BaseFont font, Mark m, float cx, float cy, float r) {
     if (m == Mark.NONE) {
       return;
@@ -105,7 +118,14 @@ final class Glyphs {
     cb.setLineWidth(0.5f);
     cb.setColorStroke(m.colour);
     cb.setColorFill(m.alarm ? m.colour : java.awt.Color.WHITE);
-    cb.roundRectangle(x, y, side, side, side * 0.22f);
+    if (m.ring()) {
+      // nobody has looked: a ring of short dashes, a little larger than the boxes
+      cb.setLineWidth(0.6f);
+      cb.setLineDash(new float[] {side * 0.16f, side * 0.12f}, 0f);
+      cb.circle(cx, cy, side * 0.54f);
+    } else {
+      cb.roundRectangle(x, y, side, side, side * 0.22f);
+    }
     cb.fillStroke();
     cb.setColorFill(m.alarm ? java.awt.Color.WHITE : m.colour);
     float size = side * 0.78f;

@@ -188,7 +188,8 @@ public final class PdfReportRenderer implements ReportRenderer {
      * than 150 points.
      */
     private float drawingRoom(PlaneSection plane, float wordsHeight) {
-      float fixed = Legend.height(plane.showsFrame()) + 16f;
+      float fixed = Legend.height(w, pdf.regular, doc.right() - doc.left(), plane.showsFrame())
+          + 16f;
       boolean sketch = sketchHeight(plane, 0f) > 0;
       float budget = bodyHeight() * 0.75f - wordsHeight - fixed;
       if (budget < 320f) {
@@ -631,7 +632,7 @@ public final class PdfReportRenderer implements ReportRenderer {
       PlaneGrid g = plane.design().grid();
       float width = doc.right() - doc.left();
       boolean frame = plane.showsFrame();
-      float legendH = Legend.height(frame);
+      float legendH = Legend.height(w, pdf.regular, width, frame);
       float elevH = ElevationDrawing.heightAt(g, scale);
       float mechH = sketchHeight(plane, elevH);
       float drawing = elevH + 6 + legendH + (mechH > 0 ? mechH + 6 : 0) + 10;

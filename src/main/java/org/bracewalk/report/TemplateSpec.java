@@ -217,10 +217,10 @@ final class TemplateSpec {
     for (String s :
         new String[] {
           "design", "sound", "damaged-effective", "damaged-ineffective", "missing", "extra",
-          "not-inspected", "opening", "critical", "repair", "repair-new", "part", "tension",
+          "not-inspected", "not-reachable", "opening", "critical", "repair", "repair-new", "part", "tension",
           "frame-damaged",
           "frame-ineffective", "frame-missing", "frame-omitted", "frame-extra",
-          "frame-not-inspected", "lost-restraint", "loose-end"
+          "frame-not-inspected", "frame-not-reachable", "lost-restraint", "loose-end"
         }) {
       k.put("legend." + s, Set.of());
     }

@@ -196,6 +196,33 @@ class StoreCommandLineTest {
   }
 
   @Test
+  void theIntervalNoteCitesTheRulesOfTheSitesOwnJurisdictionOnly() {
+    // US: a competent person inspects a scaffold before each shift (29 CFR 1926.451(f)(3), read;
+    // trade-facts.md); the UK's reg. 12 is not named for a US site
+    assertThat(run("site", "create", "--db", db(), "--name", "Quay", "--jurisdiction", "us").code())
+        .isZero();
+    Run us = run("structure", "create", "--db", db(), "--site", "1", "--name", "Quay scaffold",
+        "--kind", "scaffold");
+    assertThat(us.code()).as(us.err()).isZero();
+    assertThat(us.err()).contains("before each shift").contains("29 CFR 1926.451(f)(3)")
+        .doesNotContain("Work at Height").doesNotContain("reg. 12");
+    Run daily = run("structure", "interval", "--db", db(), "--structure", "1", "--days", "1");
+    assertThat(daily.err()).doesNotContain("note:");
+    // a site with no jurisdiction recorded: no rule named, the local codes decide
+    run("site", "create", "--db", db(), "--name", "Yard");
+    run("structure", "create", "--db", db(), "--site", "2", "--name", "Yard scaffold",
+        "--kind", "scaffold");
+    Run other = run("structure", "interval", "--db", db(), "--structure", "2", "--days", "14");
+    assertThat(other.code()).isZero();
+    assertThat(other.err()).contains("The site records no jurisdiction")
+        .contains("local codes that apply").doesNotContain("Work at Height")
+        // (the section's number, not "1926" alone: the temporary folder's name may hold it)
+        .doesNotContain("reg. 12").doesNotContain("1926.45").doesNotContain("CFR")
+        .doesNotContain("HSG76")
+        .doesNotContain("EN 15635");
+  }
+
+  @Test
   void listsShowSitesStructuresPlanesAndInspections() {
     run("demo", "--db", db());
     assertThat(run("site", "list", "--db", db()).out()).contains("site 1: Larkspur Depot");

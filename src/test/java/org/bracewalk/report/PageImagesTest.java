@@ -67,6 +67,26 @@ class PageImagesTest {
     return n == 0 ? 0 : (double) hit / n;
   }
 
+  /**
+   * How many pixels in a region (page fractions) have {@code c} within 8 of each component: close
+   * enough that white (which differs from the light alert red by 4, 27 and 23) is never counted.
+   */
+  static int pixelsOf(BufferedImage img, double x0, double y0, double x1, double y1,
+      java.awt.Color c) {
+    int hit = 0;
+    for (int y = (int) (y0 * img.getHeight()); y < (int) (y1 * img.getHeight()); y++) {
+      for (int x = (int) (x0 * img.getWidth()); x < (int) (x1 * img.getWidth()); x++) {
+        int rgb = img.getRGB(x, y);
+        if (Math.abs(((rgb >> 16) & 0xff) - c.getRed()) <= 8
+            && Math.abs(((rgb >> 8) & 0xff) - c.getGreen()) <= 8
+            && Math.abs((rgb & 0xff) - c.getBlue()) <= 8) {
+          hit++;
+        }
+      }
+    }
+    return hit;
+  }
+
   /** The number of the first page whose text holds {@code text}. */
   static int firstPageWith(byte[] pdf, String text) throws IOException {
     try (PDDocument d = Loader.loadPDF(pdf)) {
@@ -108,10 +128,30 @@ class PageImagesTest {
     // A4 at 60 dpi
     assertThat(first.getWidth()).isBetween(490, 500);
     assertThat(inkRows(first)).as("page one carries text").isGreaterThan(200);
-    // the alert box near the top of page one is filled with its light red
-    assertThat(colouredShare(first, 0.1, 0.1, 0.9, 0.16, 0xfb, 0xe4, 0xe8)).isGreaterThan(0.3);
+    // the alert box on page one is filled with its light red: at least a box of 300 x 15 px
+    // (the text width by two lines at 60 dpi) of that colour, counted within a tolerance that
+    // leaves white out, in the upper half of the page where the alert stands
+    assertThat(pixelsOf(first, 0, 0, 1, 0.5, Palette.ALERT_FILL)).as("alert fill pixels on page 1")
+        .isGreaterThan(300 * 15);
     // the plane page: the hatched tint of the swaying lift lies in the drawing's upper half
     assertThat(colouredShare(plane, 0.1, 0.2, 0.9, 0.6, 0xf7, 0xd3, 0xd9)).isGreaterThan(0.02);
+  }
+
+  @Test
+  void theAlertCountFindsNoAlertWhereEveryPlaneHoldsItsShape() throws Exception {
+    // the other side of the count above: a report whose one plane holds its shape draws its
+    // page-1 box in the light green of "nothing to act on", so the count of the alert's red is 0
+    assumeTrue(pdftoppm(), "pdftoppm (poppler-utils) is not installed");
+    ByteArrayOutputStream out = new ByteArrayOutputStream();
+    var holds = new org.bracewalk.core.port.report.ReportContent(
+        ReportFixtures.header(true, org.bracewalk.core.port.report.LengthUnits.METRIC, "scaffold"),
+        ReportFixtures.particulars(), java.util.List.of(ReportFixtures.frame()),
+        java.util.List.of(), java.util.List.of(), ReportFixtures.fingerprint());
+    new PdfReportRenderer(TemplateSource.packed(), "en").renderReport(holds, out);
+    Path dir = render(out.toByteArray(), "holds", 1, 1);
+    BufferedImage first = ImageIO.read(dir.resolve("holds-1.png").toFile());
+    assertThat(pixelsOf(first, 0, 0, 1, 0.5, Palette.ALERT_FILL)).isLessThan(300 * 15);
+    assertThat(pixelsOf(first, 0, 0, 1, 0.5, Palette.OK_FILL)).isGreaterThan(300 * 15);
   }
 
   @Test

@@ -125,6 +125,8 @@ class RecordOffTheUiThreadTest {
     settle();
     vm.selectedProperty().set(row(vm, "frame 2"));
     dialogs.textAnswers.push(Optional.of("14"));
+    // UK racking over 7 days: the note on HSG76's weekly inspection is confirmed first
+    dialogs.confirmAnswers.add(true);
     assertThat(vm.changeInterval()).isTrue();
     settle();
     assertThat(row(vm, "Aisle C racking run").interval()).isEqualTo("14 days");

@@ -6,7 +6,10 @@ import java.util.List;
  * Every symbol Bracewalk shows, each with one shape and one meaning, in the app and in the PDF
  * alike. A shape stands for one thing only: a diamond is always a critical member, a ring with a
  * number a brace to fit where the design has one, a square with a number a brace in a new
- * position, a filled triangle always lost rigidity. The painters in {@code ui.common} and {@code
+ * position, a filled triangle always lost rigidity. Each state as found has its own mark: the
+ * walk-round key's letter in a rounded box (filled where the member no longer counts), and for a
+ * member nobody has looked at a question mark in a dashed ring, so "not inspected" and "not
+ * reachable" never look alike. The painters in {@code ui.common} and {@code
  * report} draw each shape from this list, and the README's table of symbols is checked against it.
  * The shapes are the project's own.
  */
@@ -26,9 +29,19 @@ public enum Symbol {
   DUE_TODAY("\u25B7", "open arrowhead", "next routine inspection due today", Where.TEXT),
   OVERDUE("\u25F7", "clock face", "routine inspection overdue", Where.TEXT),
   // on the drawings
-  STATE_BADGE("[S]", "letter in a rounded box", "state as found: S sound, D damaged still"
-      + " effective, U damaged beyond use, M missing, E extra, R not reachable (? on the page), ? not inspected"
-      + " (the letter is the walk-round key)", Where.BOTH),
+  STATE_SOUND("[S]", "letter S in a rounded box", "found sound (the page draws a sound member"
+      + " solid, with no letter)", Where.APP),
+  STATE_DAMAGED("[D]", "letter D in a rounded box", "damaged, still effective: it counts",
+      Where.BOTH),
+  STATE_BEYOND_USE("[U]", "letter U in a filled rounded box", "damaged beyond use: counts as"
+      + " missing", Where.BOTH),
+  STATE_MISSING("[M]", "letter M in a filled rounded box", "missing", Where.BOTH),
+  STATE_EXTRA("[E]", "letter E in a rounded box", "extra: there although the design has none",
+      Where.BOTH),
+  STATE_NOT_REACHABLE("[R]", "letter R in a rounded box", "looked for but not reachable: counts"
+      + " as not inspected", Where.BOTH),
+  STATE_NOT_INSPECTED("(?)", "question mark in a dashed ring", "not inspected yet: nobody has"
+      + " looked (counts as missing)", Where.BOTH),
   CRITICAL("\u25C6", "filled diamond", "critical brace or frame member: its loss alone lets the"
       + " plane move", Where.BOTH),
   REPAIR_IN_DESIGN("(1)", "ring with a number", "brace or member to fit where the design has one"

@@ -1,6 +1,7 @@
 package org.bracewalk.ui.common;
 
 import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.symbol.Symbol;
 
 /**
  * How a frame member (a ledger or a standard segment) is drawn, told apart without colour: by line
@@ -23,8 +24,10 @@ public enum FrameLook {
   EXTRA("there, not in the design", null, 1.3, "#5b2a86"),
   /** Left out by the design: short ticks across both ends and a faint hairline between. */
   OMITTED("left out by the design", new double[] {1, 7}, 1.0, "#6b6b6b"),
-  /** Recorded not inspected or not reachable: dash-dot with the badge ? at its middle. */
-  NOT_INSPECTED("not inspected or not reachable", new double[] {8, 3, 1.5, 3}, 2.0, "#6b6b6b");
+  /** Recorded not inspected: dashes (as a panel's) with the question mark in a dashed ring. */
+  NOT_INSPECTED("not inspected", new double[] {6, 4}, 2.0, "#6b6b6b"),
+  /** Looked for but not reachable: dash-dot (as a panel's) with the badge R at its middle. */
+  NOT_REACHABLE("not reachable", new double[] {8, 3, 1.5, 3}, 2.0, "#6b6b6b");
 
   private final String words;
   private final double[] dashes;
@@ -66,19 +69,26 @@ public enum FrameLook {
   }
 
   /**
-   * The state's letter drawn at the member's middle ({@link
-   * org.bracewalk.core.symbol.Symbol#STATE_BADGE}, the same letters as a brace's badge), or {@code
-   * null} where the line style alone tells it (as designed, sound, left out by the design).
+   * The state's mark drawn at the member's middle, the same as a brace's and the PDF's ({@link
+   * Symbol}), or {@code null} where the line style alone tells it (as designed, sound, left out by
+   * the design).
    */
-  public String badge() {
+  public Symbol symbol() {
     return switch (this) {
-      case DAMAGED_EFFECTIVE -> "D";
-      case DAMAGED_INEFFECTIVE -> "U";
-      case MISSING -> "M";
-      case EXTRA -> "E";
-      case NOT_INSPECTED -> "?";
+      case DAMAGED_EFFECTIVE -> Symbol.STATE_DAMAGED;
+      case DAMAGED_INEFFECTIVE -> Symbol.STATE_BEYOND_USE;
+      case MISSING -> Symbol.STATE_MISSING;
+      case EXTRA -> Symbol.STATE_EXTRA;
+      case NOT_INSPECTED -> Symbol.STATE_NOT_INSPECTED;
+      case NOT_REACHABLE -> Symbol.STATE_NOT_REACHABLE;
       case AS_DESIGNED, SOUND, OMITTED -> null;
     };
+  }
+
+  /** The letter of {@link #symbol()} ("?" for not inspected), or {@code null}. */
+  public String badge() {
+    Symbol s = symbol();
+    return s == null ? null : s.glyph().substring(1, s.glyph().length() - 1);
   }
 
   /** Short strokes across both ends (left out by the design). */
@@ -106,7 +116,8 @@ public enum FrameLook {
       case DAMAGED_INEFFECTIVE -> DAMAGED_INEFFECTIVE;
       case MISSING -> inDesign ? MISSING : OMITTED;
       case EXTRA -> EXTRA;
-      case NOT_REACHABLE, NOT_INSPECTED -> NOT_INSPECTED;
+      case NOT_INSPECTED -> NOT_INSPECTED;
+      case NOT_REACHABLE -> NOT_REACHABLE;
     };
   }
 }

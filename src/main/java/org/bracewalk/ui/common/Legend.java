@@ -163,7 +163,8 @@ public final class Legend extends FlowPane {
       case DAMAGED_INEFFECTIVE -> PanelState.DAMAGED_INEFFECTIVE;
       case MISSING -> PanelState.MISSING;
       case EXTRA -> PanelState.EXTRA;
-      case NOT_INSPECTED -> PanelState.NOT_REACHABLE;
+      case NOT_INSPECTED -> PanelState.NOT_INSPECTED;
+      case NOT_REACHABLE -> PanelState.NOT_REACHABLE;
     };
     boolean inDesign = look != FrameLook.OMITTED && look != FrameLook.EXTRA;
     PlaneDesign d = new PlaneDesign(ONE, Map.of(), Set.of(), inDesign ? Set.of() : sides);

@@ -1,6 +1,7 @@
 package org.bracewalk.ui.common;
 
 import org.bracewalk.core.model.PanelState;
+import org.bracewalk.core.symbol.Symbol;
 
 /**
  * How each panel state is drawn: a line style and a badge letter, so that no state depends on
@@ -61,6 +62,22 @@ public enum PanelLook {
   /** True when two short strokes cross the member (a dent or bend). */
   public boolean ticked() {
     return this == DAMAGED_EFFECTIVE || this == DAMAGED_INEFFECTIVE;
+  }
+
+  /**
+   * The mark drawn on the panel: the walk-round key's letter in a rounded box, or for a panel
+   * nobody has looked at a question mark in a dashed ring (as in the PDF).
+   */
+  public Symbol symbol() {
+    return switch (this) {
+      case NOT_RECORDED -> Symbol.STATE_NOT_INSPECTED;
+      case SOUND -> Symbol.STATE_SOUND;
+      case DAMAGED_EFFECTIVE -> Symbol.STATE_DAMAGED;
+      case DAMAGED_INEFFECTIVE -> Symbol.STATE_BEYOND_USE;
+      case MISSING -> Symbol.STATE_MISSING;
+      case EXTRA -> Symbol.STATE_EXTRA;
+      case NOT_REACHABLE -> Symbol.STATE_NOT_REACHABLE;
+    };
   }
 
   public static PanelLook of(PanelState state) {

@@ -534,7 +534,7 @@ public final class PlanePainter {
       // the state's letter, as on a brace and in the PDF (beside the damage ticks)
       double size = Math.min(15, len * 0.3);
       double off = look.ticked() ? size * 0.9 + 6 : 0;
-      letterBadge(g, mx - size / 2 + ux * off, my - size / 2 + uy * off, size, look.badge(), c,
+      stateMark(g, mx - size / 2 + ux * off, my - size / 2 + uy * off, size, look.symbol(), c,
           look == FrameLook.MISSING || look == FrameLook.DAMAGED_INEFFECTIVE);
     }
     if (look.endTicks()) {
@@ -762,21 +762,35 @@ public final class PlanePainter {
   private static void badge(GraphicsContext g, PlaneGeometry geo, PanelRef p, PanelLook look) {
     double size = Math.min(16, Math.min(geo.panelWidth(p), geo.panelHeight(p)) * 0.34);
     boolean alarm = look == PanelLook.MISSING || look == PanelLook.DAMAGED_INEFFECTIVE;
-    letterBadge(g, geo.left(p) + 3, geo.top(p) + 3, size, look.badge(), colour(look), alarm);
+    stateMark(g, geo.left(p) + 3, geo.top(p) + 3, size, look.symbol(), colour(look), alarm);
   }
 
   /**
-   * {@link Symbol#STATE_BADGE}: a state's letter in a rounded box with its top-left corner at (x,
-   * y); an alarm state is filled in its colour with the letter in white.
+   * A state's mark in the square of side {@code size} with its top-left corner at (x, y): the
+   * walk-round key's letter in a rounded box (an alarm state filled in its colour with the letter
+   * in white), or for {@link Symbol#STATE_NOT_INSPECTED} a question mark in a dashed ring, so a
+   * member nobody has looked at never looks like one that could not be reached ({@link
+   * Symbol#STATE_NOT_REACHABLE}, the letter R).
    */
-  static void letterBadge(GraphicsContext g, double x, double y, double size, String letter, Color colour,
-      boolean alarm) {
-    g.setLineDashes();
+  static void stateMark(GraphicsContext g, double x, double y, double size, Symbol symbol,
+      Color colour, boolean alarm) {
+    String glyph = symbol.glyph();
+    String letter = glyph.substring(1, glyph.length() - 1);
     g.setFill(alarm ? colour : Color.WHITE);
-    g.fillRoundRect(x, y, size, size, 4, 4);
     g.setStroke(colour);
     g.setLineWidth(1);
-    g.strokeRoundRect(x, y, size, size, 4, 4);
+    if (symbol == Symbol.STATE_NOT_INSPECTED) {
+      double d = size * 1.16;
+      double o = (d - size) / 2;
+      g.fillOval(x - o, y - o, d, d);
+      g.setLineDashes(Math.max(1.5, size * 0.16), Math.max(1.2, size * 0.12));
+      g.strokeOval(x - o, y - o, d, d);
+      g.setLineDashes();
+    } else {
+      g.setLineDashes();
+      g.fillRoundRect(x, y, size, size, 4, 4);
+      g.strokeRoundRect(x, y, size, size, 4, 4);
+    }
     g.setFill(alarm ? Color.WHITE : colour);
     g.setFont(Font.font("DejaVu Sans", FontWeight.BOLD, size * 0.72));
     g.setTextAlign(TextAlignment.CENTER);

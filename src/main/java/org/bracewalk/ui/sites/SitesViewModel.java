@@ -21,6 +21,7 @@ import javafx.collections.ObservableList;
 import org.bracewalk.app.AnalysisService;
 import org.bracewalk.app.DemoService;
 import org.bracewalk.app.InspectionService;
+import org.bracewalk.app.IntervalRules;
 import org.bracewalk.app.SiteService;
 import org.bracewalk.app.ImportedSite;
 import org.bracewalk.app.NewInspection;
@@ -159,8 +160,8 @@ public final class SitesViewModel {
    * the commands look them up here rather than in the database on the UI thread.
    */
   private record Overview(List<OverviewRow> rows, Map<Long, Structure> structures, Map<Long, List<PlaneRecord>> planes,
-      Map<Long, PlaneRetirement> retired) {
-    static final Overview EMPTY = new Overview(List.of(), Map.of(), Map.of(), Map.of());
+      Map<Long, PlaneRetirement> retired, Map<Long, Jurisdiction> jurisdictions) {
+    static final Overview EMPTY = new Overview(List.of(), Map.of(), Map.of(), Map.of(), Map.of());
   }
 
   /**
@@ -178,11 +179,13 @@ public final class SitesViewModel {
     Map<Long, Structure> structuresRead = new HashMap<>();
     Map<Long, List<PlaneRecord>> planesRead = new HashMap<>();
     Map<Long, PlaneRetirement> retiredRead = new HashMap<>();
+    Map<Long, Jurisdiction> jurisdictionsRead = new HashMap<>();
     for (Site site : sites.sites()) {
       out.add(new OverviewRow(OverviewRow.Level.SITE, site.name(), siteWords(site), null, "", "", "",
           OverviewRow.Due.NOT_APPLICABLE, "", 0, 0, 0, 0));
       LocalDate today = LocalDate.now(clock.withZone(site.timeZone()));
       for (Structure st : sites.structures(site.id())) {
+        jurisdictionsRead.put(st.id(), site.jurisdiction());
         List<Inspection> insp = inspections.inspections(st.id());
         Optional<Inspection> latest = insp.stream().max(Comparator.comparing(Inspection::startedAt));
         Optional<Inspection> open = insp.stream().filter(i -> !i.isFinalised()).max(Comparator.comparing(Inspection::startedAt));
@@ -272,7 +275,7 @@ public final class SitesViewModel {
             open.map(Inspection::id).orElse(0L), latest.map(Inspection::id).orElse(0L)));
       }
     }
-    return new Overview(out, structuresRead, planesRead, retiredRead);
+    return new Overview(out, structuresRead, planesRead, retiredRead, jurisdictionsRead);
   }
 
   private void show(Overview read) {
@@ -620,8 +623,9 @@ public final class SitesViewModel {
 
   /**
    * Asks for the days between routine inspections of the selected structure (or the structure of
-   * the selected plane) and stores them; the overview's next-due dates follow at once. For a
-   * scaffold, more than 7 days is stored only once confirmed (WAHR 2005 reg. 12 in Great Britain).
+   * the selected plane) and stores them; the overview's next-due dates follow at once. Days the
+   * rules of the site's jurisdiction speak against are stored only once confirmed, the note naming
+   * those rules only ({@link IntervalRules}).
    */
   public boolean changeInterval() {
     OverviewRow r = selected.get();
@@ -657,11 +661,11 @@ public final class SitesViewModel {
           + " to " + SiteService.MAX_INTERVAL_DAYS + " days. Nothing was changed.");
       return false;
     }
-    if (st.kind() == StructureKind.SCAFFOLD && days > 7
-        && !dialogs.confirm("Longer than 7 days",
-            "In Great Britain a scaffold platform is inspected at least every 7 days (Work at Height"
-                + " Regulations 2005, reg. 12). Keep " + days + " days for '" + st.name() + "' only where the"
-                + " local rules allow it.", "Keep " + days + " days")) {
+    // the rule of the site's own jurisdiction, or the local codes where Bracewalk names none
+    Optional<IntervalRules.Note> note = IntervalRules.note(
+        known.jurisdictions().getOrDefault(st.id(), Jurisdiction.OTHER), st.kind(), st.name(), days);
+    if (note.isPresent() && !dialogs.confirm(note.get().heading(), note.get().text(),
+        "Keep " + days + (days == 1 ? " day" : " days"))) {
       return false;
     }
     int chosen = days;

@@ -13,6 +13,8 @@ import java.sql.Statement;
 import java.time.Instant;
 import java.time.ZoneId;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.DemoService;
 import org.bracewalk.app.Fixtures;
@@ -164,6 +166,82 @@ class JurisdictionReportTest {
           + " regulation").contains("Jurisdiction (whose rules apply) not recorded");
       assertThat(text.replace(NOT_CITED, "")).doesNotContain(WAHR).doesNotContain(CFR)
           .doesNotContain(HSG76).doesNotContain(EN15635);
+    }
+  }
+
+  /**
+   * What each source is recognised by in a document's text. A report or repair order may show
+   * only the sources of its own site's jurisdiction and structure (the table below, restated
+   * from trade-facts.md, not read from SiteRules); EN 12811 / EN 12810 are cited for no site.
+   */
+  private static final Map<String, List<String>> MARKERS = Map.of(
+      // Work at Height Regulations 2005, reg. 12 and Schedule 7 (read)
+      "WAHR", List.of("Work at Height", "WAHR", "Schedule 7", "Sch. 7", "regulation 12",
+          "reg. 12"),
+      // 29 CFR 1926.451 (read); 1926.452 also named in trade-facts.md
+      "CFR", List.of("29 CFR", "1926.45", "OSHA"),
+      // HSE HSG76 paras 643-646 (read)
+      "HSG76", List.of("HSG76", "HSE "),
+      // EN 15635 (secondary)
+      "EN15635", List.of("EN 15635"),
+      // EN 12811-1, EN 12810-1 (secondary): the project cites them for no site
+      "EN1281x", List.of("EN 12811", "EN 12810"));
+
+  /** The sources a site's documents may show, by jurisdiction and structure (trade-facts.md). */
+  private static Set<String> allowed(String jurisdiction, StructureKind kind) {
+    boolean scaffold = kind == StructureKind.SCAFFOLD;
+    return switch (jurisdiction) {
+      case "uk" -> scaffold ? Set.of("WAHR") : Set.of("HSG76", "EN15635");
+      case "us" -> scaffold ? Set.of("CFR") : Set.of();
+      case "eu" -> scaffold ? Set.of() : Set.of("EN15635");
+      default -> Set.of();
+    };
+  }
+
+  @Test
+  void noReportOrRepairOrderCitesTheRulesOfAnotherJurisdiction() throws IOException {
+    for (String j : List.of("uk", "us", "eu", "other")) {
+      if (services != null) {
+        services.close();
+        services = null;
+        for (String f : List.of("j.db", "j.db-wal", "j.db-shm")) {
+          dir.resolve(f).toFile().delete();
+        }
+      }
+      load(j);
+      int documents = 0;
+      for (Inspection i : demo.inspections()) {
+        if (!i.isFinalised()) {
+          continue;
+        }
+        StructureKind kind = demo.structures().stream().filter(s -> s.id() == i.structureId())
+            .findFirst().orElseThrow().kind();
+        Set<String> own = allowed(j, kind);
+        String report = String.join(" ", ReportServiceTest.pages(reports.reportPdf(i.id())));
+        String order = String.join(" ", ReportServiceTest.pages(
+            reports.repairOrderPdf(reports.repairOrderContent(i.id()))));
+        for (String[] doc : new String[][] {{"report", report}, {"repair order", order}}) {
+          // the one sentence that names EN 15635 as Bracewalk's own bow limits, saying that it
+          // is not cited as the site's rules (racking outside the EN 15635 jurisdictions)
+          String text = own.contains("EN15635") ? doc[1] : doc[1].replace(NOT_CITED, "");
+          for (Map.Entry<String, List<String>> m : MARKERS.entrySet()) {
+            if (own.contains(m.getKey())) {
+              continue;
+            }
+            for (String marker : m.getValue()) {
+              assertThat(text).as("%s of inspection %d (%s, %s) names %s", doc[0], i.id(), j,
+                  kind.label(), m.getKey()).doesNotContain(marker);
+            }
+          }
+          documents++;
+        }
+        // and each report cites its own, where it has any
+        for (String source : own) {
+          assertThat(MARKERS.get(source).stream().anyMatch(report::contains))
+              .as("report of inspection %d (%s) cites %s", i.id(), j, source).isTrue();
+        }
+      }
+      assertThat(documents).as("documents read for %s", j).isEqualTo(6);
     }
   }
 

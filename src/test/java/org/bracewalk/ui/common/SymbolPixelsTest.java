@@ -28,6 +28,30 @@ class SymbolPixelsTest {
     assertThat(star[1]).as("between the spokes").isGreaterThan(0.8);
   }
 
+  @Test
+  void notInspectedIsARingAndNotReachableABox() {
+    // issue 12, item 13: the two were both a "?" on the page; in the app the box's left side
+    // runs through the middle of its left edge, where the ring (wider, round) leaves white fill
+    HeadlessFx.start();
+    double[] sides = HeadlessFx.onFx(() -> {
+      double[] out = new double[2];
+      int k = 0;
+      for (org.bracewalk.core.symbol.Symbol s : new org.bracewalk.core.symbol.Symbol[] {
+          org.bracewalk.core.symbol.Symbol.STATE_NOT_REACHABLE,
+          org.bracewalk.core.symbol.Symbol.STATE_NOT_INSPECTED}) {
+        Canvas c = new Canvas(80, 80);
+        var g = c.getGraphicsContext2D();
+        g.setFill(Color.WHITE);
+        g.fillRect(0, 0, 80, 80);
+        PlanePainter.stateMark(g, 30.5, 30.5, 20, s, Color.BLACK, false);
+        out[k++] = c.snapshot(null, null).getPixelReader().getColor(30, 40).getBrightness();
+      }
+      return out;
+    });
+    assertThat(sides[0]).as("left side of the R box").isLessThan(0.5);
+    assertThat(sides[1]).as("inside the ? ring at the same place").isGreaterThan(0.9);
+  }
+
   /** Brightness at the centre, at (+11, +11), (+5.5, +5.5) and (0, -12) of a white canvas. */
   private static double[] probe(java.util.function.Consumer<javafx.scene.canvas.GraphicsContext> draw) {
     Canvas c = new Canvas(80, 80);

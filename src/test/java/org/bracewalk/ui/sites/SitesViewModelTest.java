@@ -138,7 +138,12 @@ class SitesViewModelTest {
     vm.selectedProperty().set(row(vm, "frame 2"));
     // last finalised 2025-03-05; today 2025-03-15: 7 days overdue, 14 days due on 2025-03-19
     dialogs.textAnswers.push(java.util.Optional.of(" 14 "));
+    // the demo site is in the UK: racking has a visual inspection weekly (HSE HSG76 paras
+    // 643-646, read; trade-facts.md), so 14 days is kept only once confirmed
+    dialogs.confirmAnswers.push(true);
     assertThat(vm.changeInterval()).isTrue();
+    assertThat(dialogs.asked.get(dialogs.asked.size() - 1)).contains("HSG76")
+        .doesNotContain("Work at Height").doesNotContain("1926");
     OverviewRow racking = row(vm, "Aisle C racking run");
     assertThat(racking.interval()).isEqualTo("14 days");
     assertThat(racking.nextDue()).isEqualTo("2025-03-19");
@@ -160,7 +165,8 @@ class SitesViewModelTest {
     dialogs.textAnswers.push(java.util.Optional.of("10"));
     dialogs.confirmAnswers.push(false);
     assertThat(vm.changeInterval()).isFalse();
-    assertThat(dialogs.asked.get(dialogs.asked.size() - 1)).contains("reg. 12");
+    assertThat(dialogs.asked.get(dialogs.asked.size() - 1)).contains("reg. 12")
+        .doesNotContain("1926").doesNotContain("HSG76");
     assertThat(row(vm, "North facade scaffold").interval()).isEqualTo("7 days");
     dialogs.textAnswers.push(java.util.Optional.of("10"));
     dialogs.confirmAnswers.push(true);
