@@ -58,5 +58,6 @@ public final class StoreCommands {
     root.addSubcommand("export", new FileCommands.Export(context));
     root.addSubcommand("analyse", new AnalyseCommand(context, analysisOutput));
     root.addSubcommand("history", new HistoryCommand(context));
+    root.addSubcommand("sync", new SyncCommand(context));
   }
 }

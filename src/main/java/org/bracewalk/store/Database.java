@@ -17,6 +17,7 @@ import java.util.concurrent.locks.ReentrantLock;
 import java.util.logging.Level;
 import java.util.logging.Logger;
 import org.bracewalk.core.port.DesignRepository;
+import org.bracewalk.core.port.GlobalIdentities;
 import org.bracewalk.core.port.InspectionRepository;
 import org.bracewalk.core.port.IssuedReportRepository;
 import org.bracewalk.core.port.ObservationRepository;
@@ -83,6 +84,7 @@ public final class Database implements RecordStore {
   private final JdbcObservationRepository observations = new JdbcObservationRepository(this);
   private final JdbcRepairRepository repairs = new JdbcRepairRepository(this);
   private final JdbcIssuedReportRepository issuedReports = new JdbcIssuedReportRepository(this);
+  private final JdbcGlobalIdentities identities = new JdbcGlobalIdentities(this);
 
   private Database(Path file, String location, Dialect dialect, Connection connection,
       int busyTimeoutMs) {
@@ -247,7 +249,8 @@ public final class Database implements RecordStore {
           "V8__plane_role.sql",
           "V9__frame_members.sql",
           "V10__frame_member_repairs.sql",
-          "V11__site_jurisdiction.sql");
+          "V11__site_jurisdiction.sql",
+          "V12__global_identities.sql");
 
   /**
    * True when the file's schema history shows exactly the packed scripts, in order, all applied
@@ -605,5 +608,15 @@ public final class Database implements RecordStore {
   @Override
   public IssuedReportRepository issuedReports() {
     return issuedReports;
+  }
+
+  @Override
+  public GlobalIdentities identities() {
+    return identities;
+  }
+
+  /** The uuid of the next row of {@code kind} a repository inserts (called under the lock). */
+  String newUuid(GlobalIdentities.Kind kind) {
+    return identities.next(kind);
   }
 }

@@ -19,6 +19,7 @@ import org.bracewalk.core.model.FrameRef;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PlaneDesign;
 import org.bracewalk.core.model.PlaneRecord;
+import org.bracewalk.core.port.GlobalIdentities;
 import org.bracewalk.core.port.DesignRepository;
 import org.bracewalk.core.port.StoreException;
 
@@ -32,8 +33,8 @@ final class JdbcDesignRepository implements DesignRepository {
       """
       INSERT INTO design_revisions
         (plane_id, number, author, design_date, approval_note, recorded_at, panel_count,
-         omitted_frame_count)
-      VALUES (?, ?, ?, ?, ?, ?, ?, ?)
+         omitted_frame_count, uuid)
+      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String INSERT_PANEL =
       """
@@ -109,6 +110,7 @@ final class JdbcDesignRepository implements DesignRepository {
                     s.setInt(7, revision.design().sortedBraces().size()
                         + revision.design().sortedOpenings().size());
                     s.setInt(8, revision.design().omittedFrame().size());
+                    s.setString(9, db.newUuid(GlobalIdentities.Kind.DESIGN_REVISION));
                     s.executeUpdate();
                     id = db.lastInsertId();
                   }

@@ -11,6 +11,7 @@ import java.util.Optional;
 import org.bracewalk.core.model.Inspection;
 import org.bracewalk.core.model.InspectionReason;
 import org.bracewalk.core.model.InspectionStatus;
+import org.bracewalk.core.port.GlobalIdentities;
 import org.bracewalk.core.port.InspectionFinalisedException;
 import org.bracewalk.core.port.InspectionRepository;
 import org.bracewalk.core.port.StoreException;
@@ -22,10 +23,10 @@ final class JdbcInspectionRepository implements InspectionRepository {
       INSERT INTO inspections
         (structure_id, started_at, finished_at, inspector_name, inspector_position,
          competent_person, shift, storage_safety_person, reason, status,
-         carried_out_for_name, carried_out_for_address, inspection_interval_days)
+         carried_out_for_name, carried_out_for_address, inspection_interval_days, uuid)
       VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?,
               CASE WHEN ? = 'finalised'
-                   THEN (SELECT inspection_interval_days FROM structures WHERE id = ?) END)
+                   THEN (SELECT inspection_interval_days FROM structures WHERE id = ?) END, ?)
       """;
   private static final String SELECT =
       """
@@ -70,6 +71,7 @@ final class JdbcInspectionRepository implements InspectionRepository {
             // the status and structure again: plain positional parameters, as both stores take
             s.setString(13, inspection.status().label());
             s.setLong(14, inspection.structureId());
+            s.setString(15, db.newUuid(GlobalIdentities.Kind.INSPECTION));
             s.executeUpdate();
             return find(db.lastInsertId()).orElseThrow();
           }

@@ -6,6 +6,7 @@ import java.sql.Statement;
 import java.util.ArrayList;
 import java.util.List;
 import org.bracewalk.core.model.IssuedReport;
+import org.bracewalk.core.port.GlobalIdentities;
 import org.bracewalk.core.port.IssuedReportRepository;
 
 /**
@@ -16,8 +17,8 @@ final class JdbcIssuedReportRepository implements IssuedReportRepository {
   private static final String INSERT =
       """
       INSERT INTO issued_reports (inspection_id, kind, file_name, fingerprint, records_fingerprint,
-        origin, issued_at)
-      VALUES (?, ?, ?, ?, ?, ?, ?)
+        origin, issued_at, uuid)
+      VALUES (?, ?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String COLUMNS =
       """
@@ -47,6 +48,7 @@ final class JdbcIssuedReportRepository implements IssuedReportRepository {
             s.setString(5, report.recordsFingerprint());
             s.setString(6, report.origin().label());
             s.setString(7, Columns.text(report.issuedAt()));
+            s.setString(8, db.newUuid(GlobalIdentities.Kind.ISSUED_REPORT));
             s.executeUpdate();
             long id = db.lastInsertId();
             List<IssuedReport> back = query(c, BY_ID, id);

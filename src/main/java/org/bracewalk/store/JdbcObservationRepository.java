@@ -16,6 +16,7 @@ import org.bracewalk.core.model.Observation;
 import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.PanelState;
 import org.bracewalk.core.model.Photo;
+import org.bracewalk.core.port.GlobalIdentities;
 import org.bracewalk.core.port.ObservationRepository;
 import org.bracewalk.core.port.StoreException;
 
@@ -34,8 +35,8 @@ final class JdbcObservationRepository implements ObservationRepository {
       INSERT INTO observations
         (inspection_id, plane_id, lift, bay, state, member_diagonal, member_kind, bow_tenth_mm,
          gauge_length_mm, defect, note, recorded_at, recorded_by, supersedes_id,
-         correction_reason, frame_type, frame_first, frame_second)
-      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
+         correction_reason, frame_type, frame_first, frame_second, uuid)
+      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String SELECT =
       """
@@ -46,8 +47,8 @@ final class JdbcObservationRepository implements ObservationRepository {
       """;
   private static final String INSERT_PHOTO =
       """
-      INSERT INTO photos (observation_id, file_name, media_type, data, attached_at)
-      VALUES (?, ?, ?, ?, ?)
+      INSERT INTO photos (observation_id, file_name, media_type, data, attached_at, uuid)
+      VALUES (?, ?, ?, ?, ?, ?)
       """;
   private static final String SELECT_PHOTOS =
       """
@@ -102,6 +103,7 @@ final class JdbcObservationRepository implements ObservationRepository {
             Columns.setInt(s, 17, member == null ? null : member.first());
             Columns.setInt(s, 18, member == null ? null : member.second());
             try {
+              s.setString(19, db.newUuid(GlobalIdentities.Kind.OBSERVATION));
               s.executeUpdate();
             } catch (SQLException e) {
               // the trigger's message is literal text (V6); name the plane and inspection here
@@ -192,6 +194,7 @@ final class JdbcObservationRepository implements ObservationRepository {
             s.setString(3, photo.mediaType());
             s.setBytes(4, photo.data());
             s.setString(5, Columns.text(photo.attachedAt()));
+            s.setString(6, db.newUuid(GlobalIdentities.Kind.PHOTO));
             s.executeUpdate();
             long id = db.lastInsertId();
             // as read back (instants to the millisecond), without reading the observation's

@@ -17,6 +17,7 @@ import org.bracewalk.core.model.PlaneRole;
 import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.PlaneRetirement;
 import org.bracewalk.core.model.Support;
+import org.bracewalk.core.port.GlobalIdentities;
 import org.bracewalk.core.port.PlaneRepository;
 import org.bracewalk.core.port.StoreException;
 
@@ -27,7 +28,7 @@ import org.bracewalk.core.port.StoreException;
 final class JdbcPlaneRepository implements PlaneRepository {
   private static final String INSERT =
       """
-      INSERT INTO planes (structure_id, name, lifts, bays, support, role) VALUES (?, ?, ?, ?, ?, ?)
+      INSERT INTO planes (structure_id, name, lifts, bays, support, role, uuid) VALUES (?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String INSERT_WIDTH =
       """
@@ -109,6 +110,7 @@ final class JdbcPlaneRepository implements PlaneRepository {
                     s.setInt(4, grid.bays());
                     s.setString(5, grid.support().label());
                     s.setString(6, plane.role().label());
+                    s.setString(7, db.newUuid(GlobalIdentities.Kind.PLANE));
                     s.executeUpdate();
                     id = db.lastInsertId();
                   }

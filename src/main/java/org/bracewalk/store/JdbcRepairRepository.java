@@ -14,6 +14,7 @@ import org.bracewalk.core.model.PanelRef;
 import org.bracewalk.core.model.RepairAction;
 import org.bracewalk.core.model.RepairActionKind;
 import org.bracewalk.core.model.RepairOrder;
+import org.bracewalk.core.port.GlobalIdentities;
 import org.bracewalk.core.port.RepairRepository;
 import org.bracewalk.core.port.StoreException;
 
@@ -25,7 +26,8 @@ import org.bracewalk.core.port.StoreException;
 final class JdbcRepairRepository implements RepairRepository {
   private static final String INSERT_ORDER =
       """
-      INSERT INTO repair_orders (inspection_id, created_at, created_by, note) VALUES (?, ?, ?, ?)
+      INSERT INTO repair_orders (inspection_id, created_at, created_by, note, uuid)
+      VALUES (?, ?, ?, ?, ?)
       """;
   private static final String SELECT_ORDER =
       """
@@ -36,8 +38,8 @@ final class JdbcRepairRepository implements RepairRepository {
       INSERT INTO repair_actions
         (order_id, plane_id, lift, bay, action, brace_diagonal, brace_kind, description,
          due_date, assignee, done_at, done_by, verified_by_inspection_id, frame_type, frame_first,
-         frame_second)
-      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
+         frame_second, uuid)
+      VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String SELECT_ACTION =
       """
@@ -72,6 +74,7 @@ final class JdbcRepairRepository implements RepairRepository {
             s.setString(2, Columns.text(order.createdAt()));
             s.setString(3, order.createdBy());
             s.setString(4, order.note());
+            s.setString(5, db.newUuid(GlobalIdentities.Kind.REPAIR_ORDER));
             s.executeUpdate();
             return findOrder(db.lastInsertId()).orElseThrow();
           }
@@ -101,6 +104,7 @@ final class JdbcRepairRepository implements RepairRepository {
             s.setString(14, member == null ? null : member.type().label());
             Columns.setInt(s, 15, member == null ? null : member.first());
             Columns.setInt(s, 16, member == null ? null : member.second());
+            s.setString(17, db.newUuid(GlobalIdentities.Kind.REPAIR_ACTION));
             s.executeUpdate();
             return findAction(db.lastInsertId()).orElseThrow();
           }

@@ -11,6 +11,7 @@ import java.util.Optional;
 import org.bracewalk.core.model.DisplayUnits;
 import org.bracewalk.core.model.Jurisdiction;
 import org.bracewalk.core.model.Site;
+import org.bracewalk.core.port.GlobalIdentities;
 import org.bracewalk.core.port.SiteRepository;
 
 /** Sites in table {@code sites}. */
@@ -18,8 +19,8 @@ final class JdbcSiteRepository implements SiteRepository {
   private static final String INSERT =
       """
       INSERT INTO sites (name, client_name, client_address, location, time_zone, display_units,
-        jurisdiction)
-      VALUES (?, ?, ?, ?, ?, ?, ?)
+        jurisdiction, uuid)
+      VALUES (?, ?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String SELECT =
       """
@@ -45,6 +46,7 @@ final class JdbcSiteRepository implements SiteRepository {
             s.setString(5, site.timeZone().getId());
             s.setString(6, site.units().label());
             s.setString(7, site.jurisdiction().label());
+            s.setString(8, db.newUuid(GlobalIdentities.Kind.SITE));
             s.executeUpdate();
             return site.withId(db.lastInsertId());
           }

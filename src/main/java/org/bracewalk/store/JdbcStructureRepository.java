@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Optional;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.model.StructureKind;
+import org.bracewalk.core.port.GlobalIdentities;
 import org.bracewalk.core.port.StructureRepository;
 
 /** Structures in table {@code structures}. */
@@ -16,8 +17,8 @@ final class JdbcStructureRepository implements StructureRepository {
   private static final String INSERT =
       """
       INSERT INTO structures
-        (site_id, name, kind, description, design_reference, inspection_interval_days)
-      VALUES (?, ?, ?, ?, ?, ?)
+        (site_id, name, kind, description, design_reference, inspection_interval_days, uuid)
+      VALUES (?, ?, ?, ?, ?, ?, ?)
       """;
   private static final String SELECT =
       """
@@ -51,6 +52,7 @@ final class JdbcStructureRepository implements StructureRepository {
             s.setString(4, structure.description());
             s.setString(5, structure.designReference());
             s.setInt(6, structure.inspectionIntervalDays());
+            s.setString(7, db.newUuid(GlobalIdentities.Kind.STRUCTURE));
             s.executeUpdate();
             return structure.withId(db.lastInsertId());
           }

@@ -31,6 +31,11 @@ final class FailingStore implements RecordStore {
   }
 
   @Override
+  public org.bracewalk.core.port.GlobalIdentities identities() {
+    return inner.identities();
+  }
+
+  @Override
   public ObservationRepository observations() {
     ObservationRepository o = inner.observations();
     return new ObservationRepository() {

@@ -14,6 +14,7 @@ import java.util.List;
 import java.util.Map;
 import org.bracewalk.store.OlderFiles;
 import org.bracewalk.app.AppServices;
+import org.bracewalk.app.report.RecordFingerprinter;
 import org.bracewalk.app.report.ReportService;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.core.model.PlaneRecord;
@@ -107,11 +108,15 @@ class InspectionScopeMigrationTest {
         PlaneAnalyzer.standard());
   }
 
+  /**
+   * The first canonical form's fingerprint (local ids): the two files compared here are made
+   * apart, so V12 gave their records different global identities, which the second form names.
+   */
   private static String fingerprint(AppServices s, long inspection) {
-    return new ReportService(s, PlaneAnalyzer.standard(),
+    return RecordFingerprinter.fingerprint(new ReportService(s, PlaneAnalyzer.standard(),
         new PdfReportRenderer(TemplateSource.packed(), "en"),
         new PdfRepairOrderRenderer(TemplateSource.packed(), "en"), new PdfDocumentStampReader(),
-        Clock.systemUTC()).fingerprint(inspection).sha256();
+        Clock.systemUTC()).records(inspection), RecordFingerprinter.SCHEME_1).sha256();
   }
 
   private static List<String> names(List<PlaneRecord> planes) {

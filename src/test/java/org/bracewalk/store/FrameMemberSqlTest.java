@@ -60,6 +60,14 @@ class FrameMemberSqlTest {
     assertThat(everything(location)).as("nothing changed by " + sql).isEqualTo(before);
   }
 
+  /**
+   * A dump without the global identities V12 gives every row of an older database (each random;
+   * {@code GlobalIdentitiesTest} checks them), so a migration test compares the rest as before.
+   */
+  static String withoutUuids(String dump) {
+    return dump.replaceAll("uuid=[0-9a-f-]{36}\\|", "");
+  }
+
   /** Every row of every table of either store, as text. */
   static String everything(String location) throws SQLException {
     if (!ServerAddress.isServer(location)) {
@@ -300,7 +308,7 @@ class FrameMemberSqlTest {
     }
 
     // every row as it was, the new columns empty; the same indexes and triggers, and the new ones
-    String after = everything(file);
+    String after = withoutUuids(everything(file));
     String expected = before
         .replace("correction_reason=|\n", "correction_reason=|frame_type=null|frame_first=null|"
             + "frame_second=null|\n")
@@ -372,7 +380,7 @@ class FrameMemberSqlTest {
         .replace("[design_panels]", "[design_frame_omissions]\n[design_panels]")
         // V11: a site stored before jurisdictions were recorded is "other"
         .replace("display_units=metric|\n", "display_units=metric|jurisdiction=other|\n");
-    assertThat(everything(location)).isEqualTo(expected);
+    assertThat(withoutUuids(everything(location))).isEqualTo(expected);
     refused(location, "DELETE FROM photos WHERE id = 5", "photos are kept as taken");
     refused(location, "UPDATE observations SET note = 'x' WHERE id = 7",
         "observations are append-only");

@@ -226,9 +226,14 @@ class FrameRepairActionSqlTest {
         // V11: a site stored before jurisdictions were recorded is "other"
         .replace("display_units=metric|\n", "display_units=metric|jurisdiction=other|\n");
     assertThat(expected).isNotEqualTo(before);
-    assertThat(FrameMemberSqlTest.everything(file)).isEqualTo(expected);
-    assertThat(names(file, "index")).containsExactlyElementsOf(indexesBefore);
-    assertThat(names(file, "trigger")).containsAll(triggersBefore)
+    assertThat(FrameMemberSqlTest.withoutUuids(FrameMemberSqlTest.everything(file)))
+        .isEqualTo(expected);
+    // V12's indexes of global identities are the only other ones
+    assertThat(names(file, "index").stream().filter(n -> !n.endsWith("_by_uuid")))
+        .containsExactlyElementsOf(indexesBefore);
+    // V12's triggers of global identities aside
+    assertThat(names(file, "trigger").stream().filter(n -> !n.contains("uuid")))
+        .containsAll(triggersBefore)
         .contains("repair_actions_frame_member_inside_the_plane")
         .hasSize(triggersBefore.size() + 1);
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);

@@ -299,6 +299,11 @@ class RecordsNeverOverwrittenTest {
         triggers++;
         String sql = r.getString(2);
         assertThat(expression.matcher(sql).find()).as(r.getString(1)).isFalse();
+        if (r.getString(1).endsWith("_given_a_uuid")) {
+          // V12: gives a row inserted without a global identity one; it refuses nothing
+          assertThat(sql).as(r.getString(1)).doesNotContainIgnoringCase("RAISE");
+          continue;
+        }
         assertThat(literal.matcher(sql).find()).as(r.getString(1)).isTrue();
       }
     }

@@ -116,4 +116,29 @@ class WorkingRoleTest {
       assertThat(db.observations().ofInspection(open)).hasSize(2);
     }
   }
+
+  @Test
+  void theWorkingRoleSyncsAFieldFileWithNoMoreThanItsGrants() throws Exception {
+    java.time.Clock clock = java.time.Clock.systemUTC();
+    org.bracewalk.app.SyncService sync = new org.bracewalk.app.SyncService(clock);
+    try (Database field = Database.open(dir.resolve("field.db"));
+        Database server = Database.open(location, Map.of("PGUSER", WORKER))) {
+      org.bracewalk.app.SyncService.Summary pulled = sync.sync(field, server);
+      assertThat(pulled.conflicts()).isEmpty();
+      long fieldPlane = field.identities().idOf(org.bracewalk.core.port.GlobalIdentities.Kind.PLANE,
+          server.identities().uuidOf(org.bracewalk.core.port.GlobalIdentities.Kind.PLANE, plane))
+          .orElseThrow();
+      Fixtures.Services s = Fixtures.Services.over(field);
+      long inspection = s.inspections().start(field.planes().find(fieldPlane).orElseThrow()
+          .structureId(), NewInspection.of("A. Field", "inspector", InspectionReason.ROUTINE))
+          .id();
+      s.inspections().recordObservation(inspection,
+          NewObservation.of(fieldPlane, PanelRef.of(1, 1), PanelState.MISSING, "A. Field"));
+      s.inspections().finalise(inspection);
+      org.bracewalk.app.SyncService.Summary pushed = sync.sync(field, server);
+      assertThat(pushed.conflicts()).isEmpty();
+      assertThat(pushed.pushedInspections()).isEqualTo(1);
+      assertThat(sync.sync(field, server).skippedInspections()).isEqualTo(1);
+    }
+  }
 }

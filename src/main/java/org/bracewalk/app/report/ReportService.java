@@ -10,6 +10,7 @@ import java.time.LocalDate;
 import java.time.ZoneId;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.EnumMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -48,6 +49,7 @@ import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.model.StructureKind;
 import org.bracewalk.core.port.DocumentSigner;
 import org.bracewalk.core.port.DocumentStampReader;
+import org.bracewalk.core.port.GlobalIdentities.Kind;
 import org.bracewalk.core.port.RecordStore;
 import org.bracewalk.core.port.RepairOrderRenderer;
 import org.bracewalk.core.port.ReportRenderer;
@@ -133,12 +135,51 @@ public final class ReportService {
       for (RepairOrder o : store.repairs().ordersOf(inspectionId)) {
         orderRecords.add(new InspectionRecords.OrderRecords(o, store.repairs().actionsOf(o.id())));
       }
-      return new InspectionRecords(site, structure, inspection, planes, orderRecords);
+      return new InspectionRecords(site, structure, inspection, planes, orderRecords,
+          identities(store, site, structure, inspection, planes, orderRecords));
     });
   }
 
+  /** The global identities of every record the fingerprint names, read in bulk. */
+  private static InspectionRecords.Identities identities(RecordStore store, Site site,
+      Structure structure, Inspection inspection, List<InspectionRecords.PlaneRecords> planes,
+      List<InspectionRecords.OrderRecords> orders) {
+    Map<Kind, Set<Long>> wanted = new EnumMap<>(Kind.class);
+    for (Kind k : Kind.values()) {
+      wanted.put(k, new HashSet<>());
+    }
+    wanted.get(Kind.SITE).add(site.id());
+    wanted.get(Kind.STRUCTURE).add(structure.id());
+    wanted.get(Kind.INSPECTION).add(inspection.id());
+    for (InspectionRecords.PlaneRecords p : planes) {
+      wanted.get(Kind.PLANE).add(p.plane().id());
+      wanted.get(Kind.DESIGN_REVISION).add(p.design().id());
+      for (Observation o : p.observations()) {
+        wanted.get(Kind.OBSERVATION).add(o.id());
+      }
+      p.photos().values().forEach(list -> list.forEach(ph -> wanted.get(Kind.PHOTO).add(ph.id())));
+    }
+    for (InspectionRecords.OrderRecords o : orders) {
+      wanted.get(Kind.REPAIR_ORDER).add(o.order().id());
+      for (RepairAction a : o.actions()) {
+        wanted.get(Kind.REPAIR_ACTION).add(a.id());
+        if (a.verifiedByInspectionId() != null) {
+          wanted.get(Kind.INSPECTION).add(a.verifiedByInspectionId());
+        }
+      }
+    }
+    Map<Kind, Map<Long, String>> found = new EnumMap<>(Kind.class);
+    wanted.forEach((k, ids) -> {
+      if (!ids.isEmpty()) {
+        found.put(k, store.identities().uuidsOf(k, ids));
+      }
+    });
+    return new InspectionRecords.Identities(found);
+  }
+
+  /** The fingerprint new documents carry (the current canonical form). */
   public RecordFingerprint fingerprint(long inspectionId) {
-    return RecordFingerprinter.fingerprint(records(inspectionId));
+    return RecordFingerprinter.fingerprint(records(inspectionId), RecordFingerprinter.SCHEME_2);
   }
 
   // ---- the report -----------------------------------------------------------------------------
@@ -352,15 +393,37 @@ public final class ReportService {
       return verifyUnstamped(copies);
     }
     DocumentStamp stamp = read.get();
-    long id;
+    long stamped;
     try {
-      id = Long.parseLong(stamp.inspectionId());
+      stamped = Long.parseLong(stamp.inspectionId());
     } catch (NumberFormatException e) {
       return Verification.notOurs();
     }
     String where = services.store().location();
+    // the second canonical form names the inspection by its global identity: the document may
+    // have been issued from another copy of the records (a field file, the team server), where
+    // the inspection has another local id
+    List<String> earlyNotes = new ArrayList<>();
+    Optional<String> uuid = inspectionUuid(stamp);
+    if (uuid.isPresent()) {
+      Optional<Long> local = services.store().identities().idOf(Kind.INSPECTION, uuid.get());
+      if (local.isEmpty()) {
+        return new Verification(Verification.Outcome.DIFFERS, stamp.kind(), stamp.inspectionId(),
+            stamp.fingerprint().sha256(), List.of("the document is about inspection "
+                + stamp.inspectionId() + " (global identity " + uuid.get() + "), which is not in "
+                + where + " (sync the field file that holds it first)"),
+            Optional.empty(), List.of());
+      }
+      if (local.get() != stamped) {
+        earlyNotes.add("issued from another copy of the records (a field file or the team"
+            + " server), where the inspection is " + stamped + "; in " + where + " it is "
+            + local.get() + " (global identity " + uuid.get() + ")");
+      }
+      stamped = local.get();
+    }
+    final long id = stamped;
     List<String> differences = new ArrayList<>();
-    List<String> notes = new ArrayList<>();
+    List<String> notes = new ArrayList<>(earlyNotes);
 
     // (a) the bytes are those of a copy this database issued
     Optional<IssuedReport> copy = copies.stream()
@@ -427,11 +490,16 @@ public final class ReportService {
       differences.add("records changed since issue: inspection " + id + " is not in " + where);
     } else {
       InspectionRecords records = records(id);
-      RecordFingerprint now = RecordFingerprinter.fingerprint(records);
       RecordFingerprint carried = stamp.fingerprint();
-      if (!carried.scheme().equals(now.scheme())) {
+      boolean known = carried.scheme().equals(RecordFingerprinter.SCHEME_1)
+          || carried.scheme().equals(RecordFingerprinter.SCHEME_2);
+      // a document is checked in the canonical form it was issued with
+      RecordFingerprint now = RecordFingerprinter.fingerprint(records,
+          known ? carried.scheme() : RecordFingerprinter.SCHEME_2);
+      if (!known) {
         differences.add("the document uses canonical form " + carried.scheme()
-            + "; this program computes " + now.scheme());
+            + "; this program computes " + RecordFingerprinter.SCHEME_1 + " and "
+            + RecordFingerprinter.SCHEME_2);
       } else if (!issuedWith.equals(now.sha256())) {
         List<String> sections = carried.sha256().equals(issuedWith)
             ? compare(carried.sections(), now.sections(), records) : List.of();
@@ -446,6 +514,20 @@ public final class ReportService {
     return new Verification(
         differences.isEmpty() ? Verification.Outcome.MATCH : Verification.Outcome.DIFFERS,
         stamp.kind(), stamp.inspectionId(), issuedWith, differences, copy, notes);
+  }
+
+  /**
+   * The inspection's global identity a document of the second canonical form carries (its section
+   * {@code inspection <uuid>}); empty for the first form.
+   */
+  static Optional<String> inspectionUuid(DocumentStamp stamp) {
+    if (!stamp.fingerprint().scheme().equals(RecordFingerprinter.SCHEME_2)) {
+      return Optional.empty();
+    }
+    return stamp.fingerprint().sections().stream().map(SectionDigest::name)
+        .filter(n -> n.startsWith(RecordFingerprinter.INSPECTION_SECTION_2))
+        .map(n -> n.substring(RecordFingerprinter.INSPECTION_SECTION_2.length()))
+        .findFirst();
   }
 
   /** True when the register row is the document the stamp names. */
@@ -491,8 +573,14 @@ public final class ReportService {
     then.forEach(d -> a.put(d.name(), d.sha256()));
     Map<String, String> b = new LinkedHashMap<>();
     now.forEach(d -> b.put(d.name(), d.sha256()));
-    Map<Long, String> planeNames = new HashMap<>();
-    records.planes().forEach(p -> planeNames.put(p.plane().id(), p.plane().name()));
+    // a section names a plane by its id (first form) or its global identity (second form)
+    Map<String, PlaneRecord> planeNames = new HashMap<>();
+    records.planes().forEach(p -> {
+      planeNames.put(String.valueOf(p.plane().id()), p.plane());
+      if (records.identities().byKind().containsKey(Kind.PLANE)) {
+        planeNames.put(records.identities().uuid(Kind.PLANE, p.plane().id()), p.plane());
+      }
+    });
     List<String> out = new ArrayList<>();
     for (Map.Entry<String, String> e : a.entrySet()) {
       String nowDigest = b.get(e.getKey());
@@ -511,18 +599,21 @@ public final class ReportService {
     return out;
   }
 
-  /** "plane 3 observations" as "the observations of plane 'frame 2' (id 3)". */
-  static String describe(String section, Map<Long, String> planeNames) {
+  /**
+   * "plane 3 observations" (or "plane UUID observations") as "the observations of plane 'frame 2'
+   * (id 3)".
+   */
+  static String describe(String section, Map<String, PlaneRecord> planes) {
     String[] parts = section.split(" ");
     if (parts.length == 3 && parts[0].equals("plane")) {
-      try {
-        long id = Long.parseLong(parts[1]);
-        String name = planeNames.get(id);
-        return "the " + parts[2] + " of plane " + (name == null ? "" : "'" + name + "' ")
-            + "(id " + id + ")";
-      } catch (NumberFormatException e) {
-        return section;
+      PlaneRecord plane = planes.get(parts[1]);
+      if (plane != null) {
+        return "the " + parts[2] + " of plane '" + plane.name() + "' (id " + plane.id() + ")";
       }
+      return "the " + parts[2] + " of plane " + parts[1];
+    }
+    if (section.startsWith(RecordFingerprinter.INSPECTION_SECTION_2)) {
+      return "the inspection record";
     }
     return switch (section) {
       case "repair orders" -> "the repair orders and their actions";
@@ -605,7 +696,7 @@ public final class ReportService {
         site.units() == DisplayUnits.IMPERIAL ? LengthUnits.IMPERIAL : LengthUnits.METRIC,
         clock.instant(), site.jurisdiction());
     return new ReportContent(header, particulars, sections, findings, steps,
-        RecordFingerprinter.fingerprint(r));
+        RecordFingerprinter.fingerprint(r, RecordFingerprinter.SCHEME_2));
   }
 
   /**

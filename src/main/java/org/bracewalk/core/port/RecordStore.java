@@ -25,6 +25,9 @@ public interface RecordStore extends AutoCloseable {
 
   IssuedReportRepository issuedReports();
 
+  /** The global identities (UUIDs) of the records, the same in every copy of a record. */
+  GlobalIdentities identities();
+
   /**
    * Runs {@code work} in one transaction: every change it makes through the repositories is
    * committed together when it returns, and none is kept when it throws (the exception is passed
