@@ -770,6 +770,8 @@ final class FrameFreedoms {
         }
       }
       FrameSystem.SpanningForest forest = null;
+      long[] rate = null;
+      int[] movingBuf = null;
       // per part found: count, moving joints (indices), classes, rows, components
       List<Found> found = new ArrayList<>();
       long[] vx = null;
@@ -778,26 +780,35 @@ final class FrameFreedoms {
         int size = classStart[i + 1] - classStart[i];
         List<Integer> comps = compsOf.get(i);
         ModularEchelon ech = new ModularEchelon(size);
-        List<long[]> dense = new ArrayList<>();
-        for (int r : rowsOf.get(i)) {
+        List<Integer> rows = rowsOf.get(i);
+        int nonzeroRows = 0;
+        for (int r : rows) {
           int[] cols = s.rowCols[r];
+          long[] vals = s.rowVals[r];
           int[] lc = new int[cols.length];
-          long[] row = size <= EXACT_LIMIT ? new long[size] : null;
+          boolean nonzero = false;
           for (int k = 0; k < cols.length; k++) {
             lc[k] = localIndex[cols[k]];
-            if (row != null) {
-              row[lc[k]] = s.rowVals[r][k];
-            }
+            nonzero |= vals[k] != 0;
           }
-          ech.addRow(lc, s.rowVals[r]);
-          if (row != null) {
-            dense.add(row);
-          }
+          ech.addRow(lc, vals);
+          nonzeroRows += nonzero ? 1 : 0;
         }
         int rank = ech.rank();
-        if (rank < size && !rowsOf.get(i).isEmpty()) {
+        // rank mod p <= rational rank <= nonzero rows: when the rows are independent mod p, the
+        // rank is exact; otherwise a deficiency mod p is confirmed over the integers
+        if (rank < size && rank < nonzeroRows) {
           if (size <= EXACT_LIMIT) {
-            rank = ExactRank.rank(dense.toArray(new long[0][]), size);
+            long[][] dense = new long[rows.size()][];
+            for (int t = 0; t < dense.length; t++) {
+              int r = rows.get(t);
+              long[] row = new long[size];
+              for (int k = 0; k < s.rowCols[r].length; k++) {
+                row[localIndex[s.rowCols[r][k]]] = s.rowVals[r][k];
+              }
+              dense[t] = row;
+            }
+            rank = ExactRank.rank(dense, size);
           } else {
             exact = false;
           }
@@ -822,26 +833,26 @@ final class FrameFreedoms {
           vx = new long[fw.jointCount];
           vy = new long[fw.jointCount];
         }
-        final int part = i;
-        final int[] cls = s.classOf;
-        final int[] partOf = partOfClass;
-        forest.sweep(fw, e -> {
-          int c = cls[e];
-          return c >= 0 && partOf[c] == part ? x[localIndex[c]] : 0;
-        }, compOf, anchorComp, tx, ty, vx, vy);
+        if (rate == null) {
+          rate = new long[classes];
+          movingBuf = new int[fw.gridJoints];
+        }
+        // this part's classes turn at the random rates, every other class is at rest
+        for (int k = classStart[i]; k < classStart[i + 1]; k++) {
+          rate[classList[k]] = x[k - classStart[i]];
+        }
+        forest.sweep(fw, s.classOf, rate, compOf, anchorComp, tx, ty, vx, vy);
+        for (int k = classStart[i]; k < classStart[i + 1]; k++) {
+          rate[classList[k]] = 0;
+        }
         int movingCount = 0;
-        for (int j = 0; j < fw.gridJoints; j++) {
-          if (compOf[j] >= 0 && (vx[j] != 0 || vy[j] != 0)) {
-            movingCount++;
+        final int grid = fw.gridJoints;
+        for (int j = 0; j < grid; j++) {
+          if ((vx[j] != 0 || vy[j] != 0) && compOf[j] >= 0) {
+            movingBuf[movingCount++] = j;
           }
         }
-        int[] js = new int[movingCount];
-        movingCount = 0;
-        for (int j = 0; j < fw.gridJoints; j++) {
-          if (compOf[j] >= 0 && (vx[j] != 0 || vy[j] != 0)) {
-            js[movingCount++] = j;
-          }
-        }
+        int[] js = Arrays.copyOf(movingBuf, movingCount);
         List<Integer> clsList = new ArrayList<>(size);
         for (int k = classStart[i]; k < classStart[i + 1]; k++) {
           clsList.add(classList[k]);

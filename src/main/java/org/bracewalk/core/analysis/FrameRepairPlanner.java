@@ -86,7 +86,7 @@ final class FrameRepairPlanner {
       }
     }
     Map<Integer, Brace> designMissing = new TreeMap<>();
-    Set<Long> designWays = new HashSet<>();
+    BitSet designWays = new BitSet(2 * design.length);
     for (int idx = 0; idx < design.length; idx++) {
       if (design[idx] != PanelCodes.NONE && design[idx] != analysed[idx]) {
         Brace missing =
@@ -96,7 +96,7 @@ final class FrameRepairPlanner {
           for (int way = 0; way < 2; way++) {
             if (way == 0 ? missing.diagonal().hasRising() : missing.diagonal().hasFalling()) {
               candidates.add(new Candidate(idx, way, null, missing.kind(), true));
-              designWays.add(idx * 2L + way);
+              designWays.set(idx * 2 + way);
             }
           }
         }
@@ -124,7 +124,7 @@ final class FrameRepairPlanner {
         int way = k % 2;
         if (openings.get(idx)
             || (codes[idx] & (1 << way)) != 0
-            || designWays.contains(idx * 2L + way)) {
+            || designWays.get(idx * 2 + way)) {
           next++;
           continue;
         }
@@ -191,7 +191,7 @@ final class FrameRepairPlanner {
       for (int idx = 0; idx < m * n; idx++) {
         for (int way = 0; way < 2; way++) {
           if (!openings.get(idx) && (codes[idx] & (1 << way)) == 0
-              && !designWays.contains(idx * 2L + way)) {
+              && !designWays.get(idx * 2 + way)) {
             more.add(new Candidate(idx, way, null, MemberKind.RIGID, false));
           }
         }
@@ -409,10 +409,7 @@ final class FrameRepairPlanner {
           tx[c] = ModularEchelon.random(rnd);
           ty[c] = ModularEchelon.random(rnd);
         }
-        forest.sweep(fw, e -> {
-          int c = classOf[e];
-          return c >= 0 ? x[c] : 0;
-        }, system.comp, st.anchorComp, tx, ty, sx, sy);
+        forest.sweep(fw, classOf, x, system.comp, st.anchorComp, tx, ty, sx, sy);
         vx[k] = java.util.Arrays.copyOf(sx, fw.gridJoints);
         vy[k] = java.util.Arrays.copyOf(sy, fw.gridJoints);
       }

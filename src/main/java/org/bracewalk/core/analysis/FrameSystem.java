@@ -126,15 +126,23 @@ final class FrameSystem {
     }
 
     /**
-     * Joint velocities mod p of the motion with angular velocity {@code w.at(e)} per member: as
-     * {@link FrameFreedoms#propagate}, into {@code vx}, {@code vy} (joints not reached keep 0).
+     * Joint velocities mod p of the motion with angular velocity {@code rate[classOf[e]]} per
+     * member (0 for a member with no class): as {@link FrameFreedoms#propagate}, into {@code vx},
+     * {@code vy} (joints not reached keep 0).
      */
     void sweep(
-        FrameFramework fw, MemberRates w, int[] compOf, int anchorComp, long[] tx, long[] ty,
-        long[] vx, long[] vy) {
-      for (int t = 0; t < size; t++) {
-        int v = order[t];
-        int e = via[v];
+        FrameFramework fw, int[] classOf, long[] rate, int[] compOf, int anchorComp, long[] tx,
+        long[] ty, long[] vx, long[] vy) {
+      final int[] ja = fw.ja;
+      final int[] jb = fw.jb;
+      final long[] dxs = fw.dx;
+      final long[] dys = fw.dy;
+      final int[] ord = order;
+      final int[] through = via;
+      final int len = size;
+      for (int t = 0; t < len; t++) {
+        int v = ord[t];
+        int e = through[v];
         if (e < 0) {
           int c = compOf[v];
           boolean moves = tx != null && c != anchorComp;
@@ -142,33 +150,30 @@ final class FrameSystem {
           vy[v] = moves ? ty[c] : 0;
           continue;
         }
-        long r = w.at(e);
-        int a = fw.ja[e];
+        int cls = classOf[e];
+        long r = cls >= 0 ? rate[cls] : 0;
+        int a = ja[e];
+        int from = a != v ? a : jb[e];
+        if (r == 0) {
+          vx[v] = vx[from];
+          vy[v] = vy[from];
+          continue;
+        }
+        // v_b = v_a + w J d, J d = (-dy, dx); coordinates differences lie far below p
+        long jx = -dys[e];
+        long jy = dxs[e];
+        long mx = ModularEchelon.mul(r, jx < 0 ? jx + ModularEchelon.P : jx);
+        long my = ModularEchelon.mul(r, jy < 0 ? jy + ModularEchelon.P : jy);
         if (a != v) {
-          // reached from its start a: v_b = v_a + w J d, J d = (-dy, dx)
-          if (r == 0) {
-            vx[v] = vx[a];
-            vy[v] = vy[a];
-          } else {
-            vx[v] = ModularEchelon.add(vx[a], ModularEchelon.mul(r, ModularEchelon.mod(-fw.dy[e])));
-            vy[v] = ModularEchelon.add(vy[a], ModularEchelon.mul(r, ModularEchelon.mod(fw.dx[e])));
-          }
+          // reached from its start a
+          vx[v] = ModularEchelon.add(vx[a], mx);
+          vy[v] = ModularEchelon.add(vy[a], my);
         } else {
-          int b = fw.jb[e];
-          if (r == 0) {
-            vx[v] = vx[b];
-            vy[v] = vy[b];
-          } else {
-            vx[v] = ModularEchelon.sub(vx[b], ModularEchelon.mul(r, ModularEchelon.mod(-fw.dy[e])));
-            vy[v] = ModularEchelon.sub(vy[b], ModularEchelon.mul(r, ModularEchelon.mod(fw.dx[e])));
-          }
+          vx[v] = ModularEchelon.sub(vx[from], mx);
+          vy[v] = ModularEchelon.sub(vy[from], my);
         }
       }
     }
   }
 
-  /** An angular velocity mod p per member. */
-  interface MemberRates {
-    long at(int member);
-  }
 }
