@@ -161,7 +161,12 @@ final class FrameRepairPlanner {
       motion.take();
       rigid = motion.dof == 0;
       if (!rigid && motion.size == 0) {
-        motion = Motion.of(FrameFramework.of(grid, codes, there), rnd, motion.dof);
+        int left = motion.dof;
+        // the spent motions' framework and velocities go before the next are drawn
+        motion.release();
+        start = null;
+        motion = null;
+        motion = Motion.of(FrameFramework.of(grid, codes, there), rnd, left);
         rigid = motion.dof == 0;
       }
     }
@@ -294,15 +299,15 @@ final class FrameRepairPlanner {
    */
   static final class Motion {
     static final long POOL_BYTES = 96L << 20;
-    final FrameFramework fw;
+    FrameFramework fw;
     int dof;
     /** Current motions 0..size-1, as coefficients over the motions drawn. */
     int size;
-    private final long[][] coef;
+    private long[][] coef;
     /** The motions drawn: velocities of the grid joints. */
-    private final long[][] vx;
-    private final long[][] vy;
-    final boolean[] held;
+    private long[][] vx;
+    private long[][] vy;
+    boolean[] held;
     private final long[] s;
 
     private Motion(FrameFramework fw, int dof, long[][] vx, long[][] vy, boolean[] held) {
@@ -367,6 +372,16 @@ final class FrameRepairPlanner {
       dof--;
     }
 
+    /** Lets go of the framework and the velocities (the motions are spent; not used after). */
+    void release() {
+      fw = null;
+      coef = null;
+      vx = null;
+      vy = null;
+      held = null;
+      size = 0;
+    }
+
     /** A copy whose current motions can be taken from without changing this one's. */
     Motion copy() {
       Motion c = new Motion(fw, dof, vx, vy, held);
@@ -379,7 +394,7 @@ final class FrameRepairPlanner {
 
     /** {@code wanted} motions at most (fewer where the pool would exceed its bytes). */
     static Motion of(FrameFramework fw, SplittableRandom rnd, int wanted) {
-      return of(FrameSystem.of(fw), rnd, wanted);
+      return of(FrameSystem.forMotions(fw), rnd, wanted);
     }
 
     /** The freedoms modulo p alone: no motion drawn (a full rank proves rigidity). */

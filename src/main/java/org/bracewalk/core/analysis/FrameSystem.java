@@ -21,7 +21,7 @@ final class FrameSystem {
   private ModularEchelon echelon;
   private SpanningForest forest;
 
-  private FrameSystem(FrameFramework fw) {
+  private FrameSystem(FrameFramework fw, boolean forStress) {
     this.fw = fw;
     this.adj = FrameFreedoms.adjacency(fw);
     this.comp = FrameFreedoms.components(fw, adj);
@@ -30,11 +30,19 @@ final class FrameSystem {
       count = Math.max(count, c + 1);
     }
     this.components = count;
-    this.base = new FaceClassSystem(fw, new int[0], new int[0]);
+    this.base = new FaceClassSystem(fw, new int[0], new int[0], forStress);
   }
 
   static FrameSystem of(FrameFramework fw) {
-    return new FrameSystem(fw);
+    return new FrameSystem(fw, true);
+  }
+
+  /**
+   * The shared parts for motions alone (the repair's rebuilt frameworks): no union-find edges kept,
+   * so it cannot give {@link CriticalByStress} a self-stress.
+   */
+  static FrameSystem forMotions(FrameFramework fw) {
+    return new FrameSystem(fw, false);
   }
 
   /** The base rows in echelon form modulo p (built on first use). */
@@ -83,8 +91,10 @@ final class FrameSystem {
       this.anchorJoint = anchorJoint;
       FrameFramework fw = s.fw;
       int n = fw.jointCount;
-      int[] start = s.adj[0];
-      int[] list = s.adj[1];
+      final int[] start = s.adj[0];
+      final int[] list = s.adj[1];
+      final int[] ja = fw.ja;
+      final int[] jb = fw.jb;
       int[] reach = new int[n];
       java.util.Arrays.fill(reach, -2);
       int[] queue = new int[n];
@@ -111,7 +121,8 @@ final class FrameSystem {
           int u = queue[head++];
           for (int i = start[u]; i < start[u + 1]; i++) {
             int e = list[i];
-            int v = fw.ja[e] == u ? fw.jb[e] : fw.ja[e];
+            int a = ja[e];
+            int v = a == u ? jb[e] : a;
             if (reach[v] != -2) {
               continue;
             }

@@ -104,7 +104,11 @@ final class RandomSelfStress {
     final int[] ev = sys.ev;
     final int[] eface = sys.eface;
     final boolean[] tree = sys.tree;
-    long[] flow = new long[ec];
+    // each intact face's two edge flows go straight to phi (slot 0) and psi (slot 1)
+    int faces = fw.faceCount;
+    final byte[] eslot = sys.eslot;
+    long[] phi = new long[faces];
+    long[] psi = new long[faces];
     int n = m + 1;
     int[] tdeg = new int[n];
     int[] xr = new int[n];
@@ -116,7 +120,7 @@ final class RandomSelfStress {
         xr[ev[k]] ^= k;
       } else if (eface[k] >= 0) {
         long f = ModularEchelon.random(rnd);
-        flow[k] = f;
+        (eslot[k] == 0 ? phi : psi)[eface[k]] = f;
         res[eu[k]] = ModularEchelon.add(res[eu[k]], f);
         res[ev[k]] = ModularEchelon.sub(res[ev[k]], f);
       }
@@ -159,13 +163,17 @@ final class RandomSelfStress {
         // child gets +flow, other end -flow
         other = ev[k];
         long f = free ? 0 : ModularEchelon.sub(0, res[child]);
-        flow[k] = f;
+        if (!free) {
+          (eslot[k] == 0 ? phi : psi)[eface[k]] = f;
+        }
         res[child] = ModularEchelon.add(res[child], f);
         res[other] = ModularEchelon.sub(res[other], f);
       } else {
         other = eu[k];
         long f = free ? 0 : res[child];
-        flow[k] = f;
+        if (!free) {
+          (eslot[k] == 0 ? phi : psi)[eface[k]] = f;
+        }
         res[child] = ModularEchelon.sub(res[child], f);
         res[other] = ModularEchelon.add(res[other], f);
       }
@@ -176,20 +184,6 @@ final class RandomSelfStress {
       }
     }
     // 4. y per intact face from the flows of its two edges: s_a . y = phi, s_b . y = psi
-    int faces = fw.faceCount;
-    long[] phi = new long[faces];
-    long[] psi = new long[faces];
-    final byte[] eslot = sys.eslot;
-    for (int k = 0; k < ec; k++) {
-      int f = eface[k];
-      if (f >= 0) {
-        if (eslot[k] == 0) {
-          phi[f] = flow[k];
-        } else {
-          psi[f] = flow[k];
-        }
-      }
-    }
     // An intact face of four sides (a panel with no diagonal) has for its first two members its
     // bottom ledger (w, 0) and right standard (0, h), both with the face on their left: y = (phi /
     // w, psi / h), from the inverses of the bay widths and lift heights. Any other intact face (a
@@ -207,7 +201,6 @@ final class RandomSelfStress {
     for (int i = 1; i <= lifts; i++) {
       vals[bays + i - 1] = fw.ys[i] - fw.ys[i - 1];
     }
-    long[] sa = new long[4 * faces];
     for (int f = 0; f < faces; f++) {
       if (groupOf[f] != -2 || faceMembers[4 * f + 3] >= 0) {
         vals[nv + f] = 1;
@@ -221,10 +214,6 @@ final class RandomSelfStress {
       long ay = signedMod(dys[a], aLeft);
       long bx = signedMod(dxs[b], bLeft);
       long by = signedMod(dys[b], bLeft);
-      sa[4 * f] = ax;
-      sa[4 * f + 1] = ay;
-      sa[4 * f + 2] = bx;
-      sa[4 * f + 3] = by;
       long det = ModularEchelon.sub(product(ax, by), product(ay, bx));
       if (det == 0) {
         throw new ArithmeticException("no inverse of 0");
@@ -232,8 +221,9 @@ final class RandomSelfStress {
       vals[nv + f] = det;
     }
     long[] inverses = batchInverse(vals);
-    long[] yx = new long[faces];
-    long[] yy = new long[faces];
+    // y is written over phi and psi, face by face (yx in phi, yy in psi)
+    long[] yx = phi;
+    long[] yy = psi;
     for (int f = 0; f < faces; f++) {
       int g = groupOf[f];
       if (g >= 0) {
@@ -251,12 +241,18 @@ final class RandomSelfStress {
           yx[f] = product(p, inverses[bottom % bays]);
           yy[f] = product(q, inverses[bays + (right - firstStandard) / (bays + 1)]);
         } else {
+          int a = faceMembers[4 * f];
+          int b = faceMembers[4 * f + 1];
+          boolean aLeft = faceL[a] == f;
+          boolean bLeft = faceL[b] == f;
+          long ax = signedMod(dxs[a], aLeft);
+          long ay = signedMod(dys[a], aLeft);
+          long bx = signedMod(dxs[b], bLeft);
+          long by = signedMod(dys[b], bLeft);
           long invF = inverses[nv + f];
           // [ax ay; bx by] (x, y) = (phi, psi)
-          yx[f] = product(invF,
-              ModularEchelon.sub(product(sa[4 * f + 3], p), product(sa[4 * f + 1], q)));
-          yy[f] = product(invF,
-              ModularEchelon.sub(product(sa[4 * f], q), product(sa[4 * f + 2], p)));
+          yx[f] = product(invF, ModularEchelon.sub(product(by, p), product(ay, q)));
+          yy[f] = product(invF, ModularEchelon.sub(product(ax, q), product(bx, p)));
         }
       }
     }
@@ -300,16 +296,16 @@ final class RandomSelfStress {
       prefix[i + 1] = vals[i] == 1 ? prefix[i] : ModularEchelon.mul(prefix[i], vals[i]);
     }
     long inv = ModularEchelon.inverse(prefix[n]);
-    long[] out = new long[n];
+    // written over vals, from the last down
     for (int i = n - 1; i >= 0; i--) {
-      if (vals[i] == 1) {
-        out[i] = 1;
+      long v = vals[i];
+      if (v == 1) {
         continue;
       }
       // inv is the inverse of vals[0] ... vals[i]
-      out[i] = ModularEchelon.mul(inv, prefix[i]);
-      inv = ModularEchelon.mul(inv, vals[i]);
+      vals[i] = ModularEchelon.mul(inv, prefix[i]);
+      inv = ModularEchelon.mul(inv, v);
     }
-    return out;
+    return vals;
   }
 }
