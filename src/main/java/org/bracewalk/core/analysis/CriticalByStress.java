@@ -64,7 +64,8 @@ final class CriticalByStress {
         braces.add(fw.panelRef(fw.panel[e]));
       }
     }
-    members.sort(null);
+    // frame member ids run in the members' own order (ledgers by level and bay, then standards
+    // by lift and line): the list is sorted as built
     return new Critical(members, new ArrayList<>(braces));
   }
 

@@ -30,8 +30,9 @@ final class FaceClassSystem {
   private final int[] mParent;
   final int fixedNode;
   /** Union-find over faces plus the outside (id faceCount). */
-  private final int[] fParent;
-  private final int[] fSize;
+  /** Union-find over faces while the system is built; released after. */
+  private int[] fParent;
+  private int[] fSize;
   final int outerNode;
 
   /** Compact class of each member: -1 when not there or fixed. */
@@ -51,13 +52,23 @@ final class FaceClassSystem {
   int[] eface;
   byte[] eslot;
   boolean[] tree;
+  private final boolean keepEdges;
 
   /**
    * @param fixed members whose angular velocity is fixed at 0 (beside the pinned base's ledgers)
    * @param joins pairs of members forced to turn together (flat array of pairs)
    */
   FaceClassSystem(FrameFramework fw, int[] fixed, int[] joins) {
+    this(fw, fixed, joins, true);
+  }
+
+  /**
+   * As above; {@code keepEdges} false keeps no union-find edges (a system not asked for a
+   * self-stress: the same classes and rows, a fifth of the memory fewer on a large plane).
+   */
+  FaceClassSystem(FrameFramework fw, int[] fixed, int[] joins, boolean keepEdges) {
     this.fw = fw;
+    this.keepEdges = keepEdges;
     int m = fw.memberCount;
     fixedNode = m;
     mParent = new int[m + 1];
@@ -80,9 +91,10 @@ final class FaceClassSystem {
     groupOf = new int[fw.faceCount];
     int[] groupIndex = new int[fw.faceCount + 1];
     Arrays.fill(groupIndex, -3);
+    int outerRoot = findFace(outerNode);
     for (int f = 0; f < fw.faceCount; f++) {
       int r = findFace(f);
-      if (r == findFace(outerNode)) {
+      if (r == outerRoot) {
         groupOf[f] = -1;
       } else if (fSize[r] == 1) {
         groupOf[f] = -2;
@@ -95,11 +107,15 @@ final class FaceClassSystem {
     }
     // member classes: fixed members first (tree edges to the fixed node), then intact faces
     int cap = 2 * fw.faceCount + m + 1;
-    eu = new int[cap];
-    ev = new int[cap];
-    eface = new int[cap];
-    eslot = new byte[cap];
-    tree = new boolean[cap];
+    fParent = null;
+    fSize = null;
+    if (keepEdges) {
+      eu = new int[cap];
+      ev = new int[cap];
+      eface = new int[cap];
+      eslot = new byte[cap];
+      tree = new boolean[cap];
+    }
     for (int e = 0; e < m; e++) {
       if (fw.ground[e]) {
         edge(fixedNode, e, -1, (byte) 0);
@@ -156,6 +172,7 @@ final class FaceClassSystem {
     this.fixedNode = base.fixedNode;
     this.fParent = null;
     this.fSize = null;
+    this.keepEdges = false;
     this.outerNode = base.outerNode;
     this.groupOf = base.groupOf;
     this.groupCount = base.groupCount;
@@ -264,6 +281,10 @@ final class FaceClassSystem {
   }
 
   private void edge(int u, int v, int face, byte slot) {
+    if (!keepEdges) {
+      unionMembers(u, v);
+      return;
+    }
     int k = edgeCount++;
     eu[k] = u;
     ev[k] = v;
@@ -319,45 +340,86 @@ final class FaceClassSystem {
   }
 
   private void buildRows() {
-    // entries (group, class) -> coefficient, accumulated in per-group hash maps
-    java.util.List<java.util.Map<Integer, long[]>> rows = new java.util.ArrayList<>();
-    for (int g = 0; g < groupCount; g++) {
-      rows.add(new java.util.HashMap<>());
-    }
+    // entries (group, class, signed direction) of every member with a class on a joined face,
+    // bucketed by group, then sorted by class within each group and summed per class
     FrameFramework f = fw;
-    for (int e = 0; e < f.memberCount; e++) {
-      int c = classOf[e];
+    final int m = f.memberCount;
+    final int[] faceL = f.faceL;
+    final int[] faceR = f.faceR;
+    final int[] cls = classOf;
+    final int[] grp = groupOf;
+    int[] start = new int[groupCount + 1];
+    int entries = 0;
+    if (groupCount > 0) {
+      for (int e = 0; e < m; e++) {
+        if (cls[e] < 0) {
+          continue;
+        }
+        int l = faceL[e];
+        int r = faceR[e];
+        if (l != FrameFramework.OUTER && grp[l] >= 0) {
+          start[grp[l] + 1]++;
+          entries++;
+        }
+        if (r != FrameFramework.OUTER && grp[r] >= 0) {
+          start[grp[r] + 1]++;
+          entries++;
+        }
+      }
+    }
+    for (int g = 0; g < groupCount; g++) {
+      start[g + 1] += start[g];
+    }
+    long[] keyed = new long[entries];
+    long[] ex = new long[entries];
+    long[] ey = new long[entries];
+    int[] fill = java.util.Arrays.copyOf(start, groupCount);
+    int k = 0;
+    for (int e = 0; e < m && entries > 0; e++) {
+      int c = cls[e];
       if (c < 0) {
         continue;
       }
       for (int s = 0; s < 2; s++) {
-        int face = s == 0 ? f.faceL[e] : f.faceR[e];
-        if (face == FrameFramework.OUTER) {
-          continue;
-        }
-        int g = groupOf[face];
-        if (g < 0) {
+        int face = s == 0 ? faceL[e] : faceR[e];
+        if (face == FrameFramework.OUTER || grp[face] < 0) {
           continue;
         }
         long sign = s == 0 ? 1 : -1;
-        long[] acc = rows.get(g).computeIfAbsent(c, k -> new long[2]);
-        acc[0] += sign * f.dx[e];
-        acc[1] += sign * f.dy[e];
+        int at = fill[grp[face]]++;
+        keyed[at] = ((long) c << 32) | k;
+        ex[k] = sign * f.dx[e];
+        ey[k] = sign * f.dy[e];
+        k++;
       }
     }
     rowCols = new int[2 * groupCount][];
     rowVals = new long[2 * groupCount][];
     for (int g = 0; g < groupCount; g++) {
-      java.util.Map<Integer, long[]> r = rows.get(g);
-      int[] cols = new int[r.size()];
-      long[] xv = new long[r.size()];
-      long[] yv = new long[r.size()];
-      int k = 0;
-      for (java.util.Map.Entry<Integer, long[]> en : new java.util.TreeMap<>(r).entrySet()) {
-        cols[k] = en.getKey();
-        xv[k] = en.getValue()[0];
-        yv[k] = en.getValue()[1];
-        k++;
+      int from = start[g];
+      int to = start[g + 1];
+      java.util.Arrays.sort(keyed, from, to);
+      int n = 0;
+      int[] cols = new int[to - from];
+      long[] xv = new long[to - from];
+      long[] yv = new long[to - from];
+      for (int t = from; t < to; t++) {
+        int c = (int) (keyed[t] >>> 32);
+        int i = (int) keyed[t];
+        if (n > 0 && cols[n - 1] == c) {
+          xv[n - 1] += ex[i];
+          yv[n - 1] += ey[i];
+        } else {
+          cols[n] = c;
+          xv[n] = ex[i];
+          yv[n] = ey[i];
+          n++;
+        }
+      }
+      if (n < cols.length) {
+        cols = java.util.Arrays.copyOf(cols, n);
+        xv = java.util.Arrays.copyOf(xv, n);
+        yv = java.util.Arrays.copyOf(yv, n);
       }
       rowCols[2 * g] = cols;
       rowVals[2 * g] = xv;

@@ -230,11 +230,15 @@ final class FrameFreedoms {
   /** Joint adjacency over the members that are there (CSR). */
   static int[][] adjacency(FrameFramework fw) {
     int n = fw.jointCount;
+    final int m = fw.memberCount;
+    final int[] ja = fw.ja;
+    final int[] jb = fw.jb;
+    final boolean[] present = fw.present;
     int[] start = new int[n + 1];
-    for (int e = 0; e < fw.memberCount; e++) {
-      if (fw.present[e]) {
-        start[fw.ja[e] + 1]++;
-        start[fw.jb[e] + 1]++;
+    for (int e = 0; e < m; e++) {
+      if (present[e]) {
+        start[ja[e] + 1]++;
+        start[jb[e] + 1]++;
       }
     }
     for (int i = 0; i < n; i++) {
@@ -242,10 +246,10 @@ final class FrameFreedoms {
     }
     int[] list = new int[start[n]];
     int[] fill = Arrays.copyOf(start, n);
-    for (int e = 0; e < fw.memberCount; e++) {
-      if (fw.present[e]) {
-        list[fill[fw.ja[e]]++] = e;
-        list[fill[fw.jb[e]]++] = e;
+    for (int e = 0; e < m; e++) {
+      if (present[e]) {
+        list[fill[ja[e]]++] = e;
+        list[fill[jb[e]]++] = e;
       }
     }
     return new int[][] {start, list};
@@ -319,18 +323,24 @@ final class FrameFreedoms {
   /** Components of the joints through the members that are there (pinned: the base is one). */
   static int[] components(FrameFramework fw, int[][] adj) {
     int n = fw.jointCount;
+    final int[] start = adj[0];
+    final int[] list = adj[1];
+    final int[] ja = fw.ja;
+    final int[] jb = fw.jb;
+    final boolean pinned = fw.pinned;
+    final int bays = fw.bays;
     int[] comp = new int[n];
     Arrays.fill(comp, -1);
     int[] queue = new int[n];
     int count = 0;
     for (int root = 0; root < n; root++) {
-      if (comp[root] >= 0 || (adj[0][root] == adj[0][root + 1] && !(fw.pinned && root <= fw.bays))) {
+      if (comp[root] >= 0 || (start[root] == start[root + 1] && !(pinned && root <= bays))) {
         continue;
       }
       int len = 0;
       int head = 0;
-      if (fw.pinned && root <= fw.bays) {
-        for (int line = 0; line <= fw.bays; line++) {
+      if (pinned && root <= bays) {
+        for (int line = 0; line <= bays; line++) {
           comp[line] = count;
           queue[len++] = line;
         }
@@ -340,9 +350,10 @@ final class FrameFreedoms {
       }
       while (head < len) {
         int u = queue[head++];
-        for (int i = adj[0][u]; i < adj[0][u + 1]; i++) {
-          int e = adj[1][i];
-          int v = fw.ja[e] == u ? fw.jb[e] : fw.ja[e];
+        for (int i = start[u]; i < start[u + 1]; i++) {
+          int e = list[i];
+          int a = ja[e];
+          int v = a == u ? jb[e] : a;
           if (comp[v] < 0) {
             comp[v] = count;
             queue[len++] = v;
@@ -544,29 +555,40 @@ final class FrameFreedoms {
 
     void reduce() {
       int m = fw.memberCount;
-      int cap = m + fw.jointCount + 1;
+      int n = fw.jointCount;
+      final int[] ja = fw.ja;
+      final int[] jb = fw.jb;
+      final boolean[] present = fw.present;
+      final boolean[] ground = fw.ground;
+      deg = new int[n];
+      removed = new boolean[n];
+      for (int e = 0; e < m; e++) {
+        if (present[e] && !ground[e]) {
+          deg[ja[e]]++;
+          deg[jb[e]]++;
+        }
+      }
+      // a bar end to end is made at most once per joint of two members
+      int twos = 0;
+      for (int j = 0; j < n; j++) {
+        twos += deg[j] == 2 && !anchored(j) ? 1 : 0;
+      }
+      int cap = m + twos + 1;
       barA = new int[cap];
       barB = new int[cap];
       endA = new int[cap];
       endB = new int[cap];
       rep = new int[cap];
       alive = new boolean[cap];
-      deg = new int[fw.jointCount];
-      removed = new boolean[fw.jointCount];
+      System.arraycopy(ja, 0, barA, 0, m);
+      System.arraycopy(jb, 0, barB, 0, m);
       for (int e = 0; e < m; e++) {
-        barA[e] = fw.ja[e];
-        barB[e] = fw.jb[e];
         endA[e] = e;
         endB[e] = e;
         rep[e] = e;
-        alive[e] = fw.present[e] && !fw.ground[e];
-        if (alive[e]) {
-          deg[fw.ja[e]]++;
-          deg[fw.jb[e]]++;
-        }
+        alive[e] = present[e] && !ground[e];
       }
       barCount = m;
-      int n = fw.jointCount;
       int[] original = deg.clone();
       // 1. joints whose two members run in one straight line: one member end to end
       for (int j = 0; j < n; j++) {
@@ -770,6 +792,8 @@ final class FrameFreedoms {
         }
       }
       FrameSystem.SpanningForest forest = null;
+      long[] rate = null;
+      int[] movingBuf = null;
       // per part found: count, moving joints (indices), classes, rows, components
       List<Found> found = new ArrayList<>();
       long[] vx = null;
@@ -778,26 +802,35 @@ final class FrameFreedoms {
         int size = classStart[i + 1] - classStart[i];
         List<Integer> comps = compsOf.get(i);
         ModularEchelon ech = new ModularEchelon(size);
-        List<long[]> dense = new ArrayList<>();
-        for (int r : rowsOf.get(i)) {
+        List<Integer> rows = rowsOf.get(i);
+        int nonzeroRows = 0;
+        for (int r : rows) {
           int[] cols = s.rowCols[r];
+          long[] vals = s.rowVals[r];
           int[] lc = new int[cols.length];
-          long[] row = size <= EXACT_LIMIT ? new long[size] : null;
+          boolean nonzero = false;
           for (int k = 0; k < cols.length; k++) {
             lc[k] = localIndex[cols[k]];
-            if (row != null) {
-              row[lc[k]] = s.rowVals[r][k];
-            }
+            nonzero |= vals[k] != 0;
           }
-          ech.addRow(lc, s.rowVals[r]);
-          if (row != null) {
-            dense.add(row);
-          }
+          ech.addRow(lc, vals);
+          nonzeroRows += nonzero ? 1 : 0;
         }
         int rank = ech.rank();
-        if (rank < size && !rowsOf.get(i).isEmpty()) {
+        // rank mod p <= rational rank <= nonzero rows: when the rows are independent mod p, the
+        // rank is exact; otherwise a deficiency mod p is confirmed over the integers
+        if (rank < size && rank < nonzeroRows) {
           if (size <= EXACT_LIMIT) {
-            rank = ExactRank.rank(dense.toArray(new long[0][]), size);
+            long[][] dense = new long[rows.size()][];
+            for (int t = 0; t < dense.length; t++) {
+              int r = rows.get(t);
+              long[] row = new long[size];
+              for (int k = 0; k < s.rowCols[r].length; k++) {
+                row[localIndex[s.rowCols[r][k]]] = s.rowVals[r][k];
+              }
+              dense[t] = row;
+            }
+            rank = ExactRank.rank(dense, size);
           } else {
             exact = false;
           }
@@ -822,26 +855,26 @@ final class FrameFreedoms {
           vx = new long[fw.jointCount];
           vy = new long[fw.jointCount];
         }
-        final int part = i;
-        final int[] cls = s.classOf;
-        final int[] partOf = partOfClass;
-        forest.sweep(fw, e -> {
-          int c = cls[e];
-          return c >= 0 && partOf[c] == part ? x[localIndex[c]] : 0;
-        }, compOf, anchorComp, tx, ty, vx, vy);
+        if (rate == null) {
+          rate = new long[classes];
+          movingBuf = new int[fw.gridJoints];
+        }
+        // this part's classes turn at the random rates, every other class is at rest
+        for (int k = classStart[i]; k < classStart[i + 1]; k++) {
+          rate[classList[k]] = x[k - classStart[i]];
+        }
+        forest.sweep(fw, s.classOf, rate, compOf, anchorComp, tx, ty, vx, vy);
+        for (int k = classStart[i]; k < classStart[i + 1]; k++) {
+          rate[classList[k]] = 0;
+        }
         int movingCount = 0;
-        for (int j = 0; j < fw.gridJoints; j++) {
-          if (compOf[j] >= 0 && (vx[j] != 0 || vy[j] != 0)) {
-            movingCount++;
+        final int grid = fw.gridJoints;
+        for (int j = 0; j < grid; j++) {
+          if ((vx[j] != 0 || vy[j] != 0) && compOf[j] >= 0) {
+            movingBuf[movingCount++] = j;
           }
         }
-        int[] js = new int[movingCount];
-        movingCount = 0;
-        for (int j = 0; j < fw.gridJoints; j++) {
-          if (compOf[j] >= 0 && (vx[j] != 0 || vy[j] != 0)) {
-            js[movingCount++] = j;
-          }
-        }
+        int[] js = Arrays.copyOf(movingBuf, movingCount);
         List<Integer> clsList = new ArrayList<>(size);
         for (int k = classStart[i]; k < classStart[i + 1]; k++) {
           clsList.add(classList[k]);

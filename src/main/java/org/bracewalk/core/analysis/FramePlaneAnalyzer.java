@@ -84,6 +84,7 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
     int dof = state.degreesOfFreedom();
     FrameRepairPlanner.Motion motion =
         dof == 0 ? null : FrameRepairPlanner.Motion.of(system, rnd, dof);
+    system = null;
     RepairPlan repair =
         FrameRepairPlanner.plan(
             grid, codes, design.omittedFrame(), openings, codes, design.omittedFrame(), false, dof,
@@ -170,6 +171,8 @@ final class FramePlaneAnalyzer implements PlaneAnalyzer {
       BraceGraph builtGraph = BraceGraph.of(grid, builtCodes);
       repair = RepairPlanner.plan(grid, designCodes, openings, builtCodes, builtGraph, true);
     } else {
+      // the state's framework and equations are done with: a large plane's repair may rebuild
+      system = null;
       repair =
           FrameRepairPlanner.plan(
               grid, designCodes, design.omittedFrame(), openings, builtCodes, notThere, true,

@@ -86,7 +86,7 @@ final class FrameRepairPlanner {
       }
     }
     Map<Integer, Brace> designMissing = new TreeMap<>();
-    Set<Long> designWays = new HashSet<>();
+    BitSet designWays = new BitSet(2 * design.length);
     for (int idx = 0; idx < design.length; idx++) {
       if (design[idx] != PanelCodes.NONE && design[idx] != analysed[idx]) {
         Brace missing =
@@ -96,7 +96,7 @@ final class FrameRepairPlanner {
           for (int way = 0; way < 2; way++) {
             if (way == 0 ? missing.diagonal().hasRising() : missing.diagonal().hasFalling()) {
               candidates.add(new Candidate(idx, way, null, missing.kind(), true));
-              designWays.add(idx * 2L + way);
+              designWays.set(idx * 2 + way);
             }
           }
         }
@@ -124,7 +124,7 @@ final class FrameRepairPlanner {
         int way = k % 2;
         if (openings.get(idx)
             || (codes[idx] & (1 << way)) != 0
-            || designWays.contains(idx * 2L + way)) {
+            || designWays.get(idx * 2 + way)) {
           next++;
           continue;
         }
@@ -161,7 +161,12 @@ final class FrameRepairPlanner {
       motion.take();
       rigid = motion.dof == 0;
       if (!rigid && motion.size == 0) {
-        motion = Motion.of(FrameFramework.of(grid, codes, there), rnd, motion.dof);
+        int left = motion.dof;
+        // the spent motions' framework and velocities go before the next are drawn
+        motion.release();
+        start = null;
+        motion = null;
+        motion = Motion.of(FrameFramework.of(grid, codes, there), rnd, left);
         rigid = motion.dof == 0;
       }
     }
@@ -191,7 +196,7 @@ final class FrameRepairPlanner {
       for (int idx = 0; idx < m * n; idx++) {
         for (int way = 0; way < 2; way++) {
           if (!openings.get(idx) && (codes[idx] & (1 << way)) == 0
-              && !designWays.contains(idx * 2L + way)) {
+              && !designWays.get(idx * 2 + way)) {
             more.add(new Candidate(idx, way, null, MemberKind.RIGID, false));
           }
         }
@@ -294,15 +299,15 @@ final class FrameRepairPlanner {
    */
   static final class Motion {
     static final long POOL_BYTES = 96L << 20;
-    final FrameFramework fw;
+    FrameFramework fw;
     int dof;
     /** Current motions 0..size-1, as coefficients over the motions drawn. */
     int size;
-    private final long[][] coef;
+    private long[][] coef;
     /** The motions drawn: velocities of the grid joints. */
-    private final long[][] vx;
-    private final long[][] vy;
-    final boolean[] held;
+    private long[][] vx;
+    private long[][] vy;
+    boolean[] held;
     private final long[] s;
 
     private Motion(FrameFramework fw, int dof, long[][] vx, long[][] vy, boolean[] held) {
@@ -367,6 +372,16 @@ final class FrameRepairPlanner {
       dof--;
     }
 
+    /** Lets go of the framework and the velocities (the motions are spent; not used after). */
+    void release() {
+      fw = null;
+      coef = null;
+      vx = null;
+      vy = null;
+      held = null;
+      size = 0;
+    }
+
     /** A copy whose current motions can be taken from without changing this one's. */
     Motion copy() {
       Motion c = new Motion(fw, dof, vx, vy, held);
@@ -379,7 +394,7 @@ final class FrameRepairPlanner {
 
     /** {@code wanted} motions at most (fewer where the pool would exceed its bytes). */
     static Motion of(FrameFramework fw, SplittableRandom rnd, int wanted) {
-      return of(FrameSystem.of(fw), rnd, wanted);
+      return of(FrameSystem.forMotions(fw), rnd, wanted);
     }
 
     /** The freedoms modulo p alone: no motion drawn (a full rank proves rigidity). */
@@ -409,10 +424,7 @@ final class FrameRepairPlanner {
           tx[c] = ModularEchelon.random(rnd);
           ty[c] = ModularEchelon.random(rnd);
         }
-        forest.sweep(fw, e -> {
-          int c = classOf[e];
-          return c >= 0 ? x[c] : 0;
-        }, system.comp, st.anchorComp, tx, ty, sx, sy);
+        forest.sweep(fw, classOf, x, system.comp, st.anchorComp, tx, ty, sx, sy);
         vx[k] = java.util.Arrays.copyOf(sx, fw.gridJoints);
         vy[k] = java.util.Arrays.copyOf(sy, fw.gridJoints);
       }

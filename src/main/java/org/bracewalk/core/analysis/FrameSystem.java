@@ -21,7 +21,7 @@ final class FrameSystem {
   private ModularEchelon echelon;
   private SpanningForest forest;
 
-  private FrameSystem(FrameFramework fw) {
+  private FrameSystem(FrameFramework fw, boolean forStress) {
     this.fw = fw;
     this.adj = FrameFreedoms.adjacency(fw);
     this.comp = FrameFreedoms.components(fw, adj);
@@ -30,11 +30,19 @@ final class FrameSystem {
       count = Math.max(count, c + 1);
     }
     this.components = count;
-    this.base = new FaceClassSystem(fw, new int[0], new int[0]);
+    this.base = new FaceClassSystem(fw, new int[0], new int[0], forStress);
   }
 
   static FrameSystem of(FrameFramework fw) {
-    return new FrameSystem(fw);
+    return new FrameSystem(fw, true);
+  }
+
+  /**
+   * The shared parts for motions alone (the repair's rebuilt frameworks): no union-find edges kept,
+   * so it cannot give {@link CriticalByStress} a self-stress.
+   */
+  static FrameSystem forMotions(FrameFramework fw) {
+    return new FrameSystem(fw, false);
   }
 
   /** The base rows in echelon form modulo p (built on first use). */
@@ -83,8 +91,10 @@ final class FrameSystem {
       this.anchorJoint = anchorJoint;
       FrameFramework fw = s.fw;
       int n = fw.jointCount;
-      int[] start = s.adj[0];
-      int[] list = s.adj[1];
+      final int[] start = s.adj[0];
+      final int[] list = s.adj[1];
+      final int[] ja = fw.ja;
+      final int[] jb = fw.jb;
       int[] reach = new int[n];
       java.util.Arrays.fill(reach, -2);
       int[] queue = new int[n];
@@ -111,7 +121,8 @@ final class FrameSystem {
           int u = queue[head++];
           for (int i = start[u]; i < start[u + 1]; i++) {
             int e = list[i];
-            int v = fw.ja[e] == u ? fw.jb[e] : fw.ja[e];
+            int a = ja[e];
+            int v = a == u ? jb[e] : a;
             if (reach[v] != -2) {
               continue;
             }
@@ -126,15 +137,23 @@ final class FrameSystem {
     }
 
     /**
-     * Joint velocities mod p of the motion with angular velocity {@code w.at(e)} per member: as
-     * {@link FrameFreedoms#propagate}, into {@code vx}, {@code vy} (joints not reached keep 0).
+     * Joint velocities mod p of the motion with angular velocity {@code rate[classOf[e]]} per
+     * member (0 for a member with no class): as {@link FrameFreedoms#propagate}, into {@code vx},
+     * {@code vy} (joints not reached keep 0).
      */
     void sweep(
-        FrameFramework fw, MemberRates w, int[] compOf, int anchorComp, long[] tx, long[] ty,
-        long[] vx, long[] vy) {
-      for (int t = 0; t < size; t++) {
-        int v = order[t];
-        int e = via[v];
+        FrameFramework fw, int[] classOf, long[] rate, int[] compOf, int anchorComp, long[] tx,
+        long[] ty, long[] vx, long[] vy) {
+      final int[] ja = fw.ja;
+      final int[] jb = fw.jb;
+      final long[] dxs = fw.dx;
+      final long[] dys = fw.dy;
+      final int[] ord = order;
+      final int[] through = via;
+      final int len = size;
+      for (int t = 0; t < len; t++) {
+        int v = ord[t];
+        int e = through[v];
         if (e < 0) {
           int c = compOf[v];
           boolean moves = tx != null && c != anchorComp;
@@ -142,33 +161,30 @@ final class FrameSystem {
           vy[v] = moves ? ty[c] : 0;
           continue;
         }
-        long r = w.at(e);
-        int a = fw.ja[e];
+        int cls = classOf[e];
+        long r = cls >= 0 ? rate[cls] : 0;
+        int a = ja[e];
+        int from = a != v ? a : jb[e];
+        if (r == 0) {
+          vx[v] = vx[from];
+          vy[v] = vy[from];
+          continue;
+        }
+        // v_b = v_a + w J d, J d = (-dy, dx); coordinates differences lie far below p
+        long jx = -dys[e];
+        long jy = dxs[e];
+        long mx = ModularEchelon.mul(r, jx < 0 ? jx + ModularEchelon.P : jx);
+        long my = ModularEchelon.mul(r, jy < 0 ? jy + ModularEchelon.P : jy);
         if (a != v) {
-          // reached from its start a: v_b = v_a + w J d, J d = (-dy, dx)
-          if (r == 0) {
-            vx[v] = vx[a];
-            vy[v] = vy[a];
-          } else {
-            vx[v] = ModularEchelon.add(vx[a], ModularEchelon.mul(r, ModularEchelon.mod(-fw.dy[e])));
-            vy[v] = ModularEchelon.add(vy[a], ModularEchelon.mul(r, ModularEchelon.mod(fw.dx[e])));
-          }
+          // reached from its start a
+          vx[v] = ModularEchelon.add(vx[a], mx);
+          vy[v] = ModularEchelon.add(vy[a], my);
         } else {
-          int b = fw.jb[e];
-          if (r == 0) {
-            vx[v] = vx[b];
-            vy[v] = vy[b];
-          } else {
-            vx[v] = ModularEchelon.sub(vx[b], ModularEchelon.mul(r, ModularEchelon.mod(-fw.dy[e])));
-            vy[v] = ModularEchelon.sub(vy[b], ModularEchelon.mul(r, ModularEchelon.mod(fw.dx[e])));
-          }
+          vx[v] = ModularEchelon.sub(vx[from], mx);
+          vy[v] = ModularEchelon.sub(vy[from], my);
         }
       }
     }
   }
 
-  /** An angular velocity mod p per member. */
-  interface MemberRates {
-    long at(int member);
-  }
 }

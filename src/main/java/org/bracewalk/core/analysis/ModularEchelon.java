@@ -97,24 +97,38 @@ final class ModularEchelon {
    * returns true when it raised the rank.
    */
   boolean addRow(int[] cols, long[] vals) {
-    int[] c = cols.clone();
-    Integer[] order = new Integer[c.length];
-    for (int i = 0; i < c.length; i++) {
-      order[i] = i;
+    int len = cols.length;
+    int[] sc = new int[len];
+    long[] sv = new long[len];
+    boolean ascending = true;
+    for (int i = 1; i < len && ascending; i++) {
+      ascending = cols[i - 1] < cols[i];
     }
-    Arrays.sort(order, (a, b) -> Integer.compare(c[a], c[b]));
-    int[] sc = new int[c.length];
-    long[] sv = new long[c.length];
     int k = 0;
-    for (int i = 0; i < order.length; i++) {
-      int col = c[order[i]];
-      long val = mod(vals[order[i]]);
-      if (k > 0 && sc[k - 1] == col) {
-        sv[k - 1] = add(sv[k - 1], val);
-      } else {
-        sc[k] = col;
-        sv[k] = val;
-        k++;
+    if (ascending) {
+      // the usual case (rows built column by column): nothing to sort or merge
+      for (int i = 0; i < len; i++) {
+        sc[i] = cols[i];
+        sv[i] = mod(vals[i]);
+      }
+      k = len;
+    } else {
+      // sort by column (index in the low bits keeps equal columns in input order), then merge
+      long[] keyed = new long[len];
+      for (int i = 0; i < len; i++) {
+        keyed[i] = ((long) cols[i] << 32) | i;
+      }
+      Arrays.sort(keyed);
+      for (int t = 0; t < len; t++) {
+        int col = (int) (keyed[t] >>> 32);
+        long val = mod(vals[(int) keyed[t]]);
+        if (k > 0 && sc[k - 1] == col) {
+          sv[k - 1] = add(sv[k - 1], val);
+        } else {
+          sc[k] = col;
+          sv[k] = val;
+          k++;
+        }
       }
     }
     return addReduced(compact(sc, sv, k));

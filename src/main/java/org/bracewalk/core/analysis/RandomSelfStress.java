@@ -64,63 +64,84 @@ final class RandomSelfStress {
       }
       z = ech.randomNullVector(rnd);
     }
-    // 2. residual per member from the joined groups
+    // 2. residual per member from the joined groups (none when no face is joined)
+    final int[] faceL = fw.faceL;
+    final int[] faceR = fw.faceR;
+    final long[] dxs = fw.dx;
+    final long[] dys = fw.dy;
+    final boolean[] present = fw.present;
+    final boolean[] ground = fw.ground;
+    final int[] groupOf = sys.groupOf;
     long[] res = new long[m + 1];
-    for (int e = 0; e < m; e++) {
-      // every member there has its equation, those turning with a fixed member too
-      if (!fw.present[e] || fw.ground[e]) {
-        continue;
-      }
-      for (int s = 0; s < 2; s++) {
-        int face = s == 0 ? fw.faceL[e] : fw.faceR[e];
-        if (face == FrameFramework.OUTER) {
+    if (g2 > 0) {
+      for (int e = 0; e < m; e++) {
+        // every member there has its equation, those turning with a fixed member too
+        if (!present[e] || ground[e]) {
           continue;
         }
-        int g = sys.groupOf[face];
-        if (g < 0) {
+        int l = faceL[e];
+        int r = faceR[e];
+        int gl = l == FrameFramework.OUTER ? -1 : groupOf[l];
+        int gr = r == FrameFramework.OUTER ? -1 : groupOf[r];
+        if (gl < 0 && gr < 0) {
           continue;
         }
-        long v = ModularEchelon.add(
-            ModularEchelon.mul(z[2 * g], ModularEchelon.mod(fw.dx[e])),
-            ModularEchelon.mul(z[2 * g + 1], ModularEchelon.mod(fw.dy[e])));
-        res[e] = s == 0 ? ModularEchelon.add(res[e], v) : ModularEchelon.sub(res[e], v);
+        long mx = ModularEchelon.mod(dxs[e]);
+        long my = ModularEchelon.mod(dys[e]);
+        long acc = 0;
+        if (gl >= 0) {
+          acc = ModularEchelon.add(acc, dot(z[2 * gl], mx, z[2 * gl + 1], my));
+        }
+        if (gr >= 0) {
+          acc = ModularEchelon.sub(acc, dot(z[2 * gr], mx, z[2 * gr + 1], my));
+        }
+        res[e] = acc;
       }
     }
     // 3. flows on the union-find edges: random on cycle edges, then solved up the forest
-    int ec = sys.edgeCount;
-    long[] flow = new long[ec];
+    final int ec = sys.edgeCount;
+    final int[] eu = sys.eu;
+    final int[] ev = sys.ev;
+    final int[] eface = sys.eface;
+    final boolean[] tree = sys.tree;
+    // each intact face's two edge flows go straight to phi (slot 0) and psi (slot 1)
+    int faces = fw.faceCount;
+    final byte[] eslot = sys.eslot;
+    long[] phi = new long[faces];
+    long[] psi = new long[faces];
+    int n = m + 1;
+    int[] tdeg = new int[n];
+    int[] xr = new int[n];
     for (int k = 0; k < ec; k++) {
-      if (!sys.tree[k] && sys.eface[k] >= 0) {
-        flow[k] = ModularEchelon.random(rnd);
-        res[sys.eu[k]] = ModularEchelon.add(res[sys.eu[k]], flow[k]);
-        res[sys.ev[k]] = ModularEchelon.sub(res[sys.ev[k]], flow[k]);
+      if (tree[k]) {
+        tdeg[eu[k]]++;
+        tdeg[ev[k]]++;
+        xr[eu[k]] ^= k;
+        xr[ev[k]] ^= k;
+      } else if (eface[k] >= 0) {
+        long f = ModularEchelon.random(rnd);
+        (eslot[k] == 0 ? phi : psi)[eface[k]] = f;
+        res[eu[k]] = ModularEchelon.add(res[eu[k]], f);
+        res[ev[k]] = ModularEchelon.sub(res[ev[k]], f);
       }
     }
     // the forest's edges from the leaves in: each tree rooted at the fixed node, or at its lowest
     // node; a leaf's one edge (the xor of its edges) carries what balances it, so each edge's flow
     // is fixed by the side away from the root, in any leaf order
-    int n = m + 1;
     int fixedRoot = sys.findMember(sys.fixedNode);
     boolean[] root = new boolean[n];
-    int[] lowest = new int[n];
-    Arrays.fill(lowest, -1);
+    boolean[] rootTaken = new boolean[n];
     for (int x = 0; x < n; x++) {
+      if (tdeg[x] == 0) {
+        // alone in its set: the root of a one-node tree, never a leaf
+        continue;
+      }
       int r = sys.findMember(x);
       if (r == fixedRoot) {
         root[x] = x == sys.fixedNode;
-      } else if (lowest[r] < 0) {
-        lowest[r] = x;
+      } else if (!rootTaken[r]) {
+        rootTaken[r] = true;
         root[x] = true;
-      }
-    }
-    int[] tdeg = new int[n];
-    int[] xr = new int[n];
-    for (int k = 0; k < ec; k++) {
-      if (sys.tree[k]) {
-        tdeg[sys.eu[k]]++;
-        tdeg[sys.ev[k]]++;
-        xr[sys.eu[k]] ^= k;
-        xr[sys.ev[k]] ^= k;
       }
     }
     int[] stack = new int[n];
@@ -136,19 +157,25 @@ final class RandomSelfStress {
         continue;
       }
       int k = xr[child];
-      boolean free = sys.eface[k] < 0;
+      boolean free = eface[k] < 0;
       int other;
-      if (sys.eu[k] == child) {
+      if (eu[k] == child) {
         // child gets +flow, other end -flow
-        other = sys.ev[k];
-        flow[k] = free ? 0 : ModularEchelon.sub(0, res[child]);
-        res[child] = ModularEchelon.add(res[child], flow[k]);
-        res[other] = ModularEchelon.sub(res[other], flow[k]);
+        other = ev[k];
+        long f = free ? 0 : ModularEchelon.sub(0, res[child]);
+        if (!free) {
+          (eslot[k] == 0 ? phi : psi)[eface[k]] = f;
+        }
+        res[child] = ModularEchelon.add(res[child], f);
+        res[other] = ModularEchelon.sub(res[other], f);
       } else {
-        other = sys.eu[k];
-        flow[k] = free ? 0 : res[child];
-        res[child] = ModularEchelon.sub(res[child], flow[k]);
-        res[other] = ModularEchelon.add(res[other], flow[k]);
+        other = eu[k];
+        long f = free ? 0 : res[child];
+        if (!free) {
+          (eslot[k] == 0 ? phi : psi)[eface[k]] = f;
+        }
+        res[child] = ModularEchelon.sub(res[child], f);
+        res[other] = ModularEchelon.add(res[other], f);
       }
       tdeg[child] = 0;
       xr[other] ^= k;
@@ -157,48 +184,85 @@ final class RandomSelfStress {
       }
     }
     // 4. y per intact face from the flows of its two edges: s_a . y = phi, s_b . y = psi
-    long[] phi = new long[fw.faceCount];
-    long[] psi = new long[fw.faceCount];
-    for (int k = 0; k < ec; k++) {
-      int f = sys.eface[k];
-      if (f >= 0) {
-        if (sys.eslot[k] == 0) {
-          phi[f] = flow[k];
-        } else {
-          psi[f] = flow[k];
-        }
-      }
+    // An intact face of four sides (a panel with no diagonal) has for its first two members its
+    // bottom ledger (w, 0) and right standard (0, h), both with the face on their left: y = (phi /
+    // w, psi / h), from the inverses of the bay widths and lift heights. Any other intact face (a
+    // triangle) solves its 2 x 2 system by its determinant. All the inverses at once by batch
+    // inversion (one modular inverse, three products per value).
+    final int[] faceMembers = fw.faceMembers;
+    final int bays = fw.bays;
+    final int lifts = fw.lifts;
+    final int firstStandard = (lifts + 1) * bays;
+    int nv = bays + lifts;
+    long[] vals = new long[nv + faces];
+    for (int j = 1; j <= bays; j++) {
+      vals[j - 1] = fw.xs[j] - fw.xs[j - 1];
     }
-    long[] yx = new long[fw.faceCount];
-    long[] yy = new long[fw.faceCount];
-    long[] inverses = intactInverses(fw, sys);
-    for (int f = 0; f < fw.faceCount; f++) {
-      int g = sys.groupOf[f];
+    for (int i = 1; i <= lifts; i++) {
+      vals[bays + i - 1] = fw.ys[i] - fw.ys[i - 1];
+    }
+    for (int f = 0; f < faces; f++) {
+      if (groupOf[f] != -2 || faceMembers[4 * f + 3] >= 0) {
+        vals[nv + f] = 1;
+        continue;
+      }
+      int a = faceMembers[4 * f];
+      int b = faceMembers[4 * f + 1];
+      boolean aLeft = faceL[a] == f;
+      boolean bLeft = faceL[b] == f;
+      long ax = signedMod(dxs[a], aLeft);
+      long ay = signedMod(dys[a], aLeft);
+      long bx = signedMod(dxs[b], bLeft);
+      long by = signedMod(dys[b], bLeft);
+      long det = ModularEchelon.sub(product(ax, by), product(ay, bx));
+      if (det == 0) {
+        throw new ArithmeticException("no inverse of 0");
+      }
+      vals[nv + f] = det;
+    }
+    long[] inverses = batchInverse(vals);
+    // y is written over phi and psi, face by face (yx in phi, yy in psi)
+    long[] yx = phi;
+    long[] yy = psi;
+    for (int f = 0; f < faces; f++) {
+      int g = groupOf[f];
       if (g >= 0) {
         yx[f] = z[2 * g];
         yy[f] = z[2 * g + 1];
       } else if (g == -2) {
-        int a = fw.faceMembers[4 * f];
-        int b = fw.faceMembers[4 * f + 1];
-        long ax = ModularEchelon.mod(fw.side(f, a) * fw.dx[a]);
-        long ay = ModularEchelon.mod(fw.side(f, a) * fw.dy[a]);
-        long bx = ModularEchelon.mod(fw.side(f, b) * fw.dx[b]);
-        long by = ModularEchelon.mod(fw.side(f, b) * fw.dy[b]);
-        long inv = inverses[f];
-        // [ax ay; bx by] (x, y) = (phi, psi)
-        yx[f] = ModularEchelon.mul(inv,
-            ModularEchelon.sub(ModularEchelon.mul(by, phi[f]), ModularEchelon.mul(ay, psi[f])));
-        yy[f] = ModularEchelon.mul(inv,
-            ModularEchelon.sub(ModularEchelon.mul(ax, psi[f]), ModularEchelon.mul(bx, phi[f])));
+        long p = phi[f];
+        long q = psi[f];
+        if (p == 0 && q == 0) {
+          continue;
+        }
+        if (faceMembers[4 * f + 3] >= 0) {
+          int bottom = faceMembers[4 * f];
+          int right = faceMembers[4 * f + 1];
+          yx[f] = product(p, inverses[bottom % bays]);
+          yy[f] = product(q, inverses[bays + (right - firstStandard) / (bays + 1)]);
+        } else {
+          int a = faceMembers[4 * f];
+          int b = faceMembers[4 * f + 1];
+          boolean aLeft = faceL[a] == f;
+          boolean bLeft = faceL[b] == f;
+          long ax = signedMod(dxs[a], aLeft);
+          long ay = signedMod(dys[a], aLeft);
+          long bx = signedMod(dxs[b], bLeft);
+          long by = signedMod(dys[b], bLeft);
+          long invF = inverses[nv + f];
+          // [ax ay; bx by] (x, y) = (phi, psi)
+          yx[f] = product(invF, ModularEchelon.sub(product(by, p), product(ay, q)));
+          yy[f] = product(invF, ModularEchelon.sub(product(ax, q), product(bx, p)));
+        }
       }
     }
     boolean[] out = new boolean[m];
     for (int e = 0; e < m; e++) {
-      if (!fw.present[e] || fw.ground[e]) {
+      if (!present[e] || ground[e]) {
         continue;
       }
-      int l = fw.faceL[e];
-      int r = fw.faceR[e];
+      int l = faceL[e];
+      int r = faceR[e];
       long lx = l == FrameFramework.OUTER ? 0 : yx[l];
       long ly = l == FrameFramework.OUTER ? 0 : yy[l];
       long rx = r == FrameFramework.OUTER ? 0 : yx[r];
@@ -208,38 +272,40 @@ final class RandomSelfStress {
     return out;
   }
 
-  /**
-   * For each intact face, the inverse of the determinant of its first two members' (signed)
-   * directions; all at once by batch inversion (one modular inverse, three products per face).
-   */
-  private static long[] intactInverses(FrameFramework fw, FaceClassSystem sys) {
-    long[] det = new long[fw.faceCount];
-    long[] prefix = new long[fw.faceCount + 1];
+  /** a * b mod p, with no work when either is 0 (sides of a panel are axis-parallel). */
+  private static long product(long a, long b) {
+    return a == 0 || b == 0 ? 0 : ModularEchelon.mul(a, b);
+  }
+
+  private static long dot(long a, long b, long c, long d) {
+    return ModularEchelon.add(product(a, b), product(c, d));
+  }
+
+  /** v (a coordinate difference, far below p) mod p, negated when the face is on its right. */
+  private static long signedMod(long v, boolean left) {
+    long s = left ? v : -v;
+    return s >= 0 ? s : s + ModularEchelon.P;
+  }
+
+  /** The inverses mod p of nonzero residues (1 stays 1 at no cost). */
+  private static long[] batchInverse(long[] vals) {
+    int n = vals.length;
+    long[] prefix = new long[n + 1];
     prefix[0] = 1;
-    for (int f = 0; f < fw.faceCount; f++) {
-      if (sys.groupOf[f] == -2) {
-        int a = fw.faceMembers[4 * f];
-        int b = fw.faceMembers[4 * f + 1];
-        long ax = ModularEchelon.mod(fw.side(f, a) * fw.dx[a]);
-        long ay = ModularEchelon.mod(fw.side(f, a) * fw.dy[a]);
-        long bx = ModularEchelon.mod(fw.side(f, b) * fw.dx[b]);
-        long by = ModularEchelon.mod(fw.side(f, b) * fw.dy[b]);
-        det[f] = ModularEchelon.sub(ModularEchelon.mul(ax, by), ModularEchelon.mul(ay, bx));
-        if (det[f] == 0) {
-          throw new ArithmeticException("no inverse of 0");
-        }
-      } else {
-        det[f] = 1;
+    for (int i = 0; i < n; i++) {
+      prefix[i + 1] = vals[i] == 1 ? prefix[i] : ModularEchelon.mul(prefix[i], vals[i]);
+    }
+    long inv = ModularEchelon.inverse(prefix[n]);
+    // written over vals, from the last down
+    for (int i = n - 1; i >= 0; i--) {
+      long v = vals[i];
+      if (v == 1) {
+        continue;
       }
-      prefix[f + 1] = ModularEchelon.mul(prefix[f], det[f]);
+      // inv is the inverse of vals[0] ... vals[i]
+      vals[i] = ModularEchelon.mul(inv, prefix[i]);
+      inv = ModularEchelon.mul(inv, v);
     }
-    long inv = ModularEchelon.inverse(prefix[fw.faceCount]);
-    long[] out = new long[fw.faceCount];
-    for (int f = fw.faceCount - 1; f >= 0; f--) {
-      // inv is the inverse of det[0] ... det[f]
-      out[f] = ModularEchelon.mul(inv, prefix[f]);
-      inv = ModularEchelon.mul(inv, det[f]);
-    }
-    return out;
+    return vals;
   }
 }
