@@ -103,6 +103,7 @@ public final class WalkView extends BorderPane {
     progress.setWrapText(false);
     ProgressBar bar = new ProgressBar();
     bar.setPrefWidth(220);
+    bar.setMinWidth(40); // the words keep their width, the bar gives way
     bar.progressProperty().bind(Bindings.createDoubleBinding(
         () -> vm.doneProperty().get() / (double) vm.total(), vm.doneProperty()));
     HBox top = Widgets.row(14, title, progress, bar);
@@ -370,7 +371,7 @@ public final class WalkView extends BorderPane {
       if (s == PanelState.MISSING || s == PanelState.DAMAGED_INEFFECTIVE) {
         b.getStyleClass().add("alarm");
       }
-      b.setWrapText(true);
+      Widgets.wrap(b);
       b.setId("mark-" + s.label());
       b.setOnAction(e -> {
         vm.mark(s);
@@ -486,13 +487,13 @@ public final class WalkView extends BorderPane {
     detailBox.managedProperty().bind(detailBox.visibleProperty());
     fillDetails();
 
-    Button undo = new Button("Undo last mark (Backspace)");
+    Button undo = Widgets.wrap(new Button("Undo last mark (Backspace)"));
     undo.setId("walk-undo");
     undo.disableProperty().bind(vm.canUndoProperty().not().or(vm.readOnlyProperty()));
     undo.setOnAction(e -> vm.undo());
     undo.setFocusTraversable(false);
 
-    ChoiceBox<WalkOrder> order = new ChoiceBox<>();
+    ChoiceBox<WalkOrder> order = new org.bracewalk.ui.common.WrappingChoiceBox<>();
     order.getItems().addAll(WalkOrder.values());
     order.valueProperty().bindBidirectional(vm.orderProperty());
     order.setFocusTraversable(false);
@@ -501,7 +502,7 @@ public final class WalkView extends BorderPane {
     frameInWalk.setId("walk-frame-in-walk");
     frameInWalk.selectedProperty().bindBidirectional(vm.frameInWalkProperty());
     frameInWalk.setFocusTraversable(false);
-    frameInWalk.setWrapText(true);
+    Widgets.wrap(frameInWalk);
     Button rest = new Button("Record the rest as designed\u2026 (A)");
     rest.setId("walk-rest");
     rest.setOnAction(e -> {
@@ -509,7 +510,7 @@ public final class WalkView extends BorderPane {
       canvas.requestFocus();
     });
     rest.setFocusTraversable(false);
-    rest.setWrapText(true);
+    Widgets.wrap(rest);
     rest.disableProperty().bind(vm.readOnlyProperty());
     VBox orderBox = Widgets.box("Walk order (O changes it)", order, frameInWalk, rest,
         Widgets.hint("A routine walk visits the braced panels; A then records the panels not yet looked at"
