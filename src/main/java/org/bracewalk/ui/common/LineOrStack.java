@@ -23,6 +23,8 @@ public final class LineOrStack extends Region {
     this.second = second;
     getChildren().addAll(first, second);
     setMinHeight(USE_PREF_SIZE);
+    // its height follows its width: a parent that asked at no width asks again
+    widthProperty().addListener((o, was, now) -> requestLayout());
   }
 
   @Override
@@ -53,8 +55,15 @@ public final class LineOrStack extends Region {
     return snappedLeftInset() + Math.max(first.minWidth(-1), second.minWidth(-1)) + snappedRightInset();
   }
 
+  /**
+   * A parent that does not ask by width (a stack pane, a border pane's min height) gets the height
+   * at the width this has now, once laid out: the height one line or two stacked parts need.
+   */
   @Override
   protected double computePrefHeight(double width) {
+    if (width < 0 && getWidth() > 0) {
+      width = getWidth();
+    }
     double inner = width < 0 ? -1 : width - snappedLeftInset() - snappedRightInset();
     double h;
     if (sideBySide(inner)) {

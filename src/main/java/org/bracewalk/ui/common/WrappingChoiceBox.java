@@ -62,6 +62,9 @@ public class WrappingChoiceBox<T> extends ChoiceBox<T> {
 
     @Override
     protected double computePrefHeight(double width, double top, double right, double bottom, double left) {
+      if (width < 0 && getSkinnable().getWidth() > 0) {
+        width = getSkinnable().getWidth(); // a parent that does not ask by width: as laid out now
+      }
       double lineWidth = width < 0 ? -1 : Math.max(0, width - left - right - button().prefWidth(-1));
       return top + Math.max(line().prefHeight(lineWidth), button().prefHeight(-1)) + bottom;
     }

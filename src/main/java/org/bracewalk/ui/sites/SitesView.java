@@ -30,7 +30,20 @@ import org.bracewalk.ui.common.Widgets;
 /** The sites overview screen. Only binds to its view model. */
 public final class SitesView extends BorderPane {
   private final SitesViewModel vm;
-  private final TableView<OverviewRow> table = new TableView<>();
+  /** The columns are to be fitted to their words again before the table's next layout. */
+  private boolean refit = true;
+  private final TableView<OverviewRow> table = new TableView<>() {
+    @Override
+    protected void layoutChildren() {
+      // fitted here, not where a font or width changes (that is in the middle of styling the
+      // cells: rows rebuilt then missed their selected look)
+      if (refit) {
+        refit = false;
+        fitColumns();
+      }
+      super.layoutChildren();
+    }
+  };
   private final TextField inspector = new TextField();
   /** A plane to select once the rows are read (0: none). */
   private long pendingPlane;
@@ -66,14 +79,20 @@ public final class SitesView extends BorderPane {
     });
     table.getColumns().add(column("Name", this::name));
     table.getColumns().add(column("What", r -> r.level() == OverviewRow.Level.SITE ? "" : r.kind()));
-    table.getColumns().add(column("Latest verdict", OverviewRow::verdictText));
+    table.getColumns().add(verdictColumn());
     table.getColumns().add(column("Last inspected", r -> r.level() == OverviewRow.Level.STRUCTURE ? r.lastInspected() : ""));
     TableColumn<OverviewRow, OverviewRow> due = new TableColumn<>("Next inspection due");
     due.setSortable(false);
     due.setCellValueFactory(c -> new javafx.beans.property.SimpleObjectProperty<>(c.getValue()));
     due.setCellFactory(c -> new TableCell<>() {
       {
-        fontProperty().addListener((o, a, b) -> fitColumns());
+        setWrapText(true);
+        fontProperty().addListener((o, a, b) -> fontChanged(b));
+      }
+
+      @Override
+      protected double computePrefHeight(double width) {
+        return super.computePrefHeight(width < 0 && getTableColumn() != null ? getTableColumn().getWidth() : width);
       }
 
       @Override
@@ -93,11 +112,12 @@ public final class SitesView extends BorderPane {
     });
     table.getColumns().add(due);
     table.getColumns().add(column("Interval", OverviewRow::interval));
-    // every column as wide as its widest entry, the room left shared out; where the window is
-    // narrower than that (large text, a small window) the table scrolls sideways, never cuts a word
+    // every column as wide as its widest entry, the room left shared out; where the table is
+    // narrower than that, the widest columns give way and their words wrap (the rows grow); only
+    // where even that does not fit (large text, a small window) the table scrolls sideways
     table.setColumnResizePolicy(TableView.UNCONSTRAINED_RESIZE_POLICY);
-    table.widthProperty().addListener((o, a, b) -> fitColumns());
-    vm.rows().addListener((javafx.collections.ListChangeListener<OverviewRow>) c -> fitColumns());
+    table.widthProperty().addListener((o, a, b) -> refitColumns());
+    vm.rows().addListener((javafx.collections.ListChangeListener<OverviewRow>) c -> refitColumns());
     table.setRowFactory(t -> new TableRow<>() {
       @Override
       protected void updateItem(OverviewRow r, boolean emptyRow) {
@@ -153,11 +173,43 @@ public final class SitesView extends BorderPane {
         }
       };
       // the text size changed (Ctrl+=): the columns are measured again
-      cell.fontProperty().addListener((o, a, b) -> fitColumns());
+      cell.fontProperty().addListener((o, a, b) -> fontChanged(b));
       return cell;
     });
     return c;
   }
+
+  /**
+   * The verdict column: the one with long words, the one that gives way when the table is narrower
+   * than its columns. Its words wrap within the column (a text wrapped to the column's width, in the
+   * cell's font and colour, so a selected row shows it in the selection's text colour) and the row
+   * grows to hold them.
+   */
+  private TableColumn<OverviewRow, String> verdictColumn() {
+    TableColumn<OverviewRow, String> c = column("Latest verdict", OverviewRow::verdictText);
+    c.setCellFactory(col -> {
+      javafx.scene.text.Text words = new javafx.scene.text.Text();
+      TableCell<OverviewRow, String> cell = new TableCell<>() {
+        @Override
+        protected void updateItem(String item, boolean empty) {
+          super.updateItem(item, empty);
+          words.setText(empty || item == null ? "" : item);
+          setGraphic(empty ? null : words);
+        }
+      };
+      words.fontProperty().bind(cell.fontProperty());
+      words.fillProperty().bind(cell.textFillProperty());
+      words.wrappingWidthProperty().bind(javafx.beans.binding.Bindings.createDoubleBinding(
+          () -> Math.max(20, c.getWidth() - cell.snappedLeftInset() - cell.snappedRightInset() - 2),
+          c.widthProperty(), cell.paddingProperty()));
+      cell.fontProperty().addListener((o, a, b) -> fontChanged(b));
+      return cell;
+    });
+    verdict = c;
+    return c;
+  }
+
+  private TableColumn<OverviewRow, String> verdict;
 
   private static String dueText(OverviewRow r) {
     return r.level() != OverviewRow.Level.STRUCTURE ? "" : r.due().words() + " \u00b7 " + r.nextDue();
@@ -177,7 +229,7 @@ public final class SitesView extends BorderPane {
   private void fitColumns() {
     javafx.scene.text.Font font = cellFont();
     javafx.scene.text.Font bold = javafx.scene.text.Font.font(font.getFamily(), javafx.scene.text.FontWeight.BOLD, font.getSize());
-    double pad = font.getSize() * 1.6 + 4; // a cell's padding and a little air
+    double pad = font.getSize() * 0.8 + 6; // a cell's padding and a little air
     double[] widths = new double[table.getColumns().size()];
     double sum = 0;
     for (int i = 0; i < widths.length; i++) {
@@ -192,9 +244,47 @@ public final class SitesView extends BorderPane {
       sum += widths[i];
     }
     double room = table.getWidth() - table.snappedLeftInset() - table.snappedRightInset() - 20; // a scroll bar
-    double extra = Math.max(0, room - sum);
+    double[] shown = new double[widths.length];
+    if (sum <= room) {
+      for (int i = 0; i < widths.length; i++) {
+        shown[i] = widths[i] + (room - sum) * widths[i] / sum;
+      }
+    } else {
+      // the verdict column gives way (its words wrap), never below its heading or eight letters;
+      // the others keep their words on one line, and the table scrolls sideways if it must
+      int v = table.getColumns().indexOf(verdict);
+      for (int i = 0; i < widths.length; i++) {
+        shown[i] = widths[i];
+      }
+      double others = sum - widths[v];
+      double heading = Math.ceil(textWidth(verdict.getText(), bold) + pad);
+      shown[v] = Math.min(widths[v], Math.max(Math.max(heading, font.getSize() * 8), room - others));
+    }
+    boolean changed = false;
     for (int i = 0; i < widths.length; i++) {
-      table.getColumns().get(i).setPrefWidth(widths[i] + extra * widths[i] / sum);
+      TableColumn<OverviewRow, ?> c = table.getColumns().get(i);
+      if (Math.abs(c.getPrefWidth() - shown[i]) >= 1) {
+        c.setPrefWidth(shown[i]);
+        changed = true;
+      }
+    }
+    if (changed) {
+      table.refresh(); // the wrapped rows take their new heights
+    }
+  }
+
+  private double fittedFont;
+
+  private void refitColumns() {
+    refit = true;
+    table.requestLayout();
+  }
+
+  /** A cell's font changed: the columns are fitted again when the size is new. */
+  private void fontChanged(javafx.scene.text.Font font) {
+    if (font != null && font.getSize() != fittedFont) {
+      fittedFont = font.getSize();
+      refitColumns();
     }
   }
 

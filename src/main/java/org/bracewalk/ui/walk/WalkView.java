@@ -119,6 +119,7 @@ public final class WalkView extends BorderPane {
     banner.setAlignment(Pos.CENTER_LEFT);
     banner.visibleProperty().bind(vm.alarmProperty().isNotEmpty());
     banner.managedProperty().bind(banner.visibleProperty());
+    banner.setMinHeight(Region.USE_PREF_SIZE);
     alarm.setAccessibleText("alarm");
 
     canvas.setId("walk-canvas");
@@ -161,7 +162,10 @@ public final class WalkView extends BorderPane {
     strip.prefWrapLengthProperty().bind(canvas.widthProperty());
     strip.setVisible(false);
     strip.managedProperty().bind(strip.visibleProperty());
-    VBox centre = new VBox(8, banner, canvas, strip, cursorText, key);
+    // the banner stands at the head of the side column, above the verdict it explains: the drawing
+    // keeps its size when it appears (above the drawing it took the drawing's room; over it, it
+    // would hide the top lifts)
+    VBox centre = new VBox(8, canvas, strip, cursorText, key);
     setCenter(centre);
 
     // The verdict stands above the scrolled controls, outside the scroll pane: its words change
@@ -189,12 +193,13 @@ public final class WalkView extends BorderPane {
     verdictPane.setFocusTraversable(false);
     verdictPane.getStyleClass().add("verdict-pane");
     // the verdict takes the height it needs, as long as the controls keep their least
-    VBox right = new VBox(10, readOnly, verdictPane, side) {
+    VBox right = new VBox(10, readOnly, banner, verdictPane, side) {
       @Override
       protected void layoutChildren() {
         double width = getWidth() - snappedLeftInset() - snappedRightInset();
         double wanted = verdict.prefHeight(width) + verdictPane.snappedTopInset() + verdictPane.snappedBottomInset();
-        double others = readOnly.isManaged() ? readOnly.prefHeight(width) + getSpacing() : 0;
+        double others = (readOnly.isManaged() ? readOnly.prefHeight(width) + getSpacing() : 0)
+            + (banner.isManaged() ? banner.prefHeight(width) + getSpacing() : 0);
         double room = getHeight() - snappedTopInset() - snappedBottomInset() - others - getSpacing()
             - side.getMinHeight();
         verdictPane.setPrefHeight(Math.max(verdictPane.getMinHeight(), Math.min(wanted, room)));
