@@ -58,6 +58,11 @@ public final class MainWindow implements Navigator, RecordsChanged {
   private int fontSize = 15;
   private LookSetting look = LookSetting.inMemory();
   private final ToggleButton daylightButton = new ToggleButton("Daylight");
+  /**
+   * Holds the screen shown: the screen fills it, and where the screen needs more room than the
+   * window has (large text on a small window) it scrolls, so nothing falls off the window's edge.
+   */
+  private final javafx.scene.control.ScrollPane screenPane = new javafx.scene.control.ScrollPane();
 
   public MainWindow(ScreenFactory factory, List<KeyHelp.Section> screenKeys, String statusText) {
     this.factory = factory;
@@ -110,6 +115,13 @@ public final class MainWindow implements Navigator, RecordsChanged {
       railBox.getChildren().add(b);
     }
     frame.setLeft(railBox);
+    screenPane.setId("screen-pane");
+    screenPane.getStyleClass().add("screen-pane");
+    screenPane.setFitToWidth(true);
+    screenPane.setFitToHeight(true);
+    screenPane.setFocusTraversable(false);
+    // the rail takes the height it needs, not less: its buttons keep their words whole
+    railBox.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
 
     Label status = new Label(statusText);
     status.setId("status-line");
@@ -120,7 +132,16 @@ public final class MainWindow implements Navigator, RecordsChanged {
     HBox statusBar = new HBox(16, status, opening, openError);
     statusBar.getStyleClass().add("status-bar");
     frame.setBottom(statusBar);
-    root.getChildren().add(frame);
+    // on a window too short for the frame at large text (header, rail, status line), the whole
+    // window scrolls up and down; it never needs to scroll sideways (NoClippedLabelsFxTest)
+    frame.setId("window-frame");
+    javafx.scene.control.ScrollPane windowPane = new javafx.scene.control.ScrollPane(frame);
+    windowPane.setId("window-pane");
+    windowPane.getStyleClass().add("screen-pane");
+    windowPane.setFitToWidth(true);
+    windowPane.setFitToHeight(true);
+    windowPane.setFocusTraversable(false);
+    root.getChildren().add(windowPane);
     root.addEventFilter(KeyEvent.KEY_PRESSED, this::onKey);
     applyFont();
   }
@@ -210,7 +231,10 @@ public final class MainWindow implements Navigator, RecordsChanged {
     currentId = id;
     Node node = s.node();
     BorderPane.setMargin(node, new Insets(0));
-    frame.setCenter(node);
+    screenPane.setContent(node);
+    if (frame.getCenter() != screenPane) {
+      frame.setCenter(screenPane);
+    }
     forgetMnemonicsOfNodesGone();
     crumbs.textProperty().unbind();
     crumbs.textProperty().bind(s.crumbsValue());

@@ -240,8 +240,14 @@ class RecordOffTheUiThreadTest {
     uiThread = WaitForAsyncUtils.asyncFx(Thread::currentThread).get(60, TimeUnit.SECONDS);
     AppScreens screens = new AppScreens(services, PlaneAnalyzer.standard(), DemoDatabase.CLOCK, dialogs,
         new org.bracewalk.ui.common.FxExecutor(), background, none);
-    MainWindow window = WaitForAsyncUtils.asyncFx(() -> new MainWindow(screens, AppScreens.screenKeys(), "test"))
-        .get(60, TimeUnit.SECONDS);
+    // in a scene, as in the app: the window's scroll panes show their content (and lookups find it)
+    // once styled
+    MainWindow window = WaitForAsyncUtils.asyncFx(() -> {
+      MainWindow w = new MainWindow(screens, AppScreens.screenKeys(), "test");
+      new javafx.scene.Scene(w.root(), 1280, 800);
+      w.root().applyCss();
+      return w;
+    }).get(60, TimeUnit.SECONDS);
     org.bracewalk.ui.common.Selection here =
         new org.bracewalk.ui.common.Selection(facade.structureId(), facade.id(), walk.id());
     armed = true;
@@ -263,6 +269,7 @@ class RecordOffTheUiThreadTest {
     settleFx();
     assertThat(window.currentScreen()).isEqualTo(before);
     assertThat(window.isOpening()).isFalse();
+    WaitForAsyncUtils.asyncFx(() -> window.root().applyCss()).get(60, TimeUnit.SECONDS);
     assertThat(((javafx.scene.control.Labeled) window.root().lookup("#screen-open-error")).getText())
         .startsWith("Could not open Design: plane 999999 could not be read from the database");
 

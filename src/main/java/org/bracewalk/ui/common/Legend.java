@@ -7,6 +7,7 @@ import javafx.scene.canvas.Canvas;
 import javafx.scene.control.Label;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
+import javafx.scene.layout.Region;
 import org.bracewalk.core.analysis.Block;
 import org.bracewalk.core.analysis.Freedom;
 import org.bracewalk.core.analysis.FreedomKind;
@@ -76,10 +77,25 @@ public final class Legend extends FlowPane {
     }
   }
 
+  /**
+   * As narrow as a swatch and a few words: the entries wrap their words to the width the key is
+   * given (a key wider than its pane would be cut off at the pane's edge).
+   */
+  @Override
+  protected double computeMinWidth(double height) {
+    return snappedLeftInset() + 54 + 6 + 8 * 15 + snappedRightInset();
+  }
+
   private void add(Canvas swatch, String words) {
     Label l = new Label(words);
     l.getStyleClass().add("legend-text");
+    // an entry is at most as wide as the key: at large text on a narrow key its words wrap
+    l.setWrapText(true);
+    l.setMinHeight(Region.USE_PREF_SIZE);
+    l.maxWidthProperty().bind(javafx.beans.binding.Bindings.max(40,
+        widthProperty().subtract(snappedLeftInset() + snappedRightInset() + swatch.getWidth() + 6 + 2)));
     HBox box = new HBox(6, swatch, l);
+    box.setMinHeight(Region.USE_PREF_SIZE);
     box.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
     getChildren().add(box);
   }

@@ -5,7 +5,11 @@ import org.bracewalk.app.verdict.Cautions;
 import org.bracewalk.app.verdict.VerdictKind;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
+import javafx.scene.control.Button;
 import javafx.scene.control.Label;
+import javafx.scene.control.Labeled;
+import javafx.scene.control.ListCell;
+import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
@@ -117,6 +121,72 @@ public final class Widgets {
     Label l = new Label(text);
     l.setMnemonicParsing(true);
     l.setLabelFor(target);
+    // a field's name is short: it keeps its width, the field beside it gives way
+    l.setMinWidth(Region.USE_PREF_SIZE);
     return l;
   }
+
+  /**
+   * Lets each of {@code labeled} (a label, button, check box) wrap its words onto more lines when
+   * it is narrower than its text, and take the height the wrapped text needs, instead of ending in
+   * an ellipsis. Returns the first, for chaining.
+   */
+  @SafeVarargs
+  public static <L extends Labeled> L wrap(L... labeled) {
+    for (Labeled l : labeled) {
+      l.setWrapText(true);
+      l.setMinHeight(Region.USE_PREF_SIZE);
+    }
+    return labeled.length == 0 ? null : labeled[0];
+  }
+
+  /** A button that fills its width and wraps its words when narrower than them. */
+  public static Button wideButton(String text) {
+    Button b = wrap(new Button(text));
+    b.setMaxWidth(Double.MAX_VALUE);
+    return b;
+  }
+
+  /** A row of buttons (or other nodes) that goes onto further lines when the width runs out. */
+  public static FlowPane flow(double gap, Node... nodes) {
+    FlowPane f = new FlowPane(gap, gap, nodes);
+    f.setAlignment(Pos.CENTER_LEFT);
+    f.setMinHeight(Region.USE_PREF_SIZE);
+    return f;
+  }
+
+  /** A list cell whose text wraps to the list's width (the list asks each cell its height at that width). */
+  public static <T> ListCell<T> wrappingListCell() {
+    ListCell<T> cell = new ListCell<>() {
+      @Override
+      protected void updateItem(T item, boolean empty) {
+        super.updateItem(item, empty);
+        setText(empty || item == null ? null : item.toString());
+      }
+    };
+    cell.setWrapText(true);
+    cell.setPrefWidth(0); // the list's width, not the longest line, sets the cell's width
+    remeasureOnNewFont(cell, cell::getListView);
+    return cell;
+  }
+
+  private static final Object ROW_FONT = new Object();
+
+  /**
+   * A list keeps each row's height once measured; when the text size changes (Ctrl+=),
+   * wrapped rows need another height: the rows are measured again, once per new size.
+   */
+  public static void remeasureOnNewFont(Labeled cell, java.util.function.Supplier<? extends javafx.scene.control.Control> owner) {
+    cell.fontProperty().addListener((o, a, font) -> {
+      javafx.scene.control.Control c = owner.get();
+      if (c == null || font == null || Double.valueOf(font.getSize()).equals(c.getProperties().get(ROW_FONT))) {
+        return;
+      }
+      c.getProperties().put(ROW_FONT, font.getSize());
+      if (c instanceof javafx.scene.control.ListView<?> l) {
+        l.refresh();
+      }
+    });
+  }
+
 }

@@ -47,6 +47,7 @@ public final class DesignView extends BorderPane {
     // follows a save as a new plane: the editor then edits that plane
     title.textProperty().bind(javafx.beans.binding.Bindings.concat("Design: ", vm.titleProperty()));
     title.getStyleClass().add("screen-title");
+    Widgets.wrap(title);
     Label dirty = new Label("unsaved changes");
     dirty.getStyleClass().add("error-text");
     dirty.visibleProperty().bind(vm.dirtyProperty());
@@ -114,7 +115,7 @@ public final class DesignView extends BorderPane {
     TextField heights = new TextField();
     heights.textProperty().bindBidirectional(vm.heightsProperty());
     heights.setId("design-heights");
-    ChoiceBox<Support> support = new ChoiceBox<>();
+    ChoiceBox<Support> support = new org.bracewalk.ui.common.WrappingChoiceBox<>();
     support.getItems().addAll(Support.values());
     support.setConverter(new StringConverter<>() {
       @Override
@@ -128,21 +129,25 @@ public final class DesignView extends BorderPane {
       }
     });
     support.valueProperty().bindBidirectional(vm.supportProperty());
-    Button apply = new Button("Apply grid (Enter)");
+    Button apply = Widgets.wrap(new Button("Apply grid (Enter)"));
     apply.setOnAction(e -> vm.applyGrid());
     GridPane grid = new GridPane();
     grid.setHgap(8);
     grid.setVgap(6);
-    grid.addRow(0, Widgets.mnemonic("_Lifts", lifts), lifts, Widgets.mnemonic("B_ays", bays), bays);
-    grid.add(Widgets.mnemonic("_Widths m", widths), 0, 1);
-    grid.add(widths, 1, 1, 3, 1);
-    grid.add(Widgets.mnemonic("_Heights m", heights), 0, 2);
-    grid.add(heights, 1, 2, 3, 1);
-    grid.add(Widgets.mnemonic("Su_pport", support), 0, 3);
-    grid.add(support, 1, 3, 3, 1);
+    // a field a row: at large text two spinners and their names side by side are wider than the panel
+    grid.addRow(0, Widgets.mnemonic("_Lifts", lifts), lifts);
+    grid.addRow(1, Widgets.mnemonic("B_ays", bays), bays);
+    grid.add(Widgets.mnemonic("_Widths m", widths), 0, 2);
+    grid.add(widths, 1, 2);
+    grid.add(Widgets.mnemonic("_Heights m", heights), 0, 3);
+    grid.add(heights, 1, 3);
+    grid.add(Widgets.mnemonic("Su_pport", support), 0, 4);
+    grid.add(support, 1, 4);
+    support.setMaxWidth(Double.MAX_VALUE);
+    GridPane.setHgrow(support, Priority.ALWAYS);
     // what the plane is: its keep-off zone depends on it (an upright frame's takes in the bays
     // beside it); fixed for a stored plane, chosen for a new plane saved from a changed grid
-    ChoiceBox<PlaneRole> role = new ChoiceBox<>();
+    ChoiceBox<PlaneRole> role = new org.bracewalk.ui.common.WrappingChoiceBox<>();
     role.setId("design-role");
     role.getItems().addAll(PlaneRole.values());
     role.setConverter(new StringConverter<>() {
@@ -157,21 +162,26 @@ public final class DesignView extends BorderPane {
       }
     });
     role.valueProperty().bindBidirectional(vm.roleProperty());
-    grid.add(Widgets.mnemonic("R_ole", role), 0, 4);
-    grid.add(role, 1, 4, 3, 1);
+    grid.add(Widgets.mnemonic("R_ole", role), 0, 5);
+    grid.add(role, 1, 5);
+    role.setMaxWidth(Double.MAX_VALUE);
+    javafx.scene.layout.ColumnConstraints fields = new javafx.scene.layout.ColumnConstraints();
+    fields.setHgrow(Priority.ALWAYS);
+    fields.setMinWidth(60);
+    grid.getColumnConstraints().addAll(new javafx.scene.layout.ColumnConstraints(), fields);
     lifts.setPrefWidth(90);
     bays.setPrefWidth(90);
     VBox gridBox = Widgets.box("Grid", grid,
         Widgets.hint("Widths left to right, heights bottom lift first, in metres; one value fills all."), apply);
 
-    HBox braceRow = Widgets.row(6,
+    javafx.scene.layout.FlowPane braceRow = Widgets.flow(6,
         brace("/  rising", Diagonal.RISING), brace("\\  falling", Diagonal.FALLING),
         brace("X  cross", Diagonal.BOTH));
-    Button none = new Button("none (.)");
+    Button none = Widgets.wrap(new Button("none (.)"));
     none.setOnAction(e -> vm.setBrace(null));
-    Button opening = new Button("opening (O)");
+    Button opening = Widgets.wrap(new Button("opening (O)"));
     opening.setOnAction(e -> vm.toggleOpening());
-    ToggleButton kind = new ToggleButton("tension-only (T)");
+    ToggleButton kind = Widgets.wrap(new ToggleButton("tension-only (T)"));
     kind.setOnAction(e -> vm.toggleKind());
     vm.kindProperty().addListener((o, a, b) -> kind.setSelected(b == MemberKind.TENSION_ONLY));
     Button member = new Button("leave out / put back the selected side (Space)");
@@ -181,8 +191,8 @@ public final class DesignView extends BorderPane {
       canvas.requestFocus();
     });
     member.disableProperty().bind(vm.sideProperty().isNull());
-    member.setWrapText(true);
-    VBox braceBox = Widgets.box("Current panel", braceRow, Widgets.row(6, none, opening, kind), member,
+    Widgets.wrap(member);
+    VBox braceBox = Widgets.box("Current panel", braceRow, Widgets.flow(6, none, opening, kind), member,
         Widgets.hint("Shift+arrow selects the ledger above or below, the standard left or right; Esc the panel again."));
 
     Spinner<Integer> step = new Spinner<>(1, 50, vm.fillStepProperty().get());
@@ -200,13 +210,13 @@ public final class DesignView extends BorderPane {
     Button clear = new Button("clear all braces");
     clear.setOnAction(e -> vm.clearBraces());
     VBox fillBox = Widgets.box("Fill",
-        Widgets.row(8, new Label("k ="), step, new Label("from bay"), first),
+        Widgets.flow(8, Widgets.row(8, new Label("k ="), step), Widgets.row(8, new Label("from bay"), first)),
         everyK, zig, all, clear);
     for (Node n : List.of(everyK, zig, all, clear)) {
-      ((Button) n).setMaxWidth(Double.MAX_VALUE);
+      Widgets.wrap((Button) n).setMaxWidth(Double.MAX_VALUE);
     }
 
-    CheckBox suggest = new CheckBox("show the braces that would make it rigid");
+    CheckBox suggest = Widgets.wrap(new CheckBox("show the braces that would make it rigid"));
     suggest.selectedProperty().bindBidirectional(vm.showSuggestionProperty());
     TextField author = new TextField();
     author.setPromptText("author of this revision");
@@ -214,7 +224,7 @@ public final class DesignView extends BorderPane {
     TextField note = new TextField();
     note.setPromptText("what changed, who approved it");
     note.textProperty().bindBidirectional(vm.noteProperty());
-    Button save = new Button("Save design (Ctrl+S)");
+    Button save = Widgets.wrap(new Button("Save design (Ctrl+S)"));
     save.setId("design-save");
     save.setOnAction(e -> vm.save());
     VBox saveBox = Widgets.box("Save as a new revision", suggest, author, note, save);
@@ -225,7 +235,7 @@ public final class DesignView extends BorderPane {
   }
 
   private ToggleButton brace(String text, Diagonal d) {
-    ToggleButton b = new ToggleButton(text);
+    ToggleButton b = Widgets.wrap(new ToggleButton(text));
     b.setOnAction(e -> {
       vm.setBrace(d);
       b.setSelected(false);

@@ -30,7 +30,7 @@ public final class FindingsView extends BorderPane {
     setId("findings-screen");
     Label title = Widgets.text(vm.titleProperty(), "screen-title");
     title.setMaxWidth(Label.USE_PREF_SIZE);
-    ChoiceBox<FindingsViewModel.PlaneChoice> planes = new ChoiceBox<>(vm.planes());
+    ChoiceBox<FindingsViewModel.PlaneChoice> planes = new org.bracewalk.ui.common.WrappingChoiceBox<>(vm.planes());
     Runnable current = () -> {
       for (FindingsViewModel.PlaneChoice c : vm.planes()) {
         if (c.planeId() == vm.planeId()) {
@@ -47,7 +47,14 @@ public final class FindingsView extends BorderPane {
       }
     });
     planes.setId("findings-planes");
-    setTop(Widgets.row(12, title, Widgets.grow(), new Label("Plane (P):"), planes));
+    Label planeLabel = new Label("Plane (P):");
+    planeLabel.setMinWidth(Label.USE_PREF_SIZE);
+    planes.setMaxWidth(Double.MAX_VALUE);
+    javafx.scene.layout.HBox.setHgrow(planes, javafx.scene.layout.Priority.ALWAYS);
+    javafx.scene.layout.HBox chooser = Widgets.row(12, planeLabel, planes);
+    chooser.setAlignment(javafx.geometry.Pos.CENTER_RIGHT);
+    // the title and the plane side by side where both fit, else the plane below the title
+    setTop(new org.bracewalk.ui.common.LineOrStack(12, title, chooser));
     BorderPane.setMargin(getTop(), new Insets(0, 0, 8, 0));
 
     canvas.setId("findings-canvas");
@@ -157,7 +164,7 @@ public final class FindingsView extends BorderPane {
   }
 
   private static Button wide(String text) {
-    Button b = new Button(text);
+    Button b = Widgets.wideButton(text);
     b.setMaxWidth(Double.MAX_VALUE);
     return b;
   }

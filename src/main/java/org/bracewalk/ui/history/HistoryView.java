@@ -42,6 +42,7 @@ public final class HistoryView extends BorderPane {
     list.setId("history-list");
     list.setItems(vm.entries());
     list.setPrefHeight(260);
+    list.setCellFactory(l -> Widgets.wrappingListCell()); // an entry's two lines wrap at large text
     list.getSelectionModel().select(vm.chosenProperty().get());
     list.getSelectionModel().selectedIndexProperty().addListener((o, a, b) -> {
       if (b.intValue() >= 0) {

@@ -30,7 +30,20 @@ import org.bracewalk.ui.common.Widgets;
 /** The sites overview screen. Only binds to its view model. */
 public final class SitesView extends BorderPane {
   private final SitesViewModel vm;
-  private final TableView<OverviewRow> table = new TableView<>();
+  /** The columns are to be fitted to their words again before the table's next layout. */
+  private boolean refit = true;
+  private final TableView<OverviewRow> table = new TableView<>() {
+    @Override
+    protected void layoutChildren() {
+      // fitted here, not where a font or width changes (that is in the middle of styling the
+      // cells: rows rebuilt then missed their selected look)
+      if (refit) {
+        refit = false;
+        fitColumns();
+      }
+      super.layoutChildren();
+    }
+  };
   private final TextField inspector = new TextField();
   /** A plane to select once the rows are read (0: none). */
   private long pendingPlane;
@@ -41,9 +54,12 @@ public final class SitesView extends BorderPane {
     this.vm = vm;
     getStyleClass().add("screen");
     setId("sites-screen");
-    Label title = new Label("Sites, structures and planes");
+    Label title = Widgets.text("Sites, structures and planes");
     title.getStyleClass().add("screen-title");
-    setTop(Widgets.row(12, title, Widgets.grow(), Widgets.hint("Database: " + vm.databaseLocation())));
+    Label database = Widgets.hint("Database: " + vm.databaseLocation());
+    database.setMaxWidth(Label.USE_PREF_SIZE);
+    // the title and the database side by side where both fit, else the database below
+    setTop(new org.bracewalk.ui.common.LineOrStack(12, title, database));
 
     table.setId("sites-table");
     table.setItems(vm.rows());
@@ -61,14 +77,24 @@ public final class SitesView extends BorderPane {
         focusTable();
       }
     });
-    table.getColumns().add(column("Name", 210, this::name));
-    table.getColumns().add(column("What", 120, r -> r.level() == OverviewRow.Level.SITE ? "" : r.kind()));
-    table.getColumns().add(column("Latest verdict", 290, OverviewRow::verdictText));
-    table.getColumns().add(column("Last inspected", 150, r -> r.level() == OverviewRow.Level.STRUCTURE ? r.lastInspected() : ""));
+    table.getColumns().add(column("Name", this::name));
+    table.getColumns().add(column("What", r -> r.level() == OverviewRow.Level.SITE ? "" : r.kind()));
+    table.getColumns().add(verdictColumn());
+    table.getColumns().add(column("Last inspected", r -> r.level() == OverviewRow.Level.STRUCTURE ? r.lastInspected() : ""));
     TableColumn<OverviewRow, OverviewRow> due = new TableColumn<>("Next inspection due");
-    due.setPrefWidth(280);
+    due.setSortable(false);
     due.setCellValueFactory(c -> new javafx.beans.property.SimpleObjectProperty<>(c.getValue()));
     due.setCellFactory(c -> new TableCell<>() {
+      {
+        setWrapText(true);
+        fontProperty().addListener((o, a, b) -> fontChanged(b));
+      }
+
+      @Override
+      protected double computePrefHeight(double width) {
+        return super.computePrefHeight(width < 0 && getTableColumn() != null ? getTableColumn().getWidth() : width);
+      }
+
       @Override
       protected void updateItem(OverviewRow r, boolean emptyCell) {
         super.updateItem(r, emptyCell);
@@ -77,7 +103,7 @@ public final class SitesView extends BorderPane {
           setText(null);
           return;
         }
-        setText(r.due().words() + " \u00b7 " + r.nextDue());
+        setText(dueText(r));
         if (r.due() == OverviewRow.Due.OVERDUE || r.due() == OverviewRow.Due.NEVER_INSPECTED
             || r.due() == OverviewRow.Due.LOST_RIGIDITY) {
           getStyleClass().add("overdue");
@@ -85,8 +111,13 @@ public final class SitesView extends BorderPane {
       }
     });
     table.getColumns().add(due);
-    table.getColumns().add(column("Interval", 90, OverviewRow::interval));
-    table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY);
+    table.getColumns().add(column("Interval", OverviewRow::interval));
+    // every column as wide as its widest entry, the room left shared out; where the table is
+    // narrower than that, the widest columns give way and their words wrap (the rows grow); only
+    // where even that does not fit (large text, a small window) the table scrolls sideways
+    table.setColumnResizePolicy(TableView.UNCONSTRAINED_RESIZE_POLICY);
+    table.widthProperty().addListener((o, a, b) -> refitColumns());
+    vm.rows().addListener((javafx.collections.ListChangeListener<OverviewRow>) c -> refitColumns());
     table.setRowFactory(t -> new TableRow<>() {
       @Override
       protected void updateItem(OverviewRow r, boolean emptyRow) {
@@ -102,7 +133,7 @@ public final class SitesView extends BorderPane {
       }
     });
 
-    javafx.scene.layout.HBox actions = side();
+    javafx.scene.layout.Region actions = side();
     actions.visibleProperty().bind(vm.emptyProperty().not());
     actions.managedProperty().bind(actions.visibleProperty());
     VBox.setVgrow(table, Priority.ALWAYS);
@@ -127,13 +158,143 @@ public final class SitesView extends BorderPane {
     };
   }
 
-  private static TableColumn<OverviewRow, String> column(
-      String title, double width, java.util.function.Function<OverviewRow, String> value) {
+  private TableColumn<OverviewRow, String> column(
+      String title, java.util.function.Function<OverviewRow, String> value) {
     TableColumn<OverviewRow, String> c = new TableColumn<>(title);
-    c.setPrefWidth(width);
     c.setSortable(false);
+    c.setUserData(value);
     c.setCellValueFactory(d -> new ReadOnlyStringWrapper(value.apply(d.getValue())));
+    c.setCellFactory(col -> {
+      TableCell<OverviewRow, String> cell = new TableCell<>() {
+        @Override
+        protected void updateItem(String item, boolean empty) {
+          super.updateItem(item, empty);
+          setText(empty ? null : item);
+        }
+      };
+      // the text size changed (Ctrl+=): the columns are measured again
+      cell.fontProperty().addListener((o, a, b) -> fontChanged(b));
+      return cell;
+    });
     return c;
+  }
+
+  /**
+   * The verdict column: the one with long words, the one that gives way when the table is narrower
+   * than its columns. Its words wrap within the column (a text wrapped to the column's width, in the
+   * cell's font and colour, so a selected row shows it in the selection's text colour) and the row
+   * grows to hold them.
+   */
+  private TableColumn<OverviewRow, String> verdictColumn() {
+    TableColumn<OverviewRow, String> c = column("Latest verdict", OverviewRow::verdictText);
+    c.setCellFactory(col -> {
+      javafx.scene.text.Text words = new javafx.scene.text.Text();
+      TableCell<OverviewRow, String> cell = new TableCell<>() {
+        @Override
+        protected void updateItem(String item, boolean empty) {
+          super.updateItem(item, empty);
+          words.setText(empty || item == null ? "" : item);
+          setGraphic(empty ? null : words);
+        }
+      };
+      words.fontProperty().bind(cell.fontProperty());
+      words.fillProperty().bind(cell.textFillProperty());
+      words.wrappingWidthProperty().bind(javafx.beans.binding.Bindings.createDoubleBinding(
+          () -> Math.max(20, c.getWidth() - cell.snappedLeftInset() - cell.snappedRightInset() - 2),
+          c.widthProperty(), cell.paddingProperty()));
+      cell.fontProperty().addListener((o, a, b) -> fontChanged(b));
+      return cell;
+    });
+    verdict = c;
+    return c;
+  }
+
+  private TableColumn<OverviewRow, String> verdict;
+
+  private static String dueText(OverviewRow r) {
+    return r.level() != OverviewRow.Level.STRUCTURE ? "" : r.due().words() + " \u00b7 " + r.nextDue();
+  }
+
+  /** The font a cell of the table shows its text in now (the table's own, after the stylesheet). */
+  private javafx.scene.text.Font cellFont() {
+    Node cell = table.lookup(".table-cell");
+    return cell instanceof javafx.scene.control.Labeled l ? l.getFont() : javafx.scene.text.Font.getDefault();
+  }
+
+  /**
+   * Makes every column as wide as its widest entry or heading (site and structure rows in bold), and
+   * shares what is left of the table's width out among them.
+   */
+  @SuppressWarnings("unchecked")
+  private void fitColumns() {
+    javafx.scene.text.Font font = cellFont();
+    javafx.scene.text.Font bold = javafx.scene.text.Font.font(font.getFamily(), javafx.scene.text.FontWeight.BOLD, font.getSize());
+    double pad = font.getSize() * 0.8 + 6; // a cell's padding and a little air
+    double[] widths = new double[table.getColumns().size()];
+    double sum = 0;
+    for (int i = 0; i < widths.length; i++) {
+      TableColumn<OverviewRow, ?> c = table.getColumns().get(i);
+      double w = textWidth(c.getText(), bold);
+      for (OverviewRow r : vm.rows()) {
+        String t = c.getUserData() instanceof java.util.function.Function<?, ?> f
+            ? ((java.util.function.Function<OverviewRow, String>) f).apply(r) : dueText(r);
+        w = Math.max(w, textWidth(t, r.level() != OverviewRow.Level.PLANE ? bold : font));
+      }
+      widths[i] = Math.ceil(w + pad);
+      sum += widths[i];
+    }
+    double room = table.getWidth() - table.snappedLeftInset() - table.snappedRightInset() - 20; // a scroll bar
+    double[] shown = new double[widths.length];
+    if (sum <= room) {
+      for (int i = 0; i < widths.length; i++) {
+        shown[i] = widths[i] + (room - sum) * widths[i] / sum;
+      }
+    } else {
+      // the verdict column gives way (its words wrap), never below its heading or eight letters;
+      // the others keep their words on one line, and the table scrolls sideways if it must
+      int v = table.getColumns().indexOf(verdict);
+      for (int i = 0; i < widths.length; i++) {
+        shown[i] = widths[i];
+      }
+      double others = sum - widths[v];
+      double heading = Math.ceil(textWidth(verdict.getText(), bold) + pad);
+      shown[v] = Math.min(widths[v], Math.max(Math.max(heading, font.getSize() * 8), room - others));
+    }
+    boolean changed = false;
+    for (int i = 0; i < widths.length; i++) {
+      TableColumn<OverviewRow, ?> c = table.getColumns().get(i);
+      if (Math.abs(c.getPrefWidth() - shown[i]) >= 1) {
+        c.setPrefWidth(shown[i]);
+        changed = true;
+      }
+    }
+    if (changed) {
+      table.refresh(); // the wrapped rows take their new heights
+    }
+  }
+
+  private double fittedFont;
+
+  private void refitColumns() {
+    refit = true;
+    table.requestLayout();
+  }
+
+  /** A cell's font changed: the columns are fitted again when the size is new. */
+  private void fontChanged(javafx.scene.text.Font font) {
+    if (font != null && font.getSize() != fittedFont) {
+      fittedFont = font.getSize();
+      refitColumns();
+    }
+  }
+
+  private static double textWidth(String s, javafx.scene.text.Font font) {
+    if (s == null || s.isEmpty()) {
+      return 0;
+    }
+    javafx.scene.text.Text t = new javafx.scene.text.Text(s);
+    t.setFont(font);
+    return t.getLayoutBounds().getWidth();
   }
 
   private Node emptyOffer() {
@@ -162,7 +323,7 @@ public final class SitesView extends BorderPane {
     return box;
   }
 
-  private javafx.scene.layout.HBox side() {
+  private javafx.scene.layout.Region side() {
     Label sel = Widgets.text(vm.selectionTextProperty());
     sel.setId("sites-selection");
     Button walk = wide("Walk-round (Enter, Ctrl+3)", () -> vm.open(ScreenId.WALK));
@@ -177,6 +338,7 @@ public final class SitesView extends BorderPane {
     interval.setId("change-interval");
     Button retire = wide("Retire plane\u2026", vm::retirePlane);
     retire.setId("retire-plane");
+    Widgets.wrap(sel);
     buttons.addRow(0, walk, design);
     buttons.addRow(1, findings, history);
     buttons.add(interval, 0, 2, 2, 1);
@@ -246,23 +408,48 @@ public final class SitesView extends BorderPane {
         Widgets.hint("All fields go on the report and cannot be changed later (storage safety: racking only)."
             + " Start shows every value for a last look before the inspection begins; every mark you then"
             + " make is saved the moment you make it."));
-    form.getColumnConstraints().addAll(new javafx.scene.layout.ColumnConstraints(),
-        new javafx.scene.layout.ColumnConstraints(120, 200, Double.MAX_VALUE),
-        new javafx.scene.layout.ColumnConstraints(),
-        new javafx.scene.layout.ColumnConstraints(120, 200, Double.MAX_VALUE));
-    javafx.scene.layout.HBox.setHgrow(open, Priority.ALWAYS);
-    javafx.scene.layout.HBox.setHgrow(startBox, Priority.ALWAYS);
+    formColumns(form, fields, Double.MAX_VALUE);
     open.setPrefWidth(420);
     startBox.setPrefWidth(560);
-    javafx.scene.layout.HBox side = new javafx.scene.layout.HBox(10, open, startBox);
+    // two fields a row where the box is wide enough for two names and two fields, else one a row
+    // (the order of the children, and so of Tab, stays)
+    startBox.widthProperty().addListener((o, a, w) -> formColumns(form, fields,
+        w.doubleValue() - startBox.snappedLeftInset() - startBox.snappedRightInset()));
+    // the two boxes side by side where both fit, else the new inspection's below
+    org.bracewalk.ui.common.LineOrStack side = new org.bracewalk.ui.common.LineOrStack(10, open, startBox);
     side.setMaxHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
-    side.setMinHeight(javafx.scene.layout.Region.USE_PREF_SIZE);
     return side;
   }
 
+  /** The start form's fields two a row when {@code width} holds two names and two fields, else one a row. */
+  private static void formColumns(GridPane form, Node[][] fields, double width) {
+    double names = 0;
+    for (Node[] f : fields) {
+      names = Math.max(names, f[0].prefWidth(-1));
+    }
+    boolean two = width >= 2 * names + 2 * 120 + 3 * form.getHgap();
+    if (form.getColumnConstraints().size() != (two ? 4 : 2)) {
+      form.getColumnConstraints().setAll(new javafx.scene.layout.ColumnConstraints(),
+          new javafx.scene.layout.ColumnConstraints(120, 200, Double.MAX_VALUE));
+      if (two) {
+        form.getColumnConstraints().addAll(new javafx.scene.layout.ColumnConstraints(),
+            new javafx.scene.layout.ColumnConstraints(120, 200, Double.MAX_VALUE));
+      }
+    }
+    for (int i = 0; i < fields.length; i++) {
+      int col = two ? (i % 2) * 2 : 0;
+      int row = two ? i / 2 : i;
+      Integer at = GridPane.getColumnIndex(fields[i][0]);
+      Integer on = GridPane.getRowIndex(fields[i][0]);
+      if (at == null || on == null || at != col || on != row) {
+        GridPane.setConstraints(fields[i][0], col, row);
+        GridPane.setConstraints(fields[i][1], col + 1, row);
+      }
+    }
+  }
+
   private static Button wide(String text, Runnable action) {
-    Button b = new Button(text);
-    b.setMaxWidth(Double.MAX_VALUE);
+    Button b = Widgets.wideButton(text);
     b.setOnAction(e -> action.run());
     return b;
   }

@@ -9,9 +9,11 @@ import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
-import javafx.scene.layout.Region;
 import org.bracewalk.app.PlaneProgress;
 import org.bracewalk.core.model.Inspection;
+import org.bracewalk.ui.common.LineOrStack;
+import org.bracewalk.ui.common.Widgets;
+import org.bracewalk.ui.common.WrappingChoiceBox;
 
 /**
  * The bar above the walk-round: the inspection, and the chooser of its planes (Ctrl+P), each with
@@ -20,7 +22,7 @@ import org.bracewalk.core.model.Inspection;
  */
 public final class PlaneChooser extends HBox {
   private final Label who = new Label();
-  private final ChoiceBox<PlaneProgress> choice = new ChoiceBox<>();
+  private final ChoiceBox<PlaneProgress> choice = new WrappingChoiceBox<>();
 
   /**
    * @param inspection the inspection walked
@@ -69,12 +71,14 @@ public final class PlaneChooser extends HBox {
       }
     });
     choice.setFocusTraversable(false);
-    choice.setPrefWidth(330); // the list shows each line in full; the box the plane's start
-    choice.setMinWidth(200);
+    // the list shows each line in full; the box shows the chosen line whole, on two lines (or
+    // more) where the bar is narrower than the line
+    choice.setPrefWidth(330);
+    choice.setMaxWidth(Double.MAX_VALUE);
+    HBox.setHgrow(choice, Priority.ALWAYS);
     who.setText(inspectionWords(inspection));
     who.setId("walk-inspection");
-    Region grow = new Region();
-    HBox.setHgrow(grow, Priority.ALWAYS);
+    Widgets.wrap(who);
     long left = planes.stream().filter(p -> p.plane().id() != current && p.notLookedAt() > 0).count();
     Label others = new Label(left == 0 ? "" : left == 1 ? "+1 plane to walk" : "+" + left + " planes to walk");
     others.setId("plane-others");
@@ -82,8 +86,12 @@ public final class PlaneChooser extends HBox {
     others.setStyle("-fx-font-weight: bold;");
     Label plane = new Label("Plane (Ctrl+P):");
     plane.setMinWidth(Label.USE_PREF_SIZE);
-    who.setMinWidth(80);
-    getChildren().addAll(who, grow, others, plane, choice);
+    HBox chooser = new HBox(10, others, plane, choice);
+    chooser.setAlignment(Pos.CENTER_RIGHT);
+    // the inspection and the chooser side by side where both fit, else the chooser below
+    LineOrStack bar = new LineOrStack(10, who, chooser);
+    HBox.setHgrow(bar, Priority.ALWAYS);
+    getChildren().add(bar);
     setAlignment(Pos.CENTER_LEFT);
     setPadding(new Insets(12, 12, 0, 12));
   }

@@ -103,6 +103,7 @@ public final class WalkView extends BorderPane {
     progress.setWrapText(false);
     ProgressBar bar = new ProgressBar();
     bar.setPrefWidth(220);
+    bar.setMinWidth(40); // the words keep their width, the bar gives way
     bar.progressProperty().bind(Bindings.createDoubleBinding(
         () -> vm.doneProperty().get() / (double) vm.total(), vm.doneProperty()));
     HBox top = Widgets.row(14, title, progress, bar);
@@ -118,6 +119,7 @@ public final class WalkView extends BorderPane {
     banner.setAlignment(Pos.CENTER_LEFT);
     banner.visibleProperty().bind(vm.alarmProperty().isNotEmpty());
     banner.managedProperty().bind(banner.visibleProperty());
+    banner.setMinHeight(Region.USE_PREF_SIZE);
     alarm.setAccessibleText("alarm");
 
     canvas.setId("walk-canvas");
@@ -160,7 +162,10 @@ public final class WalkView extends BorderPane {
     strip.prefWrapLengthProperty().bind(canvas.widthProperty());
     strip.setVisible(false);
     strip.managedProperty().bind(strip.visibleProperty());
-    VBox centre = new VBox(8, banner, canvas, strip, cursorText, key);
+    // the banner stands at the head of the side column, above the verdict it explains: the drawing
+    // keeps its size when it appears (above the drawing it took the drawing's room; over it, it
+    // would hide the top lifts)
+    VBox centre = new VBox(8, canvas, strip, cursorText, key);
     setCenter(centre);
 
     // The verdict stands above the scrolled controls, outside the scroll pane: its words change
@@ -188,12 +193,13 @@ public final class WalkView extends BorderPane {
     verdictPane.setFocusTraversable(false);
     verdictPane.getStyleClass().add("verdict-pane");
     // the verdict takes the height it needs, as long as the controls keep their least
-    VBox right = new VBox(10, readOnly, verdictPane, side) {
+    VBox right = new VBox(10, readOnly, banner, verdictPane, side) {
       @Override
       protected void layoutChildren() {
         double width = getWidth() - snappedLeftInset() - snappedRightInset();
         double wanted = verdict.prefHeight(width) + verdictPane.snappedTopInset() + verdictPane.snappedBottomInset();
-        double others = readOnly.isManaged() ? readOnly.prefHeight(width) + getSpacing() : 0;
+        double others = (readOnly.isManaged() ? readOnly.prefHeight(width) + getSpacing() : 0)
+            + (banner.isManaged() ? banner.prefHeight(width) + getSpacing() : 0);
         double room = getHeight() - snappedTopInset() - snappedBottomInset() - others - getSpacing()
             - side.getMinHeight();
         verdictPane.setPrefHeight(Math.max(verdictPane.getMinHeight(), Math.min(wanted, room)));
@@ -370,7 +376,7 @@ public final class WalkView extends BorderPane {
       if (s == PanelState.MISSING || s == PanelState.DAMAGED_INEFFECTIVE) {
         b.getStyleClass().add("alarm");
       }
-      b.setWrapText(true);
+      Widgets.wrap(b);
       b.setId("mark-" + s.label());
       b.setOnAction(e -> {
         vm.mark(s);
@@ -486,13 +492,13 @@ public final class WalkView extends BorderPane {
     detailBox.managedProperty().bind(detailBox.visibleProperty());
     fillDetails();
 
-    Button undo = new Button("Undo last mark (Backspace)");
+    Button undo = Widgets.wrap(new Button("Undo last mark (Backspace)"));
     undo.setId("walk-undo");
     undo.disableProperty().bind(vm.canUndoProperty().not().or(vm.readOnlyProperty()));
     undo.setOnAction(e -> vm.undo());
     undo.setFocusTraversable(false);
 
-    ChoiceBox<WalkOrder> order = new ChoiceBox<>();
+    ChoiceBox<WalkOrder> order = new org.bracewalk.ui.common.WrappingChoiceBox<>();
     order.getItems().addAll(WalkOrder.values());
     order.valueProperty().bindBidirectional(vm.orderProperty());
     order.setFocusTraversable(false);
@@ -501,7 +507,7 @@ public final class WalkView extends BorderPane {
     frameInWalk.setId("walk-frame-in-walk");
     frameInWalk.selectedProperty().bindBidirectional(vm.frameInWalkProperty());
     frameInWalk.setFocusTraversable(false);
-    frameInWalk.setWrapText(true);
+    Widgets.wrap(frameInWalk);
     Button rest = new Button("Record the rest as designed\u2026 (A)");
     rest.setId("walk-rest");
     rest.setOnAction(e -> {
@@ -509,7 +515,7 @@ public final class WalkView extends BorderPane {
       canvas.requestFocus();
     });
     rest.setFocusTraversable(false);
-    rest.setWrapText(true);
+    Widgets.wrap(rest);
     rest.disableProperty().bind(vm.readOnlyProperty());
     VBox orderBox = Widgets.box("Walk order (O changes it)", order, frameInWalk, rest,
         Widgets.hint("A routine walk visits the braced panels; A then records the panels not yet looked at"

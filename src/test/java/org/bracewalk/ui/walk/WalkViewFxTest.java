@@ -66,6 +66,28 @@ class WalkViewFxTest {
     assertThat(robot.lookup("#walk-alarm-banner").query().isVisible()).isFalse();
   }
 
+  /**
+   * The drawing keeps its size when the alarm banner appears (issue 12, item 7): the plane's
+   * canvas is as wide and as tall before the plane loses rigidity as after, banner shown.
+   */
+  @Test
+  void theDrawingKeepsItsSizeWhenTheAlarmBannerAppears(FxRobot robot) {
+    javafx.scene.Node canvas = robot.lookup("#walk-canvas").query();
+    double width = canvas.getLayoutBounds().getWidth();
+    double height = canvas.getLayoutBounds().getHeight();
+    assertThat(robot.lookup("#walk-alarm-banner").query().isVisible()).isFalse();
+    robot.type(KeyCode.S); // 1,1 sound
+    robot.type(KeyCode.S); // 2,1 sound (no design brace)
+    robot.type(KeyCode.M); // 2,2 missing: lift 2 has no brace left, the plane has lost rigidity
+    WaitForAsyncUtils.waitForFxEvents();
+    assertThat(vm.verdict().kind()).isEqualTo(VerdictKind.LOST);
+    assertThat(robot.lookup("#walk-alarm-banner").query().isVisible()).isTrue();
+    assertThat(canvas.getLayoutBounds().getWidth()).as("the drawing's width, banner shown").isEqualTo(width);
+    assertThat(canvas.getLayoutBounds().getHeight()).as("the drawing's height, banner shown").isEqualTo(height);
+    assertThat(width).isGreaterThan(100);
+    assertThat(height).isGreaterThan(100);
+  }
+
   @Test
   void aDigitRecordsTheSameStateAsItsLetter(FxRobot robot) {
     robot.type(KeyCode.DIGIT4);
