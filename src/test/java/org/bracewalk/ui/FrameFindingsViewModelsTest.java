@@ -108,7 +108,7 @@ class FrameFindingsViewModelsTest {
     assertThat(vm.repairLines()).hasSize(r.analysis().repair().minimum());
     assertThat(vm.findingLines())
         .anyMatch(s -> s.startsWith("horizontal at level 1, bay 1: missing, torn \u2014 bottom horizontal"))
-        .anyMatch(s -> s.startsWith("upright of lift 1 on line 0: damaged-ineffective, bent, bow 9.0"
+        .anyMatch(s -> s.startsWith("upright of lift 1 on line 0: damaged beyond use, bent, bow 9.0"
             + " mm over 1000 mm"));
     List<String> freedomWords = r.verdict().freedomWords(Set.of(FrameRef.ledger(1, 1),
         FrameRef.standard(1, 0)));
@@ -163,7 +163,7 @@ class FrameFindingsViewModelsTest {
     assertThat(joints(pic, FreedomKind.LOOSE_END)).contains(new Joint(1, 0));
     assertThat(vm.changes()).contains(
         "horizontal at level 1, bay 1: not recorded (as designed) \u2192 missing",
-        "upright of lift 1 on line 0: not recorded (as designed) \u2192 damaged-ineffective");
+        "upright of lift 1 on line 0: not recorded (as designed) \u2192 damaged beyond use");
     assertThat(vm.entries().get(1)).contains("(2 frame members)");
     vm.older();
     assertThat(vm.pictureProperty().get().changedMembers()).isEmpty();

@@ -241,7 +241,7 @@ public final class FindingsViewModel {
     for (RestoreFrameItem r : analysis.repair().restoreFrame()) {
       PanelState s = frameFound.get(r.member());
       restoreLines.add(Wording.frameMember(r.member(), terms) + ": "
-          + (s == null ? "not there" : s.label()) + " \u2014 "
+          + (s == null ? "not there" : org.bracewalk.ui.common.PanelLook.of(s).words()) + " \u2014 "
           + (r.neededForRigidity() ? "needed for rigidity" : "restores redundancy only")
           + (s != null && !s.inspected() ? " (not inspected yet: inspect first)" : ""));
     }
@@ -251,7 +251,7 @@ public final class FindingsViewModel {
     List<String> findingLines = new ArrayList<>();
     new TreeMap<>(result.latest()).forEach((p, o) -> {
       if (o.state() != PanelState.SOUND && o.state() != PanelState.NOT_INSPECTED) {
-        StringBuilder sb = new StringBuilder(p + ": " + o.state().label());
+        StringBuilder sb = new StringBuilder(p + ": " + org.bracewalk.ui.common.PanelLook.of(o.state()).words());
         if (o.memberFound() != null) {
           sb.append(" (member ").append(o.memberFound().token()).append(')');
         }
@@ -310,7 +310,7 @@ public final class FindingsViewModel {
 
   /** A frame finding as the found list words it: member, state, defect, bow, note. */
   private static String frameFindingLine(String member, Observation o) {
-    StringBuilder sb = new StringBuilder(member + ": " + o.state().label());
+    StringBuilder sb = new StringBuilder(member + ": " + org.bracewalk.ui.common.PanelLook.of(o.state()).words());
     if (o.defect() != null) {
       sb.append(", ").append(o.defect().label());
     }

@@ -159,14 +159,15 @@ public final class HistoryViewModel {
 
   /** A frame member's recorded state; not recorded means taken as designed. */
   private static String words(PanelState s) {
-    return s == null ? "not recorded (as designed)" : s.label();
+    return s == null ? "not recorded (as designed)"
+        : org.bracewalk.ui.common.PanelLook.of(s).words();
   }
 
   private static String words(PanelFinding f) {
     if (f == null || f.state() == PanelState.NOT_INSPECTED) {
       return "not inspected";
     }
-    return f.state().label() + (f.memberFound() != null ? " (" + f.memberFound().token() + ")" : "");
+    return org.bracewalk.ui.common.PanelLook.of(f.state()).words() + (f.memberFound() != null ? " (" + f.memberFound().token() + ")" : "");
   }
 
   public void older() {

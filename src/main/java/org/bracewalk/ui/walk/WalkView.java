@@ -133,7 +133,13 @@ public final class WalkView extends BorderPane {
     Legend legend = new Legend(Legend.Set_.WALK);
     // the key's sizes are remembered: the line above it changes with every mark. On a short
     // screen (a tablet) it starts folded, so the plane keeps the room; K or a click unfolds it.
-    key.setContent(new SteadyBox(0, legend));
+    // the key scrolls within at most a third of the column, so the drawing keeps the most room
+    javafx.scene.control.ScrollPane keyScroll =
+        new javafx.scene.control.ScrollPane(new SteadyBox(0, legend));
+    keyScroll.setFitToWidth(true);
+    keyScroll.setHbarPolicy(javafx.scene.control.ScrollPane.ScrollBarPolicy.NEVER);
+    keyScroll.setId("walk-key-scroll");
+    key.setContent(keyScroll);
     key.setId("walk-key");
     key.setAnimated(false);
     key.setFocusTraversable(false);
@@ -166,6 +172,7 @@ public final class WalkView extends BorderPane {
     // keeps its size when it appears (above the drawing it took the drawing's room; over it, it
     // would hide the top lifts)
     VBox centre = new VBox(8, canvas, strip, cursorText, key);
+    keyScroll.maxHeightProperty().bind(centre.heightProperty().divide(3));
     setCenter(centre);
 
     // The verdict stands above the scrolled controls, outside the scroll pane: its words change

@@ -89,7 +89,7 @@ class FindingsViewModelTest {
     assertThat(vm.repairLines()).singleElement().asString().startsWith("1.  lift 3, bay").contains("restores the design");
     assertThat(vm.restoreLines()).hasSize(3).allMatch(s -> s.startsWith("lift 3,"));
     assertThat(vm.restoreLines()).filteredOn(s -> s.contains("needed for rigidity")).hasSize(1);
-    assertThat(vm.findingLines()).anyMatch(s -> s.startsWith("lift 3, bay 6: damaged-ineffective"));
+    assertThat(vm.findingLines()).anyMatch(s -> s.startsWith("lift 3, bay 6: damaged beyond use"));
     assertThat(vm.planes()).extracting(FindingsViewModel.PlaneChoice::name).contains("north facade", "east end frame");
     // each with its progress and verdict where it is chosen (issue 12, item 5)
     assertThat(vm.planes()).extracting(Object::toString).anyMatch(t -> t.contains("east end frame \u2014 0 of 5 panels \u2014 "
