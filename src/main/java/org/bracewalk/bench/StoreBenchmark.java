@@ -15,7 +15,6 @@ import java.util.Objects;
 import java.util.function.LongSupplier;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.AppServicesFactory;
-import org.bracewalk.app.ImportedSite;
 import org.bracewalk.app.NewInspection;
 import org.bracewalk.app.NewObservation;
 import org.bracewalk.app.sitefile.SiteFile;
