@@ -7,6 +7,7 @@ import java.lang.management.ThreadMXBean;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Comparator;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import java.util.stream.Stream;
@@ -24,7 +25,11 @@ import picocli.CommandLine.Spec;
     description = {"Measure the store on this disk: recording one observation including its"
         + " commit (target: median under 5 ms), and importing a 10,000-panel site (target: under"
         + " 2 s). Works in new database files in --dir (default: a temporary folder, removed"
-        + " afterwards); your own database is not touched."})
+        + " afterwards); your own database is not touched.",
+        "With --server postgresql://HOST[:PORT]/DB: recording one observation on the team server"
+        + " (target: median under 10 ms), in a new open inspection of the database's first"
+        + " structure (the demo site when it is empty). A server's records are append-only: give"
+        + " it a database kept for benchmarks."})
 public final class BenchStoreCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
@@ -44,6 +49,11 @@ public final class BenchStoreCommand implements Callable<Integer> {
       description = "Imports to time, each into a new file (default ${DEFAULT-VALUE}).")
   int imports;
 
+  @Option(names = "--server", paramLabel = "postgresql://HOST[:PORT]/DB",
+      description = "Time recording on this team server's database instead of files (credentials"
+          + " as for --db: PGUSER, ~/.pgpass, PGPASSWORD).")
+  String server;
+
   private final CliContext context;
 
   public BenchStoreCommand(CliContext context) {
@@ -57,6 +67,9 @@ public final class BenchStoreCommand implements Callable<Integer> {
     if (records < 1 || panels < 1 || imports < 1) {
       err.println("error: --records, --panels and --imports must be at least 1");
       return CommandLine.ExitCode.USAGE;
+    }
+    if (server != null) {
+      return onServer(out, err);
     }
     boolean temporary = dir == null;
     try {
@@ -90,6 +103,27 @@ public final class BenchStoreCommand implements Callable<Integer> {
     } catch (IOException e) {
       err.println("error: cannot use the folder: " + e.getMessage());
       return CommandLine.ExitCode.USAGE;
+    } catch (UserInputException | StoreException e) {
+      err.println("error: " + e.getMessage());
+      return CommandLine.ExitCode.USAGE;
+    }
+  }
+
+  private int onServer(PrintWriter out, PrintWriter err) {
+    try {
+      double load = ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage();
+      ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+      List<List<Double>> r = new StoreBenchmark(context.services(), context.clock(),
+          System::nanoTime, threads::getCurrentThreadCpuTime).runOnServer(server, records);
+      out.println(String.format(Locale.ROOT,
+          "record one observation on the server incl. commit: median %.2f ms, 95th percentile"
+              + " %.2f ms, client CPU median %.2f ms (%d records; target: median under 10 ms)",
+          StoreBenchmark.median(r.get(0)), StoreBenchmark.percentile(r.get(0), 0.95),
+          StoreBenchmark.median(r.get(1)), r.get(0).size()));
+      out.println(String.format(Locale.ROOT,
+          "machine: %d cores, load average %.1f when started (the server's work is in the wall"
+              + " time only)", Runtime.getRuntime().availableProcessors(), load));
+      return 0;
     } catch (UserInputException | StoreException e) {
       err.println("error: " + e.getMessage());
       return CommandLine.ExitCode.USAGE;

@@ -132,24 +132,7 @@ public final class StoreBenchmark {
     List<Double> recordTimes = new ArrayList<>();
     List<Double> recordCpu = new ArrayList<>();
     try (AppServices s = factory.open(folder.resolve("bench-record.db"))) {
-      ImportedSite demo = s.demo().load();
-      long inspection = s.inspections().start(demo.structures().get(0).id(),
-          NewInspection.of("Bench", "", InspectionReason.ROUTINE)).id();
-      var planes = s.inspections().planesOf(inspection);
-      for (int i = 0; i < records + 10; i++) {
-        var plane = planes.get(i % planes.size());
-        PanelRef p = PanelRef.of(1 + i % plane.grid().lifts(), 1 + i % plane.grid().bays());
-        long c0 = cpuNanos.getAsLong();
-        long t0 = nanoTime.getAsLong();
-        s.inspections().recordObservation(inspection,
-            NewObservation.of(plane.id(), p, PanelState.SOUND, "bench"));
-        long t1 = nanoTime.getAsLong();
-        long c1 = cpuNanos.getAsLong();
-        if (i >= 10) { // the first few warm the code paths
-          recordTimes.add((t1 - t0) / 1e6);
-          recordCpu.add((c1 - c0) / 1e6);
-        }
-      }
+      record(s, s.demo().load().structures().get(0).id(), records, recordTimes, recordCpu);
     }
     String site = new SiteFileWriter().write(bigSite(panels));
     int actualPanels = (int) Math.max(1, Math.round(panels / 2500.0)) * 2500;
@@ -169,6 +152,48 @@ public final class StoreBenchmark {
       }
     }
     return new Result(recordTimes, recordCpu, importTimes, importCpu, actualPanels);
+  }
+
+  /**
+   * Records {@code records} observations one by one in a new open inspection on a team server's
+   * database, each in its own transaction, as the walk-round does when it works on the server. The
+   * first structure of the database is used; an empty database gets the demo site first. The
+   * records stay (a server's records are append-only): run it on a database kept for the purpose.
+   *
+   * @return each record's time in ms (wall, then the calling thread's CPU: the server's own work
+   *     is in the wall time only)
+   */
+  public List<List<Double>> runOnServer(String address, int records) {
+    List<Double> recordTimes = new ArrayList<>();
+    List<Double> recordCpu = new ArrayList<>();
+    try (AppServices s = factory.openServer(address)) {
+      long structure = s.sites().sites().isEmpty()
+          ? s.demo().load().structures().get(0).id()
+          : s.sites().structures(s.sites().sites().get(0).id()).get(0).id();
+      record(s, structure, records, recordTimes, recordCpu);
+    }
+    return List.of(recordTimes, recordCpu);
+  }
+
+  private void record(AppServices s, long structure, int records, List<Double> times,
+      List<Double> cpu) {
+    long inspection = s.inspections().start(structure,
+        NewInspection.of("Bench", "", InspectionReason.ROUTINE)).id();
+    var planes = s.inspections().planesOf(inspection);
+    for (int i = 0; i < records + 10; i++) {
+      var plane = planes.get(i % planes.size());
+      PanelRef p = PanelRef.of(1 + i % plane.grid().lifts(), 1 + i % plane.grid().bays());
+      long c0 = cpuNanos.getAsLong();
+      long t0 = nanoTime.getAsLong();
+      s.inspections().recordObservation(inspection,
+          NewObservation.of(plane.id(), p, PanelState.SOUND, "bench"));
+      long t1 = nanoTime.getAsLong();
+      long c1 = cpuNanos.getAsLong();
+      if (i >= 10) { // the first few warm the code paths
+        times.add((t1 - t0) / 1e6);
+        cpu.add((c1 - c0) / 1e6);
+      }
+    }
   }
 
   /** A site of planes of 50 lifts x 50 bays, braced every fifth bay, with every panel observed. */

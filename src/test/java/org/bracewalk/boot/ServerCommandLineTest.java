@@ -77,4 +77,20 @@ class ServerCommandLineTest {
     assertThat(r.code()).as(r.out() + r.err()).isEqualTo(2);
     assertThat(r.err()).contains("cannot reach the server postgresql://127.0.0.1:1/records");
   }
+
+  @Test
+  void theStoreBenchRecordsOnTheServerOneObservationAtATime() {
+    String db = StoreBackend.POSTGRESQL.freshLocation(dir);
+    Commands.Run r = run(Map.of(), "bench-store", "--server", db, "--records", "5");
+    assertThat(r.code()).as(r.err()).isZero();
+    assertThat(r.out()).contains("record one observation on the server incl. commit: median")
+        .contains("(5 records; target: median under 10 ms)");
+    try (var s = context.openServer(db, StoreBackend.env())) {
+      var inspections = s.inspections().allInspections().stream()
+          .filter(i -> i.inspectorName().equals("Bench")).toList();
+      assertThat(inspections).hasSize(1);
+      // five timed and ten warming up, each its own record
+      assertThat(s.inspections().observations(inspections.get(0).id())).hasSize(15);
+    }
+  }
 }
