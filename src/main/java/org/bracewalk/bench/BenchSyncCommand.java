@@ -87,7 +87,10 @@ public final class BenchSyncCommand implements Callable<Integer> {
     err.flush();
     try {
       SyncBenchmark.Result r = new SyncBenchmark(context.services(), context.clock(),
-          System::nanoTime).run(server, folder, fields, inspections, observations);
+          System::nanoTime).run(server, folder, fields, inspections, observations, line -> {
+            err.println(line);
+            err.flush();
+          });
       double loadAfter = ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage();
       print(out, r, loadBefore, loadAfter);
       return r.exactlyOnce() ? 0 : NOT_EXACTLY_ONCE;

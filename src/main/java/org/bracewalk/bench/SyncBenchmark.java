@@ -9,6 +9,7 @@ import java.util.Collections;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
@@ -19,6 +20,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.function.Consumer;
 import java.util.function.LongSupplier;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.AppServicesFactory;
@@ -168,8 +170,11 @@ public final class SyncBenchmark {
    * @param fields field files pushing at once
    * @param inspections finalised inspections recorded in each
    * @param observations observations in each inspection
+   * @param progress told what stage the run has reached (the command prints it on standard error)
    */
-  public Result run(String address, Path folder, int fields, int inspections, int observations) {
+  public Result run(String address, Path folder, int fields, int inspections, int observations,
+      Consumer<String> progress) {
+    long begun = nanoTime.getAsLong();
     String tag = "bench-sync " + UUID.randomUUID().toString().substring(0, 8);
     String aloneTag = tag + " alone";
     List<Field> opened = new ArrayList<>();
@@ -201,9 +206,12 @@ public final class SyncBenchmark {
         recorders.shutdownNow();
       }
       baseline = group.remove(group.size() - 1);
+      progress.accept(String.format(Locale.ROOT, "%d field files made and recorded in %.0f s"
+          + " (not measured); pushing", fields + 1, (nanoTime.getAsLong() - begun) / 1e9));
 
       Push concurrent = push(address, group);
       Tally first = tally(server, tag, group);
+      progress.accept("pushed at once; counting on the server, then the baseline");
       Push alone = push(address, List.of(baseline));
       Tally aloneTally = tally(server, aloneTag, List.of(baseline));
       List<Field> all = new ArrayList<>(group);
