@@ -369,13 +369,13 @@ public final class SyncBenchmark {
         missing(wantObservations, haveObservations), extra(wantObservations, haveObservations));
   }
 
-  private static long missing(Set<String> want, List<String> have) {
+  static long missing(Set<String> want, List<String> have) {
     Set<String> there = new HashSet<>(have);
     return want.stream().filter(u -> !there.contains(u)).count();
   }
 
   /** Records held that no field file has, plus every repeat of an identity. */
-  private static long extra(Set<String> want, List<String> have) {
+  static long extra(Set<String> want, List<String> have) {
     Set<String> seen = new HashSet<>();
     long extra = 0;
     for (String u : have) {
