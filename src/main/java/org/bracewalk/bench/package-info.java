@@ -13,7 +13,8 @@
  *       passed in.
  *   <li>{@code bench-store} ({@link org.bracewalk.bench.StoreBenchmark}) and {@code bench-report}
  *       ({@link org.bracewalk.bench.ReportBenchmark}): the store and the report timed in a
- *       temporary database.
+ *       temporary database; {@code bench-sync} ({@link org.bracewalk.bench.SyncBenchmark}): field
+ *       files pushing to one team server at once, every record counted there by global identity.
  *   <li>{@code snapshot} ({@link org.bracewalk.bench.SnapshotCommand}, {@link
  *       org.bracewalk.bench.ScreenShots}, {@link org.bracewalk.bench.ScreenPicture}, {@link
  *       org.bracewalk.bench.HeadlessFx}): pictures of the screens drawn headless; {@link

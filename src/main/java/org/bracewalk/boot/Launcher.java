@@ -15,6 +15,7 @@ import org.bracewalk.bench.BenchPlan;
 import org.bracewalk.bench.BenchReportCommand;
 import org.bracewalk.bench.BenchService;
 import org.bracewalk.bench.BenchStoreCommand;
+import org.bracewalk.bench.BenchSyncCommand;
 import org.bracewalk.bench.SnapshotCommand;
 import org.bracewalk.cli.BracewalkCommand;
 import org.bracewalk.cli.CheckCommand;
@@ -68,6 +69,7 @@ public final class Launcher {
     ReportCommands.addTo(cli, context.cliContext(env), context.reportFactory(env));
     // benchmark and picture scaffolding (package bench): registered here, used by nothing else
     cli.addSubcommand("bench-store", new BenchStoreCommand(context.cliContext(env)));
+    cli.addSubcommand("bench-sync", new BenchSyncCommand(context.cliContext(env)));
     cli.addSubcommand("bench-report",
         new BenchReportCommand(context.cliContext(env), context.reportFactory(env)));
     cli.addSubcommand("snapshot", new SnapshotCommand(context::open, context.analyzer(),
