@@ -2,6 +2,7 @@ package org.bracewalk.app;
 
 import java.time.Clock;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -383,16 +384,19 @@ public final class SyncService {
           i.reason(), InspectionStatus.OPEN, i.carriedOutForName(), i.carriedOutForAddress());
       Inspection stored = adopt(field, server, Kind.INSPECTION, i.id(),
           () -> server.inspections().add(opened));
+      // the server's id of each field plane, looked up once per inspection, not per observation
+      Map<Long, Long> planeIds = new HashMap<>();
       Map<Long, Long> scope = new LinkedHashMap<>();
       field.planes().scopeOf(i.id()).forEach((plane, revision) -> scope.put(
-          map(field, server, Kind.PLANE, plane),
+          planeIds.computeIfAbsent(plane, p -> map(field, server, Kind.PLANE, p)),
           map(field, server, Kind.DESIGN_REVISION, revision)));
       server.planes().fixScope(stored.id(), scope);
       Map<Long, Long> observationIds = new LinkedHashMap<>();
       List<Observation> rows = field.observations().ofInspection(i.id());
       for (Observation o : rows) {
         Observation copy = new Observation(0, stored.id(),
-            map(field, server, Kind.PLANE, o.planeId()), o.panel(), o.state(), o.memberFound(),
+            planeIds.computeIfAbsent(o.planeId(), p -> map(field, server, Kind.PLANE, p)),
+            o.panel(), o.state(), o.memberFound(),
             o.bowMm(), o.gaugeLengthMm(), o.defect(), o.note(), o.recordedAt(), o.recordedBy(),
             o.supersedes() == null ? null : observationIds.get(o.supersedes()),
             o.correctionReason(), o.frameMember());
