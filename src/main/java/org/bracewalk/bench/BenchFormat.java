@@ -73,7 +73,13 @@ public final class BenchFormat {
       sb.append(
           "Frame damage: the same kind of planes with ledgers and standards missing as built (drawn at"
               + " random; the design's\nframe complete); the walk-round and medium planes are also timed"
-              + " with the frame complete, for the ratios.\n\n");
+              + " with the frame complete, for the ratios.\n"
+              + (plan.frame().steadyWarmupNanos() > 0
+                  ? "The engine on the plane timed against the rigidity matrix is timed twice: after the usual"
+                      + " warm-up, and (-steady)\nafter " + Math.round(plan.frame().steadyWarmupNanos() / 1e9)
+                      + " s more, when the compiler is done with it; that ratio takes the second.\n"
+                  : "")
+              + "\n");
     }
     int nameWidth = "measurement".length();
     for (BenchResult r : report.results()) {

@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
 
 /** The bench's frame-damage cases on tiny planes, and the baseline with frame members missing. */
 class FrameBenchTest {
-  private static final FrameBenchPlan TINY_FRAME = new FrameBenchPlan(3, 5, 2, 5, 0.05, 6, 3, 4, 0.05, 2);
+  private static final FrameBenchPlan TINY_FRAME = new FrameBenchPlan(3, 5, 2, 5, 0.05, 6, 3, 4, 0.05, 2, 1);
   private static final BenchPlan TINY =
       new BenchPlan(7, 0.3, List.of(3, 4), 4, List.of(3, 4), 0, 2, 1, 4, false, 0, TINY_FRAME);
 
@@ -39,10 +39,16 @@ class FrameBenchTest {
             "engine-full-5x5-frame-3-missing",
             "engine-full-4x4-frame-2-missing",
             "rigidity-matrix-rank-4x4-frame-2-missing",
+            "engine-full-4x4-frame-2-missing-steady",
             "engine-verdict-repair-6x6-frame-3-missing");
     assertThat(steps).hasSize(report.results().size());
     assertThat(report.results().get(10).samples()).as("calls of the frame rank").isEqualTo(2);
-    assertThat(report.results().get(11).samples()).as("calls of the large frame plane").isEqualTo(2);
+    assertThat(report.results().get(12).samples()).as("calls of the large frame plane").isEqualTo(2);
+    // the ratio against the rigidity matrix takes the engine's second (steady) timing
+    BenchResult rank = report.results().get(10);
+    BenchResult steady = report.results().get(11);
+    assertThat(report.ratios().get("rigidityMatrixOverEngineFrame4x4"))
+        .isEqualTo(rank.medianMs() / steady.medianMs());
     assertThat(report.ratios()).containsKeys(
         "frameMissingOverComplete3x5", "frameMissingOverComplete5x5", "rigidityMatrixOverEngineFrame4x4");
     // the large frame plane (6 x 6) has no complete-frame run of its size in this plan: no ratio
