@@ -3,10 +3,7 @@ package org.bracewalk.cli;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -19,7 +16,6 @@ import java.util.Random;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.stream.Stream;
-import org.bracewalk.boot.Launcher;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.SingularOps_DDRM;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
@@ -48,23 +44,14 @@ import org.junit.jupiter.params.provider.MethodSource;
  * damage, and malformed frame lines not covered elsewhere.
  */
 class CheckFrameAcceptanceTest {
-  private static final ObjectMapper JSON = new ObjectMapper();
   private static final double[] WIDTHS = {1.2, 1.8, 2.4, 2.5, 3.0};
   private static final double[] HEIGHTS = {1.5, 2.0, 2.5};
 
   @TempDir Path dir;
 
-  record Run(int code, String out, String err) {
-    JsonNode json() throws IOException {
-      return JSON.readTree(out);
-    }
-  }
-
-  static Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    int code = Launcher.run(args, new PrintWriter(out), new PrintWriter(err), Map.of());
-    return new Run(code, out.toString(), err.toString());
+  /** The launcher's answer, as {@link CheckCommandFrameTest} runs it. */
+  private static CheckCommandFrameTest.Run run(String... args) {
+    return CheckCommandFrameTest.run(args);
   }
 
   private Path map(String name, String text) throws IOException {
@@ -378,7 +365,7 @@ class CheckFrameAcceptanceTest {
     }
     Plane built = design.copy();
     built.absent.add(gone);
-    Run r = run("check", map("d.txt", grid.toString()).toString(),
+    CheckCommandFrameTest.Run r = run("check", map("d.txt", grid.toString()).toString(),
         map("b.txt", grid + gone.line("missing") + "\n").toString(), "--format", "json");
     assertThat(r.err()).isEmpty();
     JsonNode v = r.json();
@@ -528,7 +515,7 @@ class CheckFrameAcceptanceTest {
         unknown += s.equals("?") ? 1 : 0;
       }
       String label = "plane " + t + "\n" + d + "--- as built\n" + b;
-      Run r = run("check", map("d.txt", d.toString()).toString(), map("b.txt", b.toString()).toString(),
+      CheckCommandFrameTest.Run r = run("check", map("d.txt", d.toString()).toString(), map("b.txt", b.toString()).toString(),
           "--format", "json");
       assertThat(r.err()).as(label).isEmpty();
       JsonNode v = r.json();
@@ -581,10 +568,10 @@ class CheckFrameAcceptanceTest {
     pinned.absent.addAll(free.absent);
     Path d = map("d.txt", "support: pinned-base\nwidths: 2.4 1.8\n/ /\n");
     Path b = map("b.txt", "widths: 2.4 1.8\n/ /\nledger 0 2 missing\n");
-    Run p = run("check", d.toString(), b.toString(), "--format", "json");
+    CheckCommandFrameTest.Run p = run("check", d.toString(), b.toString(), "--format", "json");
     matchesTheMatrix("pinned", p.json().get("asBuilt"), pinned);
     assertThat(p.code()).isZero();
-    Run f = run("check", d.toString(), b.toString(), "--support", "free", "--format", "json");
+    CheckCommandFrameTest.Run f = run("check", d.toString(), b.toString(), "--support", "free", "--format", "json");
     assertThat(f.json().get("support").asText()).isEqualTo("free");
     matchesTheMatrix("free", f.json().get("asBuilt"), free);
     assertThat(f.code()).isEqualTo(free.analyse(Set.of()).freedoms() == 0 ? 0 : 1);
@@ -627,7 +614,7 @@ class CheckFrameAcceptanceTest {
     Path bad = map("bad.txt", text);
     Path good = map("good.txt", "/ .\n");
     for (String format : List.of("json", "text")) {
-      Run r = which.equals("design")
+      CheckCommandFrameTest.Run r = which.equals("design")
           ? run("check", bad.toString(), "--format", format)
           : run("check", good.toString(), bad.toString(), "--format", format);
       assertThat(r.code()).isEqualTo(2);
@@ -643,7 +630,7 @@ class CheckFrameAcceptanceTest {
     String expected = run("check", d.toString(), map("b0.txt", "/\n\\\n/\nledger 1 1 missing\n").toString(),
         "--format", "json").out();
     for (String line : List.of("Ledger 1 1 MISSING", "  beam\t1\t1\tMissing", "LEDGER +1 1 missing")) {
-      Run r = run("check", d.toString(), map("b.txt", "/\n\\\n/\n" + line + "\n").toString(), "--format", "json");
+      CheckCommandFrameTest.Run r = run("check", d.toString(), map("b.txt", "/\n\\\n/\n" + line + "\n").toString(), "--format", "json");
       assertThat(r.code()).as(line).isEqualTo(1);
       assertThat(r.out()).as(line).isEqualTo(expected);
     }
