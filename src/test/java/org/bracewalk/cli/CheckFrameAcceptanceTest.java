@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
@@ -16,6 +17,15 @@ import java.util.Random;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.stream.Stream;
+import org.apache.commons.math3.optim.MaxIter;
+import org.apache.commons.math3.optim.PointValuePair;
+import org.apache.commons.math3.optim.linear.LinearConstraint;
+import org.apache.commons.math3.optim.linear.LinearConstraintSet;
+import org.apache.commons.math3.optim.linear.LinearObjectiveFunction;
+import org.apache.commons.math3.optim.linear.NonNegativeConstraint;
+import org.apache.commons.math3.optim.linear.Relationship;
+import org.apache.commons.math3.optim.linear.SimplexSolver;
+import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.SingularOps_DDRM;
 import org.ejml.dense.row.factory.DecompositionFactory_DDRM;
@@ -231,6 +241,63 @@ class CheckFrameAcceptanceTest {
       return new Answer(freedoms, moving);
     }
 
+    /**
+     * Pinned planes with tension-only members (every diagonal here a cable): whether some
+     * first-order motion keeps every frame member's length and shortens a cable without
+     * lengthening any (B. Roth, W. Whiteley, "Tensegrity frameworks", Trans. AMS 265 (1981)): the
+     * least sum of the cables' length rates, with every coordinate rate in [-1, 1], by the simplex
+     * method of commons-math3; below zero iff a cable can go slack.
+     */
+    boolean someCableCanSlacken() {
+      assertThat(pinned).isTrue();
+      List<Object[]> bars = bars(Set.of());
+      Map<Long, Integer> column = new HashMap<>();
+      for (Object[] b : bars) {
+        for (int e : new int[] {1, 3}) {
+          long j = (int) b[e] * 1000L + (int) b[e + 1];
+          if (j / 1000 > 0 && !column.containsKey(j)) {
+            column.put(j, 2 * column.size());
+          }
+        }
+      }
+      int vars = 2 * column.size();
+      double[] objective = new double[vars];
+      List<LinearConstraint> constraints = new ArrayList<>();
+      for (Object[] b : bars) {
+        double[] row = new double[vars];
+        long p = (int) b[1] * 1000L + (int) b[2];
+        long q = (int) b[3] * 1000L + (int) b[4];
+        double dx = x((int) b[2]) - x((int) b[4]);
+        double dy = y((int) b[1]) - y((int) b[3]);
+        if (column.containsKey(p)) {
+          row[column.get(p)] = dx;
+          row[column.get(p) + 1] = dy;
+        }
+        if (column.containsKey(q)) {
+          row[column.get(q)] = -dx;
+          row[column.get(q) + 1] = -dy;
+        }
+        if (b[0] instanceof String) { // a diagonal: a cable
+          constraints.add(new LinearConstraint(row, Relationship.LEQ, 0));
+          for (int k = 0; k < vars; k++) {
+            objective[k] += row[k];
+          }
+        } else {
+          constraints.add(new LinearConstraint(row, Relationship.EQ, 0));
+        }
+      }
+      for (int k = 0; k < vars; k++) {
+        double[] unit = new double[vars];
+        unit[k] = 1;
+        constraints.add(new LinearConstraint(unit, Relationship.LEQ, 1));
+        constraints.add(new LinearConstraint(unit, Relationship.GEQ, -1));
+      }
+      PointValuePair best = new SimplexSolver().optimize(new MaxIter(100_000),
+          new LinearObjectiveFunction(objective, 0), new LinearConstraintSet(constraints),
+          GoalType.MINIMIZE, new NonNegativeConstraint(false));
+      return best.getValue() < -1e-7;
+    }
+
     /** Frame members whose loss alone adds a freedom (check-contract.md, criticalMembers). */
     List<Member> criticalMembers() {
       int base = analyse(Set.of()).freedoms();
@@ -353,8 +420,8 @@ class CheckFrameAcceptanceTest {
   void everySingleFrameMemberMissingOnOddShapes(int lifts, int bays, boolean pinned, String fill, Member gone)
       throws IOException {
     Plane design = new Plane(lifts, bays, pinned, new double[bays], new double[lifts]);
-    java.util.Arrays.fill(design.widths, 2.4);
-    java.util.Arrays.fill(design.heights, 2.0);
+    Arrays.fill(design.widths, 2.4);
+    Arrays.fill(design.heights, 2.0);
     StringBuilder grid = new StringBuilder(design.header());
     for (int i = lifts; i >= 1; i--) {
       for (int j = 1; j <= bays; j++) {
@@ -412,8 +479,11 @@ class CheckFrameAcceptanceTest {
       assertThat(openings).as("never an opening").doesNotContain(key);
       String d = design.token(b.get("lift").asInt(), b.get("bay").asInt());
       String add = b.get("diagonal").asText();
+      // in the design: the design's diagonal there, unless an as-built diagonal already stands in
+      // for the design's single one (a rigid diagonal stands in whichever way it runs: contract)
+      boolean standsIn = !d.equals("X") && !built.token(b.get("lift").asInt(), b.get("bay").asInt()).equals(".");
       assertThat(b.get("inDesign").asBoolean()).as("inDesign of " + b)
-          .isEqualTo(d.equals("X") || d.equals(add));
+          .isEqualTo((d.equals("X") || d.equals(add)) && !standsIn);
       outside += b.get("inDesign").asBoolean() ? 0 : 1;
       repaired.add(b.get("lift").asInt(), b.get("bay").asInt(), add);
     }
@@ -578,6 +648,54 @@ class CheckFrameAcceptanceTest {
     assertThat(free.analyse(Set.of()).freedoms()).as("the matrix: the right-hand bay's foot is loose").isPositive();
     assertThat(f.json().at("/repair/members").toString())
         .isEqualTo("[{\"member\":\"ledger\",\"level\":0,\"bay\":2,\"inDesign\":true}]");
+  }
+
+  // ---------------------------------------------------------------- tension-only members, frame damaged
+
+  static Stream<Arguments> cablePlanes() {
+    return Stream.of(
+        Arguments.of(2, 1, "X", new Member('S', 1, 0)),
+        Arguments.of(2, 2, "X", new Member('S', 2, 1)),
+        Arguments.of(2, 2, "/", new Member('S', 2, 1)),
+        Arguments.of(2, 2, "X", new Member('L', 1, 2)),
+        Arguments.of(1, 2, "X", new Member('L', 1, 1)),
+        Arguments.of(2, 2, "X", null));
+  }
+
+  /**
+   * Pinned planes whose every diagonal is tension-only, one frame member missing (or none, the
+   * control): degreesOfFreedom against the rigidity matrix with cables as bars; rigid and
+   * oneWayOnly against the tensegrity test (a linear programme, Roth and Whiteley 1981).
+   */
+  @ParameterizedTest(name = "{0} x {1}, ~{2} everywhere, {3} missing")
+  @MethodSource("cablePlanes")
+  void tensionOnlyMembersWithTheFrameDamaged(int lifts, int bays, String way, Member gone) throws IOException {
+    Plane built = new Plane(lifts, bays, true, new double[bays], new double[lifts]);
+    Arrays.fill(built.widths, 2.4);
+    Arrays.fill(built.heights, 2.0);
+    StringBuilder grid = new StringBuilder();
+    for (int i = lifts; i >= 1; i--) {
+      for (int j = 1; j <= bays; j++) {
+        built.panels.put(i * 100L + j, way);
+        grid.append(j > 1 ? " " : "").append('~').append(way);
+      }
+      grid.append('\n');
+    }
+    String damage = "";
+    if (gone != null) {
+      built.absent.add(gone);
+      damage = gone.line("missing") + "\n";
+    }
+    String header = built.header();
+    CheckCommandFrameTest.Run r = run("check", map("d.txt", header + grid).toString(), map("b.txt", header + grid + damage).toString(),
+        "--format", "json");
+    JsonNode ab = r.json().get("asBuilt");
+    int freedoms = built.analyse(Set.of()).freedoms();
+    boolean slack = built.someCableCanSlacken();
+    assertThat(ab.get("degreesOfFreedom").asInt()).as("cables as bars, by the matrix").isEqualTo(freedoms);
+    assertThat(ab.get("rigid").asBoolean()).as("rigid, by the tensegrity test").isEqualTo(freedoms == 0 && !slack);
+    assertThat(ab.get("oneWayOnly").asBoolean()).as("one way only").isEqualTo(freedoms == 0 && slack);
+    assertThat(r.code()).isEqualTo(freedoms == 0 && !slack ? 0 : 1);
   }
 
   // ---------------------------------------------------------------- malformed frame lines
