@@ -195,6 +195,7 @@ final class RandomSelfStress {
     final int firstStandard = (lifts + 1) * bays;
     int nv = bays + lifts;
     long[] vals = new long[nv + faces];
+    long[] sides = new long[4];
     for (int j = 1; j <= bays; j++) {
       vals[j - 1] = fw.xs[j] - fw.xs[j - 1];
     }
@@ -206,15 +207,8 @@ final class RandomSelfStress {
         vals[nv + f] = 1;
         continue;
       }
-      int a = faceMembers[4 * f];
-      int b = faceMembers[4 * f + 1];
-      boolean aLeft = faceL[a] == f;
-      boolean bLeft = faceL[b] == f;
-      long ax = signedMod(dxs[a], aLeft);
-      long ay = signedMod(dys[a], aLeft);
-      long bx = signedMod(dxs[b], bLeft);
-      long by = signedMod(dys[b], bLeft);
-      long det = ModularEchelon.sub(product(ax, by), product(ay, bx));
+      triangleSides(fw, f, sides);
+      long det = ModularEchelon.sub(product(sides[0], sides[3]), product(sides[1], sides[2]));
       if (det == 0) {
         throw new ArithmeticException("no inverse of 0");
       }
@@ -241,14 +235,11 @@ final class RandomSelfStress {
           yx[f] = product(p, inverses[bottom % bays]);
           yy[f] = product(q, inverses[bays + (right - firstStandard) / (bays + 1)]);
         } else {
-          int a = faceMembers[4 * f];
-          int b = faceMembers[4 * f + 1];
-          boolean aLeft = faceL[a] == f;
-          boolean bLeft = faceL[b] == f;
-          long ax = signedMod(dxs[a], aLeft);
-          long ay = signedMod(dys[a], aLeft);
-          long bx = signedMod(dxs[b], bLeft);
-          long by = signedMod(dys[b], bLeft);
+          triangleSides(fw, f, sides);
+          long ax = sides[0];
+          long ay = sides[1];
+          long bx = sides[2];
+          long by = sides[3];
           long invF = inverses[nv + f];
           // [ax ay; bx by] (x, y) = (phi, psi)
           yx[f] = product(invF, ModularEchelon.sub(product(by, p), product(ay, q)));
@@ -270,6 +261,21 @@ final class RandomSelfStress {
       out[e] = lx != rx || ly != ry;
     }
     return out;
+  }
+
+  /**
+   * The first two sides of the triangular face {@code f} as the face sees them (negated where the
+   * face is on a side's right), mod p, written to {@code out}: {ax, ay, bx, by}.
+   */
+  private static void triangleSides(FrameFramework fw, int f, long[] out) {
+    int a = fw.faceMembers[4 * f];
+    int b = fw.faceMembers[4 * f + 1];
+    boolean aLeft = fw.faceL[a] == f;
+    boolean bLeft = fw.faceL[b] == f;
+    out[0] = signedMod(fw.dx[a], aLeft);
+    out[1] = signedMod(fw.dy[a], aLeft);
+    out[2] = signedMod(fw.dx[b], bLeft);
+    out[3] = signedMod(fw.dy[b], bLeft);
   }
 
   /** a * b mod p, with no work when either is 0 (sides of a panel are axis-parallel). */
