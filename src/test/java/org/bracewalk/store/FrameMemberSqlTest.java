@@ -258,38 +258,26 @@ class FrameMemberSqlTest {
   }
 
   /** A file of V8 with a finalised inspection (observation, correction, photo, CSV source). */
-  private static final String[] V8_RECORDS = {
-    "INSERT INTO sites (id, name, time_zone, display_units) VALUES (1, 'Depot', 'UTC', 'metric')",
-    "INSERT INTO structures (id, site_id, name, kind) VALUES (1, 1, 'Run A', 'racking-run')",
-    "INSERT INTO planes (id, structure_id, name, lifts, bays, support, role)"
-        + " VALUES (1, 1, 'frame 4', 2, 1, 'pinned-base', 'upright-frame')",
-    "INSERT INTO plane_bay_widths VALUES (1, 1, 1000)",
-    "INSERT INTO plane_lift_heights VALUES (1, 1, 1500), (1, 2, 1500)",
-    "INSERT INTO design_revisions (id, plane_id, number, design_date, recorded_at, panel_count)"
-        + " VALUES (1, 1, 1, '2025-01-01', '2025-01-01T00:00:00.000Z', 2)",
-    "INSERT INTO design_panels VALUES (1, 1, 1, '/', 'rigid', 0), (1, 2, 1, '\\', 'rigid', 0)",
-    "INSERT INTO inspections (id, structure_id, started_at, inspector_name, reason)"
-        + " VALUES (1, 1, '2025-02-01T08:00:00.000Z', 'M. Okafor', 'after-impact')",
-    "INSERT INTO inspection_scope VALUES (1, 1, 1)",
-    "INSERT INTO observations (id, inspection_id, plane_id, lift, bay, state, member_diagonal,"
-        + " member_kind, bow_tenth_mm, gauge_length_mm, defect, note, recorded_at, recorded_by)"
-        + " VALUES (7, 1, 1, 1, 1, 'damaged-effective', NULL, NULL, 35, 1000, 'bent', 'dent',"
-        + " '2025-02-01T08:10:00.000Z', 'M. Okafor')",
-    "INSERT INTO observations (id, inspection_id, plane_id, lift, bay, state, member_diagonal,"
-        + " member_kind, recorded_at, supersedes_id, correction_reason) VALUES (9, 1, 1, 2, 1,"
-        + " 'extra', 'X', 'tension-only', '2025-02-01T08:11:00.000Z', NULL, '')",
-    "INSERT INTO observations (id, inspection_id, plane_id, lift, bay, state, recorded_at,"
-        + " supersedes_id, correction_reason) VALUES (12, 1, 1, 1, 1, 'missing',"
-        + " '2025-02-01T08:12:00.000Z', 7, 'looked again')",
-    "INSERT INTO photos (id, observation_id, file_name, media_type, data, attached_at)"
-        + " VALUES (5, 12, 'dent.jpg', 'image/jpeg', x'ffd8ff00', '2025-02-01T08:12:00.000Z')",
-    "INSERT INTO observation_sources VALUES (1, '" + "c".repeat(64) + "', 3, 9)",
-    "UPDATE inspections SET status = 'finalised', finished_at = '2025-02-01T09:00:00.000Z',"
-        + " inspection_interval_days = 7 WHERE id = 1",
-    "INSERT INTO issued_reports (inspection_id, file_name, fingerprint, issued_at, kind,"
-        + " records_fingerprint, origin) VALUES (1, 'i1.pdf', '" + "a".repeat(64) + "',"
-        + " '2025-02-03T00:00:00.000Z', 'inspection-report', '" + "b".repeat(64) + "', 'issued')",
-  };
+  private static final String[] V8_RECORDS =
+      OldFileRows.oneFrameInspected(
+          "INSERT INTO observations (id, inspection_id, plane_id, lift, bay, state, member_diagonal,"
+              + " member_kind, bow_tenth_mm, gauge_length_mm, defect, note, recorded_at, recorded_by)"
+              + " VALUES (7, 1, 1, 1, 1, 'damaged-effective', NULL, NULL, 35, 1000, 'bent', 'dent',"
+              + " '2025-02-01T08:10:00.000Z', 'M. Okafor')",
+          "INSERT INTO observations (id, inspection_id, plane_id, lift, bay, state, member_diagonal,"
+              + " member_kind, recorded_at, supersedes_id, correction_reason) VALUES (9, 1, 1, 2, 1,"
+              + " 'extra', 'X', 'tension-only', '2025-02-01T08:11:00.000Z', NULL, '')",
+          "INSERT INTO observations (id, inspection_id, plane_id, lift, bay, state, recorded_at,"
+              + " supersedes_id, correction_reason) VALUES (12, 1, 1, 1, 1, 'missing',"
+              + " '2025-02-01T08:12:00.000Z', 7, 'looked again')",
+          "INSERT INTO photos (id, observation_id, file_name, media_type, data, attached_at)"
+              + " VALUES (5, 12, 'dent.jpg', 'image/jpeg', x'ffd8ff00', '2025-02-01T08:12:00.000Z')",
+          "INSERT INTO observation_sources VALUES (1, '" + "c".repeat(64) + "', 3, 9)",
+          "UPDATE inspections SET status = 'finalised', finished_at = '2025-02-01T09:00:00.000Z',"
+              + " inspection_interval_days = 7 WHERE id = 1",
+          "INSERT INTO issued_reports (inspection_id, file_name, fingerprint, issued_at, kind,"
+              + " records_fingerprint, origin) VALUES (1, 'i1.pdf', '" + "a".repeat(64) + "',"
+              + " '2025-02-03T00:00:00.000Z', 'inspection-report', '" + "b".repeat(64) + "', 'issued')");
 
   @Test
   void aV8FileKeepsEveryRecordIdAndGuardThroughTheRebuild() throws Exception {

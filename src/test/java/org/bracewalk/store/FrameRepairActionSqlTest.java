@@ -168,37 +168,25 @@ class FrameRepairActionSqlTest {
   }
 
   /** A file of V9 with a repair order: a panel action done and verified, a whole-plane one. */
-  private static final String[] V9_RECORDS = {
-    "INSERT INTO sites (id, name, time_zone, display_units) VALUES (1, 'Depot', 'UTC', 'metric')",
-    "INSERT INTO structures (id, site_id, name, kind) VALUES (1, 1, 'Run A', 'racking-run')",
-    "INSERT INTO planes (id, structure_id, name, lifts, bays, support, role)"
-        + " VALUES (1, 1, 'frame 4', 2, 1, 'pinned-base', 'upright-frame')",
-    "INSERT INTO plane_bay_widths VALUES (1, 1, 1000)",
-    "INSERT INTO plane_lift_heights VALUES (1, 1, 1500), (1, 2, 1500)",
-    "INSERT INTO design_revisions (id, plane_id, number, design_date, recorded_at, panel_count)"
-        + " VALUES (1, 1, 1, '2025-01-01', '2025-01-01T00:00:00.000Z', 2)",
-    "INSERT INTO design_panels VALUES (1, 1, 1, '/', 'rigid', 0), (1, 2, 1, '\\', 'rigid', 0)",
-    "INSERT INTO inspections (id, structure_id, started_at, inspector_name, reason)"
-        + " VALUES (1, 1, '2025-02-01T08:00:00.000Z', 'M. Okafor', 'after-impact')",
-    "INSERT INTO inspection_scope VALUES (1, 1, 1)",
-    "UPDATE inspections SET status = 'finalised', finished_at = '2025-02-01T09:00:00.000Z',"
-        + " inspection_interval_days = 7 WHERE id = 1",
-    "INSERT INTO inspections (id, structure_id, started_at, inspector_name, reason)"
-        + " VALUES (2, 1, '2025-02-05T08:00:00.000Z', 'M. Okafor', 'routine')",
-    "INSERT INTO inspection_scope VALUES (2, 1, 1)",
-    "UPDATE inspections SET status = 'finalised', finished_at = '2025-02-05T09:00:00.000Z',"
-        + " inspection_interval_days = 7 WHERE id = 2",
-    "INSERT INTO repair_orders (id, inspection_id, created_at, created_by, note)"
-        + " VALUES (4, 1, '2025-02-01T10:00:00.000Z', 'M. Okafor', 'keep off')",
-    "INSERT INTO repair_actions (id, order_id, plane_id, lift, bay, action, brace_diagonal,"
-        + " brace_kind, description, due_date, assignee) VALUES (6, 4, 1, 1, 1, 'replace', '/',"
-        + " 'rigid', 'new brace', '2025-02-03', 'crew B')",
-    "UPDATE repair_actions SET done_at = '2025-02-02T15:00:00.000Z', done_by = 'crew B'"
-        + " WHERE id = 6",
-    "UPDATE repair_actions SET verified_by_inspection_id = 2 WHERE id = 6",
-    "INSERT INTO repair_actions (id, order_id, plane_id, action, description)"
-        + " VALUES (9, 4, 1, 'take-out-of-service', 'tape it off')",
-  };
+  private static final String[] V9_RECORDS =
+      OldFileRows.oneFrameInspected(
+          "UPDATE inspections SET status = 'finalised', finished_at = '2025-02-01T09:00:00.000Z',"
+              + " inspection_interval_days = 7 WHERE id = 1",
+          "INSERT INTO inspections (id, structure_id, started_at, inspector_name, reason)"
+              + " VALUES (2, 1, '2025-02-05T08:00:00.000Z', 'M. Okafor', 'routine')",
+          "INSERT INTO inspection_scope VALUES (2, 1, 1)",
+          "UPDATE inspections SET status = 'finalised', finished_at = '2025-02-05T09:00:00.000Z',"
+              + " inspection_interval_days = 7 WHERE id = 2",
+          "INSERT INTO repair_orders (id, inspection_id, created_at, created_by, note)"
+              + " VALUES (4, 1, '2025-02-01T10:00:00.000Z', 'M. Okafor', 'keep off')",
+          "INSERT INTO repair_actions (id, order_id, plane_id, lift, bay, action, brace_diagonal,"
+              + " brace_kind, description, due_date, assignee) VALUES (6, 4, 1, 1, 1, 'replace', '/',"
+              + " 'rigid', 'new brace', '2025-02-03', 'crew B')",
+          "UPDATE repair_actions SET done_at = '2025-02-02T15:00:00.000Z', done_by = 'crew B'"
+              + " WHERE id = 6",
+          "UPDATE repair_actions SET verified_by_inspection_id = 2 WHERE id = 6",
+          "INSERT INTO repair_actions (id, order_id, plane_id, action, description)"
+              + " VALUES (9, 4, 1, 'take-out-of-service', 'tape it off')");
 
   @Test
   void aV9FileKeepsEveryRepairActionIdAndGuardThroughTheRebuild() throws Exception {

@@ -41,41 +41,29 @@ class GlobalIdentitiesTest {
       "repair_actions", Kind.REPAIR_ACTION, "issued_reports", Kind.ISSUED_REPORT);
 
   /** Records of every synced kind, as a V11 database holds them (raw SQL, ids given). */
-  private static final String[] V11_RECORDS = {
-    "INSERT INTO sites (id, name, time_zone, display_units) VALUES (1, 'Depot', 'UTC', 'metric')",
-    "INSERT INTO sites (id, name, time_zone, display_units) VALUES (2, 'Yard', 'UTC', 'metric')",
-    "INSERT INTO structures (id, site_id, name, kind) VALUES (1, 1, 'Run A', 'racking-run')",
-    "INSERT INTO planes (id, structure_id, name, lifts, bays, support, role)"
-        + " VALUES (1, 1, 'frame 4', 2, 1, 'pinned-base', 'upright-frame')",
-    "INSERT INTO plane_bay_widths VALUES (1, 1, 1000)",
-    "INSERT INTO plane_lift_heights VALUES (1, 1, 1500), (1, 2, 1500)",
-    "INSERT INTO design_revisions (id, plane_id, number, design_date, recorded_at, panel_count)"
-        + " VALUES (1, 1, 1, '2025-01-01', '2025-01-01T00:00:00.000Z', 2)",
-    "INSERT INTO design_panels VALUES (1, 1, 1, '/', 'rigid', 0), (1, 2, 1, '\\', 'rigid', 0)",
-    "INSERT INTO inspections (id, structure_id, started_at, inspector_name, reason)"
-        + " VALUES (1, 1, '2025-02-01T08:00:00.000Z', 'M. Okafor', 'after-impact')",
-    "INSERT INTO inspection_scope VALUES (1, 1, 1)",
-    "INSERT INTO observations (id, inspection_id, plane_id, lift, bay, state, recorded_at)"
-        + " VALUES (7, 1, 1, 1, 1, 'missing', '2025-02-01T08:10:00.000Z')",
-    "INSERT INTO observations (id, inspection_id, plane_id, lift, bay, state, recorded_at)"
-        + " VALUES (8, 1, 1, 2, 1, 'sound', '2025-02-01T08:11:00.000Z')",
-    "INSERT INTO photos (id, observation_id, file_name, media_type, data, attached_at)"
-        + " VALUES (5, 7, 'a.jpg', 'image/jpeg', x'ffd8ff00', '2025-02-01T08:12:00.000Z')",
-    "INSERT INTO photos (id, observation_id, file_name, media_type, data, attached_at)"
-        + " VALUES (6, 7, 'b.jpg', 'image/jpeg', x'ffd8ff01', '2025-02-01T08:12:00.000Z')",
-    "UPDATE inspections SET status = 'finalised', finished_at = '2025-02-01T09:00:00.000Z',"
-        + " inspection_interval_days = 7 WHERE id = 1",
-    "INSERT INTO repair_orders (id, inspection_id, created_at, created_by, note)"
-        + " VALUES (4, 1, '2025-02-01T10:00:00.000Z', 'M. Okafor', 'keep off')",
-    "INSERT INTO repair_actions (id, order_id, plane_id, lift, bay, action, brace_diagonal,"
-        + " brace_kind, description, due_date, assignee) VALUES (6, 4, 1, 1, 1, 'replace', '/',"
-        + " 'rigid', 'new brace', '2025-02-03', 'crew B')",
-    "INSERT INTO repair_actions (id, order_id, plane_id, action, description)"
-        + " VALUES (9, 4, 1, 'take-out-of-service', 'tape it off')",
-    "INSERT INTO issued_reports (inspection_id, file_name, fingerprint, issued_at, kind,"
-        + " records_fingerprint, origin) VALUES (1, 'i1.pdf', '" + "a".repeat(64) + "',"
-        + " '2025-02-03T00:00:00.000Z', 'inspection-report', '" + "b".repeat(64) + "', 'issued')",
-  };
+  private static final String[] V11_RECORDS =
+      OldFileRows.oneFrameInspected(
+          "INSERT INTO sites (id, name, time_zone, display_units) VALUES (2, 'Yard', 'UTC', 'metric')",
+          "INSERT INTO observations (id, inspection_id, plane_id, lift, bay, state, recorded_at)"
+              + " VALUES (7, 1, 1, 1, 1, 'missing', '2025-02-01T08:10:00.000Z')",
+          "INSERT INTO observations (id, inspection_id, plane_id, lift, bay, state, recorded_at)"
+              + " VALUES (8, 1, 1, 2, 1, 'sound', '2025-02-01T08:11:00.000Z')",
+          "INSERT INTO photos (id, observation_id, file_name, media_type, data, attached_at)"
+              + " VALUES (5, 7, 'a.jpg', 'image/jpeg', x'ffd8ff00', '2025-02-01T08:12:00.000Z')",
+          "INSERT INTO photos (id, observation_id, file_name, media_type, data, attached_at)"
+              + " VALUES (6, 7, 'b.jpg', 'image/jpeg', x'ffd8ff01', '2025-02-01T08:12:00.000Z')",
+          "UPDATE inspections SET status = 'finalised', finished_at = '2025-02-01T09:00:00.000Z',"
+              + " inspection_interval_days = 7 WHERE id = 1",
+          "INSERT INTO repair_orders (id, inspection_id, created_at, created_by, note)"
+              + " VALUES (4, 1, '2025-02-01T10:00:00.000Z', 'M. Okafor', 'keep off')",
+          "INSERT INTO repair_actions (id, order_id, plane_id, lift, bay, action, brace_diagonal,"
+              + " brace_kind, description, due_date, assignee) VALUES (6, 4, 1, 1, 1, 'replace', '/',"
+              + " 'rigid', 'new brace', '2025-02-03', 'crew B')",
+          "INSERT INTO repair_actions (id, order_id, plane_id, action, description)"
+              + " VALUES (9, 4, 1, 'take-out-of-service', 'tape it off')",
+          "INSERT INTO issued_reports (inspection_id, file_name, fingerprint, issued_at, kind,"
+              + " records_fingerprint, origin) VALUES (1, 'i1.pdf', '" + "a".repeat(64) + "',"
+              + " '2025-02-03T00:00:00.000Z', 'inspection-report', '" + "b".repeat(64) + "', 'issued')");
 
   private static String v11Database(StoreBackend backend, Path dir) throws SQLException {
     String location;
