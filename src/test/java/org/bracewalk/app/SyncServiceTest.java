@@ -9,7 +9,6 @@ import java.lang.reflect.Proxy;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.ResultSet;
 import java.sql.Statement;
 import java.time.Instant;
@@ -36,7 +35,6 @@ import org.bracewalk.report.PdfRepairOrderRenderer;
 import org.bracewalk.report.PdfReportRenderer;
 import org.bracewalk.report.TemplateSource;
 import org.bracewalk.store.Database;
-import org.bracewalk.store.ServerAddress;
 import org.bracewalk.store.StoreBackend;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
@@ -90,17 +88,8 @@ class SyncServiceTest {
 
   /** Every synced table's row count on the server, read with plain SQL. */
   private Map<String, Long> serverCounts() throws Exception {
-    ServerAddress a = ServerAddress.parse(serverLocation, StoreBackend.env());
     Map<String, Long> out = new LinkedHashMap<>();
-    java.util.Properties login = new java.util.Properties();
-    login.setProperty("user", StoreBackend.env().getOrDefault("PGUSER",
-        System.getProperty("user.name")));
-    if (StoreBackend.env().containsKey("PGPASSWORD")) {
-      login.setProperty("password", StoreBackend.env().get("PGPASSWORD"));
-    }
-    try (Connection c = DriverManager.getConnection("jdbc:postgresql://" + a.host() + ":"
-        + a.port() + "/" + a.database(), login);
-        Statement st = c.createStatement()) {
+    try (Connection c = StoreBackend.connect(serverLocation); Statement st = c.createStatement()) {
       for (String t : TABLES) {
         try (ResultSet r = st.executeQuery("SELECT count(*), count(DISTINCT uuid) FROM " + t)) {
           r.next();

@@ -4,7 +4,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Path;
 import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.time.Clock;
@@ -12,11 +11,9 @@ import java.time.Instant;
 import java.time.ZoneOffset;
 import java.util.HashMap;
 import java.util.Map;
-import java.util.Properties;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
-import org.bracewalk.store.ServerAddress;
 import org.bracewalk.store.StoreBackend;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -66,7 +63,7 @@ class BenchSyncCommandTest {
     assertThat(r.out()).doesNotContain("conflict");
 
     // the server's rows, counted with plain SQL
-    try (Connection c = connect(db)) {
+    try (Connection c = StoreBackend.connect(db)) {
       assertThat(count(c, "SELECT count(*) FROM sites")).isEqualTo(1);
       assertThat(count(c, "SELECT count(*) FROM planes")).isEqualTo(1);
       assertThat(count(c, "SELECT count(*) FROM inspections")).isEqualTo(8);
@@ -92,7 +89,7 @@ class BenchSyncCommandTest {
     assertThat(tag(again.out())).isNotEqualTo(tag);
     assertThat(again.out()).contains("server counts of this bench: 2 inspections (expected 2),"
         + " 6 observations (expected 6); by global identity 0 missing, 0 doubled");
-    try (Connection c = connect(db)) {
+    try (Connection c = StoreBackend.connect(db)) {
       assertThat(count(c, "SELECT count(*) FROM sites")).isEqualTo(1);
       assertThat(count(c, "SELECT count(*) FROM inspections")).isEqualTo(8 + 3);
       assertThat(count(c, "SELECT count(*) FROM observations")).isEqualTo(40 + 9);
@@ -110,18 +107,6 @@ class BenchSyncCommandTest {
     Matcher m = Pattern.compile("records are by inspector '([^']+)'").matcher(out);
     assertThat(m.find()).as(out).isTrue();
     return m.group(1);
-  }
-
-  private static Connection connect(String location) throws Exception {
-    ServerAddress a = ServerAddress.parse(location, StoreBackend.env());
-    Properties login = new Properties();
-    login.setProperty("user", StoreBackend.env().getOrDefault("PGUSER",
-        System.getProperty("user.name")));
-    if (StoreBackend.env().containsKey("PGPASSWORD")) {
-      login.setProperty("password", StoreBackend.env().get("PGPASSWORD"));
-    }
-    return DriverManager.getConnection("jdbc:postgresql://" + a.host() + ":" + a.port() + "/"
-        + a.database(), login);
   }
 
   private static long count(Connection c, String sql, String... args) throws Exception {

@@ -5,14 +5,12 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.time.Clock;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Properties;
 import java.util.concurrent.TimeUnit;
 import org.bracewalk.app.AppServices;
 import org.bracewalk.app.NewInspection;
@@ -24,7 +22,6 @@ import org.bracewalk.core.model.PlaneRecord;
 import org.bracewalk.core.model.Structure;
 import org.bracewalk.core.port.GlobalIdentities.Kind;
 import org.bracewalk.store.Database;
-import org.bracewalk.store.ServerAddress;
 import org.bracewalk.store.StoreBackend;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
@@ -42,23 +39,11 @@ class SyncSurvivesKillTest {
 
   @TempDir Path dir;
 
-  private static Connection connect(String location) throws Exception {
-    ServerAddress a = ServerAddress.parse(location, StoreBackend.env());
-    Properties login = new Properties();
-    login.setProperty("user", StoreBackend.env().getOrDefault("PGUSER",
-        System.getProperty("user.name")));
-    if (StoreBackend.env().containsKey("PGPASSWORD")) {
-      login.setProperty("password", StoreBackend.env().get("PGPASSWORD"));
-    }
-    return DriverManager.getConnection(
-        "jdbc:postgresql://" + a.host() + ":" + a.port() + "/" + a.database(), login);
-  }
-
   /** Observations on the server per field-file inspection (by identity), read with plain SQL. */
   private static Map<String, Long> onServer(String location, Map<String, Long> field)
       throws Exception {
     Map<String, Long> out = new HashMap<>();
-    try (Connection c = connect(location); PreparedStatement s = c.prepareStatement(
+    try (Connection c = StoreBackend.connect(location); PreparedStatement s = c.prepareStatement(
         "SELECT i.uuid, count(o.id) FROM inspections i LEFT JOIN observations o"
             + " ON o.inspection_id = i.id GROUP BY i.uuid")) {
       try (ResultSet r = s.executeQuery()) {

@@ -98,7 +98,7 @@ public enum StoreBackend {
    * A plain JDBC connection to {@code location}, as another client would open it (SQLite: foreign
    * keys on, as every client of a Bracewalk file is told to; PostgreSQL: the test login).
    */
-  static Connection connect(String location) throws SQLException {
+  public static Connection connect(String location) throws SQLException {
     if (ServerAddress.isServer(location)) {
       return connectTo(ServerAddress.parse(location, ENV));
     }
