@@ -9,8 +9,6 @@ import java.sql.ResultSet;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.ZoneOffset;
-import java.util.HashMap;
-import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
@@ -31,11 +29,7 @@ class BenchSyncCommandTest {
       Clock.fixed(Instant.parse("2025-03-03T09:00:00Z"), ZoneOffset.UTC), PlaneAnalyzer.standard());
 
   private Commands.Run run(String... args) {
-    Map<String, String> env = new HashMap<>(StoreBackend.env());
-    env.remove("BRACEWALK_DB");
-    env.put("XDG_DATA_HOME", dir.resolve("data").toString());
-    env.put("BRACEWALK_LOG_DIR", dir.resolve("logs").toString());
-    return Commands.run(context, env, args);
+    return Commands.run(context, Commands.serverEnv(dir), args);
   }
 
   @Test

@@ -6,7 +6,6 @@ import java.nio.file.Path;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.ZoneOffset;
-import java.util.HashMap;
 import java.util.Map;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.store.StoreBackend;
@@ -26,10 +25,7 @@ class ServerCommandLineTest {
       Clock.fixed(Instant.parse("2025-03-03T09:00:00Z"), ZoneOffset.UTC), PlaneAnalyzer.standard());
 
   private Commands.Run run(Map<String, String> extra, String... args) {
-    Map<String, String> env = new HashMap<>(StoreBackend.env());
-    env.remove("BRACEWALK_DB");
-    env.put("XDG_DATA_HOME", dir.resolve("data").toString());
-    env.put("BRACEWALK_LOG_DIR", dir.resolve("logs").toString());
+    Map<String, String> env = Commands.serverEnv(dir);
     env.putAll(extra);
     return Commands.run(context, env, args);
   }

@@ -6,8 +6,6 @@ import java.nio.file.Path;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.ZoneOffset;
-import java.util.HashMap;
-import java.util.Map;
 import org.bracewalk.core.analysis.PlaneAnalyzer;
 import org.bracewalk.store.StoreBackend;
 import org.junit.jupiter.api.Test;
@@ -27,11 +25,7 @@ class SyncCommandTest {
       PlaneAnalyzer.standard());
 
   private Commands.Run run(String... args) {
-    Map<String, String> env = new HashMap<>(StoreBackend.env());
-    env.remove("BRACEWALK_DB");
-    env.put("XDG_DATA_HOME", dir.resolve("data").toString());
-    env.put("BRACEWALK_LOG_DIR", dir.resolve("logs").toString());
-    return Commands.run(context, env, args);
+    return Commands.run(context, Commands.serverEnv(dir), args);
   }
 
   private Commands.Run ok(String... args) {
