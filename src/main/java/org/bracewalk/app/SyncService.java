@@ -202,10 +202,11 @@ public final class SyncService {
         Structure st, PlaneRecord p, String fromName, String toName) {
       if (!has(from, to, Kind.PLANE, p.id())) {
         long structureId = map(from, to, Kind.STRUCTURE, st.id());
-        if (to.planes().findByName(structureId, p.name()).isPresent()) {
+        Optional<PlaneRecord> namesake = to.planes().findByName(structureId, p.name());
+        if (namesake.isPresent()) {
           conflicts.add(new Conflict("plane '" + p.name() + "' of structure '" + st.name()
               + "' was made in " + fromName + " (id " + p.id() + ") and in " + toName
-              + " (id " + to.planes().findByName(structureId, p.name()).get().id()
+              + " (id " + namesake.get().id()
               + ") as two planes of one name: not copied; retire one and re-make it under"
               + " another name, then sync again"));
           return;
@@ -420,9 +421,10 @@ public final class SyncService {
      */
     void exchange(RecordStore from, RecordStore to, long fromInspection, long toInspection) {
       for (RepairOrder o : from.repairs().ordersOf(fromInspection)) {
+        Long known = mapOrNull(from, to, Kind.REPAIR_ORDER, o.id());
         long orderId;
-        if (has(from, to, Kind.REPAIR_ORDER, o.id())) {
-          orderId = map(from, to, Kind.REPAIR_ORDER, o.id());
+        if (known != null) {
+          orderId = known;
         } else {
           orderId = adopt(from, to, Kind.REPAIR_ORDER, o.id(), () -> to.repairs().addOrder(
               new RepairOrder(0, toInspection, o.createdAt(), o.createdBy(), o.note()))).id();
