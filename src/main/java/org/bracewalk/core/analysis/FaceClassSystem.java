@@ -234,30 +234,42 @@ final class FaceClassSystem {
           keyed[len++] = ((long) c << 32) | i;
         }
       }
-      Arrays.sort(keyed, 0, len);
-      int[] cols = new int[len];
-      long[] xv = new long[len];
-      long[] yv = new long[len];
-      int n = 0;
-      for (int t = 0; t < len; t++) {
-        int c = (int) (keyed[t] >>> 32);
-        int i = (int) keyed[t];
-        if (n > 0 && cols[n - 1] == c) {
-          xv[n - 1] += bx[i];
-          yv[n - 1] += by[i];
-        } else {
-          cols[n] = c;
-          xv[n] = bx[i];
-          yv[n] = by[i];
-          n++;
-        }
-      }
-      cols = Arrays.copyOf(cols, n);
-      rowCols[2 * g] = cols;
-      rowVals[2 * g] = Arrays.copyOf(xv, n);
-      rowCols[2 * g + 1] = cols;
-      rowVals[2 * g + 1] = Arrays.copyOf(yv, n);
+      putRows(g, keyed, 0, len, bx, by);
     }
+  }
+
+  /**
+   * Group {@code g}'s two rows from the entries {@code keyed[from..to)} (class in the high 32 bits,
+   * index into {@code xs} and {@code ys} in the low): sorted by class, entries of one class summed.
+   */
+  private void putRows(int g, long[] keyed, int from, int to, long[] xs, long[] ys) {
+    Arrays.sort(keyed, from, to);
+    int n = 0;
+    int[] cols = new int[to - from];
+    long[] xv = new long[to - from];
+    long[] yv = new long[to - from];
+    for (int t = from; t < to; t++) {
+      int c = (int) (keyed[t] >>> 32);
+      int i = (int) keyed[t];
+      if (n > 0 && cols[n - 1] == c) {
+        xv[n - 1] += xs[i];
+        yv[n - 1] += ys[i];
+      } else {
+        cols[n] = c;
+        xv[n] = xs[i];
+        yv[n] = ys[i];
+        n++;
+      }
+    }
+    if (n < cols.length) {
+      cols = Arrays.copyOf(cols, n);
+      xv = Arrays.copyOf(xv, n);
+      yv = Arrays.copyOf(yv, n);
+    }
+    rowCols[2 * g] = cols;
+    rowVals[2 * g] = xv;
+    rowCols[2 * g + 1] = cols;
+    rowVals[2 * g + 1] = yv;
   }
 
   private static int findClass(int[] p, int x) {
@@ -396,35 +408,7 @@ final class FaceClassSystem {
     rowCols = new int[2 * groupCount][];
     rowVals = new long[2 * groupCount][];
     for (int g = 0; g < groupCount; g++) {
-      int from = start[g];
-      int to = start[g + 1];
-      java.util.Arrays.sort(keyed, from, to);
-      int n = 0;
-      int[] cols = new int[to - from];
-      long[] xv = new long[to - from];
-      long[] yv = new long[to - from];
-      for (int t = from; t < to; t++) {
-        int c = (int) (keyed[t] >>> 32);
-        int i = (int) keyed[t];
-        if (n > 0 && cols[n - 1] == c) {
-          xv[n - 1] += ex[i];
-          yv[n - 1] += ey[i];
-        } else {
-          cols[n] = c;
-          xv[n] = ex[i];
-          yv[n] = ey[i];
-          n++;
-        }
-      }
-      if (n < cols.length) {
-        cols = java.util.Arrays.copyOf(cols, n);
-        xv = java.util.Arrays.copyOf(xv, n);
-        yv = java.util.Arrays.copyOf(yv, n);
-      }
-      rowCols[2 * g] = cols;
-      rowVals[2 * g] = xv;
-      rowCols[2 * g + 1] = cols;
-      rowVals[2 * g + 1] = yv;
+      putRows(g, keyed, start[g], start[g + 1], ex, ey);
     }
   }
 }
